@@ -1,0 +1,38 @@
+import js from '@eslint/js';
+import checkFile from 'eslint-plugin-check-file';
+import importPlugin from 'eslint-plugin-import';
+import { readdirSync } from 'node:fs';
+import tseslint from 'typescript-eslint';
+
+const features = readdirSync('./src/features');
+
+export default tseslint.config(
+  { ignores: ['dist/**', 'node_modules/**', '.data/**', 'test-artifacts/**', 'drizzle/**'] },
+  js.configs.recommended,
+  ...tseslint.configs.recommended,
+  {
+    languageOptions: { ecmaVersion: 2023, sourceType: 'module', globals: { console: 'readonly', process: 'readonly', window: 'readonly', document: 'readonly', fetch: 'readonly', URL: 'readonly', URLSearchParams: 'readonly', setTimeout: 'readonly', clearTimeout: 'readonly' } },
+    plugins: { import: importPlugin, 'check-file': checkFile },
+    settings: { 'import/resolver': { typescript: { project: './tsconfig.json' }, node: true } },
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      'check-file/filename-naming-convention': ['error', { '**/*.{ts,tsx,js,mjs}': 'KEBAB_CASE' }, { ignoreMiddleExtensions: true }],
+      'check-file/folder-naming-convention': ['error', { '{src,server,shared,fakes,tests}/**/': 'KEBAB_CASE' }],
+      // Code flows one way: app -> features -> shared components/lib; features never import each other.
+      'import/no-restricted-paths': ['error', {
+        zones: [
+          ...features.map((feature) => ({
+            target: `./src/features/${feature}`,
+            from: './src/features',
+            except: [`./${feature}`],
+            message: 'Features do not import each other; lift shared code to src/components, src/lib or shared/.',
+          })),
+          { target: './src/features', from: './src/app', message: 'Features must not import from the app layer.' },
+          { target: ['./src/components', './src/lib', './src/hooks'], from: ['./src/features', './src/app'], message: 'Shared client code must not import features or the app.' },
+          { target: './shared', from: ['./src', './server', './fakes'], message: 'shared/ is pure and imports neither client nor server.' },
+          { target: './src', from: ['./server', './fakes'], message: 'The client never imports server code.' },
+        ],
+      }],
+    },
+  },
+);

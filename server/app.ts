@@ -1,0 +1,80 @@
+import connectPgSimple from 'connect-pg-simple';
+import express, { type RequestHandler } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import { pinoHttp } from 'pino-http';
+import { authRouter } from './auth/auth.routes';
+import { configurePassport } from './auth/passport';
+import type { AppContext } from './context';
+import { AppError, notFound } from './lib/errors';
+import { errorHandler } from './middleware/error-handler';
+import { registerRoutes } from './routes';
+
+export interface AppOptions {
+  /** A built client to serve (production and browser tests); in development Vite serves it instead. */
+  clientDist?: string;
+  /** Mounted before the SPA fallback, e.g. Vite's dev middleware. */
+  clientMiddleware?: RequestHandler;
+}
+
+/** Writes must be JSON: a cross-site HTML form cannot send that without a CORS preflight we never grant. */
+const requireJsonWrites: RequestHandler = (req, _res, next) => {
+  const writes = req.method !== 'GET' && req.method !== 'HEAD' && req.method !== 'OPTIONS';
+  const hasBody = Number(req.headers['content-length'] ?? 0) > 0 || req.headers['transfer-encoding'] !== undefined;
+  if (writes && hasBody && !req.is('application/json')) {
+    next(new AppError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).'));
+    return;
+  }
+  next();
+};
+
+export function createApp(ctx: AppContext, options: AppOptions = {}) {
+  const { env, pool, logger, db } = ctx;
+  const app = express();
+  const secure = env.APP_ORIGIN.startsWith('https://');
+  if (secure) app.set('trust proxy', 1);
+  app.disable('x-powered-by');
+
+  const s3Origin = env.S3_ENDPOINT ? new URL(env.S3_ENDPOINT).origin : 'https://*.amazonaws.com';
+  app.use(helmet({
+    contentSecurityPolicy: {
+      directives: {
+        'img-src': ["'self'", 'data:', 'blob:', s3Origin],
+        'connect-src': ["'self'", s3Origin, ...(options.clientMiddleware ? ['ws:'] : [])],
+        'script-src': ["'self'", ...(options.clientMiddleware ? ["'unsafe-inline'"] : [])],
+        'upgrade-insecure-requests': secure ? [] : null,
+      },
+    },
+  }));
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') && !req.url?.startsWith('/auth') } }));
+  app.use('/api', requireJsonWrites);
+  app.use(express.json({ limit: '1mb' }));
+
+  const PgStore = connectPgSimple(session);
+  app.use(session({
+    name: 'gradepass.sid',
+    secret: env.SESSION_SECRET,
+    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false }),
+    resave: false,
+    saveUninitialized: false,
+    cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: 1000 * 60 * 60 * 24 * 14 },
+  }));
+  const passport = configurePassport(env, db);
+  app.use(passport.initialize());
+  app.use(passport.session());
+
+  app.use(authRouter(passport));
+  registerRoutes(app, ctx);
+  app.use('/api', (_req, _res, next) => next(notFound('That API route')));
+
+  if (options.clientMiddleware) app.use(options.clientMiddleware);
+  if (options.clientDist && existsSync(options.clientDist)) {
+    const dist = options.clientDist;
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(dist, 'index.html')));
+  }
+  app.use(errorHandler(logger));
+  return app;
+}

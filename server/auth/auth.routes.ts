@@ -1,0 +1,35 @@
+import { Router } from 'express';
+import { callbackPath, type PassportInstance } from './passport';
+
+export function authRouter(passport: PassportInstance) {
+  const router = Router();
+  router.get('/auth/google', passport.authenticate('google', { prompt: 'select_account' } as object));
+  router.get(callbackPath, (req, res, next) => {
+    passport.authenticate('google', (error: unknown, user: Express.User | false, info?: { message?: string }) => {
+      if (error) return next(error);
+      if (!user) {
+        const reason = info?.message ?? 'Sign-in was cancelled or did not finish.';
+        return res.redirect(`/sign-in?error=${encodeURIComponent(reason)}`);
+      }
+      // req.login regenerates the session id, so a session fixed before sign-in is worthless afterwards.
+      req.login(user, (loginError) => (loginError ? next(loginError) : res.redirect('/')));
+    })(req, res, next);
+  });
+  router.post('/auth/sign-out', (req, res, next) => {
+    req.logout((error) => {
+      if (error) return next(error);
+      req.session.destroy(() => {
+        res.clearCookie('gradepass.sid');
+        res.status(204).end();
+      });
+    });
+  });
+  router.get('/api/me', (req, res) => {
+    if (!req.user) {
+      res.status(401).json({ error: { code: 'unauthenticated', message: 'Please sign in first.' } });
+      return;
+    }
+    res.json({ user: req.user });
+  });
+  return router;
+}

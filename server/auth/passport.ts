@@ -1,0 +1,47 @@
+import passport from 'passport';
+import { Strategy as GoogleStrategy, type Profile, type StrategyOptions, type VerifyCallback } from 'passport-google-oauth20';
+import type { Env } from '../env';
+import type { Db } from '../db/client';
+import { findSessionUser, signInWithProfile } from './users.service';
+
+export const callbackPath = '/auth/google/callback';
+
+/**
+ * Google sign-in. The same strategy talks to the local stand-in or to Google: only the three URL variables differ.
+ */
+export function configurePassport(env: Env, db: Db) {
+  const strategy = new GoogleStrategy(
+    {
+      clientID: env.GOOGLE_CLIENT_ID,
+      clientSecret: env.GOOGLE_CLIENT_SECRET,
+      callbackURL: new URL(callbackPath, env.APP_ORIGIN).toString(),
+      // Left undefined, passport-google-oauth20 uses Google's own endpoints.
+      ...(env.GOOGLE_AUTHORIZATION_URL ? { authorizationURL: env.GOOGLE_AUTHORIZATION_URL } : {}),
+      ...(env.GOOGLE_TOKEN_URL ? { tokenURL: env.GOOGLE_TOKEN_URL } : {}),
+      ...(env.GOOGLE_USERINFO_URL ? { userProfileURL: env.GOOGLE_USERINFO_URL } : {}),
+      scope: ['openid', 'email', 'profile'],
+      state: true,
+      pkce: true,
+    } as StrategyOptions,
+    (_accessToken: string, _refreshToken: string, profile: Profile, done: VerifyCallback) => {
+      const email = profile.emails?.[0]?.value;
+      const verified = profile.emails?.[0]?.verified !== false;
+      if (!email || !verified) {
+        done(null, false, { message: 'The sign-in provider did not give a verified e-mail address.' });
+        return;
+      }
+      signInWithProfile(db, { sub: profile.id, email, name: profile.displayName ?? email })
+        .then((user) => done(null, user))
+        .catch((error: Error) => done(error));
+    },
+  );
+  const instance = new passport.Passport();
+  instance.use('google', strategy);
+  instance.serializeUser((user, done) => done(null, user.id));
+  instance.deserializeUser((id: string, done) => {
+    findSessionUser(db, id).then((user) => done(null, user ?? false)).catch((error: unknown) => done(error));
+  });
+  return instance;
+}
+
+export type PassportInstance = ReturnType<typeof configurePassport>;

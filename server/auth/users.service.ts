@@ -1,0 +1,68 @@
+import { and, asc, eq, ilike, or, sql } from 'drizzle-orm';
+import type { Role } from '../../shared/workflow/statuses';
+import type { DbOrTx } from '../db/client';
+import { users } from '../db/schema';
+import { forbidden, notFound } from '../lib/errors';
+import type { SessionUser } from './session-user';
+
+const publicColumns = { id: users.id, email: users.email, name: users.name, role: users.role };
+
+export interface ProviderProfile { sub: string; email: string; name: string }
+
+/** Sign-in: a known subject or e-mail keeps its role; an unknown e-mail becomes an applicant. */
+export async function signInWithProfile(db: DbOrTx, profile: ProviderProfile): Promise<SessionUser> {
+  const email = profile.email.trim().toLowerCase();
+  const [existing] = await db.select().from(users)
+    .where(or(eq(users.googleSub, profile.sub), sql`lower(${users.email}) = ${email}`)).limit(1);
+  if (existing?.disabled) throw forbidden('This account has been turned off. Please contact the office.');
+  if (existing) {
+    const [updated] = await db.update(users)
+      .set({ googleSub: profile.sub, name: existing.name || profile.name, lastSignInAt: new Date() })
+      .where(eq(users.id, existing.id)).returning(publicColumns);
+    return updated;
+  }
+  const [created] = await db.insert(users)
+    .values({ email, name: profile.name || email, role: 'applicant', googleSub: profile.sub, lastSignInAt: new Date() })
+    .onConflictDoNothing()
+    .returning(publicColumns);
+  if (created) return created;
+  // Two first sign-ins at once: the other one created the row.
+  const [raced] = await db.select(publicColumns).from(users).where(sql`lower(${users.email}) = ${email}`);
+  return raced;
+}
+
+export async function findSessionUser(db: DbOrTx, id: string): Promise<SessionUser | null> {
+  const [user] = await db.select(publicColumns).from(users).where(and(eq(users.id, id), eq(users.disabled, false)));
+  return user ?? null;
+}
+
+export async function listUsers(db: DbOrTx, opts: { search?: string; role?: Role }) {
+  const filters = [];
+  if (opts.role) filters.push(eq(users.role, opts.role));
+  if (opts.search) filters.push(or(ilike(users.email, `%${opts.search}%`), ilike(users.name, `%${opts.search}%`)));
+  return db.select({ ...publicColumns, disabled: users.disabled, createdAt: users.createdAt, lastSignInAt: users.lastSignInAt })
+    .from(users).where(filters.length ? and(...filters) : undefined).orderBy(asc(users.name)).limit(500);
+}
+
+export async function setUserAccess(db: DbOrTx, actor: SessionUser, id: string, change: { role?: Role; disabled?: boolean }) {
+  if (id === actor.id && (change.role !== undefined && change.role !== 'admin' || change.disabled)) {
+    throw forbidden('You cannot remove your own admin access.');
+  }
+  const [updated] = await db.update(users).set(change).where(eq(users.id, id))
+    .returning({ ...publicColumns, disabled: users.disabled });
+  if (!updated) throw notFound('User');
+  return updated;
+}
+
+/** Admins can add people before their first sign-in, so they arrive with the right role. */
+export async function inviteUser(db: DbOrTx, input: { email: string; name: string; role: Role }) {
+  const email = input.email.trim().toLowerCase();
+  const columns = { ...publicColumns, disabled: users.disabled };
+  const [existing] = await db.select({ id: users.id }).from(users).where(sql`lower(${users.email}) = ${email}`);
+  if (existing) {
+    const [row] = await db.update(users).set({ role: input.role, name: input.name }).where(eq(users.id, existing.id)).returning(columns);
+    return row;
+  }
+  const [row] = await db.insert(users).values({ ...input, email }).returning(columns);
+  return row;
+}

@@ -1,0 +1,14 @@
+import { sql } from 'drizzle-orm';
+import type { Db } from '../client';
+import { users } from '../schema';
+import { demoPeople } from './demo-people';
+
+/** Seeds the demo scenario; safe to run on every start (existing rows are left as they are). */
+export async function seedDemo(db: Db) {
+  await db.transaction(async (tx) => {
+    for (const person of demoPeople) {
+      const [found] = await tx.select({ id: users.id }).from(users).where(sql`lower(${users.email}) = ${person.email}`);
+      if (!found) await tx.insert(users).values(person);
+    }
+  });
+}

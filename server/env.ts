@@ -1,0 +1,47 @@
+import { z } from 'zod';
+
+const port = z.coerce.number().int().min(0).max(65535);
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: port.default(5170),
+  /** The origin people reach the app at; links in e-mails and the OAuth callback are built from it. */
+  APP_ORIGIN: z.url().default('http://127.0.0.1:5170'),
+  DATABASE_URL: z.string().min(1),
+  SESSION_SECRET: z.string().min(16, 'SESSION_SECRET must be at least 16 characters'),
+  GOOGLE_CLIENT_ID: z.string().min(1),
+  GOOGLE_CLIENT_SECRET: z.string().min(1),
+  /** Leave the three URLs unset to use Google itself; set them to use another OAuth 2.0 provider. */
+  GOOGLE_AUTHORIZATION_URL: z.url().optional(),
+  GOOGLE_TOKEN_URL: z.url().optional(),
+  GOOGLE_USERINFO_URL: z.url().optional(),
+  S3_ENDPOINT: z.url().optional(),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_BUCKET: z.string().min(1),
+  S3_ACCESS_KEY_ID: z.string().min(1),
+  S3_SECRET_ACCESS_KEY: z.string().min(1),
+  S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  SMTP_HOST: z.string().min(1),
+  SMTP_PORT: port,
+  SMTP_SECURE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  SMTP_USER: z.string().optional(),
+  SMTP_PASSWORD: z.string().optional(),
+  MAIL_FROM: z.string().default('Gradepass <no-reply@gradepass.test>'),
+  MAIL_REPLY_TO: z.string().optional(),
+  OFFICE_EMAIL: z.email().default('office@gradepass.test'),
+  /** Background work (e-mail delivery) runs in every instance unless turned off. */
+  RUN_WORKERS: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+export function parseEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const result = envSchema.safeParse(source);
+  if (!result.success) {
+    const lines = result.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Gradepass cannot start: the environment is not valid.\n${lines.join('\n')}`);
+  }
+  return result.data;
+}

@@ -1,0 +1,65 @@
+import type { NextFunction, Request, RequestHandler, Response } from 'express';
+import { z } from 'zod';
+import type { SessionUser } from '../auth/session-user';
+import { AppError, unauthenticated } from './errors';
+
+/** Turn zod issues into `{ "field.path": "message" }`, the shape every 400 carries. */
+export function zodFields(error: z.ZodError): Record<string, string> {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.length > 0 ? issue.path.join('.') : '(body)';
+    fields[key] ??= issue.message;
+  }
+  return fields;
+}
+
+export function parseOrThrow<T extends z.ZodType>(schema: T, value: unknown, what: string): z.infer<T> {
+  const result = schema.safeParse(value);
+  if (!result.success) {
+    const fields = zodFields(result.error);
+    const names = Object.keys(fields).join(', ');
+    throw new AppError(400, 'invalid_input', `Some ${what} values are not valid: ${names}.`, fields);
+  }
+  return result.data;
+}
+
+interface Contract<B extends z.ZodType, Q extends z.ZodType, P extends z.ZodType> {
+  body?: B;
+  query?: Q;
+  params?: P;
+}
+
+interface Input<B, Q, P> {
+  body: B;
+  query: Q;
+  params: P;
+  user: SessionUser;
+  req: Request;
+  res: Response;
+}
+
+/**
+ * One route handler: validates body, query and params with their zod contracts and hands the parsed values on,
+ * so nothing downstream parses them again. The caller must be signed in; role checks happen in the router.
+ */
+export function handle<
+  B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType = z.ZodUnknown, P extends z.ZodType = z.ZodUnknown,
+>(contract: Contract<B, Q, P>, fn: (input: Input<z.infer<B>, z.infer<Q>, z.infer<P>>) => Promise<unknown>): RequestHandler {
+  return async (req: Request, res: Response, next: NextFunction) => {
+    try {
+      if (!req.user) throw unauthenticated();
+      const body = contract.body ? parseOrThrow(contract.body, req.body ?? {}, 'body') : req.body;
+      const query = (contract.query ? parseOrThrow(contract.query, req.query, 'query') : req.query) as z.infer<Q>;
+      const params = (contract.params ? parseOrThrow(contract.params, req.params, 'path') : req.params) as z.infer<P>;
+      const result = await fn({ body, query, params, user: req.user as SessionUser, req, res });
+      if (!res.headersSent) {
+        if (result === undefined) res.status(204).end();
+        else res.json(result);
+      }
+    } catch (error) {
+      next(error);
+    }
+  };
+}
+
+export const uuidParam = z.object({ id: z.uuid('must be a valid id') });

@@ -1,0 +1,31 @@
+import type { ErrorRequestHandler } from 'express';
+import { AppError } from '../lib/errors';
+import type { Logger } from '../lib/logger';
+
+interface BodyParserError { type?: string; status?: number; expose?: boolean }
+
+/** The one place errors become responses: `{ error: { code, message, fields? } }`. */
+export function errorHandler(logger: Logger): ErrorRequestHandler {
+  return (error, req, res, _next) => {
+    if (res.headersSent) return;
+    if (error instanceof AppError) {
+      res.status(error.status).json({ error: { code: error.code, message: error.message, fields: error.fields } });
+      return;
+    }
+    const parserError = error as BodyParserError;
+    if (parserError.type === 'entity.parse.failed') {
+      res.status(400).json({ error: { code: 'malformed_json', message: 'The request body is not valid JSON.', fields: { '(body)': 'not valid JSON' } } });
+      return;
+    }
+    if (parserError.type === 'entity.too.large') {
+      res.status(413).json({ error: { code: 'too_large', message: 'The request body is too large.' } });
+      return;
+    }
+    if (parserError.expose && parserError.status && parserError.status < 500) {
+      res.status(parserError.status).json({ error: { code: 'bad_request', message: String((error as Error).message) } });
+      return;
+    }
+    logger.error({ err: error, url: req.originalUrl }, 'unhandled error');
+    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Nothing you sent was lost; please try again.' } });
+  };
+}

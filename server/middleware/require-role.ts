@@ -1,0 +1,20 @@
+import type { RequestHandler } from 'express';
+import type { Role } from '../../shared/workflow/statuses';
+import { forbidden, unauthenticated } from '../lib/errors';
+import type { SessionUser } from '../auth/session-user';
+
+export function requireSignIn(): RequestHandler {
+  return (req, _res, next) => next(req.user ? undefined : unauthenticated());
+}
+
+/** Admins can do everything office staff can; pass the roles the route is for. */
+export function requireRole(...allowed: Role[]): RequestHandler {
+  return (req, _res, next) => {
+    const user = req.user as SessionUser | undefined;
+    if (!user) return next(unauthenticated());
+    if (!allowed.includes(user.role)) return next(forbidden());
+    next();
+  };
+}
+
+export const officeRoles: Role[] = ['staff', 'admin'];

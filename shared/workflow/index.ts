@@ -1,0 +1,2 @@
+export * from './statuses';
+export * from './transitions';

@@ -1,0 +1,25 @@
+import { createBrowserRouter } from 'react-router';
+import { paths } from '@/config/paths';
+import { AppShell } from '@/app/layout/app-shell';
+import { RouteError } from './routes/route-error';
+
+const page = (load: () => Promise<{ Component: React.ComponentType }>) => ({ lazy: load });
+
+/** One route table; each screen is its own lazily loaded module. */
+export function createAppRouter() {
+  return createBrowserRouter([
+    {
+      element: <AppShell />,
+      errorElement: <RouteError />,
+      children: [
+        { path: paths.home.path, ...page(() => import('./routes/landing')) },
+        { path: paths.signIn.path, ...page(() => import('./routes/sign-in')) },
+        { path: paths.applicant.requests.path, ...page(() => import('./routes/applicant/my-requests')) },
+        { path: paths.office.queue.path, ...page(() => import('./routes/office/queue')) },
+        { path: paths.office.users.path, ...page(() => import('./routes/office/users')) },
+        { path: paths.crew.board.path, ...page(() => import('./routes/crew/board')) },
+        { path: '*', ...page(() => import('./routes/not-found')) },
+      ],
+    },
+  ]);
+}

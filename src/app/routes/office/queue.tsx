@@ -1,0 +1,10 @@
+import { RequireRole } from '@/app/layout/require-role';
+import { PageHeader } from '@/components/ui/panel';
+
+export function Component() {
+  return (
+    <RequireRole roles={['staff','admin']}>
+      <PageHeader title="Queue" />
+    </RequireRole>
+  );
+}

@@ -1,0 +1,34 @@
+/** Every client route, paired with the helper that builds a link to it. */
+export const paths = {
+  home: { path: '/', getHref: () => '/' },
+  signIn: { path: '/sign-in', getHref: () => '/sign-in' },
+  applicant: {
+    requests: { path: '/my/requests', getHref: () => '/my/requests' },
+    newRequest: { path: '/my/requests/new', getHref: () => '/my/requests/new' },
+    editRequest: { path: '/my/requests/:id/edit', getHref: (id: string) => `/my/requests/${id}/edit` },
+    request: { path: '/my/requests/:id', getHref: (id: string) => `/my/requests/${id}` },
+  },
+  office: {
+    queue: { path: '/office/queue', getHref: (search = '') => `/office/queue${search}` },
+    request: { path: '/office/requests/:id', getHref: (id: string, tab = '') => `/office/requests/${id}${tab ? `?tab=${tab}` : ''}` },
+    gradeCheck: { path: '/office/requests/:id/grade-check', getHref: (id: string) => `/office/requests/${id}/grade-check` },
+    ruleProfiles: { path: '/office/rule-profiles', getHref: () => '/office/rule-profiles' },
+    ruleProfile: { path: '/office/rule-profiles/:id', getHref: (id: string) => `/office/rule-profiles/${id}` },
+    emails: { path: '/office/emails', getHref: () => '/office/emails' },
+    users: { path: '/office/users', getHref: () => '/office/users' },
+  },
+  crew: {
+    board: { path: '/crew/board', getHref: () => '/crew/board' },
+    myJobs: { path: '/crew/my-jobs', getHref: () => '/crew/my-jobs' },
+    fieldSheet: { path: '/crew/jobs/:id/field-sheet', getHref: (id: string) => `/crew/jobs/${id}/field-sheet` },
+    asBuilt: { path: '/crew/jobs/:id/as-built', getHref: (id: string) => `/crew/jobs/${id}/as-built` },
+  },
+} as const;
+
+import type { Role } from '@shared/workflow/statuses';
+
+export function roleHome(role: Role): string {
+  if (role === 'applicant') return paths.applicant.requests.getHref();
+  if (role === 'crew') return paths.crew.board.getHref();
+  return paths.office.queue.getHref();
+}

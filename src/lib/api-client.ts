@@ -1,0 +1,62 @@
+/** The error shape every API answer uses; the client turns it into a typed error and never acts on it itself. */
+export interface ApiErrorBody {
+  error: { code: string; message: string; fields?: Record<string, string> };
+}
+
+export class ApiError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields: Record<string, string> = {},
+  ) {
+    super(message);
+  }
+}
+
+type Query = Record<string, string | number | boolean | undefined | null | string[]>;
+
+export function withQuery(path: string, query?: Query) {
+  if (!query) return path;
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) {
+    if (value === undefined || value === null || value === '') continue;
+    if (Array.isArray(value)) value.forEach((v) => params.append(key, v));
+    else params.set(key, String(value));
+  }
+  const text = params.toString();
+  return text ? `${path}?${text}` : path;
+}
+
+async function request<T>(method: string, path: string, body?: unknown, query?: Query): Promise<T> {
+  const response = await fetch(withQuery(path, query), {
+    method,
+    credentials: 'same-origin',
+    headers: body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  if (response.status === 204) return undefined as T;
+  const text = await response.text();
+  const data: unknown = text ? safeJson(text) : undefined;
+  if (!response.ok) {
+    const err = (data as ApiErrorBody | undefined)?.error;
+    throw new ApiError(response.status, err?.code ?? 'http_error', err?.message ?? `The server answered ${response.status}.`, err?.fields);
+  }
+  return data as T;
+}
+
+function safeJson(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return undefined;
+  }
+}
+
+export const api = {
+  get: <T>(path: string, query?: Query) => request<T>('GET', path, undefined, query),
+  post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
+  put: <T>(path: string, body?: unknown) => request<T>('PUT', path, body ?? {}),
+  patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, body ?? {}),
+  delete: <T>(path: string) => request<T>('DELETE', path),
+};
