@@ -1,0 +1,99 @@
+import { statusText } from '../../../shared/workflow/statuses';
+import type { Transition } from '../../../shared/workflow/transitions';
+import { renderHtml, renderText, type EmailContent } from './layout';
+import type { OutgoingEmail } from './outbox';
+
+export interface Person { email: string; name: string }
+
+export interface TransitionEmailInput {
+  transition: Transition;
+  request: { id: string; reference: string; siteAddress: string };
+  note: string;
+  applicant: Person;
+  officeEmail: string;
+  crew?: Person | null;
+  /** All crew leads, told when a job reaches the board. */
+  crewLeads?: Person[];
+  appOrigin: string;
+  /** Words a later step adds, such as the grade check's summary or the visit date. */
+  detail?: string;
+}
+
+const footer = 'You receive this because you are part of this driveway entrance request in Gradepass. Reply to reach the office.';
+
+type Audience = 'applicant' | 'office' | 'crew' | 'crewLeads';
+
+/** Who hears about each status change. */
+const audiences: Record<string, Audience[]> = {
+  submit: ['applicant', 'office'],
+  'ask-details': ['applicant'],
+  answer: ['office'],
+  'book-visit': ['applicant'],
+  'mark-checked': ['applicant'],
+  'file-permit': ['applicant'],
+  'record-granted': ['applicant'],
+  'record-refused': ['applicant'],
+  release: ['applicant', 'crewLeads'],
+  'accept-job': ['applicant', 'office'],
+  'hand-back': ['office'],
+  'start-work': ['applicant'],
+  'mark-built': ['applicant', 'office'],
+  'send-back': ['crew'],
+  close: ['applicant', 'crew'],
+  decline: ['applicant'],
+  withdraw: ['office'],
+};
+
+function applicantContent(input: TransitionEmailInput): EmailContent {
+  const { transition, request, note, detail } = input;
+  const to = statusText[transition.to];
+  const first = transition.action === 'submit'
+    ? `Thank you: we have your request ${request.reference} for a driveway entrance at ${request.siteAddress}.`
+    : `Your request ${request.reference} for ${request.siteAddress} is now: ${to.label}.`;
+  const paragraphs = [first];
+  if (detail) paragraphs.push(detail);
+  if (note) paragraphs.push(transition.action === 'ask-details' ? `The office asks: ${note}` : `Note from the office: ${note}`);
+  paragraphs.push(`What happens next: ${to.next}`);
+  return {
+    greeting: `Hello ${input.applicant.name},`,
+    paragraphs,
+    link: { href: `${input.appOrigin}/my/requests/${request.id}`, label: 'See your request' },
+  };
+}
+
+function teamContent(input: TransitionEmailInput, who: string, href: string): EmailContent {
+  const { transition, request, note, detail } = input;
+  const paragraphs = [
+    `${request.reference} (${request.siteAddress}) moved from "${statusText[transition.from].label}" to "${statusText[transition.to].label}".`,
+  ];
+  if (detail) paragraphs.push(detail);
+  if (note) paragraphs.push(`Note: ${note}`);
+  return { greeting: `Hello ${who},`, paragraphs, link: { href, label: 'Open it in Gradepass' } };
+}
+
+export function emailsForTransition(input: TransitionEmailInput): OutgoingEmail[] {
+  const { transition, request } = input;
+  const label = statusText[transition.to].label;
+  const build = (to: string, content: EmailContent, subject: string): OutgoingEmail => ({
+    to, template: `transition.${transition.action}`, subject, requestId: request.id,
+    text: renderText(content, footer), html: renderHtml(content, footer),
+  });
+  const officeHref = `${input.appOrigin}/office/requests/${request.id}`;
+  const crewHref = `${input.appOrigin}/crew/board`;
+  const out: OutgoingEmail[] = [];
+  for (const audience of audiences[transition.action] ?? []) {
+    if (audience === 'applicant') {
+      const subject = transition.action === 'submit' ? `We received your request ${request.reference}` : `${request.reference}: ${label}`;
+      out.push(build(input.applicant.email, applicantContent(input), subject));
+    } else if (audience === 'office') {
+      out.push(build(input.officeEmail, teamContent(input, 'office', officeHref), `[${request.reference}] ${label}`));
+    } else if (audience === 'crew' && input.crew) {
+      out.push(build(input.crew.email, teamContent(input, input.crew.name, crewHref), `[${request.reference}] ${label}`));
+    } else if (audience === 'crewLeads') {
+      for (const lead of input.crewLeads ?? []) {
+        out.push(build(lead.email, teamContent(input, lead.name, crewHref), `New job on the board: ${request.reference}`));
+      }
+    }
+  }
+  return out;
+}

@@ -1,0 +1,27 @@
+import { eq } from 'drizzle-orm';
+import type { SessionUser } from '../../auth/session-user';
+import type { DbOrTx } from '../../db/client';
+import { requests } from '../../db/schema';
+import { notFound } from '../../lib/errors';
+
+export type RequestRow = typeof requests.$inferSelect;
+
+const crewVisible = new Set(['released', 'crew_assigned', 'under_construction', 'built', 'closed']);
+
+/**
+ * Who may see a request: its applicant, the office, and crew once it is released (any crew while it waits on
+ * the board, then only the crew that took it). Everyone else gets 404, so ids are never confirmed.
+ */
+export function canSee(user: SessionUser, row: RequestRow): boolean {
+  if (user.role === 'staff' || user.role === 'admin') return true;
+  if (user.role === 'applicant') return row.applicantId === user.id;
+  if (!crewVisible.has(row.status)) return false;
+  return row.status === 'released' ? row.crewId === null : row.crewId === user.id;
+}
+
+export async function loadVisibleRequest(db: DbOrTx, user: SessionUser, id: string, opts: { forUpdate?: boolean } = {}) {
+  const query = db.select().from(requests).where(eq(requests.id, id));
+  const [row] = opts.forUpdate ? await query.for('update') : await query;
+  if (!row || !canSee(user, row)) throw notFound('Request');
+  return row;
+}
