@@ -31,14 +31,14 @@ const styles = `
 `;
 
 /** A complete page; `body` must already be escaped where it carries outside text. */
-export function page(title: string, body: string): string {
+export function page(title: string, body: string, extraCss = ''): string {
   return `<!doctype html>
 <html lang="en">
 <head>
 <meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
 <title>${escapeHtml(title)} · Gradepass</title>
-<style>${styles}</style>
+<style>${styles}${extraCss}</style>
 </head>
 <body>
 <header><p>Gradepass · local stand-in</p></header>

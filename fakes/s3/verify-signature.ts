@@ -98,7 +98,7 @@ async function verifyPresigned(req: IncomingMessage, path: string, query: Query,
     unsignableHeaders: new Set(signedHeaders.includes('x-amz-content-sha256') ? [] : ['x-amz-content-sha256']),
     unhoistableHeaders: new Set([...signedAmz, 'x-amz-content-sha256']),
   });
-  if (!sameHex(String(presigned.query['X-Amz-Signature'] ?? ''), provided)) throw mismatch('The URL may have been altered.');
+  if (!sameHex(String(presigned.query?.['X-Amz-Signature'] ?? ''), provided)) throw mismatch('The URL may have been altered.');
   return { mode: 'presigned', signature: provided, signedHeaders, payloadHash, expiresAt } satisfies VerifiedRequest;
 }
 

@@ -1,7 +1,7 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import nodemailer from 'nodemailer';
+import nodemailer, { type SendMailOptions } from 'nodemailer';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { StoredMessage } from '../../fakes/mail/message-store.js';
 import { startMailStandIn, type MailStandIn } from '../../fakes/mail/start-mail.js';
@@ -11,7 +11,7 @@ let mail: MailStandIn;
 
 const transport = () => nodemailer.createTransport({ host: mail.smtpHost, port: mail.smtpPort, secure: false, connectionTimeout: 2000 });
 
-async function send(subject: string, extra: Partial<nodemailer.SendMailOptions> = {}) {
+async function send(subject: string, extra: Partial<SendMailOptions> = {}) {
   return transport().sendMail({ from: 'Gradepass <office@gradepass.test>', to: 'owner@example.test', subject, text: `Body of ${subject}`, ...extra });
 }
 
