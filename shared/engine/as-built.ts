@@ -1,0 +1,96 @@
+import { z } from 'zod';
+import { parseInput } from './errors';
+import { snap, stationFt, elevationFt, gradePercent, nonNegative, bounded } from './numbers';
+import { elevationAt, profileInputSchema, normalizeParsedProfile, type ProfilePoint } from './profile';
+import { ruleProfileSchema } from './rule-profile';
+
+export type AsBuiltStatus = 'pass' | 'advisory' | 'fail';
+
+export const classifyAsBuiltReadingInputSchema = z.object({
+  measured: bounded(-1e6, 1e6),
+  limit: bounded(-1e6, 1e6),
+  tolerance: nonNegative(1e6),
+  // 'max': the value may not exceed the limit; 'min': it may not fall below it.
+  kind: z.enum(['max', 'min']),
+});
+
+/**
+ * At or inside the limit passes; beyond it but within the as-built tolerance is advisory (built close enough
+ * for the inspector to judge); beyond limit + tolerance fails. Values are snapped to 1e-9 first so that
+ * floating noise never moves a reading across a boundary.
+ */
+export function classifyAsBuiltReading(input: z.input<typeof classifyAsBuiltReadingInputSchema>): { status: AsBuiltStatus; margin: number } {
+  const p = parseInput(classifyAsBuiltReadingInputSchema, input);
+  const over = p.kind === 'max' ? snap(p.measured - p.limit) : snap(p.limit - p.measured);
+  const tolerance = snap(p.tolerance);
+  const status: AsBuiltStatus = over <= 0 ? 'pass' : over <= tolerance ? 'advisory' : 'fail';
+  return { status, margin: -over };
+}
+
+const readingSchema = z.union([
+  z.object({ stationFt: stationFt(), gradePercent: gradePercent() }),
+  z.object({ stationFt: stationFt(), elevationFt: elevationFt() }),
+]);
+
+export const checkAsBuiltInputSchema = z.object({
+  readings: z.array(readingSchema).min(1).max(5_000),
+  ruleProfile: ruleProfileSchema,
+  // With a design profile, elevation readings are also held to the elevation tolerance.
+  design: profileInputSchema.optional(),
+  roadEdgeStationFt: stationFt().default(0),
+});
+export type CheckAsBuiltInput = z.input<typeof checkAsBuiltInputSchema>;
+
+export interface AsBuiltReadingResult {
+  stationFt: number;
+  ruleId: string;
+  measured: number;
+  limit: number;
+  unit: string;
+  status: AsBuiltStatus;
+  margin: number;
+}
+
+const worst = (a: AsBuiltStatus, b: AsBuiltStatus): AsBuiltStatus => (a === 'fail' || b === 'fail' ? 'fail' : a === 'advisory' || b === 'advisory' ? 'advisory' : 'pass');
+
+/** Each finished-grade reading checked against the rule profile with its as-built tolerance. */
+export function checkAsBuilt(input: CheckAsBuiltInput) {
+  const p = parseInput(checkAsBuiltInputSchema, input);
+  const rules = p.ruleProfile;
+  const tol = rules.asBuilt;
+  const landingEnd = p.roadEdgeStationFt + rules.landing.lengthFt;
+  const results: AsBuiltReadingResult[] = [];
+  const gradeResult = (stationFt: number, grade: number) => {
+    const classify = (ruleId: string, limit: number, kind: 'max' | 'min', measured: number) => {
+      const c = classifyAsBuiltReading({ measured, limit, tolerance: tol.gradeTolerancePercent, kind });
+      return { stationFt, ruleId, measured, limit, unit: '%', ...c };
+    };
+    if (stationFt < landingEnd) {
+      const hi = classify('landing.max-grade', rules.landing.maxGradePercent, 'max', grade);
+      const lo = classify('landing.min-grade', rules.landing.minGradePercent, 'min', grade);
+      results.push(hi.margin <= lo.margin ? hi : lo);
+    } else results.push(classify('grade.max', rules.maxGradePercent, 'max', Math.abs(grade)));
+  };
+  const elevations: ProfilePoint[] = [];
+  for (const r of p.readings) {
+    if ('gradePercent' in r) gradeResult(r.stationFt, r.gradePercent);
+    else elevations.push({ stationFt: r.stationFt, elevationFt: r.elevationFt });
+  }
+  const shots = elevations.length >= 2 ? normalizeParsedProfile(elevations, 'readings') : elevations;
+  for (let i = 0; i < shots.length - 1; i++) {
+    const a = shots[i];
+    const b = shots[i + 1];
+    gradeResult(a.stationFt, ((b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt)) * 100);
+  }
+  if (p.design) {
+    const design = normalizeParsedProfile(p.design, 'design');
+    for (const s of shots) {
+      const off = Math.abs(s.elevationFt - elevationAt(design, s.stationFt));
+      // The elevation tolerance is itself the limit: there is no further allowance beyond it.
+      const c = classifyAsBuiltReading({ measured: off, limit: tol.elevationToleranceFt, tolerance: 0, kind: 'max' });
+      results.push({ stationFt: s.stationFt, ruleId: 'as-built.elevation', measured: off, limit: tol.elevationToleranceFt, unit: 'ft', ...c });
+    }
+  }
+  const overall = results.reduce<AsBuiltStatus>((acc, r) => worst(acc, r.status), 'pass');
+  return { readings: results, status: overall, passes: overall !== 'fail' };
+}

@@ -1,0 +1,78 @@
+import { z } from 'zod';
+import { culvertInputSchema, checkCulvert, type CulvertSummary } from './culvert-checks';
+import { parseInput } from './errors';
+import type { Finding } from './findings';
+import { bounded, stationFt } from './numbers';
+import { checkProfileRules } from './profile-checks';
+import { elevationAt, normalizeParsedProfile, profileInputSchema, type ProfilePoint, type ProfileSegment } from './profile';
+import { designVehicleSchema, type RuleProfile, ruleProfileSchema } from './rule-profile';
+import type { ScrapeResult } from './scrape';
+import { checkGeometry, checkSight, geometryInputSchema, sightInputSchema, type SightSummary } from './site-checks';
+import { summarise, type CheckSummary } from './summary';
+import { ENGINE_VERSION } from './version';
+
+export const checkEntranceInputSchema = z.object({
+  profile: profileInputSchema,
+  // Where the road edge sits on the profile's stations; shots before it (on the road) are not graded.
+  roadEdgeStationFt: stationFt().optional(),
+  scrapeStepFt: bounded(0.01, 10).default(0.1),
+  // Overrides the rule profile's design vehicle for this check only.
+  vehicle: designVehicleSchema.optional(),
+  culvert: culvertInputSchema.optional(),
+  sight: sightInputSchema.optional(),
+  geometry: geometryInputSchema.optional(),
+});
+export type CheckEntranceInput = z.input<typeof checkEntranceInputSchema>;
+
+export interface EntranceReport {
+  engineVersion: string;
+  ruleProfileId?: string;
+  ruleProfileVersion?: string | number;
+  jurisdictionName?: string;
+  passes: boolean;
+  findings: Finding[];
+  summary: CheckSummary;
+  profile: { points: ProfilePoint[]; segments: ProfileSegment[] };
+  scrape: ScrapeResult;
+  culvert?: CulvertSummary;
+  sight?: SightSummary;
+}
+
+export function profileLabel(rules: RuleProfile): string {
+  const name = rules.jurisdictionName ?? rules.name ?? 'the rule profile';
+  return rules.version === undefined ? name : `${name} (version ${rules.version})`;
+}
+
+/** The whole entrance check: every rule comes back, the ones without data as "not-checked". */
+export function checkEntrance(input: CheckEntranceInput, ruleProfile: unknown): EntranceReport {
+  const p = parseInput(checkEntranceInputSchema, input);
+  const parsedRules = parseInput(ruleProfileSchema, ruleProfile, 'ruleProfile');
+  const rules: RuleProfile = p.vehicle ? { ...parsedRules, designVehicle: p.vehicle } : parsedRules;
+  const points = normalizeParsedProfile(p.profile, 'profile');
+  const roadEdge = p.roadEdgeStationFt ?? points[0].stationFt;
+
+  const profile = checkProfileRules(points, rules, roadEdge, p.scrapeStepFt);
+  const landingEnd = Math.min(roadEdge + rules.landing.lengthFt, points[points.length - 1].stationFt);
+  // A car leaving climbs toward the road when the landing falls away from it.
+  const approachPercent = landingEnd > roadEdge ? -((elevationAt(points, landingEnd) - elevationAt(points, roadEdge)) / (landingEnd - roadEdge)) * 100 : 0;
+  const culvert = checkCulvert(p.culvert, rules);
+  const sight = checkSight(p.sight, rules, approachPercent);
+  const geometry = checkGeometry(p.geometry, rules);
+
+  const stamp = { ruleProfileId: rules.id, ruleProfileVersion: rules.version };
+  const findings = [...profile.findings, ...culvert.findings, ...sight.findings, ...geometry].map((f) => ({ ...f, ...stamp }));
+  const summary = summarise(findings, profileLabel(rules));
+  return {
+    engineVersion: ENGINE_VERSION,
+    ruleProfileId: rules.id,
+    ruleProfileVersion: rules.version,
+    jurisdictionName: rules.jurisdictionName,
+    passes: summary.fail === 0,
+    findings,
+    summary,
+    profile: { points, segments: profile.segments },
+    scrape: profile.scrape,
+    culvert: culvert.culvert,
+    sight: sight.sight,
+  };
+}

@@ -1,0 +1,98 @@
+import { solve } from 'yalps';
+import { z } from 'zod';
+import { earthworkFromProfiles } from './cross-sections';
+import { parseInput } from './errors';
+import { elevationFt } from './numbers';
+import { checkProfileRules } from './profile-checks';
+import { elevationAt, normalizeParsedProfile, profileInputSchema, type ProfilePoint } from './profile';
+import { type RuleProfile, ruleProfileSchema } from './rule-profile';
+import { sectionTemplateSchema } from './cross-sections';
+import { buildLeastEarthModel, type GradeLimits, segmentLimits } from './least-earth-model';
+import { explainInfeasible } from './infeasible-reason';
+
+export const proposeProfileInputSchema = z.object({
+  existing: profileInputSchema,
+  roadEdgeElevationFt: elevationFt(),
+  targetEndElevationFt: elevationFt().optional(),
+  // 12 ft top and 2:1 slopes: common practice (no source) for a single-car rural entrance.
+  template: sectionTemplateSchema.default({ topWidthFt: 12, cutSlopeHPerV: 2, fillSlopeHPerV: 2, groundCrossSlopePercent: 0 }),
+  scrapeStepFt: z.number().min(0.01).max(10).default(0.1),
+});
+export type ProposeProfileInput = z.input<typeof proposeProfileInputSchema>;
+
+export interface CutFillAtStation {
+  stationFt: number;
+  existingFt: number;
+  designFt: number;
+  /** + cut (lower the ground), - fill (raise it). */
+  cutFillFt: number;
+}
+
+export interface ProposedProfile {
+  feasible: boolean;
+  reason?: string;
+  profile: ProfilePoint[];
+  cutFillByStation: CutFillAtStation[];
+  cutCuYd: number;
+  fillCuYd: number;
+}
+
+const MAX_TIGHTENING = 6;
+
+function withLandingBreak(points: ProfilePoint[], landingEndFt: number): ProfilePoint[] {
+  // The design needs a station where the landing ends so it can break there rather than at the next shot.
+  const first = points[0].stationFt;
+  const last = points[points.length - 1].stationFt;
+  if (landingEndFt <= first || landingEndFt >= last || points.some((p) => Math.abs(p.stationFt - landingEndFt) < 1e-6)) return points;
+  return [...points, { stationFt: landingEndFt, elevationFt: elevationAt(points, landingEndFt) }].sort((a, b) => a.stationFt - b.stationFt);
+}
+
+const failed = (reason: string): ProposedProfile => ({ feasible: false, reason, profile: [], cutFillByStation: [], cutCuYd: 0, fillCuYd: 0 });
+
+/**
+ * The least-earth profile: minimise the sum of |design - existing| x station spacing under the landing,
+ * grade and grade-change limits. The scrape check is not linear, so when a solution scrapes, the allowed
+ * rate of grade change is tightened and the programme solved again.
+ */
+export function proposeProfile(input: ProposeProfileInput, ruleProfile: unknown): ProposedProfile {
+  const p = parseInput(proposeProfileInputSchema, input);
+  const rules: RuleProfile = parseInput(ruleProfileSchema, ruleProfile, 'ruleProfile');
+  const raw = normalizeParsedProfile(p.existing, 'existing');
+  const existing = withLandingBreak(raw, raw[0].stationFt + rules.landing.lengthFt);
+  const limits: GradeLimits[] = segmentLimits(existing, rules);
+  const reason = explainInfeasible(existing, limits, rules, p.roadEdgeElevationFt, p.targetEndElevationFt);
+  if (reason) return failed(reason);
+
+  let changeRatePerFt = Infinity;
+  const vehicle = rules.designVehicle;
+  for (let attempt = 0; attempt < MAX_TIGHTENING; attempt++) {
+    const model = buildLeastEarthModel(existing, limits, rules, p.roadEdgeElevationFt, p.targetEndElevationFt, changeRatePerFt);
+    const solution = solve(model.model);
+    if (solution.status !== 'optimal') {
+      return failed(
+        attempt === 0
+          ? `the ${rules.maxGradeChangePercent}% grade-change limit cannot bend the profile enough to reach the end elevation`
+          : `no profile keeps a ${vehicle.name.toLowerCase()} from scraping while meeting the other limits`,
+      );
+    }
+    const design = model.read(solution.variables);
+    const check = checkProfileRules(design, rules, design[0].stationFt, p.scrapeStepFt);
+    if (check.findings.every((f) => f.status !== 'fail')) return result(existing, design, p.template);
+    // Spread each allowed change over more ground: the body spans about the wheelbase plus an overhang.
+    const span = vehicle.wheelbaseFt + Math.max(vehicle.frontOverhangFt, vehicle.rearOverhangFt);
+    const safeChange = Math.min(rules.maxGradeChangePercent / 100, (4 * vehicle.clearanceIn) / 12 / vehicle.wheelbaseFt);
+    changeRatePerFt = Math.min(changeRatePerFt, safeChange / span) / (attempt === 0 ? 1 : 2);
+  }
+  return failed(`no profile keeps a ${vehicle.name.toLowerCase()} from scraping while meeting the other limits`);
+}
+
+function result(existing: ProfilePoint[], design: ProfilePoint[], template: z.output<typeof sectionTemplateSchema>): ProposedProfile {
+  const cutFillByStation = design.map((d, i) => ({
+    stationFt: d.stationFt,
+    existingFt: existing[i].elevationFt,
+    designFt: d.elevationFt,
+    cutFillFt: existing[i].elevationFt - d.elevationFt,
+  }));
+  const volumes = earthworkFromProfiles({ existing, design, template });
+  return { feasible: true, profile: design, cutFillByStation, cutCuYd: volumes.cutCuYd, fillCuYd: volumes.fillCuYd };
+}

@@ -1,0 +1,121 @@
+import { z } from 'zod';
+import { bounded, nonNegative, positive } from './numbers';
+
+export const designVehicleSchema = z.object({
+  name: z.string().min(1).max(80).default('Passenger car'),
+  wheelbaseFt: bounded(3, 60),
+  frontOverhangFt: nonNegative(20),
+  rearOverhangFt: nonNegative(20),
+  clearanceIn: bounded(1, 36),
+});
+export type DesignVehicle = z.output<typeof designVehicleSchema>;
+
+/**
+ * US figures for the passenger-car design vehicle. Wheelbase and overhangs are from memory (the Green Book's
+ * metric P vehicle is 3.4 m / 0.9 m / 1.5 m); the 5 in clearance is the low-clearance vehicle used in
+ * grade-change studies (Eck and Kang, TRR 1356).
+ */
+export const passengerCarPreset: DesignVehicle = {
+  name: 'Passenger car',
+  wheelbaseFt: 11,
+  frontOverhangFt: 3,
+  rearOverhangFt: 5,
+  clearanceIn: 5,
+};
+
+const landingSchema = z
+  .object({
+    lengthFt: nonNegative(500),
+    // Signed: + rises away from the road. A range such as -4..4 lets the landing fall or rise a little.
+    minGradePercent: bounded(-50, 50),
+    maxGradePercent: bounded(-50, 50),
+  })
+  .refine((l) => l.minGradePercent <= l.maxGradePercent, {
+    message: 'landing minimum grade must not exceed its maximum',
+    path: ['minGradePercent'],
+  });
+
+const culvertRulesSchema = z.object({
+  minDiameterIn: positive(120).optional(),
+  minCoverIn: nonNegative(120).optional(),
+  minLengthFt: nonNegative(500).optional(),
+  lengthIncrementFt: positive(50).default(2),
+  maxHeadwaterToDiameter: positive(10).optional(),
+});
+
+const sightRulesSchema = z.object({
+  basis: z.enum(['stopping', 'intersection']).default('intersection'),
+  // Used when the site input gives no speed for the road.
+  designSpeedMph: bounded(10, 90).optional(),
+  vehicle: z.enum(['passenger', 'single-unit', 'combination']).default('passenger'),
+});
+
+const geometryRulesSchema = z.object({
+  minWidthFt: nonNegative(200).optional(),
+  maxWidthFt: nonNegative(200).optional(),
+  minFlareRadiusFt: nonNegative(200).optional(),
+  minDistanceToIntersectionFt: nonNegative(5_000).optional(),
+  minDistanceToPropertyLineFt: nonNegative(1_000).optional(),
+});
+
+const asBuiltRulesSchema = z.object({
+  gradeTolerancePercent: nonNegative(10).default(0.5),
+  elevationToleranceFt: nonNegative(2).default(0.1),
+});
+
+/**
+ * A road authority's limits as data. Optional limits the authority does not set leave their check
+ * "not-checked". `sources` maps a field's dotted path (e.g. "landing.maxGradePercent") to a free-text
+ * note saying where the value comes from, so a form can show one source box beside each value.
+ */
+export const ruleProfileSchema = z.object({
+  id: z.string().max(120).optional(),
+  jurisdictionName: z.string().max(200).optional(),
+  version: z.union([z.string().max(60), z.number().int().nonnegative()]).optional(),
+  name: z.string().max(200).optional(),
+  units: z.enum(['us', 'metric']).default('us'),
+  landing: landingSchema,
+  maxGradePercent: positive(50),
+  minDrainageGradePercent: positive(10).optional(),
+  maxGradeChangePercent: positive(50),
+  designVehicle: designVehicleSchema.default(passengerCarPreset),
+  culvert: culvertRulesSchema.default({ lengthIncrementFt: 2 }),
+  sight: sightRulesSchema.default({ basis: 'intersection', vehicle: 'passenger' }),
+  geometry: geometryRulesSchema.default({}),
+  asBuilt: asBuiltRulesSchema.default({ gradeTolerancePercent: 0.5, elevationToleranceFt: 0.1 }),
+  sources: z.record(z.string(), z.string().max(1_000)).default({}),
+});
+
+export type RuleProfileInput = z.input<typeof ruleProfileSchema>;
+export type RuleProfile = z.output<typeof ruleProfileSchema>;
+
+const COMMON_PRACTICE = 'common practice (no source)';
+
+/**
+ * A starting point for a rural road authority that publishes no numbers of its own: a 4% landing for the
+ * first 20 ft and 17% beyond it. Both are common practice with no published source, and labelled so.
+ * The grade-change limit of 13% is 17 - 4, so the landing may break straight into the steepest grade; the
+ * scrape check then decides whether a car clears that break. As-built tolerances are the engine's defaults.
+ */
+export const commonRuralTemplate: RuleProfile = {
+  id: 'common-rural-template',
+  name: 'Common rural template',
+  version: 1,
+  units: 'us',
+  landing: { lengthFt: 20, minGradePercent: -4, maxGradePercent: 4 },
+  maxGradePercent: 17,
+  maxGradeChangePercent: 13,
+  designVehicle: passengerCarPreset,
+  culvert: { lengthIncrementFt: 2 },
+  sight: { basis: 'intersection', vehicle: 'passenger' },
+  geometry: {},
+  asBuilt: { gradeTolerancePercent: 0.5, elevationToleranceFt: 0.1 },
+  sources: {
+    'landing.lengthFt': COMMON_PRACTICE,
+    'landing.minGradePercent': COMMON_PRACTICE,
+    'landing.maxGradePercent': COMMON_PRACTICE,
+    maxGradePercent: COMMON_PRACTICE,
+    maxGradeChangePercent: '17 - 4: lets the landing break straight into the maximum grade; the scrape check governs',
+    designVehicle: 'Passenger car: wheelbase and overhangs from memory; 5 in clearance after Eck and Kang, TRR 1356',
+  },
+};
