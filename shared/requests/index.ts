@@ -1,0 +1,2 @@
+export * from './application-schema';
+export * from './choices';
