@@ -24,13 +24,26 @@ export class EngineInputError extends Error {
 const joinPath = (root: string, path: readonly PropertyKey[]): string =>
   [root, ...path.map(String)].filter((part) => part !== '').join('.');
 
+type Issue = z.core.$ZodIssue;
+
+/**
+ * A union (e.g. the three profile forms) fails as one vague "invalid input" at its root. The branch that got
+ * furthest into the value is the form the user meant, so its own issues are reported instead.
+ */
+function specific(issue: Issue, prefix: readonly PropertyKey[]): { path: PropertyKey[]; message: string }[] {
+  const path = [...prefix, ...issue.path];
+  if (issue.code !== 'invalid_union' || issue.errors.length === 0) return [{ path, message: issue.message }];
+  const depth = (branch: Issue[]) => Math.max(...branch.map((i) => i.path.length));
+  const best = issue.errors.reduce((a, b) => (depth(b) > depth(a) ? b : a));
+  return best.flatMap((i) => specific(i, path));
+}
+
 export function parseInput<S extends z.ZodType>(schema: S, input: unknown, root = ''): z.output<S> {
   const result = schema.safeParse(input);
   if (result.success) return result.data;
-  const issues = result.error.issues.map((issue) => ({
-    field: joinPath(root, issue.path),
-    message: issue.message,
-  }));
+  const issues = result.error.issues
+    .flatMap((issue) => specific(issue, []))
+    .map(({ path, message }) => ({ field: joinPath(root, path), message }));
   throw new EngineInputError(issues[0].field, issues[0].message, issues);
 }
 

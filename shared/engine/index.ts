@@ -102,3 +102,4 @@ export {
   type AsBuiltReadingResult,
   type CheckAsBuiltInput,
 } from './as-built';
+export { gradePercentToDegrees, breakOverAngleDeg, breakOverAngleInputSchema } from './angles';
