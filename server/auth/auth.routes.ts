@@ -6,7 +6,11 @@ export function authRouter(passport: PassportInstance) {
   router.get('/auth/google', passport.authenticate('google', { prompt: 'select_account' } as object));
   router.get(callbackPath, (req, res, next) => {
     passport.authenticate('google', (error: unknown, user: Express.User | false, info?: { message?: string }) => {
-      if (error) return next(error);
+      if (error) {
+        // A provider that fails mid-way is not the person's fault: tell them on the sign-in page, keep the detail in the log.
+        req.log.warn({ err: error }, 'sign-in callback failed');
+        return res.redirect(`/sign-in?error=${encodeURIComponent('The sign-in provider did not confirm who you are. Please try again.')}`);
+      }
       if (!user) {
         const reason = info?.message ?? 'Sign-in was cancelled or did not finish.';
         return res.redirect(`/sign-in?error=${encodeURIComponent(reason)}`);

@@ -35,7 +35,7 @@ export async function dropTestDatabase(databaseUrl: string) {
 
 export function testEnv(databaseUrl: string, overrides: Record<string, string> = {}) {
   const stack = inject('stack');
-  return { ...stack.env, DATABASE_URL: databaseUrl, NODE_ENV: 'test', LOG_LEVEL: 'silent', RUN_WORKERS: 'false', ...overrides };
+  return { ...stack.env, DATABASE_URL: databaseUrl, NODE_ENV: 'test', LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent', RUN_WORKERS: 'false', ...overrides };
 }
 
 export async function createTestApp(overrides: Record<string, string> = {}): Promise<TestApp> {
@@ -67,7 +67,7 @@ export async function signIn(app: TestApp['app'] | string, email: string) {
   const callback = new URL(back);
   const done = await agent.get(callback.pathname + callback.search);
   if (done.status !== 302 || done.headers.location !== '/') {
-    throw new Error(`sign-in callback failed: ${done.status} ${done.headers.location}`);
+    throw new Error(`sign-in callback failed: ${done.status} ${done.headers.location ?? JSON.stringify(done.body)}`);
   }
   return agent;
 }

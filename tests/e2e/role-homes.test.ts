@@ -1,0 +1,42 @@
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { demoPeople } from '../../server/db/seed/demo-people';
+import { launchBrowser, screenshotPath, signInAs, signOut } from '../setup/browser';
+
+let session: Awaited<ReturnType<typeof launchBrowser>>;
+beforeAll(async () => {
+  session = await launchBrowser();
+});
+afterAll(() => session?.close());
+
+const homes = [
+  { role: 'applicant', path: '/my/requests', heading: 'My requests' },
+  { role: 'staff', path: '/office/queue', heading: 'Queue' },
+  { role: 'crew', path: '/crew/board', heading: 'Released jobs' },
+  { role: 'admin', path: '/office/queue', heading: 'Queue' },
+] as const;
+
+describe('each role signs in through the picker and lands on its own home', () => {
+  for (const home of homes) {
+    it(`${home.role} lands on ${home.path}`, async () => {
+      const person = demoPeople.find((p) => p.role === home.role)!;
+      const context = await session.browser.newContext();
+      const page = await context.newPage();
+      await signInAs(page, person.email);
+      await page.waitForURL((url) => url.pathname === home.path);
+      await expect.poll(() => page.getByRole('heading', { level: 1 }).first().textContent()).toContain(home.heading);
+      await expect.poll(() => page.getByText(person.name).first().isVisible()).toBe(true);
+      if (home.role === 'admin') {
+        expect(await page.getByRole('link', { name: 'Users and roles' }).isVisible()).toBe(true);
+      } else {
+        expect(await page.getByRole('link', { name: 'Users and roles' }).count()).toBe(0);
+      }
+      const file = screenshotPath(`home-${home.role}`);
+      mkdirSync(path.dirname(file), { recursive: true });
+      await page.screenshot({ path: file, fullPage: true });
+      await signOut(page);
+      await context.close();
+    });
+  }
+});
