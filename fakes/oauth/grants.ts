@@ -63,8 +63,7 @@ export class Grants {
     if (profile && accessToken) this.tokens.set(accessToken, { profile, expiresAt: Date.now() + tokenLifetimeMs });
   }
 
-  profileForToken(authorization: string | undefined): OpenIdProfile | undefined {
-    const token = /^Bearer (.+)$/i.exec(authorization ?? '')?.[1];
+  profileForToken(token: string | undefined): OpenIdProfile | undefined {
     const entry = token ? this.tokens.get(token) : undefined;
     return entry && entry.expiresAt > Date.now() ? entry.profile : undefined;
   }

@@ -55,7 +55,8 @@ export function createOAuthApp(options: OAuthAppOptions) {
   for (const path of ['/userinfo', '/jwks', '/.well-known/openid-configuration']) {
     app.get(path, async (req, res) => {
       const headers: Record<string, string> = req.headers.authorization ? { authorization: req.headers.authorization } : {};
-      const answer = await fetch(`${options.urls.internal}${path}`, { headers });
+      const query = req.originalUrl.split(/\?(.*)/s)[1];
+      const answer = await fetch(`${options.urls.internal}${path}${query ? `?${query}` : ''}`, { headers });
       res.status(answer.status).type('json').send(await answer.text());
     });
   }

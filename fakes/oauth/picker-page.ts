@@ -13,6 +13,9 @@ const extraStyles = `
   section + section { margin-top: 2rem; border-top: 1px solid var(--line); padding-top: 1rem; }
 `;
 
+// Plain words for the app's roles; any other label is shown as given.
+const roleLabels: Record<string, string> = { applicant: 'Applicant', staff: 'Office staff', crew: 'Crew lead', admin: 'Administrator' };
+
 /** The sign-in page people see locally instead of Google's: pick a demo person or type any e-mail. */
 export function pickerPage(query: string, identities: DemoIdentity[], error?: string): string {
   const hidden = `<input type="hidden" name="query" value="${escapeHtml(query)}">`;
@@ -20,7 +23,7 @@ export function pickerPage(query: string, identities: DemoIdentity[], error?: st
     .map(
       (identity) => `<li><button type="submit" name="email" value="${escapeHtml(identity.email)}">
   <span class="who">${escapeHtml(identity.name)}</span>
-  <span class="role">${escapeHtml(identity.role ?? 'applicant')}</span>
+  <span class="role">${escapeHtml(roleLabels[identity.role ?? 'applicant'] ?? identity.role)}</span>
   <span class="email">${escapeHtml(identity.email)}</span>
 </button></li>`,
     )

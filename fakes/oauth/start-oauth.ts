@@ -63,7 +63,9 @@ function fillInIdentities(mock: OAuth2Server, grants: Grants): void {
     grants.finishRedeeming(String(req.body?.code ?? ''), body.access_token);
   });
   mock.service.on('beforeUserinfo', (response, req) => {
-    const profile = grants.profileForToken(req.headers.authorization);
+    // passport-google-oauth20 sends the token as ?access_token=, other clients as a Bearer header; Google takes both.
+    const fromQuery = new URL(req.url ?? '/', 'http://x').searchParams.get('access_token');
+    const profile = grants.profileForToken(fromQuery ?? bearerToken(req.headers.authorization));
     if (profile) {
       response.body = { ...profile };
     } else {
@@ -71,4 +73,8 @@ function fillInIdentities(mock: OAuth2Server, grants: Grants): void {
       response.body = { error: 'invalid_token', error_description: 'The access token is unknown or expired.' };
     }
   });
+}
+
+function bearerToken(header: string | undefined): string | undefined {
+  return /^Bearer (.+)$/i.exec(header ?? '')?.[1];
 }
