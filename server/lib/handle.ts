@@ -48,9 +48,21 @@ export function handle<
   return async (req: Request, res: Response, next: NextFunction) => {
     try {
       if (!req.user) throw unauthenticated();
-      const body = contract.body ? parseOrThrow(contract.body, req.body ?? {}, 'body') : req.body;
-      const query = (contract.query ? parseOrThrow(contract.query, req.query, 'query') : req.query) as z.infer<Q>;
-      const params = (contract.params ? parseOrThrow(contract.params, req.params, 'path') : req.params) as z.infer<P>;
+      // Check all three parts before answering, so one 400 names every bad field at once.
+      const fields: Record<string, string> = {};
+      const part = <T extends z.ZodType>(schema: T | undefined, value: unknown, prefix: string) => {
+        if (!schema) return value;
+        const result = schema.safeParse(value);
+        if (result.success) return result.data;
+        for (const [key, message] of Object.entries(zodFields(result.error))) fields[prefix + key] ??= message;
+        return undefined;
+      };
+      const params = part(contract.params, req.params, '') as z.infer<P>;
+      const query = part(contract.query, req.query, '') as z.infer<Q>;
+      const body = part(contract.body, req.body ?? {}, '') as z.infer<B>;
+      if (Object.keys(fields).length > 0) {
+        throw new AppError(400, 'invalid_input', `Some values are not valid: ${Object.keys(fields).join(', ')}.`, fields);
+      }
       const result = await fn({ body, query, params, user: req.user as SessionUser, req, res });
       if (!res.headersSent) {
         if (result === undefined) res.status(204).end();
