@@ -1,0 +1,42 @@
+import { Router } from 'express';
+import { statusText } from '../../../shared/workflow/statuses';
+import { allowedTransitions } from '../../../shared/workflow/transitions';
+import type { AppContext } from '../../context';
+import { conflict } from '../../lib/errors';
+import { handle, uuidParam } from '../../lib/handle';
+import { loadVisibleRequest } from '../../services/requests/request-access';
+import { toRequestView } from '../../services/requests/request-view';
+import { actionPatch, runTransitionEffects, type EffectInput } from '../../services/requests/transition-effects';
+import { applyTransition, type TransitionInput } from '../../services/requests/transition.service';
+import { readNeeds, transitionInputSchema } from './transition-input';
+
+export function transitionsRouter({ db, env }: AppContext) {
+  const router = Router();
+  const transitionCtx = { db, officeEmail: env.OFFICE_EMAIL, appOrigin: env.APP_ORIGIN };
+
+  router.post('/api/requests/:id/transitions', handle({ params: uuidParam, body: transitionInputSchema }, async ({ params, body, user }) => {
+    const { note, patch } = readNeeds(body);
+    // Answer "not from here" with the current status for the wrong role too, not only the wrong status:
+    // the person sees why the button they expected is not there. The locked re-check happens in applyTransition.
+    const current = await loadVisibleRequest(db, user, params.id);
+    if (!allowedTransitions(current.status, user.role).some((t) => t.action === body.action)) {
+      throw conflict(`This request is "${statusText[current.status].label}" (${current.status}); "${body.action}" is not possible from there for you.`);
+    }
+    const fullPatch = { ...patch, ...actionPatch(body.action, user) };
+    const effects: EffectInput = { action: body.action, actor: user, answer: body.answer, patch: fullPatch };
+    const input: TransitionInput = {
+      requestId: params.id,
+      action: body.action,
+      expectedVersion: body.expectedVersion,
+      note,
+      patch: fullPatch,
+      within: async (tx, row) => {
+        await runTransitionEffects(tx, row, effects);
+        input.emailDetail = effects.emailDetail;
+      },
+    };
+    const { request } = await applyTransition(transitionCtx, user, input);
+    return { request: toRequestView(request) };
+  }));
+  return router;
+}

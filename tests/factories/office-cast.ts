@@ -1,0 +1,27 @@
+import { demoPeople } from '../../server/db/seed/demo-people';
+import { seedDemo } from '../../server/db/seed';
+import type { Role } from '../../shared/workflow/statuses';
+import { signIn, type TestApp } from '../setup/test-app';
+
+export type Agent = Awaited<ReturnType<typeof signIn>>;
+export interface SignedIn { agent: Agent; id: string; email: string; role: Role }
+
+/** Seeds the demo people and signs in the first of each role, plus a second office person and owner. */
+export async function signInCast(t: TestApp) {
+  await seedDemo(t.ctx.db);
+  const as = async (email: string): Promise<SignedIn> => {
+    const agent = await signIn(t.app, email);
+    const me = await agent.get('/api/me').expect(200);
+    return { agent, id: me.body.user.id, email, role: me.body.user.role };
+  };
+  const first = (role: Role, skip = 0) => demoPeople.filter((p) => p.role === role)[skip].email;
+  return {
+    applicant: await as(first('applicant')),
+    otherApplicant: await as(first('applicant', 1)),
+    staff: await as(first('staff')),
+    otherStaff: await as(first('staff', 1)),
+    crew: await as(first('crew')),
+    admin: await as(first('admin')),
+  };
+}
+export type Cast = Awaited<ReturnType<typeof signInCast>>;

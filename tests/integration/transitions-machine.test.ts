@@ -1,0 +1,82 @@
+import { eq } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { requests } from '../../server/db/schema';
+import { canSee } from '../../server/services/requests/request-access';
+import { requestStatuses, type RequestStatus, type Role } from '../../shared/workflow/statuses';
+import { transitions, type Transition } from '../../shared/workflow/transitions';
+import { createAsBuiltSet, createGradeCheck } from '../factories/grade-checks';
+import { signInCast, type Cast, type SignedIn } from '../factories/office-cast';
+import { createRequestRow } from '../factories/request-rows';
+import { createTestApp, type TestApp } from '../setup/test-app';
+
+let t: TestApp;
+let cast: Cast;
+beforeAll(async () => {
+  t = await createTestApp();
+  cast = await signInCast(t);
+});
+afterAll(() => t.close());
+
+const crewStatuses: RequestStatus[] = ['crew_assigned', 'under_construction', 'built', 'closed'];
+
+/** A request sitting in `status` with whatever a move out of it would need already in place. */
+async function requestIn(status: RequestStatus) {
+  const db = t.ctx.db;
+  const row = await createRequestRow(db, {
+    applicantId: cast.applicant.id, status, permitReference: 'FC-ACC-2291',
+    crewId: crewStatuses.includes(status) ? cast.crew.id : null,
+  });
+  const check = await createGradeCheck(db, { requestId: row.id, createdById: cast.staff.id });
+  await createAsBuiltSet(db, { requestId: row.id, gradeCheckId: check.id, crewId: cast.crew.id });
+  return row;
+}
+
+function bodyFor(action: string, needs: readonly string[], version: number) {
+  const body: Record<string, unknown> = { action, expectedVersion: version };
+  if (needs.some((n) => ['reason', 'questions', 'note'].includes(n))) body.note = 'Culvert cover is under 12 in at the ditch line.';
+  if (needs.includes('answer')) body.answer = 'The ditch is about 2 ft deep at the mailbox.';
+  if (needs.includes('visitDate')) body.visitAt = new Date(Date.now() + 3 * 86_400_000).toISOString();
+  if (needs.includes('permit')) body.permitDecidedOn = '2026-04-02';
+  if (action === 'file-permit') body.permitReference = 'FC-ACC-2291';
+  return body;
+}
+
+const people = (): Record<Role, SignedIn> => ({ applicant: cast.applicant, staff: cast.staff, crew: cast.crew, admin: cast.admin });
+const cases = transitions.flatMap((tr) => (['applicant', 'staff', 'crew', 'admin'] as const).map((role) => ({ tr, role })));
+
+describe('every transition in the table, for every role', () => {
+  it.each(cases.map(({ tr, role }) => [`${tr.action} from ${tr.from} as ${role}`, tr, role] as const))('%s', async (_name, tr: Transition, role: Role) => {
+    const row = await requestIn(tr.from);
+    const who = people()[role];
+    const res = await who.agent.post(`/api/requests/${row.id}/transitions`).send(bodyFor(tr.action, tr.needs, row.version));
+    const [after] = await t.ctx.db.select().from(requests).where(eq(requests.id, row.id));
+    if (tr.roles.includes(role)) {
+      expect(res.status, JSON.stringify(res.body)).toBe(200);
+      expect(res.body.request).toMatchObject({ status: tr.to, version: row.version + 1 });
+      expect(after.status).toBe(tr.to);
+      if (tr.action === 'accept-job') expect(after.crewId).toBe(who.id);
+    } else {
+      // Whoever may not even see the request gets 404; the rest get 409 naming where it stands.
+      const visible = canSee({ id: who.id, email: who.email, name: '', role }, row);
+      expect(res.status, JSON.stringify(res.body)).toBe(visible ? 409 : 404);
+      if (visible) expect(res.body.error.message).toContain(tr.from);
+      expect(after).toMatchObject({ status: tr.from, version: row.version });
+    }
+  });
+});
+
+describe('actions that are not in the table', () => {
+  const pairs = requestStatuses.flatMap((from) => [...new Set(transitions.map((x) => x.action))]
+    .filter((action) => !transitions.some((x) => x.from === from && x.action === action))
+    .map((action) => [from, action] as const));
+
+  it.each(pairs)('%s cannot %s, even for the owner (admin)', async (from, action) => {
+    const row = await requestIn(from);
+    const needs = transitions.find((x) => x.action === action)!.needs;
+    const res = await cast.admin.agent.post(`/api/requests/${row.id}/transitions`).send(bodyFor(action, needs, row.version));
+    expect(res.status).toBe(409);
+    expect(res.body.error.message).toContain(`(${from})`);
+    const [after] = await t.ctx.db.select({ status: requests.status, version: requests.version }).from(requests).where(eq(requests.id, row.id));
+    expect(after).toEqual({ status: from, version: row.version });
+  });
+});
