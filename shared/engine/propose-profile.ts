@@ -71,7 +71,8 @@ export function proposeProfile(input: ProposeProfileInput, ruleProfile: unknown)
     if (solution.status !== 'optimal') {
       return failed(
         attempt === 0
-          ? `the ${rules.maxGradeChangePercent}% grade-change limit cannot bend the profile enough to reach the end elevation`
+          ? `the ${rules.maxGradeChangePercent}% grade-change limit cannot bend the profile enough to reach the end elevation` +
+              (rules.minDrainageGradePercent === undefined ? '' : ` while keeping the ${rules.minDrainageGradePercent}% drainage grade`)
           : `no profile keeps a ${vehicle.name.toLowerCase()} from scraping while meeting the other limits`,
       );
     }
