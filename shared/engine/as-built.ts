@@ -3,6 +3,7 @@ import { parseInput } from './errors';
 import { snap, stationFt, elevationFt, gradePercent, nonNegative, bounded } from './numbers';
 import { elevationAt, profileInputSchema, normalizeParsedProfile, type ProfilePoint } from './profile';
 import { ruleProfileSchema } from './rule-profile';
+import { ENGINE_VERSION } from './version';
 
 export type AsBuiltStatus = 'pass' | 'advisory' | 'fail';
 
@@ -92,5 +93,5 @@ export function checkAsBuilt(input: CheckAsBuiltInput) {
     }
   }
   const overall = results.reduce<AsBuiltStatus>((acc, r) => worst(acc, r.status), 'pass');
-  return { readings: results, status: overall, passes: overall !== 'fail' };
+  return { engineVersion: ENGINE_VERSION, ruleProfileId: rules.id, ruleProfileVersion: rules.version, readings: results, status: overall, passes: overall !== 'fail' };
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { SAFETY_CAUTIONS } from './cautions';
 import { culvertInputSchema, checkCulvert, type CulvertSummary } from './culvert-checks';
 import { parseInput } from './errors';
 import type { Finding } from './findings';
@@ -36,6 +37,7 @@ export interface EntranceReport {
   scrape: ScrapeResult;
   culvert?: CulvertSummary;
   sight?: SightSummary;
+  cautions: readonly string[];
 }
 
 export function profileLabel(rules: RuleProfile): string {
@@ -74,5 +76,6 @@ export function checkEntrance(input: CheckEntranceInput, ruleProfile: unknown): 
     scrape: profile.scrape,
     culvert: culvert.culvert,
     sight: sight.sight,
+    cautions: SAFETY_CAUTIONS,
   };
 }

@@ -103,3 +103,4 @@ export {
   type CheckAsBuiltInput,
 } from './as-built';
 export { gradePercentToDegrees, breakOverAngleDeg, breakOverAngleInputSchema } from './angles';
+export { SAFETY_CAUTIONS } from './cautions';

@@ -9,6 +9,7 @@ import { type RuleProfile, ruleProfileSchema } from './rule-profile';
 import { sectionTemplateSchema } from './cross-sections';
 import { buildLeastEarthModel, type GradeLimits, segmentLimits } from './least-earth-model';
 import { explainInfeasible } from './infeasible-reason';
+import { ENGINE_VERSION } from './version';
 
 export const proposeProfileInputSchema = z.object({
   existing: profileInputSchema,
@@ -29,6 +30,7 @@ export interface CutFillAtStation {
 }
 
 export interface ProposedProfile {
+  engineVersion: string;
   feasible: boolean;
   reason?: string;
   profile: ProfilePoint[];
@@ -47,7 +49,7 @@ function withLandingBreak(points: ProfilePoint[], landingEndFt: number): Profile
   return [...points, { stationFt: landingEndFt, elevationFt: elevationAt(points, landingEndFt) }].sort((a, b) => a.stationFt - b.stationFt);
 }
 
-const failed = (reason: string): ProposedProfile => ({ feasible: false, reason, profile: [], cutFillByStation: [], cutCuYd: 0, fillCuYd: 0 });
+const failed = (reason: string): ProposedProfile => ({ engineVersion: ENGINE_VERSION, feasible: false, reason, profile: [], cutFillByStation: [], cutCuYd: 0, fillCuYd: 0 });
 
 /**
  * The least-earth profile: minimise the sum of |design - existing| x station spacing under the landing,
@@ -95,5 +97,5 @@ function result(existing: ProfilePoint[], design: ProfilePoint[], template: z.ou
     cutFillFt: existing[i].elevationFt - d.elevationFt,
   }));
   const volumes = earthworkFromProfiles({ existing, design, template });
-  return { feasible: true, profile: design, cutFillByStation, cutCuYd: volumes.cutCuYd, fillCuYd: volumes.fillCuYd };
+  return { engineVersion: ENGINE_VERSION, feasible: true, profile: design, cutFillByStation, cutCuYd: volumes.cutCuYd, fillCuYd: volumes.fillCuYd };
 }
