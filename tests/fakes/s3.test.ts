@@ -11,6 +11,8 @@ import {
   S3ServiceException,
 } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
+import { Sha256 } from '@aws-crypto/sha256-js';
+import { SignatureV4 } from '@smithy/signature-v4';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startS3StandIn, type S3StandIn } from '../../fakes/s3/start-s3.js';
 
@@ -75,6 +77,17 @@ describe('S3 stand-in: SDK calls signed in headers', () => {
     wrong.destroy();
   });
 
+  it('refuses a body that differs from the signed payload hash', async () => {
+    const key = uniqueKey('swapped.txt');
+    const url = new URL(`${s3.endpoint}/${s3.bucket}/${key}`);
+    const signer = new SignatureV4({ credentials: s3, region: s3.region, service: 's3', sha256: Sha256, uriEscapePath: false });
+    const signed = await signer.sign({ method: 'PUT', protocol: 'http:', hostname: url.hostname, port: Number(url.port), path: url.pathname, query: {}, headers: { host: url.host }, body: 'original' });
+    const response = await fetch(url, { method: 'PUT', headers: signed.headers, body: 'swapped!' });
+    expect(response.status).toBe(400);
+    expect(await errorCode(response)).toBe('XAmzContentSHA256Mismatch');
+    await expect(client.send(new HeadObjectCommand({ Bucket: s3.bucket, Key: key }))).rejects.toMatchObject({ $metadata: { httpStatusCode: 404 } });
+  });
+
   it('refuses an unsigned request', async () => {
     const response = await fetch(`${s3.endpoint}/${s3.bucket}?list-type=2`);
     expect(response.status).toBe(403);
@@ -115,6 +128,28 @@ describe('S3 stand-in: presigned upload URLs', () => {
     const replay = await put();
     expect(replay.status).toBe(403);
     expect(await replay.text()).toContain('already been used');
+  });
+
+  it('still refuses a used upload URL after a restart', async () => {
+    const ownDir = await mkdtemp(join(tmpdir(), 'gradepass-s3-restart-'));
+    const options = { dir: ownDir, bucket: 'restart-bucket', allowedOrigins: [] };
+    let storage = await startS3StandIn(options);
+    try {
+      const own = new S3Client({ endpoint: storage.endpoint, region: storage.region, forcePathStyle: true, credentials: storage, requestChecksumCalculation: 'WHEN_REQUIRED' });
+      const command = new PutObjectCommand({ Bucket: storage.bucket, Key: 'a.jpg', ContentType: 'image/jpeg', ContentLength: 3 });
+      const url = new URL(await getSignedUrl(own, command, { expiresIn: 300, signableHeaders: new Set(['content-type']) }));
+      own.destroy();
+      const put = (endpoint: string) => fetch(`${endpoint}${url.pathname}${url.search}`, { method: 'PUT', body: 'abc', headers: { 'content-type': 'image/jpeg', host: url.host } });
+      expect((await put(storage.endpoint)).status).toBe(200);
+      await storage.stop();
+      storage = await startS3StandIn({ ...options, port: Number(url.port) });
+      const replay = await put(storage.endpoint);
+      expect(replay.status).toBe(403);
+      expect(await replay.text()).toContain('already been used');
+    } finally {
+      await storage.stop();
+      await rm(ownDir, { recursive: true, force: true });
+    }
   });
 
   it('refuses a content type other than the signed one', async () => {
