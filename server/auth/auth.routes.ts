@@ -16,7 +16,8 @@ export function authRouter(passport: PassportInstance) {
         return res.redirect(`/sign-in?error=${encodeURIComponent(reason)}`);
       }
       // req.login regenerates the session id, so a session fixed before sign-in is worthless afterwards.
-      req.login(user, (loginError) => (loginError ? next(loginError) : res.redirect('/')));
+      // The sign-in page sends a signed-in person on to their own start page.
+      req.login(user, (loginError) => (loginError ? next(loginError) : res.redirect('/sign-in')));
     })(req, res, next);
   });
   router.post('/auth/sign-out', (req, res, next) => {

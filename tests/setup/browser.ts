@@ -1,5 +1,3 @@
-import { mkdtempSync, rmSync } from 'node:fs';
-import os from 'node:os';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { inject } from 'vitest';
@@ -7,21 +5,16 @@ import { chromiumPath } from './browser-tools';
 
 /** Debian's Chromium, never a downloaded one; the flags keep it off the network this machine does not have. */
 export async function launchBrowser(): Promise<{ browser: Browser; close(): Promise<void> }> {
-  const profile = mkdtempSync(path.join(os.tmpdir(), 'gradepass-chromium-'));
+  // Playwright gives every launch a fresh, throwaway profile of its own.
   const browser = await chromium.launch({
     executablePath: chromiumPath,
+    headless: true,
     args: [
-      '--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
-      '--disable-component-update', '--disable-sync', `--user-data-dir=${profile}`,
+      '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
+      '--disable-component-update', '--disable-sync',
     ],
   });
-  return {
-    browser,
-    close: async () => {
-      await browser.close();
-      rmSync(profile, { recursive: true, force: true });
-    },
-  };
+  return { browser, close: () => browser.close() };
 }
 
 export function appUrl(pathname = '/') {

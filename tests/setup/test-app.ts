@@ -66,7 +66,7 @@ export async function signIn(app: TestApp['app'] | string, email: string) {
   if (provider.status !== 302 || !back) throw new Error(`provider did not redirect back (${provider.status})`);
   const callback = new URL(back);
   const done = await agent.get(callback.pathname + callback.search);
-  if (done.status !== 302 || done.headers.location !== '/') {
+  if (done.status !== 302 || done.headers.location !== '/sign-in') {
     throw new Error(`sign-in callback failed: ${done.status} ${done.headers.location ?? JSON.stringify(done.body)}`);
   }
   return agent;
