@@ -1,8 +1,10 @@
 import type { AppContext } from '../context';
+import { startEmailWorker, type EmailWorkerOptions } from './email-queue';
 
 export interface Workers { stop(): Promise<void> }
 
 /** Background work of this instance. Every instance may run it: the queue lives in PostgreSQL. */
-export async function startWorkers(_ctx: AppContext): Promise<Workers> {
-  return { stop: async () => {} };
+export async function startWorkers(ctx: AppContext, options: { email?: EmailWorkerOptions } = {}): Promise<Workers> {
+  const email = await startEmailWorker(ctx, options.email);
+  return { stop: () => email.stop() };
 }

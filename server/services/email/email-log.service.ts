@@ -1,0 +1,74 @@
+import { and, count, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
+import type { DbOrTx } from '../../db/client';
+import { emails, requests } from '../../db/schema';
+import { conflict, notFound } from '../../lib/errors';
+
+export const emailStatuses = ['queued', 'sending', 'sent', 'failed', 'dead'] as const;
+export type EmailStatus = (typeof emailStatuses)[number];
+
+export interface EmailLogQuery {
+  status?: EmailStatus;
+  requestId?: string;
+  search?: string;
+  /** Opaque position from the previous page: newest first, so new mail never shifts the pages already read. */
+  cursor?: { createdAt: Date; id: string };
+  limit: number;
+}
+
+const listColumns = {
+  id: emails.id, requestId: emails.requestId, reference: requests.reference, template: emails.template,
+  toAddress: emails.toAddress, subject: emails.subject, status: emails.status, attempts: emails.attempts,
+  lastError: emails.lastError, messageId: emails.messageId, createdAt: emails.createdAt, sentAt: emails.sentAt,
+};
+
+export async function listEmails(db: DbOrTx, query: EmailLogQuery) {
+  const filters: SQL[] = [];
+  if (query.status) filters.push(eq(emails.status, query.status));
+  if (query.requestId) filters.push(eq(emails.requestId, query.requestId));
+  if (query.search) {
+    const like = `%${query.search.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    filters.push(or(ilike(emails.toAddress, like), ilike(emails.subject, like), ilike(requests.reference, like))!);
+  }
+  const where = filters.length ? and(...filters) : undefined;
+  const page = query.cursor
+    ? and(where, sql`(${emails.createdAt}, ${emails.id}) < (${query.cursor.createdAt.toISOString()}::timestamptz, ${query.cursor.id}::uuid)`)
+    : where;
+  const rows = await db.select(listColumns).from(emails).leftJoin(requests, eq(requests.id, emails.requestId))
+    .where(page).orderBy(desc(emails.createdAt), desc(emails.id)).limit(query.limit + 1);
+  const more = rows.length > query.limit;
+  const items = more ? rows.slice(0, query.limit) : rows;
+  const last = items.at(-1);
+  const totals = await db.select({ status: emails.status, n: count() }).from(emails).groupBy(emails.status);
+  return {
+    emails: items,
+    nextCursor: more && last ? encodeCursor(last.createdAt, last.id) : null,
+    totals: Object.fromEntries(emailStatuses.map((s) => [s, totals.find((t) => t.status === s)?.n ?? 0])),
+  };
+}
+
+export async function getEmail(db: DbOrTx, id: string) {
+  const [row] = await db.select({ ...listColumns, textBody: emails.textBody, htmlBody: emails.htmlBody })
+    .from(emails).leftJoin(requests, eq(requests.id, emails.requestId)).where(eq(emails.id, id));
+  if (!row) throw notFound('E-mail');
+  return row;
+}
+
+/** Staff can send a dead message again once the cause is fixed; the worker's sweeper picks it up. */
+export async function retryEmail(db: DbOrTx, id: string) {
+  const [row] = await db.update(emails).set({ status: 'queued' })
+    .where(and(eq(emails.id, id), eq(emails.status, 'dead'))).returning({ id: emails.id });
+  if (row) return getEmail(db, id);
+  const current = await getEmail(db, id);
+  throw conflict(`Only a message that gave up ("dead") can be retried; this one is "${current.status}".`);
+}
+
+export function encodeCursor(createdAt: Date, id: string) {
+  return Buffer.from(`${createdAt.toISOString()}|${id}`).toString('base64url');
+}
+
+export function decodeCursor(value: string): { createdAt: Date; id: string } | null {
+  const [at, id] = Buffer.from(value, 'base64url').toString().split('|');
+  const createdAt = new Date(at ?? '');
+  if (Number.isNaN(createdAt.getTime()) || !/^[0-9a-f-]{36}$/i.test(id ?? '')) return null;
+  return { createdAt, id };
+}
