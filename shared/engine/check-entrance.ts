@@ -6,7 +6,7 @@ import type { Finding } from './findings';
 import { bounded, stationFt } from './numbers';
 import { checkProfileRules } from './profile-checks';
 import { elevationAt, normalizeParsedProfile, profileInputSchema, type ProfilePoint, type ProfileSegment } from './profile';
-import { designVehicleSchema, type RuleProfile, ruleProfileSchema } from './rule-profile';
+import { designVehicleSchema, type RuleProfile, type RuleProfileInput, ruleProfileSchema } from './rule-profile';
 import type { ScrapeResult } from './scrape';
 import { checkGeometry, checkSight, geometryInputSchema, sightInputSchema, type SightSummary } from './site-checks';
 import { summarise, type CheckSummary } from './summary';
@@ -46,7 +46,7 @@ export function profileLabel(rules: RuleProfile): string {
 }
 
 /** The whole entrance check: every rule comes back, the ones without data as "not-checked". */
-export function checkEntrance(input: CheckEntranceInput, ruleProfile: unknown): EntranceReport {
+export function checkEntrance(input: CheckEntranceInput, ruleProfile: RuleProfileInput): EntranceReport {
   const p = parseInput(checkEntranceInputSchema, input);
   const parsedRules = parseInput(ruleProfileSchema, ruleProfile, 'ruleProfile');
   const rules: RuleProfile = p.vehicle ? { ...parsedRules, designVehicle: p.vehicle } : parsedRules;

@@ -65,6 +65,7 @@ export function checkCulvert(c: z.output<typeof culvertInputSchema> | undefined,
 
   if (c.surfaceElevationFt === undefined) findings.push(notChecked(ids.cover, 'needs the surface elevation over the pipe'));
   else {
+    // Under one surface elevation the higher end of the pipe has the least cover.
     const crownFt = Math.max(c.inletInvertFt, c.outletInvertFt) + (d + 2 * c.wallThicknessIn) / 12;
     summary.coverIn = (c.surfaceElevationFt - crownFt) * 12;
     findings.push(rules.culvert.minCoverIn === undefined ? advisory(ids.cover, summary.coverIn, null, 'no minimum cover in this rule profile') : atLeast(ids.cover, summary.coverIn, rules.culvert.minCoverIn));
@@ -73,9 +74,14 @@ export function checkCulvert(c: z.output<typeof culvertInputSchema> | undefined,
   const lengthForSlope = c.lengthFt ?? required;
   if (lengthForSlope === undefined) findings.push(notChecked(ids.slope, 'needs the culvert length'));
   else {
-    summary.slopeFtPerFt = (c.inletInvertFt - c.outletInvertFt) / lengthForSlope;
-    // A pipe that is flat or falls toward its inlet will not drain the ditch.
-    findings.push({ ...atLeast(ids.slope, summary.slopeFtPerFt, 0), ...(summary.slopeFtPerFt <= 0 ? { status: 'fail' as const, note: 'the outlet is not below the inlet' } : {}) });
+    const slope = (c.inletInvertFt - c.outletInvertFt) / lengthForSlope;
+    summary.slopeFtPerFt = slope;
+    // A pipe that is flat or falls toward its inlet will not drain the ditch, so zero fails here too.
+    findings.push(
+      slope > 0
+        ? atLeast(ids.slope, slope, 0)
+        : { ...ids.slope, measured: slope, limit: 0, margin: slope, status: 'fail', note: 'the outlet is not below the inlet' },
+    );
   }
 
   const flow = c.designFlowCfs ?? (c.drainage ? rationalFlow(c.drainage).flowCfs : undefined);

@@ -25,13 +25,16 @@ export function explainInfeasible(
   }
   const need = targetEndFt - roadEdgeFt;
   const length = points[points.length - 1].stationFt - points[0].stationFt;
-  const landing = `with the landing held to ${rules.landing.minGradePercent}% to ${rules.landing.maxGradePercent}% for ${rules.landing.lengthFt} ft`;
+  const landing =
+    rules.landing.lengthFt > 0
+      ? `with the landing held to ${rules.landing.minGradePercent}% to ${rules.landing.maxGradePercent}% for ${rules.landing.lengthFt} ft, `
+      : '';
   const tol = 1e-6;
   if (need > most + tol) {
-    return `the ${rules.maxGradePercent}% limit cannot climb ${ft(need)} in ${ft(length)} (${landing}, it climbs at most ${ft(most)})`;
+    return `the ${rules.maxGradePercent}% limit cannot climb ${ft(need)} in ${ft(length)} (${landing}it climbs at most ${ft(most)})`;
   }
   if (need < least - tol) {
-    return `the ${rules.maxGradePercent}% limit cannot drop ${ft(-need)} in ${ft(length)} (${landing}, it drops at most ${ft(-least)})`;
+    return `the ${rules.maxGradePercent}% limit cannot drop ${ft(-need)} in ${ft(length)} (${landing}it drops at most ${ft(-least)})`;
   }
   return undefined;
 }

@@ -5,7 +5,7 @@ import { parseInput } from './errors';
 import { elevationFt } from './numbers';
 import { checkProfileRules } from './profile-checks';
 import { elevationAt, normalizeParsedProfile, profileInputSchema, type ProfilePoint } from './profile';
-import { type RuleProfile, ruleProfileSchema } from './rule-profile';
+import { type RuleProfile, type RuleProfileInput, ruleProfileSchema } from './rule-profile';
 import { sectionTemplateSchema } from './cross-sections';
 import { buildLeastEarthModel, type GradeLimits, segmentLimits } from './least-earth-model';
 import { explainInfeasible } from './infeasible-reason';
@@ -56,7 +56,7 @@ const failed = (reason: string): ProposedProfile => ({ engineVersion: ENGINE_VER
  * grade and grade-change limits. The scrape check is not linear, so when a solution scrapes, the allowed
  * rate of grade change is tightened and the programme solved again.
  */
-export function proposeProfile(input: ProposeProfileInput, ruleProfile: unknown): ProposedProfile {
+export function proposeProfile(input: ProposeProfileInput, ruleProfile: RuleProfileInput): ProposedProfile {
   const p = parseInput(proposeProfileInputSchema, input);
   const rules: RuleProfile = parseInput(ruleProfileSchema, ruleProfile, 'ruleProfile');
   const raw = normalizeParsedProfile(p.existing, 'existing');
@@ -80,10 +80,17 @@ export function proposeProfile(input: ProposeProfileInput, ruleProfile: unknown)
     }
     const design = model.read(solution.variables);
     const check = checkProfileRules(design, rules, design[0].stationFt, p.scrapeStepFt);
-    if (check.findings.every((f) => f.status !== 'fail')) return result(existing, design, p.template);
-    // Spread each allowed change over more ground: the body spans about the wheelbase plus an overhang.
-    const span = vehicle.wheelbaseFt + Math.max(vehicle.frontOverhangFt, vehicle.rearOverhangFt);
-    const safeChange = Math.min(rules.maxGradeChangePercent / 100, (4 * vehicle.clearanceIn) / 12 / vehicle.wheelbaseFt);
+    const failing = check.findings.filter((f) => f.status === 'fail');
+    if (failing.length === 0) return result(existing, design, p.template);
+    if (failing.some((f) => f.ruleId !== 'scrape.clearance')) {
+      return failed(`the solver's profile still breaks ${failing.map((f) => f.label.toLowerCase()).join(', ')}`);
+    }
+    // Spread the bends over more ground. A single break of A costs A*W/4 between the axles and about A times
+    // the overhang beyond them, so the change allowed across one body length is what keeps both clear.
+    const overhang = Math.max(vehicle.frontOverhangFt, vehicle.rearOverhangFt);
+    const span = vehicle.wheelbaseFt + overhang;
+    const clearanceFt = vehicle.clearanceIn / 12;
+    const safeChange = Math.min(rules.maxGradeChangePercent / 100, (4 * clearanceFt) / vehicle.wheelbaseFt, overhang > 0 ? clearanceFt / overhang : Infinity);
     changeRatePerFt = Math.min(changeRatePerFt, safeChange / span) / (attempt === 0 ? 1 : 2);
   }
   return failed(`no profile keeps a ${vehicle.name.toLowerCase()} from scraping while meeting the other limits`);

@@ -51,11 +51,22 @@ describe('scrape check', () => {
     expect(frontOnly.minClearanceIn).toBeCloseTo(5 - 3 * Math.tan(theta) * 12, 1);
   });
 
-  it('drives both ways: a short rear overhang over a sag is caught by driving out', () => {
-    const r = scrapeCheck({ profile: singleBreak(0, 8), vehicle: { ...vehicle, frontOverhangFt: 5, rearOverhangFt: 1 } });
-    expect(r.where).toBe('front-overhang');
-    expect(r.minClearanceIn).toBeCloseTo(5 - 5 * Math.tan(Math.atan(0.08)) * 12, 1);
-    expect(r.atStationFt).toBeGreaterThan(50);
+  it('drives both ways: the same step is worst going in on one profile and coming out on its mirror', () => {
+    // A short 0.3 ft ramp up at 0+50: a long front overhang meets it going in, not coming out.
+    const step = [
+      { stationFt: 0, elevationFt: 100 },
+      { stationFt: 50, elevationFt: 100 },
+      { stationFt: 52, elevationFt: 100.3 },
+      { stationFt: 100, elevationFt: 100.3 },
+    ];
+    const mirror = step.map((p) => ({ stationFt: 100 - p.stationFt, elevationFt: p.elevationFt })).reverse();
+    const longNose = { ...vehicle, frontOverhangFt: 5, rearOverhangFt: 1 };
+    const going = scrapeCheck({ profile: step, vehicle: longNose });
+    const coming = scrapeCheck({ profile: mirror, vehicle: longNose });
+    expect(going).toMatchObject({ direction: 'into-property', where: 'front-overhang' });
+    expect(coming).toMatchObject({ direction: 'out-of-property', where: 'front-overhang' });
+    expect(coming.minClearanceIn).toBeCloseTo(going.minClearanceIn, 6);
+    expect(coming.atStationFt).toBeCloseTo(100 - going.atStationFt, 6);
   });
 
   it('reports failure below zero clearance and where it happens', () => {
