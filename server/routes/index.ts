@@ -1,14 +1,22 @@
 import type { Express } from 'express';
 import type { AppContext } from '../context';
+import { crewRouter } from './crew/crew.routes';
 import { emailsRouter } from './emails/emails.routes';
 import { healthRouter } from './health/health.routes';
+import { messagesRouter } from './messages/messages.routes';
+import { photosRouter } from './photos/photos.routes';
+import { requestsRouter } from './requests/requests.routes';
 import { transitionsRouter } from './transitions/transitions.routes';
 import { usersRouter } from './users/users.routes';
 
 /** Every resource's router, in one list. */
 export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(healthRouter(ctx));
+  app.use(crewRouter(ctx));
   app.use(usersRouter(ctx));
+  app.use(requestsRouter(ctx));
+  app.use(photosRouter(ctx));
+  app.use(messagesRouter(ctx));
   app.use(transitionsRouter(ctx));
   app.use(emailsRouter(ctx));
 }

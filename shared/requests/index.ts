@@ -1,2 +1,3 @@
 export * from './application-schema';
 export * from './choices';
+export * from './photo-rules';

@@ -1,0 +1,41 @@
+import { and, asc, eq } from 'drizzle-orm';
+import type { SessionUser } from '../../auth/session-user';
+import type { Db } from '../../db/client';
+import { messages, users } from '../../db/schema';
+import { badRequest, conflict, notFound } from '../../lib/errors';
+import { loadVisibleRequest, type RequestRow } from '../../services/requests/request-access';
+
+type Visibility = 'internal' | 'shared';
+const isOffice = (user: SessionUser) => user.role === 'staff' || user.role === 'admin';
+
+/** Crew talk with the office only about a job they hold, not about every job waiting on the board. */
+async function loadForMessages(db: Db, user: SessionUser, requestId: string): Promise<RequestRow> {
+  const row = await loadVisibleRequest(db, user, requestId);
+  if (user.role === 'crew' && row.crewId !== user.id) throw notFound('Request');
+  return row;
+}
+
+export async function listMessages(db: Db, user: SessionUser, requestId: string) {
+  await loadForMessages(db, user, requestId);
+  const office = isOffice(user);
+  const where = office ? eq(messages.requestId, requestId)
+    : and(eq(messages.requestId, requestId), eq(messages.visibility, 'shared'));
+  const rows = await db.select({
+    id: messages.id, body: messages.body, visibility: messages.visibility, createdAt: messages.createdAt,
+    authorName: users.name, authorRole: users.role, authorId: messages.authorId,
+  }).from(messages).innerJoin(users, eq(users.id, messages.authorId)).where(where).orderBy(asc(messages.createdAt));
+  return rows.map(({ visibility, ...m }) => ({ ...m, mine: m.authorId === user.id, ...(office ? { internal: visibility === 'internal' } : {}) }));
+}
+
+export async function postMessage(db: Db, user: SessionUser, requestId: string, input: { body: string; visibility?: Visibility }) {
+  const row = await loadForMessages(db, user, requestId);
+  const office = isOffice(user);
+  // The office decides each time; its default keeps a slip of the hand from reaching the property owner.
+  const visibility = input.visibility ?? (office ? 'internal' : 'shared');
+  if (!office && visibility === 'internal') {
+    throw badRequest('Only the office can write internal notes.', { visibility: 'messages from you are always shared with the office' });
+  }
+  if (!office && row.status === 'draft') throw conflict('Send the request to the office first; then you can write to them here.');
+  const [message] = await db.insert(messages).values({ requestId, authorId: user.id, visibility, body: input.body }).returning();
+  return { id: message.id, body: message.body, createdAt: message.createdAt, authorId: user.id, authorName: user.name, authorRole: user.role, mine: true, ...(office ? { internal: visibility === 'internal' } : {}) };
+}

@@ -1,0 +1,59 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { photoCaptionInputSchema, photoConfirmInputSchema, photoUploadInputSchema } from '../../../shared/requests/photo-rules';
+import type { AppContext } from '../../context';
+import { notFound } from '../../lib/errors';
+import { handle, uuidParam } from '../../lib/handle';
+import { requireRole } from '../../middleware/require-role';
+import { loadVisibleRequest } from '../../services/requests/request-access';
+import {
+  confirmUpload, listStored, presignUpload, removePhoto, setCaption, viewSeconds, viewUrl, type PhotoRow, type Storage,
+} from './photos.service';
+
+const photoParams = z.object({ id: z.uuid('must be a valid id'), photoId: z.uuid('must be a valid id') });
+
+/** What a photo looks like to its readers: never the storage key, never anything read from the file itself. */
+const photoView = (photo: PhotoRow, url?: string) => ({
+  id: photo.id, fileName: photo.fileName, contentType: photo.contentType, sizeBytes: photo.sizeBytes,
+  caption: photo.caption, gpsLat: photo.gpsLat, gpsLng: photo.gpsLng, createdAt: photo.createdAt, storedAt: photo.storedAt,
+  ...(url ? { url, urlExpiresInSeconds: viewSeconds } : {}),
+});
+
+export function photosRouter({ db, s3, env }: AppContext) {
+  const store: Storage = { s3, bucket: env.S3_BUCKET };
+  const router = Router();
+  const owner = requireRole('applicant');
+
+  router.get('/api/requests/:id/photos', handle({ params: uuidParam }, async ({ params, user }) => {
+    await loadVisibleRequest(db, user, params.id);
+    const rows = await listStored(db, params.id);
+    return { photos: await Promise.all(rows.map(async (p) => photoView(p, await viewUrl(store, p)))) };
+  }));
+
+  router.get('/api/requests/:id/photos/:photoId/url', handle({ params: photoParams }, async ({ params, user }) => {
+    await loadVisibleRequest(db, user, params.id);
+    const photo = (await listStored(db, params.id)).find((p) => p.id === params.photoId);
+    if (!photo) throw notFound('Photo');
+    return { url: await viewUrl(store, photo), expiresInSeconds: viewSeconds };
+  }));
+
+  router.post('/api/requests/:id/photos', owner, handle({ params: uuidParam, body: photoUploadInputSchema }, async ({ params, body, user, res }) => {
+    const { photo, upload } = await presignUpload(db, store, user, params.id, body);
+    res.status(201);
+    return { photo: photoView(photo), upload };
+  }));
+
+  router.post('/api/requests/:id/photos/:photoId/confirm', owner, handle({ params: photoParams, body: photoConfirmInputSchema }, async ({ params, body, user }) => {
+    const photo = await confirmUpload(db, store, user, params.id, params.photoId, body);
+    return { photo: photoView(photo, await viewUrl(store, photo)) };
+  }));
+
+  router.patch('/api/requests/:id/photos/:photoId', owner, handle({ params: photoParams, body: photoCaptionInputSchema }, async ({ params, body, user }) => ({
+    photo: photoView(await setCaption(db, user, params.id, params.photoId, body.caption)),
+  })));
+
+  router.delete('/api/requests/:id/photos/:photoId', owner, handle({ params: photoParams }, async ({ params, user }) => {
+    await removePhoto(db, store, user, params.id, params.photoId);
+  }));
+  return router;
+}

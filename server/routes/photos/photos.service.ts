@@ -1,0 +1,103 @@
+import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand, type S3Client } from '@aws-sdk/client-s3';
+import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
+import { and, asc, eq, gt, inArray, or } from 'drizzle-orm';
+import { randomUUID } from 'node:crypto';
+import { maxPhotosPerRequest, photoExtensions, type photoContentTypes } from '../../../shared/requests/photo-rules';
+import type { SessionUser } from '../../auth/session-user';
+import type { Db, DbOrTx } from '../../db/client';
+import { photos } from '../../db/schema';
+import { badRequest, conflict, notFound } from '../../lib/errors';
+import { loadVisibleRequest, type RequestRow } from '../../services/requests/request-access';
+
+export interface Storage { s3: S3Client; bucket: string }
+export type PhotoRow = typeof photos.$inferSelect;
+
+export const uploadSeconds = 300;
+export const viewSeconds = 300;
+/** Photos can change until the site visit has happened: after that the office works from what it saw. */
+const photoEditable = new Set<RequestRow['status']>(['draft', 'submitted', 'needs_details', 'visit_booked']);
+
+/** The owner's own request, in a status that still takes photos; others get 404, late changes 409. */
+export async function loadOwnEditable(tx: DbOrTx, user: SessionUser, requestId: string) {
+  const row = await loadVisibleRequest(tx, user, requestId, { forUpdate: true });
+  if (row.applicantId !== user.id) throw notFound('Request');
+  if (!photoEditable.has(row.status)) throw conflict('Photos can no longer be changed on this request. Send the office a message instead.');
+  return row;
+}
+
+export async function presignUpload(db: Db, store: Storage, user: SessionUser, requestId: string,
+  file: { fileName: string; contentType: (typeof photoContentTypes)[number]; sizeBytes: number }) {
+  return db.transaction(async (tx) => {
+    await loadOwnEditable(tx, user, requestId);
+    // An upload that never got confirmed stops counting once its URL has expired.
+    const recent = new Date(Date.now() - uploadSeconds * 1000);
+    const counted = await tx.select({ id: photos.id }).from(photos).where(and(eq(photos.requestId, requestId),
+      or(eq(photos.status, 'stored'), and(eq(photos.status, 'pending'), gt(photos.createdAt, recent)))));
+    if (counted.length >= maxPhotosPerRequest) {
+      throw badRequest(`A request can have at most ${maxPhotosPerRequest} photos. Remove one to add another.`, { fileName: `at most ${maxPhotosPerRequest} photos per request` });
+    }
+    const id = randomUUID();
+    const objectKey = `requests/${requestId}/photos/${id}.${photoExtensions[file.contentType]}`;
+    const [photo] = await tx.insert(photos).values({ id, requestId, uploaderId: user.id, objectKey, ...file }).returning();
+    const command = new PutObjectCommand({ Bucket: store.bucket, Key: objectKey, ContentType: file.contentType, ContentLength: file.sizeBytes });
+    // Signing type and length means storage refuses any other file under this URL.
+    const url = await getSignedUrl(store.s3, command, { expiresIn: uploadSeconds, signableHeaders: new Set(['content-type']) });
+    return { photo, upload: { method: 'PUT' as const, url, headers: { 'content-type': file.contentType }, expiresInSeconds: uploadSeconds } };
+  });
+}
+
+async function loadPhoto(tx: DbOrTx, requestId: string, photoId: string) {
+  const [photo] = await tx.select().from(photos).where(and(eq(photos.id, photoId), eq(photos.requestId, requestId))).for('update');
+  if (!photo || photo.status === 'removed') throw notFound('Photo');
+  return photo;
+}
+
+/** Lists a photo only once storage holds exactly the file that was announced. */
+export async function confirmUpload(db: Db, store: Storage, user: SessionUser, requestId: string, photoId: string,
+  extra: { caption?: string; gpsLat?: number | null; gpsLng?: number | null }) {
+  return db.transaction(async (tx) => {
+    await loadOwnEditable(tx, user, requestId);
+    const photo = await loadPhoto(tx, requestId, photoId);
+    const head = await store.s3.send(new HeadObjectCommand({ Bucket: store.bucket, Key: photo.objectKey })).catch((error: { name?: string }) => {
+      if (error.name === 'NotFound' || error.name === 'NoSuchKey') return null;
+      throw error;
+    });
+    if (!head) throw conflict('The photo has not reached storage. Upload it again.');
+    if (head.ContentLength !== photo.sizeBytes || head.ContentType !== photo.contentType) {
+      throw conflict('The stored file is not the one that was announced. Upload it again.');
+    }
+    const [stored] = await tx.update(photos).set({
+      status: 'stored', storedAt: photo.storedAt ?? new Date(),
+      caption: extra.caption ?? photo.caption, gpsLat: extra.gpsLat ?? photo.gpsLat, gpsLng: extra.gpsLng ?? photo.gpsLng,
+    }).where(eq(photos.id, photo.id)).returning();
+    return stored;
+  });
+}
+
+export async function setCaption(db: Db, user: SessionUser, requestId: string, photoId: string, caption: string) {
+  return db.transaction(async (tx) => {
+    await loadOwnEditable(tx, user, requestId);
+    await loadPhoto(tx, requestId, photoId);
+    const [row] = await tx.update(photos).set({ caption }).where(eq(photos.id, photoId)).returning();
+    return row;
+  });
+}
+
+export async function removePhoto(db: Db, store: Storage, user: SessionUser, requestId: string, photoId: string) {
+  const photo = await db.transaction(async (tx) => {
+    await loadOwnEditable(tx, user, requestId);
+    const row = await loadPhoto(tx, requestId, photoId);
+    await tx.update(photos).set({ status: 'removed' }).where(eq(photos.id, photoId));
+    return row;
+  });
+  await store.s3.send(new DeleteObjectCommand({ Bucket: store.bucket, Key: photo.objectKey }));
+}
+
+export async function listStored(db: DbOrTx, requestId: string) {
+  return db.select().from(photos).where(and(eq(photos.requestId, requestId), inArray(photos.status, ['stored'])))
+    .orderBy(asc(photos.createdAt));
+}
+
+export function viewUrl(store: Storage, photo: PhotoRow) {
+  return getSignedUrl(store.s3, new GetObjectCommand({ Bucket: store.bucket, Key: photo.objectKey }), { expiresIn: viewSeconds });
+}

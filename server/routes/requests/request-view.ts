@@ -1,0 +1,47 @@
+import { allowedTransitions } from '../../../shared/workflow/transitions';
+import { statusText } from '../../../shared/workflow/statuses';
+import type { SessionUser } from '../../auth/session-user';
+import type { RequestRow } from '../../services/requests/request-access';
+
+export const isOffice = (user: SessionUser) => user.role === 'staff' || user.role === 'admin';
+
+/** The applicant's part at each status, in the words of the "My requests" table. */
+export function expectedOfApplicant(status: RequestRow['status']): string {
+  if (status === 'draft') return 'Finish the form and send it';
+  if (status === 'needs_details') return 'Answer the office’s question';
+  return 'Nothing for now';
+}
+
+/**
+ * One request as its reader may see it. Everything the applicant gave goes to everyone who can see the request;
+ * the office's own bookkeeping (assignee, crew, jurisdiction) only to the office.
+ */
+export function requestView(row: RequestRow, user: SessionUser) {
+  const base = {
+    id: row.id,
+    reference: row.reference,
+    status: row.status,
+    statusLabel: statusText[row.status].label,
+    whatNext: statusText[row.status].next,
+    version: row.version,
+    wizardStep: row.wizardStep,
+    application: row.application,
+    applicantName: row.applicantName,
+    siteAddress: row.siteAddress,
+    roadName: row.roadName,
+    siteLat: row.siteLat,
+    siteLng: row.siteLng,
+    visitAt: row.visitAt,
+    permitReference: row.permitReference,
+    permitDecidedOn: row.permitDecidedOn,
+    permitConditions: row.permitConditions,
+    permitExpiresOn: row.permitExpiresOn,
+    submittedAt: row.submittedAt,
+    statusChangedAt: row.statusChangedAt,
+    createdAt: row.createdAt,
+    updatedAt: row.updatedAt,
+    actions: allowedTransitions(row.status, user.role).map(({ action, label, needs, to }) => ({ action, label, needs, to })),
+  };
+  if (!isOffice(user)) return base;
+  return { ...base, applicantId: row.applicantId, assigneeId: row.assigneeId, crewId: row.crewId, jurisdictionId: row.jurisdictionId };
+}

@@ -1,0 +1,62 @@
+import { GetObjectCommand } from '@aws-sdk/client-s3';
+import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
+import { Router } from 'express';
+import { z } from 'zod';
+import { entranceStepShape, siteStepShape } from '../../../shared/requests/application-schema';
+import type { AppContext } from '../../context';
+import { notFound } from '../../lib/errors';
+import { handle, uuidParam } from '../../lib/handle';
+import { requireRole } from '../../middleware/require-role';
+import { loadVisibleRequest } from '../../services/requests/request-access';
+import { createDraft, listMine, saveDraft } from './drafts.service';
+import { expectedOfApplicant, requestView } from './request-view';
+import { listDocuments, listEvents } from './timeline.service';
+
+export const saveDraftInputSchema = z.strictObject({
+  expectedVersion: z.number({ error: 'Must be the version number you last read.' }).int().min(1),
+  wizardStep: z.number({ error: 'Must be a step number.' }).int().min(0, 'Steps are 0 to 3.').max(3, 'Steps are 0 to 3.').optional(),
+  site: siteStepShape.partial().optional(),
+  entrance: entranceStepShape.partial().optional(),
+});
+
+const documentParams = z.object({ id: z.uuid('must be a valid id'), documentId: z.uuid('must be a valid id') });
+const downloadSeconds = 300;
+
+export function requestsRouter({ db, s3, env }: AppContext) {
+  const router = Router();
+
+  router.post('/api/requests', requireRole('applicant'), handle({}, async ({ user, res }) => {
+    res.status(201);
+    return { request: requestView(await createDraft(db, user), user) };
+  }));
+
+  router.get('/api/requests/mine', requireRole('applicant'), handle({}, async ({ user }) => ({
+    requests: (await listMine(db, user)).map((row) => ({
+      id: row.id, reference: row.reference, status: row.status, siteAddress: row.siteAddress, roadName: row.roadName,
+      statusChangedAt: row.statusChangedAt, updatedAt: row.updatedAt, expected: expectedOfApplicant(row.status),
+    })),
+  })));
+
+  router.patch('/api/requests/:id/draft', requireRole('applicant'), handle({ params: uuidParam, body: saveDraftInputSchema }, async ({ params, body, user }) => ({
+    request: requestView(await saveDraft(db, user, params.id, body), user),
+  })));
+
+  router.get('/api/requests/:id', handle({ params: uuidParam }, async ({ params, user }) => ({
+    request: requestView(await loadVisibleRequest(db, user, params.id), user),
+    documents: (await listDocuments(db, user, params.id)).map(({ objectKey: _key, ...doc }) => doc),
+  })));
+
+  router.get('/api/requests/:id/events', handle({ params: uuidParam }, async ({ params, user }) => {
+    await loadVisibleRequest(db, user, params.id);
+    return { events: await listEvents(db, user, params.id) };
+  }));
+
+  router.get('/api/requests/:id/documents/:documentId/url', handle({ params: documentParams }, async ({ params, user }) => {
+    await loadVisibleRequest(db, user, params.id);
+    const doc = (await listDocuments(db, user, params.id)).find((d) => d.id === params.documentId);
+    if (!doc) throw notFound('Document');
+    const command = new GetObjectCommand({ Bucket: env.S3_BUCKET, Key: doc.objectKey, ResponseContentDisposition: 'inline' });
+    return { url: await getSignedUrl(s3, command, { expiresIn: downloadSeconds }), expiresInSeconds: downloadSeconds };
+  }));
+  return router;
+}

@@ -1,0 +1,79 @@
+import fc from 'fast-check';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createTestApp, type TestApp } from '../setup/test-app';
+import { newApplicant, submitted, type Agent } from './requests-helpers';
+
+let t: TestApp;
+let owner: Agent;
+let draftId: string;
+let sentId: string;
+beforeAll(async () => {
+  t = await createTestApp();
+  owner = await newApplicant(t);
+  draftId = (await owner.post('/api/requests').send({}).expect(201)).body.request.id;
+  sentId = (await submitted(owner)).id;
+});
+afterAll(() => t.close());
+
+const currentVersion = async (id: string) => (await owner.get(`/api/requests/${id}`).expect(200)).body.request.version as number;
+
+describe('every write names the bad field with a 400 and changes nothing', () => {
+  it('rejects malformed JSON', async () => {
+    for (const [method, path] of [['patch', `/api/requests/${draftId}/draft`], ['post', `/api/requests/${sentId}/messages`], ['post', `/api/requests/${draftId}/photos`]] as const) {
+      const res = await owner[method](path).set('Content-Type', 'application/json').send('{"expectedVersion": 1,').expect(400);
+      expect(res.body.error.fields).toHaveProperty(['(body)']);
+    }
+  });
+
+  it.each([
+    ['a version sent as text', { expectedVersion: '1' }, 'expectedVersion'],
+    ['a step out of range', { expectedVersion: 1, wizardStep: 9 }, 'wizardStep'],
+    ['an address that is too long', { expectedVersion: 1, site: { address: 'x'.repeat(201) } }, 'site.address'],
+    ['a road owner we do not know', { expectedVersion: 1, site: { roadOwner: 'federal' } }, 'site.roadOwner'],
+    ['a speed that is not a number', { expectedVersion: 1, site: { postedSpeedMph: 'fast' } }, 'site.postedSpeedMph'],
+    ['a latitude off the globe', { expectedVersion: 1, site: { siteLat: 123 } }, 'site.siteLat'],
+    ['an unknown vehicle', { expectedVersion: 1, entrance: { vehicles: ['tractor-trailer'] } }, 'entrance.vehicles.0'],
+    ['notes that are too long', { expectedVersion: 1, entrance: { notes: 'n'.repeat(2001) } }, 'entrance.notes'],
+    ['a step that is not an object', { expectedVersion: 1, entrance: 'all of it' }, 'entrance'],
+  ])('draft: %s', async (_what, body, field) => {
+    const before = await currentVersion(draftId);
+    const res = await owner.patch(`/api/requests/${draftId}/draft`).send(body).expect(400);
+    expect(res.body.error.fields).toHaveProperty([field]);
+    expect(await currentVersion(draftId)).toBe(before);
+  });
+
+  it('answers 400 for an id that is not an id', async () => {
+    const res = await owner.get('/api/requests/not-an-id').expect(400);
+    expect(res.body.error.fields).toHaveProperty(['id']);
+  });
+
+  it.each([
+    ['an empty message', { body: '   ' }, 'body'],
+    ['a message that is too long', { body: 'm'.repeat(4001) }, 'body'],
+    ['a visibility we do not know', { body: 'hi', visibility: 'public' }, 'visibility'],
+    ['an internal note from the applicant', { body: 'hi', visibility: 'internal' }, 'visibility'],
+  ])('messages: %s', async (_what, body, field) => {
+    const res = await owner.post(`/api/requests/${sentId}/messages`).send(body).expect(400);
+    expect(res.body.error.fields).toHaveProperty([field]);
+  });
+
+  it.each([
+    ['a GIF', { fileName: 'a.gif', contentType: 'image/gif', sizeBytes: 100 }, 'contentType'],
+    ['a 16 MB photo', { fileName: 'big.jpg', contentType: 'image/jpeg', sizeBytes: 16 * 1024 * 1024 }, 'sizeBytes'],
+    ['a size that is not a whole number', { fileName: 'a.jpg', contentType: 'image/jpeg', sizeBytes: 10.5 }, 'sizeBytes'],
+    ['a missing file name', { contentType: 'image/jpeg', sizeBytes: 100 }, 'fileName'],
+  ])('photo upload: %s', async (_what, body, field) => {
+    const res = await owner.post(`/api/requests/${draftId}/photos`).send(body).expect(400);
+    expect(res.body.error.fields).toHaveProperty([field]);
+  });
+
+  it('never answers 500 to whatever JSON arrives at the draft, message and photo routes', async () => {
+    await fc.assert(fc.asyncProperty(fc.jsonValue(), fc.constantFrom('draft', 'messages', 'photos'), async (body, route) => {
+      const call = route === 'draft'
+        ? owner.patch(`/api/requests/${draftId}/draft`)
+        : owner.post(`/api/requests/${route === 'messages' ? sentId : draftId}/${route}`);
+      const res = await call.set('Content-Type', 'application/json').send(JSON.stringify(body));
+      expect(res.status, JSON.stringify(res.body)).toBeLessThan(500);
+    }), { numRuns: 60 });
+  });
+});
