@@ -23,7 +23,7 @@ async function announce(agent: Agent = owner, id = requestId, file = { fileName:
 }
 
 const put = (url: string, body: Buffer, contentType = 'image/png') =>
-  fetch(url, { method: 'PUT', body, headers: { 'content-type': contentType } });
+  fetch(url, { method: 'PUT', body: new Uint8Array(body), headers: { 'content-type': contentType } });
 
 describe('photos go straight to storage and are listed once confirmed', () => {
   it('uploads, confirms with a caption, and lists it with a working short-lived link', async () => {
