@@ -1,0 +1,88 @@
+import { desc, eq } from 'drizzle-orm';
+import { checkAsBuilt, EngineInputError, type AsBuiltReadingResult, type AsBuiltStatus } from '../../../shared/engine';
+import type { SaveAsBuiltInput } from '../../../shared/crew/crew-inputs';
+import type { AsBuiltPageView, AsBuiltSetView } from '../../../shared/crew/crew-views';
+import { statusText } from '../../../shared/workflow/statuses';
+import type { SessionUser } from '../../auth/session-user';
+import type { Db, DbOrTx } from '../../db/client';
+import { asBuiltSets, users } from '../../db/schema';
+import { AppError, conflict } from '../../lib/errors';
+import { loadVisibleRequest } from '../requests/request-access';
+import { ruleProfileLabel, loadJobCheck, type SavedCheck } from './saved-check';
+
+const crewStages = new Set(['released', 'crew_assigned', 'under_construction', 'built', 'closed']);
+
+export async function requireJobCheck(db: DbOrTx, requestId: string): Promise<SavedCheck> {
+  const check = await loadJobCheck(db, requestId);
+  if (!check) throw conflict('This job has no saved grade check to build against; ask the office to attach one.');
+  return check;
+}
+
+/** The engine on the server is the record: the same profile version the approved check used, the same design. */
+export function verifyReadings(check: SavedCheck, readings: SaveAsBuiltInput['readings']) {
+  try {
+    const shots = readings.map((r) => (r.gradePercent !== undefined
+      ? { stationFt: r.stationFt, gradePercent: r.gradePercent }
+      : { stationFt: r.stationFt, elevationFt: r.elevationFt ?? Number.NaN }));
+    return checkAsBuilt({ readings: shots, ruleProfile: check.ruleProfile, design: check.designPoints, roadEdgeStationFt: check.roadEdgeStationFt });
+  } catch (error) {
+    if (!(error instanceof EngineInputError)) throw error;
+    const fields: Record<string, string> = {};
+    for (const issue of error.issues) fields[issue.field || 'readings'] ??= issue.message;
+    throw new AppError(400, 'invalid_input', `The readings cannot be checked as entered: ${Object.keys(fields).join(', ')}.`, fields);
+  }
+}
+
+export async function listSets(db: DbOrTx, requestId: string): Promise<AsBuiltSetView[]> {
+  const rows = await db.select({ set: asBuiltSets, crewName: users.name }).from(asBuiltSets)
+    .innerJoin(users, eq(users.id, asBuiltSets.crewId))
+    .where(eq(asBuiltSets.requestId, requestId)).orderBy(desc(asBuiltSets.createdAt)).limit(50);
+  return rows.map(({ set, crewName }) => {
+    const stored = set.results as { readings?: AsBuiltReadingResult[]; status?: AsBuiltStatus } | AsBuiltReadingResult[];
+    const results = Array.isArray(stored) ? stored : stored.readings ?? [];
+    const status = Array.isArray(stored) ? (set.passed ? 'pass' : 'fail') : stored.status ?? (set.passed ? 'pass' : 'fail');
+    return {
+      id: set.id, readings: set.readings as AsBuiltSetView['readings'], results, status, passed: set.passed,
+      note: set.note, crewName, createdAt: set.createdAt.toISOString(),
+    };
+  });
+}
+
+export async function asBuiltPage(db: Db, user: SessionUser, requestId: string): Promise<AsBuiltPageView> {
+  const row = await loadVisibleRequest(db, user, requestId);
+  if (!crewStages.has(row.status)) throw new AppError(404, 'not_found', 'Job was not found.');
+  const check = await requireJobCheck(db, row.id);
+  return {
+    job: { requestId: row.id, reference: row.reference, status: row.status, version: row.version, siteAddress: row.siteAddress },
+    ruleProfile: check.ruleProfile,
+    ruleProfileLabel: ruleProfileLabel(check.ruleProfile),
+    design: check.designPoints,
+    roadEdgeStationFt: check.roadEdgeStationFt,
+    sets: await listSets(db, row.id),
+  };
+}
+
+/** A set of finished-grade readings, checked and stored; failing sets are kept too, they are the site's record. */
+export async function saveAsBuiltSet(db: Db, crew: SessionUser, requestId: string, input: SaveAsBuiltInput) {
+  return db.transaction(async (tx) => {
+    const row = await loadVisibleRequest(tx, crew, requestId, { forUpdate: true });
+    if (row.status !== 'under_construction' || row.crewId !== crew.id) {
+      throw conflict(`As-built readings are taken while the job is being built; this one is "${statusText[row.status].label}" (${row.status}).`);
+    }
+    const check = await requireJobCheck(tx, row.id);
+    const verdict = verifyReadings(check, input.readings);
+    const [set] = await tx.insert(asBuiltSets).values({
+      requestId: row.id, gradeCheckId: check.id, crewId: crew.id, readings: input.readings,
+      results: { readings: verdict.readings, status: verdict.status, ruleProfileVersionId: check.ruleProfile.id },
+      passed: verdict.passes, note: input.note ?? '',
+    }).returning();
+    const [view] = (await listSets(tx, row.id)).filter((s) => s.id === set.id);
+    return view;
+  });
+}
+
+export async function latestSet(db: DbOrTx, requestId: string) {
+  const [set] = await db.select().from(asBuiltSets).where(eq(asBuiltSets.requestId, requestId))
+    .orderBy(desc(asBuiltSets.createdAt)).limit(1);
+  return set ?? null;
+}

@@ -1,0 +1,127 @@
+import { and, desc, eq, isNotNull } from 'drizzle-orm';
+import { z } from 'zod';
+import {
+  culvertInputSchema, laserSetup, laserSetupInputSchema, normalizeProfile, profileInputSchema, proposeProfileInputSchema,
+  ruleProfileSchema, type CulvertInput, type EntranceReport, type ProfilePoint, type RuleProfile,
+} from '../../../shared/engine';
+import type { DbOrTx } from '../../db/client';
+import { gradeChecks, jobs, jurisdictions, ruleProfileVersions } from '../../db/schema';
+
+/**
+ * A saved grade check read back for the crew. The stored JSON was written by the office's check screen through
+ * the engine; it is parsed again here piece by piece, so one odd part (an older check without a laser setup)
+ * leaves that section of the field sheet empty instead of breaking the whole sheet.
+ */
+const pointSchema = z.object({ stationFt: z.number(), elevationFt: z.number() });
+const reportSchema = z.object({
+  profile: z.object({ points: z.array(pointSchema).min(2) }),
+  culvert: z.object({ requiredLengthFt: z.number().optional(), coverIn: z.number().optional(), slopeFtPerFt: z.number().optional() }).optional(),
+}).loose();
+const proposalSchema = z.object({
+  feasible: z.boolean(),
+  profile: z.array(pointSchema),
+  cutFillByStation: z.array(z.object({ stationFt: z.number(), existingFt: z.number(), designFt: z.number(), cutFillFt: z.number() })),
+  cutCuYd: z.number(),
+  fillCuYd: z.number(),
+});
+const designPartSchema = proposeProfileInputSchema.extend({ applied: z.boolean().default(false) });
+
+export interface SavedCheck {
+  id: string;
+  number: number;
+  summary: string;
+  passed: boolean;
+  engineVersion: string;
+  ruleProfile: RuleProfile;
+  /** The profile the check approved: the entrance as it is to be built. */
+  designPoints: ProfilePoint[];
+  roadEdgeStationFt: number;
+  existingPoints: ProfilePoint[] | null;
+  design: z.output<typeof designPartSchema> | null;
+  proposal: z.output<typeof proposalSchema> | null;
+  culvert: z.output<typeof culvertInputSchema> | null;
+  culvertSummary: EntranceReport['culvert'] | null;
+  laser: ReturnType<typeof laserSetup> | null;
+  laserInput: z.output<typeof laserSetupInputSchema> | null;
+}
+
+const pick = <S extends z.ZodType>(schema: S, value: unknown): z.output<S> | null => {
+  const parsed = schema.safeParse(value);
+  return parsed.success ? parsed.data : null;
+};
+
+function laserOf(input: z.output<typeof laserSetupInputSchema> | null, stored: unknown) {
+  if (!input) return null;
+  const saved = stored as ReturnType<typeof laserSetup> | undefined;
+  // The stored result is the record; recompute only when it is missing, from the same stored input.
+  if (saved && typeof saved.alongRoadPercent === 'number' && saved.secondSetup && Array.isArray(saved.stakes)) return saved;
+  try {
+    return laserSetup(input);
+  } catch {
+    return null;
+  }
+}
+
+function pointsOf(report: z.output<typeof reportSchema> | null, rawProfile: unknown): ProfilePoint[] | null {
+  if (report) return report.profile.points;
+  const input = pick(profileInputSchema, rawProfile);
+  if (!input) return null;
+  try {
+    return normalizeProfile(input);
+  } catch {
+    return null;
+  }
+}
+
+/** The check a job was released with, or the request's latest attached one for a job released before jobs rows existed. */
+export async function loadJobCheck(db: DbOrTx, requestId: string): Promise<SavedCheck | null> {
+  const [job] = await db.select({ gradeCheckId: jobs.gradeCheckId }).from(jobs).where(eq(jobs.requestId, requestId));
+  const where = job?.gradeCheckId
+    ? eq(gradeChecks.id, job.gradeCheckId)
+    : and(eq(gradeChecks.requestId, requestId), isNotNull(gradeChecks.attachedAt));
+  const [row] = await db.select({ check: gradeChecks, version: ruleProfileVersions, jurisdictionName: jurisdictions.name })
+    .from(gradeChecks)
+    .innerJoin(ruleProfileVersions, eq(ruleProfileVersions.id, gradeChecks.ruleProfileVersionId))
+    .innerJoin(jurisdictions, eq(jurisdictions.id, ruleProfileVersions.jurisdictionId))
+    .where(where)
+    .orderBy(desc(gradeChecks.attachedAt))
+    .limit(1);
+  if (!row) return null;
+  const rules = pick(ruleProfileSchema, row.version.profile);
+  if (!rules) return null;
+  const inputs = (row.check.inputs ?? {}) as Record<string, unknown>;
+  const results = (row.check.results ?? {}) as Record<string, unknown>;
+  const report = pick(reportSchema, results.report);
+  const designPoints = pointsOf(report, inputs.profile);
+  if (!designPoints) return null;
+  const design = pick(designPartSchema, inputs.design);
+  const laserInput = pick(laserSetupInputSchema, inputs.laser);
+  let existingPoints: ProfilePoint[] | null = null;
+  try {
+    existingPoints = design ? normalizeProfile(design.existing) : null;
+  } catch {
+    existingPoints = null;
+  }
+  const roadEdge = typeof inputs.roadEdgeStationFt === 'number' ? inputs.roadEdgeStationFt : designPoints[0].stationFt;
+  return {
+    id: row.check.id,
+    number: row.check.number,
+    summary: row.check.summary,
+    passed: row.check.passed,
+    engineVersion: row.check.engineVersion,
+    ruleProfile: { ...rules, id: row.version.id, version: row.version.version, jurisdictionName: row.jurisdictionName },
+    designPoints,
+    roadEdgeStationFt: roadEdge,
+    existingPoints,
+    design,
+    proposal: pick(proposalSchema, results.proposal),
+    culvert: pick(culvertInputSchema, inputs.culvert as CulvertInput | undefined),
+    culvertSummary: report?.culvert ?? null,
+    laser: laserOf(laserInput, results.laser),
+    laserInput,
+  };
+}
+
+export function ruleProfileLabel(rules: RuleProfile) {
+  return `${rules.jurisdictionName ?? rules.name ?? 'Rule profile'}, version ${rules.version ?? '?'}`;
+}
