@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { EngineInputError, within } from './errors';
 import { atLeast, atMost, advisory, type Finding, notChecked } from './findings';
 import { inletControlHeadwater, inletTypes } from './inlet-control';
 import { bounded, elevationFt, nonNegative, positive, roundUpTo } from './numbers';
@@ -6,7 +7,8 @@ import { pipeFullFlow, rationalFlow, rationalFlowInputSchema } from './pipe-flow
 import type { RuleProfile } from './rule-profile';
 
 export const culvertInputSchema = z.object({
-  diameterIn: positive(120),
+  // 3 in is the smallest pipe the headwater equations are run for.
+  diameterIn: bounded(3, 120),
   inlet: z.enum(inletTypes).default('concrete-square-headwall'),
   manningN: bounded(0.005, 0.1),
   inletInvertFt: elevationFt(),
@@ -34,69 +36,90 @@ export interface CulvertSummary {
 
 const base = (ruleId: string, label: string, unit: string) => ({ ruleId, label, unit });
 
-function requiredLengthFt(c: z.output<typeof culvertInputSchema>, rules: RuleProfile): number | undefined {
+type Culvert = z.output<typeof culvertInputSchema>;
+
+// A culvert laid steeper than this is not a driveway culvert; the headwater equations stop at it too.
+const MAX_SLOPE_FT_PER_FT = 0.5;
+
+function requiredLengthFt(c: Culvert, rules: RuleProfile): number | undefined {
   if (c.topWidthFt === undefined || c.sideSlopeHPerV === undefined || c.surfaceElevationFt === undefined) return undefined;
-  // Each side-slope run falls from the surface to the ditch flow line at the pipe's end.
-  const runs = c.sideSlopeHPerV * Math.max(0, c.surfaceElevationFt - c.inletInvertFt) + c.sideSlopeHPerV * Math.max(0, c.surfaceElevationFt - c.outletInvertFt);
-  const raw = Math.max(c.topWidthFt + runs, rules.culvert.minLengthFt ?? 0);
+  // Each side-slope run falls from the surface to the ditch flow line at that end of the pipe.
+  const fallIn = Math.max(0, c.surfaceElevationFt - c.inletInvertFt);
+  const fallOut = Math.max(0, c.surfaceElevationFt - c.outletInvertFt);
+  const raw = Math.max(c.topWidthFt + c.sideSlopeHPerV * (fallIn + fallOut), rules.culvert.minLengthFt ?? 0);
   return roundUpTo(raw, rules.culvert.lengthIncrementFt);
 }
 
-export function checkCulvert(c: z.output<typeof culvertInputSchema> | undefined, rules: RuleProfile): { findings: Finding[]; culvert?: CulvertSummary } {
-  const ids = {
-    diameter: base('culvert.min-diameter', 'Culvert diameter', 'in'),
-    length: base('culvert.length', 'Culvert length', 'ft'),
-    cover: base('culvert.min-cover', 'Cover over the culvert', 'in'),
-    slope: base('culvert.slope', 'Culvert slope from the inverts', 'ft/ft'),
-    capacity: base('culvert.capacity', 'Culvert full-flow capacity', 'cfs'),
-    headwater: base('culvert.headwater', 'Headwater at the inlet (HW/D)', 'HW/D'),
-  };
-  if (!c) return { findings: Object.values(ids).map((b) => notChecked(b, 'no culvert in the input')) };
+const IDS = {
+  diameter: base('culvert.min-diameter', 'Culvert diameter', 'in'),
+  length: base('culvert.length', 'Culvert length', 'ft'),
+  cover: base('culvert.min-cover', 'Cover over the culvert', 'in'),
+  slope: base('culvert.slope', 'Culvert slope from the inverts', 'ft/ft'),
+  capacity: base('culvert.capacity', 'Culvert full-flow capacity', 'cfs'),
+  headwater: base('culvert.headwater', 'Headwater at the inlet (HW/D)', 'HW/D'),
+};
+
+function sizeFindings(c: Culvert, rules: RuleProfile, summary: CulvertSummary): Finding[] {
   const findings: Finding[] = [];
-  const summary: CulvertSummary = {};
-  const d = c.diameterIn;
-  findings.push(rules.culvert.minDiameterIn === undefined ? notChecked(ids.diameter, 'no minimum diameter in this rule profile') : atLeast(ids.diameter, d, rules.culvert.minDiameterIn));
+  const minDiameter = rules.culvert.minDiameterIn;
+  findings.push(minDiameter === undefined ? notChecked(IDS.diameter, 'no minimum diameter in this rule profile') : atLeast(IDS.diameter, c.diameterIn, minDiameter));
 
   const required = requiredLengthFt(c, rules);
   summary.requiredLengthFt = required;
-  if (required === undefined) findings.push(notChecked(ids.length, 'needs top width, side slope and surface elevation'));
-  else if (c.lengthFt === undefined) findings.push(advisory(ids.length, null, required, `order a culvert at least ${required} ft long`));
-  else findings.push(atLeast(ids.length, c.lengthFt, required));
+  if (required === undefined) findings.push(notChecked(IDS.length, 'needs top width, side slope and surface elevation'));
+  else if (c.lengthFt === undefined) findings.push(advisory(IDS.length, null, required, `order a culvert at least ${required} ft long`));
+  else findings.push(atLeast(IDS.length, c.lengthFt, required));
 
-  if (c.surfaceElevationFt === undefined) findings.push(notChecked(ids.cover, 'needs the surface elevation over the pipe'));
+  if (c.surfaceElevationFt === undefined) findings.push(notChecked(IDS.cover, 'needs the surface elevation over the pipe'));
   else {
     // Under one surface elevation the higher end of the pipe has the least cover.
-    const crownFt = Math.max(c.inletInvertFt, c.outletInvertFt) + (d + 2 * c.wallThicknessIn) / 12;
-    summary.coverIn = (c.surfaceElevationFt - crownFt) * 12;
-    findings.push(rules.culvert.minCoverIn === undefined ? advisory(ids.cover, summary.coverIn, null, 'no minimum cover in this rule profile') : atLeast(ids.cover, summary.coverIn, rules.culvert.minCoverIn));
+    const crownFt = Math.max(c.inletInvertFt, c.outletInvertFt) + (c.diameterIn + 2 * c.wallThicknessIn) / 12;
+    const coverIn = (c.surfaceElevationFt - crownFt) * 12;
+    summary.coverIn = coverIn;
+    const minCover = rules.culvert.minCoverIn;
+    findings.push(minCover === undefined ? advisory(IDS.cover, coverIn, null, 'no minimum cover in this rule profile') : atLeast(IDS.cover, coverIn, minCover));
   }
+  return findings;
+}
 
-  const lengthForSlope = c.lengthFt ?? required;
-  if (lengthForSlope === undefined) findings.push(notChecked(ids.slope, 'needs the culvert length'));
-  else {
-    const slope = (c.inletInvertFt - c.outletInvertFt) / lengthForSlope;
-    summary.slopeFtPerFt = slope;
-    // A pipe that is flat or falls toward its inlet will not drain the ditch, so zero fails here too.
-    findings.push(
-      slope > 0
-        ? atLeast(ids.slope, slope, 0)
-        : { ...ids.slope, measured: slope, limit: 0, margin: slope, status: 'fail', note: 'the outlet is not below the inlet' },
-    );
+function slopeFinding(c: Culvert, summary: CulvertSummary): Finding {
+  const lengthFt = c.lengthFt ?? summary.requiredLengthFt;
+  if (lengthFt === undefined) return notChecked(IDS.slope, 'needs the culvert length');
+  const slope = (c.inletInvertFt - c.outletInvertFt) / lengthFt;
+  if (slope > MAX_SLOPE_FT_PER_FT) {
+    throw new EngineInputError('culvert.outletInvertFt', `the inverts give a slope of ${slope.toFixed(3)} ft/ft, steeper than a culvert is laid`);
   }
+  summary.slopeFtPerFt = slope;
+  // A pipe that is flat or falls toward its inlet will not drain the ditch, so zero fails here too.
+  if (slope <= 0) return { ...IDS.slope, measured: slope, limit: 0, margin: slope, status: 'fail', note: 'the outlet is not below the inlet' };
+  return atLeast(IDS.slope, slope, 0);
+}
 
-  const flow = c.designFlowCfs ?? (c.drainage ? rationalFlow(c.drainage).flowCfs : undefined);
+function flowFindings(c: Culvert, rules: RuleProfile, summary: CulvertSummary): Finding[] {
+  const flow = c.designFlowCfs ?? (c.drainage ? within('culvert.drainage', () => rationalFlow(c.drainage!).flowCfs) : undefined);
   summary.designFlowCfs = flow;
   const slope = summary.slopeFtPerFt;
   if (flow === undefined || flow <= 0 || slope === undefined || slope <= 0) {
     const why = flow === undefined || flow <= 0 ? 'no design flow in the input' : 'needs a positive culvert slope';
-    findings.push(notChecked(ids.capacity, why), notChecked(ids.headwater, why));
-    return { findings, culvert: summary };
+    return [notChecked(IDS.capacity, why), notChecked(IDS.headwater, why)];
   }
-  summary.capacityCfs = pipeFullFlow({ diameterIn: d, manningN: c.manningN, slopeFtPerFt: Math.min(slope, 1) }).flowCfs;
-  findings.push(atLeast(ids.capacity, summary.capacityCfs, flow));
-  const hw = inletControlHeadwater({ inlet: c.inlet, diameterFt: d / 12, flowCfs: flow, slopeFtPerFt: Math.min(slope, 0.5) });
+  const capacity = within('culvert', () => pipeFullFlow({ diameterIn: c.diameterIn, manningN: c.manningN, slopeFtPerFt: slope }).flowCfs);
+  summary.capacityCfs = capacity;
+  const hw = within('culvert', () => inletControlHeadwater({ inlet: c.inlet, diameterFt: c.diameterIn / 12, flowCfs: flow, slopeFtPerFt: slope }));
   summary.headwaterFt = hw.headwaterFt;
   summary.hwOverD = hw.hwOverD;
-  findings.push(rules.culvert.maxHeadwaterToDiameter === undefined ? advisory(ids.headwater, hw.hwOverD, null, 'no headwater limit in this rule profile') : atMost({ ...ids.headwater, note: `${hw.regime} inlet, headwater ${hw.headwaterFt.toFixed(2)} ft` }, hw.hwOverD, rules.culvert.maxHeadwaterToDiameter));
+  const limit = rules.culvert.maxHeadwaterToDiameter;
+  const note = `${hw.regime} inlet, headwater ${hw.headwaterFt.toFixed(2)} ft`;
+  return [
+    atLeast(IDS.capacity, capacity, flow),
+    limit === undefined ? advisory(IDS.headwater, hw.hwOverD, null, `no headwater limit in this rule profile; ${note}`) : atMost({ ...IDS.headwater, note }, hw.hwOverD, limit),
+  ];
+}
+
+/** Size, length, cover, slope, capacity and headwater of the entrance culvert; all not-checked without one. */
+export function checkCulvert(c: Culvert | undefined, rules: RuleProfile): { findings: Finding[]; culvert?: CulvertSummary } {
+  if (!c) return { findings: Object.values(IDS).map((b) => notChecked(b, 'no culvert in the input')) };
+  const summary: CulvertSummary = {};
+  const findings = [...sizeFindings(c, rules, summary), slopeFinding(c, summary), ...flowFindings(c, rules, summary)];
   return { findings, culvert: summary };
 }

@@ -54,3 +54,17 @@ export function requireFinite(value: number, field: string, what: string): numbe
   }
   return value;
 }
+
+/** Runs a nested engine call and re-roots any input error under the caller's field, e.g. "culvert.drainage". */
+export function within<T>(prefix: string, run: () => T): T {
+  try {
+    return run();
+  } catch (e) {
+    if (e instanceof EngineInputError) {
+      const reroot = (field: string) => (field ? `${prefix}.${field}` : prefix);
+      const issues = e.issues.map((i) => ({ field: reroot(i.field), message: i.message }));
+      throw new EngineInputError(reroot(e.field), issues[0]?.message ?? e.message, issues);
+    }
+    throw e;
+  }
+}

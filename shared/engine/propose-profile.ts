@@ -1,23 +1,23 @@
 import { solve } from 'yalps';
 import { z } from 'zod';
-import { earthworkFromProfiles } from './cross-sections';
-import { parseInput } from './errors';
-import { elevationFt } from './numbers';
+import { earthworkFromProfiles, sectionTemplateSchema } from './cross-sections';
+import { EngineInputError, parseInput } from './errors';
+import { bounded, elevationFt } from './numbers';
 import { checkProfileRules } from './profile-checks';
 import { elevationAt, normalizeParsedProfile, profileInputSchema, type ProfilePoint } from './profile';
 import { type RuleProfile, type RuleProfileInput, ruleProfileSchema } from './rule-profile';
-import { sectionTemplateSchema } from './cross-sections';
 import { buildLeastEarthModel, type GradeLimits, segmentLimits } from './least-earth-model';
 import { explainInfeasible } from './infeasible-reason';
 import { ENGINE_VERSION } from './version';
 
 export const proposeProfileInputSchema = z.object({
+  // The first station is the road edge; the design starts there at roadEdgeElevationFt.
   existing: profileInputSchema,
   roadEdgeElevationFt: elevationFt(),
   targetEndElevationFt: elevationFt().optional(),
   // 12 ft top and 2:1 slopes: common practice (no source) for a single-car rural entrance.
   template: sectionTemplateSchema.default({ topWidthFt: 12, cutSlopeHPerV: 2, fillSlopeHPerV: 2, groundCrossSlopePercent: 0 }),
-  scrapeStepFt: z.number().min(0.01).max(10).default(0.1),
+  scrapeStepFt: bounded(0.01, 10).default(0.1),
 });
 export type ProposeProfileInput = z.input<typeof proposeProfileInputSchema>;
 
@@ -40,6 +40,8 @@ export interface ProposedProfile {
 }
 
 const MAX_TIGHTENING = 6;
+// The solver keeps a dense tableau: 2,000 stations take about a second here, so more is refused, not left to hang.
+const MAX_STATIONS = 2_000;
 
 function withLandingBreak(points: ProfilePoint[], landingEndFt: number): ProfilePoint[] {
   // The design needs a station where the landing ends so it can break there rather than at the next shot.
@@ -60,6 +62,9 @@ export function proposeProfile(input: ProposeProfileInput, ruleProfile: RuleProf
   const p = parseInput(proposeProfileInputSchema, input);
   const rules: RuleProfile = parseInput(ruleProfileSchema, ruleProfile, 'ruleProfile');
   const raw = normalizeParsedProfile(p.existing, 'existing');
+  if (raw.length > MAX_STATIONS) {
+    throw new EngineInputError('existing', `at most ${MAX_STATIONS} stations can be designed at once (got ${raw.length})`);
+  }
   const existing = withLandingBreak(raw, raw[0].stationFt + rules.landing.lengthFt);
   const limits: GradeLimits[] = segmentLimits(existing, rules);
   const reason = explainInfeasible(existing, limits, rules, p.roadEdgeElevationFt, p.targetEndElevationFt);
@@ -70,7 +75,10 @@ export function proposeProfile(input: ProposeProfileInput, ruleProfile: RuleProf
   for (let attempt = 0; attempt < MAX_TIGHTENING; attempt++) {
     const model = buildLeastEarthModel(existing, limits, rules, p.roadEdgeElevationFt, p.targetEndElevationFt, changeRatePerFt);
     const solution = solve(model.model);
-    if (solution.status !== 'optimal') {
+    if (solution.status !== 'optimal' && solution.status !== 'infeasible') {
+      return failed(`the solver stopped without an answer (${solution.status})`);
+    }
+    if (solution.status === 'infeasible') {
       return failed(
         attempt === 0
           ? `the ${rules.maxGradeChangePercent}% grade-change limit cannot bend the profile enough to reach the end elevation` +
