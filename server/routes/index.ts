@@ -1,11 +1,14 @@
 import type { Express } from 'express';
 import type { AppContext } from '../context';
 import { crewRouter } from './crew/crew.routes';
+import { documentsRouter } from './documents/documents.routes';
 import { emailsRouter } from './emails/emails.routes';
+import { gradeChecksRouter } from './grade-checks/grade-checks.routes';
 import { healthRouter } from './health/health.routes';
 import { messagesRouter } from './messages/messages.routes';
 import { photosRouter } from './photos/photos.routes';
 import { requestsRouter } from './requests/requests.routes';
+import { ruleProfilesRouter } from './rule-profiles/rule-profiles.routes';
 import { transitionsRouter } from './transitions/transitions.routes';
 import { usersRouter } from './users/users.routes';
 
@@ -19,4 +22,7 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(messagesRouter(ctx));
   app.use(transitionsRouter(ctx));
   app.use(emailsRouter(ctx));
+  app.use(ruleProfilesRouter(ctx));
+  app.use(gradeChecksRouter(ctx));
+  app.use(documentsRouter(ctx));
 }

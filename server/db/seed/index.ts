@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import type { Db } from '../client';
 import { users } from '../schema';
 import { demoPeople } from './demo-people';
+import { seedJurisdictions } from './jurisdictions';
 
 /** Seeds the demo scenario; safe to run on every start (existing rows are left as they are). */
 export async function seedDemo(db: Db) {
@@ -10,5 +11,6 @@ export async function seedDemo(db: Db) {
       const [found] = await tx.select({ id: users.id }).from(users).where(sql`lower(${users.email}) = ${person.email}`);
       if (!found) await tx.insert(users).values(person);
     }
+    await seedJurisdictions(tx);
   });
 }

@@ -1,0 +1,19 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import type { AppContext } from '../../context';
+import { handle, uuidParam } from '../../lib/handle';
+import { officeRoles, requireRole } from '../../middleware/require-role';
+import { listDocuments, setShared } from './documents.service';
+
+export const updateDocumentInputSchema = z.strictObject({ sharedWithApplicant: z.boolean('must be true or false') });
+
+export function documentsRouter(ctx: AppContext) {
+  const router = Router();
+  router.get('/api/requests/:id/documents', handle({ params: uuidParam }, async ({ params, user }) => ({
+    documents: await listDocuments(ctx, user, params.id),
+  })));
+  router.patch('/api/documents/:id', requireRole(...officeRoles), handle({ params: uuidParam, body: updateDocumentInputSchema }, async ({ params, body, user }) => ({
+    document: await setShared(ctx.db, user, params.id, body.sharedWithApplicant),
+  })));
+  return router;
+}

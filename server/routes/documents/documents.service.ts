@@ -1,0 +1,34 @@
+import { and, desc, eq } from 'drizzle-orm';
+import type { SessionUser } from '../../auth/session-user';
+import type { AppContext } from '../../context';
+import type { Db } from '../../db/client';
+import { documents } from '../../db/schema';
+import { notFound } from '../../lib/errors';
+import { loadVisibleRequest } from '../../services/requests/request-access';
+import { DOWNLOAD_SECONDS, downloadUrl } from '../../services/reports/report-storage';
+
+type DocumentRow = typeof documents.$inferSelect;
+
+/** The property owner sees only what the office shared; the office and the crew on the job see everything. */
+export async function listDocuments(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, requestId: string) {
+  const request = await loadVisibleRequest(ctx.db, user, requestId);
+  const where = user.role === 'applicant'
+    ? and(eq(documents.requestId, request.id), eq(documents.sharedWithApplicant, true))
+    : eq(documents.requestId, request.id);
+  const rows = await ctx.db.select().from(documents).where(where).orderBy(desc(documents.createdAt));
+  const expiresAt = new Date(Date.now() + DOWNLOAD_SECONDS * 1000).toISOString();
+  return Promise.all(rows.map(async (row) => ({ ...view(row, user), url: await downloadUrl(ctx, row), urlExpiresAt: expiresAt })));
+}
+
+function view(row: DocumentRow, user: SessionUser) {
+  const { objectKey: _key, createdById: _by, ...rest } = row;
+  return user.role === 'applicant' ? { ...rest, sharedWithApplicant: true } : rest;
+}
+
+export async function setShared(db: Db, user: SessionUser, documentId: string, shared: boolean) {
+  const [row] = await db.select().from(documents).where(eq(documents.id, documentId));
+  if (!row) throw notFound('Document');
+  await loadVisibleRequest(db, user, row.requestId);
+  const [saved] = await db.update(documents).set({ sharedWithApplicant: shared }).where(eq(documents.id, documentId)).returning();
+  return view(saved, user);
+}

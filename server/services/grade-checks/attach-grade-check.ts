@@ -1,0 +1,43 @@
+import { and, eq, isNull } from 'drizzle-orm';
+import type { SessionUser } from '../../auth/session-user';
+import type { AppContext } from '../../context';
+import { documents, gradeChecks, jurisdictions, ruleProfileVersions } from '../../db/schema';
+import { loadVisibleRequest } from '../requests/request-access';
+import { buildGradeCheckReport } from '../reports/grade-check-report';
+import { storeReport } from '../reports/report-storage';
+import type { RuleProfile } from '../../../shared/engine';
+import { loadVisibleGradeCheck } from './grade-checks.service';
+
+export const REPORT_KIND = 'grade-check-report';
+
+/** Builds the PDF for one check from the stored record alone. */
+export async function reportFor(ctx: Pick<AppContext, 'db'>, user: SessionUser, checkId: string) {
+  const check = await loadVisibleGradeCheck(ctx.db, user, checkId);
+  const request = await loadVisibleRequest(ctx.db, user, check.requestId);
+  const [version] = await ctx.db.select().from(ruleProfileVersions).where(eq(ruleProfileVersions.id, check.ruleProfileVersionId));
+  const [jurisdiction] = await ctx.db.select().from(jurisdictions).where(eq(jurisdictions.id, version.jurisdictionId));
+  const pdf = await buildGradeCheckReport({ request, check, profile: version.profile as RuleProfile, version, jurisdiction });
+  return { check, request, pdf };
+}
+
+/**
+ * Makes the report, stores it and attaches it to the request as a document. Attaching twice is harmless: the key is
+ * fixed per check and the second call finds the first's document.
+ */
+export async function attachGradeCheck(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, checkId: string, share: boolean) {
+  const { check, request, pdf } = await reportFor(ctx, user, checkId);
+  const objectKey = `reports/${request.id}/grade-check-${check.number}-${check.id}.pdf`;
+  const [existing] = await ctx.db.select().from(documents).where(eq(documents.objectKey, objectKey));
+  if (existing) return { document: existing, check };
+  await storeReport(ctx, objectKey, pdf);
+  return ctx.db.transaction(async (tx) => {
+    const [document] = await tx.insert(documents).values({
+      requestId: request.id, gradeCheckId: check.id, kind: REPORT_KIND, title: `Grade check ${check.number} report`,
+      objectKey, contentType: 'application/pdf', sizeBytes: pdf.length, sharedWithApplicant: share, createdById: user.id,
+    }).onConflictDoNothing({ target: documents.objectKey }).returning();
+    const [attached] = await tx.update(gradeChecks).set({ attachedAt: new Date() })
+      .where(and(eq(gradeChecks.id, check.id), isNull(gradeChecks.attachedAt))).returning();
+    const [saved] = document ? [document] : await tx.select().from(documents).where(eq(documents.objectKey, objectKey));
+    return { document: saved, check: attached ?? check };
+  });
+}

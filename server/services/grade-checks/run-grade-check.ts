@@ -1,0 +1,48 @@
+import {
+  checkEntrance, EngineInputError, laserSetup, proposeProfile, type RuleProfile,
+} from '../../../shared/engine';
+import { parseInput } from '../../../shared/engine/errors';
+import { AppError } from '../../lib/errors';
+import { gradeCheckInputsSchema, type GradeCheckInputs, type GradeCheckResults } from './grade-check-inputs';
+
+/** Engine complaints name fields inside one part of the inputs; the API names them from the body's root. */
+function asBadRequest(error: unknown, prefix: string): never {
+  if (!(error instanceof EngineInputError)) throw error;
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = [prefix, issue.field].filter(Boolean).join('.');
+    fields[key] ??= issue.message;
+  }
+  const names = Object.keys(fields).join(', ');
+  throw new AppError(400, 'invalid_input', `The survey cannot be checked as entered: ${names}.`, fields);
+}
+
+function attempt<T>(prefix: string, run: () => T): T {
+  try {
+    return run();
+  } catch (error) {
+    asBadRequest(error, prefix);
+  }
+}
+
+/** Validates raw inputs with the engine's parser, which reports the profile form the user meant, not a vague union. */
+export function parseGradeCheckInputs(raw: unknown): GradeCheckInputs {
+  return attempt('inputs', () => parseInput(gradeCheckInputsSchema, raw));
+}
+
+/**
+ * The record of a check: the engine run on the server from stored inputs and one rule profile version.
+ * Pure, so running it again on the same inputs and profile gives the same results.
+ */
+export function runGradeCheck(inputs: GradeCheckInputs, profile: RuleProfile): GradeCheckResults {
+  const { road: _road, laser, design, ...check } = inputs;
+  const report = attempt('inputs', () => checkEntrance(check, profile));
+  const results: GradeCheckResults = { report };
+  if (laser) results.laser = attempt('inputs.laser', () => laserSetup(laser));
+  if (design) {
+    const { applied, haul: _haul, ...propose } = design;
+    results.proposal = attempt('inputs.design', () => proposeProfile(propose, profile));
+    if (applied) results.surveyed = attempt('inputs.design.existing', () => checkEntrance({ ...check, profile: design.existing }, profile));
+  }
+  return results;
+}

@@ -1,0 +1,68 @@
+import PDFDocument from 'pdfkit';
+import SVGtoPDF from 'svg-to-pdfkit';
+import { formatStation, type RuleProfile } from '../../../shared/engine';
+import { profileChartSvg } from '../../../shared/charts/profile-chart';
+import { chartInputFor } from '../../../shared/charts/chart-input';
+import type { GradeCheck } from '../grade-checks/grade-checks.service';
+import { chartFont, registerReportFonts, reportFonts } from './pdf-fonts';
+import { drawTable, heading, paragraph } from './pdf-table';
+import { designSections } from './report-design';
+import { findingCells, profileValueRows, reportCautions } from './report-words';
+
+export interface ReportData {
+  request: { reference: string; applicantName: string; siteAddress: string; roadName: string };
+  check: GradeCheck;
+  profile: RuleProfile;
+  version: { version: number; publishedAt: Date | null };
+  jurisdiction: { name: string; authority: string };
+}
+
+const dateText = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : '-');
+
+/** The grade check as a PDF the owner, the crew and the road authority can read; built from the stored record only. */
+export function buildGradeCheckReport(data: ReportData): Promise<Buffer> {
+  const { check, profile } = data;
+  const doc = new PDFDocument({ size: 'LETTER', margin: 48, info: { Title: `Grade check ${check.number} - ${data.request.reference}`, Author: 'Gradepass' } });
+  const chunks: Buffer[] = [];
+  doc.on('data', (c: Buffer) => chunks.push(c));
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on('end', () => resolve(Buffer.concat(chunks)));
+    doc.on('error', reject);
+  });
+  registerReportFonts(doc);
+
+  doc.font(reportFonts.bold.name).fontSize(18).fillColor('#0e2a1f').text(`Grade check ${check.number}`);
+  doc.font(reportFonts.body.name).fontSize(10).fillColor('#1c1f1d')
+    .text(`Request ${data.request.reference} · ${data.request.applicantName} · ${data.request.siteAddress} on ${data.request.roadName}`);
+  doc.text(`Checked ${dateText(check.createdAt)} against ${data.jurisdiction.name} (${data.jurisdiction.authority}), rule profile version ${data.version.version}, published ${dateText(data.version.publishedAt)}. Engine ${check.engineVersion}.`);
+  doc.moveDown(0.6);
+
+  const { report } = check.results;
+  heading(doc, report.passes ? 'Result: meets the rules checked' : 'Result: does not yet meet the rules');
+  paragraph(doc, check.summary);
+  paragraph(doc, report.summary.text, { italic: true });
+
+  const width = doc.page.width - doc.page.margins.left - doc.page.margins.right;
+  const svg = profileChartSvg({ ...chartInputFor(check.inputs, check.results, profile), width: 760, height: 340, fontFamily: 'Merriweather' });
+  const chartHeight = (width * 340) / 760;
+  if (doc.y + chartHeight > doc.page.height - doc.page.margins.bottom) doc.addPage();
+  SVGtoPDF(doc, svg, doc.page.margins.left, doc.y, { width, height: chartHeight, assumePt: true, fontCallback: chartFont });
+  doc.y += chartHeight + 8;
+
+  heading(doc, 'Findings');
+  const findings = report.findings;
+  drawTable(doc, [
+    { title: 'Rule', width: 190 }, { title: 'Station', width: 50 }, { title: 'Measured', width: 65, align: 'right' },
+    { title: 'Limit', width: 65, align: 'right' }, { title: 'Room to spare', width: 65, align: 'right' }, { title: 'Result', width: 81 },
+  ], findings.map((f) => findingCells(f, formatStation)), { highlight: (i) => findings[i].status === 'fail' });
+
+  designSections(doc, check);
+
+  heading(doc, `Rule profile: ${data.jurisdiction.name}, version ${data.version.version}`);
+  drawTable(doc, [{ title: 'Value', width: 170 }, { title: 'Setting', width: 80 }, { title: 'Source', width: 266 }], profileValueRows(profile));
+
+  heading(doc, 'Cautions');
+  for (const caution of reportCautions) paragraph(doc, `• ${caution}`);
+  doc.end();
+  return done;
+}

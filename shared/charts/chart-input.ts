@@ -1,0 +1,38 @@
+import type { EntranceReport, ProposedProfile, RuleProfile } from '../engine';
+import type { ProfileChartInput } from './profile-chart';
+
+export interface ChartSource {
+  roadEdgeStationFt?: number;
+  design?: { applied: boolean };
+}
+
+export interface ChartResults {
+  report: EntranceReport;
+  proposal?: ProposedProfile;
+  surveyed?: EntranceReport;
+}
+
+/**
+ * The chart for a check, live or saved: when a proposal was applied the ground is the survey and the design is the
+ * checked profile; otherwise the checked profile is the ground and a feasible proposal is drawn over it to compare.
+ */
+export function chartInputFor(inputs: ChartSource, results: ChartResults, profile: RuleProfile): ProfileChartInput {
+  const { report, proposal, surveyed } = results;
+  const applied = Boolean(inputs.design?.applied && surveyed);
+  const ground = applied && surveyed ? surveyed.profile.points : report.profile.points;
+  const design = applied ? report.profile.points : proposal?.feasible ? proposal.profile : undefined;
+  const scrape = report.scrape;
+  const scrapePoints = scrape.positionsChecked > 0 && scrape.minClearanceIn < profile.designVehicle.clearanceIn
+    ? [{ stationFt: scrape.atStationFt, label: scrape.passes ? `${scrape.minClearanceIn.toFixed(1)} in clear` : 'Scrapes' }]
+    : [];
+  return {
+    ground,
+    design,
+    checked: applied ? 'design' : 'ground',
+    roadEdgeStationFt: inputs.roadEdgeStationFt ?? report.profile.points[0].stationFt,
+    landing: profile.landing,
+    maxGradePercent: profile.maxGradePercent,
+    failingStationsFt: report.findings.filter((f) => f.status === 'fail' && f.stationFt !== undefined).map((f) => f.stationFt as number),
+    scrapePoints,
+  };
+}
