@@ -9,6 +9,7 @@ import { messagesRouter } from './messages/messages.routes';
 import { photosRouter } from './photos/photos.routes';
 import { requestsRouter } from './requests/requests.routes';
 import { ruleProfilesRouter } from './rule-profiles/rule-profiles.routes';
+import { queueRouter } from './queue/queue.routes';
 import { transitionsRouter } from './transitions/transitions.routes';
 import { usersRouter } from './users/users.routes';
 
@@ -22,6 +23,7 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(messagesRouter(ctx));
   app.use(transitionsRouter(ctx));
   app.use(emailsRouter(ctx));
+  app.use(queueRouter(ctx));
   app.use(ruleProfilesRouter(ctx));
   app.use(gradeChecksRouter(ctx));
   app.use(documentsRouter(ctx));

@@ -1,0 +1,58 @@
+import { z } from 'zod';
+import { requestStatusSchema } from '../../../shared/workflow/statuses';
+
+export const queueSorts = ['waiting', 'reference', 'applicant', 'road', 'created'] as const;
+export type QueueSort = (typeof queueSorts)[number];
+
+const csv = <T extends z.ZodType>(item: T, what: string) => z.string().max(400).optional().transform((value, ctx) => {
+  if (!value) return undefined;
+  const parsed: z.infer<T>[] = [];
+  for (const part of value.split(',').map((p) => p.trim()).filter(Boolean)) {
+    const result = item.safeParse(part);
+    if (!result.success) ctx.addIssue({ code: 'custom', message: `"${part}" is not a known ${what}` });
+    else parsed.push(result.data);
+  }
+  return parsed.length ? parsed : undefined;
+});
+
+export const queueQuerySchema = z.object({
+  status: csv(requestStatusSchema, 'status'),
+  /** A jurisdiction id, or "none" for requests not yet matched to one. */
+  jurisdiction: z.union([z.uuid(), z.literal('none')], { error: 'must be a jurisdiction id or "none"' }).optional(),
+  /** A person's id, "me", or "none" for unassigned requests. */
+  assignee: z.union([z.uuid(), z.literal('me'), z.literal('none')], { error: 'must be a person id, "me" or "none"' }).optional(),
+  waiting: z.enum(['true', 'false'], { error: 'must be true or false' }).optional().transform((v) => v === 'true'),
+  q: z.string().trim().max(120, 'must be at most 120 characters').optional(),
+  sort: z.enum(queueSorts, { error: `must be one of: ${queueSorts.join(', ')}` }).default('waiting'),
+  dir: z.enum(['asc', 'desc'], { error: 'must be asc or desc' }).default('asc'),
+  cursor: z.string().max(400).optional(),
+  limit: z.coerce.number('must be a number').int('must be a whole number').min(1, 'must be at least 1').max(100, 'must be at most 100').default(50),
+});
+export type QueueQuery = z.infer<typeof queueQuerySchema>;
+
+/**
+ * Turns what someone typed into a prefix query over the search column. Only letters and digits survive, so the
+ * text can never be read as query syntax; digits also match the signed numbers the parser makes of "GP-2026-00042".
+ */
+export function searchQuery(text: string): string | null {
+  const words = text.toLowerCase().split(/[^\p{L}\p{N}]+/u).filter(Boolean).slice(0, 8);
+  if (words.length === 0) return null;
+  return words.map((w) => (/^\d+$/.test(w) ? `('${w}':* | '-${w}':*)` : `'${w}':*`)).join(' & ');
+}
+
+/** The position after the last row of a page: the sort value and the id that breaks ties. */
+export function encodeQueueCursor(value: string, id: string) {
+  return Buffer.from(JSON.stringify([value, id])).toString('base64url');
+}
+
+export function decodeQueueCursor(cursor: string): { value: string; id: string } | null {
+  try {
+    const parsed: unknown = JSON.parse(Buffer.from(cursor, 'base64url').toString());
+    if (!Array.isArray(parsed) || parsed.length !== 2) return null;
+    const [value, id] = parsed as unknown[];
+    if (typeof value !== 'string' || typeof id !== 'string' || !z.uuid().safeParse(id).success) return null;
+    return { value, id };
+  } catch {
+    return null;
+  }
+}

@@ -1,0 +1,99 @@
+import { and, asc, desc, eq, inArray, isNull, ne, sql, type AnyColumn, type SQL } from 'drizzle-orm';
+import { alias } from 'drizzle-orm/pg-core';
+import { statusText, waitingOnOffice, type RequestStatus } from '../../../shared/workflow/statuses';
+import { allowedTransitions } from '../../../shared/workflow/transitions';
+import type { SessionUser } from '../../auth/session-user';
+import type { DbOrTx } from '../../db/client';
+import { jurisdictions, requests, users } from '../../db/schema';
+import { badRequest } from '../../lib/errors';
+import { decodeQueueCursor, encodeQueueCursor, searchQuery, type QueueQuery, type QueueSort } from './queue-query';
+
+const assignee = alias(users, 'assignee');
+
+/** Each sort is a column with an index behind it; `cast` reads a cursor value back in the column's own type. */
+const sortColumns: Record<QueueSort, { column: AnyColumn; cast: string }> = {
+  waiting: { column: requests.statusChangedAt, cast: 'timestamptz' },
+  reference: { column: requests.reference, cast: 'text' },
+  applicant: { column: requests.applicantName, cast: 'text' },
+  road: { column: requests.roadName, cast: 'text' },
+  created: { column: requests.createdAt, cast: 'timestamptz' },
+};
+
+const waitingElsewhere: Partial<Record<RequestStatus, string>> = {
+  draft: 'The property owner is still filling it in',
+  needs_details: 'Waiting on the property owner’s answer',
+  permit_filed: 'Waiting on the road authority',
+  released: 'Waiting for a crew to take it',
+  crew_assigned: 'With the crew',
+  under_construction: 'With the crew',
+};
+
+/** What the office does next, from the same table the server enforces. */
+export function nextOfficeAction(status: RequestStatus): string {
+  const moves = allowedTransitions(status, 'staff').filter((t) => t.action !== 'decline').map((t) => t.label);
+  if (moves.length > 0) return moves.join(' or ');
+  return waitingElsewhere[status] ?? 'Nothing: finished';
+}
+
+function filtersFor(user: SessionUser, query: QueueQuery): SQL[] {
+  const where: SQL[] = [ne(requests.status, 'draft')];
+  if (query.status) where.push(inArray(requests.status, query.status));
+  if (query.waiting) where.push(inArray(requests.status, [...waitingOnOffice]));
+  if (query.jurisdiction === 'none') where.push(isNull(requests.jurisdictionId));
+  else if (query.jurisdiction) where.push(eq(requests.jurisdictionId, query.jurisdiction));
+  if (query.assignee === 'none') where.push(isNull(requests.assigneeId));
+  else if (query.assignee) where.push(eq(requests.assigneeId, query.assignee === 'me' ? user.id : query.assignee));
+  const text = query.q ? searchQuery(query.q) : null;
+  if (text) where.push(sql`${requests.searchVector} @@ to_tsquery('simple', ${text})`);
+  return where;
+}
+
+/**
+ * One page of the office queue in a single query (assignee and jurisdiction joined, not fetched per row), with
+ * keyset paging so page 200 costs what page 1 does. The total is counted only up to a cap, for the same reason.
+ */
+export async function listQueue(db: DbOrTx, user: SessionUser, query: QueueQuery) {
+  const where = filtersFor(user, query);
+  const { column, cast } = sortColumns[query.sort];
+  const order = query.dir === 'asc' ? asc : desc;
+  const page = [...where];
+  if (query.cursor) {
+    const cursor = decodeQueueCursor(query.cursor);
+    if (!cursor) throw badRequest('The page position is not one this list gave out.', { cursor: 'start again from the first page' });
+    const cmp = query.dir === 'asc' ? sql.raw('>') : sql.raw('<');
+    page.push(sql`(${column}, ${requests.id}) ${cmp} (${cursor.value}::${sql.raw(cast)}, ${cursor.id}::uuid)`);
+  }
+  const rows = await db.select({
+    id: requests.id, reference: requests.reference, status: requests.status, version: requests.version,
+    applicantName: requests.applicantName, siteAddress: requests.siteAddress, roadName: requests.roadName,
+    statusChangedAt: requests.statusChangedAt, submittedAt: requests.submittedAt, visitAt: requests.visitAt,
+    jurisdictionId: jurisdictions.id, jurisdictionName: jurisdictions.name,
+    assigneeId: assignee.id, assigneeName: assignee.name,
+    sortKey: sql<string>`${column}::text`,
+  }).from(requests)
+    .leftJoin(jurisdictions, eq(jurisdictions.id, requests.jurisdictionId))
+    .leftJoin(assignee, eq(assignee.id, requests.assigneeId))
+    .where(and(...page))
+    .orderBy(order(column), order(requests.id))
+    .limit(query.limit + 1);
+
+  const cap = 1000;
+  const [{ n }] = await db.select({ n: sql<number>`count(*)::int` })
+    .from(sql`(${db.select({ one: sql`1` }).from(requests).where(and(...where)).limit(cap + 1)}) as capped`);
+  const more = rows.length > query.limit;
+  const items = more ? rows.slice(0, query.limit) : rows;
+  const last = items.at(-1);
+  return {
+    requests: items.map(({ sortKey: _key, jurisdictionId, jurisdictionName, assigneeId, assigneeName, ...row }) => ({
+      ...row,
+      statusLabel: statusText[row.status].label,
+      waitingOnUs: waitingOnOffice.includes(row.status),
+      nextAction: nextOfficeAction(row.status),
+      jurisdiction: jurisdictionId ? { id: jurisdictionId, name: jurisdictionName ?? '' } : null,
+      assignee: assigneeId ? { id: assigneeId, name: assigneeName ?? '' } : null,
+    })),
+    nextCursor: more && last ? encodeQueueCursor(last.sortKey, last.id) : null,
+    total: Math.min(n, cap),
+    totalIsCapped: n > cap,
+  };
+}
