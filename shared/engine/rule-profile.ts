@@ -58,9 +58,10 @@ const geometryRulesSchema = z.object({
   minDistanceToPropertyLineFt: nonNegative(1_000).optional(),
 });
 
+// No allowance unless the road authority states one: a default tolerance would be a number nobody published.
 const asBuiltRulesSchema = z.object({
-  gradeTolerancePercent: nonNegative(10).default(0.5),
-  elevationToleranceFt: nonNegative(2).default(0.1),
+  gradeTolerancePercent: nonNegative(10).default(0),
+  elevationToleranceFt: nonNegative(2).default(0),
 });
 
 /**
@@ -82,7 +83,7 @@ export const ruleProfileSchema = z.object({
   culvert: culvertRulesSchema.default({ lengthIncrementFt: 2 }),
   sight: sightRulesSchema.default({ basis: 'intersection', vehicle: 'passenger' }),
   geometry: geometryRulesSchema.default({}),
-  asBuilt: asBuiltRulesSchema.default({ gradeTolerancePercent: 0.5, elevationToleranceFt: 0.1 }),
+  asBuilt: asBuiltRulesSchema.default({ gradeTolerancePercent: 0, elevationToleranceFt: 0 }),
   sources: z.record(z.string(), z.string().max(1_000)).default({}),
 });
 
@@ -95,7 +96,7 @@ const COMMON_PRACTICE = 'common practice (no source)';
  * A starting point for a rural road authority that publishes no numbers of its own: a 4% landing for the
  * first 20 ft and 17% beyond it. Both are common practice with no published source, and labelled so.
  * The grade-change limit of 13% is 17 - 4, so the landing may break straight into the steepest grade; the
- * scrape check then decides whether a car clears that break. As-built tolerances are the engine's defaults.
+ * scrape check then decides whether a car clears that break. No as-built tolerance is assumed.
  */
 export const commonRuralTemplate: RuleProfile = {
   id: 'common-rural-template',
@@ -109,13 +110,15 @@ export const commonRuralTemplate: RuleProfile = {
   culvert: { lengthIncrementFt: 2 },
   sight: { basis: 'intersection', vehicle: 'passenger' },
   geometry: {},
-  asBuilt: { gradeTolerancePercent: 0.5, elevationToleranceFt: 0.1 },
+  asBuilt: { gradeTolerancePercent: 0, elevationToleranceFt: 0 },
   sources: {
     'landing.lengthFt': COMMON_PRACTICE,
     'landing.minGradePercent': COMMON_PRACTICE,
     'landing.maxGradePercent': COMMON_PRACTICE,
     maxGradePercent: COMMON_PRACTICE,
     maxGradeChangePercent: '17 - 4: lets the landing break straight into the maximum grade; the scrape check governs',
+    'culvert.lengthIncrementFt': `${COMMON_PRACTICE}: pipe is sold in 2 ft steps`,
+    'asBuilt.gradeTolerancePercent': 'none assumed; enter the road authority\'s tolerance',
     designVehicle: 'Passenger car: wheelbase and overhangs from memory; 5 in clearance after Eck and Kang, TRR 1356',
   },
 };

@@ -29,7 +29,13 @@ describe('as-built reading classification', () => {
 });
 
 describe('as-built check along the centreline', () => {
+  // Tolerances here are test values an admin might enter, not from any published code.
   const rules = ruleProfile({ asBuilt: { gradeTolerancePercent: 0.5, elevationToleranceFt: 0.1 } });
+
+  it('with no tolerance in the rule profile, anything past the limit fails', () => {
+    const r = checkAsBuilt({ ruleProfile: commonRuralTemplate, readings: [{ stationFt: 40, gradePercent: 17.01 }] });
+    expect(r.readings[0].status).toBe('fail');
+  });
 
   it('checks digital-level grades against the landing and the maximum by station', () => {
     const r = checkAsBuilt({
@@ -50,7 +56,7 @@ describe('as-built check along the centreline', () => {
 
   it('turns elevation shots into grades and holds them to the design elevation tolerance', () => {
     const r = checkAsBuilt({
-      ruleProfile: commonRuralTemplate,
+      ruleProfile: rules,
       readings: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 100.8 }, { stationFt: 40, elevationFt: 104.2 }],
       design: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 100.8 }, { stationFt: 40, elevationFt: 104.1 }],
     });

@@ -141,6 +141,11 @@ describe('culvert in the check', () => {
     expect(findingOf(run({ outletInvertFt: 95.6 }), 'culvert.slope').status).toBe('fail');
   });
 
+  it('refuses inverts that make an impossibly steep pipe, and names nested fields from the culvert', () => {
+    expect(() => run({ outletInvertFt: 70 })).toThrow(/culvert\.outletInvertFt/);
+    expect(() => run({ drainage: { runoffC: 0.3, intensityInPerHr: 4, areaAcres: 250 } })).toThrow(/culvert\.drainage\.areaAcres/);
+  });
+
   it('capacity and headwater are checked once a design flow is given, here by the rational method', () => {
     const f = run({ drainage: { runoffC: 0.3, intensityInPerHr: 4, areaAcres: 5, returnPeriodYears: 25 } });
     expect(findingOf(f, 'culvert.capacity').limit).toBeCloseTo(0.33 * 4 * 5, 9);
@@ -183,6 +188,7 @@ describe('sight distance in the check (AASHTO ISD table, Highway Engineering Han
 });
 
 describe('geometry in the check', () => {
+  // The limits are test values, not taken from any code.
   it('checks width, flare radius and distances against the profile, and skips what it does not set', () => {
     const rules = ruleProfile({ geometry: { minWidthFt: 10, maxWidthFt: 24, minFlareRadiusFt: 10, minDistanceToPropertyLineFt: 5 } });
     const f = checkEntrance({ profile: profileFromRuns([[20, 0], [20, 5]]), geometry: { widthFt: 26, flareRadiusFt: 10, distanceToPropertyLineFt: 4.99, distanceToIntersectionFt: 300 } }, rules).findings;
