@@ -91,7 +91,7 @@ function slopeFinding(c: Culvert, summary: CulvertSummary): Finding {
   }
   summary.slopeFtPerFt = slope;
   // A pipe that is flat or falls toward its inlet will not drain the ditch, so zero fails here too.
-  if (slope <= 0) return { ...IDS.slope, measured: slope, limit: 0, margin: slope, status: 'fail', note: 'the outlet is not below the inlet' };
+  if (slope <= 0) return { ...IDS.slope, measured: slope, limit: 0, margin: slope, limitKind: 'at-least', status: 'fail', note: 'the outlet is not below the inlet' };
   return atLeast(IDS.slope, slope, 0);
 }
 

@@ -14,6 +14,8 @@ export interface Finding {
   margin: number | null;
   unit: string;
   status: FindingStatus;
+  /** Which way the limit points: the measured value may be at most, or must be at least, the limit. */
+  limitKind?: 'at-most' | 'at-least';
   stationFt?: number;
   note?: string;
   ruleProfileId?: string;
@@ -30,12 +32,12 @@ interface FindingBase {
 
 export function atMost(base: FindingBase, measured: number, limit: number): Finding {
   const margin = snap(limit - measured);
-  return { ...base, measured, limit, margin, status: margin >= 0 ? 'pass' : 'fail' };
+  return { ...base, measured, limit, margin, limitKind: 'at-most', status: margin >= 0 ? 'pass' : 'fail' };
 }
 
 export function atLeast(base: FindingBase, measured: number, limit: number): Finding {
   const margin = snap(measured - limit);
-  return { ...base, measured, limit, margin, status: margin >= 0 ? 'pass' : 'fail' };
+  return { ...base, measured, limit, margin, limitKind: 'at-least', status: margin >= 0 ? 'pass' : 'fail' };
 }
 
 export function notChecked(base: FindingBase, why: string): Finding {

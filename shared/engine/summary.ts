@@ -14,7 +14,11 @@ const number = (v: number, unit: string) => `${Math.round(v * 100) / 100}${unit 
 function failureWords(f: Finding): string {
   const where = f.stationFt === undefined ? '' : ` at station ${formatStation(f.stationFt)}`;
   if (f.measured === null || f.limit === null) return `${f.label.toLowerCase()}${where}`;
-  return `${f.label.toLowerCase()} is ${number(f.measured, f.unit)}${where} where the limit is ${number(f.limit, f.unit)}`;
+  if (f.ruleId === 'scrape.clearance') {
+    return `a car would scrape${where} (it is ${number(-f.measured, f.unit)} short of clearing)`;
+  }
+  const bound = f.limitKind === 'at-least' ? `at least ${number(f.limit, f.unit)} is needed` : `at most ${number(f.limit, f.unit)} is allowed`;
+  return `${f.label.toLowerCase()} is ${number(f.measured, f.unit)}${where} where ${bound}`;
 }
 
 /** A sentence a homeowner can read, plus the counts a screen needs. */

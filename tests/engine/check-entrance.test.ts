@@ -90,12 +90,18 @@ describe('the report', () => {
     expect(bad.passes).toBe(false);
     expect(bad.summary.text).toContain('does not yet meet 1 of the');
     expect(bad.summary.text).toContain('Example County (version 3)');
-    expect(bad.summary.text).toContain('landing grade (rising) is 6% at station 0+00 where the limit is 4%');
+    expect(bad.summary.text).toContain('landing grade (rising) is 6% at station 0+00 where at most 4% is allowed');
     const s = bad.summary;
     expect(s.pass + s.fail + s.advisory + s.notChecked).toBe(bad.findings.length);
     const good = checkEntrance({ profile: profileFromRuns([[20, 2], [40, 6]]), vehicle: highCar }, rules);
     expect(good.passes).toBe(true);
     expect(good.summary.text).toMatch(/^This entrance meets all \d+ rules of Example County/);
+  });
+
+  it('says a scrape in words rather than as a negative clearance', () => {
+    const r = checkEntrance({ profile: profileFromRuns([[20, 0], [40, 12]]) }, commonRuralTemplate);
+    expect(findingOf(r.findings, 'scrape.clearance').status).toBe('fail');
+    expect(r.summary.text).toMatch(/a car would scrape at station 0\+1\d(\.\d+)? \(it is [\d.]+ in short of clearing\)/);
   });
 
   it('re-running the same check gives the same result', () => {
