@@ -33,6 +33,10 @@ describe('stopping sight distance (AASHTO, Highway Engineering Handbook Table 2.
     expect(up.designFt % 5).toBe(0);
   });
 
+  it('refuses a downgrade steeper than the braking rate can hold instead of returning a negative distance', () => {
+    expect(() => stoppingSightDistance({ speedMph: 40, gradePercent: -15, decelFtPerS2: 3 })).toThrow(/gradePercent/);
+  });
+
   it('refuses a speed outside the accepted range with the typed error', () => {
     expect(() => stoppingSightDistance({ speedMph: Number.NaN })).toThrow(EngineInputError);
     try {
