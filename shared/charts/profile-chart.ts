@@ -45,9 +45,11 @@ export function profileChartSvg(input: ProfileChartInput): string {
   const x = (s: number) => pad.left + ((s - minS) / Math.max(maxS - minS, 1e-6)) * (width - pad.left - pad.right);
   const y = (e: number) => pad.top + ((maxE - e) / (maxE - minE)) * (height - pad.top - pad.bottom);
   const path = (pts: readonly ChartPoint[]) => pts.map((p, i) => `${i ? 'L' : 'M'}${n(x(p.stationFt))} ${n(y(p.elevationFt))}`).join(' ');
-  const text = (tx: number, ty: number, body: string, extra = '') =>
-    `<text x="${n(tx)}" y="${n(ty)}" font-family="${esc(font)}" font-size="10" fill="${chartColors.text}" ${extra}>${esc(body)}</text>`;
-  const parts: string[] = [];
+  const text = (tx: number, ty: number, body: string, extra = '', fill = chartColors.text) =>
+    `<text x="${n(tx)}" y="${n(ty)}" font-family="${esc(font)}" font-size="10" fill="${fill}" ${extra}>${esc(body)}</text>`;
+  const parts: string[] = [
+    `<defs><clipPath id="plot-area"><rect x="${pad.left}" y="${pad.top}" width="${width - pad.left - pad.right}" height="${height - pad.top - pad.bottom}"/></clipPath></defs>`,
+  ];
 
   const landingEnd = input.roadEdgeStationFt + input.landing.lengthFt;
   parts.push(`<rect x="${n(x(input.roadEdgeStationFt))}" y="${pad.top}" width="${n(Math.max(0, x(Math.min(landingEnd, maxS)) - x(input.roadEdgeStationFt)))}" height="${height - pad.top - pad.bottom}" fill="${chartColors.landing}"/>`);
@@ -79,7 +81,7 @@ export function profileChartSvg(input: ProfileChartInput): string {
     const atEnd = start.elevationFt + (g / 100) * (end - start.stationFt);
     const tail = g >= 0 ? input.maxGradePercent : -input.maxGradePercent;
     const far = atEnd + (tail / 100) * (maxS - end);
-    parts.push(`<path d="M${n(x(start.stationFt))} ${n(y(start.elevationFt))} L${n(x(end))} ${n(y(atEnd))} L${n(x(maxS))} ${n(y(far))}" fill="none" stroke="${chartColors.limit}" stroke-width="1" stroke-dasharray="2 3"/>`);
+    parts.push(`<path d="M${n(x(start.stationFt))} ${n(y(start.elevationFt))} L${n(x(end))} ${n(y(atEnd))} L${n(x(maxS))} ${n(y(far))}" fill="none" stroke="${chartColors.limit}" stroke-width="1" stroke-dasharray="2 3" clip-path="url(#plot-area)"/>`);
   }
 
   parts.push(`<path d="${path(input.ground)}" fill="none" stroke="${chartColors.ground}" stroke-width="1.5" ${input.design ? 'stroke-dasharray="5 3"' : ''}/>`);
@@ -95,7 +97,7 @@ export function profileChartSvg(input: ProfileChartInput): string {
     if (x(b.stationFt) - x(a.stationFt) > 26) {
       const mx = (x(a.stationFt) + x(b.stationFt)) / 2;
       const my = (y(a.elevationFt) + y(b.elevationFt)) / 2 - 7;
-      parts.push(text(mx, my, `${grade.toFixed(1)}%`, `text-anchor="middle" font-weight="${fails ? 'bold' : 'normal'}"${fails ? ` fill="${chartColors.fail}"` : ''}`));
+      parts.push(text(mx, my, `${grade.toFixed(1)}%`, `text-anchor="middle" font-weight="${fails ? 'bold' : 'normal'}"`, fails ? chartColors.fail : chartColors.text));
     }
   });
 

@@ -43,10 +43,11 @@ export function buildGradeCheckReport(data: ReportData): Promise<Buffer> {
   paragraph(doc, report.summary.text, { italic: true });
 
   const width = doc.page.width - doc.page.margins.left - doc.page.margins.right;
-  const svg = profileChartSvg({ ...chartInputFor(check.inputs, check.results, profile), width: 760, height: 340, fontFamily: 'Merriweather' });
-  const chartHeight = (width * 340) / 760;
+  // Drawn at the page's own size in points, so the labels print at the size they were set.
+  const chartHeight = Math.round(width * 0.45);
+  const svg = profileChartSvg({ ...chartInputFor(check.inputs, check.results, profile), width, height: chartHeight, fontFamily: 'Merriweather' });
   if (doc.y + chartHeight > doc.page.height - doc.page.margins.bottom) doc.addPage();
-  SVGtoPDF(doc, svg, doc.page.margins.left, doc.y, { width, height: chartHeight, assumePt: true, fontCallback: chartFont });
+  SVGtoPDF(doc, svg, doc.page.margins.left, doc.y, { assumePt: true, fontCallback: chartFont });
   doc.y += chartHeight + 8;
 
   heading(doc, 'Findings');
