@@ -1,0 +1,10 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { FieldSheetView } from '@shared/crew/crew-views';
+import { api } from '@/lib/api-client';
+
+export const getFieldSheet = (id: string) => api.get<FieldSheetView>(`/api/crew/jobs/${id}/field-sheet`);
+
+export const getFieldSheetQueryOptions = (id: string) =>
+  queryOptions({ queryKey: ['crew', 'field-sheet', id], queryFn: () => getFieldSheet(id) });
+
+export const useFieldSheet = (id: string) => useQuery(getFieldSheetQueryOptions(id));
