@@ -16,6 +16,8 @@ export function createAppRouter() {
         { path: paths.signIn.path, ...page(() => import('./routes/sign-in')) },
         { path: paths.applicant.requests.path, ...page(() => import('./routes/applicant/my-requests')) },
         { path: paths.office.queue.path, ...page(() => import('./routes/office/queue')) },
+        { path: paths.office.request.path, ...page(() => import('./routes/office/request')) },
+        { path: paths.office.emails.path, ...page(() => import('./routes/office/emails')) },
         { path: paths.office.users.path, ...page(() => import('./routes/office/users')) },
         { path: paths.crew.board.path, ...page(() => import('./routes/crew/board')) },
         { path: paths.crew.myJobs.path, ...page(() => import('./routes/crew/my-jobs')) },

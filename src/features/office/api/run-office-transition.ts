@@ -1,0 +1,34 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import { getOfficeRequestQueryOptions } from './get-office-request';
+import { allQueuesKey } from './get-queue';
+import { getRequestEventsQueryOptions } from './get-request-events';
+import { getRequestMessagesQueryOptions } from './get-request-messages';
+
+export interface TransitionInput {
+  action: string;
+  expectedVersion: number;
+  note?: string;
+  visitAt?: string;
+  permitReference?: string;
+  permitDecidedOn?: string;
+  permitConditions?: string;
+  permitExpiresOn?: string;
+}
+
+export const runOfficeTransition = (id: string, input: TransitionInput) =>
+  api.post<{ request: { id: string; status: string; version: number } }>(`/api/requests/${id}/transitions`, input);
+
+export function useRunOfficeTransition(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: TransitionInput) => runOfficeTransition(id, input),
+    // A 409 means someone else moved the request: refresh either way so the screen shows where it stands.
+    onSettled: () => Promise.all([
+      queryClient.invalidateQueries({ queryKey: getOfficeRequestQueryOptions(id).queryKey }),
+      queryClient.invalidateQueries({ queryKey: getRequestEventsQueryOptions(id).queryKey }),
+      queryClient.invalidateQueries({ queryKey: getRequestMessagesQueryOptions(id).queryKey }),
+      queryClient.invalidateQueries({ queryKey: allQueuesKey() }),
+    ]),
+  });
+}

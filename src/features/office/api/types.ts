@@ -1,0 +1,98 @@
+import type { ApplicationDraft } from '@shared/requests/application-schema';
+import type { RequestStatus, Role } from '@shared/workflow/statuses';
+
+export const queueSorts = ['waiting', 'reference', 'applicant', 'road', 'created'] as const;
+export type QueueSort = (typeof queueSorts)[number];
+
+/** The queue's view as the URL holds it; every field maps to one query parameter of GET /api/queue. */
+export interface QueueFilters {
+  status: RequestStatus[];
+  jurisdiction: string;
+  assignee: string;
+  waiting: boolean;
+  q: string;
+  sort: QueueSort;
+  dir: 'asc' | 'desc';
+  cursor: string;
+}
+
+export interface QueueRow {
+  id: string;
+  reference: string;
+  status: RequestStatus;
+  statusLabel: string;
+  version: number;
+  applicantName: string;
+  siteAddress: string;
+  roadName: string;
+  statusChangedAt: string;
+  submittedAt: string | null;
+  visitAt: string | null;
+  waitingOnUs: boolean;
+  nextAction: string;
+  jurisdiction: { id: string; name: string } | null;
+  assignee: { id: string; name: string } | null;
+}
+
+export interface QueuePage { requests: QueueRow[]; nextCursor: string | null; total: number; totalIsCapped: boolean }
+
+export interface OfficePerson { id: string; name: string; role: Role }
+export interface QueueOptions { jurisdictions: { id: string; name: string }[]; people: OfficePerson[] }
+
+/** A request as GET /api/requests/:id returns it to the office. */
+export interface OfficeRequest {
+  id: string;
+  reference: string;
+  status: RequestStatus;
+  statusLabel: string;
+  whatNext: string;
+  version: number;
+  application: ApplicationDraft;
+  applicantName: string;
+  siteAddress: string;
+  roadName: string;
+  visitAt: string | null;
+  permitReference: string | null;
+  permitDecidedOn: string | null;
+  permitConditions: string | null;
+  permitExpiresOn: string | null;
+  submittedAt: string | null;
+  statusChangedAt: string;
+  applicantId: string;
+  assigneeId: string | null;
+  crewId: string | null;
+  jurisdictionId: string | null;
+}
+
+export interface OfficeEvent {
+  id: number;
+  kind: string;
+  fromStatus: RequestStatus | null;
+  toStatus: RequestStatus | null;
+  note: string;
+  internal: boolean;
+  createdAt: string;
+  actorName: string | null;
+  actorRole: Role | null;
+}
+
+export interface OfficeMessage {
+  id: string;
+  body: string;
+  createdAt: string;
+  authorName: string;
+  authorRole: Role;
+  mine: boolean;
+  internal: boolean;
+}
+
+export interface OfficePhoto {
+  id: string;
+  fileName: string;
+  contentType: string;
+  caption: string;
+  gpsLat: number | null;
+  gpsLng: number | null;
+  createdAt: string;
+  url?: string;
+}
