@@ -37,6 +37,13 @@ export function FieldSheet({ id }: { id: string }) {
         <button type="button" onClick={() => window.print()} className="no-print min-h-12 rounded-md bg-pine-800 px-5 font-semibold text-white">Print this sheet</button>
       </header>
 
+      <section aria-label="Cautions" className="rounded border-4 border-tape p-3 print:border-2 print:p-1">
+        <h2 className="text-xl font-bold print:text-[10pt]">Before and while you dig</h2>
+        <ul className="list-disc space-y-1 pl-6 print:space-y-0">
+          {s.cautions.map((c) => <li key={c}>{c}</li>)}
+        </ul>
+      </section>
+
       <div className="grid gap-4 md:grid-cols-2 print:grid-cols-2 print:gap-2">
         <Section title="Site and access">
           <p>{s.access.whereText || 'No landmark given.'}{s.access.parcelNumber ? ` · parcel ${s.access.parcelNumber}` : ''}</p>
@@ -79,11 +86,6 @@ export function FieldSheet({ id }: { id: string }) {
         <Section title="Culvert"><SheetCulvert culvert={s.culvert} /></Section>
       </div>
 
-      <Section title="Before and while you dig" className="border-tape">
-        <ul className="list-disc space-y-1 pl-6 print:space-y-0">
-          {s.cautions.map((c) => <li key={c}>{c}</li>)}
-        </ul>
-      </Section>
     </article>
   );
 }

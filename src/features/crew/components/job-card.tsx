@@ -23,7 +23,7 @@ export function JobCard({ job, canTake, taking, onTake }: Props) {
       <p className="text-stone-700">On <strong>{job.roadName}</strong>{job.jurisdictionName ? ` · ${job.jurisdictionName}` : ''}</p>
       <dl className="mt-3 grid gap-x-6 gap-y-2 sm:grid-cols-2">
         <div><dt className="text-sm font-semibold text-stone-600">Homeowner wants it</dt><dd>{job.wanted.label}{job.wanted.wantedBy ? ` (by ${day(job.wanted.wantedBy)})` : ''}</dd></div>
-        <div><dt className="text-sm font-semibold text-stone-600">From the yard</dt><dd>{job.distanceMiles === null ? 'Distance not known' : `${job.distanceMiles} miles in a straight line`}</dd></div>
+        <div><dt className="text-sm font-semibold text-stone-600">From the yard</dt><dd>{job.distanceMiles === null ? 'Not known (needs the yard and the site position)' : `${job.distanceMiles} miles in a straight line`}</dd></div>
         <div><dt className="text-sm font-semibold text-stone-600">Permit</dt><dd>{job.permit.reference ?? 'No reference'}{job.permit.expiresOn ? `, expires ${day(job.permit.expiresOn)}` : ''}</dd></div>
         <div><dt className="text-sm font-semibold text-stone-600">Earthwork</dt><dd><EarthworkLine earthwork={job.earthwork} /></dd></div>
         {job.permit.conditions && <div className="sm:col-span-2"><dt className="text-sm font-semibold text-stone-600">Permit conditions</dt><dd>{job.permit.conditions}</dd></div>}

@@ -24,7 +24,7 @@ export function ProfileChart({ design, existing, landingLengthFt, roadEdgeFt = d
   const ticks = [y0, (y0 + y1) / 2, y1];
   return (
     <figure>
-      <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Design profile along the centreline, with the ground as surveyed" className="h-auto w-full">
+      <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label="Design profile along the centreline, with the ground as surveyed" className="h-auto w-full print:h-[1.4in]">
         {landingLengthFt !== null && (
           <rect x={sx(roadEdgeFt)} y={PAD.top} width={Math.max(0, sx(roadEdgeFt + landingLengthFt) - sx(roadEdgeFt))} height={H - PAD.top - PAD.bottom} fill="#f2b33d" opacity="0.25" />
         )}
@@ -43,7 +43,7 @@ export function ProfileChart({ design, existing, landingLengthFt, roadEdgeFt = d
           </g>
         ))}
       </svg>
-      <figcaption className="text-sm">
+      <figcaption className="text-sm print:text-[7pt]">
         Solid: design grade. {existing ? 'Dashed: ground as surveyed. ' : ''}{landingLengthFt !== null ? 'Shaded: the landing. ' : ''}Elevations in feet; stations below.
       </figcaption>
     </figure>

@@ -27,7 +27,7 @@ export function ScheduleForm({ job }: { job: MyJob }) {
       </Field>
       <Button type="submit" disabled={schedule.isPending} className="min-h-11">{job.scheduledFor ? 'Move to this day' : 'Plan this day'}</Button>
       <div className="sm:col-span-3">
-        {schedule.isSuccess && <Notice title="Day planned">The homeowner has been e-mailed: {day(schedule.data.scheduledFor)}.</Notice>}
+        {job.scheduledFor && <Notice title={`Planned for ${day(job.scheduledFor)}`}>The homeowner has been e-mailed the day; moving it sends another e-mail.</Notice>}
         {schedule.error && <ErrorNotice error={schedule.error} />}
       </div>
     </form>

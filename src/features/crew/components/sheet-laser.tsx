@@ -10,7 +10,7 @@ function Setup({ title, plane, span }: { title: string; plane: PlaneSetting; spa
     <div className="rounded border-2 border-stone-800 p-3 print:p-1.5">
       <h3 className="font-bold">{title} <span className="font-normal">({span})</span></h3>
       <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5">
-        <dt className="font-semibold">Along the road</dt><dd>{axis(plane.alongRoadPercent, 'rising to the right', 'falling to the right')} <span className="text-sm">(facing into the property)</span></dd>
+        <dt className="font-semibold">Along the road</dt><dd>{axis(plane.alongRoadPercent, 'rising to the right', 'falling to the right')} <span className="text-sm print:text-[7pt]">(facing into the property)</span></dd>
         <dt className="font-semibold">Along the driveway</dt><dd>{axis(plane.alongDrivewayPercent, 'rising away from the road', 'falling away from the road')}</dd>
         <dt className="font-semibold">Steepest</dt><dd>{pct(plane.steepestPercent)}, bearing {Math.round(plane.steepestBearingDeg)}°</dd>
         <dt className="font-semibold">Start</dt><dd>station {station(plane.originDistanceFt)}, design elevation {ft(plane.originElevationFt)}</dd>

@@ -1,0 +1,98 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { PDFParse } from 'pdf-parse';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { createDb } from '../../server/db/client';
+import { demoPeople } from '../../server/db/seed/demo-people';
+import { createReleasedJob } from '../factories/crew-jobs';
+import { ensurePerson } from '../factories/people';
+import { appUrl, launchBrowser, screenshotPath, signInAs } from '../setup/browser';
+
+/** The crew lead's side on its own: a job released straight into the running app's database, taken and built. */
+let session: Awaited<ReturnType<typeof launchBrowser>>;
+let db: ReturnType<typeof createDb>;
+let jobId: string;
+let address: string;
+beforeAll(async () => {
+  session = await launchBrowser();
+  db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), 2);
+  const applicant = await ensurePerson(db.db, demoPeople.find((p) => p.role === 'applicant')!);
+  const staff = await ensurePerson(db.db, demoPeople.find((p) => p.role === 'staff')!);
+  const job = await createReleasedJob(db.db, { applicantId: applicant.id, staffId: staff.id, siteLat: 44.1, siteLng: -72.6 });
+  jobId = job.id;
+  address = job.siteAddress;
+});
+afterAll(async () => {
+  await db?.pool.end();
+  await session?.close();
+});
+
+async function shot(page: Page, name: string) {
+  const file = screenshotPath(`journey-crew-${name}`);
+  mkdirSync(path.dirname(file), { recursive: true });
+  await page.screenshot({ path: file, fullPage: true });
+}
+
+const crewLead = demoPeople.filter((p) => p.role === 'crew')[0];
+
+describe('a crew lead takes, plans, builds and verifies a released job', () => {
+  it('works through the board, my jobs, the field sheet and the as-built screen', async () => {
+    const context = await session.browser.newContext({ viewport: { width: 412, height: 915 }, isMobile: true, hasTouch: true });
+    const page = await context.newPage();
+    await signInAs(page, crewLead.email);
+    await page.goto(appUrl('/crew/board'));
+    const card = page.getByRole('article').filter({ hasText: address }).filter({ has: page.getByText(/HT-ACC-/) }).last();
+    await card.waitFor();
+    await page.getByRole('button', { name: 'Nearest the yard first' }).click();
+    await shot(page, 'board');
+    await card.getByRole('button', { name: 'Take this job' }).click();
+    await page.waitForURL((u) => u.pathname === '/crew/my-jobs');
+
+    const mine = page.getByRole('article').filter({ hasText: address }).first();
+    const date = new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
+    await mine.getByLabel('Work day').fill(date);
+    await mine.getByRole('button', { name: 'Plan this day' }).click();
+    await page.getByText(/The homeowner has been e-mailed/).first().waitFor();
+    await shot(page, 'my-jobs-planned');
+    await page.getByRole('region', { name: 'Planned' }).getByRole('button', { name: 'Start work' }).first().click();
+    await page.getByRole('region', { name: 'Under way' }).waitFor();
+
+    await page.goto(appUrl(`/crew/jobs/${jobId}/field-sheet`));
+    await page.getByRole('heading', { name: /Field sheet/ }).waitFor();
+    expect(await page.getByText('rising away from the road').count()).toBeGreaterThan(0);
+    expect(await page.getByText(/buried utilities/).isVisible()).toBe(true);
+    await shot(page, 'field-sheet-phone');
+    await page.setViewportSize({ width: 1280, height: 900 });
+    await shot(page, 'field-sheet');
+    await page.emulateMedia({ media: 'print' });
+    const pdf = await page.pdf({ format: 'Letter', printBackground: true });
+    writeFileSync(screenshotPath('journey-crew-field-sheet-print').replace(/png$/, 'pdf'), pdf);
+    const parser = new PDFParse({ data: pdf });
+    const info = await parser.getInfo();
+    await parser.destroy();
+    expect(info.total).toBe(1);
+    await page.emulateMedia({ media: 'screen' });
+
+    await page.setViewportSize({ width: 412, height: 915 });
+    await page.goto(appUrl(`/crew/jobs/${jobId}/as-built`));
+    const stationBox = (n: number) => page.getByLabel(`Station ${n}`, { exact: true });
+    await stationBox(1).fill('0+05');
+    await page.getByLabel('Grade %').first().fill('4');
+    await page.getByText('PASS').first().waitFor();
+    await page.getByRole('button', { name: 'Add a reading' }).click();
+    await stationBox(2).fill('0+40');
+    await page.getByLabel('Grade %').nth(1).fill('15.51');
+    await page.getByText('FAIL').first().waitFor();
+    await page.getByLabel('Grade %').nth(1).fill('15.4');
+    await page.getByText(/CLOSE/).first().waitFor();
+    await shot(page, 'as-built-entry');
+    await page.getByRole('button', { name: 'Save this set' }).click();
+    await page.getByText('Set saved').waitFor();
+    await page.getByRole('button', { name: 'Mark built' }).click();
+    await page.waitForURL((u) => u.pathname === '/crew/my-jobs');
+    await page.getByRole('region', { name: 'Built, with the office' }).getByText(address).first().waitFor();
+    await shot(page, 'my-jobs-built');
+    await context.close();
+  });
+});
