@@ -1,17 +1,19 @@
 import { Link, useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { paths } from '@/config/paths';
+import { useMe } from '@/features/auth/api/get-me';
 import { AsBuiltPage } from '@/features/crew/components/as-built-page';
 
 export function Component() {
   const { id = '' } = useParams();
+  const crew = useMe().data?.role === 'crew';
   return (
     <RequireRole roles={['crew', 'staff', 'admin']}>
       <p className="mb-3 flex flex-wrap gap-4">
-        <Link to={paths.crew.myJobs.getHref()} className="font-semibold text-pine-800 underline">← My jobs</Link>
+        <Link to={crew ? paths.crew.myJobs.getHref() : paths.office.request.getHref(id)} className="font-semibold text-pine-800 underline">{crew ? '← My jobs' : '← The request'}</Link>
         <Link to={paths.crew.fieldSheet.getHref(id)} className="font-semibold text-pine-800 underline">Field sheet</Link>
       </p>
-      <AsBuiltPage id={id} />
+      <AsBuiltPage id={id} canEnter={crew} />
     </RequireRole>
   );
 }

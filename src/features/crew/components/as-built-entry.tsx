@@ -17,7 +17,7 @@ let nextKey = 1;
 const emptyRow = (kind: ReadingRow['kind'] = 'grade'): ReadingRow => ({ key: nextKey++, station: '', kind, value: '' });
 
 /** Readings as they are taken on site, each judged at once; the set is saved and judged again by the server. */
-export function AsBuiltEntry({ page }: { page: AsBuiltPageView }) {
+export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnter: boolean }) {
   const [rows, setRows] = useState<ReadingRow[]>(() => [emptyRow()]);
   const [note, setNote] = useState('');
   const save = useSaveAsBuilt();
@@ -26,7 +26,7 @@ export function AsBuiltEntry({ page }: { page: AsBuiltPageView }) {
   const whole = useMemo(() => checkWholeSet(checks, basis), [checks, basis]);
   const fields = save.error instanceof ApiError ? save.error.fields : {};
   const rules = page.ruleProfile;
-  const open = page.job.status === 'under_construction';
+  const open = canEnter && page.job.status === 'under_construction';
 
   const change = (key: number, c: Partial<ReadingRow>) => setRows((list) => list.map((r) => (r.key === key ? { ...r, ...c } : r)));
   const remove = (key: number) => setRows((list) => (list.length === 1 ? [emptyRow()] : list.filter((r) => r.key !== key)));
@@ -59,10 +59,10 @@ export function AsBuiltEntry({ page }: { page: AsBuiltPageView }) {
           </form>
         </Panel>
       ) : (
-        <Notice title="Readings are closed">Readings are entered while the job is being built; this one is not under way.</Notice>
+        <Notice title="Readings are closed">{canEnter ? 'Readings are entered while the job is being built; this one is not under way.' : 'The crew lead who has the job enters the readings.'}</Notice>
       )}
       <Panel title="Saved sets"><SavedSets sets={page.sets} /></Panel>
-      <Panel title="Finish the job"><MarkBuiltPanel page={page} /></Panel>
+      {canEnter && <Panel title="Finish the job"><MarkBuiltPanel page={page} /></Panel>}
     </div>
   );
 }
