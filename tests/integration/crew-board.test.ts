@@ -67,7 +67,7 @@ describe('taking, planning and handing back', () => {
     await crew.post(`/api/crew/jobs/${job.id}/schedule`).send({ date, note: 'Bringing the small excavator.' }).expect(200);
     const [row] = await t.ctx.db.select().from(jobs).where(eq(jobs.requestId, job.id));
     expect(row.scheduledFor).toBe(date);
-    const [event] = await t.ctx.db.select().from(requestEvents).where(and(eq(requestEvents.requestId, job.id), eq(requestEvents.kind, 'schedule')));
+    const [event] = await t.ctx.db.select().from(requestEvents).where(and(eq(requestEvents.requestId, job.id), eq(requestEvents.kind, 'work-day-planned')));
     const mail = await t.ctx.db.select().from(emails).where(and(eq(emails.requestId, job.id), eq(emails.template, 'crew.schedule')));
     const toHomeowner = mail.find((m) => m.toAddress === cast.applicant.email);
     expect(toHomeowner?.eventId).toBe(event.id);

@@ -39,7 +39,7 @@ export async function scheduleJob(ctx: TransitionContext, crew: SessionUser, req
     await tx.update(requests).set({ updatedAt: now }).where(eq(requests.id, row.id));
     const note = input.note ?? '';
     const [event] = await tx.insert(requestEvents).values({
-      requestId: row.id, actorId: crew.id, kind: 'schedule', note: `Work planned for ${dayInWords(input.date)}.${note ? ` ${note}` : ''}`,
+      requestId: row.id, actorId: crew.id, kind: 'work-day-planned', note: `Work planned for ${dayInWords(input.date)}.${note ? ` ${note}` : ''}`,
     }).returning({ id: requestEvents.id });
     const [applicant] = await tx.select({ email: users.email, name: users.name }).from(users).where(eq(users.id, row.applicantId));
     const emails = scheduleEmails({
