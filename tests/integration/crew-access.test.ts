@@ -101,4 +101,25 @@ describe('bad input gets 400 naming the field', () => {
     expect(yard.status).toBe(400);
     expect(Object.keys(yard.body.error.fields).sort()).toEqual(['label', 'lat', 'lng']);
   });
+
+  it('odd bodies on a job the crew holds are 400s naming the field, never 500s', async () => {
+    const job = await released();
+    const crew = cast.crew.agent;
+    await crew.post(`/api/crew/jobs/${job.id}/accept`).send({ expectedVersion: job.version }).expect(200);
+    const cases: [string, unknown, string][] = [
+      ['schedule', { date: '2027-02-30' }, 'date'],
+      ['schedule', { date: '2027-01-12', extra: 1 }, '(body)'],
+      ['schedule', [1, 2], '(body)'],
+      ['hand-back', { expectedVersion: 2, note: 'x'.repeat(2001) }, 'note'],
+      ['as-built', { readings: 'many' }, 'readings'],
+      ['as-built', { readings: [] }, 'readings'],
+      ['as-built', { readings: [{ stationFt: 1e308, gradePercent: 2 }] }, 'readings.0.stationFt'],
+      ['mark-built', { expectedVersion: 0 }, 'expectedVersion'],
+    ];
+    for (const [action, body, field] of cases) {
+      const res = await crew.post(`/api/crew/jobs/${job.id}/${action}`).send(body as object);
+      expect(res.status, `${action} ${JSON.stringify(body)}`).toBe(400);
+      expect(Object.keys(res.body.error.fields ?? {}).some((k) => k === field || k.startsWith(field)), JSON.stringify(res.body)).toBe(true);
+    }
+  });
 });
