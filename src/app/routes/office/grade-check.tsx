@@ -1,0 +1,38 @@
+import { Link, useParams } from 'react-router';
+import { RequireRole } from '@/app/layout/require-role';
+import { ErrorNotice, Loading } from '@/components/ui/notice';
+import { PageHeader, Panel } from '@/components/ui/panel';
+import { StatusBadge } from '@/components/ui/status-badge';
+import { paths } from '@/config/paths';
+import { useGradeChecks } from '@/features/grade-check/api/get-grade-checks';
+import { DocumentsList } from '@/features/grade-check/components/documents-list';
+import { GradeCheckWorkspace } from '@/features/grade-check/components/grade-check-workspace';
+import { SavedChecks } from '@/features/grade-check/components/saved-checks';
+
+function GradeCheckPage({ id }: { id: string }) {
+  const { data, isPending, error } = useGradeChecks(id);
+  if (isPending) return <Loading label="Loading the request…" />;
+  if (error) return <ErrorNotice error={error} />;
+  const { request, checks } = data;
+  return (
+    <>
+      <PageHeader
+        title={<>Survey and grade check <span className="font-mono text-xl">{request.reference}</span></>}
+        lead={`${request.applicantName} · ${request.siteAddress}${request.roadName ? ` on ${request.roadName}` : ''}`}
+        actions={<><StatusBadge status={request.status} /><Link to={paths.office.request.getHref(request.id)} className="text-sm font-semibold text-pine-700 hover:underline">← Back to the request</Link></>}
+      />
+      <div className="space-y-6">
+        <GradeCheckWorkspace request={request} />
+        <div className="grid gap-6 lg:grid-cols-2">
+          <Panel title="Saved checks"><SavedChecks request={request} checks={checks} /></Panel>
+          <Panel title="Documents"><DocumentsList requestId={request.id} canShare /></Panel>
+        </div>
+      </div>
+    </>
+  );
+}
+
+export function Component() {
+  const { id = '' } = useParams();
+  return <RequireRole roles={['staff', 'admin']}><GradeCheckPage key={id} id={id} /></RequireRole>;
+}

@@ -1,0 +1,83 @@
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { ErrorNotice, Loading } from '@/components/ui/notice';
+import { Panel } from '@/components/ui/panel';
+import { ApiError } from '@/lib/api-client';
+import type { CheckRequestHeader } from '../api/get-grade-checks';
+import { useProfileVersion, useRuleProfileChoices } from '../api/get-rule-profile-choices';
+import { useSaveGradeCheck } from '../api/save-grade-check';
+import { initialSurvey, type SurveyState } from '../lib/survey-state';
+import { useLiveCheck } from '../lib/use-live-check';
+import { CentrelineTable } from './centreline-table';
+import { CulvertFields } from './culvert-fields';
+import { GeometryFields } from './geometry-fields';
+import { LaserPanel } from './laser-panel';
+import { LiveResult } from './live-result';
+import { ProposalPanel } from './proposal-panel';
+import { RoadFields } from './road-fields';
+import { RuleProfilePicker } from './rule-profile-picker';
+import { StakesEditor } from './stakes-editor';
+
+/** Survey entry on the left, the live check on the right; saving asks the server to run and keep the check. */
+export function GradeCheckWorkspace({ request }: { request: CheckRequestHeader }) {
+  const [survey, setSurvey] = useState<SurveyState>(() => initialSurvey(request.application.site?.postedSpeedMph));
+  const choices = useRuleProfileChoices();
+  const [jurisdictionId, setJurisdictionId] = useState(request.jurisdictionId ?? '');
+  const chosen = choices.data?.jurisdictions.find((j) => j.id === jurisdictionId);
+  const version = useProfileVersion(chosen?.currentVersionId ?? undefined);
+  const rules = version.data?.version.profile;
+  const live = useLiveCheck(survey, rules);
+  const save = useSaveGradeCheck(request.id);
+
+  const update = <K extends keyof SurveyState>(part: K) => (patch: Partial<SurveyState[K]>) =>
+    setSurvey((s) => ({
+      ...s,
+      [part]: { ...s[part], ...patch },
+      // A design applied to other ground no longer fits once the ground changes.
+      design: part === 'centreline' ? { ...s.design, applied: null } : part === 'design' ? { ...s.design, ...patch } : s.design,
+    }));
+  const serverFields = save.error instanceof ApiError
+    ? Object.fromEntries(Object.entries(save.error.fields).map(([k, v]) => [k.replace(/^inputs\./, ''), v]))
+    : {};
+  const errors = { ...serverFields, ...live.errors };
+
+  if (choices.isPending) return <Loading />;
+  return (
+    <div className="grid gap-6 xl:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
+      <div className="space-y-6">
+        <Panel title="Rule profile">
+          {choices.error ? <ErrorNotice error={choices.error} /> : <RuleProfilePicker choices={choices.data.jurisdictions} value={jurisdictionId} onChange={setJurisdictionId} />}
+        </Panel>
+        <Panel title="The road"><RoadFields road={survey.road} errors={errors} onChange={update('road')} /></Panel>
+        <Panel title="The centreline"><CentrelineTable centreline={survey.centreline} errors={errors} onChange={update('centreline')} /></Panel>
+        <Panel title="Culvert"><CulvertFields culvert={survey.culvert} errors={errors} onChange={update('culvert')} /></Panel>
+        <Panel title="Geometry"><GeometryFields geometry={survey.geometry} errors={errors} onChange={update('geometry')} /></Panel>
+        <Panel title="Laser and stakes"><StakesEditor laser={survey.laser} errors={errors} onChange={update('laser')} /></Panel>
+      </div>
+      <div className="space-y-6">
+        <Panel title="Live check" actions={
+          <Button disabled={!live.inputs || !live.results || !chosen?.currentVersionId || save.isPending}
+            onClick={() => live.inputs && chosen?.currentVersionId && save.mutate({ requestId: request.id, ruleProfileVersionId: chosen.currentVersionId, inputs: live.inputs })}>
+            {save.isPending ? 'Saving…' : 'Save this check'}
+          </Button>
+        }>
+          {save.isSuccess && <p role="status" className="mb-3 text-sm font-semibold text-pine-800">Saved as check {save.data.check.number}.</p>}
+          <ErrorNotice error={save.error} />
+          {!rules ? <p className="text-sm text-stone-500">{version.isFetching ? 'Loading the rule profile…' : 'Choose the rule profile to check against.'}</p> : <LiveResult live={live} rules={rules} />}
+        </Panel>
+        {rules && (
+          <Panel title="Compliant profile">
+            <ProposalPanel
+              proposal={live.results?.proposal} requested={survey.design.proposed} applied={Boolean(survey.design.applied)}
+              haul={{ soil: survey.design.soil, truckCuYd: Number(survey.design.truckCuYd) || 10 }}
+              onSuggest={() => update('design')({ proposed: true })}
+              onApply={(p) => update('design')({ applied: p.profile })}
+              onUndo={() => update('design')({ applied: null })}
+            />
+          </Panel>
+        )}
+        {rules && <Panel title="Laser settings for the crew"><LaserPanel laser={live.results?.laser} /></Panel>}
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,25 @@
+import type { RuleProfile } from '@shared/engine';
+import { Notice } from '@/components/ui/notice';
+import type { LiveCheck } from '../lib/use-live-check';
+import { FindingsTable } from './findings-table';
+import { ProfileChartView } from './profile-chart-view';
+
+/** The live verdict, chart and findings for the survey as typed. */
+export function LiveResult({ live, rules }: { live: LiveCheck; rules: RuleProfile }) {
+  if (!live.results || !live.inputs) {
+    const count = Object.keys(live.errors).length;
+    return <Notice tone="warn" title="Not checked yet">{count > 0 ? `${count} ${count === 1 ? 'box needs' : 'boxes need'} attention before the check can run.` : 'Enter the centreline to see the check.'}</Notice>;
+  }
+  const { report } = live.results;
+  return (
+    <div className="space-y-4">
+      <div data-testid="live-verdict" data-passes={report.passes}>
+        <Notice tone={report.passes ? 'info' : 'error'} title={report.passes ? 'Meets the rules checked' : `Fails ${report.summary.fail} ${report.summary.fail === 1 ? 'rule' : 'rules'}`}>
+          {report.summary.text}
+        </Notice>
+      </div>
+      <ProfileChartView inputs={live.inputs} results={live.results} rules={rules} />
+      <FindingsTable findings={report.findings} units={rules.units} />
+    </div>
+  );
+}

@@ -1,0 +1,45 @@
+import { useState } from 'react';
+import { Button } from '@/components/ui/button';
+import { ErrorNotice, Notice } from '@/components/ui/notice';
+import { useAttachGradeCheck } from '../api/attach-grade-check';
+import type { CheckRequestHeader, SavedCheck } from '../api/get-grade-checks';
+import { useMarkChecked } from '../api/mark-checked';
+
+/** Saved checks, newest first: attach one as the request's report, then mark the request checked. */
+export function SavedChecks({ request, checks }: { request: CheckRequestHeader; checks: SavedCheck[] }) {
+  const attach = useAttachGradeCheck(request.id);
+  const markChecked = useMarkChecked(request.id);
+  const [share, setShare] = useState(true);
+  const hasAttached = checks.some((c) => c.attachedAt);
+  if (checks.length === 0) return <p className="text-sm text-stone-500">No saved checks yet. Save the survey to make check 1.</p>;
+  return (
+    <div className="space-y-3">
+      <label className="flex items-center gap-2 text-sm">
+        <input type="checkbox" checked={share} onChange={(e) => setShare(e.target.checked)} />
+        Share the report with the property owner when attaching
+      </label>
+      <ul className="divide-y divide-stone-100" aria-label="Saved checks">
+        {checks.map((c) => (
+          <li key={c.id} className="flex flex-wrap items-start justify-between gap-3 py-2">
+            <div className="max-w-2xl">
+              <p className="font-semibold">Check {c.number} · {c.passed ? 'meets the rules' : 'does not meet the rules'} · {new Date(c.createdAt).toLocaleString()}</p>
+              <p className="text-sm text-stone-600">{c.summary}</p>
+            </div>
+            {c.attachedAt
+              ? <span className="rounded-full border border-pine-200 bg-pine-50 px-2 text-xs font-semibold text-pine-800">Attached</span>
+              : <Button variant="secondary" disabled={attach.isPending} onClick={() => attach.mutate({ checkId: c.id, shareWithApplicant: share })}>{attach.isPending ? 'Making the report…' : `Attach check ${c.number}`}</Button>}
+          </li>
+        ))}
+      </ul>
+      <ErrorNotice error={attach.error} />
+      {request.status === 'visit_booked' && (
+        <div className="flex flex-wrap items-center gap-3">
+          <Button disabled={!hasAttached || markChecked.isPending} onClick={() => markChecked.mutate({ requestId: request.id, expectedVersion: request.version })}>Mark grade check done</Button>
+          {!hasAttached && <span className="text-sm text-stone-500">Attach a check first.</span>}
+        </div>
+      )}
+      {request.status === 'checked' && <Notice title="Grade check done">The property owner has been told the result.</Notice>}
+      <ErrorNotice error={markChecked.error} />
+    </div>
+  );
+}

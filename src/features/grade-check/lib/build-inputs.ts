@@ -1,0 +1,103 @@
+import type { CheckEntranceInput, LaserSetupInput, ProfileInput, ProposeProfileInput, RuleProfile } from '@shared/engine';
+import type { HaulChoice } from '@shared/charts/cut-fill-table';
+import { laserFromProfile } from './laser-from-profile';
+import { type FieldErrors, readNumber, readStation } from './read-number';
+import { centrelineColumns, type SurveyState } from './survey-state';
+
+/** The saved check's inputs, in the shape the server stores (and the crew's field sheet reads). */
+export interface SavedInputs extends CheckEntranceInput {
+  road?: { gradePercent: number; edgeElevationFt: number; crossSlopePercent?: number };
+  laser?: LaserSetupInput;
+  design?: ProposeProfileInput & { applied: boolean; haul?: HaulChoice };
+}
+
+function readCentreline(s: SurveyState['centreline'], errors: FieldErrors): ProfileInput | undefined {
+  const cols = centrelineColumns[s.mode];
+  const at = (i: number, key: string) => `profile.${cols.list}.${i}.${key}`;
+  const rows = s.rows.filter((r) => r.station.trim() || r.value.trim());
+  if (rows.length < 2) {
+    errors.profile = 'enter at least two shots along the centreline';
+    return undefined;
+  }
+  if (s.mode === 'segment-grades') {
+    const startStationFt = readStation(s.startStation, 'profile.startStationFt', errors);
+    const startElevationFt = readNumber(s.startElevationFt, 'profile.startElevationFt', errors, true);
+    const segments = rows.map((r, i) => ({ lengthFt: readNumber(r.station, at(i, 'lengthFt'), errors, true), gradePercent: readNumber(r.value, at(i, 'gradePercent'), errors, true) }));
+    if (startStationFt === undefined || startElevationFt === undefined || segments.some((g) => g.lengthFt === undefined || g.gradePercent === undefined)) return undefined;
+    return { kind: 'segment-grades', startStationFt, startElevationFt, segments: segments as { lengthFt: number; gradePercent: number }[] };
+  }
+  const shots = rows.map((r, i) => ({ stationFt: readStation(r.station, at(i, 'stationFt'), errors), value: readNumber(r.value, at(i, cols.valueField), errors, true) }));
+  if (shots.some((p) => p.stationFt === undefined || p.value === undefined)) return undefined;
+  const ok = shots as { stationFt: number; value: number }[];
+  if (s.mode === 'elevations') return { kind: 'elevations', points: ok.map((p) => ({ stationFt: p.stationFt, elevationFt: p.value })) };
+  const instrumentHeightFt = readNumber(s.instrumentHeightFt, 'profile.instrumentHeightFt', errors, true);
+  if (instrumentHeightFt === undefined) return undefined;
+  return { kind: 'rod-readings', instrumentHeightFt, readings: ok.map((p) => ({ stationFt: p.stationFt, rodFt: p.value })) };
+}
+
+function readCulvert(c: SurveyState['culvert'], errors: FieldErrors, topWidthFt?: number, sideSlopeHPerV?: number): CheckEntranceInput['culvert'] {
+  if (!c.present) return undefined;
+  const n = (text: string, key: string, required = false) => readNumber(text, `culvert.${key}`, errors, required);
+  const drainage = c.flow === 'rational'
+    ? { runoffC: n(c.runoffC, 'drainage.runoffC', true), intensityInPerHr: n(c.intensityInPerHr, 'drainage.intensityInPerHr', true), areaAcres: n(c.areaAcres, 'drainage.areaAcres', true) }
+    : undefined;
+  const culvert = {
+    diameterIn: n(c.diameterIn, 'diameterIn', true), inlet: c.inlet as NonNullable<CheckEntranceInput['culvert']>['inlet'], manningN: n(c.manningN, 'manningN', true),
+    inletInvertFt: n(c.inletInvertFt, 'inletInvertFt', true), outletInvertFt: n(c.outletInvertFt, 'outletInvertFt', true),
+    surfaceElevationFt: n(c.surfaceElevationFt, 'surfaceElevationFt'), lengthFt: n(c.lengthFt, 'lengthFt'), topWidthFt, sideSlopeHPerV,
+    designFlowCfs: c.flow === 'design' ? n(c.designFlowCfs, 'designFlowCfs') : undefined,
+    drainage: drainage as { runoffC: number; intensityInPerHr: number; areaAcres: number } | undefined,
+  };
+  return culvert as NonNullable<CheckEntranceInput['culvert']>;
+}
+
+/**
+ * Turns the typed survey into the check's inputs. Errors are keyed by the same field paths the engine and the
+ * server use, so one map marks the cells whoever found the problem.
+ */
+export function buildInputs(s: SurveyState, rules: RuleProfile | undefined): { inputs?: SavedInputs; errors: FieldErrors } {
+  const errors: FieldErrors = {};
+  const surveyed = readCentreline(s.centreline, errors);
+  const roadEdgeStationFt = readStation(s.road.edgeStation, 'roadEdgeStationFt', errors);
+  const roadGrade = readNumber(s.road.gradePercent, 'road.gradePercent', errors, true);
+  const edgeElevation = readNumber(s.road.edgeElevationFt, 'road.edgeElevationFt', errors);
+  const crossSlopePercent = readNumber(s.road.crossSlopePercent, 'road.crossSlopePercent', errors);
+  const g = s.geometry;
+  const topWidthFt = readNumber(g.topWidthFt, 'geometry.widthFt', errors);
+  const sideSlopeHPerV = readNumber(g.sideSlopeHPerV, 'design.template.cutSlopeHPerV', errors);
+  const sight = {
+    speedMph: readNumber(s.road.speedMph, 'sight.speedMph', errors), measuredLeftFt: readNumber(s.road.sightLeftFt, 'sight.measuredLeftFt', errors),
+    measuredRightFt: readNumber(s.road.sightRightFt, 'sight.measuredRightFt', errors), movements: s.road.movements,
+  };
+  const geometry = {
+    widthFt: topWidthFt, flareRadiusFt: readNumber(g.flareRadiusFt, 'geometry.flareRadiusFt', errors),
+    distanceToIntersectionFt: readNumber(g.distanceToIntersectionFt, 'geometry.distanceToIntersectionFt', errors),
+    distanceToPropertyLineFt: readNumber(g.distanceToPropertyLineFt, 'geometry.distanceToPropertyLineFt', errors),
+  };
+  const culvert = readCulvert(s.culvert, errors, topWidthFt, sideSlopeHPerV);
+  const receiverOffsetFt = readNumber(s.laser.receiverOffsetFt, 'laser.receiverOffsetFt', errors, true);
+  const stakes = s.laser.stakes.map((k, i) => ({
+    label: k.label.trim() || `Stake ${i + 1}`, offsetFt: readNumber(k.offsetFt, `laser.stakes.${i}.offsetFt`, errors, true) ?? 0,
+    distanceFt: readNumber(k.distanceFt, `laser.stakes.${i}.distanceFt`, errors, true) ?? 0, rodReadingFt: readNumber(k.rodReadingFt, `laser.stakes.${i}.rodReadingFt`, errors, true) ?? 0,
+  }));
+  const target = readNumber(s.design.targetEndElevationFt, 'design.targetEndElevationFt', errors);
+  const truckCuYd = readNumber(s.design.truckCuYd, 'design.haul.truckCuYd', errors, true) ?? 10;
+  if (!surveyed || roadEdgeStationFt === undefined || roadGrade === undefined || receiverOffsetFt === undefined || Object.keys(errors).length > 0) return { errors };
+
+  const signedRoadGrade = s.road.rises === 'right' ? roadGrade : -roadGrade;
+  const checked: ProfileInput = s.design.applied ? { kind: 'elevations', points: s.design.applied } : surveyed;
+  const laser = rules ? laserFromProfile(checked, roadEdgeStationFt, rules, { roadGradePercent: signedRoadGrade, receiverOffsetFt, stakes }) : undefined;
+  const edge = edgeElevation ?? laser?.originElevationFt;
+  const inputs: SavedInputs = {
+    profile: checked, roadEdgeStationFt, culvert, geometry,
+    sight: Object.values(sight).some((v) => typeof v === 'number') ? sight : undefined,
+    road: edge === undefined ? undefined : { gradePercent: signedRoadGrade, edgeElevationFt: edge, crossSlopePercent },
+    laser,
+    design: edge === undefined ? undefined : {
+      existing: surveyed, roadEdgeElevationFt: edge, targetEndElevationFt: target, applied: Boolean(s.design.applied),
+      template: { topWidthFt: topWidthFt ?? 12, cutSlopeHPerV: sideSlopeHPerV ?? 2, fillSlopeHPerV: sideSlopeHPerV ?? 2, groundCrossSlopePercent: 0 },
+      haul: { soil: s.design.soil, truckCuYd },
+    },
+  };
+  return { inputs, errors };
+}
