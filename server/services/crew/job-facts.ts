@@ -5,9 +5,8 @@ import { timingText, timings } from '../../../shared/requests/choices';
 import type { EarthworkEstimate, Wanted, Yard } from '../../../shared/crew/crew-views';
 import type { SavedCheck } from './saved-check';
 
-// A tandem dump truck carries about 10 cu yd loose: common practice (no source); the crew adjusts on site.
-const TRUCK_CU_YD = 10;
-const soil = soilFactors.loam;
+// Without the office's choice: loam, and a tandem dump truck of about 10 cu yd loose (common practice, no source).
+const DEFAULT_TRUCK_CU_YD = 10;
 
 function volumes(check: SavedCheck): { cutCuYd: number; fillCuYd: number } | null {
   const { proposal, design, existingPoints, designPoints } = check;
@@ -29,6 +28,9 @@ export function earthworkEstimate(check: SavedCheck | null): EarthworkEstimate |
   if (!check) return null;
   const v = volumes(check);
   if (!v) return null;
+  const soilName = check.design?.haul?.soil ?? 'loam';
+  const soil = soilFactors[soilName];
+  const truckCuYd = check.design?.haul?.truckCuYd ?? DEFAULT_TRUCK_CU_YD;
   const bankForFill = v.fillCuYd / soil.bankToCompacted;
   const spareBank = v.cutCuYd - bankForFill;
   const loose = bankToLoose({ bankCuYd: Math.abs(spareBank), swellPercent: (soil.bankToLoose - 1) * 100 }).looseCuYd;
@@ -36,9 +38,9 @@ export function earthworkEstimate(check: SavedCheck | null): EarthworkEstimate |
     cutCuYd: v.cutCuYd,
     fillCuYd: v.fillCuYd,
     netLooseCuYd: spareBank >= 0 ? loose : -loose,
-    truckCuYd: TRUCK_CU_YD,
-    truckLoads: truckLoads({ looseCuYd: loose, truckCuYd: TRUCK_CU_YD }).loads,
-    basis: `loam: swell ${Math.round((soil.bankToLoose - 1) * 100)}%, fill compacts to ${soil.bankToCompacted * 100}% of bank; ${TRUCK_CU_YD} cu yd per truck`,
+    truckCuYd,
+    truckLoads: truckLoads({ looseCuYd: loose, truckCuYd }).loads,
+    basis: `${soilName}: swell ${Math.round((soil.bankToLoose - 1) * 100)}%, fill compacts to ${Math.round(soil.bankToCompacted * 100)}% of bank; ${truckCuYd} cu yd per truck`,
   };
 }
 

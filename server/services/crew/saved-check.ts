@@ -24,7 +24,11 @@ const proposalSchema = z.object({
   cutCuYd: z.number(),
   fillCuYd: z.number(),
 });
-const designPartSchema = proposeProfileInputSchema.extend({ applied: z.boolean().default(false) });
+const designPartSchema = proposeProfileInputSchema.extend({
+  applied: z.boolean().default(false),
+  // The office's choice of soil and truck size for the haul estimate, when the check screen recorded one.
+  haul: z.object({ soil: z.enum(['loam', 'clay', 'sand']), truckCuYd: z.number().positive().max(100) }).optional(),
+});
 
 export interface SavedCheck {
   id: string;
