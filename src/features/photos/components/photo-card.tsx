@@ -1,0 +1,39 @@
+import { useId, useState } from 'react';
+import { captionSuggestions } from '@shared/requests/photo-rules';
+import { Button } from '@/components/ui/button';
+import { ErrorNotice } from '@/components/ui/notice';
+import type { Photo } from '../api/get-photos';
+import { useRemovePhoto } from '../api/remove-photo';
+import { useUpdateCaption } from '../api/update-caption';
+
+/** One stored photo: the picture, its caption (editable while the request is), and a way to take it out. */
+export function PhotoCard({ photo, requestId, editable }: { photo: Photo; requestId: string; editable: boolean }) {
+  const captionId = useId();
+  const [caption, setCaption] = useState(photo.caption);
+  const update = useUpdateCaption(requestId);
+  const remove = useRemovePhoto(requestId);
+  const saveCaption = () => { if (caption.trim() !== photo.caption) update.mutate({ photoId: photo.id, caption }); };
+  return (
+    <li className="flex flex-col gap-2 rounded-md border border-stone-200 bg-white p-2">
+      <a href={photo.url} target="_blank" rel="noreferrer" className="block overflow-hidden rounded bg-stone-100">
+        <img src={photo.url} alt={photo.caption || `Site photo ${photo.fileName}`} className="aspect-[4/3] w-full object-cover" loading="lazy" />
+      </a>
+      {editable ? (
+        <div className="flex flex-col gap-1">
+          <label htmlFor={captionId} className="text-xs font-semibold text-stone-700">What does “{photo.fileName}” show?</label>
+          <input id={captionId} list={`${captionId}-ideas`} value={caption} maxLength={200}
+            onChange={(e) => setCaption(e.target.value)} onBlur={saveCaption}
+            onKeyDown={(e) => { if (e.key === 'Enter') { e.preventDefault(); saveCaption(); } }}
+            className="rounded border border-stone-300 px-2 py-1 text-sm" />
+          <datalist id={`${captionId}-ideas`}>{captionSuggestions.map((s) => <option key={s} value={s} />)}</datalist>
+          {update.isSuccess && !update.isPending && <p className="text-xs text-pine-700" role="status">Caption saved.</p>}
+          <Button variant="quiet" className="self-start px-0" disabled={remove.isPending}
+            onClick={() => remove.mutate(photo.id)}>{remove.isPending ? 'Removing…' : `Remove ${photo.fileName}`}</Button>
+        </div>
+      ) : (
+        <p className="text-sm text-stone-700">{photo.caption || <span className="text-stone-500">{photo.fileName}</span>}</p>
+      )}
+      <ErrorNotice error={update.error ?? remove.error} />
+    </li>
+  );
+}

@@ -1,0 +1,56 @@
+import { useQueryClient } from '@tanstack/react-query';
+import { lazy, Suspense, useState } from 'react';
+import { maxPhotosPerRequest } from '@shared/requests/photo-rules';
+import { Button } from '@/components/ui/button';
+import { Loading, Notice } from '@/components/ui/notice';
+import { getPhotosQueryOptions, usePhotos } from '../api/get-photos';
+import { PhotoGallery } from './photo-gallery';
+
+// The uploader carries most of the client's weight, so it loads only when someone reaches the photos step.
+const PhotoUploader = lazy(() => import('./photo-uploader'));
+
+interface PhotoStepProps {
+  requestId: string;
+  onUsePosition: (lat: number, lng: number) => Promise<void>;
+}
+
+/** Adding photos: what the office needs to see, the upload area, and what is already stored. */
+export function PhotoStep({ requestId, onUsePosition }: PhotoStepProps) {
+  const queryClient = useQueryClient();
+  const stored = usePhotos(requestId).data?.photos.length ?? 0;
+  const [problems, setProblems] = useState<string[]>([]);
+  const [offer, setOffer] = useState<{ lat: number; lng: number } | null>(null);
+  const [used, setUsed] = useState(false);
+  const refresh = () => queryClient.invalidateQueries({ queryKey: getPhotosQueryOptions(requestId).queryKey });
+  const accept = async () => {
+    if (!offer) return;
+    await onUsePosition(offer.lat, offer.lng);
+    setUsed(true);
+  };
+  return (
+    <div className="space-y-4">
+      <p className="text-stone-700">
+        Photos save the office a trip. Stand at the road edge where the entrance will go and take: the road to the left,
+        the road to the right, the ditch, and the ground towards the house. Up to {maxPhotosPerRequest} photos.
+      </p>
+      {offer && !used && (
+        <Notice title="A photo knows where it was taken">
+          <p>{offer.lat.toFixed(5)}, {offer.lng.toFixed(5)}. Use this as the position of the entrance? Only the position is kept, nothing else from the photo.</p>
+          <Button variant="secondary" className="mt-2" onClick={() => void accept()}>Use this position</Button>
+        </Notice>
+      )}
+      {used && <Notice>The site position is now set from your photo. You can change it in step 1.</Notice>}
+      {problems.map((p) => <Notice key={p} tone="error">{p}</Notice>)}
+      {stored >= maxPhotosPerRequest ? (
+        <Notice tone="warn">This request has the most photos it can take. Remove one to add another.</Notice>
+      ) : (
+        <Suspense fallback={<Loading label="Loading the uploader…" />}>
+          <PhotoUploader requestId={requestId} room={maxPhotosPerRequest - stored} onStored={() => void refresh()}
+            onPosition={(lat, lng) => setOffer((current) => current ?? { lat, lng })}
+            onProblem={(message) => setProblems((list) => [...list, message])} />
+        </Suspense>
+      )}
+      <PhotoGallery requestId={requestId} editable />
+    </div>
+  );
+}

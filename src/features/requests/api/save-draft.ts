@@ -1,0 +1,34 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { EntranceStep, SiteStep } from '@shared/requests/application-schema';
+import { api } from '@/lib/api-client';
+import { getRequestQueryOptions } from './get-request';
+import type { RequestDetail } from './types';
+
+export interface DraftChange {
+  id: string;
+  expectedVersion: number;
+  wizardStep?: number;
+  site?: Partial<SiteStep>;
+  entrance?: Partial<EntranceStep>;
+}
+
+export const saveDraft = ({ id, ...change }: DraftChange) => api.patch<{ request: RequestDetail }>(`/api/requests/${id}/draft`, change);
+
+/** For the moment the page goes away: the browser finishes a keepalive request even after the tab closes. */
+export function saveDraftOnExit({ id, ...change }: DraftChange) {
+  void fetch(`/api/requests/${id}/draft`, {
+    method: 'PATCH', keepalive: true, credentials: 'same-origin',
+    headers: { 'Content-Type': 'application/json', Accept: 'application/json' },
+    body: JSON.stringify(change),
+  }).catch(() => undefined);
+}
+
+export function useSaveDraft() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: saveDraft,
+    onSuccess: ({ request }) => {
+      queryClient.setQueryData(getRequestQueryOptions(request.id).queryKey, (old) => (old ? { ...old, request } : old));
+    },
+  });
+}

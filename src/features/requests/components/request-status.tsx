@@ -1,0 +1,70 @@
+import { useId, useState, type FormEvent } from 'react';
+import { Link } from 'react-router';
+import { Button } from '@/components/ui/button';
+import { TextArea } from '@/components/ui/field';
+import { ErrorNotice, Notice } from '@/components/ui/notice';
+import { StatusBadge } from '@/components/ui/status-badge';
+import { ApiError } from '@/lib/api-client';
+import { useEvents } from '../api/get-events';
+import { useRunTransition } from '../api/run-transition';
+import type { RequestDetail } from '../api/types';
+
+/** Where the request stands in plain words, and the applicant's own moves from here. */
+export function RequestStatus({ request, editHref }: { request: RequestDetail; editHref: string }) {
+  const transition = useRunTransition(request.id);
+  const can = (action: string) => request.actions.some((a) => a.action === action);
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-center gap-3">
+        <StatusBadge status={request.status} />
+        <p className="text-stone-700">{request.whatNext}</p>
+      </div>
+      {request.status === 'draft' && (
+        <Link to={editHref} className="inline-flex rounded-md bg-pine-700 px-4 py-2 text-sm font-semibold text-white hover:bg-pine-800">Continue the form</Link>
+      )}
+      {request.status === 'needs_details' && <AnswerForm request={request} editHref={editHref} />}
+      {can('withdraw') && <Withdraw onConfirm={() => transition.mutate({ action: 'withdraw', expectedVersion: request.version })} pending={transition.isPending} />}
+      <ErrorNotice error={transition.error} />
+    </div>
+  );
+}
+
+function AnswerForm({ request, editHref }: { request: RequestDetail; editHref: string }) {
+  const id = useId();
+  const events = useEvents(request.id).data?.events ?? [];
+  const question = [...events].reverse().find((e) => e.toStatus === 'needs_details')?.note;
+  const transition = useRunTransition(request.id);
+  const [answer, setAnswer] = useState('');
+  const fieldError = transition.error instanceof ApiError ? transition.error.fields.answer : undefined;
+  const send = (event: FormEvent) => {
+    event.preventDefault();
+    transition.mutate({ action: 'answer', expectedVersion: request.version, answer });
+  };
+  return (
+    <form onSubmit={send} noValidate className="space-y-2 rounded-md border-l-4 border-tape bg-amber-50 p-4">
+      <p className="font-semibold text-amber-950">The office asks:</p>
+      <p className="whitespace-pre-line">{question || 'See the latest message from the office.'}</p>
+      <label htmlFor={id} className="block text-sm font-semibold">Your answer</label>
+      <TextArea id={id} value={answer} onChange={(e) => setAnswer(e.target.value)} aria-invalid={Boolean(fieldError)}
+        aria-describedby={fieldError ? `${id}-error` : undefined} />
+      {fieldError && <p id={`${id}-error`} className="text-sm font-medium text-clay">{fieldError}</p>}
+      <p className="text-sm text-stone-600">If the question is about your answers, you can also <Link className="underline" to={editHref}>change the form</Link> first.</p>
+      <Button type="submit" disabled={transition.isPending}>{transition.isPending ? 'Sending…' : 'Send my answer'}</Button>
+      {transition.error && !fieldError ? <ErrorNotice error={transition.error} /> : null}
+    </form>
+  );
+}
+
+function Withdraw({ onConfirm, pending }: { onConfirm: () => void; pending: boolean }) {
+  const [asking, setAsking] = useState(false);
+  if (!asking) return <Button variant="secondary" onClick={() => setAsking(true)}>Withdraw this request</Button>;
+  return (
+    <Notice tone="warn" title="Withdraw this request?">
+      <p>The office stops work on it. This cannot be undone; you would need to start a new request.</p>
+      <div className="mt-2 flex gap-2">
+        <Button variant="danger" onClick={onConfirm} disabled={pending} autoFocus>Yes, withdraw</Button>
+        <Button variant="secondary" onClick={() => setAsking(false)}>Keep it</Button>
+      </div>
+    </Notice>
+  );
+}

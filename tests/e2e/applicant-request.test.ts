@@ -1,0 +1,114 @@
+import { randomUUID } from 'node:crypto';
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it, inject } from 'vitest';
+import { solidPng, withGpsExif } from '../integration/photos-images';
+import { appUrl, launchBrowser, screenshotPath, signInAs } from '../setup/browser';
+
+let session: Awaited<ReturnType<typeof launchBrowser>>;
+beforeAll(async () => { session = await launchBrowser(); });
+afterAll(() => session?.close());
+
+const isFocused = (page: Page, label: string) => page.getByLabel(label, { exact: true }).evaluate((el) => el === document.activeElement);
+
+/** A real JPEG, encoded by the browser itself, then given the GPS block a phone would write. */
+async function siteJpeg(page: Page) {
+  const dataUrl = await page.evaluate(() => {
+    const canvas = document.createElement('canvas');
+    canvas.width = 48; canvas.height = 32;
+    const g = canvas.getContext('2d')!;
+    g.fillStyle = '#6b8f5e'; g.fillRect(0, 0, 48, 32);
+    g.fillStyle = '#555'; g.fillRect(0, 20, 48, 12);
+    return canvas.toDataURL('image/jpeg', 0.9);
+  });
+  return withGpsExif(Buffer.from(dataUrl.split(',')[1], 'base64'), 44.26012, -72.57541);
+}
+
+async function shoot(page: Page, name: string) {
+  const file = screenshotPath(name);
+  mkdirSync(path.dirname(file), { recursive: true });
+  await page.screenshot({ path: file, fullPage: true });
+}
+
+async function mailFor(address: string) {
+  const { mailWebUrl } = inject('stack');
+  const messages = (await (await fetch(`${mailWebUrl}/api/messages`)).json()) as { to: string[]; subject: string }[];
+  return messages.filter((m) => m.to.some((to) => to.toLowerCase().includes(address)));
+}
+
+describe('a new property owner asks for an entrance', () => {
+  it('fills the wizard with two photos, sends it, follows it and gets a receipt', async () => {
+    const email = `hollis.pembury-${randomUUID().slice(0, 6)}@example.test`;
+    const context = await session.browser.newContext();
+    const page = await context.newPage();
+    const pageErrors: string[] = [];
+    page.on('pageerror', (error) => pageErrors.push(error.message));
+    await signInAs(page, email, 'Hollis Pembury');
+    await page.waitForURL((url) => url.pathname === '/my/requests');
+    await page.getByRole('link', { name: 'Start a new request' }).click();
+    await page.getByRole('button', { name: 'Start the form' }).click();
+    await page.waitForURL(/\/my\/requests\/[0-9a-f-]+\/edit$/);
+
+    // An empty step: every message sits by its field and focus goes to the first one.
+    await page.getByRole('button', { name: 'Save and continue' }).click();
+    await page.getByText('Enter the street address of the property.').waitFor();
+    expect(await isFocused(page, 'Street address of the property')).toBe(true);
+
+    await page.getByLabel('Street address of the property').fill('27 Alder Brook Lane, Wrenfield');
+    await page.getByLabel('Road the entrance joins').fill('Cobble Hill Road');
+    await page.getByLabel('The county').check();
+    await page.getByLabel('Posted speed limit, mph (if known)').fill('35');
+    await page.getByLabel('Landmark', { exact: true }).fill('the red barn');
+    await page.getByLabel('Distance from the landmark, ft').fill('220');
+    await page.getByLabel('Distance from the landmark, ft').press('Enter');
+
+    await page.getByRole('heading', { name: /Step 2 of 4/ }).waitFor();
+    expect(await page.getByRole('heading', { name: /Step 2 of 4/ }).evaluate((el) => el === document.activeElement)).toBe(true);
+    await page.getByLabel('A new entrance').check();
+    await page.getByLabel('A home').check();
+    await page.getByLabel('Cars and pickups').check();
+    await page.getByLabel('Trailers, campers or long loads').check();
+    await page.getByLabel('An open ditch, no pipe').check();
+    await page.getByRole('button', { name: 'Save and continue' }).click();
+
+    await page.getByRole('heading', { name: /Step 3 of 4/ }).waitFor();
+    await page.locator('.uppy-Dashboard-input').first().setInputFiles([
+      { name: 'road-left.jpg', mimeType: 'image/jpeg', buffer: await siteJpeg(page) },
+      { name: 'ditch.png', mimeType: 'image/png', buffer: solidPng(40, 30, [120, 96, 60]) },
+    ]);
+    await page.getByText('2 photos').waitFor({ timeout: 30_000 });
+    await page.getByRole('button', { name: 'Use this position' }).click();
+    await page.getByText('The site position is now set from your photo.').waitFor();
+    await page.getByLabel('What does “ditch.png” show?').fill('The ditch where the entrance goes');
+    await page.getByLabel('What does “ditch.png” show?').press('Enter');
+    await page.getByText('Caption saved.').waitFor();
+    await shoot(page, 'applicant-wizard-photos');
+    await page.getByRole('button', { name: 'Save and continue' }).click();
+
+    await page.getByRole('heading', { name: /Step 4 of 4/ }).waitFor();
+    await page.getByText('44.26012, -72.57541').waitFor();
+    await page.getByRole('button', { name: 'Send to the office' }).click();
+
+    await page.waitForURL(/\/my\/requests\/[0-9a-f-]+$/);
+    const reference = (await page.getByText(/Reference GP-\d{4}-\d{5}/).first().textContent())!.match(/GP-\d{4}-\d{5}/)![0];
+    await page.getByText('Sent to the office').first().waitFor();
+    const timeline = page.getByRole('list', { name: 'Timeline' });
+    await timeline.getByText('Sent to the office').waitFor();
+    const photos = page.getByRole('list', { name: 'Site photos' }).getByRole('img');
+    await expect.poll(() => photos.count()).toBe(2);
+    await expect.poll(() => photos.evaluateAll((imgs) => imgs.every((img) => (img as HTMLImageElement).naturalWidth > 0))).toBe(true);
+    await page.getByRole('img', { name: 'The ditch where the entrance goes' }).waitFor();
+    await shoot(page, 'applicant-request-page');
+
+    await page.goto(appUrl('/my/requests'));
+    const row = page.getByRole('row', { name: new RegExp(reference) });
+    await row.getByText('Sent to the office').waitFor();
+    await row.getByText('Nothing for now').waitFor();
+
+    await expect.poll(async () => (await mailFor(email)).map((m) => m.subject).join(' | '), { timeout: 30_000, interval: 500 }).toContain(reference);
+    await shoot(page, 'applicant-my-requests');
+    expect(pageErrors).toEqual([]);
+    await context.close();
+  });
+});
