@@ -21,20 +21,17 @@ export interface QueueRow {
   reference: string;
   status: RequestStatus;
   statusLabel: string;
-  version: number;
   applicantName: string;
-  siteAddress: string;
   roadName: string;
   statusChangedAt: string;
-  submittedAt: string | null;
-  visitAt: string | null;
   waitingOnUs: boolean;
   nextAction: string;
   jurisdiction: { id: string; name: string } | null;
   assignee: { id: string; name: string } | null;
 }
 
-export interface QueuePage { requests: QueueRow[]; nextCursor: string | null; total: number; totalIsCapped: boolean }
+/** `total` is counted on the first page only; later pages leave it null. */
+export interface QueuePage { requests: QueueRow[]; nextCursor: string | null; total: number | null; totalIsCapped: boolean }
 
 export interface OfficePerson { id: string; name: string; role: Role }
 export interface QueueOptions { jurisdictions: { id: string; name: string }[]; people: OfficePerson[] }

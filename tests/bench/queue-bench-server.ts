@@ -1,0 +1,22 @@
+// The app under load, in a process of its own so the load generator never shares its event loop.
+import type { Server } from 'node:http';
+import { createApp } from '../../server/app';
+import { closeContext, createContext } from '../../server/context-factory';
+import { parseEnv } from '../../server/env';
+import { handle } from '../../server/lib/handle';
+
+const env = parseEnv(process.env);
+const ctx = createContext(env);
+const app = createApp(ctx);
+// The floor: the same middleware, session and sign-in as the queue, then one trivial query. Mounted only here.
+app.get('/bench/floor', handle({}, async () => (await ctx.pool.query('select 1 as one')).rows[0]));
+
+const server: Server = app.listen(env.PORT, '127.0.0.1', () => process.send?.('ready'));
+
+process.on('SIGTERM', () => {
+  server.close(() => {
+    // Session touches run just after each response; let the last ones land before the pool goes.
+    setTimeout(() => void closeContext(ctx).finally(() => process.exit(0)), 300);
+  });
+  server.closeIdleConnections();
+});

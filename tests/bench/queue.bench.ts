@@ -1,0 +1,103 @@
+// Times GET /api/queue against 50,000 seeded requests beside a floor endpoint on the same server that runs one
+// trivial query behind the same session and sign-in. A script, not a test: figures vary by machine.
+import { fork, type ChildProcess } from 'node:child_process';
+import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import os from 'node:os';
+import path from 'node:path';
+import autocannon from 'autocannon';
+import { startStandIns } from '../../fakes';
+import { applyMigrations, createDb } from '../../server/db/client';
+import { devOAuthClient } from '../../server/dev/dev-config';
+import { ensureDatabase, startPostgres } from '../../server/dev/postgres';
+import { standInEnv } from '../../server/dev/stand-in-env';
+import { freePort } from '../setup/free-port';
+import { seedQueue } from './queue-seed';
+import { signInCookie } from './sign-in-cookie';
+
+const connections = 20;
+const seconds = Number(process.env.BENCH_SECONDS ?? 10);
+
+async function measure(url: string, cookie: string) {
+  const times: number[] = [];
+  let errors = 0;
+  await new Promise<void>((resolve, reject) => {
+    const run = autocannon({ url, connections, duration: seconds, headers: { cookie } }, (error) => (error ? reject(error) : resolve()));
+    run.on('response', (_client: unknown, status: number, _bytes: number, ms: number) => {
+      if (status !== 200) errors++;
+      times.push(ms);
+    });
+  });
+  times.sort((a, b) => a - b);
+  const at = (q: number) => times[Math.min(times.length - 1, Math.floor(q * times.length))] ?? NaN;
+  return { p50: at(0.5), p95: at(0.95), rps: times.length / seconds, errors };
+}
+
+async function main() {
+  const dir = mkdtempSync(path.join(os.tmpdir(), 'gradepass-bench-'));
+  chmodSync(dir, 0o755); // initdb runs as the postgres user and must reach its folder
+  const pg = await startPostgres(path.join(dir, 'postgres'), await freePort(), { throwaway: true });
+  const port = await freePort();
+  const origin = `http://127.0.0.1:${port}`;
+  const standIns = await startStandIns({
+    dataDir: path.join(dir, 'fakes'), bucket: 'bench', allowedOrigins: [origin],
+    oauth: { ...devOAuthClient, redirectUris: [`${origin}/auth/google/callback`], identities: [{ email: 'bench.staff@gradepass.test', name: 'Bench Staff' }] },
+  });
+  const { pool } = createDb(pg.url('bench'), 2);
+  let server: ChildProcess | undefined;
+  try {
+    await ensureDatabase(pg.url('postgres'), 'bench');
+    await applyMigrations(pg.url('bench'));
+    const started = Date.now();
+    const seeded = await seedQueue(pool);
+    console.log(`seeded ${seeded.requests} requests and ${seeded.events} events in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+
+    const env = { ...process.env, ...standInEnv(standIns, { appOrigin: origin, port, databaseUrl: pg.url('bench') }), NODE_ENV: 'production', LOG_LEVEL: 'silent', RUN_WORKERS: 'false' };
+    server = fork(fileURLToPath(new URL('queue-bench-server.ts', import.meta.url)), { env, execArgv: ['--import', 'tsx', ...(process.env.BENCH_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`] : [])] });
+    await new Promise<void>((resolve, reject) => {
+      server!.once('message', () => resolve());
+      server!.once('exit', (code) => reject(new Error(`the app exited (${code}) before it was ready`)));
+    });
+    const cookie = await signInCookie(origin, 'bench.staff@gradepass.test');
+
+    const [place] = (await pool.query("select id from jurisdictions where name = 'Fenwick County'")).rows as { id: string }[];
+    const targets: [string, string][] = [
+      ['floor (session + select 1)', '/bench/floor'],
+      ['queue: waiting on us, by time in status', '/api/queue?waiting=true&sort=waiting&limit=50'],
+      ['queue: submitted in one authority, by applicant', `/api/queue?status=submitted&jurisdiction=${place.id}&sort=applicant&limit=50`],
+      ['queue: search "quarry ridge", newest first', '/api/queue?q=quarry%20ridge&sort=created&dir=desc&limit=50'],
+    ];
+    for (const [, target] of targets) await measureWarm(origin + target, cookie);
+    const results = [];
+    for (const [label, target] of targets) results.push({ label, ...(await measure(origin + target, cookie)) });
+    const floor = results[0];
+    console.log(`\n${connections} connections, ${seconds} s each; the app in its own process (on ${os.cpus().length} cores shared with PostgreSQL and the load generator)`);
+    console.log('endpoint'.padEnd(52), 'p50 ms'.padStart(8), 'p95 ms'.padStart(8), 'req/s'.padStart(8), 'p95/floor'.padStart(10), 'non-200'.padStart(8));
+    for (const r of results) {
+      console.log(r.label.padEnd(52), r.p50.toFixed(1).padStart(8), r.p95.toFixed(1).padStart(8), r.rps.toFixed(0).padStart(8),
+        (r.p95 / floor.p95).toFixed(2).padStart(10), String(r.errors).padStart(8));
+    }
+    const main = results[1];
+    console.log(`load average while measuring (other work on this machine shows here): ${os.loadavg().map((l) => l.toFixed(2)).join(' ')}`);
+    console.log(`\ntarget: p95 < 50 ms and within 3x of the floor -> queue p95 ${main.p95.toFixed(1)} ms, ${(main.p95 / floor.p95).toFixed(2)}x the floor`);
+  } finally {
+    if (server && server.exitCode === null) {
+      const exited = new Promise((resolve) => server!.once('exit', resolve));
+      server.kill('SIGTERM');
+      await exited;
+    }
+    await pool.end();
+    await standIns.stop();
+    pg.stop();
+    rmSync(dir, { recursive: true, force: true });
+  }
+}
+
+async function measureWarm(url: string, cookie: string) {
+  await new Promise<void>((resolve, reject) => autocannon({ url, connections, duration: 2, headers: { cookie } }, (e) => (e ? reject(e) : resolve())));
+}
+
+main().catch((error: unknown) => {
+  console.error(error);
+  process.exit(1);
+});
