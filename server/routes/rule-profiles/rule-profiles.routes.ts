@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { commonRuralTemplate, ruleProfileSchema } from '../../../shared/engine';
+import { ruleProfileSchema } from '../../../shared/engine';
 import type { AppContext } from '../../context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
@@ -21,9 +21,8 @@ export const updateDraftInputSchema = z.strictObject({
 export function ruleProfilesRouter({ db }: AppContext) {
   const router = Router();
   const admin = requireRole('admin');
-  router.use(['/api/jurisdictions', '/api/rule-profile-versions', '/api/rule-profile-template'], requireRole(...officeRoles));
+  router.use(['/api/jurisdictions', '/api/rule-profile-versions'], requireRole(...officeRoles));
 
-  router.get('/api/rule-profile-template', handle({}, async () => ({ profile: commonRuralTemplate })));
   router.get('/api/jurisdictions', handle({}, async () => ({ jurisdictions: await listJurisdictions(db) })));
   router.post('/api/jurisdictions', admin, handle({ body: createJurisdictionInputSchema }, async ({ body, user, res }) => {
     res.status(201);

@@ -29,7 +29,32 @@ export const gradeCheckInputsSchema = checkEntranceInputSchema.extend({
   road: roadPartSchema.optional(),
   laser: laserSetupInputSchema.optional(),
   design: designPartSchema.optional(),
+}).superRefine((inputs, ctx) => {
+  // The engine accepts survey-sized and far larger profiles; a saved check is run inside a web request, so it is
+  // held to what a driveway survey needs and the least-earth solve stays well under a second.
+  for (const [path, profile] of [[['profile'], inputs.profile], [['design', 'existing'], inputs.design?.existing]] as const) {
+    if (profile && shotCount(profile) > MAX_SHOTS) ctx.addIssue({ code: 'custom', path: [...path], message: `a grade check takes at most ${MAX_SHOTS} shots` });
+  }
+  const steps = spanFt(inputs.profile) / inputs.scrapeStepFt;
+  if (steps > MAX_SCRAPE_STEPS) ctx.addIssue({ code: 'custom', path: ['scrapeStepFt'], message: `too fine for a profile this long: use at least ${Math.ceil((spanFt(inputs.profile) / MAX_SCRAPE_STEPS) * 100) / 100} ft` });
 });
+
+const MAX_SCRAPE_STEPS = 50_000;
+
+function spanFt(profile: z.output<typeof checkEntranceInputSchema>['profile']): number {
+  if (!Array.isArray(profile) && profile.kind === 'segment-grades') return profile.segments.reduce((sum, seg) => sum + seg.lengthFt, 0);
+  const stations = (Array.isArray(profile) ? profile : profile.kind === 'elevations' ? profile.points : profile.readings).map((p) => p.stationFt);
+  return Math.max(...stations) - Math.min(...stations);
+}
+
+const MAX_SHOTS = 500;
+
+function shotCount(profile: z.output<typeof checkEntranceInputSchema>['profile']): number {
+  if (Array.isArray(profile)) return profile.length;
+  if (profile.kind === 'elevations') return profile.points.length;
+  if (profile.kind === 'rod-readings') return profile.readings.length;
+  return profile.segments.length + 1;
+}
 export type GradeCheckInputs = z.output<typeof gradeCheckInputsSchema>;
 
 export interface GradeCheckResults {
