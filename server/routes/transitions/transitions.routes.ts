@@ -5,7 +5,7 @@ import type { AppContext } from '../../context';
 import { conflict } from '../../lib/errors';
 import { handle, uuidParam } from '../../lib/handle';
 import { loadVisibleRequest } from '../../services/requests/request-access';
-import { toRequestView } from '../../services/requests/request-view';
+import { requestView } from '../requests/request-view';
 import { actionPatch, runTransitionEffects, type EffectInput } from '../../services/requests/transition-effects';
 import { applyTransition, type TransitionInput } from '../../services/requests/transition.service';
 import { readNeeds, transitionInputSchema } from './transition-input';
@@ -36,7 +36,7 @@ export function transitionsRouter({ db, env }: AppContext) {
       },
     };
     const { request } = await applyTransition(transitionCtx, user, input);
-    return { request: toRequestView(request) };
+    return { request: requestView(request, user) };
   }));
   return router;
 }
