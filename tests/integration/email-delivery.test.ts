@@ -5,6 +5,8 @@ import { eq, inArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startStandIns, type StandIns, type StoredMessage } from '../../fakes';
 import { emails } from '../../server/db/schema';
+import { closeContext, createContext } from '../../server/context-factory';
+import { parseEnv } from '../../server/env';
 import { startWorkers, type Workers } from '../../server/workers';
 import { messageIdFor } from '../../server/workers/email-delivery';
 import { signInCast, type Cast } from '../factories/office-cast';
@@ -128,5 +130,18 @@ describe('e-mail delivery', () => {
       (await caught()).some((m) => m.messageId === messageIdFor(email.id, t.ctx.env.MAIL_FROM)));
     const [sent] = await t.ctx.db.select().from(emails).where(eq(emails.id, email.id));
     expect(sent).toMatchObject({ status: 'sent', attempts: 3 });
+  });
+
+  it('sends each message once when two instances run workers on the same database', async () => {
+    await workers?.stop();
+    const second = createContext(parseEnv(t.env));
+    const [one, two] = await Promise.all([startWorkers(t.ctx, { email: fast }), startWorkers(second, { email: fast })]);
+    workers = { stop: async () => { await Promise.all([one.stop(), two.stop()]); await closeContext(second); } };
+    const ids = [...(await threeTransitions()), ...(await threeTransitions()), ...(await threeTransitions())];
+    const expected = ids.map((id) => messageIdFor(id, t.ctx.env.MAIL_FROM));
+    await until('all nine to arrive', async () => (await caught()).filter((m) => expected.includes(m.messageId)).length >= 9);
+    await new Promise((r) => setTimeout(r, 2000));
+    const mine = (await caught()).filter((m) => expected.includes(m.messageId));
+    expect(mine.map((m) => m.messageId).sort()).toEqual([...expected].sort());
   });
 });
