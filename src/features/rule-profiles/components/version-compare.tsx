@@ -9,6 +9,7 @@ const text = (v: unknown) => (v === undefined || v === null || v === '' ? '—' 
 export function VersionCompare({ versions }: { versions: ProfileVersion[] }) {
   const [leftId, setLeftId] = useState(versions[1]?.id ?? versions[0]?.id ?? '');
   const [rightId, setRightId] = useState(versions[0]?.id ?? '');
+  const [onlyChanges, setOnlyChanges] = useState(true);
   const left = versions.find((v) => v.id === leftId);
   const right = versions.find((v) => v.id === rightId);
   const pick = (label: string, value: string, onChange: (id: string) => void) => (
@@ -30,12 +31,15 @@ export function VersionCompare({ versions }: { versions: ProfileVersion[] }) {
   return (
     <div className="space-y-3">
       <div className="grid gap-3 sm:grid-cols-2">{pick('From', leftId, setLeftId)}{pick('To', rightId, setRightId)}</div>
-      <p className="text-sm text-stone-600">{changed === 0 ? 'No values or sources differ.' : `${changed} ${changed === 1 ? 'value differs' : 'values differ'}.`}</p>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <p className="text-sm text-stone-600">{changed === 0 ? 'No values or sources differ.' : `${changed} ${changed === 1 ? 'value differs' : 'values differ'}.`}</p>
+        <label className="flex items-center gap-2 text-sm"><input type="checkbox" checked={onlyChanges} onChange={(e) => setOnlyChanges(e.target.checked)} />Only what changed</label>
+      </div>
       <div className="overflow-x-auto">
         <table className="w-full text-sm" aria-label="Version differences">
           <thead><tr className="border-b border-stone-300 text-left text-stone-600"><th>Value</th><th>Version {left?.version}</th><th>Version {right?.version}</th></tr></thead>
           <tbody>
-            {rows.map(({ f, a, b, changed: isChanged }) => (
+            {rows.filter((r) => r.changed || !onlyChanges).map(({ f, a, b, changed: isChanged }) => (
               <tr key={f.path} data-changed={isChanged} className={`border-b border-stone-100 align-top ${isChanged ? 'bg-amber-50' : ''}`}>
                 <td className="py-1 pr-2">{f.label}{f.unit ? ` (${f.unit})` : ''}</td>
                 <td className="pr-2"><span className="font-mono">{text(a.value)}</span><span className="block text-xs text-stone-500">{a.source}</span></td>
