@@ -79,4 +79,18 @@ describe('the office asks for details and the owner answers', () => {
     await office.getByText('It is 15 in, and the ditch is about 2 ft deep.').waitFor();
     await shot(office, 'office-workspace-answered');
   });
+
+  it('fits a phone: the queue becomes cards with an order picker, and a request opens from one', async () => {
+    const phone = await (await session.browser.newContext({ viewport: { width: 390, height: 844 } })).newPage();
+    await signInAs(phone, staff.email);
+    await phone.goto(appUrl('/office/queue'));
+    await phone.getByLabel('Order').selectOption('reference:asc');
+    await phone.waitForURL((url) => url.searchParams.get('sort') === 'reference');
+    expect(await phone.getByRole('table').count()).toBe(0);
+    await phone.getByRole('link', { name: request.reference }).click();
+    await phone.getByRole('heading', { name: request.reference }).waitFor();
+    const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    expect(overflow).toBeLessThanOrEqual(0);
+    await shot(phone, 'office-workspace-phone');
+  });
 });

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
-import type { Role } from '@shared/workflow/statuses';
+import { statusText, type Role } from '@shared/workflow/statuses';
 import { allowedTransitions, type Transition } from '@shared/workflow/transitions';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
@@ -31,7 +31,7 @@ export function ActionPanel({ request, role }: { request: OfficeRequest; role: R
           error={run.error}
           onCancel={() => { setOpen(null); run.reset(); }}
           onSubmit={(input) => run.mutate(input, {
-            onSuccess: () => { setDone(`${open.label}: the request is now “${open.to.replaceAll('_', ' ')}”.`); setOpen(null); },
+            onSuccess: () => { setDone(`${open.label}: the request is now “${statusText[open.to].label}”.`); setOpen(null); },
           })}
         />
       ) : (

@@ -1,6 +1,7 @@
 import { Button } from '@/components/ui/button';
 import { ErrorNotice, Loading, Notice } from '@/components/ui/notice';
 import { useQueue } from '../api/get-queue';
+import { QueueCards } from './queue-cards';
 import { QueueFilterBar } from './queue-filters';
 import { QueueTable } from './queue-table';
 import { useQueueUrl } from './queue-url-state';
@@ -22,7 +23,14 @@ export function OfficeQueue({ meId }: { meId: string }) {
             {queue.isFetching && ' Updating…'}
           </p>
           {page.requests.length > 0
-            ? <QueueTable rows={page.requests} filters={filters} meId={meId} onSort={(sort, dir) => update({ sort, dir })} />
+            ? (
+              <>
+                <div className="hidden md:block">
+                  <QueueTable rows={page.requests} filters={filters} meId={meId} onSort={(sort, dir) => update({ sort, dir })} />
+                </div>
+                <div className="md:hidden"><QueueCards rows={page.requests} meId={meId} /></div>
+              </>
+            )
             : <Notice title="Nothing here">Try another status or clear the search.</Notice>}
           <nav aria-label="Queue pages" className="flex items-center gap-3">
             <Button variant="secondary" disabled={pageNumber === 1} onClick={previousPage}>Previous page</Button>

@@ -2,11 +2,17 @@ import { useEffect, useState, type FormEvent } from 'react';
 import { statusText, type RequestStatus } from '@shared/workflow/statuses';
 import { Button } from '@/components/ui/button';
 import { useQueueOptions } from '../api/get-queue-options';
-import type { QueueFilters } from '../api/types';
+import type { QueueFilters, QueueSort } from '../api/types';
 
 const officeStatuses: RequestStatus[] = [
   'submitted', 'needs_details', 'visit_booked', 'checked', 'permit_filed', 'permit_granted', 'permit_refused',
   'released', 'crew_assigned', 'under_construction', 'built', 'closed', 'declined', 'withdrawn',
+];
+
+// On a phone the table's sortable headers give way to cards, so the order is chosen here instead.
+const sortChoices: [string, string][] = [
+  ['waiting:asc', 'Longest in status first'], ['waiting:desc', 'Newest in status first'], ['reference:asc', 'Reference'],
+  ['applicant:asc', 'Applicant A–Z'], ['road:asc', 'Road A–Z'], ['created:desc', 'Newest requests first'],
 ];
 
 const select = 'rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm';
@@ -47,6 +53,13 @@ export function QueueFilterBar({ filters, onChange }: { filters: QueueFilters; o
             <option value="me">Me</option>
             <option value="none">Nobody</option>
             {options?.people.map((p) => <option key={p.id} value={p.id}>{p.name}</option>)}
+          </select>
+        </label>
+        <label className="flex flex-col gap-1 text-sm font-semibold text-stone-800 md:hidden">
+          Order
+          <select className={select} value={`${filters.sort}:${filters.dir}`}
+            onChange={(e) => { const [sort, dir] = e.target.value.split(':'); onChange({ sort: sort as QueueSort, dir: dir as 'asc' | 'desc' }); }}>
+            {sortChoices.map(([value, label]) => <option key={value} value={value}>{label}</option>)}
           </select>
         </label>
         <label className="flex items-center gap-2 pb-1.5 text-sm font-semibold text-stone-800">

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { StatusBadge } from '@/components/ui/status-badge';
 import type { OfficeRequest } from '../api/types';
 import { AssignControl } from './assign-control';
@@ -5,7 +6,7 @@ import { formatWhen, timeInStatus } from './time-in-status';
 
 /** The few facts the office checks first, above the full application. */
 export function RequestFacts({ request, meId }: { request: OfficeRequest; meId: string }) {
-  const rows: [string, React.ReactNode][] = [
+  const rows: [string, ReactNode][] = [
     ['Status', <span key="s" className="flex flex-wrap items-center gap-2"><StatusBadge status={request.status} /><span className="text-stone-500">for {timeInStatus(request.statusChangedAt)}</span></span>],
     ['Applicant', request.applicantName || '—'],
     ['Site', request.siteAddress || '—'],

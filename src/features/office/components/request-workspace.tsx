@@ -65,7 +65,7 @@ export function RequestWorkspace({ requestId, me, renderApplication }: Workspace
           {tab === 'messages' && <Panel title="Messages"><MessageThread requestId={request.id} /></Panel>}
           {tab === 'history' && <Panel title="History"><HistoryList requestId={request.id} /></Panel>}
         </div>
-        <aside className="space-y-4">
+        <aside className="order-first space-y-4 lg:order-none">
           <Panel title="Next step">
             <p className="mb-3 text-sm text-stone-600">{request.whatNext}</p>
             <ActionPanel request={request} role={me.role} />
