@@ -32,8 +32,10 @@ export function CulvertFields({ culvert, errors, onChange }: { culvert: Culvert;
           <ChoiceBox label="Pipe material" value={materials.some(([n]) => n === culvert.manningN) ? culvert.manningN : 'other'} options={[...materials, ['other', 'Other (type n)']]} onChange={(n) => onChange({ manningN: n === 'other' ? '' : n })} />
           <NumberBox label="Manning's n" value={culvert.manningN} error={e('manningN')} onChange={(manningN) => onChange({ manningN })} />
           <NumberBox label="Flowline (invert) at the inlet (ft)" value={culvert.inletInvertFt} error={e('inletInvertFt')} onChange={(inletInvertFt) => onChange({ inletInvertFt })} />
+          <NumberBox label="or ditch depth at the inlet (ft)" hint="Below the road edge; used when the flowline is blank" value={culvert.inletDitchDepthFt} onChange={(inletDitchDepthFt) => onChange({ inletDitchDepthFt })} />
           <NumberBox label="Flowline (invert) at the outlet (ft)" value={culvert.outletInvertFt} error={e('outletInvertFt')} onChange={(outletInvertFt) => onChange({ outletInvertFt })} />
-          <NumberBox label="Driveway surface over the pipe (ft)" hint="Sets the cover and the ditch depth at each end" value={culvert.surfaceElevationFt} error={e('surfaceElevationFt')} onChange={(surfaceElevationFt) => onChange({ surfaceElevationFt })} />
+          <NumberBox label="or ditch depth at the outlet (ft)" hint="Below the road edge; used when the flowline is blank" value={culvert.outletDitchDepthFt} onChange={(outletDitchDepthFt) => onChange({ outletDitchDepthFt })} />
+          <NumberBox label="Driveway surface over the pipe (ft)" hint="Sets the cover and the pipe length" value={culvert.surfaceElevationFt} error={e('surfaceElevationFt')} onChange={(surfaceElevationFt) => onChange({ surfaceElevationFt })} />
           <NumberBox label="Pipe length (ft)" hint="Blank: the check says what length to order" value={culvert.lengthFt} error={e('lengthFt')} onChange={(lengthFt) => onChange({ lengthFt })} />
           <ChoiceBox label="Flow" value={culvert.flow} options={[['design', 'Design flow given'], ['rational', 'From the drainage area (rational method)']]} onChange={(flow) => onChange({ flow })} />
           {culvert.flow === 'design' ? (

@@ -1,4 +1,4 @@
-import type { CheckEntranceInput, LaserSetupInput, ProfileInput, ProposeProfileInput, RuleProfile } from '@shared/engine';
+import { elevationAt, normalizeProfile, type CheckEntranceInput, type LaserSetupInput, type ProfileInput, type ProposeProfileInput, type RuleProfile } from '@shared/engine';
 import type { HaulChoice } from '@shared/charts/cut-fill-table';
 import { laserFromProfile } from './laser-from-profile';
 import { type FieldErrors, readNumber, readStation } from './read-number';
@@ -35,7 +35,28 @@ function readCentreline(s: SurveyState['centreline'], errors: FieldErrors): Prof
   return { kind: 'rod-readings', instrumentHeightFt, readings: ok.map((p) => ({ stationFt: p.stationFt, rodFt: p.value })) };
 }
 
-function readCulvert(c: SurveyState['culvert'], errors: FieldErrors, topWidthFt?: number, sideSlopeHPerV?: number): CheckEntranceInput['culvert'] {
+/** A flowline typed as an elevation, or as the ditch's depth below the road edge there. */
+function readFlowline(elevation: string, depth: string, key: string, edgeFt: number | undefined, errors: FieldErrors) {
+  if (elevation.trim() || !depth.trim()) return readNumber(elevation, `culvert.${key}`, errors, true);
+  const depthFt = readNumber(depth, `culvert.${key}`, errors, true);
+  if (depthFt === undefined) return undefined;
+  if (edgeFt === undefined) {
+    errors[`culvert.${key}`] = 'needs the road-edge elevation to turn a ditch depth into a flowline';
+    return undefined;
+  }
+  return Math.round((edgeFt - depthFt) * 1000) / 1000;
+}
+
+function groundAt(profile: ProfileInput | undefined, stationFt: number | undefined) {
+  if (!profile || stationFt === undefined) return undefined;
+  try {
+    return elevationAt(normalizeProfile(profile), stationFt);
+  } catch {
+    return undefined;
+  }
+}
+
+function readCulvert(c: SurveyState['culvert'], errors: FieldErrors, edgeFt: number | undefined, topWidthFt?: number, sideSlopeHPerV?: number): CheckEntranceInput['culvert'] {
   if (!c.present) return undefined;
   const n = (text: string, key: string, required = false) => readNumber(text, `culvert.${key}`, errors, required);
   const drainage = c.flow === 'rational'
@@ -43,7 +64,8 @@ function readCulvert(c: SurveyState['culvert'], errors: FieldErrors, topWidthFt?
     : undefined;
   const culvert = {
     diameterIn: n(c.diameterIn, 'diameterIn', true), inlet: c.inlet as NonNullable<CheckEntranceInput['culvert']>['inlet'], manningN: n(c.manningN, 'manningN', true),
-    inletInvertFt: n(c.inletInvertFt, 'inletInvertFt', true), outletInvertFt: n(c.outletInvertFt, 'outletInvertFt', true),
+    inletInvertFt: readFlowline(c.inletInvertFt, c.inletDitchDepthFt, 'inletInvertFt', edgeFt, errors),
+    outletInvertFt: readFlowline(c.outletInvertFt, c.outletDitchDepthFt, 'outletInvertFt', edgeFt, errors),
     surfaceElevationFt: n(c.surfaceElevationFt, 'surfaceElevationFt'), lengthFt: n(c.lengthFt, 'lengthFt'), topWidthFt, sideSlopeHPerV,
     designFlowCfs: c.flow === 'design' ? n(c.designFlowCfs, 'designFlowCfs') : undefined,
     drainage: drainage as { runoffC: number; intensityInPerHr: number; areaAcres: number } | undefined,
@@ -74,7 +96,7 @@ export function buildInputs(s: SurveyState, rules: RuleProfile | undefined): { i
     distanceToIntersectionFt: readNumber(g.distanceToIntersectionFt, 'geometry.distanceToIntersectionFt', errors),
     distanceToPropertyLineFt: readNumber(g.distanceToPropertyLineFt, 'geometry.distanceToPropertyLineFt', errors),
   };
-  const culvert = readCulvert(s.culvert, errors, topWidthFt, sideSlopeHPerV);
+  const culvert = readCulvert(s.culvert, errors, edgeElevation ?? groundAt(surveyed, roadEdgeStationFt), topWidthFt, sideSlopeHPerV);
   const receiverOffsetFt = readNumber(s.laser.receiverOffsetFt, 'laser.receiverOffsetFt', errors, true);
   const stakes = s.laser.stakes.map((k, i) => ({
     label: k.label.trim() || `Stake ${i + 1}`, offsetFt: readNumber(k.offsetFt, `laser.stakes.${i}.offsetFt`, errors, true) ?? 0,

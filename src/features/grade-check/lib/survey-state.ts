@@ -14,6 +14,7 @@ export interface SurveyState {
   centreline: { mode: CentrelineMode; instrumentHeightFt: string; startStation: string; startElevationFt: string; rows: CentrelineRow[] };
   culvert: {
     present: boolean; diameterIn: string; inlet: string; manningN: string; inletInvertFt: string; outletInvertFt: string;
+    inletDitchDepthFt: string; outletDitchDepthFt: string;
     surfaceElevationFt: string; lengthFt: string; flow: 'design' | 'rational'; designFlowCfs: string; areaAcres: string; runoffC: string; intensityInPerHr: string;
   };
   geometry: { topWidthFt: string; sideSlopeHPerV: string; flareRadiusFt: string; distanceToIntersectionFt: string; distanceToPropertyLineFt: string };
@@ -30,7 +31,7 @@ export function initialSurvey(speedMph?: number | null): SurveyState {
     road: { gradePercent: '0', rises: 'right', edgeElevationFt: '', edgeStation: '0+00', crossSlopePercent: '', speedMph: speedMph ? String(speedMph) : '', sightLeftFt: '', sightRightFt: '', movements: 'all' },
     centreline: { mode: 'elevations', instrumentHeightFt: '', startStation: '0+00', startElevationFt: '', rows: [emptyRow(), emptyRow(), emptyRow()] },
     culvert: {
-      present: false, diameterIn: '18', inlet: 'cmp-projecting', manningN: '0.024', inletInvertFt: '', outletInvertFt: '', surfaceElevationFt: '',
+      present: false, diameterIn: '18', inlet: 'cmp-projecting', manningN: '0.024', inletInvertFt: '', outletInvertFt: '', inletDitchDepthFt: '', outletDitchDepthFt: '', surfaceElevationFt: '',
       lengthFt: '', flow: 'design', designFlowCfs: '', areaAcres: '', runoffC: '', intensityInPerHr: '',
     },
     geometry: { topWidthFt: '12', sideSlopeHPerV: '2', flareRadiusFt: '', distanceToIntersectionFt: '', distanceToPropertyLineFt: '' },
