@@ -45,6 +45,7 @@ describe('two office people changing one request at once', () => {
     const stale = await cast.otherStaff.agent.post(`/api/requests/${row.id}/transitions`)
       .send({ action: 'decline', note: 'Too close to the bend.', expectedVersion: row.version + 1 }).expect(409);
     expect(stale.body.error.message).toContain('version');
+    expect(stale.body.error.message).toContain('(submitted)');
     const [after] = await t.ctx.db.select().from(requests).where(eq(requests.id, row.id));
     expect(after).toMatchObject({ status: 'submitted', version: row.version + 2 });
     expect(await t.ctx.db.select().from(emails).where(eq(emails.requestId, row.id))).toHaveLength(2);

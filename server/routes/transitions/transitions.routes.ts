@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { statusText } from '../../../shared/workflow/statuses';
 import { allowedTransitions } from '../../../shared/workflow/transitions';
 import type { AppContext } from '../../context';
-import { conflict } from '../../lib/errors';
+import { AppError, conflict } from '../../lib/errors';
 import { handle, uuidParam } from '../../lib/handle';
 import { loadVisibleRequest } from '../../services/requests/request-access';
 import { requestView } from '../requests/request-view';
@@ -35,8 +35,20 @@ export function transitionsRouter({ db, env }: AppContext) {
         input.emailDetail = effects.emailDetail;
       },
     };
-    const { request } = await applyTransition(transitionCtx, user, input);
-    return { request: requestView(request, user) };
+    try {
+      const { request } = await applyTransition(transitionCtx, user, input);
+      return { request: requestView(request, user) };
+    } catch (error) {
+      throw await withCurrentStatus(error, () => loadVisibleRequest(db, user, params.id));
+    }
   }));
   return router;
+}
+
+/** A refused change (stale version, lost race) says where the request stands now, so the reader knows what to reload. */
+async function withCurrentStatus(error: unknown, load: () => Promise<{ status: keyof typeof statusText }>) {
+  if (!(error instanceof AppError) || error.status !== 409) return error;
+  const { status } = await load();
+  if (error.message.includes(`(${status})`)) return error;
+  return conflict(`${error.message} It is now "${statusText[status].label}" (${status}).`);
 }
