@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { EntranceStep, SiteStep } from '@shared/requests/application-schema';
 import { api } from '@/lib/api-client';
+import { getMyRequestsQueryOptions } from './get-my-requests';
 import { getRequestQueryOptions } from './get-request';
 import type { RequestDetail } from './types';
 
@@ -29,6 +30,7 @@ export function useSaveDraft() {
     mutationFn: saveDraft,
     onSuccess: ({ request }) => {
       queryClient.setQueryData(getRequestQueryOptions(request.id).queryKey, (old) => (old ? { ...old, request } : old));
+      return queryClient.invalidateQueries({ queryKey: getMyRequestsQueryOptions().queryKey, exact: true });
     },
   });
 }

@@ -8,6 +8,14 @@ export const numberOrNull = (value: unknown) => {
   return Number(String(value).trim().replace(',', '.'));
 };
 
+/**
+ * A half-filled step for a draft save: unanswered choices come out of the form as null, and a draft leaves
+ * them out instead (a saved step is replaced whole, so a missing answer is simply not given yet).
+ */
+export function answeredOnly<T extends object>(values: T): Partial<T> {
+  return Object.fromEntries(Object.entries(values).filter(([, v]) => v !== null && v !== undefined)) as Partial<T>;
+}
+
 /** The server names fields like `site.address`: split them by wizard step, without the step's prefix. */
 export function fieldsByStep(error: unknown): Record<'site' | 'entrance', Record<string, string>> | null {
   if (!(error instanceof ApiError) || Object.keys(error.fields).length === 0) return null;

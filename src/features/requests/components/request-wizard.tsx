@@ -12,7 +12,7 @@ import { saveDraftOnExit, useSaveDraft } from '../api/save-draft';
 import type { RequestDetail } from '../api/types';
 import { ApplicationSummary } from './application-summary';
 import { EntranceStepForm } from './entrance-step';
-import { fieldsByStep } from './form-helpers';
+import { answeredOnly, fieldsByStep } from './form-helpers';
 import { SiteStepForm } from './site-step';
 import { StepButtons } from './step-buttons';
 import { WizardProgress, wizardSteps } from './wizard-progress';
@@ -71,7 +71,7 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
     const pending = () => {
       const snap = snapshot.current?.();
       const key = step === 0 ? 'site' : step === 1 ? 'entrance' : null;
-      return snap?.dirty && key ? { id: request.id, expectedVersion: version.current, [key]: snap.values } : null;
+      return snap?.dirty && key ? { id: request.id, expectedVersion: version.current, [key]: answeredOnly(snap.values) } : null;
     };
     const onPageHide = () => { const change = pending(); if (change) saveDraftOnExit(change); };
     window.addEventListener('pagehide', onPageHide);
@@ -85,7 +85,7 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
   async function persist(change: { site?: SiteStep | Partial<SiteStep>; entrance?: EntranceStep | Partial<EntranceStep> }, nextStep: number) {
     setProblem(null);
     try {
-      const saved = await save.mutateAsync({ id: request.id, expectedVersion: version.current, wizardStep: nextStep, ...change });
+      const saved = await saveKeepingScreen({ id: request.id, wizardStep: nextStep, ...change });
       version.current = saved.request.version;
       snapshot.current = null;
       setServerFields(null);
@@ -94,6 +94,20 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
       const fields = fieldsByStep(error);
       if (fields) setServerFields(fields);
       else await showConflict(error);
+    }
+  }
+
+  // The person's own last save from a closing tab can land after the page reloaded, so the version moved on
+  // by their own hand: what is on screen now is their latest word, and it is saved over it once.
+  async function saveKeepingScreen(change: Omit<Parameters<typeof save.mutateAsync>[0], 'expectedVersion'>) {
+    try {
+      return await save.mutateAsync({ ...change, expectedVersion: version.current });
+    } catch (error) {
+      if (!(error instanceof ApiError && error.status === 409)) throw error;
+      const fresh = await queryClient.fetchQuery({ ...getRequestQueryOptions(request.id), staleTime: 0 });
+      if (fresh.request.status !== 'draft' && fresh.request.status !== 'needs_details') throw error;
+      version.current = fresh.request.version;
+      return save.mutateAsync({ ...change, expectedVersion: version.current });
     }
   }
 
@@ -124,7 +138,7 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
   const latest = queryClient.getQueryData(getRequestQueryOptions(request.id).queryKey)?.request ?? request;
   const usePosition = async (lat: number, lng: number) => {
     const site = { ...latest.application.site, positionKind: 'coordinates' as const, siteLat: lat, siteLng: lng };
-    const saved = await save.mutateAsync({ id: request.id, expectedVersion: version.current, site });
+    const saved = await saveKeepingScreen({ id: request.id, site });
     version.current = saved.request.version;
   };
   const stepKey = `${step}-${reloads}`;
@@ -143,7 +157,7 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
         )}
         {step === 1 && (
           <EntranceStepForm key={stepKey} initial={latest.application.entrance ?? {}} serverFields={serverFields?.entrance} saving={busy}
-            snapshot={snapshot as never} onNext={(entrance) => persist({ entrance }, 2)} onBack={(entrance) => persist({ entrance }, 0)} />
+            snapshot={snapshot as never} onNext={(entrance) => persist({ entrance }, 2)} onBack={(entrance) => persist({ entrance: answeredOnly(entrance) }, 0)} />
         )}
         {step === 2 && (
           <form noValidate onSubmit={(e) => { e.preventDefault(); void persist({}, 3); }} className="space-y-5" aria-label="Photos">
