@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { buildInputs } from '../../src/features/grade-check/lib/build-inputs';
 import { parsePastedCentreline } from '../../src/features/grade-check/lib/paste-centreline';
 import { initialSurvey, type SurveyState } from '../../src/features/grade-check/lib/survey-state';
+import { surveyFromInputs } from '../../src/features/grade-check/lib/survey-from-inputs';
 import { runLiveCheck } from '../../src/features/grade-check/lib/use-live-check';
 import { demoJurisdictions } from '../../server/db/seed/jurisdictions';
 import { parseGradeCheckInputs, runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
@@ -51,5 +52,21 @@ describe('survey entry in the browser', () => {
     expect(applied.results?.report.passes).toBe(true);
     const server = runGradeCheck(parseGradeCheckInputs(JSON.parse(JSON.stringify(applied.inputs))), marrow);
     expect(JSON.parse(JSON.stringify(server))).toEqual(JSON.parse(JSON.stringify(applied.results)));
+  });
+
+  it('puts a saved check back in the form so a new survey starts from it', () => {
+    const s = survey('0+00\t4.00\n0+20\t2.90\n0+60\t-1.90', (st) => {
+      st.centreline.mode = 'rod-readings';
+      st.centreline.instrumentHeightFt = '104';
+      st.road.gradePercent = '2.5';
+      st.road.rises = 'left';
+      st.laser.stakes = [{ key: 'a', label: 'CL 0+40', offsetFt: '0', distanceFt: '40', rodReadingFt: '5.5' }];
+      Object.assign(st.culvert, { present: true, inletInvertFt: '98', outletInvertFt: '97.7', flow: 'rational', areaAcres: '2', runoffC: '0.3', intensityInPerHr: '4' });
+      st.design.proposed = true;
+    });
+    const first = runLiveCheck(s, marrow);
+    const applied = { ...s, design: { ...s.design, applied: first.results!.proposal!.profile } };
+    const { inputs } = buildInputs(applied, marrow);
+    expect(buildInputs(surveyFromInputs(inputs!), marrow).inputs).toEqual(inputs);
   });
 });

@@ -22,7 +22,7 @@ function GradeCheckPage({ id }: { id: string }) {
         actions={<><StatusBadge status={request.status} /><Link to={paths.office.request.getHref(request.id)} className="text-sm font-semibold text-pine-700 hover:underline">← Back to the request</Link></>}
       />
       <div className="space-y-6">
-        <GradeCheckWorkspace request={request} />
+        <GradeCheckWorkspace request={request} checks={checks} />
         <div className="grid gap-6 lg:grid-cols-2">
           <Panel title="Saved checks"><SavedChecks request={request} checks={checks} /></Panel>
           <Panel title="Documents"><DocumentsList requestId={request.id} canShare /></Panel>

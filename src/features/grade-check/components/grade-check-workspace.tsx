@@ -3,9 +3,10 @@ import { Button } from '@/components/ui/button';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
-import type { CheckRequestHeader } from '../api/get-grade-checks';
+import type { CheckRequestHeader, SavedCheck } from '../api/get-grade-checks';
 import { useProfileVersion, useRuleProfileChoices } from '../api/get-rule-profile-choices';
 import { useSaveGradeCheck } from '../api/save-grade-check';
+import { surveyFromInputs } from '../lib/survey-from-inputs';
 import { initialSurvey, type SurveyState } from '../lib/survey-state';
 import { useLiveCheck } from '../lib/use-live-check';
 import { CentrelineTable } from './centreline-table';
@@ -19,7 +20,7 @@ import { RuleProfilePicker } from './rule-profile-picker';
 import { StakesEditor } from './stakes-editor';
 
 /** Survey entry on the left, the live check on the right; saving asks the server to run and keep the check. */
-export function GradeCheckWorkspace({ request }: { request: CheckRequestHeader }) {
+export function GradeCheckWorkspace({ request, checks }: { request: CheckRequestHeader; checks: SavedCheck[] }) {
   const [survey, setSurvey] = useState<SurveyState>(() => initialSurvey(request.application.site?.postedSpeedMph));
   const choices = useRuleProfileChoices();
   const [jurisdictionId, setJurisdictionId] = useState(request.jurisdictionId ?? '');
@@ -47,6 +48,12 @@ export function GradeCheckWorkspace({ request }: { request: CheckRequestHeader }
       <div className="space-y-6">
         <Panel title="Rule profile">
           {choices.error ? <ErrorNotice error={choices.error} /> : <RuleProfilePicker choices={choices.data.jurisdictions} value={jurisdictionId} onChange={setJurisdictionId} />}
+          {checks.length > 0 && (
+            <div className="mt-4 flex flex-wrap gap-2">
+              <span className="self-center text-sm text-stone-600">Survey again from</span>
+              {checks.map((c) => <Button key={c.id} variant="secondary" onClick={() => { setSurvey(surveyFromInputs(c.inputs)); save.reset(); }}>check {c.number}</Button>)}
+            </div>
+          )}
         </Panel>
         <Panel title="The road"><RoadFields road={survey.road} errors={errors} onChange={update('road')} /></Panel>
         <Panel title="The centreline"><CentrelineTable centreline={survey.centreline} errors={errors} onChange={update('centreline')} /></Panel>
