@@ -29,7 +29,8 @@ export function SheetLaser({ laser }: { laser: LaserSheet }) {
       </div>
       <p><strong>Receiver offset:</strong> on grade reads <strong>{ft(laser.receiverOffsetFt)}</strong> on the rod. A shorter reading means cut, a longer one fill.</p>
       {laser.stakes.length > 0 && (
-        <table className="w-full border-collapse text-left">
+        // On a phone the seven columns scroll sideways rather than crushing the numbers.
+        <div className="overflow-x-auto print:overflow-visible"><table className="w-full min-w-[34rem] border-collapse text-left print:min-w-0">
           <caption className="text-left font-bold">Stakes</caption>
           <thead><tr className="border-b-2 border-stone-800">
             <th className="py-1 pr-2">Stake</th><th className="pr-2">Station</th><th className="pr-2">Offset</th><th className="pr-2">Setup</th>
@@ -48,7 +49,7 @@ export function SheetLaser({ laser }: { laser: LaserSheet }) {
               </tr>
             ))}
           </tbody>
-        </table>
+        </table></div>
       )}
     </div>
   );
