@@ -5,6 +5,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDb } from '../../server/db/client';
 import { demoPeople } from '../../server/db/seed/demo-people';
+import { saveYard } from '../../server/services/crew/yard.service';
 import { createReleasedJob } from '../factories/crew-jobs';
 import { ensurePerson } from '../factories/people';
 import { appUrl, launchBrowser, screenshotPath, signInAs } from '../setup/browser';
@@ -22,6 +23,8 @@ beforeAll(async () => {
   const job = await createReleasedJob(db.db, { applicantId: applicant.id, staffId: staff.id, siteLat: 44.1, siteLng: -72.6 });
   jobId = job.id;
   address = job.siteAddress;
+  // The same yard the owner's test types in, so the distance on the board holds whichever test runs first.
+  await saveYard(db.db, { label: 'Marrow Crossing yard', lat: 44, lng: -72.6 });
 });
 afterAll(async () => {
   await db?.pool.end();
@@ -37,6 +40,24 @@ async function shot(page: Page, name: string) {
 const crewLead = demoPeople.filter((p) => p.role === 'crew')[0];
 
 describe('a crew lead takes, plans, builds and verifies a released job', () => {
+  it('the owner sets the yard the board measures distances from', async () => {
+    const context = await session.browser.newContext();
+    const page = await context.newPage();
+    await signInAs(page, demoPeople.find((p) => p.role === 'admin')!.email);
+    await page.goto(appUrl('/crew/board'));
+    await page.getByLabel('Yard name').fill('Marrow Crossing yard');
+    await page.getByLabel('Latitude').fill('44.0');
+    await page.getByLabel('Longitude').fill('east');
+    await page.getByRole('button', { name: 'Save the yard' }).click();
+    await page.getByText('longitude is between -180 and 180').or(page.getByText(/must be a number/)).first().waitFor();
+    await page.getByLabel('Longitude').fill('-72.6');
+    await page.getByRole('button', { name: 'Save the yard' }).click();
+    await page.getByText('Yard saved').waitFor();
+    expect(await page.getByRole('button', { name: 'Take this job' }).count()).toBe(0);
+    await shot(page, 'owner-yard');
+    await context.close();
+  });
+
   it('works through the board, my jobs, the field sheet and the as-built screen', async () => {
     const context = await session.browser.newContext({ viewport: { width: 412, height: 915 }, isMobile: true, hasTouch: true });
     const page = await context.newPage();
@@ -45,6 +66,7 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     const card = page.getByRole('article').filter({ hasText: address }).filter({ has: page.getByText(/HT-ACC-/) }).last();
     await card.waitFor();
     await page.getByRole('button', { name: 'Nearest the yard first' }).click();
+    await card.getByText('6.9 miles in a straight line').waitFor();
     await shot(page, 'board');
     await card.getByRole('button', { name: 'Take this job' }).click();
     await page.waitForURL((u) => u.pathname === '/crew/my-jobs');
