@@ -5,6 +5,7 @@ import { PageHeader, Panel } from '@/components/ui/panel';
 import { paths } from '@/config/paths';
 import { CheckSummary } from '@/features/grade-check/components/check-summary';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
+import { PhotoStep } from '@/features/photos/components/photo-step';
 import { useRequest } from '@/features/requests/api/get-request';
 import { ApplicationSummary } from '@/features/requests/components/application-summary';
 import { RequestDocuments } from '@/features/requests/components/request-documents';
@@ -26,7 +27,7 @@ function RequestPage({ id }: { id: string }) {
         <div className="space-y-6">
           <Panel title="Where it stands"><RequestStatus request={request} editHref={paths.applicant.editRequest.getHref(id)} /></Panel>
           <Panel title="Messages with the office"><RequestMessages requestId={id} canWrite={request.status !== 'draft'} /></Panel>
-          <Panel title="Photos"><PhotoGallery requestId={id} editable={photosEditable.has(request.status)} /></Panel>
+          <Panel title="Photos">{photosEditable.has(request.status) ? <PhotoStep requestId={id} /> : <PhotoGallery requestId={id} />}</Panel>
           <Panel title="Your answers"><ApplicationSummary application={request.application} /></Panel>
         </div>
         <div className="space-y-6">

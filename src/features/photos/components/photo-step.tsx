@@ -11,7 +11,8 @@ const PhotoUploader = lazy(() => import('./photo-uploader'));
 
 interface PhotoStepProps {
   requestId: string;
-  onUsePosition: (lat: number, lng: number) => Promise<void>;
+  /** Absent once the answers can no longer change: then a photo's position is not offered. */
+  onUsePosition?: (lat: number, lng: number) => Promise<void>;
 }
 
 /** Adding photos: what the office needs to see, the upload area, and what is already stored. */
@@ -23,7 +24,7 @@ export function PhotoStep({ requestId, onUsePosition }: PhotoStepProps) {
   const [used, setUsed] = useState(false);
   const refresh = () => queryClient.invalidateQueries({ queryKey: getPhotosQueryOptions(requestId).queryKey });
   const accept = async () => {
-    if (!offer) return;
+    if (!offer || !onUsePosition) return;
     await onUsePosition(offer.lat, offer.lng);
     setUsed(true);
   };
@@ -33,7 +34,7 @@ export function PhotoStep({ requestId, onUsePosition }: PhotoStepProps) {
         Photos save the office a trip. Stand at the road edge where the entrance will go and take: the road to the left,
         the road to the right, the ditch, and the ground towards the house. Up to {maxPhotosPerRequest} photos.
       </p>
-      {offer && !used && (
+      {offer && onUsePosition && !used && (
         <Notice title="A photo knows where it was taken">
           <p>{offer.lat.toFixed(5)}, {offer.lng.toFixed(5)}. Use this as the position of the entrance? Only the position is kept, nothing else from the photo.</p>
           <Button variant="secondary" className="mt-2" onClick={() => void accept()}>Use this position</Button>

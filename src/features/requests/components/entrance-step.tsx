@@ -17,7 +17,7 @@ export function EntranceStepForm({ initial, serverFields, saving, snapshot, onNe
   const { register, handleSubmit, setError, getValues, formState: { errors, isDirty } } = useForm<z.input<typeof entranceStepSchema>, unknown, EntranceStep>({
     resolver: zodResolver(entranceStepSchema), defaultValues: { ...emptyEntrance, ...initial }, shouldFocusError: true,
   });
-  snapshot.current = () => ({ values: getValues() as Partial<EntranceStep>, dirty: isDirty });
+  snapshot.current = () => ({ values: getValues(), dirty: isDirty });
   useServerFields(serverFields, setError);
   // Registered in page order (not inside Field's render prop) so the first error to get focus is the topmost.
   const number = (name: 'drivewayLengthFt' | 'riseToHouseFt', label: string, hint: string) => {

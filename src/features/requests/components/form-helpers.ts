@@ -36,12 +36,14 @@ export function useServerFields<T extends FieldValues>(fields: Record<string, st
   }, [fields, setError]);
 }
 
+export interface StepSnapshot { values: object; dirty: boolean }
+
 export interface StepProps<T> {
   initial: Partial<T>;
   serverFields?: Record<string, string>;
   saving: boolean;
   /** Lets the wizard read unsaved answers when the person leaves the page. */
-  snapshot: RefObject<(() => { values: Partial<T>; dirty: boolean }) | null>;
+  snapshot: RefObject<(() => StepSnapshot) | null>;
   onNext: (values: T) => void;
   onBack?: (values: Partial<T>) => void;
 }

@@ -12,7 +12,7 @@ import { saveDraftOnExit, useSaveDraft } from '../api/save-draft';
 import type { RequestDetail } from '../api/types';
 import { ApplicationSummary } from './application-summary';
 import { EntranceStepForm } from './entrance-step';
-import { answeredOnly, fieldsByStep } from './form-helpers';
+import { answeredOnly, fieldsByStep, type StepSnapshot } from './form-helpers';
 import { SiteStepForm } from './site-step';
 import { StepButtons } from './step-buttons';
 import { WizardProgress, wizardSteps } from './wizard-progress';
@@ -43,8 +43,6 @@ export function RequestWizard({ requestId, ...rest }: WizardProps) {
   return <WizardBody key={request.id} request={request} {...rest} />;
 }
 
-type Snapshot = { values: Partial<SiteStep> | Partial<EntranceStep>; dirty: boolean };
-
 function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'requestId'> & { request: RequestDetail }) {
   const queryClient = useQueryClient();
   const [step, setStep] = useState(Math.min(Math.max(request.wizardStep, 0), 3));
@@ -52,7 +50,7 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
   const [problem, setProblem] = useState<unknown>(null);
   const [reloads, setReloads] = useState(0);
   const version = useRef(request.version);
-  const snapshot = useRef<(() => Snapshot) | null>(null);
+  const snapshot = useRef<(() => StepSnapshot) | null>(null);
   const heading = useRef<HTMLHeadingElement>(null);
   const firstRender = useRef(true);
   const save = useSaveDraft();
@@ -153,11 +151,11 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
         {problem !== null && <div className="mb-4"><ErrorNotice error={problem} /></div>}
         {step === 0 && (
           <SiteStepForm key={stepKey} initial={latest.application.site ?? {}} serverFields={serverFields?.site} saving={busy}
-            snapshot={snapshot as never} onNext={(site) => persist({ site }, 1)} />
+            snapshot={snapshot} onNext={(site) => persist({ site }, 1)} />
         )}
         {step === 1 && (
           <EntranceStepForm key={stepKey} initial={latest.application.entrance ?? {}} serverFields={serverFields?.entrance} saving={busy}
-            snapshot={snapshot as never} onNext={(entrance) => persist({ entrance }, 2)} onBack={(entrance) => persist({ entrance: answeredOnly(entrance) }, 0)} />
+            snapshot={snapshot} onNext={(entrance) => persist({ entrance }, 2)} onBack={(entrance) => persist({ entrance: answeredOnly(entrance) }, 0)} />
         )}
         {step === 2 && (
           <form noValidate onSubmit={(e) => { e.preventDefault(); void persist({}, 3); }} className="space-y-5" aria-label="Photos">
@@ -169,7 +167,9 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
           <div className="space-y-6">
             <ApplicationSummary application={latest.application} />
             {renderPhotos({ requestId: request.id, readOnly: true, onUsePosition: usePosition })}
-            <p className="text-sm text-stone-600">When you send it, the office gets your request and you get a receipt by e-mail. You can still withdraw it later.</p>
+            <p className="text-sm text-stone-600">{request.status === 'needs_details'
+              ? 'Your changes are saved. Answer the office’s question on the request page to send it back to them.'
+              : 'When you send it, the office gets your request and you get a receipt by e-mail. You can still withdraw it later.'}</p>
             <div className="flex flex-wrap gap-3 border-t border-stone-200 pt-4">
               <Button variant="secondary" onClick={() => void persist({}, 2)} disabled={busy}>Back</Button>
               <Button onClick={() => void send()} disabled={busy}>{transition.isPending ? 'Sending…' : request.status === 'needs_details' ? 'Done: back to the request' : 'Send to the office'}</Button>

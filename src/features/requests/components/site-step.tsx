@@ -18,7 +18,7 @@ export function SiteStepForm({ initial, serverFields, saving, snapshot, onNext }
     resolver: zodResolver(siteStepSchema), defaultValues: { ...emptySite, ...initial }, shouldFocusError: true,
   });
   const { register, handleSubmit, watch, setError, getValues, formState: { errors, isDirty } } = form;
-  snapshot.current = () => ({ values: getValues() as Partial<SiteStep>, dirty: isDirty });
+  snapshot.current = () => ({ values: getValues(), dirty: isDirty });
   useServerFields(serverFields, setError);
   const byLandmark = watch('positionKind') !== 'coordinates';
   const num = { setValueAs: numberOrNull };
