@@ -78,6 +78,14 @@ describe('the office asks for details and the owner answers', () => {
     await office.getByRole('button', { name: 'Messages' }).click();
     await office.getByText('It is 15 in, and the ditch is about 2 ft deep.').waitFor();
     await shot(office, 'office-workspace-answered');
+
+    await office.getByRole('link', { name: 'E-mail log' }).click();
+    const row = office.getByRole('row').filter({ hasText: owner.email }).filter({ hasText: request.reference });
+    await row.first().waitFor();
+    expect(await row.first().textContent()).toContain('Sent');
+    await row.first().getByRole('button', { name: /More details needed/ }).click();
+    await office.getByText(question).first().waitFor();
+    await shot(office, 'office-email-log');
   });
 
   it('fits a phone: the queue becomes cards with an order picker, and a request opens from one', async () => {
