@@ -63,7 +63,7 @@ export function GradeCheckWorkspace({ request, checks }: { request: CheckRequest
       </div>
       <div className="space-y-6">
         <Panel title="Live check" actions={
-          <Button disabled={!live.inputs || !live.results || !chosen?.currentVersionId || save.isPending}
+          <Button disabled={!live.ready || !chosen?.currentVersionId || save.isPending}
             onClick={() => live.inputs && chosen?.currentVersionId && save.mutate({ requestId: request.id, ruleProfileVersionId: chosen.currentVersionId, inputs: live.inputs })}>
             {save.isPending ? 'Saving…' : 'Save this check'}
           </Button>

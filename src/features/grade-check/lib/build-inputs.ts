@@ -75,7 +75,8 @@ function readCulvert(c: SurveyState['culvert'], errors: FieldErrors, edgeFt: num
 
 /**
  * Turns the typed survey into the check's inputs. Errors are keyed by the same field paths the engine and the
- * server use, so one map marks the cells whoever found the problem.
+ * server use, so one map marks the cells whoever found the problem. Inputs come back whenever the centreline and
+ * road can be read, so the live check keeps running; a survey with any error left is not ready to save.
  */
 export function buildInputs(s: SurveyState, rules: RuleProfile | undefined): { inputs?: SavedInputs; errors: FieldErrors } {
   const errors: FieldErrors = {};
@@ -96,15 +97,21 @@ export function buildInputs(s: SurveyState, rules: RuleProfile | undefined): { i
     distanceToIntersectionFt: readNumber(g.distanceToIntersectionFt, 'geometry.distanceToIntersectionFt', errors),
     distanceToPropertyLineFt: readNumber(g.distanceToPropertyLineFt, 'geometry.distanceToPropertyLineFt', errors),
   };
-  const culvert = readCulvert(s.culvert, errors, edgeElevation ?? groundAt(surveyed, roadEdgeStationFt), topWidthFt, sideSlopeHPerV);
+  // A half-entered culvert or stake leaves itself out of the live check (its boxes show why) instead of stopping it.
+  const culvertErrors: FieldErrors = {};
+  const culvertRead = readCulvert(s.culvert, culvertErrors, edgeElevation ?? groundAt(surveyed, roadEdgeStationFt), topWidthFt, sideSlopeHPerV);
+  const culvert = Object.keys(culvertErrors).length === 0 ? culvertRead : undefined;
+  Object.assign(errors, culvertErrors);
   const receiverOffsetFt = readNumber(s.laser.receiverOffsetFt, 'laser.receiverOffsetFt', errors, true);
-  const stakes = s.laser.stakes.map((k, i) => ({
-    label: k.label.trim() || `Stake ${i + 1}`, offsetFt: readNumber(k.offsetFt, `laser.stakes.${i}.offsetFt`, errors, true) ?? 0,
-    distanceFt: readNumber(k.distanceFt, `laser.stakes.${i}.distanceFt`, errors, true) ?? 0, rodReadingFt: readNumber(k.rodReadingFt, `laser.stakes.${i}.rodReadingFt`, errors, true) ?? 0,
-  }));
+  const stakes = s.laser.stakes.flatMap((k, i) => {
+    const offsetFt = readNumber(k.offsetFt, `laser.stakes.${i}.offsetFt`, errors, true);
+    const distanceFt = readNumber(k.distanceFt, `laser.stakes.${i}.distanceFt`, errors, true);
+    const rodReadingFt = readNumber(k.rodReadingFt, `laser.stakes.${i}.rodReadingFt`, errors, true);
+    return offsetFt === undefined || distanceFt === undefined || rodReadingFt === undefined ? [] : [{ label: k.label.trim() || `Stake ${i + 1}`, offsetFt, distanceFt, rodReadingFt }];
+  });
   const target = readNumber(s.design.targetEndElevationFt, 'design.targetEndElevationFt', errors);
   const truckCuYd = readNumber(s.design.truckCuYd, 'design.haul.truckCuYd', errors, true) ?? 10;
-  if (!surveyed || roadEdgeStationFt === undefined || roadGrade === undefined || receiverOffsetFt === undefined || Object.keys(errors).length > 0) return { errors };
+  if (!surveyed || roadEdgeStationFt === undefined || roadGrade === undefined || receiverOffsetFt === undefined) return { errors };
 
   const signedRoadGrade = s.road.rises === 'right' ? roadGrade : -roadGrade;
   const checked: ProfileInput = s.design.applied ? { kind: 'elevations', points: s.design.applied } : surveyed;

@@ -10,6 +10,8 @@ export interface LiveCheck {
   inputs?: SavedInputs;
   errors: FieldErrors;
   results?: CheckResults;
+  /** Every box reads cleanly and the engine ran: the survey can be saved as a check. */
+  ready: boolean;
 }
 
 function engineErrors(error: unknown, prefix: string): FieldErrors {
@@ -22,7 +24,7 @@ function engineErrors(error: unknown, prefix: string): FieldErrors {
 /** The same engine the server runs, on the survey as typed; the server's own run is the record. */
 export function runLiveCheck(state: SurveyState, rules: RuleProfile | undefined): LiveCheck {
   const { inputs, errors } = buildInputs(state, rules);
-  if (!inputs || !rules) return { inputs, errors };
+  if (!inputs || !rules) return { inputs, errors, ready: false };
   const { road: _road, laser, design, ...check } = inputs;
   let step = '';
   try {
@@ -35,9 +37,9 @@ export function runLiveCheck(state: SurveyState, rules: RuleProfile | undefined)
       results.proposal = proposeProfile(propose, rules);
     }
     if (design?.applied) results.surveyed = checkEntrance({ ...check, profile: design.existing }, rules);
-    return { inputs, errors, results };
+    return { inputs, errors, results, ready: Object.keys(errors).length === 0 };
   } catch (error) {
-    return { inputs, errors: engineErrors(error, step) };
+    return { inputs, errors: { ...errors, ...engineErrors(error, step) }, ready: false };
   }
 }
 
