@@ -10,14 +10,18 @@ import { loadVisibleGradeCheck } from './grade-checks.service';
 
 export const REPORT_KIND = 'grade-check-report';
 
-/** Builds the PDF for one check from the stored record alone. */
-export async function reportFor(ctx: Pick<AppContext, 'db'>, user: SessionUser, checkId: string) {
+async function reportData(ctx: Pick<AppContext, 'db'>, user: SessionUser, checkId: string) {
   const check = await loadVisibleGradeCheck(ctx.db, user, checkId);
   const request = await loadVisibleRequest(ctx.db, user, check.requestId);
   const [version] = await ctx.db.select().from(ruleProfileVersions).where(eq(ruleProfileVersions.id, check.ruleProfileVersionId));
   const [jurisdiction] = await ctx.db.select().from(jurisdictions).where(eq(jurisdictions.id, version.jurisdictionId));
-  const pdf = await buildGradeCheckReport({ request, check, profile: version.profile as RuleProfile, version, jurisdiction });
-  return { check, request, pdf };
+  return { check, request, profile: version.profile as RuleProfile, version, jurisdiction };
+}
+
+/** Builds the PDF for one check from the stored record alone. */
+export async function reportFor(ctx: Pick<AppContext, 'db'>, user: SessionUser, checkId: string) {
+  const data = await reportData(ctx, user, checkId);
+  return { check: data.check, request: data.request, pdf: await buildGradeCheckReport(data) };
 }
 
 /**
@@ -25,10 +29,12 @@ export async function reportFor(ctx: Pick<AppContext, 'db'>, user: SessionUser, 
  * fixed per check and the second call finds the first's document.
  */
 export async function attachGradeCheck(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, checkId: string, share: boolean) {
-  const { check, request, pdf } = await reportFor(ctx, user, checkId);
+  const data = await reportData(ctx, user, checkId);
+  const { check, request } = data;
   const objectKey = `reports/${request.id}/grade-check-${check.number}-${check.id}.pdf`;
   const [existing] = await ctx.db.select().from(documents).where(eq(documents.objectKey, objectKey));
   if (existing) return { document: existing, check };
+  const pdf = await buildGradeCheckReport(data);
   await storeReport(ctx, objectKey, pdf);
   return ctx.db.transaction(async (tx) => {
     const [document] = await tx.insert(documents).values({
