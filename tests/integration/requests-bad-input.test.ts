@@ -62,9 +62,24 @@ describe('every write names the bad field with a 400 and changes nothing', () =>
     ['a 16 MB photo', { fileName: 'big.jpg', contentType: 'image/jpeg', sizeBytes: 16 * 1024 * 1024 }, 'sizeBytes'],
     ['a size that is not a whole number', { fileName: 'a.jpg', contentType: 'image/jpeg', sizeBytes: 10.5 }, 'sizeBytes'],
     ['a missing file name', { contentType: 'image/jpeg', sizeBytes: 100 }, 'fileName'],
+    ['a file name that is too long', { fileName: `${'f'.repeat(200)}.jpg`, contentType: 'image/jpeg', sizeBytes: 100 }, 'fileName'],
+    ['a size sent as text', { fileName: 'a.jpg', contentType: 'image/jpeg', sizeBytes: '100' }, 'sizeBytes'],
   ])('photo upload: %s', async (_what, body, field) => {
     const res = await owner.post(`/api/requests/${draftId}/photos`).send(body).expect(400);
     expect(res.body.error.fields).toHaveProperty([field]);
+  });
+
+  it('photo confirm and caption: wrong types and over-long captions', async () => {
+    const ticket = await owner.post(`/api/requests/${draftId}/photos`).send({ fileName: 'a.png', contentType: 'image/png', sizeBytes: 10 }).expect(201);
+    const photo = `/api/requests/${draftId}/photos/${ticket.body.photo.id}`;
+    const badGps = await owner.post(`${photo}/confirm`).send({ gpsLat: 'north' }).expect(400);
+    expect(badGps.body.error.fields).toHaveProperty(['gpsLat']);
+    const longCaption = await owner.post(`${photo}/confirm`).send({ caption: 'c'.repeat(201) }).expect(400);
+    expect(longCaption.body.error.fields).toHaveProperty(['caption']);
+    const captionType = await owner.patch(photo).send({ caption: 12 }).expect(400);
+    expect(captionType.body.error.fields).toHaveProperty(['caption']);
+    const badPhotoId = await owner.patch(`/api/requests/${draftId}/photos/not-a-photo`).send({ caption: 'x' }).expect(400);
+    expect(badPhotoId.body.error.fields).toHaveProperty(['photoId']);
   });
 
   it('never answers 500 to whatever JSON arrives at the draft, message and photo routes', async () => {
