@@ -118,3 +118,17 @@ describe('marking built and the office’s review', () => {
     expect(closed.body.request.status).toBe('closed');
   });
 });
+
+describe('the office’s generic status endpoint holds "built" to the same rule', () => {
+  it('refuses a failing set without the crew’s note, accepts one saved with it', async () => {
+    const { id, version } = await startedJob();
+    const crew = cast.crew.agent;
+    await save(id, [{ stationFt: 5, gradePercent: 6 }]);
+    const bare = await crew.post(`/api/requests/${id}/transitions`).send({ action: 'mark-built', expectedVersion: version });
+    expect(bare.status).toBe(400);
+    expect(bare.body.error.fields).toHaveProperty('note');
+    await save(id, [{ stationFt: 5, gradePercent: 6 }], 'Ledge rock at 0+05; the inspector agreed on site to leave it.');
+    const noted = await crew.post(`/api/requests/${id}/transitions`).send({ action: 'mark-built', expectedVersion: version });
+    expect(noted.status, JSON.stringify(noted.body)).toBe(200);
+  });
+});

@@ -1,10 +1,11 @@
 import { and, desc, eq, isNotNull } from 'drizzle-orm';
 import type { SessionUser } from '../../auth/session-user';
 import type { Tx } from '../../db/client';
-import { asBuiltSets, gradeChecks, jobs, messages } from '../../db/schema';
+import { gradeChecks, jobs, messages } from '../../db/schema';
 import { badRequest, conflict } from '../../lib/errors';
 import type { RequestRow } from './request-access';
 import { assertReadyToSubmit } from './submission';
+import { assertBuildable } from '../crew/mark-built.service';
 
 export interface EffectInput {
   action: string;
@@ -52,8 +53,8 @@ export async function runTransitionEffects(tx: Tx, row: RequestRow, input: Effec
   } else if (action === 'hand-back') {
     await tx.update(jobs).set({ crewId: null, acceptedAt: null, scheduledFor: null }).where(eq(jobs.requestId, row.id));
   } else if (action === 'mark-built') {
-    const [set] = await tx.select({ id: asBuiltSets.id }).from(asBuiltSets).where(eq(asBuiltSets.requestId, row.id)).limit(1);
-    if (!set) throw conflict('Record the as-built grades before marking the job built.');
+    // The same rule as the crew's own endpoint: a passing set, or a failing one that carries the crew's note.
+    input.emailDetail = await assertBuildable(tx, row, '');
   }
 }
 
