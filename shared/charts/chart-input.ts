@@ -13,6 +13,21 @@ export interface ChartResults {
 }
 
 /**
+ * A finding names the worst station of its rule; the chart marks every segment over its limit, so a landing that
+ * is too steep along its whole length shows as such.
+ */
+function failingStations(report: EntranceReport, profile: RuleProfile, roadEdgeFt: number): number[] {
+  const landingEnd = roadEdgeFt + profile.landing.lengthFt;
+  const over = report.profile.segments.filter((s) => {
+    if (s.toStationFt <= roadEdgeFt) return false;
+    if (s.fromStationFt < landingEnd) return s.gradePercent > profile.landing.maxGradePercent + 1e-9 || s.gradePercent < profile.landing.minGradePercent - 1e-9;
+    return Math.abs(s.gradePercent) > profile.maxGradePercent + 1e-9;
+  }).map((s) => s.fromStationFt);
+  const named = report.findings.filter((f) => f.status === 'fail' && f.stationFt !== undefined).map((f) => f.stationFt as number);
+  return [...new Set([...named, ...over])];
+}
+
+/**
  * The chart for a check, live or saved: when a proposal was applied the ground is the survey and the design is the
  * checked profile; otherwise the checked profile is the ground and a feasible proposal is drawn over it to compare.
  */
@@ -32,7 +47,7 @@ export function chartInputFor(inputs: ChartSource, results: ChartResults, profil
     roadEdgeStationFt: inputs.roadEdgeStationFt ?? report.profile.points[0].stationFt,
     landing: profile.landing,
     maxGradePercent: profile.maxGradePercent,
-    failingStationsFt: report.findings.filter((f) => f.status === 'fail' && f.stationFt !== undefined).map((f) => f.stationFt as number),
+    failingStationsFt: failingStations(report, profile, inputs.roadEdgeStationFt ?? report.profile.points[0].stationFt),
     scrapePoints,
   };
 }
