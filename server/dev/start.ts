@@ -5,7 +5,6 @@ import { startStandIns } from '../../fakes';
 import { applyMigrations, createDb } from '../db/client';
 import { demoPeople } from '../db/seed/demo-people';
 import { seedDemo } from '../db/seed';
-import { seedDemoJobs } from '../db/seed/demo-jobs';
 import { devBucket, devOAuthClient, devPorts } from './dev-config';
 import { ensureDatabase, startPostgres } from './postgres';
 import { standInEnv } from './stand-in-env';
@@ -43,7 +42,6 @@ async function main() {
     await applyMigrations(databaseUrl);
     const { db, pool } = createDb(databaseUrl, 2);
     await seedDemo(db);
-    await seedDemoJobs(db);
     await pool.end();
 
     const appOrigin = `http://127.0.0.1:${devPorts.app}`;

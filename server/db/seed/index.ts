@@ -2,6 +2,8 @@ import { sql } from 'drizzle-orm';
 import type { Db } from '../client';
 import { users } from '../schema';
 import { demoPeople } from './demo-people';
+import { seedDemoJobs } from './demo-jobs';
+import { seedDemoRequests } from './demo-requests';
 import { seedJurisdictions } from './jurisdictions';
 
 /** Seeds the demo scenario; safe to run on every start (existing rows are left as they are). */
@@ -12,5 +14,7 @@ export async function seedDemo(db: Db) {
       if (!found) await tx.insert(users).values(person);
     }
     await seedJurisdictions(tx);
+    await seedDemoRequests(tx);
   });
+  await seedDemoJobs(db);
 }

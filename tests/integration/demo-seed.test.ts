@@ -1,0 +1,67 @@
+import { eq, sql } from 'drizzle-orm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { requestStatuses } from '../../shared/workflow/statuses';
+import { asBuiltSets, gradeChecks, jobs, requestEvents, requests, ruleProfileVersions } from '../../server/db/schema';
+import { seedDemo } from '../../server/db/seed';
+import { runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
+import { ruleProfileSchema } from '../../shared/engine';
+import { createTestApp, signIn, type TestApp } from '../setup/test-app';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp();
+  await seedDemo(t.ctx.db);
+});
+afterAll(() => t.close());
+
+describe('the demo scenario', () => {
+  it('has requests in every status, and a second seed adds nothing', async () => {
+    const count = async () => (await t.ctx.db.select({ n: sql<number>`count(*)::int` }).from(requests))[0].n;
+    const before = await count();
+    await seedDemo(t.ctx.db);
+    expect(await count()).toBe(before);
+    const statuses = new Set((await t.ctx.db.select({ s: requests.status }).from(requests)).map((r) => r.s));
+    expect([...requestStatuses].filter((s) => s !== 'permit_refused' && !statuses.has(s))).toEqual([]);
+  });
+
+  it('records every step as an event whose version matches', async () => {
+    const rows = await t.ctx.db.select({ id: requests.id, version: requests.version, status: requests.status }).from(requests);
+    for (const row of rows) {
+      const events = await t.ctx.db.select().from(requestEvents).where(eq(requestEvents.requestId, row.id));
+      expect(events.length).toBe(row.version - 1);
+      if (events.length) expect(events.sort((a, b) => +a.createdAt - +b.createdAt).at(-1)!.toStatus).toBe(row.status);
+    }
+  });
+
+  it('stores grade checks that the server reproduces from their inputs and profile version', async () => {
+    const checks = await t.ctx.db.select({ check: gradeChecks, version: ruleProfileVersions }).from(gradeChecks)
+      .innerJoin(ruleProfileVersions, eq(ruleProfileVersions.id, gradeChecks.ruleProfileVersionId));
+    expect(checks.length).toBeGreaterThanOrEqual(7);
+    for (const { check, version } of checks) {
+      expect(check.attachedAt).not.toBeNull();
+      const rules = ruleProfileSchema.parse(version.profile);
+      const stamped = { ...rules, id: version.id, version: version.version, jurisdictionName: (check.results as { report: { jurisdictionName: string } }).report.jurisdictionName };
+      const again = runGradeCheck(check.inputs as Parameters<typeof runGradeCheck>[0], stamped);
+      expect(JSON.parse(JSON.stringify(again))).toEqual(check.results);
+    }
+  });
+
+  it('gives built and closed jobs a crew, a build date and a passing as-built set', async () => {
+    const done = await t.ctx.db.select({ r: requests, j: jobs }).from(requests).innerJoin(jobs, eq(jobs.requestId, requests.id))
+      .where(sql`${requests.status} in ('built', 'closed')`);
+    expect(done.length).toBe(2);
+    for (const { r, j } of done) {
+      expect(j.crewId).toBe(r.crewId);
+      expect(j.builtAt).not.toBeNull();
+      const sets = await t.ctx.db.select().from(asBuiltSets).where(eq(asBuiltSets.requestId, r.id));
+      expect(sets.map((s) => s.passed)).toEqual([true]);
+    }
+  });
+
+  it('shows each applicant only their own demo requests', async () => {
+    const agent = await signIn(t.app, 'ellen.marsh@example.test');
+    const mine = await agent.get('/api/requests/mine').expect(200);
+    const list = (mine.body.requests ?? mine.body) as { siteAddress?: string; address?: string }[];
+    expect(list.length).toBe(4);
+  });
+});
