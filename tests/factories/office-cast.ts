@@ -1,14 +1,17 @@
 import { demoPeople } from '../../server/db/seed/demo-people';
-import { seedDemo } from '../../server/db/seed';
 import type { Role } from '../../shared/workflow/statuses';
 import { signIn, type TestApp } from '../setup/test-app';
+import { ensurePerson } from './people';
 
 export type Agent = Awaited<ReturnType<typeof signIn>>;
 export interface SignedIn { agent: Agent; id: string; email: string; role: Role }
 
-/** Seeds the demo people and signs in the first of each role, plus a second office person and owner. */
+/**
+ * Adds the demo people (only the people: the demo requests would skew counts) and signs in the first of each role,
+ * plus a second office person and owner.
+ */
 export async function signInCast(t: TestApp) {
-  await seedDemo(t.ctx.db);
+  for (const person of demoPeople) await ensurePerson(t.ctx.db, person);
   const as = async (email: string): Promise<SignedIn> => {
     const agent = await signIn(t.app, email);
     const me = await agent.get('/api/me').expect(200);

@@ -69,29 +69,31 @@ export async function listQueue(db: DbOrTx, user: SessionUser, query: QueueQuery
   }
   // Times come back as ISO text straight from PostgreSQL: no Date objects to build and serialise again per row.
   const iso = (column: AnyColumn) => sql<string>`to_char(${column} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`;
-  const list = db.select({
+  // The total belongs to the view, not the page: counted up to a cap on the first page only, inside the same
+  // statement (an uncorrelated subquery runs once), so a page costs one round trip.
+  const cap = 1000;
+  const capped = db.select({ one: sql`1` }).from(requests).where(and(...where)).limit(cap + 1);
+  const total = query.cursor ? sql<null>`null::int` : sql<number>`(select count(*)::int from (${capped}) as capped)`;
+  const rows = await db.select({
     id: requests.id, reference: requests.reference, status: requests.status,
     applicantName: requests.applicantName, roadName: requests.roadName, statusChangedAt: iso(requests.statusChangedAt),
     jurisdictionId: jurisdictions.id, jurisdictionName: jurisdictions.name,
     assigneeId: assignee.id, assigneeName: assignee.name,
     sortKey: sql<string>`${column}::text`,
+    total,
   }).from(requests)
     .leftJoin(jurisdictions, eq(jurisdictions.id, requests.jurisdictionId))
     .leftJoin(assignee, eq(assignee.id, requests.assigneeId))
     .where(and(...page))
     .orderBy(order(column), order(requests.id))
     .limit(query.limit + 1);
-  // The total belongs to the view, not the page: counted on the first page only, alongside the rows.
-  const cap = 1000;
-  const counted = query.cursor ? Promise.resolve(null) : db.select({ n: sql<number>`count(*)::int` })
-    .from(sql`(${db.select({ one: sql`1` }).from(requests).where(and(...where)).limit(cap + 1)}) as capped`)
-    .then(([row]) => row.n);
-  const [rows, n] = await Promise.all([list, counted]);
+  // No row on a first page means nothing matched at all.
+  const n = query.cursor ? null : (rows[0]?.total ?? 0);
   const more = rows.length > query.limit;
   const items = more ? rows.slice(0, query.limit) : rows;
   const last = items.at(-1);
   return {
-    requests: items.map(({ sortKey: _key, jurisdictionId, jurisdictionName, assigneeId, assigneeName, ...row }) => ({
+    requests: items.map(({ sortKey: _key, total: _total, jurisdictionId, jurisdictionName, assigneeId, assigneeName, ...row }) => ({
       ...row,
       ...rowWords[row.status],
       jurisdiction: jurisdictionId ? { id: jurisdictionId, name: jurisdictionName ?? '' } : null,
