@@ -99,6 +99,13 @@ describe('a new property owner asks for an entrance', () => {
     await expect.poll(() => photos.count()).toBe(2);
     await expect.poll(() => photos.evaluateAll((imgs) => imgs.every((img) => (img as HTMLImageElement).naturalWidth > 0))).toBe(true);
     await page.getByRole('img', { name: 'The ditch where the entrance goes' }).waitFor();
+    const requestId = new URL(page.url()).pathname.split('/').pop();
+    const listed = (await (await page.request.get(appUrl(`/api/requests/${requestId}/photos`))).json()).photos as { fileName: string; url: string; gpsLat: number | null }[];
+    const jpeg = listed.find((p) => p.fileName === 'road-left.jpg')!;
+    const storedJpeg = Buffer.from(await (await fetch(jpeg.url)).arrayBuffer());
+    expect(storedJpeg.subarray(0, 2).toString('hex')).toBe('ffd8');
+    expect(storedJpeg.includes(Buffer.from('Exif\0\0', 'latin1'))).toBe(false);
+    expect(jpeg.gpsLat).toBeCloseTo(44.26012, 4);
     await shoot(page, 'applicant-request-page');
 
     await page.goto(appUrl('/my/requests'));

@@ -3,11 +3,11 @@ import Uppy, { type Meta, type UppyFile } from '@uppy/core';
 import '@uppy/core/css/style.min.css';
 import '@uppy/dashboard/css/style.min.css';
 import Dashboard from '@uppy/react/dashboard';
-import { gps } from 'exifr';
 import { useEffect, useRef, useState } from 'react';
 import { maxPhotoBytes, photoContentTypes } from '@shared/requests/photo-rules';
 import { confirmUpload } from '../api/confirm-upload';
 import { requestUpload } from '../api/request-upload';
+import { readPosition, withoutMetadata } from './photo-metadata';
 
 type PhotoMeta = Meta & { photoId?: string; gpsLat?: number; gpsLng?: number };
 
@@ -23,16 +23,6 @@ export interface UploaderProps {
 // Some browsers leave HEIC files without a type; the extension says what they are.
 const typeOf = (file: UppyFile<PhotoMeta, Record<string, never>>) =>
   file.type || (/\.heic$/i.test(file.name ?? '') ? 'image/heic' : 'application/octet-stream');
-
-/** Where the position came from is the only thing read out of a photo's metadata; nothing else leaves the browser. */
-async function readPosition(data: Blob): Promise<{ latitude: number; longitude: number } | undefined> {
-  try {
-    const found = await gps(data);
-    return found && Number.isFinite(found.latitude) && Number.isFinite(found.longitude) ? found : undefined;
-  } catch {
-    return undefined;
-  }
-}
 
 function buildUppy(props: { current: UploaderProps }) {
   const uppy = new Uppy<PhotoMeta, Record<string, never>>({
@@ -51,12 +41,19 @@ function buildUppy(props: { current: UploaderProps }) {
       return { url: ticket.upload.url, headers: ticket.upload.headers };
     },
   });
-  uppy.on('file-added', (file) => {
-    void readPosition(file.data as Blob).then((position) => {
-      if (!position || !uppy.getFile(file.id)) return;
-      uppy.setFileMeta(file.id, { gpsLat: position.latitude, gpsLng: position.longitude });
-      props.current.onPosition(position.latitude, position.longitude);
-    });
+  // Before each upload: note the position, then swap in a copy without the camera's metadata.
+  uppy.addPreProcessor(async (fileIDs) => {
+    await Promise.all(fileIDs.map(async (id) => {
+      const file = uppy.getFile(id);
+      if (!file || file.meta.photoId) return;
+      const position = await readPosition(file.data as Blob);
+      if (position) {
+        uppy.setFileMeta(id, { gpsLat: position.latitude, gpsLng: position.longitude });
+        props.current.onPosition(position.latitude, position.longitude);
+      }
+      const clean = await withoutMetadata(file.data as Blob, typeOf(file));
+      if (clean) uppy.setFileState(id, { data: clean, size: clean.size });
+    }));
   });
   uppy.on('upload-success', (file) => {
     const current = file && uppy.getFile(file.id);
