@@ -98,6 +98,9 @@ export const requests = pgTable('requests', {
   index('requests_assignee_idx').on(t.assigneeId, t.statusChangedAt),
   index('requests_crew_idx').on(t.crewId, t.status),
   index('requests_created_idx').on(t.createdAt, t.id),
+  // The office queue sorts by applicant and by road too; keyset paging needs the id as the tie-break.
+  index('requests_applicant_name_idx').on(t.applicantName, t.id),
+  index('requests_road_name_idx').on(t.roadName, t.id),
   index('requests_search_idx').using('gin', t.searchVector),
 ]);
 

@@ -1,0 +1,2 @@
+CREATE INDEX "requests_applicant_name_idx" ON "requests" USING btree ("applicant_name","id");--> statement-breakpoint
+CREATE INDEX "requests_road_name_idx" ON "requests" USING btree ("road_name","id");
