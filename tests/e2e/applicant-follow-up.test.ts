@@ -57,6 +57,22 @@ describe('after sending: the office asks, the owner answers', () => {
     for (const p of [owner, office, neighbour]) await p.context.close();
   });
 
+  it('takes the server’s objections back to the step and the field they name', async () => {
+    const owner = await personPage(`odo.fenn-${randomUUID().slice(0, 6)}@example.test`, 'Odo Fenn');
+    const created = await (await owner.page.request.post(appUrl('/api/requests'), { data: {} })).json();
+    const { entrance } = completeApplication();
+    // A draft that reached the last step without a usable address, as an older or altered client could leave it.
+    await owner.page.request.patch(appUrl(`/api/requests/${created.request.id}/draft`), {
+      data: { expectedVersion: 1, wizardStep: 3, site: { address: '12', roadName: 'Fallow Lane', roadOwner: 'town', positionKind: 'landmark', landmark: 'the oak', distanceFromLandmarkFt: 30 }, entrance },
+    });
+    await owner.page.goto(appUrl(`/my/requests/${created.request.id}/edit`));
+    await owner.page.getByRole('button', { name: 'Send to the office' }).click();
+    await owner.page.getByRole('heading', { name: /Step 1 of 4/ }).waitFor();
+    await owner.page.getByText('Enter the street address of the property.').waitFor();
+    await expect.poll(() => owner.page.getByLabel('Street address of the property').evaluate((el) => el === document.activeElement)).toBe(true);
+    await owner.context.close();
+  });
+
   it('says when a photo upload fails and lets it be retried', async () => {
     const owner = await personPage(`ida.brenn-${randomUUID().slice(0, 6)}@example.test`, 'Ida Brenn');
     const draft = await draftThroughApi(owner.page, false);

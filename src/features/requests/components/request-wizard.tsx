@@ -53,6 +53,8 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
   const snapshot = useRef<(() => StepSnapshot) | null>(null);
   const heading = useRef<HTMLHeadingElement>(null);
   const firstRender = useRef(true);
+  const hasServerFields = useRef(false);
+  hasServerFields.current = serverFields !== null;
   const save = useSaveDraft();
   const { mutate: saveQuietly } = save;
   const transition = useRunTransition(request.id);
@@ -60,7 +62,8 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
 
   useEffect(() => {
     if (firstRender.current) { firstRender.current = false; return; }
-    heading.current?.focus();
+    // A step opened to show the server's objections puts focus on the first of them instead.
+    if (!hasServerFields.current) heading.current?.focus();
   }, [step]);
 
   // Unsaved answers are kept when the person leaves: a normal save when they move elsewhere in the app,
