@@ -66,16 +66,33 @@ async function main() {
       ['queue: waiting on us, by time in status', '/api/queue?waiting=true&sort=waiting&limit=50'],
       ['queue: submitted in one authority, by applicant', `/api/queue?status=submitted&jurisdiction=${place.id}&sort=applicant&limit=50`],
       ['queue: search "quarry ridge", newest first', '/api/queue?q=quarry%20ridge&sort=created&dir=desc&limit=50'],
+      ['queue: everything, by road, page 3', ''],
     ];
+    // A deeper page costs what the first does: follow the cursor twice to get there.
+    let cursor = '';
+    for (let i = 0; i < 2; i++) {
+      const page = await (await fetch(`${origin}/api/queue?sort=road&limit=50${cursor ? `&cursor=${cursor}` : ''}`, { headers: { cookie } })).json() as { nextCursor: string };
+      cursor = page.nextCursor;
+    }
+    targets[4][1] = `/api/queue?sort=road&limit=50&cursor=${cursor}`;
     for (const [, target] of targets) await measureWarm(origin + target, cookie);
     const results = [];
-    for (const [label, target] of targets) results.push({ label, ...(await measure(origin + target, cookie)) });
+    const cpu = async () => new Promise<number>((resolve) => {
+      server!.once('message', (m: { cpuMicros: NodeJS.CpuUsage }) => resolve(m.cpuMicros.user + m.cpuMicros.system));
+      server!.send('cpu');
+    });
+    for (const [label, target] of targets) {
+      const before = await cpu();
+      const result = await measure(origin + target, cookie);
+      const cpuMs = (await cpu() - before) / 1000 / (result.rps * seconds);
+      results.push({ label, ...result, cpuMs });
+    }
     const floor = results[0];
     console.log(`\n${connections} connections, ${seconds} s each; the app in its own process (on ${os.cpus().length} cores shared with PostgreSQL and the load generator)`);
-    console.log('endpoint'.padEnd(52), 'p50 ms'.padStart(8), 'p95 ms'.padStart(8), 'req/s'.padStart(8), 'p95/floor'.padStart(10), 'non-200'.padStart(8));
+    console.log('endpoint'.padEnd(52), 'p50 ms'.padStart(8), 'p95 ms'.padStart(8), 'req/s'.padStart(8), 'p95/floor'.padStart(10), 'app CPU ms/req'.padStart(15), 'non-200'.padStart(8));
     for (const r of results) {
       console.log(r.label.padEnd(52), r.p50.toFixed(1).padStart(8), r.p95.toFixed(1).padStart(8), r.rps.toFixed(0).padStart(8),
-        (r.p95 / floor.p95).toFixed(2).padStart(10), String(r.errors).padStart(8));
+        (r.p95 / floor.p95).toFixed(2).padStart(10), r.cpuMs.toFixed(2).padStart(15), String(r.errors).padStart(8));
     }
     const main = results[1];
     console.log(`load average while measuring (other work on this machine shows here): ${os.loadavg().map((l) => l.toFixed(2)).join(' ')}`);

@@ -9,6 +9,7 @@ import { badRequest } from '../../lib/errors';
 import { decodeQueueCursor, encodeQueueCursor, searchQuery, type QueueQuery, type QueueSort } from './queue-query';
 
 const assignee = alias(users, 'assignee');
+export const queueCountCap = 200;
 
 /** Each sort is a column with an index behind it; `cast` reads a cursor value back in the column's own type. */
 const sortColumns: Record<QueueSort, { column: AnyColumn; cast: string }> = {
@@ -71,7 +72,8 @@ export async function listQueue(db: DbOrTx, user: SessionUser, query: QueueQuery
   const iso = (column: AnyColumn) => sql<string>`to_char(${column} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`;
   // The total belongs to the view, not the page: counted up to a cap on the first page only, inside the same
   // statement (an uncorrelated subquery runs once), so a page costs one round trip.
-  const cap = 1000;
+  // Past a few hundred the exact number changes nothing for the office, and counting further is the costly part.
+  const cap = queueCountCap;
   const capped = db.select({ one: sql`1` }).from(requests).where(and(...where)).limit(cap + 1);
   const total = query.cursor ? sql<null>`null::int` : sql<number>`(select count(*)::int from (${capped}) as capped)`;
   const rows = await db.select({

@@ -30,7 +30,7 @@ export interface QueueRow {
   assignee: { id: string; name: string } | null;
 }
 
-/** `total` is counted on the first page only; later pages leave it null. */
+/** `total` is counted on the first page only (later pages leave it null) and only up to a cap (`totalIsCapped`). */
 export interface QueuePage { requests: QueueRow[]; nextCursor: string | null; total: number | null; totalIsCapped: boolean }
 
 export interface OfficePerson { id: string; name: string; role: Role }

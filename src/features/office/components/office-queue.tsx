@@ -19,7 +19,7 @@ export function OfficeQueue({ meId }: { meId: string }) {
       {page && (
         <>
           <p className="text-sm text-stone-600" aria-live="polite">
-            {page.total === 0 ? 'No requests match.' : page.total === null ? `Page ${pageNumber}.` : `${page.totalIsCapped ? 'More than 1,000' : page.total} matching, page ${pageNumber}.`}
+            {page.total === 0 ? 'No requests match.' : page.total === null ? `Page ${pageNumber}.` : `${page.totalIsCapped ? `More than ${page.total}` : page.total} matching, page ${pageNumber}.`}
             {queue.isFetching && ' Updating…'}
           </p>
           {page.requests.length > 0
