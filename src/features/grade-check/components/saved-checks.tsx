@@ -8,7 +8,7 @@ import { useMarkChecked } from '../api/mark-checked';
 /** Saved checks, newest first: attach one as the request's report, then mark the request checked. */
 export function SavedChecks({ request, checks }: { request: CheckRequestHeader; checks: SavedCheck[] }) {
   const attach = useAttachGradeCheck(request.id);
-  const markChecked = useMarkChecked(request.id);
+  const markChecked = useMarkChecked();
   const [share, setShare] = useState(true);
   const hasAttached = checks.some((c) => c.attachedAt);
   if (checks.length === 0) return <p className="text-sm text-stone-500">No saved checks yet. Save the survey to make check 1.</p>;
