@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { mkdirSync } from 'node:fs';
+import { mkdirSync, readdirSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
@@ -13,7 +13,13 @@ import { appUrl, launchBrowser, screenshotPath, signInAs } from '../setup/browse
  * with the homeowner's inbox in the mail catcher checked at the end. A screenshot is kept of every screen passed.
  */
 let session: Awaited<ReturnType<typeof launchBrowser>>;
-beforeAll(async () => { session = await launchBrowser(); });
+beforeAll(async () => {
+  // Screens are numbered in the order passed; a previous run's numbering must not linger beside this one's.
+  const dir = path.dirname(screenshotPath('x'));
+  mkdirSync(dir, { recursive: true });
+  for (const name of readdirSync(dir)) if (/^journey-\d{2}-/.test(name)) rmSync(path.join(dir, name));
+  session = await launchBrowser();
+});
 afterAll(() => session?.close());
 
 const staff = demoPeople.find((p) => p.role === 'staff')!;
@@ -232,6 +238,11 @@ describe('the whole journey of one entrance', () => {
     page = applicant.page;
     await page.goto(appUrl(`/my/requests/${requestId}`));
     await page.getByText('Finished').first().waitFor();
+    const timeline = page.getByRole('list', { name: 'Timeline' });
+    await timeline.getByText(/Work planned for/).waitFor();
+    await timeline.getByText('Finished').waitFor();
+    const photos = page.getByRole('img', { name: /from-the-road|ditch-line/ });
+    await expect.poll(() => photos.evaluateAll((imgs) => imgs.length === 2 && imgs.every((img) => (img as HTMLImageElement).naturalWidth > 0))).toBe(true);
     await shot(page, 'applicant-finished');
 
     const subjects = (await inbox(owner.email)).map((m) => m.subject);
