@@ -5,7 +5,7 @@ import { eq } from 'drizzle-orm';
 import { PDFParse } from 'pdf-parse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { inject } from 'vitest';
-import { emails } from '../../server/db/schema';
+import { emails, requestEvents } from '../../server/db/schema';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
 import { createTestApp, type TestApp } from '../setup/test-app';
@@ -89,6 +89,10 @@ describe('the grade check report', () => {
     expect(Number(url.searchParams.get('X-Amz-Expires'))).toBeLessThanOrEqual(300);
     url.pathname = url.pathname.replace(/\.pdf$/, '-other.pdf');
     expect((await fetch(url)).status).toBe(403);
+    const events = await t.ctx.db.select().from(requestEvents).where(eq(requestEvents.requestId, request.id));
+    expect(events.filter((e) => e.kind !== 'transition').map((e) => [e.kind, e.internal])).toEqual([
+      ['grade-check', true], ['grade-check-report', true], ['document', false],
+    ]);
   });
 
   it('attaches once, then lets the request be marked checked with the summary in the owner’s e-mail', async () => {

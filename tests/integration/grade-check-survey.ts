@@ -1,6 +1,7 @@
 import { eq } from 'drizzle-orm';
 import type { DbOrTx } from '../../server/db/client';
 import { jurisdictions } from '../../server/db/schema';
+import { seedJurisdictions } from '../../server/db/seed/jurisdictions';
 
 /**
  * An invented site: a 5.5% landing, then 12% up to the house. Marrow County's 4% landing limit fails it;
@@ -35,8 +36,10 @@ export function surveyInputs(overrides: Record<string, unknown> = {}) {
   };
 }
 
+/** The demo authority's current version, seeding the two demo authorities first if this database has none. */
 export async function currentVersionId(db: DbOrTx, slug: 'marrow-county' | 'town-of-elderbrook') {
+  await seedJurisdictions(db);
   const [row] = await db.select({ id: jurisdictions.currentVersionId }).from(jurisdictions).where(eq(jurisdictions.slug, slug));
-  if (!row?.id) throw new Error(`${slug} has no current version: was the demo seeded?`);
+  if (!row?.id) throw new Error(`${slug} has no current version`);
   return row.id;
 }

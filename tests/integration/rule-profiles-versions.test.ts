@@ -2,6 +2,7 @@ import { eq } from 'drizzle-orm';
 import { PDFParse } from 'pdf-parse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { gradeChecks, jurisdictions } from '../../server/db/schema';
+import { seedJurisdictions } from '../../server/db/seed/jurisdictions';
 import { loadGradeCheck, loadPublishedProfile } from '../../server/services/grade-checks/grade-checks.service';
 import { runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
 import { reportFor } from '../../server/services/grade-checks/attach-grade-check';
@@ -17,6 +18,7 @@ let marrowId: string;
 beforeAll(async () => {
   t = await createTestApp();
   cast = await signInCast(t);
+  await seedJurisdictions(t.ctx.db);
   const [row] = await t.ctx.db.select().from(jurisdictions).where(eq(jurisdictions.slug, 'marrow-county'));
   marrowId = row.id;
 });

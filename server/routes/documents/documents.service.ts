@@ -2,7 +2,7 @@ import { and, desc, eq } from 'drizzle-orm';
 import type { SessionUser } from '../../auth/session-user';
 import type { AppContext } from '../../context';
 import type { Db } from '../../db/client';
-import { documents } from '../../db/schema';
+import { documents, requestEvents } from '../../db/schema';
 import { notFound } from '../../lib/errors';
 import { loadVisibleRequest } from '../../services/requests/request-access';
 import { DOWNLOAD_SECONDS, downloadUrl } from '../../services/reports/report-storage';
@@ -29,6 +29,15 @@ export async function setShared(db: Db, user: SessionUser, documentId: string, s
   const [row] = await db.select().from(documents).where(eq(documents.id, documentId));
   if (!row) throw notFound('Document');
   await loadVisibleRequest(db, user, row.requestId);
-  const [saved] = await db.update(documents).set({ sharedWithApplicant: shared }).where(eq(documents.id, documentId)).returning();
-  return view(saved, user);
+  return db.transaction(async (tx) => {
+    const [saved] = await tx.update(documents).set({ sharedWithApplicant: shared }).where(eq(documents.id, documentId)).returning();
+    if (row.sharedWithApplicant !== shared) {
+      // Sharing is news to the owner; taking a document back is the office's business.
+      await tx.insert(requestEvents).values({
+        requestId: row.requestId, actorId: user.id, kind: 'document', internal: !shared,
+        note: shared ? `${row.title} shared with the property owner.` : `${row.title} no longer shared with the property owner.`,
+      });
+    }
+    return view(saved, user);
+  });
 }

@@ -1,7 +1,7 @@
 import { and, eq, isNull } from 'drizzle-orm';
 import type { SessionUser } from '../../auth/session-user';
 import type { AppContext } from '../../context';
-import { documents, gradeChecks, jurisdictions, ruleProfileVersions } from '../../db/schema';
+import { documents, gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
 import { loadVisibleRequest } from '../requests/request-access';
 import { buildGradeCheckReport } from '../reports/grade-check-report';
 import { storeReport } from '../reports/report-storage';
@@ -43,6 +43,12 @@ export async function attachGradeCheck(ctx: Pick<AppContext, 'db' | 's3' | 'env'
     }).onConflictDoNothing({ target: documents.objectKey }).returning();
     const [attached] = await tx.update(gradeChecks).set({ attachedAt: new Date() })
       .where(and(eq(gradeChecks.id, check.id), isNull(gradeChecks.attachedAt))).returning();
+    if (document) {
+      await tx.insert(requestEvents).values({
+        requestId: request.id, actorId: user.id, kind: 'grade-check-report', internal: !share,
+        note: `Grade check ${check.number} report attached${share ? ' and shared with the property owner' : ''}.`,
+      });
+    }
     const [saved] = document ? [document] : await tx.select().from(documents).where(eq(documents.objectKey, objectKey));
     return { document: saved, check: attached ?? check };
   });

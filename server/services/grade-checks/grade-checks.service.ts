@@ -3,7 +3,7 @@ import type { RuleProfile } from '../../../shared/engine';
 import type { RequestStatus } from '../../../shared/workflow/statuses';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db, DbOrTx } from '../../db/client';
-import { gradeChecks, jurisdictions, ruleProfileVersions } from '../../db/schema';
+import { gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
 import { AppError, conflict, notFound } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
 import type { GradeCheckInputs, GradeCheckResults } from './grade-check-inputs';
@@ -63,6 +63,11 @@ export async function saveGradeCheck(db: Db, user: SessionUser, requestId: strin
       requestId: request.id, number: (last ?? 0) + 1, ruleProfileVersionId: versionId, engineVersion: results.report.engineVersion,
       inputs, results, passed: results.report.passes, summary: plainSummary(inputs, results, profile), createdById: user.id,
     }).returning();
+    // The office's history shows each check as it is made; the owner hears of it once a report is attached.
+    await tx.insert(requestEvents).values({
+      requestId: request.id, actorId: user.id, kind: 'grade-check', internal: true,
+      note: `Grade check ${row.number} saved against ${profile.jurisdictionName ?? 'the rule profile'} version ${profile.version}: ${row.passed ? 'meets the rules' : 'does not meet the rules'}.`,
+    });
     return row;
   });
 }
