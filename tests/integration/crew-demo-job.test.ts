@@ -1,6 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { requests } from '../../server/db/schema';
+import { seedDemo } from '../../server/db/seed';
 import { seedDemoJobs } from '../../server/db/seed/demo-jobs';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createTestApp, type TestApp } from '../setup/test-app';
@@ -10,7 +11,8 @@ let cast: Cast;
 beforeAll(async () => {
   t = await createTestApp();
   cast = await signInCast(t);
-  await seedDemoJobs(t.ctx.db);
+  // The whole demo seed (people, authorities, requests, this job), then the job's seed again: it must not repeat.
+  await seedDemo(t.ctx.db);
   await seedDemoJobs(t.ctx.db);
 });
 afterAll(() => t.close());
