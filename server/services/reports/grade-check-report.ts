@@ -19,6 +19,23 @@ export interface ReportData {
 
 const dateText = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : '-');
 
+/** What was measured at the site, in one paragraph, so the report stands on its own. */
+function siteWords(check: GradeCheck): string {
+  const { road, sight, geometry, culvert } = check.inputs;
+  const parts: string[] = [`Road edge at station ${formatStation(check.inputs.roadEdgeStationFt ?? check.results.report.profile.points[0].stationFt)}`];
+  if (road) {
+    parts.push(`road grade ${Math.abs(road.gradePercent)}% ${road.gradePercent >= 0 ? 'rising' : 'falling'} to the right facing into the property`);
+    parts.push(`road-edge elevation ${road.edgeElevationFt.toFixed(2)} ft`);
+    if (road.crossSlopePercent !== undefined) parts.push(`cross slope ${road.crossSlopePercent}%`);
+  }
+  if (sight?.speedMph !== undefined) parts.push(`speed ${sight.speedMph} mph`);
+  if (geometry?.widthFt !== undefined) parts.push(`entrance ${geometry.widthFt} ft wide`);
+  parts.push(culvert ? `a ${culvert.diameterIn} in culvert with inverts ${culvert.inletInvertFt.toFixed(2)} ft (inlet) and ${culvert.outletInvertFt.toFixed(2)} ft (outlet)` : 'no culvert');
+  const shots = check.results.surveyed?.profile.points.length ?? check.results.report.profile.points.length;
+  parts.push(`${shots} centreline shots${check.inputs.design?.applied ? ', checked on the proposed profile' : ', checked as surveyed'}`);
+  return `${parts.join('; ')}.`;
+}
+
 /** The grade check as a PDF the owner, the crew and the road authority can read; built from the stored record only. */
 export function buildGradeCheckReport(data: ReportData): Promise<Buffer> {
   const { check, profile } = data;
@@ -38,6 +55,8 @@ export function buildGradeCheckReport(data: ReportData): Promise<Buffer> {
   doc.moveDown(0.6);
 
   const { report } = check.results;
+  heading(doc, 'Site and survey');
+  paragraph(doc, siteWords(check));
   heading(doc, report.passes ? 'Result: meets the rules checked' : 'Result: does not yet meet the rules');
   paragraph(doc, check.summary);
   paragraph(doc, report.summary.text, { italic: true });
