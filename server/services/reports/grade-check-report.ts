@@ -74,7 +74,7 @@ export function buildGradeCheckReport(data: ReportData): Promise<Buffer> {
   drawTable(doc, [
     { title: 'Rule', width: 190 }, { title: 'Station', width: 50 }, { title: 'Measured', width: 65, align: 'right' },
     { title: 'Limit', width: 65, align: 'right' }, { title: 'Room to spare', width: 65, align: 'right' }, { title: 'Result', width: 81 },
-  ], findings.map((f) => findingCells(f, formatStation)), { highlight: (i) => findings[i].status === 'fail' });
+  ], findings.map((f) => findingCells(f, formatStation, profile.units)), { highlight: (i) => findings[i].status === 'fail' });
 
   designSections(doc, check);
 

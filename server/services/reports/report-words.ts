@@ -1,4 +1,4 @@
-import type { Finding, FindingStatus, RuleProfile } from '../../../shared/engine';
+import { displayLength, displaySmallLength, type DisplayUnits, type Finding, type FindingStatus, type RuleProfile } from '../../../shared/engine';
 
 /** Printed on every grade check report; the field sheet carries the same reminders. */
 export const reportCautions = [
@@ -15,19 +15,21 @@ export const statusWords: Record<FindingStatus, string> = {
   'not-checked': 'Not checked',
 };
 
-export function valueText(value: number | null, unit: string): string {
+export function valueText(value: number | null, unit: string, units: DisplayUnits = 'us'): string {
   if (value === null) return '-';
+  if (units === 'metric' && unit === 'ft') return `${displayLength(value, units).value.toFixed(2)} m`;
+  if (units === 'metric' && unit === 'in') return `${displaySmallLength(value, units).value.toFixed(0)} mm`;
   const places = unit === 'ft/ft' || unit === 'HW/D' ? 3 : unit === 'cfs' ? 2 : 1;
   const shown = value.toFixed(places);
   return unit === '%' ? `${shown}%` : `${shown} ${unit}`;
 }
 
-export const findingCells = (f: Finding, station: (ft: number) => string) => [
+export const findingCells = (f: Finding, station: (ft: number) => string, units: DisplayUnits) => [
   f.label + (f.note ? ` (${f.note})` : ''),
   f.stationFt === undefined ? '' : station(f.stationFt),
-  valueText(f.measured, f.unit),
-  valueText(f.limit, f.unit),
-  valueText(f.margin, f.unit),
+  valueText(f.measured, f.unit, units),
+  valueText(f.limit, f.unit, units),
+  valueText(f.margin, f.unit, units),
   statusWords[f.status],
 ];
 
