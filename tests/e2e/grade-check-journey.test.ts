@@ -82,7 +82,8 @@ describe('from visit booked to checked', () => {
     await summary.waitFor();
     expect(await summary.textContent()).toMatch(/needs a gentler slope near the road: here is what we propose/);
     expect(await summary.textContent()).toContain("meets Marrow County's rules (version 1)");
-    await page.getByText('Grade check 1 report').waitFor();
+    await page.getByText('Grade check 1 report', { exact: true }).waitFor();
+    await page.getByText('Grade check 1 report attached and shared with the property owner.').waitFor();
     await shot(page, 'owner-view');
     await context.close();
   });
