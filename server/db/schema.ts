@@ -101,6 +101,9 @@ export const requests = pgTable('requests', {
   // The office queue sorts by applicant and by road too; keyset paging needs the id as the tie-break.
   index('requests_applicant_name_idx').on(t.applicantName, t.id),
   index('requests_road_name_idx').on(t.roadName, t.id),
+  // A status filter combined with an authority or an assignee is the office's everyday view.
+  index('requests_jurisdiction_status_idx').on(t.jurisdictionId, t.status),
+  index('requests_assignee_status_idx').on(t.assigneeId, t.status),
   index('requests_search_idx').using('gin', t.searchVector),
 ]);
 

@@ -1,0 +1,2 @@
+CREATE INDEX "requests_jurisdiction_status_idx" ON "requests" USING btree ("jurisdiction_id","status");--> statement-breakpoint
+CREATE INDEX "requests_assignee_status_idx" ON "requests" USING btree ("assignee_id","status");
