@@ -1,12 +1,11 @@
 import { and, eq, sql } from 'drizzle-orm';
-import { proposeProfile, ruleProfileSchema, type ProfilePoint, type RuleProfile } from '../../../shared/engine';
+import { ruleProfileSchema, type ProfilePoint } from '../../../shared/engine';
 import type { SubmittedApplication } from '../../../shared/requests/application-schema';
 import type { RequestStatus } from '../../../shared/workflow/statuses';
-import { plainSummary } from '../../services/grade-checks/plain-summary';
-import { parseGradeCheckInputs, runGradeCheck } from '../../services/grade-checks/run-grade-check';
 import { nextReference } from '../../services/requests/reference';
 import type { Db } from '../client';
 import { gradeChecks, jobs, jurisdictions, requestEvents, requests, ruleProfileVersions, users } from '../schema';
+import { demoCheck, type DemoSite } from './demo-survey';
 
 const address = '57 Juniper Ridge Road, Marrow Crossing';
 
@@ -27,33 +26,8 @@ const application: SubmittedApplication = {
   },
 };
 
-const grade = (points: ProfilePoint[], from: number, to: number) => {
-  const a = points.find((p) => p.stationFt === from)!;
-  const b = points.find((p) => p.stationFt === to)!;
-  return Math.round(((b.elevationFt - a.elevationFt) / (to - from)) * 10_000) / 100;
-};
-
-function checkInputs(rules: RuleProfile) {
-  const proposal = proposeProfile({ existing: ground, roadEdgeElevationFt: 100 }, rules);
-  const design = proposal.feasible ? proposal.profile : ground;
-  const landingGrade = grade(design, 0, 20);
-  return {
-    profile: { kind: 'elevations', points: design }, roadEdgeStationFt: 0,
-    culvert: { diameterIn: 18, manningN: 0.024, inletInvertFt: 97.3, outletInvertFt: 97.0, surfaceElevationFt: 100, topWidthFt: 12, sideSlopeHPerV: 2, designFlowCfs: 6 },
-    sight: { speedMph: 40, measuredLeftFt: 620, measuredRightFt: 580 },
-    geometry: { widthFt: 12 },
-    road: { gradePercent: 1.2, edgeElevationFt: 100 },
-    laser: {
-      originElevationFt: 100, roadGradePercent: 1.2, landingGradePercent: landingGrade, landingLengthFt: 20,
-      drivewayGradePercent: grade(design, 20, 40), receiverOffsetFt: 6,
-      stakes: [
-        { label: 'Landing left', offsetFt: -6, distanceFt: 10, rodReadingFt: 5.55 },
-        { label: 'Landing end', offsetFt: 0, distanceFt: 20, rodReadingFt: 5.9 },
-      ],
-    },
-    design: { existing: ground, roadEdgeElevationFt: 100, applied: proposal.feasible, haul: { soil: 'loam', truckCuYd: 10 } },
-  };
-}
+// 5.5% up from the road edge for the first 20 ft, then about 11.5%: the county's 4% landing fails until redesigned.
+const site: DemoSite = { ground, speedMph: 40, sightLeftFt: 620, sightRightFt: 580, roadGradePercent: 1.2 };
 
 const path: RequestStatus[] = ['draft', 'submitted', 'visit_booked', 'checked', 'permit_filed', 'permit_granted', 'released'];
 
@@ -72,8 +46,7 @@ export async function seedDemoJobs(db: Db) {
       .where(eq(jurisdictions.slug, 'marrow-county'));
     if (!owner || !office || !county) return;
     const rules = { ...ruleProfileSchema.parse(county.v.profile), id: county.v.id, version: county.v.version, jurisdictionName: county.j.name };
-    const inputs = parseGradeCheckInputs(checkInputs(rules));
-    const results = runGradeCheck(inputs, rules);
+    const computed = demoCheck(rules, site);
     const now = Date.now();
     const day = (offset: number) => new Date(now + offset * 86_400_000);
     const [request] = await tx.insert(requests).values({
@@ -89,8 +62,7 @@ export async function seedDemoJobs(db: Db) {
       });
     }
     const [check] = await tx.insert(gradeChecks).values({
-      requestId: request.id, number: 1, ruleProfileVersionId: county.v.id, engineVersion: results.report.engineVersion, inputs, results,
-      passed: results.report.passes, summary: plainSummary(inputs, results, rules), attachedAt: day(-15), createdById: office.id,
+      requestId: request.id, number: 1, ruleProfileVersionId: county.v.id, ...computed, attachedAt: day(-15), createdById: office.id,
     }).returning();
     await tx.insert(jobs).values({ requestId: request.id, gradeCheckId: check.id, releasedAt: day(-1) });
   });
