@@ -10,14 +10,29 @@ import { DOWNLOAD_SECONDS, downloadUrl } from '../../services/reports/report-sto
 type DocumentRow = typeof documents.$inferSelect;
 
 /** The property owner sees only what the office shared; the office and the crew on the job see everything. */
-export async function listDocuments(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, requestId: string) {
-  const request = await loadVisibleRequest(ctx.db, user, requestId);
+async function visibleRows(db: Db, user: SessionUser, requestId: string) {
+  const request = await loadVisibleRequest(db, user, requestId);
   const where = user.role === 'applicant'
     ? and(eq(documents.requestId, request.id), eq(documents.sharedWithApplicant, true))
     : eq(documents.requestId, request.id);
-  const rows = await ctx.db.select().from(documents).where(where).orderBy(desc(documents.createdAt));
+  return db.select().from(documents).where(where).orderBy(desc(documents.createdAt));
+}
+
+/** The list without links, for pages that fetch a short-lived link only when a document is opened. */
+export async function listDocumentViews(db: Db, user: SessionUser, requestId: string) {
+  return (await visibleRows(db, user, requestId)).map((row) => view(row, user));
+}
+
+export async function listDocuments(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, requestId: string) {
+  const rows = await visibleRows(ctx.db, user, requestId);
   const expiresAt = new Date(Date.now() + DOWNLOAD_SECONDS * 1000).toISOString();
   return Promise.all(rows.map(async (row) => ({ ...view(row, user), url: await downloadUrl(ctx, row), urlExpiresAt: expiresAt })));
+}
+
+export async function documentLink(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, requestId: string, documentId: string) {
+  const row = (await visibleRows(ctx.db, user, requestId)).find((d) => d.id === documentId);
+  if (!row) throw notFound('Document');
+  return { url: await downloadUrl(ctx, row), expiresInSeconds: DOWNLOAD_SECONDS };
 }
 
 function view(row: DocumentRow, user: SessionUser) {

@@ -1,16 +1,14 @@
-import { GetObjectCommand } from '@aws-sdk/client-s3';
-import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 import { Router } from 'express';
 import { z } from 'zod';
 import { entranceStepShape, siteStepShape } from '../../../shared/requests/application-schema';
 import type { AppContext } from '../../context';
-import { notFound } from '../../lib/errors';
 import { handle, uuidParam } from '../../lib/handle';
 import { requireRole } from '../../middleware/require-role';
 import { loadVisibleRequest } from '../../services/requests/request-access';
 import { createDraft, listMine, saveDraft } from './drafts.service';
 import { expectedOfApplicant, requestView } from './request-view';
-import { listDocuments, listEvents } from './timeline.service';
+import { listDocumentViews } from '../documents/documents.service';
+import { listEvents } from './timeline.service';
 
 export const saveDraftInputSchema = z.strictObject({
   expectedVersion: z.number({ error: 'Must be the version number you last read.' }).int().min(1),
@@ -19,10 +17,8 @@ export const saveDraftInputSchema = z.strictObject({
   entrance: entranceStepShape.partial().optional(),
 });
 
-const documentParams = z.object({ id: z.uuid('must be a valid id'), documentId: z.uuid('must be a valid id') });
-const downloadSeconds = 300;
 
-export function requestsRouter({ db, s3, env }: AppContext) {
+export function requestsRouter({ db }: AppContext) {
   const router = Router();
 
   router.post('/api/requests', requireRole('applicant'), handle({}, async ({ user, res }) => {
@@ -43,7 +39,7 @@ export function requestsRouter({ db, s3, env }: AppContext) {
 
   router.get('/api/requests/:id', handle({ params: uuidParam }, async ({ params, user }) => ({
     request: requestView(await loadVisibleRequest(db, user, params.id), user),
-    documents: (await listDocuments(db, user, params.id)).map(({ objectKey: _key, ...doc }) => doc),
+    documents: await listDocumentViews(db, user, params.id),
   })));
 
   router.get('/api/requests/:id/events', handle({ params: uuidParam }, async ({ params, user }) => {
@@ -51,12 +47,5 @@ export function requestsRouter({ db, s3, env }: AppContext) {
     return { events: await listEvents(db, user, params.id) };
   }));
 
-  router.get('/api/requests/:id/documents/:documentId/url', handle({ params: documentParams }, async ({ params, user }) => {
-    await loadVisibleRequest(db, user, params.id);
-    const doc = (await listDocuments(db, user, params.id)).find((d) => d.id === params.documentId);
-    if (!doc) throw notFound('Document');
-    const command = new GetObjectCommand({ Bucket: env.S3_BUCKET, Key: doc.objectKey, ResponseContentDisposition: 'inline' });
-    return { url: await getSignedUrl(s3, command, { expiresIn: downloadSeconds }), expiresInSeconds: downloadSeconds };
-  }));
   return router;
 }

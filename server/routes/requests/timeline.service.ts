@@ -1,7 +1,7 @@
-import { and, asc, desc, eq } from 'drizzle-orm';
+import { and, asc, eq } from 'drizzle-orm';
 import type { SessionUser } from '../../auth/session-user';
 import type { DbOrTx } from '../../db/client';
-import { documents, requestEvents, users } from '../../db/schema';
+import { requestEvents, users } from '../../db/schema';
 import { isOffice } from './request-view';
 
 /** Internal events (assignments, the office's notes) exist for the office only. */
@@ -16,14 +16,4 @@ export async function listEvents(db: DbOrTx, user: SessionUser, requestId: strin
   }).from(requestEvents).leftJoin(users, eq(users.id, requestEvents.actorId)).where(where)
     .orderBy(asc(requestEvents.createdAt), asc(requestEvents.id));
   return rows.map(({ internal, ...event }) => (office ? { ...event, internal } : event));
-}
-
-export async function listDocuments(db: DbOrTx, user: SessionUser, requestId: string) {
-  const where = isOffice(user) ? eq(documents.requestId, requestId)
-    : and(eq(documents.requestId, requestId), eq(documents.sharedWithApplicant, true));
-  return db.select({
-    id: documents.id, kind: documents.kind, title: documents.title, contentType: documents.contentType,
-    sizeBytes: documents.sizeBytes, sharedWithApplicant: documents.sharedWithApplicant, createdAt: documents.createdAt,
-    objectKey: documents.objectKey,
-  }).from(documents).where(where).orderBy(desc(documents.createdAt));
 }
