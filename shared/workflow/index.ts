@@ -1,2 +1,3 @@
 export * from './statuses';
 export * from './transitions';
+export * from './event-kinds';

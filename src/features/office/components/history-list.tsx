@@ -1,3 +1,4 @@
+import { eventKindLabel } from '@shared/workflow/event-kinds';
 import { roleLabels, statusText } from '@shared/workflow/statuses';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useRequestEvents } from '../api/get-request-events';
@@ -16,13 +17,13 @@ export function HistoryList({ requestId }: { requestId: string }) {
           <p className="font-semibold text-pine-900">
             {e.kind === 'transition' && e.toStatus
               ? (e.fromStatus ? `${statusText[e.fromStatus].label} → ${statusText[e.toStatus].label}` : statusText[e.toStatus].label)
-              : e.note || e.kind}
+              : eventKindLabel(e.kind)}
             {e.internal && <span className="ml-2 rounded bg-tape px-1.5 py-0.5 text-xs text-pine-900">Office only</span>}
           </p>
           <p className="text-xs text-stone-600">
             {formatWhen(e.createdAt)} · {e.actorName ?? 'Gradepass'}{e.actorRole ? ` (${roleLabels[e.actorRole]})` : ''}
           </p>
-          {e.kind === 'transition' && e.note && <p className="mt-1 whitespace-pre-wrap text-sm">{e.note}</p>}
+          {e.note && <p className="mt-1 whitespace-pre-wrap text-sm">{e.note}</p>}
         </li>
       ))}
     </ol>

@@ -1,3 +1,4 @@
+import { eventKindLabel } from '@shared/workflow/event-kinds';
 import { statusText } from '@shared/workflow/statuses';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useEvents } from '../api/get-events';
@@ -7,7 +8,7 @@ const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateSty
 
 function describe(event: RequestEvent) {
   if (event.toStatus && event.fromStatus !== event.toStatus) return statusText[event.toStatus].label;
-  return event.kind === 'transition' ? 'Updated' : event.kind.replace(/[-_]/g, ' ');
+  return eventKindLabel(event.kind);
 }
 
 /** Everything that happened to the request that its reader may know, oldest first. */

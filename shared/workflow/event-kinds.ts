@@ -1,0 +1,11 @@
+/** What the events that are not status changes are called on timelines, in plain words. */
+export const eventKindLabels: Record<string, string> = {
+  transition: 'Status changed',
+  assignment: 'Assigned in the office',
+  'grade-check': 'Grade check saved',
+  'grade-check-report': 'Grade check report attached',
+  document: 'Document shared',
+  'work-day-planned': 'Work day planned',
+};
+
+export const eventKindLabel = (kind: string) => eventKindLabels[kind] ?? 'Update';
