@@ -50,7 +50,7 @@ export async function seedDemoJobs(db: Db) {
     const now = Date.now();
     const day = (offset: number) => new Date(now + offset * 86_400_000);
     const [request] = await tx.insert(requests).values({
-      reference: await nextReference(tx), applicantId: owner.id, status: 'released', version: path.length, application, wizardStep: 3,
+      reference: await nextReference(tx), applicantId: owner.id, status: 'released', version: path.length, statusChangedAt: day(-30 + (path.length - 1) * 4), application, wizardStep: 3,
       applicantName: owner.name, siteAddress: address, roadName: application.site.roadName, siteLat: 44.2106, siteLng: -72.5874,
       jurisdictionId: county.j.id, visitAt: day(-20), submittedAt: day(-30), permitReference: 'MC-DA-2026-0388',
       permitDecidedOn: day(-3).toISOString().slice(0, 10), permitExpiresOn: day(362).toISOString().slice(0, 10),
@@ -64,6 +64,6 @@ export async function seedDemoJobs(db: Db) {
     const [check] = await tx.insert(gradeChecks).values({
       requestId: request.id, number: 1, ruleProfileVersionId: county.v.id, ...computed, attachedAt: day(-15), createdById: office.id,
     }).returning();
-    await tx.insert(jobs).values({ requestId: request.id, gradeCheckId: check.id, releasedAt: day(-1) });
+    await tx.insert(jobs).values({ requestId: request.id, gradeCheckId: check.id, releasedAt: day(-30 + (path.length - 1) * 4) });
   });
 }
