@@ -1,4 +1,4 @@
-import type { ApplicationDraft } from '@shared/requests/application-schema';
+import type { RequestViewBase, TimelineEventView } from '@shared/requests/request-views';
 import type { RequestStatus, Role } from '@shared/workflow/statuses';
 
 export const queueSorts = ['waiting', 'reference', 'applicant', 'road', 'created'] as const;
@@ -37,41 +37,15 @@ export interface OfficePerson { id: string; name: string; role: Role }
 export interface QueueOptions { jurisdictions: { id: string; name: string }[]; people: OfficePerson[] }
 
 /** A request as GET /api/requests/:id returns it to the office. */
-export interface OfficeRequest {
-  id: string;
-  reference: string;
-  status: RequestStatus;
-  statusLabel: string;
-  whatNext: string;
-  version: number;
-  application: ApplicationDraft;
-  applicantName: string;
-  siteAddress: string;
-  roadName: string;
-  visitAt: string | null;
-  permitReference: string | null;
-  permitDecidedOn: string | null;
-  permitConditions: string | null;
+export interface OfficeRequest extends RequestViewBase {
   permitExpiresOn: string | null;
-  submittedAt: string | null;
-  statusChangedAt: string;
   applicantId: string;
   assigneeId: string | null;
   crewId: string | null;
   jurisdictionId: string | null;
 }
 
-export interface OfficeEvent {
-  id: number;
-  kind: string;
-  fromStatus: RequestStatus | null;
-  toStatus: RequestStatus | null;
-  note: string;
-  internal: boolean;
-  createdAt: string;
-  actorName: string | null;
-  actorRole: Role | null;
-}
+export type OfficeEvent = TimelineEventView & { internal: boolean };
 
 export interface OfficeMessage {
   id: string;
