@@ -4,6 +4,7 @@ import { allowedTransitions } from '../../../shared/workflow/transitions';
 import type { AppContext } from '../../context';
 import { AppError, conflict } from '../../lib/errors';
 import { handle, uuidParam } from '../../lib/handle';
+import { acceptJob } from '../../services/crew/claim.service';
 import { loadVisibleRequest } from '../../services/requests/request-access';
 import { requestView } from '../requests/request-view';
 import { actionPatch, runTransitionEffects, type EffectInput } from '../../services/requests/transition-effects';
@@ -15,6 +16,10 @@ export function transitionsRouter({ db, env }: AppContext) {
   const transitionCtx = { db, officeEmail: env.OFFICE_EMAIL, appOrigin: env.APP_ORIGIN };
 
   router.post('/api/requests/:id/transitions', handle({ params: uuidParam, body: transitionInputSchema }, async ({ params, body, user }) => {
+    // Taking a job has one implementation, so every way in tells the crew lead who won a lost race (409).
+    if (body.action === 'accept-job' && user.role === 'crew') {
+      return { request: requestView((await acceptJob(transitionCtx, user, params.id, body.expectedVersion)).request, user) };
+    }
     const { note, patch } = readNeeds(body);
     // Answer "not from here" with the current status for the wrong role too, not only the wrong status:
     // the person sees why the button they expected is not there. The locked re-check happens in applyTransition.

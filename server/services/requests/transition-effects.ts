@@ -48,8 +48,6 @@ export async function runTransitionEffects(tx: Tx, row: RequestRow, input: Effec
     const check = await attachedGradeCheck(tx, row.id);
     await tx.insert(jobs).values({ requestId: row.id, gradeCheckId: check?.id ?? null })
       .onConflictDoUpdate({ target: jobs.requestId, set: { releasedAt: new Date(), crewId: null, acceptedAt: null, gradeCheckId: check?.id ?? null } });
-  } else if (action === 'accept-job') {
-    await tx.update(jobs).set({ crewId: actor.id, acceptedAt: new Date() }).where(eq(jobs.requestId, row.id));
   } else if (action === 'hand-back') {
     await tx.update(jobs).set({ crewId: null, acceptedAt: null, scheduledFor: null }).where(eq(jobs.requestId, row.id));
   } else if (action === 'mark-built') {
@@ -61,7 +59,6 @@ export async function runTransitionEffects(tx: Tx, row: RequestRow, input: Effec
 /** Columns set by the action itself rather than typed by the person making it. */
 export function actionPatch(action: string, actor: SessionUser, now = new Date()): Partial<RequestRow> {
   if (action === 'submit') return { submittedAt: now };
-  if (action === 'accept-job') return { crewId: actor.id };
   if (action === 'hand-back') return { crewId: null };
   return {};
 }
