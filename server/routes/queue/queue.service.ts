@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import { and, asc, desc, eq, inArray, isNull, ne, sql, type AnyColumn, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import { requestStatuses, statusText, waitingOnOffice, type RequestStatus } from '../../../shared/workflow/statuses';
@@ -10,7 +11,7 @@ import { decodeQueueCursor, encodeQueueCursor, searchQuery, type QueueQuery, typ
 
 const assignee = alias(users, 'assignee');
 
-interface Queryable { query<R extends unknown[]>(config: { text: string; values: unknown[]; rowMode: 'array' }): Promise<{ rows: R[] }> }
+interface Queryable { query<R extends unknown[]>(config: { name: string; text: string; values: unknown[]; rowMode: 'array' }): Promise<{ rows: R[] }> }
 interface QueueRow {
   id: string; reference: string; status: RequestStatus; applicantName: string; roadName: string; statusChangedAt: string;
   jurisdictionId: string | null; jurisdictionName: string | null; assigneeId: string | null; assigneeName: string | null;
@@ -101,7 +102,9 @@ export async function listQueue(db: DbOrTx, pool: Queryable, user: SessionUser, 
   // The hottest office query: Drizzle writes the SQL, and the rows come back as arrays in the order of `fields`
   // (every column is already text, uuid or int, so there is nothing to decode), which spares a per-cell mapping.
   const keys = Object.keys(fields) as (keyof typeof fields)[];
-  const result = await pool.query<unknown[]>({ text: built.sql, values: built.params, rowMode: 'array' });
+  // Named by its text, the statement is parsed and planned once per connection instead of on every page.
+  const name = `queue_${createHash('sha1').update(built.sql).digest('hex').slice(0, 16)}`;
+  const result = await pool.query<unknown[]>({ name, text: built.sql, values: built.params, rowMode: 'array' });
   const rows = result.rows.map((cells) => Object.fromEntries(keys.map((key, i) => [key, cells[i]])) as unknown as QueueRow);
   // No row on a first page means nothing matched at all.
   const n = query.cursor ? null : (rows[0]?.total ?? 0);
