@@ -1,11 +1,13 @@
 import { and, desc, eq, isNotNull } from 'drizzle-orm';
 import { z } from 'zod';
 import {
-  culvertInputSchema, laserSetup, laserSetupInputSchema, normalizeProfile, profileInputSchema, proposeProfileInputSchema,
+  culvertInputSchema, laserSetup, laserSetupInputSchema, normalizeProfile, profileInputSchema,
   ruleProfileSchema, type CulvertInput, type EntranceReport, type ProfilePoint, type RuleProfile,
 } from '../../../shared/engine';
 import type { DbOrTx } from '../../db/client';
 import { gradeChecks, jobs, jurisdictions, ruleProfileVersions } from '../../db/schema';
+// The design part is read with the very schema the check screen saved it with.
+import { designPartSchema } from '../grade-checks/grade-check-inputs';
 
 /**
  * A saved grade check read back for the crew. The stored JSON was written by the office's check screen through
@@ -23,11 +25,6 @@ const proposalSchema = z.object({
   cutFillByStation: z.array(z.object({ stationFt: z.number(), existingFt: z.number(), designFt: z.number(), cutFillFt: z.number() })),
   cutCuYd: z.number(),
   fillCuYd: z.number(),
-});
-const designPartSchema = proposeProfileInputSchema.extend({
-  applied: z.boolean().default(false),
-  // The office's choice of soil and truck size for the haul estimate, when the check screen recorded one.
-  haul: z.object({ soil: z.enum(['loam', 'clay', 'sand']), truckCuYd: z.number().positive().max(100) }).optional(),
 });
 
 export interface SavedCheck {
