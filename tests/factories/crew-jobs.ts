@@ -88,7 +88,7 @@ export async function createReleasedJob(db: DbOrTx, o: ReleasedJobOptions): Prom
   });
   const { check, jurisdiction } = await createCrewCheck(db, row.id, o.staffId, o.rules);
   const [updated] = await db.update(requests).set({ jurisdictionId: jurisdiction.id }).where(eqId(row.id)).returning();
-  await db.insert(jobs).values({ requestId: row.id, gradeCheckId: check.id });
+  await db.update(jobs).set({ gradeCheckId: check.id }).where(eq(jobs.requestId, row.id));
   return { ...updated, gradeCheckId: check.id };
 }
 

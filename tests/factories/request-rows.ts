@@ -1,9 +1,11 @@
 import type { DbOrTx } from '../../server/db/client';
-import { requestEvents, requests } from '../../server/db/schema';
+import { jobs, requestEvents, requests } from '../../server/db/schema';
 import { nextReference } from '../../server/services/requests/reference';
 import type { SubmittedApplication } from '../../shared/requests/application-schema';
 
 export type RequestRow = typeof requests.$inferSelect;
+
+const onTheBoardOrLater = new Set(['released', 'crew_assigned', 'under_construction', 'built', 'closed']);
 
 /** A complete application, as the wizard would leave it; the place names are invented. */
 export function completeApplication(overrides: Partial<SubmittedApplication> = {}): SubmittedApplication {
@@ -37,5 +39,9 @@ export async function createRequestRow(db: DbOrTx, overrides: Partial<typeof req
   await db.insert(requestEvents).values({
     requestId: row.id, actorId: row.applicantId, kind: 'transition', fromStatus: 'draft', toStatus: row.status, note: '',
   });
+  // Released requests have the crew job row the release step writes, as real data does.
+  if (onTheBoardOrLater.has(row.status)) {
+    await db.insert(jobs).values({ requestId: row.id, crewId: row.crewId, acceptedAt: row.crewId ? new Date() : null });
+  }
   return row;
 }

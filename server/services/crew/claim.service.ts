@@ -1,20 +1,11 @@
-import { and, desc, eq, isNotNull } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import type { SessionUser } from '../../auth/session-user';
-import type { DbOrTx, Tx } from '../../db/client';
-import { gradeChecks, jobs, requests, users } from '../../db/schema';
+import type { DbOrTx } from '../../db/client';
+import { jobs, requests, users } from '../../db/schema';
 import { AppError } from '../../lib/errors';
-import type { RequestRow } from '../requests/request-access';
 import { applyTransition, type TransitionContext } from '../requests/transition.service';
 
 const takenStatuses = new Set(['crew_assigned', 'under_construction', 'built', 'closed']);
-
-async function ensureJobRow(tx: Tx, row: RequestRow) {
-  // Release writes this row; a request released before that existed gets it here, with the check it was released on.
-  const [check] = await tx.select({ id: gradeChecks.id }).from(gradeChecks)
-    .where(and(eq(gradeChecks.requestId, row.id), isNotNull(gradeChecks.attachedAt)))
-    .orderBy(desc(gradeChecks.attachedAt)).limit(1);
-  await tx.insert(jobs).values({ requestId: row.id, gradeCheckId: check?.id ?? null }).onConflictDoNothing();
-}
 
 /** After a lost race the job is someone else's: say whose, so the crew lead can call them rather than guess. */
 async function whoHasIt(db: DbOrTx, requestId: string, me: SessionUser): Promise<AppError | null> {
@@ -37,7 +28,6 @@ export async function acceptJob(ctx: TransitionContext, crew: SessionUser, reque
       patch: { crewId: crew.id },
       emailDetail: `Crew lead: ${crew.name}.`,
       within: async (tx, row) => {
-        await ensureJobRow(tx, row);
         await tx.update(jobs).set({ crewId: crew.id, acceptedAt: new Date(), scheduledFor: null, startedAt: null, builtAt: null })
           .where(eq(jobs.requestId, row.id));
       },
@@ -70,7 +60,6 @@ export async function startWork(ctx: TransitionContext, crew: SessionUser, reque
     action: 'start-work',
     expectedVersion,
     within: async (tx, row) => {
-      await ensureJobRow(tx, row);
       await tx.update(jobs).set({ startedAt: new Date() }).where(eq(jobs.requestId, row.id));
     },
   });

@@ -34,8 +34,7 @@ export async function scheduleJob(ctx: TransitionContext, crew: SessionUser, req
     checkDate(input.date, row.permitExpiresOn, now);
     const [job] = await tx.select({ scheduledFor: jobs.scheduledFor }).from(jobs).where(eq(jobs.requestId, row.id));
     const previous = job?.scheduledFor ?? null;
-    await tx.insert(jobs).values({ requestId: row.id, crewId: crew.id, acceptedAt: now, scheduledFor: input.date })
-      .onConflictDoUpdate({ target: jobs.requestId, set: { scheduledFor: input.date } });
+    await tx.update(jobs).set({ scheduledFor: input.date }).where(eq(jobs.requestId, row.id));
     await tx.update(requests).set({ updatedAt: now }).where(eq(requests.id, row.id));
     const note = input.note ?? '';
     const [event] = await tx.insert(requestEvents).values({
