@@ -1,10 +1,8 @@
 import { randomUUID } from 'node:crypto';
-import { mkdirSync } from 'node:fs';
-import path from 'node:path';
 import type { Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it, inject } from 'vitest';
-import { solidPng, withGpsExif } from '../integration/photos-images';
-import { appUrl, launchBrowser, screenshotPath, signInAs } from '../setup/browser';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { solidPng } from '../integration/photos-images';
+import { appUrl, caughtMail, launchBrowser, saveScreenshot, signInAs, siteJpeg } from '../setup/browser';
 
 let session: Awaited<ReturnType<typeof launchBrowser>>;
 beforeAll(async () => { session = await launchBrowser(); });
@@ -12,29 +10,11 @@ afterAll(() => session?.close());
 
 const isFocused = (page: Page, label: string) => page.getByLabel(label, { exact: true }).evaluate((el) => el === document.activeElement);
 
-/** A real JPEG, encoded by the browser itself, then given the GPS block a phone would write. */
-async function siteJpeg(page: Page) {
-  const dataUrl = await page.evaluate(() => {
-    const canvas = document.createElement('canvas');
-    canvas.width = 48; canvas.height = 32;
-    const g = canvas.getContext('2d')!;
-    g.fillStyle = '#6b8f5e'; g.fillRect(0, 0, 48, 32);
-    g.fillStyle = '#555'; g.fillRect(0, 20, 48, 12);
-    return canvas.toDataURL('image/jpeg', 0.9);
-  });
-  return withGpsExif(Buffer.from(dataUrl.split(',')[1], 'base64'), 44.26012, -72.57541);
-}
+const sitePhoto = (page: Page) => siteJpeg(page, 44.26012, -72.57541);
 
-async function shoot(page: Page, name: string) {
-  const file = screenshotPath(name);
-  mkdirSync(path.dirname(file), { recursive: true });
-  await page.screenshot({ path: file, fullPage: true });
-}
 
 async function mailFor(address: string) {
-  const { mailWebUrl } = inject('stack');
-  const messages = (await (await fetch(`${mailWebUrl}/api/messages`)).json()) as { to: string[]; subject: string }[];
-  return messages.filter((m) => m.to.some((to) => to.toLowerCase().includes(address)));
+  return (await caughtMail()).filter((m) => m.to.some((to) => to.toLowerCase().includes(address)));
 }
 
 describe('a new property owner asks for an entrance', () => {
@@ -74,7 +54,7 @@ describe('a new property owner asks for an entrance', () => {
 
     await page.getByRole('heading', { name: /Step 3 of 4/ }).waitFor();
     await page.locator('.uppy-Dashboard-input').first().setInputFiles([
-      { name: 'road-left.jpg', mimeType: 'image/jpeg', buffer: await siteJpeg(page) },
+      { name: 'road-left.jpg', mimeType: 'image/jpeg', buffer: await sitePhoto(page) },
       { name: 'ditch.png', mimeType: 'image/png', buffer: solidPng(40, 30, [120, 96, 60]) },
     ]);
     await page.getByText('2 photos').waitFor({ timeout: 30_000 });
@@ -83,7 +63,7 @@ describe('a new property owner asks for an entrance', () => {
     await page.getByLabel('What does “ditch.png” show?').fill('The ditch where the entrance goes');
     await page.getByLabel('What does “ditch.png” show?').press('Enter');
     await page.getByText('Caption saved.').waitFor();
-    await shoot(page, 'applicant-wizard-photos');
+    await saveScreenshot(page, 'applicant-wizard-photos');
     await page.getByRole('button', { name: 'Save and continue' }).click();
 
     await page.getByRole('heading', { name: /Step 4 of 4/ }).waitFor();
@@ -106,7 +86,7 @@ describe('a new property owner asks for an entrance', () => {
     expect(storedJpeg.subarray(0, 2).toString('hex')).toBe('ffd8');
     expect(storedJpeg.includes(Buffer.from('Exif\0\0', 'latin1'))).toBe(false);
     expect(jpeg.gpsLat).toBeCloseTo(44.26012, 4);
-    await shoot(page, 'applicant-request-page');
+    await saveScreenshot(page, 'applicant-request-page');
 
     await page.goto(appUrl('/my/requests'));
     const row = page.getByRole('row', { name: new RegExp(reference) });
@@ -114,7 +94,7 @@ describe('a new property owner asks for an entrance', () => {
     await row.getByText('Nothing for now').waitFor();
 
     await expect.poll(async () => (await mailFor(email)).map((m) => m.subject).join(' | '), { timeout: 30_000, interval: 500 }).toContain(reference);
-    await shoot(page, 'applicant-my-requests');
+    await saveScreenshot(page, 'applicant-my-requests');
     expect(pageErrors).toEqual([]);
     await context.close();
   });

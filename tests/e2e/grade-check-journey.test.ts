@@ -1,5 +1,3 @@
-import { mkdirSync } from 'node:fs';
-import path from 'node:path';
 import { eq } from 'drizzle-orm';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
@@ -8,7 +6,7 @@ import { jurisdictions } from '../../server/db/schema';
 import { demoPeople } from '../../server/db/seed/demo-people';
 import { ensurePerson } from '../factories/people';
 import { createRequestRow, type RequestRow } from '../factories/request-rows';
-import { appUrl, launchBrowser, screenshotPath, signInAs, signOut } from '../setup/browser';
+import { appUrl, launchBrowser, saveScreenshot, signInAs, signOut } from '../setup/browser';
 
 /** A visit-booked request in Marrow County, whose 4% landing limit the surveyed 5.5% landing fails. */
 let session: Awaited<ReturnType<typeof launchBrowser>>;
@@ -29,11 +27,7 @@ afterAll(async () => {
   await session?.close();
 });
 
-async function shot(page: Page, name: string) {
-  const file = screenshotPath(`grade-check-${name}`);
-  mkdirSync(path.dirname(file), { recursive: true });
-  await page.screenshot({ path: file, fullPage: true });
-}
+const shot = (page: Page, name: string) => saveScreenshot(page, `grade-check-${name}`);
 
 const centreline = ['Station\tElevation', '0+00\t100.00', '0+10\t100.55', '0+20\t101.10', '0+40\t103.50', '0+60\t105.90', '0+80\t108.30'].join('\n');
 const verdict = (page: Page) => page.getByTestId('live-verdict');

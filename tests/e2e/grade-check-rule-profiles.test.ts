@@ -1,10 +1,8 @@
-import { mkdirSync } from 'node:fs';
-import path from 'node:path';
 import { randomUUID } from 'node:crypto';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoPeople } from '../../server/db/seed/demo-people';
-import { appUrl, launchBrowser, screenshotPath, signInAs, signOut } from '../setup/browser';
+import { appUrl, launchBrowser, saveScreenshot, signInAs, signOut } from '../setup/browser';
 
 let session: Awaited<ReturnType<typeof launchBrowser>>;
 beforeAll(async () => {
@@ -15,11 +13,7 @@ afterAll(() => session?.close());
 const admin = demoPeople.find((p) => p.role === 'admin')!;
 const staff = demoPeople.find((p) => p.role === 'staff')!;
 
-async function shot(page: Page, name: string) {
-  const file = screenshotPath(`rule-profiles-${name}`);
-  mkdirSync(path.dirname(file), { recursive: true });
-  await page.screenshot({ path: file, fullPage: true });
-}
+const shot = (page: Page, name: string) => saveScreenshot(page, `rule-profiles-${name}`);
 
 describe('rule profile versions', () => {
   it('an admin starts an authority from the template, publishes it, publishes a stricter version and compares them; staff only read', async () => {

@@ -1,5 +1,4 @@
-import { mkdirSync, writeFileSync } from 'node:fs';
-import path from 'node:path';
+import { writeFileSync } from 'node:fs';
 import { PDFParse } from 'pdf-parse';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
@@ -8,7 +7,7 @@ import { demoPeople } from '../../server/db/seed/demo-people';
 import { saveYard } from '../../server/services/crew/yard.service';
 import { createReleasedJob } from '../factories/crew-jobs';
 import { ensurePerson } from '../factories/people';
-import { appUrl, launchBrowser, screenshotPath, signInAs } from '../setup/browser';
+import { appUrl, launchBrowser, saveScreenshot, screenshotPath, signInAs } from '../setup/browser';
 
 /** The crew lead's side on its own: a job released straight into the running app's database, taken and built. */
 let session: Awaited<ReturnType<typeof launchBrowser>>;
@@ -31,11 +30,7 @@ afterAll(async () => {
   await session?.close();
 });
 
-async function shot(page: Page, name: string) {
-  const file = screenshotPath(`journey-crew-${name}`);
-  mkdirSync(path.dirname(file), { recursive: true });
-  await page.screenshot({ path: file, fullPage: true });
-}
+const shot = (page: Page, name: string) => saveScreenshot(page, `journey-crew-${name}`);
 
 const crewLead = demoPeople.filter((p) => p.role === 'crew')[0];
 

@@ -2,11 +2,11 @@ import { randomUUID } from 'node:crypto';
 import { mkdirSync, readdirSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { StoredMessage } from '../../fakes';
 import { demoPeople } from '../../server/db/seed/demo-people';
-import { solidPng, withGpsExif } from '../integration/photos-images';
-import { appUrl, launchBrowser, screenshotPath, signInAs } from '../setup/browser';
+import { solidPng } from '../integration/photos-images';
+import { appUrl, caughtMail, launchBrowser, saveScreenshot, screenshotPath, signInAs, siteJpeg } from '../setup/browser';
 
 /**
  * One driveway entrance from the first form to the closed request, through the real screens of all three roles,
@@ -28,11 +28,7 @@ const owner = { email: `odette.ferncastle-${randomUUID().slice(0, 6)}@example.te
 const address = '4 Tamarack Bend, Marrow Crossing';
 let shots = 0;
 
-async function shot(page: Page, name: string) {
-  const file = screenshotPath(`journey-${String(++shots).padStart(2, '0')}-${name}`);
-  mkdirSync(path.dirname(file), { recursive: true });
-  await page.screenshot({ path: file, fullPage: true });
-}
+const shot = (page: Page, name: string) => saveScreenshot(page, `journey-${String(++shots).padStart(2, '0')}-${name}`);
 
 async function as(browser: Browser, email: string, name?: string, viewport = { width: 1366, height: 900 }) {
   const context = await browser.newContext({ viewport });
@@ -42,25 +38,14 @@ async function as(browser: Browser, email: string, name?: string, viewport = { w
 }
 
 async function inbox(address: string): Promise<StoredMessage[]> {
-  const all = (await (await fetch(`${inject('stack').mailWebUrl}/api/messages`)).json()) as StoredMessage[];
-  return all.filter((m) => m.to.some((to) => to.toLowerCase() === address.toLowerCase()))
+  return (await caughtMail()).filter((m) => m.to.some((to) => to.toLowerCase() === address.toLowerCase()))
     .sort((a, b) => a.receivedAt.localeCompare(b.receivedAt) || a.id.localeCompare(b.id));
 }
 
 /** Waits until the homeowner has received `count` e-mails, so each step's e-mail is known to arrive in its turn. */
 const received = (count: number) => expect.poll(async () => (await inbox(owner.email)).length, { timeout: 30_000, interval: 300 }).toBeGreaterThanOrEqual(count);
 
-async function siteJpeg(page: Page) {
-  const dataUrl = await page.evaluate(() => {
-    const canvas = document.createElement('canvas');
-    canvas.width = 64; canvas.height = 40;
-    const g = canvas.getContext('2d')!;
-    g.fillStyle = '#7a9a6a'; g.fillRect(0, 0, 64, 40);
-    g.fillStyle = '#4b4b4b'; g.fillRect(0, 26, 64, 14);
-    return canvas.toDataURL('image/jpeg', 0.9);
-  });
-  return withGpsExif(Buffer.from(dataUrl.split(',')[1], 'base64'), 44.1802, -72.6411);
-}
+const sitePhoto = (page: Page) => siteJpeg(page, 44.1802, -72.6411);
 
 /**
  * An office action from the workspace's "Next step" panel, filled by `fill` and sent with its own button; done
@@ -110,7 +95,7 @@ describe('the whole journey of one entrance', () => {
     await page.getByRole('button', { name: 'Save and continue' }).click();
     await page.getByRole('heading', { name: /Step 3 of 4/ }).waitFor();
     await page.locator('.uppy-Dashboard-input').first().setInputFiles([
-      { name: 'from-the-road.jpg', mimeType: 'image/jpeg', buffer: await siteJpeg(page) },
+      { name: 'from-the-road.jpg', mimeType: 'image/jpeg', buffer: await sitePhoto(page) },
       { name: 'ditch-line.png', mimeType: 'image/png', buffer: solidPng(48, 32, [110, 90, 58]) },
     ]);
     await page.getByText('2 photos').waitFor({ timeout: 30_000 });

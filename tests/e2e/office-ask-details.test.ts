@@ -1,5 +1,3 @@
-import { mkdirSync } from 'node:fs';
-import path from 'node:path';
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { StoredMessage } from '../../fakes';
@@ -7,7 +5,7 @@ import { createDb } from '../../server/db/client';
 import { requests, users } from '../../server/db/schema';
 import { demoPeople } from '../../server/db/seed/demo-people';
 import { createRequestRow, type RequestRow } from '../factories/request-rows';
-import { appUrl, launchBrowser, screenshotPath, signInAs } from '../setup/browser';
+import { appUrl, caughtMail, launchBrowser, saveScreenshot, signInAs } from '../setup/browser';
 
 const staff = demoPeople.find((p) => p.role === 'staff')!;
 const owner = demoPeople.find((p) => p.role === 'applicant')!;
@@ -29,15 +27,10 @@ afterAll(async () => {
 });
 
 async function mailFor(reference: string, to: string): Promise<StoredMessage | undefined> {
-  const all = (await (await fetch(`${inject('stack').mailWebUrl}/api/messages`)).json()) as StoredMessage[];
-  return all.find((m) => m.subject.includes(reference) && m.to.includes(to));
+  return (await caughtMail()).find((m) => m.subject.includes(reference) && m.to.includes(to));
 }
 
-const shot = async (page: import('playwright-core').Page, name: string) => {
-  const file = screenshotPath(name);
-  mkdirSync(path.dirname(file), { recursive: true });
-  await page.screenshot({ path: file, fullPage: true });
-};
+const shot = saveScreenshot;
 
 describe('the office asks for details and the owner answers', () => {
   it('works end to end through the queue, the workspace, the e-mail and the owner’s page', async () => {
@@ -48,7 +41,8 @@ describe('the office asks for details and the owner answers', () => {
     await office.waitForURL((url) => url.searchParams.get('status') === 'submitted');
     const link = office.getByRole('link', { name: request.reference });
     await link.waitFor();
-    expect(await office.getByRole('row').filter({ hasText: 'More details needed' }).count()).toBe(0);
+    // The previous page stays on screen until the filtered one arrives, so wait for the filter to take effect.
+    await expect.poll(() => office.getByRole('row').filter({ hasText: 'More details needed' }).count()).toBe(0);
     await shot(office, 'office-queue-submitted');
 
     await link.click();

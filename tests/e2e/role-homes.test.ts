@@ -1,8 +1,6 @@
-import { mkdirSync } from 'node:fs';
-import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoPeople } from '../../server/db/seed/demo-people';
-import { launchBrowser, screenshotPath, signInAs, signOut } from '../setup/browser';
+import { launchBrowser, saveScreenshot, signInAs, signOut } from '../setup/browser';
 
 let session: Awaited<ReturnType<typeof launchBrowser>>;
 beforeAll(async () => {
@@ -32,9 +30,7 @@ describe('each role signs in through the picker and lands on its own home', () =
       } else {
         expect(await page.getByRole('link', { name: 'Users and roles' }).count()).toBe(0);
       }
-      const file = screenshotPath(`home-${home.role}`);
-      mkdirSync(path.dirname(file), { recursive: true });
-      await page.screenshot({ path: file, fullPage: true });
+      await saveScreenshot(page, `home-${home.role}`);
       await signOut(page);
       await context.close();
     });

@@ -1,6 +1,9 @@
+import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { inject } from 'vitest';
+import type { StoredMessage } from '../../fakes';
+import { withGpsExif } from '../integration/photos-images';
 import { chromiumPath } from './browser-tools';
 
 /** Debian's Chromium, never a downloaded one; the flags keep it off the network this machine does not have. */
@@ -40,6 +43,31 @@ export async function signInAs(page: Page, email: string, name?: string) {
 
 export function screenshotPath(name: string) {
   return path.join(inject('stack').artifactsDir, 'screenshots', `${name}.png`);
+}
+
+/** Every message the mail catcher has received, oldest first. */
+export async function caughtMail(): Promise<StoredMessage[]> {
+  return (await (await fetch(`${inject('stack').mailWebUrl}/api/messages`)).json()) as StoredMessage[];
+}
+
+/** A full-page screenshot under test-artifacts/screenshots/, for people to review what the test saw. */
+export async function saveScreenshot(page: Page, name: string) {
+  const file = screenshotPath(name);
+  mkdirSync(path.dirname(file), { recursive: true });
+  await page.screenshot({ path: file, fullPage: true });
+}
+
+/** A real JPEG of a site, encoded by the browser itself, then given the GPS block a phone camera writes. */
+export async function siteJpeg(page: Page, lat: number, lng: number) {
+  const dataUrl = await page.evaluate(() => {
+    const canvas = document.createElement('canvas');
+    canvas.width = 64; canvas.height = 40;
+    const g = canvas.getContext('2d')!;
+    g.fillStyle = '#7a9a6a'; g.fillRect(0, 0, 64, 40);
+    g.fillStyle = '#4b4b4b'; g.fillRect(0, 26, 64, 14);
+    return canvas.toDataURL('image/jpeg', 0.9);
+  });
+  return withGpsExif(Buffer.from(dataUrl.split(',')[1], 'base64'), lat, lng);
 }
 
 export async function signOut(page: Page) {
