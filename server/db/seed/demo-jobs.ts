@@ -62,7 +62,7 @@ export async function seedDemoJobs(db: Db) {
       });
     }
     const [check] = await tx.insert(gradeChecks).values({
-      requestId: request.id, number: 1, ruleProfileVersionId: county.v.id, ...computed, attachedAt: day(-15), createdById: office.id,
+      requestId: request.id, number: 1, ruleProfileVersionId: county.v.id, ...computed, createdAt: day(-15), attachedAt: day(-15), createdById: office.id,
     }).returning();
     await tx.insert(jobs).values({ requestId: request.id, gradeCheckId: check.id, releasedAt: day(-30 + (path.length - 1) * 4) });
   });

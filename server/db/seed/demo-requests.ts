@@ -85,7 +85,7 @@ async function seedOne(tx: Tx, people: People, demo: DemoRequest, now: number) {
 
   const check = demoCheck(found.rules, demo.site);
   const [saved] = await tx.insert(gradeChecks).values({
-    requestId: request.id, number: 1, ruleProfileVersionId: found.versionId, ...check, attachedAt: eventAt(3), createdById: office.id,
+    requestId: request.id, number: 1, ruleProfileVersionId: found.versionId, ...check, createdAt: eventAt(3), attachedAt: eventAt(3), createdById: office.id,
   }).returning();
   if (!reached(path, 'released')) return;
   await tx.insert(jobs).values({
