@@ -4,8 +4,15 @@ import { fileURLToPath } from 'node:url';
 import pg from 'pg';
 import * as schema from './schema';
 
-export function createDb(databaseUrl: string, max = 10) {
+/**
+ * A pool and its Drizzle handle. An idle connection can be ended from the server side (PostgreSQL restarting, an
+ * administrator or `drop database … with (force)` terminating backends); pg-pool then drops that connection and
+ * opens a new one at the next query, and emits 'error' on the pool. With no listener that event would throw and end
+ * the process, so every pool gets one: `onIdleError` (the app logs it; scripts and tests have nothing to do).
+ */
+export function createDb(databaseUrl: string, max = 10, onIdleError: (error: Error) => void = () => undefined) {
   const pool = new pg.Pool({ connectionString: databaseUrl, max });
+  pool.on('error', onIdleError);
   const db = drizzle({ client: pool, schema, casing: 'snake_case' });
   return { db, pool };
 }
