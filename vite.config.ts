@@ -14,7 +14,7 @@ export default defineConfig({
   test: {
     // The pinned AWS SDK runs on Node 20; silence its notice about releases that will need Node 22.
     env: { AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' },
-    // Three groups: the engine needs nothing; integration tests need PostgreSQL and the stand-ins;
+    // Four groups: the engine and the other pure units need nothing; integration tests need PostgreSQL and the stand-ins;
     // browser tests also need a built client and Chromium. Each group is a vitest project.
     projects: [
       {
@@ -22,6 +22,14 @@ export default defineConfig({
         test: {
           name: 'engine',
           include: ['tests/engine/**/*.test.ts'],
+          setupFiles: ['tests/setup/fail-on-console-error.ts'],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: 'unit',
+          include: ['tests/unit/**/*.test.ts'],
           setupFiles: ['tests/setup/fail-on-console-error.ts'],
         },
       },

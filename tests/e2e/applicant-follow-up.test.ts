@@ -3,7 +3,7 @@ import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { statusText } from '../../shared/workflow/statuses';
 import { completeApplication } from '../factories/request-rows';
-import { solidPng } from '../integration/photos-images';
+import { gpsTiff, heicWithPosition, solidPng, withPngMetadata } from '../factories/photo-images';
 import { appUrl, launchBrowser, signInAs } from '../setup/browser';
 
 let session: Awaited<ReturnType<typeof launchBrowser>>;
@@ -86,6 +86,34 @@ describe('after sending: the office asks, the owner answers', () => {
     storageDown = false;
     await owner.page.getByRole('button', { name: /retry/i }).first().click();
     await owner.page.getByText('1 photo', { exact: true }).waitFor({ timeout: 30_000 });
+    await owner.context.close();
+  });
+
+  it('offers the position from a HEIC and a PNG, then stores both without their metadata', async () => {
+    const owner = await personPage(`eli.varga-${randomUUID().slice(0, 6)}@example.test`, 'Eli Varga');
+    const draft = await draftThroughApi(owner.page, false);
+    // A made-up site position (demo scenario).
+    const heic = heicWithPosition(43.90127, -72.34051);
+    const png = withPngMetadata(solidPng(24, 18, [70, 110, 60]), 43.90127, -72.34051);
+    await owner.page.goto(appUrl(`/my/requests/${draft.id}/edit`));
+    await owner.page.getByRole('heading', { name: /Step 3 of 4/ }).waitFor();
+    await owner.page.locator('.uppy-Dashboard-input').first().setInputFiles([
+      { name: 'entrance.heic', mimeType: 'image/heic', buffer: heic.file },
+      { name: 'culvert.png', mimeType: 'image/png', buffer: png },
+    ]);
+    await owner.page.getByText('2 photos').waitFor({ timeout: 30_000 });
+    await owner.page.getByRole('button', { name: 'Use this position' }).waitFor();
+    await owner.page.getByText('This browser cannot show HEIC photos.').waitFor();
+
+    const listed = (await (await owner.page.request.get(appUrl(`/api/requests/${draft.id}/photos`))).json()).photos as { fileName: string; url: string; gpsLat: number | null }[];
+    const stored = async (name: string) => Buffer.from(await (await fetch(listed.find((p) => p.fileName === name)!.url)).arrayBuffer());
+    const storedHeic = await stored('entrance.heic');
+    expect(storedHeic.length).toBe(heic.file.length);
+    expect(storedHeic.includes(gpsTiff(43.90127, -72.34051))).toBe(false);
+    expect(storedHeic.subarray(heic.pictureAt, heic.pictureAt + heic.picture.length).equals(heic.picture)).toBe(true);
+    const storedPng = await stored('culvert.png');
+    for (const chunk of ['eXIf', 'tEXt', 'iTXt', 'tIME']) expect(storedPng.includes(Buffer.from(chunk, 'latin1'))).toBe(false);
+    expect(listed.every((p) => p.gpsLat !== null && Math.abs(p.gpsLat - 43.90127) < 1e-4)).toBe(true);
     await owner.context.close();
   });
 });

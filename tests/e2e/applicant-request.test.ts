@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { solidPng } from '../integration/photos-images';
+import { solidPng } from '../factories/photo-images';
 import { appUrl, caughtMail, launchBrowser, saveScreenshot, signInAs, siteJpeg } from '../setup/browser';
 
 let session: Awaited<ReturnType<typeof launchBrowser>>;

@@ -5,7 +5,7 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { StoredMessage } from '../../fakes';
 import { demoPeople } from '../../server/db/seed/demo-people';
-import { solidPng } from '../integration/photos-images';
+import { solidPng } from '../factories/photo-images';
 import { appUrl, caughtMail, launchBrowser, saveScreenshot, screenshotPath, signInAs, siteJpeg } from '../setup/browser';
 
 /**

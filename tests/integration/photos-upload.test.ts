@@ -3,7 +3,7 @@ import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { photos } from '../../server/db/schema';
 import { createTestApp, type TestApp } from '../setup/test-app';
-import { solidPng } from './photos-images';
+import { solidPng } from '../factories/photo-images';
 import { newApplicant, signInDemo, submitted, type Agent } from './requests-helpers';
 
 let t: TestApp;

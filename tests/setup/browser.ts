@@ -3,7 +3,7 @@ import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { inject } from 'vitest';
 import type { StoredMessage } from '../../fakes';
-import { withGpsExif } from '../integration/photos-images';
+import { withGpsExif } from '../factories/photo-images';
 import { chromiumPath } from './browser-tools';
 
 /** Debian's Chromium, never a downloaded one; the flags keep it off the network this machine does not have. */

@@ -4,17 +4,30 @@ import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { getPhotoUrl, useRequestPhotos } from '../api/get-request-photos';
 import type { OfficePhoto } from '../api/types';
 
-/** An image whose presigned link may have run out: on a load error it asks once for a fresh link. */
-function PhotoImage({ requestId, photo, className }: { requestId: string; photo: OfficePhoto; className: string }) {
+/**
+ * An image whose presigned link may have run out: on a load error it asks once for a fresh link. When the fresh
+ * link fails too, the browser cannot draw the file (HEIC outside Safari): it says so, and in the large viewer
+ * offers the file to open.
+ */
+function PhotoImage({ requestId, photo, className, offerFile = false }: { requestId: string; photo: OfficePhoto; className: string; offerFile?: boolean }) {
   const [src, setSrc] = useState(photo.url);
   const [retried, setRetried] = useState(false);
-  useEffect(() => { setSrc(photo.url); setRetried(false); }, [photo.url]);
+  const [unshowable, setUnshowable] = useState(false);
+  useEffect(() => { setSrc(photo.url); setRetried(false); setUnshowable(false); }, [photo.url]);
   const refresh = () => {
-    if (retried) return;
+    if (retried) { setUnshowable(true); return; }
     setRetried(true);
     getPhotoUrl(requestId, photo.id).then((r) => setSrc(r.url)).catch(() => setSrc(undefined));
   };
   if (!src) return <div className={`${className} grid place-items-center bg-stone-100 text-xs text-stone-500`}>Photo unavailable</div>;
+  if (unshowable) {
+    return (
+      <div className={`${className} flex flex-col items-center justify-center gap-2 bg-stone-100 p-3 text-center text-sm text-stone-700`}>
+        <span>{photo.contentType === 'image/heic' ? 'This browser cannot show HEIC photos.' : 'This photo cannot be shown here.'}</span>
+        {offerFile && <a href={src} target="_blank" rel="noreferrer" className="font-semibold text-pine-800 underline">Open {photo.fileName}</a>}
+      </div>
+    );
+  }
   return <img src={src} alt={photo.caption || photo.fileName} onError={refresh} className={className} />;
 }
 
@@ -53,7 +66,7 @@ export function PhotoViewer({ requestId }: { requestId: string }) {
         className="m-auto w-[min(64rem,95vw)] rounded-lg p-0 backdrop:bg-black/70">
         {current && (
           <figure className="bg-stone-900 text-white">
-            <PhotoImage requestId={requestId} photo={current} className="max-h-[75vh] w-full object-contain" />
+            <PhotoImage requestId={requestId} photo={current} className="max-h-[75vh] w-full object-contain" offerFile />
             <figcaption className="flex flex-wrap items-center justify-between gap-3 bg-white p-3 text-sm text-stone-800">
               <span>
                 <span className="font-semibold">{current.caption || current.fileName}</span>

@@ -10,13 +10,23 @@ import { useUpdateCaption } from '../api/update-caption';
 export function PhotoCard({ photo, requestId, editable }: { photo: Photo; requestId: string; editable: boolean }) {
   const captionId = useId();
   const [caption, setCaption] = useState(photo.caption);
+  // Most browsers other than Safari cannot draw HEIC; the photo is still there to download and open.
+  const [unshowable, setUnshowable] = useState(false);
   const update = useUpdateCaption(requestId);
   const remove = useRemovePhoto(requestId);
   const saveCaption = () => { if (caption.trim() !== photo.caption) update.mutate({ photoId: photo.id, caption }); };
   return (
     <li className="flex flex-col gap-2 rounded-md border border-stone-200 bg-white p-2">
       <a href={photo.url} target="_blank" rel="noreferrer" className="block overflow-hidden rounded bg-stone-100">
-        <img src={photo.url} alt={photo.caption || `Site photo ${photo.fileName}`} className="aspect-[4/3] w-full object-cover" loading="lazy" />
+        {unshowable ? (
+          <span className="flex aspect-[4/3] w-full flex-col items-center justify-center gap-1 p-3 text-center text-sm text-stone-700">
+            <span>{photo.contentType === 'image/heic' ? 'This browser cannot show HEIC photos.' : 'This photo cannot be shown here.'}</span>
+            <span className="font-semibold text-pine-800 underline">Open {photo.fileName}</span>
+          </span>
+        ) : (
+          <img src={photo.url} alt={photo.caption || `Site photo ${photo.fileName}`} className="aspect-[4/3] w-full object-cover"
+            loading="lazy" onError={() => setUnshowable(true)} />
+        )}
       </a>
       {editable ? (
         <div className="flex flex-col gap-1">

@@ -1,4 +1,5 @@
 import { gps } from 'exifr';
+import { heifWithoutMetadata, pngWithoutMetadata } from './metadata-bytes';
 
 /** The one thing read out of a photo's metadata: where it was taken, to offer as the site position. */
 export async function readPosition(data: Blob): Promise<{ latitude: number; longitude: number } | undefined> {
@@ -10,15 +11,26 @@ export async function readPosition(data: Blob): Promise<{ latitude: number; long
   }
 }
 
-// Types the browser can both decode and encode again; HEIC it cannot, so those go up as they are.
+// Types the browser can decode and encode again. PNG and HEIC are cleaned byte by byte instead: a PNG redrawn
+// can come out larger than the original, and HEIC the browser cannot encode (often not even decode).
 const redrawable = new Set(['image/jpeg', 'image/webp']);
+const byteCleaners: Record<string, (bytes: Uint8Array) => Uint8Array<ArrayBuffer> | null> = {
+  'image/png': pngWithoutMetadata,
+  'image/heic': heifWithoutMetadata,
+};
 
 /**
- * Draws the photo again so the copy that leaves the browser carries none of the camera's metadata (position,
- * device, time). The turn the camera recorded is applied while drawing, so the picture stays upright.
- * Returns null when the photo cannot be redrawn here; the original is then used.
+ * A copy of the photo that carries none of the camera's metadata (position, device, time). JPEG and WebP are drawn
+ * again, applying the turn the camera recorded so the picture stays upright; PNG loses its text and EXIF chunks;
+ * HEIC has its EXIF and XMP items blanked. Returns null when the photo cannot be cleaned here; the original is then
+ * used.
  */
 export async function withoutMetadata(data: Blob, type: string): Promise<Blob | null> {
+  const cleaner = byteCleaners[type];
+  if (cleaner) {
+    const clean = cleaner(new Uint8Array(await data.arrayBuffer()));
+    return clean ? new Blob([clean], { type }) : null;
+  }
   if (!redrawable.has(type) || typeof createImageBitmap !== 'function') return null;
   try {
     const bitmap = await createImageBitmap(data, { imageOrientation: 'from-image' });
