@@ -73,7 +73,7 @@ export interface LaserSheet {
 }
 
 export interface FieldSheetView {
-  job: { requestId: string; reference: string; status: RequestStatus; version: number; siteAddress: string; roadName: string; applicantName: string; crewName: string | null; scheduledFor: string | null };
+  job: { requestId: string; reference: string; status: RequestStatus; version: number; siteAddress: string; roadName: string; applicantName: string; crewId: string | null; crewName: string | null; scheduledFor: string | null };
   access: { parcelNumber: string; roadOwner: string; postedSpeedMph: number | null; whereText: string; notes: string; lat: number | null; lng: number | null };
   permit: PermitView & { authority: string | null; jurisdictionName: string | null };
   check: { number: number; summary: string; passed: boolean; ruleProfileLabel: string; engineVersion: string } | null;

@@ -2,7 +2,9 @@ import { writeFileSync } from 'node:fs';
 import { PDFParse } from 'pdf-parse';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { and, eq } from 'drizzle-orm';
 import { createDb } from '../../server/db/client';
+import { emails, messages } from '../../server/db/schema';
 import { demoPeople } from '../../server/db/seed/demo-people';
 import { saveYard } from '../../server/services/crew/yard.service';
 import { createReleasedJob } from '../factories/crew-jobs';
@@ -22,6 +24,7 @@ beforeAll(async () => {
   const job = await createReleasedJob(db.db, { applicantId: applicant.id, staffId: staff.id, siteLat: 44.1, siteLng: -72.6 });
   jobId = job.id;
   address = job.siteAddress;
+  await db.db.insert(messages).values({ requestId: job.id, authorId: applicant.id, visibility: 'shared', body: 'The septic lid is left of the entrance; please keep off it.' });
   // The same yard the owner's test types in, so the distance on the board holds whichever test runs first.
   await saveYard(db.db, { label: 'Marrow Crossing yard', lat: 44, lng: -72.6 });
 });
@@ -79,6 +82,14 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     await page.getByRole('heading', { name: /Field sheet/ }).waitFor();
     expect(await page.getByText('rising away from the road').count()).toBeGreaterThan(0);
     expect(await page.getByText(/buried utilities/).isVisible()).toBe(true);
+    // The crew holding the job reads the owner's messages under the sheet and answers them.
+    const talk = page.locator('section', { has: page.getByRole('heading', { name: 'Messages with the property owner and the office' }) });
+    await talk.getByText('The septic lid is left of the entrance; please keep off it.').waitFor();
+    await talk.getByLabel('Write to the property owner and the office').fill('Noted: we will stake the lid before the machine arrives.');
+    await talk.getByRole('button', { name: 'Send message' }).click();
+    await talk.getByText('Noted: we will stake the lid before the machine arrives.').waitFor();
+    await expect.poll(async () => (await db.db.select({ to: emails.toAddress }).from(emails)
+      .where(and(eq(emails.requestId, jobId), eq(emails.template, 'message.shared')))).length).toBe(2);
     await shot(page, 'field-sheet-phone');
     await page.setViewportSize({ width: 1280, height: 900 });
     await shot(page, 'field-sheet');

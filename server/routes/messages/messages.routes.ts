@@ -9,14 +9,15 @@ export const postMessageInputSchema = z.strictObject({
   visibility: z.enum(['internal', 'shared'], { error: 'Choose internal or shared.' }).optional(),
 });
 
-export function messagesRouter({ db }: AppContext) {
+export function messagesRouter({ db, env }: AppContext) {
   const router = Router();
+  const mail = { officeEmail: env.OFFICE_EMAIL, appOrigin: env.APP_ORIGIN };
   router.get('/api/requests/:id/messages', handle({ params: uuidParam }, async ({ params, user }) => ({
     messages: await listMessages(db, user, params.id),
   })));
   router.post('/api/requests/:id/messages', handle({ params: uuidParam, body: postMessageInputSchema }, async ({ params, body, user, res }) => {
     res.status(201);
-    return { message: await postMessage(db, user, params.id, body) };
+    return { message: await postMessage(db, mail, user, params.id, body) };
   }));
   return router;
 }

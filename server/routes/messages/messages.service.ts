@@ -1,8 +1,10 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { SessionUser } from '../../auth/session-user';
-import type { Db } from '../../db/client';
+import type { Db, Tx } from '../../db/client';
 import { messages, users } from '../../db/schema';
 import { badRequest, conflict, notFound } from '../../lib/errors';
+import { messageEmails } from '../../services/email/message-emails';
+import { enqueueEmails } from '../../services/email/outbox';
 import { loadVisibleRequest, type RequestRow } from '../../services/requests/request-access';
 
 type Visibility = 'internal' | 'shared';
@@ -27,7 +29,19 @@ export async function listMessages(db: Db, user: SessionUser, requestId: string)
   return rows.map(({ visibility, ...m }) => ({ ...m, mine: m.authorId === user.id, ...(office ? { internal: visibility === 'internal' } : {}) }));
 }
 
-export async function postMessage(db: Db, user: SessionUser, requestId: string, input: { body: string; visibility?: Visibility }) {
+export interface MessageMail { officeEmail: string; appOrigin: string }
+
+async function emailsForMessage(tx: Tx, mail: MessageMail, row: RequestRow, author: SessionUser, message: { body: string; visibility: Visibility }) {
+  const person = (id: string) => tx.select({ id: users.id, email: users.email, name: users.name }).from(users).where(eq(users.id, id));
+  const [applicant] = await person(row.applicantId);
+  const [crew] = row.crewId ? await person(row.crewId) : [];
+  return messageEmails({
+    request: row, author, body: message.body, visibility: message.visibility, applicant, crew: crew ?? null, ...mail,
+  });
+}
+
+/** Saves a message and, in the same transaction, the e-mails that tell the others on the request about it. */
+export async function postMessage(db: Db, mail: MessageMail, user: SessionUser, requestId: string, input: { body: string; visibility?: Visibility }) {
   const row = await loadForMessages(db, user, requestId);
   const office = isOffice(user);
   // The office decides each time; its default keeps a slip of the hand from reaching the property owner.
@@ -36,6 +50,10 @@ export async function postMessage(db: Db, user: SessionUser, requestId: string, 
     throw badRequest('Only the office can write internal notes.', { visibility: 'messages from you are always shared with the office' });
   }
   if (!office && row.status === 'draft') throw conflict('Send the request to the office first; then you can write to them here.');
-  const [message] = await db.insert(messages).values({ requestId, authorId: user.id, visibility, body: input.body }).returning();
+  const message = await db.transaction(async (tx) => {
+    const [saved] = await tx.insert(messages).values({ requestId, authorId: user.id, visibility, body: input.body }).returning();
+    await enqueueEmails(tx, await emailsForMessage(tx, mail, row, user, saved));
+    return saved;
+  });
   return { id: message.id, body: message.body, createdAt: message.createdAt, authorId: user.id, authorName: user.name, authorRole: user.role, mine: true, ...(office ? { internal: visibility === 'internal' } : {}) };
 }

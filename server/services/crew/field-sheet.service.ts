@@ -77,7 +77,7 @@ async function sheetFor(db: Db, row: RequestRow): Promise<FieldSheetView> {
   return {
     job: {
       requestId: row.id, reference: row.reference, status: row.status, version: row.version, siteAddress: row.siteAddress, roadName: row.roadName,
-      applicantName: row.applicantName, crewName: crew?.name ?? null, scheduledFor: job?.scheduledFor ?? null,
+      applicantName: row.applicantName, crewId: row.crewId, crewName: crew?.name ?? null, scheduledFor: job?.scheduledFor ?? null,
     },
     access: {
       parcelNumber: typeof site.parcelNumber === 'string' ? site.parcelNumber : '', roadOwner: owner,

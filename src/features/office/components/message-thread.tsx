@@ -51,6 +51,11 @@ export function MessageThread({ requestId }: { requestId: string }) {
             Shared with the property owner
           </label>
         </fieldset>
+        <p className="text-xs text-stone-600">
+          {visibility === 'internal'
+            ? 'Only the office sees internal notes; nobody is e-mailed.'
+            : 'The property owner, and the crew lead once a crew holds the job, get an e-mail with this message.'}
+        </p>
         {post.error && <ErrorNotice error={post.error} />}
         <Button type="submit" disabled={post.isPending || !body.trim()}>{visibility === 'internal' ? 'Save internal note' : 'Send to the owner'}</Button>
       </form>

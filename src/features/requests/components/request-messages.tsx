@@ -8,8 +8,11 @@ import { usePostMessage } from '../api/post-message';
 
 const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
-/** The conversation with the office; only what both sides may read ever reaches this list. */
-export function RequestMessages({ requestId, canWrite }: { requestId: string; canWrite: boolean }) {
+/**
+ * The shared conversation on a request: the property owner with the office, and the crew lead once a crew holds
+ * the job. Only what everyone on it may read ever reaches this list.
+ */
+export function RequestMessages({ requestId, canWrite, writeLabel = 'Write to the office' }: { requestId: string; canWrite: boolean; writeLabel?: string }) {
   const inputId = useId();
   const { data, error, isPending } = useMessages(requestId);
   const post = usePostMessage(requestId);
@@ -35,7 +38,7 @@ export function RequestMessages({ requestId, canWrite }: { requestId: string; ca
       )}
       {canWrite && (
         <form onSubmit={send} noValidate className="space-y-2">
-          <label htmlFor={inputId} className="text-sm font-semibold">Write to the office</label>
+          <label htmlFor={inputId} className="text-sm font-semibold">{writeLabel}</label>
           <TextArea id={inputId} value={text} onChange={(e) => setText(e.target.value)} maxLength={4000}
             aria-invalid={Boolean(fieldError)} aria-describedby={fieldError ? `${inputId}-error` : undefined} />
           {fieldError && <p id={`${inputId}-error`} className="text-sm font-medium text-clay">{fieldError}</p>}
