@@ -5,6 +5,9 @@ import { startStandIns } from '../../fakes';
 import { applyMigrations, createDb } from '../db/client';
 import { demoPeople } from '../db/seed/demo-people';
 import { seedDemo } from '../db/seed';
+import { seedDemoReports } from '../db/seed/demo-reports';
+import { closeContext, createContext } from '../context-factory';
+import { parseEnv } from '../env';
 import { devBucket, devOAuthClient, devPorts } from './dev-config';
 import { ensureDatabase, startPostgres } from './postgres';
 import { standInEnv } from './stand-in-env';
@@ -57,6 +60,9 @@ async function main() {
     const env = { ...process.env, ...standInEnv(standIns, { appOrigin, port: devPorts.app, databaseUrl }), NODE_ENV: 'development',
       // The pinned SDK runs on Node 20; its notice about future releases is for whoever upgrades it (DEVELOPERS.md).
       AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' };
+    // The demo's reports go into storage, so they can only be made now that it runs.
+    const seedCtx = createContext(parseEnv({ ...env, LOG_LEVEL: 'warn' }));
+    try { await seedDemoReports(seedCtx); } finally { await closeContext(seedCtx); }
     server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { cwd: root, env, stdio: 'inherit' });
     server.once('exit', (code) => { if (!stopping) void stopAll(code ?? 1); });
 
