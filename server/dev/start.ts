@@ -15,6 +15,10 @@ import { standInEnv } from './stand-in-env';
 const root = fileURLToPath(new URL('../..', import.meta.url));
 const dataDir = `${root}.data/dev`;
 
+// The pinned SDK runs on Node 20; its notice about future releases is for whoever upgrades it (DEVELOPERS.md). Set
+// here, it covers the demo reports stored from this process and the app it starts.
+process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
+
 async function main() {
   mkdirSync(dataDir, { recursive: true });
   const stops: (() => Promise<void> | void)[] = [];
@@ -57,9 +61,7 @@ async function main() {
     });
     stops.push(() => standIns.stop());
 
-    const env = { ...process.env, ...standInEnv(standIns, { appOrigin, port: devPorts.app, databaseUrl }), NODE_ENV: 'development',
-      // The pinned SDK runs on Node 20; its notice about future releases is for whoever upgrades it (DEVELOPERS.md).
-      AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true' };
+    const env = { ...process.env, ...standInEnv(standIns, { appOrigin, port: devPorts.app, databaseUrl }), NODE_ENV: 'development' };
     // The demo's reports go into storage, so they can only be made now that it runs.
     const seedCtx = createContext(parseEnv({ ...env, LOG_LEVEL: 'warn' }));
     try { await seedDemoReports(seedCtx); } finally { await closeContext(seedCtx); }
