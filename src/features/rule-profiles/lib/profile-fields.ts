@@ -50,7 +50,7 @@ export const profileGroups: { title: string; fields: ProfileField[] }[] = [
     { path: 'asBuilt.gradeTolerancePercent', label: 'Grade tolerance', unit: '%' },
     { path: 'asBuilt.elevationToleranceFt', label: 'Elevation tolerance', unit: 'ft' },
   ] },
-  { title: 'Units', fields: [{ path: 'units', label: 'Show results in', choices: [['us', 'US customary (ft, in)'], ['metric', 'Metric (m, mm)']] }] },
+  { title: 'Units', fields: [{ path: 'units', label: 'Show the findings in (the chart, laser and stake values stay in feet, as surveyed)', choices: [['us', 'US customary (ft, in)'], ['metric', 'Metric (m, mm)']] }] },
 ];
 
 export const allFields = profileGroups.flatMap((g) => g.fields);
