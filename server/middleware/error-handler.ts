@@ -21,6 +21,11 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       res.status(413).json({ error: { code: 'too_large', message: 'The request body is too large.' } });
       return;
     }
+    // The router decodes path parameters; a broken %-escape in the address (such as "%E0%A4%A") cannot be decoded.
+    if (error instanceof URIError && parserError.status === 400) {
+      res.status(400).json({ error: { code: 'bad_path', message: 'The address holds a broken %-escape.', fields: { '(path)': 'not a valid address' } } });
+      return;
+    }
     if (parserError.expose && parserError.status && parserError.status < 500) {
       res.status(parserError.status).json({ error: { code: 'bad_request', message: String((error as Error).message) } });
       return;

@@ -25,6 +25,13 @@ describe('every write names the bad field with a 400 and changes nothing', () =>
     }
   });
 
+  it('answers a broken %-escape in the address with a 400, not a failure of ours', async () => {
+    for (const path of ['/api/requests/%E0%A4%A', '/api/requests/%/messages', '/api/requests/%zz/photos']) {
+      const res = await owner.get(path).expect(400);
+      expect(res.body.error).toMatchObject({ code: 'bad_path', fields: { '(path)': 'not a valid address' } });
+    }
+  });
+
   it.each([
     ['a version sent as text', { expectedVersion: '1' }, 'expectedVersion'],
     ['a step out of range', { expectedVersion: 1, wizardStep: 9 }, 'wizardStep'],
