@@ -60,6 +60,22 @@ export function cutFillBands(ground: readonly ChartPoint[], design: readonly Cha
   });
 }
 
+/**
+ * The tick positions from `from` to `to`, counted rather than summed: a span far below a foot, or a step lost in the
+ * rounding of large stations, would otherwise never reach the end. At most `most` ticks.
+ */
+export function ticks(from: number, to: number, step: number, most = 50): number[] {
+  if (!(step > 0) || !Number.isFinite(from) || !Number.isFinite(to)) return [];
+  const first = Math.ceil(from / step) * step;
+  const out: number[] = [];
+  for (let i = 0; i < most; i += 1) {
+    const at = first + i * step;
+    if (at > to || (i > 0 && at === out[i - 1])) break;
+    out.push(at);
+  }
+  return out;
+}
+
 /** Round tick spacing so a chart shows about `target` ticks. */
 export function niceStep(span: number, target: number): number {
   const raw = span / Math.max(1, target);

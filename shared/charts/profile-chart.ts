@@ -1,5 +1,5 @@
 import { formatStation } from '../engine/station';
-import { type ChartPoint, cutFillBands, lineAt, niceStep } from './chart-geometry';
+import { type ChartPoint, cutFillBands, lineAt, niceStep, ticks } from './chart-geometry';
 
 export interface ProfileChartInput {
   /** The ground as surveyed. */
@@ -56,12 +56,12 @@ export function profileChartSvg(input: ProfileChartInput): string {
   parts.push(text(x(input.roadEdgeStationFt) + 4, pad.top + 12, `Landing ${input.landing.lengthFt} ft`));
 
   const sStep = niceStep(maxS - minS, 8);
-  for (let s = Math.ceil(minS / sStep) * sStep; s <= maxS + 1e-9; s += sStep) {
+  for (const s of ticks(minS, maxS + 1e-9, sStep)) {
     parts.push(`<line x1="${n(x(s))}" y1="${pad.top}" x2="${n(x(s))}" y2="${height - pad.bottom}" stroke="${chartColors.grid}" stroke-width="0.5"/>`);
     parts.push(text(x(s), height - pad.bottom + 14, formatStation(s), 'text-anchor="middle"'));
   }
   const eStep = niceStep(maxE - minE, 5);
-  for (let e = Math.ceil(minE / eStep) * eStep; e <= maxE; e += eStep) {
+  for (const e of ticks(minE, maxE, eStep)) {
     parts.push(`<line x1="${pad.left}" y1="${n(y(e))}" x2="${width - pad.right}" y2="${n(y(e))}" stroke="${chartColors.grid}" stroke-width="0.5"/>`);
     parts.push(text(pad.left - 6, y(e) + 3, n(e), 'text-anchor="end"'));
   }
