@@ -1,4 +1,4 @@
-import { compactedToBank, soilFactors, truckLoads, type ProposedProfile } from '../engine';
+import { compactedToBank, EngineInputError, soilFactors, truckLoads, type ProposedProfile } from '../engine';
 
 export type Soil = keyof typeof soilFactors;
 
@@ -9,21 +9,37 @@ export interface HaulChoice {
 
 export const defaultHaul: HaulChoice = { soil: 'loam', truckCuYd: 10 };
 
+/** "3 loads of 10 cu yd" in words, for the screen and the report alike. */
+export function loadsText(count: number | null, truckCuYd: number): string {
+  if (count === null) return 'too many truck loads to count: check the survey';
+  return count === 0 ? 'no truck loads' : `${count} ${count === 1 ? 'load' : 'loads'} of ${truckCuYd} cu yd`;
+}
+
 export interface HaulEstimate extends HaulChoice {
   cutCuYd: number;
   fillCuYd: number;
   /** Cut swells once dug: what the trucks carry away. */
   cutLooseCuYd: number;
-  cutLoads: number;
+  /** Null when the volume is past what the engine estimates loads for (a billion cubic yards): a survey typo. */
+  cutLoads: number | null;
   /** Compacted fill needs more bank material, which swells again in the truck. */
   fillLooseCuYd: number;
-  fillLoads: number;
+  fillLoads: number | null;
 }
 
 /**
  * The haul that goes with a proposal, for the cut/fill table beside the chart (screen and report alike). Cut and
  * fill are not netted: material from the cut is rarely fit to place as fill without sorting, so both are shown.
  */
+function loadsFor(looseCuYd: number, truckCuYd: number): number | null {
+  try {
+    return truckLoads({ looseCuYd, truckCuYd }).loads;
+  } catch (error) {
+    if (error instanceof EngineInputError) return null;
+    throw error;
+  }
+}
+
 export function haulEstimate(proposal: ProposedProfile, choice: HaulChoice = defaultHaul): HaulEstimate {
   const factors = soilFactors[choice.soil];
   const cutLooseCuYd = proposal.cutCuYd * factors.bankToLoose;
@@ -34,8 +50,8 @@ export function haulEstimate(proposal: ProposedProfile, choice: HaulChoice = def
     cutCuYd: proposal.cutCuYd,
     fillCuYd: proposal.fillCuYd,
     cutLooseCuYd,
-    cutLoads: truckLoads({ looseCuYd: cutLooseCuYd, truckCuYd: choice.truckCuYd }).loads,
+    cutLoads: loadsFor(cutLooseCuYd, choice.truckCuYd),
     fillLooseCuYd,
-    fillLoads: truckLoads({ looseCuYd: fillLooseCuYd, truckCuYd: choice.truckCuYd }).loads,
+    fillLoads: loadsFor(fillLooseCuYd, choice.truckCuYd),
   };
 }

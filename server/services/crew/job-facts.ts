@@ -1,5 +1,5 @@
 import {
-  bankToLoose, earthworkFromProfiles, soilFactors, truckLoads, type ProfilePoint,
+  bankToLoose, earthworkFromProfiles, EngineInputError, soilFactors, truckLoads, type ProfilePoint,
 } from '../../../shared/engine';
 import { timingText, timings } from '../../../shared/requests/choices';
 import type { EarthworkEstimate, Wanted, Yard } from '../../../shared/crew/crew-views';
@@ -33,15 +33,21 @@ export function earthworkEstimate(check: SavedCheck | null): EarthworkEstimate |
   const truckCuYd = check.design?.haul?.truckCuYd ?? DEFAULT_TRUCK_CU_YD;
   const bankForFill = v.fillCuYd / soil.bankToCompacted;
   const spareBank = v.cutCuYd - bankForFill;
-  const loose = bankToLoose({ bankCuYd: Math.abs(spareBank), swellPercent: (soil.bankToLoose - 1) * 100 }).looseCuYd;
-  return {
-    cutCuYd: v.cutCuYd,
-    fillCuYd: v.fillCuYd,
-    netLooseCuYd: spareBank >= 0 ? loose : -loose,
-    truckCuYd,
-    truckLoads: truckLoads({ looseCuYd: loose, truckCuYd }).loads,
-    basis: `${soilName}: swell ${Math.round((soil.bankToLoose - 1) * 100)}%, fill compacts to ${Math.round(soil.bankToCompacted * 100)}% of bank; ${truckCuYd} cu yd per truck`,
-  };
+  try {
+    const loose = bankToLoose({ bankCuYd: Math.abs(spareBank), swellPercent: (soil.bankToLoose - 1) * 100 }).looseCuYd;
+    return {
+      cutCuYd: v.cutCuYd,
+      fillCuYd: v.fillCuYd,
+      netLooseCuYd: spareBank >= 0 ? loose : -loose,
+      truckCuYd,
+      truckLoads: truckLoads({ looseCuYd: loose, truckCuYd }).loads,
+      basis: `${soilName}: swell ${Math.round((soil.bankToLoose - 1) * 100)}%, fill compacts to ${Math.round(soil.bankToCompacted * 100)}% of bank; ${truckCuYd} cu yd per truck`,
+    };
+  } catch (error) {
+    // Volumes past the engine's range (a billion cubic yards) come only from a survey typo: no estimate, not no board.
+    if (error instanceof EngineInputError) return null;
+    throw error;
+  }
 }
 
 const isTiming = (v: unknown): v is (typeof timings)[number] => typeof v === 'string' && (timings as readonly string[]).includes(v);

@@ -1,10 +1,9 @@
 import { formatStation } from '../../../shared/engine';
-import { haulEstimate } from '../../../shared/charts/cut-fill-table';
+import { haulEstimate, loadsText } from '../../../shared/charts/cut-fill-table';
 import type { GradeCheck } from '../grade-checks/grade-checks.service';
 import { drawTable, heading, paragraph } from './pdf-table';
 import { valueText } from './report-words';
 
-const loads = (count: number, truckCuYd: number) => (count === 0 ? 'no truck loads' : `${count} ${count === 1 ? 'load' : 'loads'} of ${truckCuYd} cu yd`);
 const ft = (v: number) => `${v.toFixed(2)} ft`;
 const maybe = (v: number | undefined, unit: string) => (v === undefined ? '-' : valueText(v, unit));
 
@@ -21,7 +20,7 @@ export function designSections(doc: PDFKit.PDFDocument, check: GradeCheck) {
         { title: 'Cut (+) / fill (-)', width: 110, align: 'right' },
       ], proposal.cutFillByStation.map((r) => [formatStation(r.stationFt), ft(r.existingFt), ft(r.designFt), ft(r.cutFillFt)]));
       const haul = haulEstimate(proposal, inputs.design?.haul);
-      paragraph(doc, `Cut ${haul.cutCuYd.toFixed(1)} cu yd (bank): ${loads(haul.cutLoads, haul.truckCuYd)} to haul away. Fill ${haul.fillCuYd.toFixed(1)} cu yd (compacted): ${loads(haul.fillLoads, haul.truckCuYd)} to bring in. Swell and shrink factors for ${haul.soil}.`);
+      paragraph(doc, `Cut ${haul.cutCuYd.toFixed(1)} cu yd (bank): ${loadsText(haul.cutLoads, haul.truckCuYd)} to haul away. Fill ${haul.fillCuYd.toFixed(1)} cu yd (compacted): ${loadsText(haul.fillLoads, haul.truckCuYd)} to bring in. Swell and shrink factors for ${haul.soil}.`);
     }
   }
   const culvert = results.report.culvert;

@@ -1,5 +1,5 @@
 import { formatStation, type ProposedProfile } from '@shared/engine';
-import { haulEstimate, type HaulChoice } from '@shared/charts/cut-fill-table';
+import { haulEstimate, loadsText, type HaulChoice } from '@shared/charts/cut-fill-table';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 
@@ -35,8 +35,8 @@ export function ProposalPanel({ proposal, requested, applied, haul, onSuggest, o
         </tbody>
       </table>
       <p className="text-sm">
-        Cut <strong>{estimate.cutCuYd.toFixed(1)} cu yd</strong> ({estimate.cutLoads} truck {estimate.cutLoads === 1 ? 'load' : 'loads'} of {estimate.truckCuYd} cu yd to haul away),
-        fill <strong>{estimate.fillCuYd.toFixed(1)} cu yd</strong> ({estimate.fillLoads} {estimate.fillLoads === 1 ? 'load' : 'loads'} to bring in), using {estimate.soil} swell and shrink.
+        Cut <strong>{estimate.cutCuYd.toFixed(1)} cu yd</strong> ({loadsText(estimate.cutLoads, estimate.truckCuYd)} to haul away),
+        fill <strong>{estimate.fillCuYd.toFixed(1)} cu yd</strong> ({loadsText(estimate.fillLoads, estimate.truckCuYd)} to bring in), using {estimate.soil} swell and shrink.
       </p>
       {applied
         ? <Button variant="secondary" onClick={onUndo}>Check the ground as surveyed again</Button>
