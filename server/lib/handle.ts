@@ -23,6 +23,32 @@ export function parseOrThrow<T extends z.ZodType>(schema: T, value: unknown, wha
   return result.data;
 }
 
+const deepestBody = 32;
+
+/**
+ * Fields whose text holds a NUL character or a lone UTF-16 surrogate, which PostgreSQL cannot store in text or jsonb. Walked with a list rather
+ * than recursion, and no deeper than any contract goes, so a pathologically nested body costs nothing.
+ */
+export function nulFields(value: unknown): Record<string, string> {
+  const fields: Record<string, string> = {};
+  const pending: [unknown, string, number][] = [[value, '', 0]];
+  while (pending.length > 0) {
+    const [item, path, depth] = pending.pop()!;
+    const key = path || '(body)';
+    if (typeof item === 'string') {
+      if (item.includes('\u0000')) fields[key] ??= 'must not contain a NUL character';
+      else if (!(item as string & { isWellFormed(): boolean }).isWellFormed()) fields[key] ??= 'holds a broken character (a lone UTF-16 surrogate)';
+    } else if (item && typeof item === 'object') {
+      if (depth >= deepestBody) { fields[key] ??= 'is nested too deeply'; continue; }
+      for (const [name, child] of Object.entries(item)) {
+        if (name.includes('\u0000')) fields[key] ??= 'names must not contain a NUL character';
+        else pending.push([child, path ? `${path}.${name}` : name, depth + 1]);
+      }
+    }
+  }
+  return fields;
+}
+
 interface Contract<B extends z.ZodType, Q extends z.ZodType, P extends z.ZodType> {
   body?: B;
   query?: Q;
@@ -57,6 +83,7 @@ export function handle<
         for (const [key, message] of Object.entries(zodFields(result.error))) fields[prefix + key] ??= message;
         return undefined;
       };
+      Object.assign(fields, nulFields(req.query), nulFields(req.body));
       const params = part(contract.params, req.params, '') as z.infer<P>;
       const query = part(contract.query, req.query, '') as z.infer<Q>;
       const body = part(contract.body, req.body ?? {}, '') as z.infer<B>;

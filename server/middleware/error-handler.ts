@@ -2,6 +2,17 @@ import type { ErrorRequestHandler } from 'express';
 import { AppError } from '../lib/errors';
 import type { Logger } from '../lib/logger';
 
+// Unique keys a person can collide with by sending the same thing twice at once, and the field each one names.
+const uniqueFields: Record<string, string> = { users_email_key: 'email', jurisdictions_slug_unique: 'name' };
+
+/** PostgreSQL's unique_violation (23505), straight from pg or wrapped by Drizzle as the cause. */
+function uniqueViolation(error: unknown): { constraint?: string } | null {
+  for (let e = error as { code?: string; cause?: unknown; constraint?: string } | undefined, i = 0; e && i < 3; e = e.cause as typeof e, i += 1) {
+    if (e.code === '23505') return { constraint: e.constraint };
+  }
+  return null;
+}
+
 interface BodyParserError { type?: string; status?: number; expose?: boolean }
 
 /** The one place errors become responses: `{ error: { code, message, fields? } }`. */
@@ -28,6 +39,13 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     if (parserError.expose && parserError.status && parserError.status < 500) {
       res.status(parserError.status).json({ error: { code: 'bad_request', message: String((error as Error).message) } });
+      return;
+    }
+    // The services check before they insert; two identical requests at the same moment can still both pass the check.
+    const duplicate = uniqueViolation(error);
+    if (duplicate) {
+      const field = duplicate.constraint ? uniqueFields[duplicate.constraint] : undefined;
+      res.status(409).json({ error: { code: 'already_exists', message: 'That already exists: it may have been added a moment ago. Reload to see it.', ...(field ? { fields: { [field]: 'is already taken' } } : {}) } });
       return;
     }
     logger.error({ err: error, url: req.originalUrl }, 'unhandled error');

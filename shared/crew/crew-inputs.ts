@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { dayInput } from '../workflow/dates';
 
 /**
  * What the crew screens send. Shared so the phone form can mark a bad box before it is sent; the server
@@ -19,7 +20,7 @@ export const handBackInputSchema = z.strictObject({
 export const startWorkInputSchema = acceptJobInputSchema;
 
 export const scheduleJobInputSchema = z.strictObject({
-  date: z.iso.date('must be a date, e.g. 2026-12-08'),
+  date: dayInput('must be a date, e.g. 2026-12-08'),
   note: z.string().trim().max(1000, 'must be at most 1000 characters').optional(),
 });
 export type ScheduleJobInput = z.infer<typeof scheduleJobInputSchema>;

@@ -45,12 +45,18 @@ export function encodeQueueCursor(value: string, id: string) {
   return Buffer.from(JSON.stringify([value, id])).toString('base64url');
 }
 
-export function decodeQueueCursor(cursor: string): { value: string; id: string } | null {
+// A time as PostgreSQL writes timestamptz as text, which is what a time-sorted page's cursor carries.
+const pgTimestamp = /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?[+-]\d{2}(:\d{2})?$/;
+
+/** A cursor this list gave out for the sort in use, or null: the value must read back in the sort column's type. */
+export function decodeQueueCursor(cursor: string, sortsBy: 'time' | 'text'): { value: string; id: string } | null {
   try {
     const parsed: unknown = JSON.parse(Buffer.from(cursor, 'base64url').toString());
     if (!Array.isArray(parsed) || parsed.length !== 2) return null;
     const [value, id] = parsed as unknown[];
     if (typeof value !== 'string' || typeof id !== 'string' || !z.uuid().safeParse(id).success) return null;
+    if (value.includes('\u0000')) return null;
+    if (sortsBy === 'time' && !(pgTimestamp.test(value) && Number.isFinite(Date.parse(value.replace(' ', 'T').replace(/([+-]\d{2})$/, '$1:00'))))) return null;
     return { value, id };
   } catch {
     return null;

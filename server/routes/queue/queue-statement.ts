@@ -9,6 +9,8 @@ const assignee = alias(users, 'assignee');
 export const queueCountCap = 200;
 
 /** Each sort is a column with an index behind it; `cast` reads a cursor value back in the column's own type. */
+export const sortsByTime = (sort: QueueSort) => sortColumns[sort].cast === 'timestamptz';
+
 const sortColumns: Record<QueueSort, { column: AnyColumn; cast: string }> = {
   waiting: { column: requests.statusChangedAt, cast: 'timestamptz' },
   reference: { column: requests.reference, cast: 'text' },

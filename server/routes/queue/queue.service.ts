@@ -4,7 +4,7 @@ import type { SessionUser } from '../../auth/session-user';
 import type { DbOrTx } from '../../db/client';
 import { badRequest } from '../../lib/errors';
 import { decodeQueueCursor, encodeQueueCursor, searchQuery, type QueueQuery } from './queue-query';
-import { queueColumns, queueCountCap, queueStatement, type QueueShape, type QueueValues } from './queue-statement';
+import { queueColumns, queueCountCap, queueStatement, sortsByTime, type QueueShape, type QueueValues } from './queue-statement';
 
 interface Queryable { query<R extends unknown[]>(config: { name: string; text: string; values: unknown[]; rowMode: 'array' }): Promise<{ rows: R[] }> }
 interface QueueRow {
@@ -39,7 +39,7 @@ const rowWords = Object.fromEntries(requestStatuses.map((status) => [status, {
  */
 export async function listQueue(db: DbOrTx, pool: Queryable, user: SessionUser, query: QueueQuery) {
   const search = query.q ? searchQuery(query.q) : null;
-  const cursor = query.cursor ? decodeQueueCursor(query.cursor) : null;
+  const cursor = query.cursor ? decodeQueueCursor(query.cursor, sortsByTime(query.sort) ? 'time' : 'text') : null;
   if (query.cursor && !cursor) throw badRequest('The page position is not one this list gave out.', { cursor: 'start again from the first page' });
   const one = (value: string | undefined) => (value === 'none' ? 'none' : value ? 'one' : null);
   const shape: QueueShape = {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { dayInput, momentInput } from '../../../shared/workflow/dates';
 import { transitions, type TransitionNeed } from '../../../shared/workflow/transitions';
 import type { requests } from '../../db/schema';
 import { AppError } from '../../lib/errors';
@@ -11,11 +12,11 @@ export const transitionInputSchema = z.strictObject({
   expectedVersion: z.number('must be the version number you loaded').int().min(1),
   note: text(4000).optional(),
   answer: text(8000).optional(),
-  visitAt: z.iso.datetime({ offset: true, message: 'must be a date and time, e.g. 2026-05-04T09:30:00Z' }).optional(),
+  visitAt: momentInput('must be a date and time, e.g. 2026-05-04T09:30:00Z').optional(),
   permitReference: text(80).optional(),
-  permitDecidedOn: z.iso.date('must be a date, e.g. 2026-05-04').optional(),
+  permitDecidedOn: dayInput('must be a date, e.g. 2026-05-04').optional(),
   permitConditions: text(4000).optional(),
-  permitExpiresOn: z.iso.date('must be a date, e.g. 2027-05-04').optional(),
+  permitExpiresOn: dayInput('must be a date, e.g. 2027-05-04').optional(),
 });
 export type TransitionBody = z.infer<typeof transitionInputSchema>;
 

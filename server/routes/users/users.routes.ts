@@ -13,7 +13,7 @@ export const listUsersQuerySchema = z.object({
 export const updateUserInputSchema = z.strictObject({
   role: roleSchema.optional(),
   disabled: z.boolean().optional(),
-});
+}).refine((change) => change.role !== undefined || change.disabled !== undefined, { message: 'say what to change: role or disabled' });
 export const inviteUserInputSchema = z.strictObject({
   email: z.email('must be an e-mail address').max(200),
   name: z.string().trim().min(1, 'is required').max(120),

@@ -1,3 +1,4 @@
+import { z } from 'zod';
 import { and, count, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
 import { emails, requests } from '../../db/schema';
@@ -69,6 +70,8 @@ export function encodeCursor(createdAt: Date, id: string) {
 export function decodeCursor(value: string): { createdAt: Date; id: string } | null {
   const [at, id] = Buffer.from(value, 'base64url').toString().split('|');
   const createdAt = new Date(at ?? '');
-  if (Number.isNaN(createdAt.getTime()) || !/^[0-9a-f-]{36}$/i.test(id ?? '')) return null;
+  // Only times this log can hold: PostgreSQL refuses years before 1 and Date accepts far more than it stores.
+  const year = createdAt.getUTCFullYear();
+  if (Number.isNaN(createdAt.getTime()) || year < 2000 || year > 9999 || !z.uuid().safeParse(id).success) return null;
   return { createdAt, id };
 }
