@@ -83,6 +83,11 @@ describe('as-built readings against the approved check’s rule profile (landing
     const twice = await cast.crew.agent.post(`/api/crew/jobs/${id}/as-built`).send({ readings: [{ stationFt: 5, elevationFt: 100 }, { stationFt: 5, elevationFt: 101 }] });
     expect(twice.status).toBe(400);
     expect(twice.body.error.message).toMatch(/readings/);
+    // A hundred feet of rise in a thousandth of a foot: the engine's derived grade is out of range; the field named
+    // is what the crew typed, not the engine's own working value.
+    const cliff = await cast.crew.agent.post(`/api/crew/jobs/${id}/as-built`).send({ readings: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 0.001, elevationFt: 200 }] });
+    expect(cliff.status).toBe(400);
+    for (const field of Object.keys(cliff.body.error.fields)) expect(field).toMatch(/^readings/);
   });
 });
 

@@ -28,7 +28,12 @@ export function verifyReadings(check: SavedCheck, readings: SaveAsBuiltInput['re
   } catch (error) {
     if (!(error instanceof EngineInputError)) throw error;
     const fields: Record<string, string> = {};
-    for (const issue of error.issues) fields[issue.field || 'readings'] ??= issue.message;
+    for (const issue of error.issues) {
+      // The engine names its own intermediate values (such as the grade it derives between two shots); the crew
+      // typed readings, so anything else is said about the readings.
+      if (issue.field.startsWith('readings')) fields[issue.field] ??= issue.message;
+      else fields.readings ??= 'these readings give a grade no entrance can have: check each station and elevation';
+    }
     throw new AppError(400, 'invalid_input', `The readings cannot be checked as entered: ${Object.keys(fields).join(', ')}.`, fields);
   }
 }
