@@ -6,22 +6,24 @@ import { AppError } from '../../lib/errors';
 import { gradeCheckInputsSchema, type GradeCheckInputs, type GradeCheckResults } from './grade-check-inputs';
 
 /** Engine complaints name fields inside one part of the inputs; the API names them from the body's root. */
-function asBadRequest(error: unknown, prefix: string): never {
+export function asBadRequest(error: unknown, prefix: string, given?: object): never {
   if (!(error instanceof EngineInputError)) throw error;
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {
-    const key = [prefix, issue.field].filter(Boolean).join('.');
-    fields[key] ??= issue.message;
+    // A complaint about a value the engine made itself (the profile it proposes) is said about the part as a whole.
+    const typed = !given || issue.field.split('.')[0] in given;
+    const key = typed ? [prefix, issue.field].filter(Boolean).join('.') : prefix;
+    fields[key] ??= typed ? issue.message : `no design profile can be made from these values (${issue.field}: ${issue.message})`;
   }
   const names = Object.keys(fields).join(', ');
   throw new AppError(400, 'invalid_input', `The survey cannot be checked as entered: ${names}.`, fields);
 }
 
-function attempt<T>(prefix: string, run: () => T): T {
+function attempt<T>(prefix: string, run: () => T, given?: object): T {
   try {
     return run();
   } catch (error) {
-    asBadRequest(error, prefix);
+    asBadRequest(error, prefix, given);
   }
 }
 
@@ -41,7 +43,7 @@ export function runGradeCheck(inputs: GradeCheckInputs, profile: RuleProfile): G
   if (laser) results.laser = attempt('inputs.laser', () => laserSetup(laser));
   if (design) {
     const { applied, haul: _haul, ...propose } = design;
-    results.proposal = attempt('inputs.design', () => proposeProfile(propose, profile));
+    results.proposal = attempt('inputs.design', () => proposeProfile(propose, profile), propose);
     if (applied) results.surveyed = attempt('inputs.design.existing', () => checkEntrance({ ...check, profile: design.existing }, profile));
   }
   return results;
