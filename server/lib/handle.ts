@@ -26,8 +26,9 @@ export function parseOrThrow<T extends z.ZodType>(schema: T, value: unknown, wha
 const deepestBody = 32;
 
 /**
- * Fields whose text holds a NUL character or a lone UTF-16 surrogate, which PostgreSQL cannot store in text or jsonb. Walked with a list rather
- * than recursion, and no deeper than any contract goes, so a pathologically nested body costs nothing.
+ * Fields whose text holds a NUL character or a lone UTF-16 surrogate, which PostgreSQL cannot store in text or
+ * jsonb. Walked with a list rather than recursion, and no deeper than any contract goes, so a pathologically nested
+ * body costs nothing.
  */
 export function nulFields(value: unknown): Record<string, string> {
   const fields: Record<string, string> = {};
