@@ -1,6 +1,7 @@
 import { demoPeople } from '../../server/db/seed/demo-people';
 import type { Role } from '../../shared/workflow/statuses';
-import { signIn, type TestApp } from '../setup/test-app';
+import { afterAll, beforeAll } from 'vitest';
+import { createTestApp, signIn, type TestApp } from '../setup/test-app';
 import { ensurePerson } from './people';
 
 export type Agent = Awaited<ReturnType<typeof signIn>>;
@@ -28,3 +29,16 @@ export async function signInCast(t: TestApp) {
   };
 }
 export type Cast = Awaited<ReturnType<typeof signInCast>>;
+
+/**
+ * The set-up most office and crew test files share: one app and database for the file, with the cast signed in.
+ * Registers the hooks; `use` receives both once they are ready.
+ */
+export function withCastApp(use: (app: TestApp, cast: Cast) => void) {
+  let app: TestApp | undefined;
+  beforeAll(async () => {
+    app = await createTestApp();
+    use(app, await signInCast(app));
+  });
+  afterAll(() => app?.close());
+}

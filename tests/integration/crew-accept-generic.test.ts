@@ -1,15 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { createReleasedJob } from '../factories/crew-jobs';
-import { signInCast, type Cast } from '../factories/office-cast';
-import { createTestApp, signIn, type TestApp } from '../setup/test-app';
+import { type Cast, withCastApp } from '../factories/office-cast';
+import { signIn, type TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-beforeAll(async () => {
-  t = await createTestApp();
-  cast = await signInCast(t);
-});
-afterAll(() => t.close());
+withCastApp((app, signedIn) => { t = app; cast = signedIn; });
 
 describe('taking a job through the generic status endpoint', () => {
   it('works like the crew endpoint: the loser of the race is told who has the job (409)', async () => {

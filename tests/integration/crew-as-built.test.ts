@@ -1,17 +1,13 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { asBuiltSets } from '../../server/db/schema';
 import { createReleasedJob, harlowRules } from '../factories/crew-jobs';
-import { signInCast, type Cast } from '../factories/office-cast';
-import { createTestApp, type TestApp } from '../setup/test-app';
+import { type Cast, withCastApp } from '../factories/office-cast';
+import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-beforeAll(async () => {
-  t = await createTestApp();
-  cast = await signInCast(t);
-});
-afterAll(() => t.close());
+withCastApp((app, signedIn) => { t = app; cast = signedIn; });
 
 /** A job this crew has taken and started: the state in which readings are taken. */
 async function startedJob(rules = harlowRules) {

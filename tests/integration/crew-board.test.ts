@@ -1,17 +1,13 @@
 import { and, eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { emails, jobs, requestEvents, requests } from '../../server/db/schema';
 import { createReleasedJob } from '../factories/crew-jobs';
-import { signInCast, type Cast } from '../factories/office-cast';
-import { createTestApp, type TestApp } from '../setup/test-app';
+import { type Cast, withCastApp } from '../factories/office-cast';
+import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-beforeAll(async () => {
-  t = await createTestApp();
-  cast = await signInCast(t);
-});
-afterAll(() => t.close());
+withCastApp((app, signedIn) => { t = app; cast = signedIn; });
 
 const newJob = (o: Partial<Parameters<typeof createReleasedJob>[1]> = {}) =>
   createReleasedJob(t.ctx.db, { applicantId: cast.applicant.id, staffId: cast.staff.id, ...o });

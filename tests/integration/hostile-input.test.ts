@@ -1,15 +1,11 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { signInCast, type Cast } from '../factories/office-cast';
+import { describe, expect, it } from 'vitest';
+import { type Cast, withCastApp } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
-import { createTestApp, type TestApp } from '../setup/test-app';
+import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-beforeAll(async () => {
-  t = await createTestApp();
-  cast = await signInCast(t);
-});
-afterAll(() => t.close());
+withCastApp((app, signedIn) => { t = app; cast = signedIn; });
 
 const cursor = (value: unknown) => Buffer.from(JSON.stringify(value)).toString('base64url');
 const someId = '7d3e9b6a-1c2f-4e8a-9b0c-123456789abc';

@@ -1,17 +1,13 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { emails } from '../../server/db/schema';
-import { signInCast, type Cast } from '../factories/office-cast';
+import { type Cast, withCastApp } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
-import { createTestApp, type TestApp } from '../setup/test-app';
+import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-beforeAll(async () => {
-  t = await createTestApp();
-  cast = await signInCast(t);
-});
-afterAll(() => t.close());
+withCastApp((app, signedIn) => { t = app; cast = signedIn; });
 
 const secret = 'INTERNAL: owner was rude on the phone, double-check the survey pins';
 

@@ -1,17 +1,13 @@
 import { and, eq, ne } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { emails, requestEvents, requests } from '../../server/db/schema';
-import { signInCast, type Cast } from '../factories/office-cast';
+import { type Cast, withCastApp } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
-import { createTestApp, type TestApp } from '../setup/test-app';
+import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-beforeAll(async () => {
-  t = await createTestApp();
-  cast = await signInCast(t);
-});
-afterAll(() => t.close());
+withCastApp((app, signedIn) => { t = app; cast = signedIn; });
 
 describe('two office people changing one request at once', () => {
   it.each([1, 2, 3, 4, 5])('exactly one wins, the other gets 409, one event and one e-mail are written (round %i)', async () => {

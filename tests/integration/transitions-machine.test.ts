@@ -1,21 +1,17 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { requests } from '../../server/db/schema';
 import { canSee } from '../../server/services/requests/request-access';
 import { requestStatuses, type RequestStatus, type Role } from '../../shared/workflow/statuses';
 import { transitions, type Transition } from '../../shared/workflow/transitions';
 import { createAsBuiltSet, createGradeCheck } from '../factories/grade-checks';
-import { signInCast, type Cast, type SignedIn } from '../factories/office-cast';
+import { type Cast, type SignedIn, withCastApp } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
-import { createTestApp, type TestApp } from '../setup/test-app';
+import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-beforeAll(async () => {
-  t = await createTestApp();
-  cast = await signInCast(t);
-});
-afterAll(() => t.close());
+withCastApp((app, signedIn) => { t = app; cast = signedIn; });
 
 const crewStatuses: RequestStatus[] = ['crew_assigned', 'under_construction', 'built', 'closed'];
 

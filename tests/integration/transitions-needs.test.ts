@@ -1,18 +1,14 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { emails, messages, requests } from '../../server/db/schema';
 import { createGradeCheck } from '../factories/grade-checks';
-import { signInCast, type Cast } from '../factories/office-cast';
+import { type Cast, withCastApp } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
-import { createTestApp, type TestApp } from '../setup/test-app';
+import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-beforeAll(async () => {
-  t = await createTestApp();
-  cast = await signInCast(t);
-});
-afterAll(() => t.close());
+withCastApp((app, signedIn) => { t = app; cast = signedIn; });
 
 const move = (who: Cast[keyof Cast], id: string, body: Record<string, unknown>) =>
   who.agent.post(`/api/requests/${id}/transitions`).send(body);
