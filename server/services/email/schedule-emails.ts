@@ -1,4 +1,4 @@
-import { renderHtml, renderText, type EmailContent } from './layout';
+import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
 import type { Person } from './transition-emails';
 
@@ -14,7 +14,6 @@ export interface ScheduleEmailInput {
   appOrigin: string;
 }
 
-const footer = 'You receive this because you are part of this driveway entrance request in Gradepass. Reply to reach the office.';
 
 /** "Tuesday 8 December 2026": the day as a person says it, fixed to the date itself rather than any time zone. */
 export function dayInWords(isoDate: string): string {
@@ -47,7 +46,7 @@ export function scheduleEmails(input: ScheduleEmailInput): OutgoingEmail[] {
     link: { href: `${input.appOrigin}/office/requests/${input.request.id}`, label: 'Open it in Gradepass' },
   };
   const build = (to: string, c: EmailContent, s: string): OutgoingEmail => ({
-    to, template: 'crew.schedule', subject: s, requestId: input.request.id, text: renderText(c, footer), html: renderHtml(c, footer),
+    to, template: 'crew.schedule', subject: s, requestId: input.request.id, text: renderText(c, requestFooter), html: renderHtml(c, requestFooter),
   });
   return [build(input.applicant.email, content, subject), build(input.officeEmail, officeContent, `[${input.request.reference}] Work planned for ${day}`)];
 }

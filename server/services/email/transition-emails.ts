@@ -1,6 +1,6 @@
 import { statusText } from '../../../shared/workflow/statuses';
 import type { Transition } from '../../../shared/workflow/transitions';
-import { renderHtml, renderText, type EmailContent } from './layout';
+import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
 
 export interface Person { email: string; name: string }
@@ -19,7 +19,6 @@ export interface TransitionEmailInput {
   detail?: string;
 }
 
-const footer = 'You receive this because you are part of this driveway entrance request in Gradepass. Reply to reach the office.';
 
 type Audience = 'applicant' | 'office' | 'crew' | 'crewLeads';
 
@@ -76,7 +75,7 @@ export function emailsForTransition(input: TransitionEmailInput): OutgoingEmail[
   const label = statusText[transition.to].label;
   const build = (to: string, content: EmailContent, subject: string): OutgoingEmail => ({
     to, template: `transition.${transition.action}`, subject, requestId: request.id,
-    text: renderText(content, footer), html: renderHtml(content, footer),
+    text: renderText(content, requestFooter), html: renderHtml(content, requestFooter),
   });
   const officeHref = `${input.appOrigin}/office/requests/${request.id}`;
   const crewHref = `${input.appOrigin}/crew/board`;
