@@ -4,6 +4,9 @@ export const roles = ['applicant', 'staff', 'crew', 'admin'] as const;
 export const roleSchema = z.enum(roles);
 export type Role = z.infer<typeof roleSchema>;
 
+/** Staff and the admin work as the office: they see every request, internal notes and every check. */
+export const isOfficeRole = (role: Role) => role === 'staff' || role === 'admin';
+
 export const roleLabels: Record<Role, string> = {
   applicant: 'Property owner',
   staff: 'Office',

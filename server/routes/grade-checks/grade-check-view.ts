@@ -1,3 +1,4 @@
+import { isOfficeRole } from '../../../shared/workflow/statuses';
 import type { SessionUser } from '../../auth/session-user';
 import type { gradeChecks } from '../../db/schema';
 import type { RequestRow } from '../../services/requests/request-access';
@@ -15,5 +16,5 @@ export function requestHeader(r: RequestRow) {
 /** The office gets the whole record; owners and crews get the results and summary, not who typed it. */
 export function checkView(row: Row, user: SessionUser) {
   const { createdById, ...rest } = row;
-  return user.role === 'staff' || user.role === 'admin' ? { ...rest, createdById } : rest;
+  return isOfficeRole(user.role) ? { ...rest, createdById } : rest;
 }

@@ -1,9 +1,9 @@
 import { allowedTransitions } from '../../../shared/workflow/transitions';
-import { statusText } from '../../../shared/workflow/statuses';
+import { isOfficeRole, statusText } from '../../../shared/workflow/statuses';
 import type { SessionUser } from '../../auth/session-user';
 import type { RequestRow } from '../../services/requests/request-access';
 
-export const isOffice = (user: SessionUser) => user.role === 'staff' || user.role === 'admin';
+export const isOffice = (user: SessionUser) => isOfficeRole(user.role);
 
 /** The applicant's part at each status, in the words of the "My requests" table. */
 export function expectedOfApplicant(status: RequestRow['status']): string {

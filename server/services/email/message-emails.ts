@@ -1,5 +1,5 @@
-import type { Role } from '../../../shared/workflow/statuses';
-import { renderHtml, renderText, type EmailContent } from './layout';
+import { isOfficeRole, type Role } from '../../../shared/workflow/statuses';
+import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
 import type { Person } from './transition-emails';
 
@@ -15,9 +15,7 @@ export interface MessageEmailInput {
   appOrigin: string;
 }
 
-const footer = 'You receive this because you are part of this driveway entrance request in Gradepass. Reply to reach the office.';
 const roleWords: Record<Role, string> = { applicant: 'the property owner', staff: 'the office', admin: 'the office', crew: 'the crew' };
-const isOffice = (role: Role) => role === 'staff' || role === 'admin';
 
 /**
  * Who hears about a new message. Internal notes stay in the office, so they e-mail nobody. A shared message reaches
@@ -30,14 +28,14 @@ export function messageEmails(input: MessageEmailInput): OutgoingEmail[] {
   const intro = `${author.name} (${roleWords[author.role]}) wrote about ${request.reference}, the driveway entrance at ${request.siteAddress}:`;
   const build = (to: string, greeting: string, href: string, subject: string): OutgoingEmail => {
     const content: EmailContent = { greeting, paragraphs: [intro, `“${input.body}”`], link: { href, label: 'Read and answer in Gradepass' } };
-    return { to, template: 'message.shared', subject, requestId: request.id, text: renderText(content, footer), html: renderHtml(content, footer) };
+    return { to, template: 'message.shared', subject, requestId: request.id, text: renderText(content, requestFooter), html: renderHtml(content, requestFooter) };
   };
   const out: OutgoingEmail[] = [];
   if (author.id !== input.applicant.id) {
     out.push(build(input.applicant.email, `Hello ${input.applicant.name},`, `${input.appOrigin}/my/requests/${request.id}`,
       `${request.reference}: a message from ${roleWords[author.role]}`));
   }
-  if (!isOffice(author.role)) {
+  if (!isOfficeRole(author.role)) {
     out.push(build(input.officeEmail, 'Hello office,', `${input.appOrigin}/office/requests/${request.id}`,
       `[${request.reference}] Message from ${author.name}`));
   }

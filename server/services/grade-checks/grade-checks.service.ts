@@ -1,6 +1,6 @@
 import { and, desc, eq, isNotNull, max } from 'drizzle-orm';
 import type { RuleProfile } from '../../../shared/engine';
-import type { RequestStatus } from '../../../shared/workflow/statuses';
+import { isOfficeRole, type RequestStatus } from '../../../shared/workflow/statuses';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
@@ -18,7 +18,6 @@ export interface GradeCheck extends Omit<GradeCheckRow, 'inputs' | 'results'> {
 
 // From the visit until the crew has it, a new survey may still be checked; after release the record is settled.
 const checkableStatuses: readonly RequestStatus[] = ['visit_booked', 'checked', 'permit_filed', 'permit_refused'];
-const isOffice = (user: SessionUser) => user.role === 'staff' || user.role === 'admin';
 
 /** A saved check with its parts typed, for the report, the crew's field sheet and the as-built comparison. */
 export async function loadGradeCheck(db: DbOrTx, id: string): Promise<GradeCheck> {
@@ -31,7 +30,7 @@ export async function loadGradeCheck(db: DbOrTx, id: string): Promise<GradeCheck
 export async function loadVisibleGradeCheck(db: DbOrTx, user: SessionUser, id: string) {
   const check = await loadGradeCheck(db, id);
   await loadVisibleRequest(db, user, check.requestId);
-  if (!isOffice(user) && !check.attachedAt) throw notFound('Grade check');
+  if (!isOfficeRole(user.role) && !check.attachedAt) throw notFound('Grade check');
   return check;
 }
 
@@ -74,7 +73,7 @@ export async function saveGradeCheck(db: Db, user: SessionUser, requestId: strin
 
 export async function listGradeChecks(db: DbOrTx, user: SessionUser, requestId: string) {
   const request = await loadVisibleRequest(db, user, requestId);
-  const where = isOffice(user) ? eq(gradeChecks.requestId, request.id) : and(eq(gradeChecks.requestId, request.id), isNotNull(gradeChecks.attachedAt));
+  const where = isOfficeRole(user.role) ? eq(gradeChecks.requestId, request.id) : and(eq(gradeChecks.requestId, request.id), isNotNull(gradeChecks.attachedAt));
   const rows = await db.select().from(gradeChecks).where(where).orderBy(desc(gradeChecks.number));
   return { request, checks: rows };
 }

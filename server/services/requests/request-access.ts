@@ -1,3 +1,4 @@
+import { isOfficeRole } from '../../../shared/workflow/statuses';
 import { eq } from 'drizzle-orm';
 import type { SessionUser } from '../../auth/session-user';
 import type { DbOrTx } from '../../db/client';
@@ -13,7 +14,7 @@ const crewVisible = new Set(['released', 'crew_assigned', 'under_construction', 
  * the board, then only the crew that took it). Everyone else gets 404, so ids are never confirmed.
  */
 export function canSee(user: SessionUser, row: RequestRow): boolean {
-  if (user.role === 'staff' || user.role === 'admin') return true;
+  if (isOfficeRole(user.role)) return true;
   if (user.role === 'applicant') return row.applicantId === user.id;
   if (!crewVisible.has(row.status)) return false;
   return row.status === 'released' ? row.crewId === null : row.crewId === user.id;
