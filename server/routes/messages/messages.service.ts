@@ -1,4 +1,5 @@
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, inArray } from 'drizzle-orm';
+import { isOfficeRole } from '../../../shared/workflow/statuses';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db, Tx } from '../../db/client';
 import { messages, users } from '../../db/schema';
@@ -8,7 +9,6 @@ import { enqueueEmails } from '../../services/email/outbox';
 import { loadVisibleRequest, type RequestRow } from '../../services/requests/request-access';
 
 type Visibility = 'internal' | 'shared';
-const isOffice = (user: SessionUser) => user.role === 'staff' || user.role === 'admin';
 
 /** Crew talk with the office only about a job they hold, not about every job waiting on the board. */
 async function loadForMessages(db: Db, user: SessionUser, requestId: string): Promise<RequestRow> {
@@ -19,7 +19,7 @@ async function loadForMessages(db: Db, user: SessionUser, requestId: string): Pr
 
 export async function listMessages(db: Db, user: SessionUser, requestId: string) {
   await loadForMessages(db, user, requestId);
-  const office = isOffice(user);
+  const office = isOfficeRole(user.role);
   const where = office ? eq(messages.requestId, requestId)
     : and(eq(messages.requestId, requestId), eq(messages.visibility, 'shared'));
   const rows = await db.select({
@@ -32,18 +32,18 @@ export async function listMessages(db: Db, user: SessionUser, requestId: string)
 export interface MessageMail { officeEmail: string; appOrigin: string }
 
 async function emailsForMessage(tx: Tx, mail: MessageMail, row: RequestRow, author: SessionUser, message: { body: string; visibility: Visibility }) {
-  const person = (id: string) => tx.select({ id: users.id, email: users.email, name: users.name }).from(users).where(eq(users.id, id));
-  const [applicant] = await person(row.applicantId);
-  const [crew] = row.crewId ? await person(row.crewId) : [];
-  return messageEmails({
-    request: row, author, body: message.body, visibility: message.visibility, applicant, crew: crew ?? null, ...mail,
-  });
+  if (message.visibility === 'internal') return [];
+  const people = await tx.select({ id: users.id, email: users.email, name: users.name }).from(users)
+    .where(inArray(users.id, row.crewId ? [row.applicantId, row.crewId] : [row.applicantId]));
+  const applicant = people.find((p) => p.id === row.applicantId)!;
+  const crew = people.find((p) => p.id === row.crewId) ?? null;
+  return messageEmails({ request: row, author, body: message.body, visibility: message.visibility, applicant, crew, ...mail });
 }
 
 /** Saves a message and, in the same transaction, the e-mails that tell the others on the request about it. */
 export async function postMessage(db: Db, mail: MessageMail, user: SessionUser, requestId: string, input: { body: string; visibility?: Visibility }) {
   const row = await loadForMessages(db, user, requestId);
-  const office = isOffice(user);
+  const office = isOfficeRole(user.role);
   // The office decides each time; its default keeps a slip of the hand from reaching the property owner.
   const visibility = input.visibility ?? (office ? 'internal' : 'shared');
   if (!office && visibility === 'internal') {
