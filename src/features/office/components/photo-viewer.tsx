@@ -1,6 +1,7 @@
 import { useEffect, useRef, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
+import { UnshowablePhoto } from '@/components/ui/unshowable-photo';
 import { getPhotoUrl, useRequestPhotos } from '../api/get-request-photos';
 import type { OfficePhoto } from '../api/types';
 
@@ -22,10 +23,9 @@ function PhotoImage({ requestId, photo, className, offerFile = false }: { reques
   if (!src) return <div className={`${className} grid place-items-center bg-stone-100 text-xs text-stone-500`}>Photo unavailable</div>;
   if (unshowable) {
     return (
-      <div className={`${className} flex flex-col items-center justify-center gap-2 bg-stone-100 p-3 text-center text-sm text-stone-700`}>
-        <span>{photo.contentType === 'image/heic' ? 'This browser cannot show HEIC photos.' : 'This photo cannot be shown here.'}</span>
+      <UnshowablePhoto contentType={photo.contentType} className={className}>
         {offerFile && <a href={src} target="_blank" rel="noreferrer" className="font-semibold text-pine-800 underline">Open {photo.fileName}</a>}
-      </div>
+      </UnshowablePhoto>
     );
   }
   return <img src={src} alt={photo.caption || photo.fileName} onError={refresh} className={className} />;

@@ -2,6 +2,7 @@ import { useId, useState } from 'react';
 import { captionSuggestions } from '@shared/requests/photo-rules';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice } from '@/components/ui/notice';
+import { UnshowablePhoto } from '@/components/ui/unshowable-photo';
 import type { Photo } from '../api/get-photos';
 import { useRemovePhoto } from '../api/remove-photo';
 import { useUpdateCaption } from '../api/update-caption';
@@ -10,7 +11,6 @@ import { useUpdateCaption } from '../api/update-caption';
 export function PhotoCard({ photo, requestId, editable }: { photo: Photo; requestId: string; editable: boolean }) {
   const captionId = useId();
   const [caption, setCaption] = useState(photo.caption);
-  // Most browsers other than Safari cannot draw HEIC; the photo is still there to download and open.
   const [unshowable, setUnshowable] = useState(false);
   const update = useUpdateCaption(requestId);
   const remove = useRemovePhoto(requestId);
@@ -19,10 +19,9 @@ export function PhotoCard({ photo, requestId, editable }: { photo: Photo; reques
     <li className="flex flex-col gap-2 rounded-md border border-stone-200 bg-white p-2">
       <a href={photo.url} target="_blank" rel="noreferrer" className="block overflow-hidden rounded bg-stone-100">
         {unshowable ? (
-          <span className="flex aspect-[4/3] w-full flex-col items-center justify-center gap-1 p-3 text-center text-sm text-stone-700">
-            <span>{photo.contentType === 'image/heic' ? 'This browser cannot show HEIC photos.' : 'This photo cannot be shown here.'}</span>
+          <UnshowablePhoto contentType={photo.contentType} className="aspect-[4/3] w-full">
             <span className="font-semibold text-pine-800 underline">Open {photo.fileName}</span>
-          </span>
+          </UnshowablePhoto>
         ) : (
           <img src={photo.url} alt={photo.caption || `Site photo ${photo.fileName}`} className="aspect-[4/3] w-full object-cover"
             loading="lazy" onError={() => setUnshowable(true)} />
