@@ -1,4 +1,4 @@
-import { compactedToBank, EngineInputError, soilFactors, truckLoads, type ProposedProfile } from '../engine';
+import { compactedToBank, soilFactors, truckLoads, unlessRefused, type ProposedProfile } from '../engine';
 
 export type Soil = keyof typeof soilFactors;
 
@@ -31,14 +31,7 @@ export interface HaulEstimate extends HaulChoice {
  * The haul that goes with a proposal, for the cut/fill table beside the chart (screen and report alike). Cut and
  * fill are not netted: material from the cut is rarely fit to place as fill without sorting, so both are shown.
  */
-function loadsFor(looseCuYd: number, truckCuYd: number): number | null {
-  try {
-    return truckLoads({ looseCuYd, truckCuYd }).loads;
-  } catch (error) {
-    if (error instanceof EngineInputError) return null;
-    throw error;
-  }
-}
+const loadsFor = (looseCuYd: number, truckCuYd: number) => unlessRefused(() => truckLoads({ looseCuYd, truckCuYd }).loads);
 
 export function haulEstimate(proposal: ProposedProfile, choice: HaulChoice = defaultHaul): HaulEstimate {
   const factors = soilFactors[choice.soil];

@@ -21,6 +21,16 @@ export class EngineInputError extends Error {
   }
 }
 
+/** The engine's answer, or null where it refuses the input; any other error is a bug and goes on. */
+export function unlessRefused<T>(run: () => T): T | null {
+  try {
+    return run();
+  } catch (error) {
+    if (error instanceof EngineInputError) return null;
+    throw error;
+  }
+}
+
 const joinPath = (root: string, path: readonly PropertyKey[]): string =>
   [root, ...path.map(String)].filter((part) => part !== '').join('.');
 

@@ -1,5 +1,5 @@
 export { ENGINE_VERSION } from './version';
-export { EngineInputError, type EngineIssue } from './errors';
+export { EngineInputError, unlessRefused, type EngineIssue } from './errors';
 export { formatStation, parseStation } from './station';
 export { displayLength, displaySmallLength, type DisplayUnits } from './units';
 export {

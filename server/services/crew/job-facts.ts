@@ -1,5 +1,5 @@
 import {
-  bankToLoose, earthworkFromProfiles, EngineInputError, soilFactors, truckLoads, type ProfilePoint,
+  bankToLoose, earthworkFromProfiles, soilFactors, truckLoads, unlessRefused, type ProfilePoint,
 } from '../../../shared/engine';
 import { timingText, timings } from '../../../shared/requests/choices';
 import type { EarthworkEstimate, Wanted, Yard } from '../../../shared/crew/crew-views';
@@ -33,7 +33,8 @@ export function earthworkEstimate(check: SavedCheck | null): EarthworkEstimate |
   const truckCuYd = check.design?.haul?.truckCuYd ?? DEFAULT_TRUCK_CU_YD;
   const bankForFill = v.fillCuYd / soil.bankToCompacted;
   const spareBank = v.cutCuYd - bankForFill;
-  try {
+  // Volumes past the engine's range (a billion cubic yards) come only from a survey typo: no estimate, not no board.
+  return unlessRefused(() => {
     const loose = bankToLoose({ bankCuYd: Math.abs(spareBank), swellPercent: (soil.bankToLoose - 1) * 100 }).looseCuYd;
     return {
       cutCuYd: v.cutCuYd,
@@ -43,11 +44,7 @@ export function earthworkEstimate(check: SavedCheck | null): EarthworkEstimate |
       truckLoads: truckLoads({ looseCuYd: loose, truckCuYd }).loads,
       basis: `${soilName}: swell ${Math.round((soil.bankToLoose - 1) * 100)}%, fill compacts to ${Math.round(soil.bankToCompacted * 100)}% of bank; ${truckCuYd} cu yd per truck`,
     };
-  } catch (error) {
-    // Volumes past the engine's range (a billion cubic yards) come only from a survey typo: no estimate, not no board.
-    if (error instanceof EngineInputError) return null;
-    throw error;
-  }
+  });
 }
 
 const isTiming = (v: unknown): v is (typeof timings)[number] => typeof v === 'string' && (timings as readonly string[]).includes(v);
