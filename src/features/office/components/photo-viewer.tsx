@@ -18,7 +18,8 @@ function PhotoImage({ requestId, photo, className, offerFile = false }: { reques
   const refresh = () => {
     if (retried) { setUnshowable(true); return; }
     setRetried(true);
-    getPhotoUrl(requestId, photo.id).then((r) => setSrc(r.url)).catch(() => setSrc(undefined));
+    // A link signed in the same second is the same link, and would not load again: the file itself is the trouble.
+    getPhotoUrl(requestId, photo.id).then((r) => (r.url === src ? setUnshowable(true) : setSrc(r.url))).catch(() => setSrc(undefined));
   };
   if (!src) return <div className={`${className} grid place-items-center bg-stone-100 text-xs text-stone-500`}>Photo unavailable</div>;
   if (unshowable) {
