@@ -3,6 +3,7 @@ import { parseInput } from './errors';
 import { snap, stationFt, elevationFt, gradePercent, nonNegative, bounded } from './numbers';
 import { elevationAt, profileInputSchema, normalizeParsedProfile, type ProfilePoint } from './profile';
 import { ruleProfileSchema } from './rule-profile';
+import { stationBefore } from './station-tolerance';
 import { ENGINE_VERSION } from './version';
 
 export type AsBuiltStatus = 'pass' | 'advisory' | 'fail';
@@ -54,34 +55,55 @@ export interface AsBuiltReadingResult {
 
 const worst = (a: AsBuiltStatus, b: AsBuiltStatus): AsBuiltStatus => (a === 'fail' || b === 'fail' ? 'fail' : a === 'advisory' || b === 'advisory' ? 'advisory' : 'pass');
 
-/** Each finished-grade reading checked against the rule profile with its as-built tolerance. */
+interface GradeAt {
+  stationFt: number;
+  grade: number;
+}
+
+/**
+ * Each finished-grade reading checked against the rule profile with its as-built tolerance: the landing limits or
+ * the maximum grade by station, the drainage minimum beyond the landing, and the change between successive grades
+ * (located at the later reading) against the grade-change limit.
+ */
 export function checkAsBuilt(input: CheckAsBuiltInput) {
   const p = parseInput(checkAsBuiltInputSchema, input);
   const rules = p.ruleProfile;
   const tol = rules.asBuilt;
   const landingEnd = p.roadEdgeStationFt + rules.landing.lengthFt;
   const results: AsBuiltReadingResult[] = [];
-  const gradeResult = (stationFt: number, grade: number) => {
-    const classify = (ruleId: string, limit: number, kind: 'max' | 'min', measured: number) => {
-      const c = classifyAsBuiltReading({ measured, limit, tolerance: tol.gradeTolerancePercent, kind });
-      return { stationFt, ruleId, measured, limit, unit: '%', ...c };
-    };
-    if (stationFt < landingEnd) {
-      const hi = classify('landing.max-grade', rules.landing.maxGradePercent, 'max', grade);
-      const lo = classify('landing.min-grade', rules.landing.minGradePercent, 'min', grade);
-      results.push(hi.margin <= lo.margin ? hi : lo);
-    } else results.push(classify('grade.max', rules.maxGradePercent, 'max', Math.abs(grade)));
+  const classify = (stationFt: number, ruleId: string, limit: number, kind: 'max' | 'min', measured: number): AsBuiltReadingResult => {
+    const c = classifyAsBuiltReading({ measured, limit, tolerance: tol.gradeTolerancePercent, kind });
+    return { stationFt, ruleId, measured, limit, unit: '%', ...c };
   };
+  const gradeResult = ({ stationFt, grade }: GradeAt) => {
+    if (stationBefore(stationFt, landingEnd)) {
+      const hi = classify(stationFt, 'landing.max-grade', rules.landing.maxGradePercent, 'max', grade);
+      const lo = classify(stationFt, 'landing.min-grade', rules.landing.minGradePercent, 'min', grade);
+      results.push(hi.margin <= lo.margin ? hi : lo);
+      return;
+    }
+    results.push(classify(stationFt, 'grade.max', rules.maxGradePercent, 'max', Math.abs(grade)));
+    if (rules.minDrainageGradePercent !== undefined) {
+      results.push(classify(stationFt, 'grade.min-drainage', rules.minDrainageGradePercent, 'min', Math.abs(grade)));
+    }
+  };
+  const grades: GradeAt[] = [];
   const elevations: ProfilePoint[] = [];
   for (const r of p.readings) {
-    if ('gradePercent' in r) gradeResult(r.stationFt, r.gradePercent);
+    if ('gradePercent' in r) grades.push({ stationFt: r.stationFt, grade: r.gradePercent });
     else elevations.push({ stationFt: r.stationFt, elevationFt: r.elevationFt });
   }
   const shots = elevations.length >= 2 ? normalizeParsedProfile(elevations, 'readings') : elevations;
   for (let i = 0; i < shots.length - 1; i++) {
     const a = shots[i];
     const b = shots[i + 1];
-    gradeResult(a.stationFt, ((b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt)) * 100);
+    grades.push({ stationFt: a.stationFt, grade: ((b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt)) * 100 });
+  }
+  grades.sort((a, b) => a.stationFt - b.stationFt);
+  grades.forEach(gradeResult);
+  for (let i = 1; i < grades.length; i++) {
+    const change = Math.abs(grades[i].grade - grades[i - 1].grade);
+    results.push(classify(grades[i].stationFt, 'grade.max-change', rules.maxGradeChangePercent, 'max', change));
   }
   if (p.design) {
     const design = normalizeParsedProfile(p.design, 'design');

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { SAFETY_CAUTIONS } from './cautions';
 import { culvertInputSchema, checkCulvert, type CulvertSummary } from './culvert-checks';
-import { parseInput } from './errors';
+import { EngineInputError, parseInput } from './errors';
 import type { Finding } from './findings';
 import { bounded, stationFt } from './numbers';
 import { checkProfileRules } from './profile-checks';
@@ -9,6 +9,8 @@ import { elevationAt, normalizeParsedProfile, profileInputSchema, type ProfilePo
 import { designVehicleSchema, type RuleProfile, type RuleProfileInput, ruleProfileSchema } from './rule-profile';
 import type { ScrapeResult } from './scrape';
 import { checkGeometry, checkSight, geometryInputSchema, sightInputSchema, type SightSummary } from './site-checks';
+import { formatStation } from './station';
+import { stationBefore } from './station-tolerance';
 import { summarise, type CheckSummary } from './summary';
 import { ENGINE_VERSION } from './version';
 
@@ -52,6 +54,10 @@ export function checkEntrance(input: CheckEntranceInput, ruleProfile: RuleProfil
   const rules: RuleProfile = p.vehicle ? { ...parsedRules, designVehicle: p.vehicle } : parsedRules;
   const points = normalizeParsedProfile(p.profile, 'profile');
   const roadEdge = p.roadEdgeStationFt ?? points[0].stationFt;
+  const lastStation = points[points.length - 1].stationFt;
+  if (!stationBefore(roadEdge, lastStation)) {
+    throw new EngineInputError('roadEdgeStationFt', `the road edge (station ${formatStation(roadEdge)}) is at or past the end of the survey (station ${formatStation(lastStation)}): nothing of the entrance was surveyed`);
+  }
 
   const profile = checkProfileRules(points, rules, roadEdge, p.scrapeStepFt);
   const landingEnd = Math.min(roadEdge + rules.landing.lengthFt, points[points.length - 1].stationFt);

@@ -104,3 +104,4 @@ export {
 } from './as-built';
 export { gradePercentToDegrees, breakOverAngleDeg, breakOverAngleInputSchema } from './angles';
 export { SAFETY_CAUTIONS } from './cautions';
+export { STATION_TOLERANCE_FT, sameStation, stationBefore, stationAtOrAfter, stationAfter, tooCloseToSurvey } from './station-tolerance';

@@ -2,6 +2,7 @@ import { atLeast, atMost, advisory, type Finding, notChecked } from './findings'
 import { gradeBreaks, type ProfilePoint, type ProfileSegment, segmentGrades } from './profile';
 import type { RuleProfile } from './rule-profile';
 import { scrapeCheckPoints, type ScrapeResult } from './scrape';
+import { stationAfter, stationAtOrAfter, stationBefore } from './station-tolerance';
 
 export interface ProfileCheck {
   segments: ProfileSegment[];
@@ -46,7 +47,7 @@ function landingFindings(landing: ProfileSegment[], rules: RuleProfile, surveyed
     atMost({ ...RULE.landingMax, stationFt: hi.stationFt }, hi.value, rules.landing.maxGradePercent),
     atLeast({ ...RULE.landingMin, stationFt: lo.stationFt }, lo.value, rules.landing.minGradePercent),
   ];
-  if (surveyedFt < rules.landing.lengthFt) {
+  if (stationBefore(surveyedFt, rules.landing.lengthFt)) {
     const why = `the survey stops ${surveyedFt} ft in, inside the ${rules.landing.lengthFt} ft landing`;
     findings.push(advisory(RULE.landingLength, surveyedFt, rules.landing.lengthFt, why));
   }
@@ -91,11 +92,11 @@ export function checkProfileRules(
 ): ProfileCheck {
   const segments = segmentGrades(points);
   const landingEnd = roadEdgeStationFt + rules.landing.lengthFt;
-  const entrance = segments.filter((s) => s.toStationFt > roadEdgeStationFt);
+  const entrance = segments.filter((s) => stationAfter(s.toStationFt, roadEdgeStationFt));
   // A segment that starts inside the landing carries its one grade over the landing part, so it is held to
-  // the landing limits as a whole.
-  const landing = entrance.filter((s) => s.fromStationFt < landingEnd);
-  const beyond = entrance.filter((s) => s.fromStationFt >= landingEnd);
+  // the landing limits as a whole. Stations are compared at the survey's precision, not in raw binary.
+  const landing = entrance.filter((s) => stationBefore(s.fromStationFt, landingEnd));
+  const beyond = entrance.filter((s) => stationAtOrAfter(s.fromStationFt, landingEnd));
   const surveyedFt = points[points.length - 1].stationFt - roadEdgeStationFt;
   const scrape = scrapeCheckPoints(points, rules.designVehicle, stepFt);
   const findings = [

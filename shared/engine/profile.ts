@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { EngineInputError, parseInput } from './errors';
 import { bounded, elevationFt, gradePercent, positive, stationFt } from './numbers';
 import { formatStation } from './station';
+import { STATION_TOLERANCE_FT, SURVEY_ELEVATION_PRECISION_FT, tooCloseToSurvey } from './station-tolerance';
 
 export interface ProfilePoint {
   stationFt: number;
@@ -30,28 +31,39 @@ export const profileInputSchema = z.union([
 ]);
 export type ProfileInput = z.input<typeof profileInputSchema>;
 
-const SAME_STATION_FT = 1e-6;
+interface Shot extends ProfilePoint {
+  /** Where the shot was in the input, so a refusal can name the box it was typed in. */
+  index: number;
+}
 
-function sortAndMerge(points: ProfilePoint[], field: string): ProfilePoint[] {
-  const sorted = [...points].sort((a, b) => a.stationFt - b.stationFt);
-  const merged: ProfilePoint[] = [];
-  for (const point of sorted) {
+/**
+ * Shots closer together than the survey's station precision are one place: merged when their elevations agree to
+ * the survey's elevation precision (a re-entered or re-read shot), refused otherwise, since the grade between them
+ * would be noise divided by almost nothing.
+ */
+function sortAndMerge(points: readonly ProfilePoint[], field: string): ProfilePoint[] {
+  const sorted: Shot[] = points.map((p, index) => ({ stationFt: p.stationFt, elevationFt: p.elevationFt, index })).sort((a, b) => a.stationFt - b.stationFt);
+  const merged: (ProfilePoint & { first: Shot })[] = [];
+  for (const shot of sorted) {
     const last = merged[merged.length - 1];
-    if (last && point.stationFt - last.stationFt < SAME_STATION_FT) {
-      // A shot repeated with the same elevation is a harmless re-entry; a different elevation is a real conflict.
-      if (Math.abs(point.elevationFt - last.elevationFt) > 1e-9) {
-        throw new EngineInputError(
-          field,
-          `station ${formatStation(point.stationFt)} appears twice with different elevations ` +
-            `(${last.elevationFt} and ${point.elevationFt} ft)`,
-        );
+    if (last && tooCloseToSurvey(shot.stationFt, last.stationFt)) {
+      if (Math.abs(shot.elevationFt - last.elevationFt) > SURVEY_ELEVATION_PRECISION_FT + 1e-9) {
+        const [a, b] = last.first.index < shot.index ? [last.first, shot] : [shot, last.first];
+        const elevations = `(${a.elevationFt} and ${b.elevationFt} ft)`;
+        const message = a.stationFt === b.stationFt
+          ? `station ${formatStation(b.stationFt)} appears twice with different elevations ${elevations}`
+          : `station ${formatStation(b.stationFt, 5)} is closer than ${STATION_TOLERANCE_FT} ft to station ` +
+            `${formatStation(a.stationFt, 5)} but the elevations differ ${elevations}; correct one or remove the repeat`;
+        throw new EngineInputError(`${field}.${b.index}.stationFt`, message);
       }
+      last.stationFt = (last.stationFt + shot.stationFt) / 2;
+      last.elevationFt = (last.elevationFt + shot.elevationFt) / 2;
       continue;
     }
-    merged.push({ stationFt: point.stationFt, elevationFt: point.elevationFt });
+    merged.push({ stationFt: shot.stationFt, elevationFt: shot.elevationFt, first: shot });
   }
   if (merged.length < 2) throw new EngineInputError(field, 'a profile needs at least two different stations');
-  return merged;
+  return merged.map((p) => ({ stationFt: p.stationFt, elevationFt: p.elevationFt }));
 }
 
 function fromParsed(parsed: z.output<typeof profileInputSchema>, field: string): ProfilePoint[] {
@@ -69,7 +81,10 @@ function fromParsed(parsed: z.output<typeof profileInputSchema>, field: string):
       const points: ProfilePoint[] = [{ stationFt: parsed.startStationFt, elevationFt: parsed.startElevationFt }];
       let station = parsed.startStationFt;
       let elevation = parsed.startElevationFt;
-      for (const segment of parsed.segments) {
+      for (const [i, segment] of parsed.segments.entries()) {
+        if (segment.lengthFt < STATION_TOLERANCE_FT) {
+          throw new EngineInputError(`${field}.segments.${i}.lengthFt`, `a segment shorter than the survey's ${STATION_TOLERANCE_FT} ft precision cannot give a grade`);
+        }
         station += segment.lengthFt;
         elevation += (segment.gradePercent / 100) * segment.lengthFt;
         points.push({ stationFt: station, elevationFt: elevation });

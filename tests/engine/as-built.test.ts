@@ -46,7 +46,7 @@ describe('as-built check along the centreline', () => {
         { stationFt: 40, gradePercent: 17.51 },
       ],
     });
-    expect(r.readings.map((x) => [x.ruleId, x.status])).toEqual([
+    expect(r.readings.filter((x) => x.ruleId !== 'grade.max-change').map((x) => [x.ruleId, x.status])).toEqual([
       ['landing.max-grade', 'pass'],
       ['landing.max-grade', 'advisory'],
       ['grade.max', 'fail'],
@@ -60,11 +60,31 @@ describe('as-built check along the centreline', () => {
       readings: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 100.8 }, { stationFt: 40, elevationFt: 104.2 }],
       design: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 100.8 }, { stationFt: 40, elevationFt: 104.1 }],
     });
-    const grades = r.readings.filter((x) => x.unit === '%');
+    const grades = r.readings.filter((x) => x.ruleId.startsWith('landing.') || x.ruleId === 'grade.max');
     expect(grades.map((x) => x.status)).toEqual(['pass', 'pass']);
     const elevations = r.readings.filter((x) => x.ruleId === 'as-built.elevation');
     // 104.2 against 104.1 is exactly the 0.1 ft tolerance: at the limit passes.
     expect(elevations.map((x) => x.status)).toEqual(['pass', 'pass', 'pass']);
     expect(r.status).toBe('pass');
   });
+
+  it('holds grades beyond the landing to the drainage minimum (common practice (no source) for the 1% value)', () => {
+    const drained = ruleProfile({ minDrainageGradePercent: 1 });
+    const r = checkAsBuilt({ ruleProfile: drained, readings: [{ stationFt: 30, gradePercent: 0.5 }, { stationFt: 50, gradePercent: -1.2 }] });
+    expect(r.readings.filter((x) => x.ruleId === 'grade.min-drainage').map((x) => [x.stationFt, x.status])).toEqual([[30, 'fail'], [50, 'pass']]);
+    expect(r.passes).toBe(false);
+  });
+
+  it('holds the change between successive grades to the grade-change limit at the later station', () => {
+    // The template's 13% break limit (17 - 4), with no tolerance.
+    const r = checkAsBuilt({
+      ruleProfile: commonRuralTemplate,
+      readings: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 99.2 }, { stationFt: 40, elevationFt: 101.2 }, { stationFt: 60, elevationFt: 104.5 }],
+    });
+    // -4% then 10% is a 14% break at 0+20; 10% then 16.5% is 6.5% at 0+40.
+    const changes = r.readings.filter((x) => x.ruleId === 'grade.max-change');
+    expect(changes.map((x) => [x.stationFt, x.status])).toEqual([[20, 'fail'], [40, 'pass']]);
+    expect(changes[0].measured).toBeCloseTo(14, 9);
+  });
 });
+

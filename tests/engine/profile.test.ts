@@ -51,7 +51,7 @@ describe('profile input forms', () => {
       expect.unreachable();
     } catch (e) {
       expect(e).toBeInstanceOf(EngineInputError);
-      expect((e as EngineInputError).field).toBe('profile');
+      expect((e as EngineInputError).field).toBe('profile.2.stationFt');
       expect((e as Error).message).toMatch(/0\+20 appears twice/);
     }
   });
