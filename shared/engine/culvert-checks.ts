@@ -72,8 +72,9 @@ function sizeFindings(c: Culvert, rules: RuleProfile, summary: CulvertSummary): 
 
   if (c.surfaceElevationFt === undefined) findings.push(notChecked(IDS.cover, 'needs the surface elevation over the pipe'));
   else {
-    // Under one surface elevation the higher end of the pipe has the least cover.
-    const crownFt = Math.max(c.inletInvertFt, c.outletInvertFt) + (c.diameterIn + 2 * c.wallThicknessIn) / 12;
+    // Under one surface elevation the higher end of the pipe has the least cover. The invert is the inside
+    // bottom, so the top of the pipe is one inside diameter and one wall above it (the lower wall is below it).
+    const crownFt = Math.max(c.inletInvertFt, c.outletInvertFt) + (c.diameterIn + c.wallThicknessIn) / 12;
     const coverIn = (c.surfaceElevationFt - crownFt) * 12;
     summary.coverIn = coverIn;
     const minCover = rules.culvert.minCoverIn;

@@ -17,12 +17,15 @@ const ruleWords: Record<string, string> = {
   'landing.max-grade': 'landing grade',
   'landing.min-grade': 'landing grade',
   'grade.max': 'driveway grade',
+  'grade.min-drainage': 'drainage grade',
+  'grade.max-change': 'grade change',
   'as-built.elevation': 'off design',
 };
 
 export function resultWords(r: AsBuiltReadingResult): string {
   const what = ruleWords[r.ruleId] ?? r.ruleId;
   const unit = r.unit === '%' ? '%' : ` ${r.unit}`;
-  const from = r.ruleId === 'as-built.elevation' ? '' : ` from ${station(r.stationFt)}`;
+  // A grade runs from its station; a change between two grades happens at one.
+  const from = r.ruleId === 'as-built.elevation' ? '' : r.ruleId === 'grade.max-change' ? ` at ${station(r.stationFt)}` : ` from ${station(r.stationFt)}`;
   return `${what}${from}: ${r.measured.toFixed(2)}${unit} (limit ${r.limit.toFixed(2)}${unit})`;
 }
