@@ -27,6 +27,8 @@ export {
   stoppingSightDistanceInputSchema,
   intersectionSightDistance,
   intersectionSightDistanceInputSchema,
+  approachGradeReadings,
+  type ApproachGradeReading,
   type StoppingSightDistanceInput,
   type IntersectionSightDistanceInput,
   type DesignVehicleClass,

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { bounded, nonNegative, positive } from './numbers';
+import { approachGradeReadings } from './sight-distance';
 
 export const designVehicleSchema = z.object({
   name: z.string().min(1).max(80).default('Passenger car'),
@@ -48,6 +49,7 @@ const sightRulesSchema = z.object({
   // Used when the site input gives no speed for the road.
   designSpeedMph: bounded(10, 90).optional(),
   vehicle: z.enum(['passenger', 'single-unit', 'combination']).default('passenger'),
+  gradeReading: z.enum(approachGradeReadings).default('above-3-percent'),
 });
 
 const geometryRulesSchema = z.object({
@@ -81,7 +83,7 @@ export const ruleProfileSchema = z.object({
   maxGradeChangePercent: positive(50),
   designVehicle: designVehicleSchema.default(passengerCarPreset),
   culvert: culvertRulesSchema.default({ lengthIncrementFt: 2 }),
-  sight: sightRulesSchema.default({ basis: 'intersection', vehicle: 'passenger' }),
+  sight: sightRulesSchema.default({ basis: 'intersection', vehicle: 'passenger', gradeReading: 'above-3-percent' }),
   geometry: geometryRulesSchema.default({}),
   asBuilt: asBuiltRulesSchema.default({ gradeTolerancePercent: 0, elevationToleranceFt: 0 }),
   sources: z.record(z.string(), z.string().max(1_000)).default({}),
@@ -108,7 +110,7 @@ export const commonRuralTemplate: RuleProfile = {
   maxGradeChangePercent: 13,
   designVehicle: passengerCarPreset,
   culvert: { lengthIncrementFt: 2 },
-  sight: { basis: 'intersection', vehicle: 'passenger' },
+  sight: { basis: 'intersection', vehicle: 'passenger', gradeReading: 'above-3-percent' },
   geometry: {},
   asBuilt: { gradeTolerancePercent: 0, elevationToleranceFt: 0 },
   sources: {

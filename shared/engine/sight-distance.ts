@@ -15,7 +15,12 @@ export const stoppingSightDistanceInputSchema = z.object({
 });
 export type StoppingSightDistanceInput = z.input<typeof stoppingSightDistanceInputSchema>;
 
-/** AASHTO stopping sight distance; on a grade the braking term uses a/g + G. */
+/**
+ * AASHTO stopping sight distance in its grade form, 1.47 V t + V^2 / (30 (a/32.2 + G)), used for every grade
+ * including level (G = 0). The level-road formula's rounded constant 1.075 V^2 / a reads 0.2 ft longer at 40 mph;
+ * using one form keeps the distance continuous through 0%, and the published design values (rounded up to 5 ft)
+ * come out the same either way.
+ */
 export function stoppingSightDistance(input: StoppingSightDistanceInput): { computedFt: number; designFt: number } {
   const { speedMph: v, gradePercent, reactionTimeS: t, decelFtPerS2: a } = parseInput(
     stoppingSightDistanceInputSchema,
@@ -26,9 +31,7 @@ export function stoppingSightDistance(input: StoppingSightDistanceInput): { comp
   if (brakingDivisor <= 0) {
     throw new EngineInputError('gradePercent', 'the downgrade is steeper than the braking rate can hold');
   }
-  // On level ground the 30(a/g) form is written with the rounded constant 1.075, as published; both are kept
-  // so that the level-road design table reproduces exactly.
-  const braking = g === 0 ? (1.075 * v * v) / a : (v * v) / brakingDivisor;
+  const braking = (v * v) / brakingDivisor;
   const computedFt = FT_PER_S_PER_MPH * v * t + braking;
   return { computedFt, designFt: roundUpTo(computedFt, DESIGN_ROUNDING_FT) };
 }
@@ -41,6 +44,15 @@ const TIME_GAP_S: Record<DesignVehicleClass, { left: number; right: number }> = 
   combination: { left: 11.5, right: 10.5 },
 };
 
+/**
+ * How "0.2 s per percent of grade" above a 3% approach is read. 'above-3-percent' counts only the part of the grade
+ * above 3%, so the gap grows from nothing at 3% with no jump; 'whole-grade' counts every percent once past 3%, the
+ * literal wording, which jumps by 0.6 s (left) at 3%. A road authority that reads it literally says so in its rule
+ * profile; the continuous reading is the default.
+ */
+export const approachGradeReadings = ['above-3-percent', 'whole-grade'] as const;
+export type ApproachGradeReading = (typeof approachGradeReadings)[number];
+
 export const intersectionSightDistanceInputSchema = z.object({
   speedMph: bounded(5, 100),
   turn: z.enum(['left', 'right']),
@@ -48,17 +60,15 @@ export const intersectionSightDistanceInputSchema = z.object({
   extraLanes: z.number().int().min(0).max(10).default(0),
   // + means the driveway rises toward the road (the car pulling out climbs).
   approachGradePercent: bounded(-50, 50).default(0),
-  gradeReading: z.enum(['whole-grade', 'above-3-percent']).default('whole-grade'),
+  gradeReading: z.enum(approachGradeReadings).default('above-3-percent'),
 });
 export type IntersectionSightDistanceInput = z.input<typeof intersectionSightDistanceInputSchema>;
 
 const GRADE_THRESHOLD_PERCENT = 3;
 
 /**
- * AASHTO intersection sight distance for a stop-controlled departure (1.47 V tg).
- * Approach grade: the adjustment applies only above 3%; "0.2 s per percent of grade" is read by default as
- * per percent of the WHOLE grade (a 5% approach adds 5 x 0.2 = 1.0 s on a left turn), which is the literal
- * wording and the larger gap. `gradeReading: 'above-3-percent'` counts only the part above 3% instead.
+ * AASHTO intersection sight distance for a stop-controlled departure (1.47 V tg). The approach-grade adjustment
+ * applies only above 3%, read as `gradeReading` says (see approachGradeReadings).
  */
 export function intersectionSightDistance(input: IntersectionSightDistanceInput): {
   timeGapS: number;

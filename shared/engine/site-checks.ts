@@ -45,7 +45,7 @@ function required(s: z.output<typeof sightInputSchema>, rules: RuleProfile, spee
       right: s.movements === 'all' ? stoppingSightDistance({ speedMph, gradePercent: -g }).designFt : null,
     };
   }
-  const common = { speedMph, vehicle: rules.sight.vehicle, approachGradePercent: approach };
+  const common = { speedMph, vehicle: rules.sight.vehicle, approachGradePercent: approach, gradeReading: rules.sight.gradeReading };
   const leftTurn = intersectionSightDistance({ ...common, turn: 'left', extraLanes: s.extraLanes }).designFt;
   const rightTurn = intersectionSightDistance({ ...common, turn: 'right' }).designFt;
   return s.movements === 'all' ? { left: leftTurn, right: leftTurn } : { left: rightTurn, right: null };

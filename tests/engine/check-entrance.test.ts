@@ -179,10 +179,21 @@ describe('sight distance in the check (AASHTO ISD table, Highway Engineering Han
     expect(findingOf(f, 'sight.right').status).toBe('not-checked');
   });
 
-  it('a landing falling 4% away from the road is a 4% climb out: +0.8 s on the left-turn gap (AASHTO, whole-grade reading)', () => {
+  it('a landing falling 4% away from the road is a 4% climb out: +0.2 s on the left-turn gap, the part above 3% (AASHTO)', () => {
     const f = checkEntrance({ profile: profileFromRuns([[20, -4], [40, 5]]), sight: { speedMph: 45, measuredLeftFt: 600 } }, rules).findings;
+    // 1.47 x 45 x 7.7 = 509.4 -> 510 ft.
+    expect(findingOf(f, 'sight.left').limit).toBe(510);
+  });
+
+  it('the rule profile\'s whole-grade reading reaches the full check: +0.8 s for the same 4% climb (AASHTO, literal wording)', () => {
+    const whole = ruleProfile({ sight: { basis: 'intersection', vehicle: 'passenger', gradeReading: 'whole-grade' } });
+    const f = checkEntrance({ profile: profileFromRuns([[20, -4], [40, 5]]), sight: { speedMph: 45, measuredLeftFt: 600 } }, whole).findings;
     // 1.47 x 45 x 8.3 = 549.0 -> 550 ft.
     expect(findingOf(f, 'sight.left').limit).toBe(550);
+  });
+
+  it('a rule profile without the reading takes the continuous one', () => {
+    expect(ruleProfileSchema.parse({ ...commonRuralTemplate, sight: { basis: 'intersection' } }).sight.gradeReading).toBe('above-3-percent');
   });
 
   it('stopping basis uses the SSD table instead (AASHTO, Highway Engineering Handbook Table 2.2)', () => {

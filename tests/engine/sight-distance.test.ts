@@ -19,8 +19,24 @@ describe('stopping sight distance (AASHTO, Highway Engineering Handbook Table 2.
     expect(stoppingSightDistance({ speedMph }).designFt).toBe(designFt);
   });
 
-  it('40 mph computes to 300.6 ft before rounding (REFERENCES.md)', () => {
-    expect(stoppingSightDistance({ speedMph: 40 }).computedFt).toBeCloseTo(300.6, 1);
+  it('40 mph: the grade form gives 300.3 ft, the rounded 1.075 constant 300.6 ft; both design to 305 ft (docs/sources.md)', () => {
+    // One form throughout: 1.47 V t + V^2 / (30 (a/32.2 + G)), with G = 0 on a level road.
+    const r = stoppingSightDistance({ speedMph: 40 });
+    expect(r.computedFt).toBeCloseTo(147 + 1600 / (30 * (11.2 / 32.2)), 9);
+    expect(Math.abs(r.computedFt - 300.6)).toBeLessThan(0.5);
+    expect(r.designFt).toBe(305);
+  });
+
+  it('is continuous through a level road: a hair of grade either way changes the distance by a hair (AASHTO grade formula)', () => {
+    for (const speedMph of [20, 40, 55, 70]) {
+      const level = stoppingSightDistance({ speedMph, gradePercent: 0 }).computedFt;
+      const up = stoppingSightDistance({ speedMph, gradePercent: 1e-6 }).computedFt;
+      const down = stoppingSightDistance({ speedMph, gradePercent: -1e-6 }).computedFt;
+      expect(Math.abs(up - level)).toBeLessThan(1e-3);
+      expect(Math.abs(down - level)).toBeLessThan(1e-3);
+      expect(down).toBeGreaterThan(level);
+      expect(up).toBeLessThan(level);
+    }
   });
 
   it('on a grade uses V^2 / (30 (a/32.2 + G)) (AASHTO grade formula)', () => {
@@ -70,10 +86,23 @@ describe('intersection sight distance (AASHTO, Highway Engineering Handbook Tabl
     expect(intersectionSightDistance({ speedMph: 55, turn: 'left', approachGradePercent: 3 }).timeGapS).toBe(7.5);
   });
 
-  it('above 3%, +0.2 s per percent left and +0.1 s right, read as the whole grade by default (AASHTO)', () => {
-    expect(intersectionSightDistance({ speedMph: 55, turn: 'left', approachGradePercent: 5 }).timeGapS).toBeCloseTo(8.5, 9);
-    expect(intersectionSightDistance({ speedMph: 55, turn: 'right', approachGradePercent: 5 }).timeGapS).toBeCloseTo(7.0, 9);
-    const partAbove = intersectionSightDistance({ speedMph: 55, turn: 'left', approachGradePercent: 5, gradeReading: 'above-3-percent' });
-    expect(partAbove.timeGapS).toBeCloseTo(7.9, 9);
+  it('above 3%, +0.2 s per percent left and +0.1 s right, counted on the part above 3% by default (AASHTO)', () => {
+    expect(intersectionSightDistance({ speedMph: 55, turn: 'left', approachGradePercent: 5 }).timeGapS).toBeCloseTo(7.9, 9);
+    expect(intersectionSightDistance({ speedMph: 55, turn: 'right', approachGradePercent: 5 }).timeGapS).toBeCloseTo(6.7, 9);
+  });
+
+  it('the whole-grade reading, a rule-profile choice, counts every percent once past 3% (AASHTO, literal wording)', () => {
+    const whole = (turn: 'left' | 'right') => intersectionSightDistance({ speedMph: 55, turn, approachGradePercent: 5, gradeReading: 'whole-grade' }).timeGapS;
+    expect(whole('left')).toBeCloseTo(8.5, 9);
+    expect(whole('right')).toBeCloseTo(7.0, 9);
+  });
+
+  it('the default reading has no jump at 3%: a hundredth of a percent more adds a few thousandths of a second', () => {
+    for (const turn of ['left', 'right'] as const) {
+      const at = intersectionSightDistance({ speedMph: 55, turn, approachGradePercent: 3 });
+      const past = intersectionSightDistance({ speedMph: 55, turn, approachGradePercent: 3.01 });
+      expect(past.timeGapS - at.timeGapS).toBeGreaterThan(0);
+      expect(past.timeGapS - at.timeGapS).toBeLessThanOrEqual(0.002 + 1e-12);
+    }
   });
 });

@@ -16,7 +16,7 @@ export const harlowRules: RuleProfile = {
   maxGradeChangePercent: 12,
   designVehicle: { name: 'Passenger car', wheelbaseFt: 11, frontOverhangFt: 3, rearOverhangFt: 5, clearanceIn: 5 },
   culvert: { minDiameterIn: 15, minCoverIn: 12, lengthIncrementFt: 2 },
-  sight: { basis: 'intersection', vehicle: 'passenger' },
+  sight: { basis: 'intersection', vehicle: 'passenger', gradeReading: 'above-3-percent' },
   geometry: {},
   asBuilt: { gradeTolerancePercent: 0.5, elevationToleranceFt: 0.1 },
   sources: { 'landing.maxGradePercent': 'Harlow Township road ordinance (invented for the demo)' },

@@ -38,6 +38,9 @@ export const profileGroups: { title: string; fields: ProfileField[] }[] = [
     { path: 'sight.basis', label: 'Sight distance required', choices: [['intersection', 'Intersection sight distance'], ['stopping', 'Stopping sight distance']] },
     { path: 'sight.designSpeedMph', label: 'Design speed where none is posted', unit: 'mph', optional: true },
     { path: 'sight.vehicle', label: 'Vehicle pulling out', choices: [['passenger', 'Passenger car'], ['single-unit', 'Single-unit truck'], ['combination', 'Combination truck']] },
+    { path: 'sight.gradeReading', label: 'Extra time for a driveway climbing to the road over 3%', choices: [
+      ['above-3-percent', 'Per percent above 3% (no jump at 3%)'], ['whole-grade', 'Per percent of the whole grade (jumps at 3%)'],
+    ] },
   ] },
   { title: 'Geometry', fields: [
     { path: 'geometry.minWidthFt', label: 'Narrowest entrance', unit: 'ft', optional: true },
