@@ -1,4 +1,4 @@
-import type { AsBuiltReadingResult, AsBuiltStatus, CutFillAtStation, PlaneSetting, ProfilePoint, RuleProfile, StakeResult } from '../engine';
+import type { AsBuiltReadingResult, AsBuiltStatus, CutFillAtStation, LaserWarp, PlaneSetting, ProfilePoint, RuleProfile, StakeResult } from '../engine';
 import type { RequestStatus } from '../workflow/statuses';
 import type { AsBuiltReadingInput } from './crew-inputs';
 
@@ -67,6 +67,8 @@ export interface CulvertSheet {
 export interface LaserSheet {
   first: PlaneSetting;
   second: PlaneSetting;
+  /** Set from stakes between the setups where the driveway's cross slope differs from the road's. */
+  warp: LaserWarp | null;
   receiverOffsetFt: number;
   landingLengthFt: number;
   stakes: (StakeResult & { offsetFt: number; distanceFt: number; rodReadingFt: number })[];

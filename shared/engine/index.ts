@@ -94,7 +94,7 @@ export {
   type ProposedProfile,
   type CutFillAtStation,
 } from './propose-profile';
-export { laserSetup, laserSetupInputSchema, type LaserSetupInput, type PlaneSetting, type StakeResult } from './laser';
+export { laserSetup, laserSetupInputSchema, laserStepAtChangeFt, type LaserSetupInput, type LaserWarp, type PlaneSetting, type StakeResult } from './laser';
 export {
   classifyAsBuiltReading,
   classifyAsBuiltReadingInputSchema,
@@ -106,4 +106,4 @@ export {
 } from './as-built';
 export { gradePercentToDegrees, breakOverAngleDeg, breakOverAngleInputSchema } from './angles';
 export { SAFETY_CAUTIONS } from './cautions';
-export { STATION_TOLERANCE_FT, sameStation, stationBefore, stationAtOrAfter, stationAfter, tooCloseToSurvey } from './station-tolerance';
+export { STATION_TOLERANCE_FT, SURVEY_ELEVATION_PRECISION_FT, sameStation, stationBefore, stationAtOrAfter, stationAfter, tooCloseToSurvey } from './station-tolerance';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { laserSetup } from '../../shared/engine';
+import { EngineInputError, laserSetup, laserStepAtChangeFt, type PlaneSetting } from '../../shared/engine';
 
 const base = {
   originElevationFt: 100,
@@ -48,8 +48,59 @@ describe('dual-slope laser setup for the apron', () => {
 
   it('starts the second setup at the landing end with the driveway grade', () => {
     const { secondSetup } = laserSetup(base);
-    expect(secondSetup).toMatchObject({ alongRoadPercent: 0, alongDrivewayPercent: 12, originDistanceFt: 20 });
+    expect(secondSetup).toMatchObject({ alongRoadPercent: 3, alongDrivewayPercent: 12, originDistanceFt: 20 });
     expect(secondSetup.originElevationFt).toBeCloseTo(99.2, 9);
     expect(secondSetup.description).toContain('12% rising away from the road');
   });
+
 });
+
+// Plane geometry (exact): z = z0 + gx x + gy (y - y0). Values meet within a thousandth of a foot, a tenth of
+// the survey's 0.01 ft precision (docs/sources.md, survey precision: common practice (no source)).
+const at = (plane: PlaneSetting, offsetFt: number, distanceFt: number) =>
+  plane.originElevationFt + (plane.alongRoadPercent / 100) * offsetFt + (plane.alongDrivewayPercent / 100) * (distanceFt - plane.originDistanceFt);
+
+describe('the two setups meet along the change line', () => {
+  it('values of both planes along the change line agree at every offset', () => {
+    for (const roadGradePercent of [-6, -2, 0, 3, 8]) {
+      const r = laserSetup({ ...base, roadGradePercent });
+      for (let offsetFt = -15; offsetFt <= 15; offsetFt += 2.5) {
+        expect(Math.abs(at(r, offsetFt, 20) - at(r.secondSetup, offsetFt, 20))).toBeLessThan(0.001);
+      }
+      expect(laserStepAtChangeFt(r, 15)).toBeLessThan(0.001);
+    }
+  });
+
+  it('stakes either side of the change line at the driveway edge show no step', () => {
+    const r = laserSetup({ ...base, stakes: [
+      { label: 'L-in', offsetFt: -8, distanceFt: 20, rodReadingFt: 5 },
+      { label: 'L-out', offsetFt: -8, distanceFt: 20.01, rodReadingFt: 5 },
+    ] });
+    const [inside, outside] = r.stakes;
+    expect([inside.setup, outside.setup]).toEqual(['first', 'second']);
+    // 0.01 ft further along at 12% rises 0.0012 ft; anything more is a step.
+    expect(Math.abs(outside.designElevationFt - inside.designElevationFt - 0.0012)).toBeLessThan(1e-9);
+  });
+
+  it('a driveway cross slope other than the road grade is reached through a warp, with stakes on it', () => {
+    const r = laserSetup({ ...base, drivewayCrossSlopePercent: 0, warpLengthFt: 10, stakes: [
+      { label: 'W0', offsetFt: 6, distanceFt: 20, rodReadingFt: 5 },
+      { label: 'W5', offsetFt: 6, distanceFt: 25, rodReadingFt: 5 },
+      { label: 'W10', offsetFt: 6, distanceFt: 30, rodReadingFt: 5 },
+    ] });
+    expect(r.warp).toMatchObject({ fromDistanceFt: 20, toDistanceFt: 30, fromCrossSlopePercent: 3, toCrossSlopePercent: 0 });
+    expect(r.secondSetup).toMatchObject({ alongRoadPercent: 0, originDistanceFt: 30 });
+    expect(r.stakes.map((s) => s.setup)).toEqual(['first', 'warp', 'second']);
+    // Cross slope halfway through the warp is 1.5%: 99.2 + 0.12 x 5 + 0.015 x 6.
+    expect(r.stakes[1].designElevationFt).toBeCloseTo(99.2 + 0.6 + 0.09, 9);
+    expect(at(r, 6, 20)).toBeCloseTo(99.2 + 0.18, 9);
+    expect(at(r.secondSetup, 6, 30)).toBeCloseTo(99.2 + 1.2, 9);
+    expect(laserStepAtChangeFt(r, 15)).toBeLessThan(0.001);
+  });
+
+  it('refuses a different driveway cross slope with no warp length, since the planes would step', () => {
+    expect(() => laserSetup({ ...base, drivewayCrossSlopePercent: 0 })).toThrow(EngineInputError);
+    expect(() => laserSetup({ ...base, drivewayCrossSlopePercent: 0 })).toThrow(/^warpLengthFt: /);
+  });
+});
+

@@ -105,6 +105,9 @@ describe('taking, planning and handing back', () => {
     expect(s.laser.first.description).toContain('rising away from the road');
     expect(s.laser.first).toMatchObject({ alongRoadPercent: -1.2, alongDrivewayPercent: 2.5 });
     expect(s.laser.second.alongDrivewayPercent).toBe(12);
+    // The second setup keeps the first's tilt across the driveway, so the two meet along the change line.
+    expect(s.laser.second.alongRoadPercent).toBe(-1.2);
+    expect(s.laser.warp).toBeNull();
     expect(s.laser.receiverOffsetFt).toBe(5);
     expect(s.laser.stakes.map((k: { instruction: string }) => k.instruction)).toEqual(['cut 0.38 ft', 'fill 0.30 ft', 'cut 0.90 ft']);
     expect(s.culvert).toMatchObject({ diameterIn: 18, lengthFt: 26, lengthIsMinimum: true, inletInvertFt: 97.4, outletInvertFt: 97.1 });

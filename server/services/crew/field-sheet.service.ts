@@ -23,9 +23,9 @@ const crewStages = new Set(['released', 'crew_assigned', 'under_construction', '
 function laserSheet(check: SavedCheck): LaserSheet | null {
   const { laser, laserInput } = check;
   if (!laser || !laserInput) return null;
-  const { stakes, secondSetup, ...first } = laser;
+  const { stakes, secondSetup, warp, ...first } = laser;
   return {
-    first, second: secondSetup, receiverOffsetFt: laserInput.receiverOffsetFt, landingLengthFt: laserInput.landingLengthFt,
+    first, second: secondSetup, warp: warp ?? null, receiverOffsetFt: laserInput.receiverOffsetFt, landingLengthFt: laserInput.landingLengthFt,
     stakes: stakes.map((s, i) => ({ ...s, offsetFt: laserInput.stakes[i]?.offsetFt ?? 0, distanceFt: laserInput.stakes[i]?.distanceFt ?? 0, rodReadingFt: laserInput.stakes[i]?.rodReadingFt ?? 0 })),
   };
 }

@@ -1,7 +1,7 @@
 import { and, desc, eq, isNotNull } from 'drizzle-orm';
 import { z } from 'zod';
 import {
-  culvertInputSchema, laserSetup, laserSetupInputSchema, normalizeProfile, profileInputSchema,
+  culvertInputSchema, laserSetup, laserSetupInputSchema, laserStepAtChangeFt, SURVEY_ELEVATION_PRECISION_FT, normalizeProfile, profileInputSchema,
   ruleProfileSchema, type CulvertInput, type EntranceReport, type ProfilePoint, type RuleProfile,
 } from '../../../shared/engine';
 import type { DbOrTx } from '../../db/client';
@@ -51,13 +51,21 @@ const pick = <S extends z.ZodType>(schema: S, value: unknown): z.output<S> | nul
   return parsed.success ? parsed.data : null;
 };
 
+// Wider than any single-lane entrance, so a step anywhere across the driveway shows.
+const STEP_CHECK_HALF_WIDTH_FT = 15;
+
 function laserOf(input: z.output<typeof laserSetupInputSchema> | null, stored: unknown) {
   if (!input) return null;
   const saved = stored as ReturnType<typeof laserSetup> | undefined;
-  // The stored result is the record; recompute only when it is missing, from the same stored input.
-  if (saved && typeof saved.alongRoadPercent === 'number' && saved.secondSetup && Array.isArray(saved.stakes)) return saved;
+  // The stored result is the record; recompute only when it is missing, or when it was saved by an engine whose
+  // second setup stepped away from the first at the change line (the crew must never be handed a step).
+  const usable = saved && typeof saved.alongRoadPercent === 'number' && saved.secondSetup && Array.isArray(saved.stakes);
+  if (usable && laserStepAtChangeFt(saved, STEP_CHECK_HALF_WIDTH_FT) < SURVEY_ELEVATION_PRECISION_FT) return saved;
+  // Inputs saved before warps existed carry the old default cross slope of 0, which no screen ever let anyone
+  // choose; without a warp length it is dropped so the driveway keeps the road's tilt and the setups meet.
+  const { drivewayCrossSlopePercent, ...rest } = input;
   try {
-    return laserSetup(input);
+    return laserSetup(input.warpLengthFt === undefined ? rest : { ...rest, drivewayCrossSlopePercent });
   } catch {
     return null;
   }

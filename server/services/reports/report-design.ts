@@ -43,6 +43,7 @@ export function designSections(doc: PDFKit.PDFDocument, check: GradeCheck) {
     heading(doc, 'Laser settings');
     paragraph(doc, `First setup (landing), origin ${ft(laser.originElevationFt)} at the road edge: ${laser.description} Steepest ${laser.steepestPercent.toFixed(2)}% toward ${laser.steepestBearingDeg.toFixed(0)} deg.`);
     const second = laser.secondSetup;
+    if (laser.warp) paragraph(doc, `${laser.warp.description} No laser plane carries it: it is built to the stakes.`);
     paragraph(doc, `Second setup (driveway), origin ${ft(second.originElevationFt)} at ${formatStation(second.originDistanceFt)}: ${second.description} Steepest ${second.steepestPercent.toFixed(2)}%.`);
     if (laser.stakes.length > 0) {
       drawTable(doc, [{ title: 'Stake', width: 120 }, { title: 'Setup', width: 70 }, { title: 'Design elevation', width: 110, align: 'right' }, { title: 'Instruction', width: 120 }],

@@ -25,8 +25,9 @@ export function SheetLaser({ laser }: { laser: LaserSheet }) {
     <div className="space-y-3 print:space-y-1.5">
       <div className="grid gap-3 sm:grid-cols-2 print:grid-cols-2 print:gap-1.5">
         <Setup title="Setup 1: landing" plane={laser.first} span={`road edge to ${station(laser.landingLengthFt)}`} />
-        <Setup title="Setup 2: driveway" plane={laser.second} span={`from ${station(laser.landingLengthFt)} on`} />
+        <Setup title="Setup 2: driveway" plane={laser.second} span={`from ${station(laser.second.originDistanceFt)} on`} />
       </div>
+      {laser.warp && <p><strong>Warp:</strong> {laser.warp.description} No laser plane carries it: build it to the stakes.</p>}
       <p><strong>Receiver offset:</strong> on grade reads <strong>{ft(laser.receiverOffsetFt)}</strong> on the rod. A shorter reading means cut, a longer one fill.</p>
       {laser.stakes.length > 0 && (
         // On a phone the seven columns scroll sideways rather than crushing the numbers.
@@ -42,7 +43,7 @@ export function SheetLaser({ laser }: { laser: LaserSheet }) {
                 <td className="py-1 pr-2 font-semibold">{s.label}</td>
                 <td className="pr-2">{station(s.distanceFt)}</td>
                 <td className="pr-2">{s.offsetFt === 0 ? 'centreline' : `${Math.abs(s.offsetFt)} ft ${s.offsetFt < 0 ? 'left' : 'right'}`}</td>
-                <td className="pr-2">{s.setup === 'first' ? '1' : '2'}</td>
+                <td className="pr-2">{s.setup === 'first' ? '1' : s.setup === 'warp' ? 'warp' : '2'}</td>
                 <td className="pr-2">{ft(s.rodReadingFt)}</td>
                 <td className="pr-2">{ft(s.designElevationFt)}</td>
                 <td className="font-bold">{s.instruction}</td>
