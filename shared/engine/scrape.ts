@@ -1,10 +1,13 @@
 import { z } from 'zod';
 import { parseInput } from './errors';
-import { bounded } from './numbers';
+import { bounded, snap } from './numbers';
+import { STATION_TOLERANCE_FT } from './station-tolerance';
 import { profileInputSchema, normalizeParsedProfile, type ProfilePoint } from './profile';
 import { designVehicleSchema, type DesignVehicle } from './rule-profile';
+import { vertexEvents } from './scrape-events';
+import { clearanceAt, type Ground, newCursor, type Position, type ScrapeLocation } from './scrape-position';
 
-export type ScrapeLocation = 'between-axles' | 'front-overhang' | 'rear-overhang';
+export type { ScrapeLocation } from './scrape-position';
 export type DriveDirection = 'into-property' | 'out-of-property';
 
 export const scrapeCheckInputSchema = z.object({
@@ -22,99 +25,112 @@ export interface ScrapeResult {
   passes: boolean;
   /** Vehicle positions tried; 0 when the profile is shorter than the wheelbase. */
   positionsChecked: number;
-}
-
-interface Worst {
-  clearanceFt: number;
-  x: number;
-  where: ScrapeLocation;
-  positions: number;
+  /** Set when the survey ends before the whole vehicle has crossed its last grade break, either way. */
+  partialCoverage?: { breakStationFt: number; surveyedPastFt: number; neededFt: number };
 }
 
 /**
- * Drives the vehicle forward along increasing x. Wheels are points on the ground line; the body is the rigid
- * chord between the two contact points, raised by the clearance, so ground above the chord eats clearance.
- * Only ground vertices and the two overhang ends can be the highest point under a straight body over a
- * piecewise-linear ground, so only those are measured.
+ * Driving in, the rear overhang clears the last break only once the front wheel is a wheelbase and a rear overhang
+ * past it; driving out, the front overhang sweeps it only if it starts that far back. Short of the longer of the
+ * two, part of the crossing was never tried.
  */
-function drive(xs: Float64Array, ys: Float64Array, v: DesignVehicle, stepFt: number): Worst {
-  const n = xs.length;
-  const w = v.wheelbaseFt;
-  const w2 = w * w;
-  const clearanceFt = v.clearanceIn / 12;
-  const worst: Worst = { clearanceFt: Infinity, x: xs[0], where: 'between-axles', positions: 0 };
-  let rearSeg = 0;
-  let frontSeg = 0;
-  let lowVertex = 0;
-  const end = xs[n - 1];
-  for (let k = 0; ; k++) {
-    const rx = xs[0] + k * stepFt;
-    if (rx >= end) break;
-    while (rearSeg < n - 2 && xs[rearSeg + 1] <= rx) rearSeg++;
-    const ry = ys[rearSeg] + ((rx - xs[rearSeg]) / (xs[rearSeg + 1] - xs[rearSeg])) * (ys[rearSeg + 1] - ys[rearSeg]);
-    if (frontSeg < rearSeg) frontSeg = rearSeg;
-    // First point along the ground at chord length w from the rear contact.
-    while (frontSeg < n - 1 && (xs[frontSeg + 1] - rx) ** 2 + (ys[frontSeg + 1] - ry) ** 2 < w2) frontSeg++;
-    if (frontSeg >= n - 1) break;
-    const ax = frontSeg === rearSeg ? rx : xs[frontSeg];
-    const ay = frontSeg === rearSeg ? ry : ys[frontSeg];
-    const dx = xs[frontSeg + 1] - ax;
-    const dy = ys[frontSeg + 1] - ay;
-    const ox = ax - rx;
-    const oy = ay - ry;
-    const qa = dx * dx + dy * dy;
-    const qb = 2 * (ox * dx + oy * dy);
-    const qc = ox * ox + oy * oy - w2;
-    const t = (-qb + Math.sqrt(qb * qb - 4 * qa * qc)) / (2 * qa);
-    const ux = (ox + t * dx) / w;
-    const uy = (oy + t * dy) / w;
-    worst.positions++;
-    const rearEnd = -v.rearOverhangFt;
-    const frontEnd = w + v.frontOverhangFt;
-    // Along the chord a = (P - rear) . u; height above it h = (P - rear) . (-uy, ux). Written out inline
-    // because this loop runs for every step in both directions.
-    while (lowVertex < n - 1 && (xs[lowVertex + 1] - rx) * ux + (ys[lowVertex + 1] - ry) * uy < rearEnd) lowVertex++;
-    let prevA = NaN;
-    let prevH = NaN;
-    for (let i = lowVertex; i < n; i++) {
-      const px = xs[i] - rx;
-      const py = ys[i] - ry;
-      const a = px * ux + py * uy;
-      const h = py * ux - px * uy;
-      let hAt = h;
-      let aAt = a;
-      let xAt = xs[i];
-      if (a < rearEnd) {
-        prevA = a;
-        prevH = h;
-        continue;
-      }
-      if (i > lowVertex && prevA < rearEnd) {
-        // The rear overhang's end lies between the previous vertex and this one.
-        const f = (rearEnd - prevA) / (a - prevA);
-        const hTip = prevH + f * (h - prevH);
-        if (clearanceFt - hTip < worst.clearanceFt) {
-          worst.clearanceFt = clearanceFt - hTip;
-          worst.x = xs[i - 1] + f * (xs[i] - xs[i - 1]);
-          worst.where = 'rear-overhang';
-        }
-      }
-      if (a > frontEnd) {
-        if (i === lowVertex) break;
-        const f = (frontEnd - prevA) / (a - prevA);
-        hAt = prevH + f * (h - prevH);
-        aAt = frontEnd;
-        xAt = xs[i - 1] + f * (xs[i] - xs[i - 1]);
-      }
-      if (clearanceFt - hAt < worst.clearanceFt) {
-        worst.clearanceFt = clearanceFt - hAt;
-        worst.x = xAt;
-        worst.where = aAt < 0 ? 'rear-overhang' : aAt > w ? 'front-overhang' : 'between-axles';
-      }
-      if (a > frontEnd) break;
-      prevA = a;
-      prevH = h;
+function coverageAtEnd(points: readonly ProfilePoint[], v: DesignVehicle): ScrapeResult['partialCoverage'] {
+  const neededFt = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
+  const end = points[points.length - 1].stationFt;
+  for (let i = points.length - 2; i >= 1; i--) {
+    const [a, b, c] = [points[i - 1], points[i], points[i + 1]];
+    const change = (c.elevationFt - b.elevationFt) / (c.stationFt - b.stationFt) - (b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt);
+    if (Math.abs(snap(change)) === 0) continue;
+    const surveyedPastFt = end - b.stationFt;
+    return surveyedPastFt < neededFt - STATION_TOLERANCE_FT / 2 ? { breakStationFt: b.stationFt, surveyedPastFt, neededFt } : undefined;
+  }
+  return undefined;
+}
+
+interface Worst extends Position {
+  positions: number;
+}
+
+// Past this step a stretch between two samples could hold two separate low points and a local search finds only
+// one; with the vertex events and the search, the answer at this step no longer depends on the step asked for.
+const MAX_STEP_FT = 1;
+// Low points refined by a local search, lowest first; further ones sit well clear of the worst.
+const REFINED_LOW_POINTS = 16;
+const SEARCH_ROUNDS = 30;
+const GOLDEN = (Math.sqrt(5) - 1) / 2;
+
+/** Golden-section search for the least clearance between two sample positions (smooth in between). */
+function searchBetween(g: Ground, v: DesignVehicle, lo: number, hi: number): Position | null {
+  let a = lo;
+  let b = hi;
+  const value = (x: number) => clearanceAt(g, v, x)?.clearanceFt ?? Infinity;
+  let c = b - GOLDEN * (b - a);
+  let d = a + GOLDEN * (b - a);
+  let fc = value(c);
+  let fd = value(d);
+  for (let k = 0; k < SEARCH_ROUNDS && b - a > 1e-6; k++) {
+    if (fc <= fd) {
+      b = d; d = c; fd = fc; c = b - GOLDEN * (b - a); fc = value(c);
+    } else {
+      a = c; c = d; fc = fd; d = a + GOLDEN * (b - a); fd = value(d);
     }
+  }
+  return clearanceAt(g, v, fc <= fd ? c : d);
+}
+
+/** The grid and the vertex events merged in increasing order; only the events need sorting. */
+function samplePositions(g: Ground, v: DesignVehicle, stepFt: number): Float64Array {
+  const start = g.xs[0];
+  const end = g.xs[g.xs.length - 1];
+  const step = Math.min(stepFt, MAX_STEP_FT);
+  const events = vertexEvents(g, v);
+  const grid = Math.ceil((end - start) / step);
+  const all = new Float64Array(grid + events.length);
+  let m = 0;
+  let e = 0;
+  while (e < events.length && events[e] < start) e++;
+  for (let k = 0; k < grid; k++) {
+    const x = start + k * step;
+    while (e < events.length && events[e] < x) all[m++] = events[e++];
+    all[m++] = x;
+  }
+  while (e < events.length && events[e] < end) all[m++] = events[e++];
+  return all.subarray(0, m);
+}
+
+/** Drives the vehicle forward along increasing x over the grid, every vertex event, and a search near each low. */
+function drive(g: Ground, v: DesignVehicle, stepFt: number): Worst {
+  const candidates = samplePositions(g, v, stepFt);
+  const at = new Float64Array(candidates.length);
+  const clear = new Float64Array(candidates.length);
+  const worst: Worst = { clearanceFt: Infinity, x: g.xs[0], where: 'between-axles', ux: 1, positions: 0 };
+  const keep = (p: Position | null) => {
+    if (p && p.clearanceFt < worst.clearanceFt) {
+      worst.clearanceFt = p.clearanceFt;
+      worst.x = p.x;
+      worst.where = p.where;
+    }
+  };
+  const scratch: Position = { clearanceFt: 0, x: 0, where: 'between-axles', ux: 1 };
+  const cursor = newCursor();
+  let m = 0;
+  for (const x of candidates) {
+    if (m > 0 && x - at[m - 1] < 1e-9) continue;
+    const p = clearanceAt(g, v, x, scratch, cursor);
+    if (!p) break;
+    at[m] = x;
+    clear[m++] = p.clearanceFt;
+    keep(p);
+  }
+  worst.positions = m;
+  const lows: number[] = [];
+  for (let i = 0; i < m; i++) {
+    if ((i === 0 || clear[i] <= clear[i - 1]) && (i === m - 1 || clear[i] <= clear[i + 1])) lows.push(i);
+  }
+  lows.sort((i, j) => clear[i] - clear[j]);
+  for (const i of lows.slice(0, REFINED_LOW_POINTS)) {
+    if (i > 0) keep(searchBetween(g, v, at[i - 1], at[i]));
+    if (i < m - 1) keep(searchBetween(g, v, at[i], at[i + 1]));
   }
   return worst;
 }
@@ -133,8 +149,8 @@ export function scrapeCheckPoints(points: readonly ProfilePoint[], vehicle: Desi
     mxs[i] = last - points[n - 1 - i].stationFt;
     mys[i] = points[n - 1 - i].elevationFt;
   }
-  const into = drive(xs, ys, vehicle, stepFt);
-  const out = drive(mxs, mys, vehicle, stepFt);
+  const into = drive({ xs, ys }, vehicle, stepFt);
+  const out = drive({ xs: mxs, ys: mys }, vehicle, stepFt);
   const positions = into.positions + out.positions;
   if (positions === 0) {
     return {
@@ -146,6 +162,7 @@ export function scrapeCheckPoints(points: readonly ProfilePoint[], vehicle: Desi
       positionsChecked: 0,
     };
   }
+  const partialCoverage = coverageAtEnd(points, vehicle);
   const useOut = out.clearanceFt < into.clearanceFt;
   const worst = useOut ? out : into;
   const minClearanceIn = Math.round(worst.clearanceFt * 12 * 1e9) / 1e9;
@@ -156,6 +173,7 @@ export function scrapeCheckPoints(points: readonly ProfilePoint[], vehicle: Desi
     direction: useOut ? 'out-of-property' : 'into-property',
     passes: minClearanceIn >= 0,
     positionsChecked: positions,
+    ...(partialCoverage ? { partialCoverage } : {}),
   };
 }
 
