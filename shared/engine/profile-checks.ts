@@ -1,7 +1,9 @@
 import { atLeast, atMost, advisory, type Finding, notChecked } from './findings';
 import { gradeBreaks, type ProfilePoint, type ProfileSegment, segmentGrades } from './profile';
 import type { RuleProfile } from './rule-profile';
+import { roundTo } from './numbers';
 import { scrapeCheckPoints, type ScrapeResult } from './scrape';
+import { formatStation } from './station';
 import { stationAfter, stationAtOrAfter, stationBefore } from './station-tolerance';
 
 export interface ProfileCheck {
@@ -76,11 +78,20 @@ function gradeFindings(entrance: ProfileSegment[], beyond: ProfileSegment[], rul
   return findings;
 }
 
-function scrapeFinding(scrape: ScrapeResult, rules: RuleProfile): Finding {
-  const base = { ruleId: 'scrape.clearance', label: `Clearance under a ${rules.designVehicle.name.toLowerCase()}`, unit: 'in' };
-  if (scrape.positionsChecked === 0) return notChecked(base, 'the profile is shorter than the wheelbase');
+function scrapeFindings(scrape: ScrapeResult, rules: RuleProfile): Finding[] {
+  const vehicle = rules.designVehicle.name.toLowerCase();
+  const base = { ruleId: 'scrape.clearance', label: `Clearance under a ${vehicle}`, unit: 'in' };
+  if (scrape.positionsChecked === 0) return [notChecked(base, 'the profile is shorter than the wheelbase')];
   const note = `${scrape.where.replace('-', ' ')}, driving ${scrape.direction.replace(/-/g, ' ')}`;
-  return atLeast({ ...base, stationFt: scrape.atStationFt, note }, scrape.minClearanceIn, 0);
+  const findings = [atLeast({ ...base, stationFt: scrape.atStationFt, note }, scrape.minClearanceIn, 0)];
+  const partial = scrape.partialCoverage;
+  if (partial) {
+    const why = `the survey ends ${roundTo(partial.surveyedPastFt, 2)} ft past the grade break at station ${formatStation(partial.breakStationFt)}; ` +
+      `a ${vehicle} needs ${roundTo(partial.neededFt, 2)} ft to cross it fully, so the clearance there was checked only in part: survey further in`;
+    const coverage = { ruleId: 'scrape.coverage', label: 'Scrape check past the last grade break', unit: 'ft', stationFt: partial.breakStationFt };
+    findings.push(advisory(coverage, partial.surveyedPastFt, partial.neededFt, why));
+  }
+  return findings;
 }
 
 /** Landing, grade, grade-break and scrape findings for a normalised profile. */
@@ -102,7 +113,7 @@ export function checkProfileRules(
   const findings = [
     ...landingFindings(landing, rules, surveyedFt),
     ...gradeFindings(entrance, beyond, rules),
-    scrapeFinding(scrape, rules),
+    ...scrapeFindings(scrape, rules),
   ];
   return { segments, findings, scrape };
 }

@@ -197,7 +197,7 @@ describe('sight distance in the check (AASHTO ISD table, Highway Engineering Han
   });
 
   it('stopping basis uses the SSD table instead (AASHTO, Highway Engineering Handbook Table 2.2)', () => {
-    const ssd = ruleProfile({ sight: { basis: 'stopping', vehicle: 'passenger', designSpeedMph: 40 } });
+    const ssd = ruleProfile({ sight: { basis: 'stopping', vehicle: 'passenger', gradeReading: 'above-3-percent', designSpeedMph: 40 } });
     const f = checkEntrance({ profile: flat, sight: { measuredLeftFt: 305, measuredRightFt: 300 } }, ssd).findings;
     expect(findingOf(f, 'sight.left')).toMatchObject({ status: 'pass', limit: 305 });
     expect(findingOf(f, 'sight.right').status).toBe('fail');
