@@ -2,6 +2,7 @@ import { atLeast, atMost, advisory, type Finding, notChecked } from './findings'
 import { gradeBreaks, type ProfilePoint, type ProfileSegment, segmentGrades } from './profile';
 import type { RuleProfile } from './rule-profile';
 import { roundTo } from './numbers';
+import { pondingFinding } from './ponding';
 import { scrapeCheckPoints, type ScrapeResult } from './scrape';
 import { formatStation } from './station';
 import { stationAfter, stationAtOrAfter, stationBefore } from './station-tolerance';
@@ -113,6 +114,7 @@ export function checkProfileRules(
   const findings = [
     ...landingFindings(landing, rules, surveyedFt),
     ...gradeFindings(entrance, beyond, rules),
+    pondingFinding(points, roadEdgeStationFt, rules.minDrainageGradePercent),
     ...scrapeFindings(scrape, rules),
   ];
   return { segments, findings, scrape };

@@ -17,6 +17,7 @@ function failureWords(f: Finding): string {
   if (f.ruleId === 'scrape.clearance') {
     return `a car would scrape${where} (it is ${number(-f.measured, f.unit)} short of clearing)`;
   }
+  if (f.ruleId === 'drainage.low-point') return `water would stand${where} (${number(f.measured, f.unit)} deep)`;
   const bound = f.limitKind === 'at-least' ? `at least ${number(f.limit, f.unit)} is needed` : `at most ${number(f.limit, f.unit)} is allowed`;
   return `${f.label.toLowerCase()} is ${number(f.measured, f.unit)}${where} where ${bound}`;
 }
