@@ -1,7 +1,7 @@
 import { atLeast, atMost, advisory, type Finding, notChecked } from './findings';
 import { gradeBreaks, type ProfilePoint, type ProfileSegment, segmentGrades } from './profile';
 import type { RuleProfile } from './rule-profile';
-import { roundTo } from './numbers';
+import { roundTo, snap } from './numbers';
 import { pondingFinding } from './ponding';
 import { scrapeCheckPoints, type ScrapeResult } from './scrape';
 import { formatStation } from './station';
@@ -90,7 +90,8 @@ function scrapeFindings(scrape: ScrapeResult, rules: RuleProfile): Finding[] {
     const why = `the survey ends ${roundTo(partial.surveyedPastFt, 2)} ft past the grade break at station ${formatStation(partial.breakStationFt)}; ` +
       `a ${vehicle} needs ${roundTo(partial.neededFt, 2)} ft to cross it fully, so the clearance there was checked only in part: survey further in`;
     const coverage = { ruleId: 'scrape.coverage', label: 'Scrape check past the last grade break', unit: 'ft', stationFt: partial.breakStationFt };
-    findings.push(advisory(coverage, partial.surveyedPastFt, partial.neededFt, why));
+    // The distance past the break is a minimum, so what is missing shows as negative room to spare.
+    findings.push({ ...advisory(coverage, partial.surveyedPastFt, partial.neededFt, why), limitKind: 'at-least', margin: snap(partial.surveyedPastFt - partial.neededFt) });
   }
   return findings;
 }

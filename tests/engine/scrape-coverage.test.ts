@@ -12,6 +12,7 @@ describe('a survey that ends before the car has crossed the last break says the 
     const coverage = r.findings.find((f) => f.ruleId === 'scrape.coverage');
     expect(coverage).toMatchObject({ status: 'advisory', stationFt: 20, unit: 'ft', limit: 16 });
     expect(coverage?.measured).toBeCloseTo(10, 9);
+    expect(coverage?.margin).toBeCloseTo(-6, 9);
     expect(coverage?.label).toBe('Scrape check past the last grade break');
     expect(coverage?.note).toMatch(/checked only in part/);
     expect(r.summary.text).toContain('1 item needs a closer look');
