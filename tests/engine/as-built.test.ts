@@ -2,6 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { checkAsBuilt, classifyAsBuiltReading, commonRuralTemplate, EngineInputError } from '../../shared/engine';
 import { ruleProfile } from './fixtures';
 
+// Limits from the common rural template (common practice (no source), docs/sources.md "Grades and vehicles"); an
+// as-built tolerance is whatever the road authority states, so the ones here are test values, not published ones.
 describe('as-built reading classification', () => {
   it('exactly at the limit passes', () => {
     expect(classifyAsBuiltReading({ measured: 17, limit: 17, tolerance: 0.5, kind: 'max' }).status).toBe('pass');

@@ -38,7 +38,7 @@ describe('landing and maximum grade: 4% for 20 ft, 17% beyond (common practice (
   });
 });
 
-describe('limits from published local codes (REFERENCES.md, Grades and vehicles)', () => {
+describe('limits from published local codes (docs/sources.md, "Grades and vehicles")', () => {
   // A Maryland county code: first 20 ft at no more than 10%, 15% beyond. That code sets no break limit
   // here, so the schema's loosest value is used to keep it from binding.
   const maryland = ruleProfile({ id: 'md-county', landing: { lengthFt: 20, minGradePercent: -10, maxGradePercent: 10 }, maxGradePercent: 15, maxGradeChangePercent: 50 });
@@ -122,7 +122,7 @@ describe('the report', () => {
 });
 
 describe('culvert in the check', () => {
-  // 12 in minimum diameter (New York 17 NYCRR 125.8(d)) and 12 in of cover (REFERENCES.md, local codes).
+  // 12 in minimum diameter (New York 17 NYCRR 125.8(d)) and 12 in of cover (docs/sources.md, "Culvert minimums in local codes").
   const rules = ruleProfile({ culvert: { minDiameterIn: 12, minCoverIn: 12, lengthIncrementFt: 2, maxHeadwaterToDiameter: 1.2 } });
   const base = { diameterIn: 18, manningN: 0.012, inletInvertFt: 95.5, outletInvertFt: 95.2, surfaceElevationFt: 98, topWidthFt: 20, sideSlopeHPerV: 2, lengthFt: 30 };
   const run = (culvert: Record<string, unknown>) => checkEntrance({ profile: profileFromRuns([[20, 2], [40, 6]]), culvert: { ...base, ...culvert } }, rules).findings;

@@ -41,6 +41,7 @@ describe('cross-section areas from top width and side slopes (trapezoid geometry
   });
 });
 
+// Volumes by the average end area and prismoidal formulas (docs/sources.md, "Earthwork").
 describe('earthwork from existing and design profiles', () => {
   const template = { topWidthFt: 10, cutSlopeHPerV: 2, fillSlopeHPerV: 2 };
 

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { EngineInputError, inletControlHeadwater, inletTypes } from '../../shared/engine';
 
 describe('inlet-control headwater (FHWA HDS-5 3rd ed. 2012, Appendix A Table A.1)', () => {
-  // Computed from these coefficients (not a published example): REFERENCES.md gives 4.621, 1.515 and 2.27.
+  // Computed from these coefficients (not a published example): docs/sources.md ("Culvert inlet control") gives 4.621, 1.515 and 2.27.
   it('D 1.5 ft, Q 10 cfs, S 0.01, concrete square edge with headwall: Q/(A D^0.5) 4.621, HW/D 1.515, HW 2.27 ft', () => {
     const r = inletControlHeadwater({ inlet: 'concrete-square-headwall', diameterFt: 1.5, flowCfs: 10, slopeFtPerFt: 0.01 });
     // 4.6204 here; the reference's 4.621 carries its own rounding, so compare to two places.

@@ -19,7 +19,7 @@ describe('dual-slope laser setup for the apron', () => {
     expect(r.description).toContain('4% falling away from the road');
   });
 
-  it('steepest slope is sqrt(gx^2 + gy^2) (DESIGN.md, Laser and stakes)', () => {
+  it('steepest slope is sqrt(gx^2 + gy^2) (docs/sources.md, "Plane and profile geometry")', () => {
     expect(laserSetup(base).steepestPercent).toBeCloseTo(5, 12);
   });
 
@@ -56,7 +56,7 @@ describe('dual-slope laser setup for the apron', () => {
 });
 
 // Plane geometry (exact): z = z0 + gx x + gy (y - y0). Values meet within a thousandth of a foot, a tenth of
-// the survey's 0.01 ft precision (docs/sources.md, survey precision: common practice (no source)).
+// the survey's 0.01 ft precision (docs/sources.md, "Survey precision": common practice (no source)).
 const at = (plane: PlaneSetting, offsetFt: number, distanceFt: number) =>
   plane.originElevationFt + (plane.alongRoadPercent / 100) * offsetFt + (plane.alongDrivewayPercent / 100) * (distanceFt - plane.originDistanceFt);
 

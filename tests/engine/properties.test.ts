@@ -38,6 +38,8 @@ function allFinite(value: unknown): boolean {
   return true;
 }
 
+// Properties of the engine, not published values: random grounds under random limits around the common rural
+// template (common practice (no source), docs/sources.md "Grades and vehicles").
 describe('properties', () => {
   it('a steeper profile never passes a rule that a gentler one failed', () => {
     fc.assert(

@@ -5,6 +5,8 @@ import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 const profileFindings = (profile: { stationFt: number; elevationFt: number }[], rules = commonRuralTemplate) =>
   checkEntrance({ profile }, rules).findings.filter((f) => /^(landing|grade|scrape)\./.test(f.ruleId));
 
+// Limits are the common rural template (common practice (no source), docs/sources.md "Grades and vehicles"); every
+// proposal is judged by checkEntrance itself, the scrape by the geometry in "Vertical transitions".
 describe('least-earth proposal (linear programme, yalps)', () => {
   it('leaves a ground profile that already complies untouched and moves no earth', () => {
     const existing = profileFromRuns([[10, 2], [10, 2], [20, 6], [20, 8], [20, 8]]);

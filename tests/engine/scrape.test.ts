@@ -10,14 +10,14 @@ const singleBreak = (g1: number, g2: number) => [
   { stationFt: 100, elevationFt: 100 + 0.5 * g2 },
 ];
 
-describe('percent grade to angle: atan(g/100) (REFERENCES.md, Grades and vehicles)', () => {
+describe('percent grade to angle: atan(g/100) (docs/sources.md, "Grades and vehicles")', () => {
   it.each([[5, 2.862], [8, 4.574], [10, 5.711], [12, 6.843], [15, 8.531], [20, 11.31]])('%i%% = %f deg', (g, deg) => {
     expect(gradePercentToDegrees(g)).toBeCloseTo(deg, 3);
   });
 });
 
 describe('scrape check', () => {
-  it.each([2, 4, 6, 8, 10])('a single %i%% crest loses A*W/4 at mid-wheelbase (DESIGN.md cross-check)', (a) => {
+  it.each([2, 4, 6, 8, 10])('a single %i%% crest loses A*W/4 at mid-wheelbase (docs/sources.md, "Vertical transitions")', (a) => {
     const r = scrapeCheck({ profile: singleBreak(a / 2, -a / 2), vehicle });
     const lossIn = ((a / 100) * 11 * 12) / 4;
     // The small-angle rule and the exact chord agree to well under a hundredth of an inch at these grades.

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { EngineInputError, intersectionSightDistance, stoppingSightDistance } from '../../shared/engine';
 
 // AASHTO Green Book values as reproduced in the Highway Engineering Handbook Table 2.2 and the TxDOT
-// Roadway Design Manual 4.11.1 (REFERENCES.md, "Sight distance").
+// Roadway Design Manual 4.11.1 (docs/sources.md, "Sight distance").
 const SSD_LEVEL_FT: [number, number][] = [
   [20, 115], [25, 155], [30, 200], [35, 250], [40, 305], [45, 360],
   [50, 425], [55, 495], [60, 570], [65, 645], [70, 730],

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { checkEntrance, commonRuralTemplate, displayLength, displaySmallLength, SAFETY_CAUTIONS } from '../../shared/engine';
 import { profileFromRuns } from './fixtures';
 
+// 1 ft = 0.3048 m and 1 in = 25.4 mm exactly: the international yard and pound agreement (1959), from memory.
 describe('metric display', () => {
   it('converts by the exact definitions 1 ft = 0.3048 m and 1 in = 25.4 mm', () => {
     expect(displayLength(100, 'metric')).toEqual({ value: 30.48, unit: 'm' });
@@ -10,7 +11,7 @@ describe('metric display', () => {
   });
 });
 
-describe('cautions on the report (DESIGN.md, Cautions the product shows)', () => {
+describe('cautions on the report (docs/sources.md, "Product rules": our own, no published source)', () => {
   it('every check report carries the utility, trench, traffic and review reminders', () => {
     const r = checkEntrance({ profile: profileFromRuns([[20, 2], [30, 6]]) }, commonRuralTemplate);
     expect(r.cautions).toBe(SAFETY_CAUTIONS);
