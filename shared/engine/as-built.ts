@@ -62,8 +62,8 @@ interface GradeAt {
 
 /**
  * Each finished-grade reading checked against the rule profile with its as-built tolerance: the landing limits or
- * the maximum grade by station, the drainage minimum beyond the landing, and the change between successive grades
- * (located at the later reading) against the grade-change limit.
+ * the maximum grade by station, the drainage minimum beyond the landing, and the change of grade at each elevation
+ * shot between two others against the grade-change limit.
  */
 export function checkAsBuilt(input: CheckAsBuiltInput) {
   const p = parseInput(checkAsBuiltInputSchema, input);
@@ -101,9 +101,12 @@ export function checkAsBuilt(input: CheckAsBuiltInput) {
   }
   grades.sort((a, b) => a.stationFt - b.stationFt);
   grades.forEach(gradeResult);
-  for (let i = 1; i < grades.length; i++) {
-    const change = Math.abs(grades[i].grade - grades[i - 1].grade);
-    results.push(classify(grades[i].stationFt, 'grade.max-change', rules.maxGradeChangePercent, 'max', change));
+  // A break is where two grades meet at one shot, so only the elevation shots show one; two digital-level
+  // readings taken apart say nothing about how the grade turned between them.
+  for (let i = 1; i < shots.length - 1; i++) {
+    const before = (shots[i].elevationFt - shots[i - 1].elevationFt) / (shots[i].stationFt - shots[i - 1].stationFt);
+    const after = (shots[i + 1].elevationFt - shots[i].elevationFt) / (shots[i + 1].stationFt - shots[i].stationFt);
+    results.push(classify(shots[i].stationFt, 'grade.max-change', rules.maxGradeChangePercent, 'max', Math.abs(after - before) * 100));
   }
   if (p.design) {
     const design = normalizeParsedProfile(p.design, 'design');

@@ -53,7 +53,8 @@ describe('saving a grade check', () => {
 
     const twice = surveyInputs({ profile: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 0, elevationFt: 101 }, { stationFt: 20, elevationFt: 101 }] });
     const conflict = await save(request.id, { ruleProfileVersionId: marrow, inputs: twice }).expect(400);
-    expect(conflict.body.error.fields).toHaveProperty(['inputs.profile']);
+    // The repeated shot, the second one typed at 0+00, is the box named.
+    expect(conflict.body.error.fields).toHaveProperty(['inputs.profile.1.stationFt']);
 
     await save(request.id, { ruleProfileVersionId: '00000000-0000-4000-8000-000000000000', inputs: surveyInputs() }).expect(400)
       .then((r) => expect(r.body.error.fields).toHaveProperty(['ruleProfileVersionId']));
