@@ -4,11 +4,11 @@ import session from 'express-session';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import { pinoHttp } from 'pino-http';
 import { authRouter } from './auth/auth.routes';
 import { configurePassport } from './auth/passport';
 import type { AppContext } from './context';
 import { AppError, notFound } from './lib/errors';
+import { httpLogger } from './lib/http-logger';
 import { errorHandler } from './middleware/error-handler';
 import { registerRoutes } from './routes';
 
@@ -48,7 +48,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
       },
     },
   }));
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') && !req.url?.startsWith('/auth') } }));
+  app.use(httpLogger(logger));
   app.use('/api', requireJsonWrites);
   app.use(express.json({ limit: '1mb' }));
 
