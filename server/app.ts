@@ -1,6 +1,4 @@
-import connectPgSimple from 'connect-pg-simple';
 import express, { type RequestHandler } from 'express';
-import session from 'express-session';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
@@ -11,6 +9,8 @@ import { AppError, notFound } from './lib/errors';
 import { httpLogger } from './lib/http-logger';
 import { errorHandler } from './middleware/error-handler';
 import { registerRoutes } from './routes';
+import { noStore, requireSameOrigin } from './security/same-origin';
+import { sessionMiddleware } from './security/session';
 
 export interface AppOptions {
   /** A built client to serve (production and browser tests); in development Vite serves it instead. */
@@ -49,18 +49,11 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
     },
   }));
   app.use(httpLogger(logger));
-  app.use('/api', requireJsonWrites);
+  app.use(requireSameOrigin(env.APP_ORIGIN));
+  app.use('/api', noStore, requireJsonWrites);
   app.use(express.json({ limit: '1mb' }));
 
-  const PgStore = connectPgSimple(session);
-  app.use(session({
-    name: 'gradepass.sid',
-    secret: env.SESSION_SECRET,
-    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false }),
-    resave: false,
-    saveUninitialized: false,
-    cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: 1000 * 60 * 60 * 24 * 14 },
-  }));
+  app.use(sessionMiddleware(env, pool, secure));
   const passport = configurePassport(env, db);
   app.use(passport.initialize());
   app.use(passport.session());
