@@ -9,6 +9,7 @@ import { AppError, notFound } from './lib/errors';
 import { httpLogger } from './lib/http-logger';
 import { errorHandler } from './middleware/error-handler';
 import { registerRoutes } from './routes';
+import { rateLimitRouter } from './security/rate-limits';
 import { noStore, requireSameOrigin } from './security/same-origin';
 import { sessionMiddleware } from './security/session';
 
@@ -57,6 +58,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   const passport = configurePassport(env, db);
   app.use(passport.initialize());
   app.use(passport.session());
+  app.use(rateLimitRouter(env, db));
 
   app.use(authRouter(passport));
   registerRoutes(app, ctx);
