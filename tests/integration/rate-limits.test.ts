@@ -81,6 +81,7 @@ describe('rate limits hold across two instances sharing one database', () => {
     for (let n = 1; n < 12; n += 1) await (n % 2 ? a : b).get('/api/me').expect(200);
     expectLimited(await a.get('/api/me'), /Too many requests/);
     expectLimited(await b.get('/api/requests/mine'), /Too many requests/);
+    await a.get('/api/health').expect((res) => expect(res.status).not.toBe(429));
   });
 
   it('new drafts and photo upload links are limited too', async () => {
