@@ -21,7 +21,8 @@ export function authRouter(passport: PassportInstance) {
       req.login(user, (loginError) => {
         if (loginError) return next(loginError);
         req.session.signedInAt = Date.now();
-        res.redirect('/sign-in');
+        // Saved before the redirect goes out: the browser follows it before the response's own save would land.
+        req.session.save((saveError) => (saveError ? next(saveError) : res.redirect('/sign-in')));
       });
     })(req, res, next);
   });
