@@ -1,16 +1,17 @@
-import connectPgSimple from 'connect-pg-simple';
 import express, { type RequestHandler } from 'express';
-import session from 'express-session';
 import helmet from 'helmet';
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import { pinoHttp } from 'pino-http';
 import { authRouter } from './auth/auth.routes';
 import { configurePassport } from './auth/passport';
 import type { AppContext } from './context';
 import { AppError, notFound } from './lib/errors';
+import { httpLogger } from './lib/http-logger';
 import { errorHandler } from './middleware/error-handler';
 import { registerRoutes } from './routes';
+import { rateLimitRouter } from './security/rate-limits';
+import { noStore, requireSameOrigin } from './security/same-origin';
+import { sessionMiddleware } from './security/session';
 
 export interface AppOptions {
   /** A built client to serve (production and browser tests); in development Vite serves it instead. */
@@ -48,22 +49,16 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
       },
     },
   }));
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') && !req.url?.startsWith('/auth') } }));
-  app.use('/api', requireJsonWrites);
+  app.use(httpLogger(logger));
+  app.use(requireSameOrigin(env.APP_ORIGIN));
+  app.use('/api', noStore, requireJsonWrites);
   app.use(express.json({ limit: '1mb' }));
 
-  const PgStore = connectPgSimple(session);
-  app.use(session({
-    name: 'gradepass.sid',
-    secret: env.SESSION_SECRET,
-    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false }),
-    resave: false,
-    saveUninitialized: false,
-    cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: 1000 * 60 * 60 * 24 * 14 },
-  }));
+  app.use(sessionMiddleware(env, pool, secure));
   const passport = configurePassport(env, db);
   app.use(passport.initialize());
   app.use(passport.session());
+  app.use(rateLimitRouter(env, db));
 
   app.use(authRouter(passport));
   registerRoutes(app, ctx);

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { securityEnvShape } from './security/security-env';
 
 const port = z.coerce.number().int().min(0).max(65535);
 
@@ -10,6 +11,7 @@ const envSchema = z.object({
   APP_ORIGIN: z.url().default('http://127.0.0.1:5170'),
   DATABASE_URL: z.string().min(1),
   SESSION_SECRET: z.string().min(16, 'SESSION_SECRET must be at least 16 characters'),
+  ...securityEnvShape,
   GOOGLE_CLIENT_ID: z.string().min(1),
   GOOGLE_CLIENT_SECRET: z.string().min(1),
   /** Leave the three URLs unset to use Google itself; set them to use another OAuth 2.0 provider. */

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { sessionCookieName } from '../security/session';
 import { callbackPath, type PassportInstance } from './passport';
 
 export function authRouter(passport: PassportInstance) {
@@ -17,14 +18,19 @@ export function authRouter(passport: PassportInstance) {
       }
       // req.login regenerates the session id, so a session fixed before sign-in is worthless afterwards.
       // The sign-in page sends a signed-in person on to their own start page.
-      req.login(user, (loginError) => (loginError ? next(loginError) : res.redirect('/sign-in')));
+      req.login(user, (loginError) => {
+        if (loginError) return next(loginError);
+        req.session.signedInAt = Date.now();
+        // Saved before the redirect goes out: the browser follows it before the response's own save would land.
+        req.session.save((saveError) => (saveError ? next(saveError) : res.redirect('/sign-in')));
+      });
     })(req, res, next);
   });
   router.post('/auth/sign-out', (req, res, next) => {
     req.logout((error) => {
       if (error) return next(error);
       req.session.destroy(() => {
-        res.clearCookie('gradepass.sid');
+        res.clearCookie(sessionCookieName);
         res.status(204).end();
       });
     });

@@ -2,6 +2,7 @@ import passport from 'passport';
 import { Strategy as GoogleStrategy, type Profile, type StrategyOptions, type VerifyCallback } from 'passport-google-oauth20';
 import type { Env } from '../env';
 import type { Db } from '../db/client';
+import { OAuthStateCookieStore } from './oauth-state-cookie';
 import { findSessionUser, signInWithProfile } from './users.service';
 
 export const callbackPath = '/auth/google/callback';
@@ -22,6 +23,8 @@ export function configurePassport(env: Env, db: Db) {
       scope: ['openid', 'email', 'profile'],
       state: true,
       pkce: true,
+      // passport-oauth2 calls a five-argument store when PKCE is on; its types know only the older forms.
+      store: new OAuthStateCookieStore(env.SESSION_SECRET, env.APP_ORIGIN.startsWith('https://')) as unknown as StrategyOptions['store'],
     } as StrategyOptions,
     (_accessToken: string, _refreshToken: string, profile: Profile, done: VerifyCallback) => {
       const email = profile.emails?.[0]?.value;

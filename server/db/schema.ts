@@ -143,7 +143,11 @@ export const photos = pgTable('photos', {
   gpsLng: doublePrecision(),
   createdAt: createdAt(),
   storedAt: timestamp({ withTimezone: true }),
-}, (t) => [index('photos_request_idx').on(t.requestId, t.status)]);
+}, (t) => [
+  index('photos_request_idx').on(t.requestId, t.status),
+  // The clean-up of uploads that were never confirmed reads only these.
+  index('photos_pending_idx').on(t.createdAt).where(sql`${t.status} = 'pending'`),
+]);
 
 export const gradeChecks = pgTable('grade_checks', {
   id: uuid().primaryKey().defaultRandom(),
@@ -226,3 +230,10 @@ export const referenceCounter = pgTable('reference_counters', {
   year: integer().primaryKey(),
   last: integer().notNull().default(0),
 });
+
+/** Request counters behind the rate limits, shared by every instance (rate-limiter-flexible's Drizzle store). */
+export const rateLimits = pgTable('rate_limits', {
+  key: varchar({ length: 255 }).primaryKey(),
+  points: integer().notNull().default(0),
+  expire: timestamp({ withTimezone: true }),
+}, (t) => [index('rate_limits_expire_idx').on(t.expire)]);

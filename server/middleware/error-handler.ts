@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler } from 'express';
 import { AppError } from '../lib/errors';
+import { loggableUrl } from '../lib/http-logger';
 import type { Logger } from '../lib/logger';
 
 // Unique keys a person can collide with by sending the same thing twice at once, and the field each one names.
@@ -48,7 +49,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       res.status(409).json({ error: { code: 'already_exists', message: 'That already exists: it may have been added a moment ago. Reload to see it.', ...(field ? { fields: { [field]: 'is already taken' } } : {}) } });
       return;
     }
-    logger.error({ err: error, url: req.originalUrl }, 'unhandled error');
+    logger.error({ err: error, url: loggableUrl(req.originalUrl) }, 'unhandled error');
     res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Nothing you sent was lost; please try again.' } });
   };
 }

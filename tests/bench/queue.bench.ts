@@ -11,6 +11,7 @@ import { applyMigrations, createDb } from '../../server/db/client';
 import { devOAuthClient } from '../../server/dev/dev-config';
 import { ensureDatabase, startPostgres } from '../../server/dev/postgres';
 import { standInEnv } from '../../server/dev/stand-in-env';
+import { relaxedRateLimits } from '../setup/relaxed-limits';
 import { freePort } from '../setup/free-port';
 import { seedQueue } from './queue-seed';
 import { signInCookie } from './sign-in-cookie';
@@ -52,7 +53,7 @@ async function main() {
     const seeded = await seedQueue(pool);
     console.log(`seeded ${seeded.requests} requests and ${seeded.events} events in ${((Date.now() - started) / 1000).toFixed(1)} s`);
 
-    const env = { ...process.env, ...standInEnv(standIns, { appOrigin: origin, port, databaseUrl: pg.url('bench') }), NODE_ENV: 'production', LOG_LEVEL: 'silent', RUN_WORKERS: 'false' };
+    const env = { ...process.env, ...relaxedRateLimits, ...standInEnv(standIns, { appOrigin: origin, port, databaseUrl: pg.url('bench') }), NODE_ENV: 'production', LOG_LEVEL: 'silent', RUN_WORKERS: 'false' };
     server = fork(fileURLToPath(new URL('queue-bench-server.ts', import.meta.url)), { env, execArgv: ['--import', 'tsx', ...(process.env.BENCH_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`] : [])] });
     await new Promise<void>((resolve, reject) => {
       server!.once('message', () => resolve());

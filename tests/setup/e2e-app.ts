@@ -7,6 +7,7 @@ import { seedDemo } from '../../server/db/seed';
 import { parseEnv } from '../../server/env';
 import { startWorkers } from '../../server/workers';
 import { ensureDatabase } from '../../server/dev/postgres';
+import { relaxedRateLimits } from './relaxed-limits';
 import type { TestStack } from './stack';
 
 const dist = fileURLToPath(new URL('../../dist', import.meta.url));
@@ -17,7 +18,7 @@ export async function startE2eApp(stack: TestStack, databaseUrl: string) {
   const seed = createDb(databaseUrl, 1);
   await seedDemo(seed.db);
   await seed.pool.end();
-  const env = parseEnv({ ...stack.env, DATABASE_URL: databaseUrl, NODE_ENV: 'test', LOG_LEVEL: 'warn' });
+  const env = parseEnv({ ...stack.env, ...relaxedRateLimits, DATABASE_URL: databaseUrl, NODE_ENV: 'test', LOG_LEVEL: 'warn' });
   const ctx = createContext(env);
   const workers = await startWorkers(ctx);
   const app = createApp(ctx, { clientDist: dist });

@@ -7,6 +7,7 @@ import type { AppContext } from '../../server/context';
 import { closeContext, createContext } from '../../server/context-factory';
 import { parseEnv } from '../../server/env';
 import { ensureDatabase } from '../../server/dev/postgres';
+import { relaxedRateLimits } from './relaxed-limits';
 
 export interface TestApp {
   ctx: AppContext;
@@ -35,7 +36,7 @@ export async function dropTestDatabase(databaseUrl: string) {
 
 export function testEnv(databaseUrl: string, overrides: Record<string, string> = {}) {
   const stack = inject('stack');
-  return { ...stack.env, DATABASE_URL: databaseUrl, NODE_ENV: 'test', LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent', RUN_WORKERS: 'false', ...overrides };
+  return { ...stack.env, ...relaxedRateLimits, DATABASE_URL: databaseUrl, NODE_ENV: 'test', LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent', RUN_WORKERS: 'false', ...overrides };
 }
 
 export async function createTestApp(overrides: Record<string, string> = {}): Promise<TestApp> {

@@ -14,7 +14,7 @@ import { markBuilt } from '../../services/crew/mark-built.service';
 import { listMyJobs } from '../../services/crew/my-jobs.service';
 import { scheduleJob } from '../../services/crew/schedule.service';
 import { loadYard, saveYard } from '../../services/crew/yard.service';
-import { toRequestView } from '../../services/requests/request-view';
+import { requestView } from '../requests/request-view';
 
 /**
  * The crew's side: the board of released jobs, taking and handing back, planning the day, the field sheet and
@@ -37,18 +37,18 @@ export function crewRouter({ db, env }: AppContext) {
 
   router.post(`${job}/accept`, crewOnly, handle({ params: uuidParam, body: acceptJobInputSchema }, async ({ params, body, user }) => {
     const { request } = await acceptJob(ctx, user, params.id, body.expectedVersion);
-    return { request: toRequestView(request) };
+    return { request: requestView(request, user) };
   }));
   router.post(`${job}/hand-back`, crewOnly, handle({ params: uuidParam, body: handBackInputSchema }, async ({ params, body, user }) => {
     const { request } = await handBackJob(ctx, user, params.id, body.expectedVersion, body.note);
-    return { request: toRequestView(request) };
+    return { request: requestView(request, user) };
   }));
   router.post(`${job}/schedule`, crewOnly, handle({ params: uuidParam, body: scheduleJobInputSchema }, async ({ params, body, user }) => (
     scheduleJob(ctx, user, params.id, body)
   )));
   router.post(`${job}/start`, crewOnly, handle({ params: uuidParam, body: startWorkInputSchema }, async ({ params, body, user }) => {
     const { request } = await startWork(ctx, user, params.id, body.expectedVersion);
-    return { request: toRequestView(request) };
+    return { request: requestView(request, user) };
   }));
   router.post(`${job}/as-built`, crewOnly, handle({ params: uuidParam, body: saveAsBuiltInputSchema }, async ({ params, body, user, res }) => {
     res.status(201);
@@ -56,7 +56,7 @@ export function crewRouter({ db, env }: AppContext) {
   }));
   router.post(`${job}/mark-built`, crewOnly, handle({ params: uuidParam, body: markBuiltInputSchema }, async ({ params, body, user }) => {
     const { request } = await markBuilt(ctx, user, params.id, body.expectedVersion, body.note ?? '');
-    return { request: toRequestView(request) };
+    return { request: requestView(request, user) };
   }));
   return router;
 }

@@ -8,6 +8,7 @@ import type { Db, DbOrTx } from '../../db/client';
 import { photos } from '../../db/schema';
 import { badRequest, conflict, notFound } from '../../lib/errors';
 import { loadVisibleRequest, type RequestRow } from '../../services/requests/request-access';
+import { photoTypeOf, readLeadingBytes } from './photo-content';
 
 export interface Storage { s3: S3Client; bucket: string }
 export type PhotoRow = typeof photos.$inferSelect;
@@ -52,20 +53,39 @@ async function loadPhoto(tx: DbOrTx, requestId: string, photoId: string) {
   return photo;
 }
 
-/** Lists a photo only once storage holds exactly the file that was announced. */
+/** The stored object must be exactly the announced file, and a photo by its own first bytes, whatever it was called. */
+async function checkStoredFile(db: Db, store: Storage, photo: PhotoRow) {
+  const head = await store.s3.send(new HeadObjectCommand({ Bucket: store.bucket, Key: photo.objectKey })).catch((error: { name?: string }) => {
+    if (error.name === 'NotFound' || error.name === 'NoSuchKey') return null;
+    throw error;
+  });
+  if (!head) throw conflict('The photo has not reached storage. Upload it again.');
+  if (head.ContentLength !== photo.sizeBytes || head.ContentType !== photo.contentType) {
+    throw conflict('The stored file is not the one that was announced. Upload it again.');
+  }
+  if (photoTypeOf(await readLeadingBytes(store, photo.objectKey)) === photo.contentType) return;
+  // Not a photo (an SVG or a web page sent as an image, say): it must never be listed or served.
+  await db.update(photos).set({ status: 'removed' }).where(eq(photos.id, photo.id));
+  await store.s3.send(new DeleteObjectCommand({ Bucket: store.bucket, Key: photo.objectKey }));
+  throw badRequest(`"${photo.fileName}" is not a JPEG, PNG, WebP or HEIC photo, so it was not added. Choose a photo file instead.`, {
+    fileName: 'is not a JPEG, PNG, WebP or HEIC photo',
+  });
+}
+
+/**
+ * Lists a photo only once storage holds the file that was announced. Storage is read between two short
+ * transactions, so no row lock is held while waiting on the network.
+ */
 export async function confirmUpload(db: Db, store: Storage, user: SessionUser, requestId: string, photoId: string,
   extra: { caption?: string; gpsLat?: number | null; gpsLng?: number | null }) {
+  const announced = await db.transaction(async (tx) => {
+    await loadOwnEditable(tx, user, requestId);
+    return loadPhoto(tx, requestId, photoId);
+  });
+  await checkStoredFile(db, store, announced);
   return db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
     const photo = await loadPhoto(tx, requestId, photoId);
-    const head = await store.s3.send(new HeadObjectCommand({ Bucket: store.bucket, Key: photo.objectKey })).catch((error: { name?: string }) => {
-      if (error.name === 'NotFound' || error.name === 'NoSuchKey') return null;
-      throw error;
-    });
-    if (!head) throw conflict('The photo has not reached storage. Upload it again.');
-    if (head.ContentLength !== photo.sizeBytes || head.ContentType !== photo.contentType) {
-      throw conflict('The stored file is not the one that was announced. Upload it again.');
-    }
     const [stored] = await tx.update(photos).set({
       status: 'stored', storedAt: photo.storedAt ?? new Date(),
       caption: extra.caption ?? photo.caption, gpsLat: extra.gpsLat ?? photo.gpsLat, gpsLng: extra.gpsLng ?? photo.gpsLng,
@@ -98,6 +118,18 @@ export async function listStored(db: DbOrTx, requestId: string) {
     .orderBy(asc(photos.createdAt));
 }
 
+/** A name safe inside a quoted header value: anything outside plain letters, digits, dot and dash becomes a dash. */
+const headerSafeName = (name: string) => name.replace(/[^\w.-]+/g, '-').slice(0, 120) || 'photo';
+
+/**
+ * A short-lived link to the stored photo. Storage is told to answer with the checked image type and an inline
+ * disposition, whatever the object's own metadata says, so the file is only ever shown as the image it is.
+ */
 export function viewUrl(store: Storage, photo: PhotoRow) {
-  return getSignedUrl(store.s3, new GetObjectCommand({ Bucket: store.bucket, Key: photo.objectKey }), { expiresIn: viewSeconds });
+  return getSignedUrl(store.s3, new GetObjectCommand({
+    Bucket: store.bucket,
+    Key: photo.objectKey,
+    ResponseContentType: photo.contentType,
+    ResponseContentDisposition: `inline; filename="${headerSafeName(photo.fileName)}"`,
+  }), { expiresIn: viewSeconds });
 }

@@ -1,8 +1,8 @@
-import { and, desc, eq } from 'drizzle-orm';
+import { and, count, desc, eq } from 'drizzle-orm';
 import { applicationDraftSchema, type ApplicationDraft } from '../../../shared/requests/application-schema';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db } from '../../db/client';
-import { requests } from '../../db/schema';
+import { requests, users } from '../../db/schema';
 import { conflict } from '../../lib/errors';
 import { loadVisibleRequest } from '../../services/requests/request-access';
 import { nextReference } from '../../services/requests/reference';
@@ -10,8 +10,17 @@ import { nextReference } from '../../services/requests/reference';
 /** The applicant may change the answers while the request is a draft or the office has asked for more. */
 export const editableStatuses = new Set(['draft', 'needs_details']);
 
+/** Unsent requests one owner may have at once: enough for several properties, not for filling the database. */
+export const maxOpenDrafts = 5;
+
 export async function createDraft(db: Db, user: SessionUser) {
   return db.transaction(async (tx) => {
+    // The owner's row is the lock that makes two clicks at once count one after the other.
+    await tx.select({ id: users.id }).from(users).where(eq(users.id, user.id)).for('update');
+    const [open] = await tx.select({ n: count() }).from(requests).where(and(eq(requests.applicantId, user.id), eq(requests.status, 'draft')));
+    if (open.n >= maxOpenDrafts) {
+      throw conflict(`You already have ${maxOpenDrafts} requests that are not sent yet. Send one, or withdraw one you no longer need, before starting another.`);
+    }
     const reference = await nextReference(tx);
     const [row] = await tx.insert(requests)
       .values({ reference, applicantId: user.id, applicantName: user.name, application: {} })

@@ -1,0 +1,70 @@
+import { Router, type Request, type RequestHandler } from 'express';
+import { RateLimiterDrizzle, RateLimiterRes } from 'rate-limiter-flexible';
+import type { Db } from '../db/client';
+import { rateLimits } from '../db/schema';
+import type { Env } from '../env';
+import { AppError } from '../lib/errors';
+import { addressKey } from './client-address';
+
+/** Which counters a request spends a point from. */
+type Counts = (req: Request) => [RateLimiterDrizzle, string][];
+
+const HOUR = 3600;
+
+function waitInWords(seconds: number): string {
+  return seconds < 90 ? `${Math.max(seconds, 1)} seconds` : `${Math.ceil(seconds / 60)} minutes`;
+}
+
+/** Answers 429 with Retry-After and a plain sentence: JSON for the API, text for a page the browser opened. */
+function limited(counts: Counts, tooMany: string): RequestHandler {
+  return async (req, res, next) => {
+    try {
+      for (const [counter, key] of counts(req)) await counter.consume(key);
+      next();
+    } catch (error) {
+      if (!(error instanceof RateLimiterRes)) return next(error);
+      const seconds = Math.ceil(error.msBeforeNext / 1000);
+      res.setHeader('Retry-After', String(seconds));
+      const message = `${tooMany} Please wait ${waitInWords(seconds)} and try again.`;
+      if (!req.originalUrl.startsWith('/api')) return void res.status(429).type('text/plain').send(message);
+      next(new AppError(429, 'rate_limited', message));
+    }
+  };
+}
+
+/**
+ * Every rate limit in one list, counted in PostgreSQL so that all instances share the counts. Mounted after the
+ * session (to know who is signed in) and before the routes. Limits are per signed-in person, and per address
+ * (RATE_LIMIT_ADDRESS_FACTOR times as many, since an office or a household shares one).
+ */
+export function rateLimitRouter(env: Env, db: Db) {
+  let first = true;
+  const counter = (keyPrefix: string, points: number, duration: number) => {
+    // One limiter per process is enough to clear the shared table of expired counts.
+    const limiter = new RateLimiterDrizzle({ storeClient: db, schema: rateLimits, keyPrefix, points, duration, clearExpiredByTimeout: first });
+    first = false;
+    return limiter;
+  };
+  const factor = env.RATE_LIMIT_ADDRESS_FACTOR;
+  const personAndAddress = (name: string, perPerson: number, seconds: number): Counts => {
+    const person = counter(`${name}-person`, perPerson, seconds);
+    const address = counter(`${name}-address`, perPerson * factor, seconds);
+    return (req) => [...(req.user ? [[person, req.user.id] as [RateLimiterDrizzle, string]] : []), [address, addressKey(req.ip)]];
+  };
+
+  // The ceiling on all API use costs one count per request: the person's when signed in, otherwise the address's.
+  const apiPerson = counter('api-person', env.RATE_LIMIT_API_PER_MINUTE, 60);
+  const apiAddress = counter('api-address', env.RATE_LIMIT_API_PER_MINUTE * factor, 60);
+  const api: Counts = (req) => [req.user ? [apiPerson, req.user.id] : [apiAddress, addressKey(req.ip)]];
+  const signInAddress = counter('sign-in-address', env.RATE_LIMIT_SIGN_INS_PER_HOUR, HOUR);
+
+  const router = Router();
+  const ceiling = limited(api, 'Too many requests in a short time.');
+  // The health check answers load balancers and must not depend on the counters' table.
+  router.use('/api', (req, res, next) => (req.path === '/health' ? next() : ceiling(req, res, next)));
+  router.get('/auth/google', limited((req) => [[signInAddress, addressKey(req.ip)]], 'Too many sign-ins were started from this address.'));
+  router.post('/api/requests', limited(personAndAddress('drafts', env.RATE_LIMIT_DRAFTS_PER_HOUR, HOUR), 'Too many new requests in a short time.'));
+  router.post('/api/requests/:id/messages', limited(personAndAddress('messages', env.RATE_LIMIT_MESSAGES_PER_HOUR, HOUR), 'Too many messages in a short time.'));
+  router.post('/api/requests/:id/photos', limited(personAndAddress('uploads', env.RATE_LIMIT_UPLOADS_PER_HOUR, HOUR), 'Too many photo uploads in a short time.'));
+  return router;
+}

@@ -1,0 +1,44 @@
+import connectPgSimple from 'connect-pg-simple';
+import type { RequestHandler } from 'express';
+import session from 'express-session';
+import type pg from 'pg';
+import type { Env } from '../env';
+
+export const sessionCookieName = 'gradepass.sid';
+
+declare module 'express-session' {
+  interface SessionData {
+    /** When the person signed in (ms since 1970): the absolute limit counts from here, however busy they are. */
+    signedInAt: number;
+  }
+}
+
+/**
+ * Sessions in PostgreSQL, written only once someone has signed in. The cookie and the stored row both expire after
+ * SESSION_IDLE_MINUTES without a request (rolling: every request moves the expiry on); `endOldSessions` adds the
+ * absolute limit of SESSION_MAX_DAYS from sign-in.
+ */
+export function sessionMiddleware(env: Env, pool: pg.Pool, secure: boolean): RequestHandler[] {
+  const PgStore = connectPgSimple(session);
+  const maxAgeMs = env.SESSION_MAX_DAYS * 86_400_000;
+  const store = new PgStore({ pool, tableName: 'session', createTableIfMissing: false });
+  const endOldSessions: RequestHandler = (req, res, next) => {
+    const signedIn = (req.session as { passport?: unknown }).passport !== undefined;
+    const signedInAt = req.session.signedInAt;
+    if (!signedIn || (signedInAt !== undefined && Date.now() - signedInAt <= maxAgeMs)) return next();
+    // Too old, or from before sessions recorded when they began: start again with an empty, unsaved session.
+    req.session.regenerate((error) => {
+      if (!error) res.clearCookie(sessionCookieName);
+      next(error);
+    });
+  };
+  return [session({
+    name: sessionCookieName,
+    secret: env.SESSION_SECRET,
+    store,
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: env.SESSION_IDLE_MINUTES * 60_000 },
+  }), endOldSessions];
+}

@@ -1,0 +1,74 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { demoPeople } from '../../server/db/seed/demo-people';
+import { seedDemo } from '../../server/db/seed';
+import { createTestApp, signIn, type TestApp } from '../setup/test-app';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await createTestApp({ SESSION_IDLE_MINUTES: '30', SESSION_MAX_DAYS: '14' });
+  await seedDemo(t.ctx.db);
+});
+afterAll(() => t.close());
+
+const staff = demoPeople.find((p) => p.role === 'staff')!.email;
+const minuteMs = 60_000;
+const toleranceMs = minuteMs;
+
+async function sessionRows() {
+  const { rows } = await t.ctx.pool.query<{ sid: string; expire: Date; sess: { signedInAt?: number } }>('select sid, expire, sess from session');
+  return rows;
+}
+
+describe('sessions', () => {
+  it('are not written for sign-ins that are only started', async () => {
+    await t.ctx.pool.query('delete from session');
+    for (let i = 0; i < 5; i += 1) {
+      const start = await request(t.app).get('/auth/google').expect(302);
+      expect(String(start.headers['set-cookie'])).not.toMatch(/gradepass\.sid=/);
+      expect(String(start.headers['set-cookie'])).toMatch(/gradepass\.oauth=.+HttpOnly/i);
+    }
+    expect(await sessionRows()).toHaveLength(0);
+  });
+
+  it('end after the idle time, which every request moves on', async () => {
+    await t.ctx.pool.query('delete from session');
+    const agent = await signIn(t.app, staff);
+    const [row] = await sessionRows();
+    expect(Math.abs(row.expire.getTime() - (Date.now() + 30 * minuteMs))).toBeLessThan(toleranceMs);
+    expect(Math.abs(row.sess.signedInAt! - Date.now())).toBeLessThan(toleranceMs);
+
+    await t.ctx.pool.query(`update session set expire = now() + interval '1 minute'`);
+    const me = await agent.get('/api/me').expect(200);
+    const expires = String(me.headers['set-cookie']).match(/gradepass\.sid=[^,]*Expires=([^;]+)/)?.[1];
+    expect(Math.abs(new Date(expires!).getTime() - (Date.now() + 30 * minuteMs))).toBeLessThan(toleranceMs);
+    const [rolled] = await sessionRows();
+    expect(Math.abs(rolled.expire.getTime() - (Date.now() + 30 * minuteMs))).toBeLessThan(toleranceMs);
+
+    // Past the idle time the stored session no longer counts, even if someone kept the cookie.
+    await t.ctx.pool.query(`update session set expire = now() - interval '1 second'`);
+    await agent.get('/api/me').expect(401);
+  });
+
+  it('end 14 days after sign-in however busy they were', async () => {
+    await t.ctx.pool.query('delete from session');
+    const agent = await signIn(t.app, staff);
+    await agent.get('/api/me').expect(200);
+    const fifteenDaysAgo = Date.now() - 15 * 86_400_000;
+    await t.ctx.pool.query(`update session set sess = jsonb_set(sess, '{signedInAt}', to_jsonb($1::bigint))`, [fifteenDaysAgo]);
+    const [old] = await sessionRows();
+    await agent.get('/api/me').expect(401);
+    const left = await sessionRows();
+    expect(left.map((r) => r.sid)).not.toContain(old.sid);
+    expect(left.every((r) => !('passport' in r.sess))).toBe(true);
+  });
+});
+
+describe('API answers', () => {
+  it('carry Cache-Control: no-store, signed in or not, found or not', async () => {
+    const agent = await signIn(t.app, staff);
+    for (const res of [await agent.get('/api/me'), await request(t.app).get('/api/me'), await agent.get('/api/no-such-thing'), await agent.get('/api/queue')]) {
+      expect(res.headers['cache-control']).toBe('no-store');
+    }
+  });
+});
