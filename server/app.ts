@@ -56,7 +56,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   app.use(session({
     name: 'gradepass.sid',
     secret: env.SESSION_SECRET,
-    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false }),
+    store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false, errorLog: (...args: unknown[]) => logger.warn({ args }, 'session store error') }),
     resave: false,
     saveUninitialized: false,
     cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: 1000 * 60 * 60 * 24 * 14 },

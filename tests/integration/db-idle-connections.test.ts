@@ -27,7 +27,7 @@ describe('a database connection ended by the server while idle', () => {
 
   it('is reported to the pool owner and replaced at the next query, not thrown', async () => {
     const onIdleError = vi.fn();
-    const { pool } = createDb(databaseUrl, 4, onIdleError);
+    const { pool } = createDb(databaseUrl, { max: 4, onConnectionError: onIdleError });
     await Promise.all([1, 2, 3].map(() => pool.query('select pg_sleep(0.02)')));
     expect(pool.idleCount).toBe(3);
 
@@ -56,7 +56,7 @@ describe('the app context', () => {
     expect(await terminateBackends(t.databaseUrl)).toBe(2);
     await removed;
     expect(warn).toHaveBeenCalledTimes(2);
-    expect(warn.mock.calls[0][1]).toBe('an idle database connection was closed by the server');
+    expect(warn.mock.calls[0][1]).toBe('a database connection was closed by the server');
     await request(t.app).get('/api/health').expect(200);
   });
 });
