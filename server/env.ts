@@ -8,9 +8,9 @@ const seconds = z.coerce.number().positive();
 /** A database that stops answering must fail requests fast (503) instead of holding them. See README. */
 const databaseTimeouts = {
   /** Opening a connection, and waiting for a free one in the pool. */
-  DB_CONNECT_TIMEOUT_MS: millis.default(3_000),
-  /** PostgreSQL cancels a statement after this; the client gives up on an unanswered one a second later. */
-  DB_STATEMENT_TIMEOUT_MS: millis.default(5_000),
+  DB_CONNECT_TIMEOUT_MS: millis.default(2_000),
+  /** PostgreSQL cancels a statement after this; the client gives up on an unanswered one half a second later. */
+  DB_STATEMENT_TIMEOUT_MS: millis.default(3_000),
   DB_IDLE_IN_TRANSACTION_TIMEOUT_MS: millis.default(10_000),
 };
 

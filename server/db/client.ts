@@ -18,7 +18,7 @@ export function poolTimeouts(t: DbTimeouts) {
     statement_timeout: t.statementMs,
     idle_in_transaction_session_timeout: t.idleInTransactionMs,
     // PostgreSQL cancels first and the connection stays usable; this fires only when the server does not answer at all.
-    query_timeout: t.statementMs + 1_000,
+    query_timeout: t.statementMs + 500,
   };
 }
 
