@@ -54,6 +54,8 @@ async function fault(rig: Rig, name: string, run: () => Promise<{ ids: string[];
 async function main() {
   console.log(`Starting PostgreSQL, the stand-ins and two app instances with workers on (lease ${clock.EMAIL_LEASE_SECONDS} s)...`);
   const rig = await startRig({ instances: 2, env: clock });
+  // Ctrl-C stops what the rig started (PostgreSQL, the stand-ins, the instances) before leaving.
+  for (const signal of ['SIGINT', 'SIGTERM'] as const) process.once(signal, () => void rig.stop().finally(() => process.exit(130)));
   try {
     await fault(rig, `PostgreSQL frozen (SIGSTOP) for ${freezeSeconds} s`, async () => {
       rig.standIns.mail.setReplyDelay(300);
