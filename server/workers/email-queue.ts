@@ -17,12 +17,13 @@ export interface EmailWorkerOptions {
 }
 
 /**
- * One job id per outbox row and due moment: inserting it again is a no-op, so the sweeper can run on every
- * instance as often as it likes. Every claim, renewal, failure and "send again" moves the due moment, so each
- * round of a row gets a job of its own.
+ * One job id per outbox row, due moment and ten-second window: inserting it again is a no-op, so the sweeper can
+ * run on every instance as often as it likes. Every claim, renewal, failure and "send again" moves the due moment,
+ * so each round of a row gets a job of its own; the window gives a row that is still due (its job ran while the
+ * database was away and could not claim it) a new job soon after, instead of a job id already used up.
  */
-export function jobIdFor(emailId: string, dueAt: string) {
-  const hex = createHash('sha256').update(`${emailId}:${dueAt}`).digest('hex');
+export function jobIdFor(emailId: string, dueAt: string, now = Date.now()) {
+  const hex = createHash('sha256').update(`${emailId}:${dueAt}:${Math.floor(now / 10_000)}`).digest('hex');
   return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-5${hex.slice(13, 16)}-a${hex.slice(17, 20)}-${hex.slice(20, 32)}`;
 }
 

@@ -1,7 +1,7 @@
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { eq, inArray } from 'drizzle-orm';
+import { eq, inArray, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startStandIns, type StandIns } from '../../fakes';
 import { closeContext, createContext } from '../../server/context-factory';
@@ -9,6 +9,7 @@ import { emails } from '../../server/db/schema';
 import { parseEnv } from '../../server/env';
 import { startWorkers, type Workers } from '../../server/workers';
 import { claimEmail, recordFailure, recordSent } from '../../server/workers/email-claims';
+import { emailQueue, jobIdFor } from '../../server/workers/email-queue';
 import { sleep, until } from '../setup/fault-rig';
 import { settle, writeEmails } from '../setup/mail-ledger';
 import { createTestApp, type TestApp } from '../setup/test-app';
@@ -54,6 +55,21 @@ describe('the outbox lease', () => {
     const workers = await startWorkers(t.ctx, { email: { sweepIntervalMs: 200, pollingIntervalSeconds: 0.5 } });
     try {
       expect(await settle(standIns.mail.webUrl, ids, 20_000, 500)).toMatchObject({ lost: 0, doubled: 0 });
+    } finally {
+      await workers.stop();
+    }
+  });
+
+  it('sends a row whose job already ran without claiming it (the database was away at that moment)', async () => {
+    await (await startWorkers(t.ctx)).stop(); // the job queue's tables exist once a worker has started
+    const [id] = await writeEmails(t.ctx.db, 1, 'job used up');
+    const [row] = await t.ctx.db.select({ dueAt: sql<string>`${emails.nextAttemptAt}::text` }).from(emails).where(eq(emails.id, id));
+    // The job the sweeper makes for this row now, already finished, as a job whose claim failed leaves it.
+    await t.ctx.pool.query(`insert into pgboss.job (id, name, data, state, completed_on) values ($1, $2, $3, 'completed', now())`,
+      [jobIdFor(id, row.dueAt), emailQueue, { emailId: id }]);
+    const workers = await startWorkers(t.ctx, { email: { sweepIntervalMs: 200, pollingIntervalSeconds: 0.5 } });
+    try {
+      expect(await settle(standIns.mail.webUrl, [id], 25_000, 500)).toMatchObject({ lost: 0, doubled: 0 });
     } finally {
       await workers.stop();
     }
