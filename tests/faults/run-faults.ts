@@ -10,7 +10,7 @@ const n = (name: string, fallback: number) => Number(process.env[name] ?? fallba
 const count = n('FAULT_EMAILS', 30);
 const freezeSeconds = n('FAULT_FREEZE_SECONDS', 15);
 const slowReplySeconds = n('FAULT_SLOW_REPLY_SECONDS', 6);
-const smtpDownSeconds = n('FAULT_SMTP_DOWN_SECONDS', 20);
+const smtpDownSeconds = n('FAULT_SMTP_DOWN_SECONDS', 30);
 // A short lease and retry clock, so each fault takes seconds, not the minutes the defaults would.
 const clock = { EMAIL_LEASE_SECONDS: '5', EMAIL_RETRY_FIRST_DELAY_SECONDS: '0.5', EMAIL_RETRY_MAX_DELAY_SECONDS: '2', EMAIL_RETRY_HORIZON_SECONDS: '3600' };
 
