@@ -27,7 +27,7 @@ export interface StandInOptions {
 
 export interface StandIns {
   s3: { endpoint: string; accessKeyId: string; secretAccessKey: string; region: string; bucket: string };
-  mail: { smtpHost: string; smtpPort: number; webUrl: string; stopSmtp(): Promise<void>; startSmtp(): Promise<void> };
+  mail: { smtpHost: string; smtpPort: number; webUrl: string; stopSmtp(): Promise<void>; startSmtp(): Promise<void>; setReplyDelay(ms: number): void };
   oauth: { issuer: string; authorizationUrl: string; tokenUrl: string; userinfoUrl: string };
   stop(): Promise<void>;
 }

@@ -54,7 +54,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   app.use('/api', noStore, requireJsonWrites);
   app.use(express.json({ limit: '1mb' }));
 
-  app.use(sessionMiddleware(env, pool, secure));
+  app.use(sessionMiddleware(env, pool, secure, logger));
   const passport = configurePassport(env, db);
   app.use(passport.initialize());
   app.use(passport.session());

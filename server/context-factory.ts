@@ -1,13 +1,20 @@
 import type { AppContext } from './context';
-import { createDb } from './db/client';
+import { createDb, type DbTimeouts } from './db/client';
 import type { Env } from './env';
 import { createLogger } from './lib/logger';
 import { createMailer } from './services/mailer';
 import { createS3Client } from './services/storage';
 
+export function dbTimeouts(env: Env): DbTimeouts {
+  return { connectMs: env.DB_CONNECT_TIMEOUT_MS, statementMs: env.DB_STATEMENT_TIMEOUT_MS, idleInTransactionMs: env.DB_IDLE_IN_TRANSACTION_TIMEOUT_MS };
+}
+
 export function createContext(env: Env): AppContext {
   const logger = createLogger(env.LOG_LEVEL);
-  const { db, pool } = createDb(env.DATABASE_URL, 10, (error) => logger.warn({ err: error }, 'an idle database connection was closed by the server'));
+  const { db, pool } = createDb(env.DATABASE_URL, {
+    max: 10, timeouts: dbTimeouts(env),
+    onConnectionError: (error) => logger.warn({ err: error }, 'a database connection was closed by the server'),
+  });
   return { env, db, pool, logger, s3: createS3Client(env), mailer: createMailer(env) };
 }
 

@@ -3,6 +3,26 @@ import { securityEnvShape } from './security/security-env';
 
 const port = z.coerce.number().int().min(0).max(65535);
 
+const millis = z.coerce.number().int().min(1);
+const seconds = z.coerce.number().positive();
+
+/** A database that stops answering must fail requests fast (503) instead of holding them. See README. */
+const databaseTimeouts = {
+  /** Opening a connection, and waiting for a free one in the pool. */
+  DB_CONNECT_TIMEOUT_MS: millis.default(2_000),
+  /** PostgreSQL cancels a statement after this; the client gives up on an unanswered one half a second later. */
+  DB_STATEMENT_TIMEOUT_MS: millis.default(3_000),
+  DB_IDLE_IN_TRANSACTION_TIMEOUT_MS: millis.default(10_000),
+};
+
+/** The e-mail outbox's clock: how long a sender's claim lasts unrenewed, and how long failed mail is retried. */
+const emailDelivery = {
+  EMAIL_LEASE_SECONDS: seconds.default(15),
+  EMAIL_RETRY_FIRST_DELAY_SECONDS: seconds.default(5),
+  EMAIL_RETRY_MAX_DELAY_SECONDS: seconds.default(600),
+  EMAIL_RETRY_HORIZON_SECONDS: seconds.default(2 * 24 * 3600),
+};
+
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   HOST: z.string().default('127.0.0.1'),
@@ -35,6 +55,8 @@ const envSchema = z.object({
   /** Background work (e-mail delivery) runs in every instance unless turned off. */
   RUN_WORKERS: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  ...databaseTimeouts,
+  ...emailDelivery,
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -10,6 +10,8 @@ const maxMessageBytes = 30 * 1024 * 1024;
  */
 export class SmtpListener {
   private server: SMTPServer | undefined;
+  /** Holds every reply (greeting, MAIL, RCPT, end of DATA) this long, like a slow or overloaded mail server. */
+  replyDelayMs = 0;
 
   constructor(
     private readonly store: MessageStore,
@@ -40,6 +42,11 @@ export class SmtpListener {
     await new Promise<void>((resolve) => server.close(() => resolve()));
   }
 
+  private later(callback: () => void) {
+    if (this.replyDelayMs <= 0) callback();
+    else setTimeout(callback, this.replyDelayMs);
+  }
+
   private createServer(): SMTPServer {
     const server = new SMTPServer({
       authOptional: true,
@@ -49,6 +56,9 @@ export class SmtpListener {
       size: maxMessageBytes,
       // Pending sessions are cut after a short grace period so stopSmtp() returns promptly in tests.
       closeTimeout: 500,
+      onConnect: (_session, callback) => this.later(callback),
+      onMailFrom: (_address, _session, callback) => this.later(callback),
+      onRcptTo: (_address, _session, callback) => this.later(callback),
       onData: (stream, session, callback) => {
         const chunks: Buffer[] = [];
         stream.on('data', (chunk: Buffer) => chunks.push(chunk));
@@ -61,7 +71,7 @@ export class SmtpListener {
           const envelopeTo = session.envelope.rcptTo.map((rcpt) => rcpt.address);
           simpleParser(raw)
             .then((parsed) => this.store.save(parsed, raw, envelopeTo))
-            .then(() => callback(), (error: Error) => callback(error));
+            .then(() => this.later(callback), (error: Error) => callback(error));
         });
       },
     });

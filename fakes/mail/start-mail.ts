@@ -20,6 +20,11 @@ export interface MailStandIn {
   stopSmtp(): Promise<void>;
   /** Brings the SMTP listener back on the same port. */
   startSmtp(): Promise<void>;
+  /**
+   * Holds each SMTP reply this many milliseconds (0 for none). The message is stored before the final reply is
+   * held, as a real server may have accepted it while the sender still waits.
+   */
+  setReplyDelay(ms: number): void;
   stop(): Promise<void>;
 }
 
@@ -43,6 +48,7 @@ export async function startMailStandIn(options: MailStandInOptions): Promise<Mai
     webUrl: urlFor(host, webPort),
     stopSmtp: () => smtp.stop(),
     startSmtp: () => smtp.start(),
+    setReplyDelay: (ms: number) => { smtp.replyDelayMs = ms; },
     async stop() {
       await smtp.stop();
       await close(web);

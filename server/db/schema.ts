@@ -218,7 +218,19 @@ export const emails = pgTable('emails', {
   messageId: text(),
   createdAt: createdAt(),
   sentAt: timestamp({ withTimezone: true }),
-}, (t) => [index('emails_status_idx').on(t.status, t.createdAt), index('emails_request_idx').on(t.requestId)]);
+  /**
+   * When the row may next be claimed: for `queued` when written (or sent again), for `failed` the backoff's next
+   * try, for `sending` the end of the sender's lease (a sender that dies stops renewing it).
+   */
+  nextAttemptAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  /** The claim in force while `sending`: only its holder may renew the lease or record the outcome. */
+  leaseToken: uuid(),
+  /** Set at the first failure; a failure after it makes the row `dead`. Sending again clears it. */
+  retryUntil: timestamp({ withTimezone: true }),
+}, (t) => [
+  index('emails_status_idx').on(t.status, t.createdAt), index('emails_request_idx').on(t.requestId),
+  index('emails_due_idx').on(t.nextAttemptAt).where(sql`${t.status} in ('queued', 'failed', 'sending')`),
+]);
 
 export const settings = pgTable('settings', {
   key: text().primaryKey(),

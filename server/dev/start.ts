@@ -47,7 +47,7 @@ async function main() {
     await ensureDatabase(pg.url('postgres'), 'gradepass');
     const databaseUrl = pg.url('gradepass');
     await applyMigrations(databaseUrl);
-    const { db, pool } = createDb(databaseUrl, 2);
+    const { db, pool } = createDb(databaseUrl, { max: 2 });
     await seedDemo(db);
     await pool.end();
 

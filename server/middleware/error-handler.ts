@@ -1,4 +1,5 @@
 import type { ErrorRequestHandler } from 'express';
+import { databaseUnavailable, isDatabaseUnavailable } from '../lib/db-unavailable';
 import { AppError } from '../lib/errors';
 import { loggableUrl } from '../lib/http-logger';
 import type { Logger } from '../lib/logger';
@@ -47,6 +48,13 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     if (duplicate) {
       const field = duplicate.constraint ? uniqueFields[duplicate.constraint] : undefined;
       res.status(409).json({ error: { code: 'already_exists', message: 'That already exists: it may have been added a moment ago. Reload to see it.', ...(field ? { fields: { [field]: 'is already taken' } } : {}) } });
+      return;
+    }
+    // A restart, failover or frozen server: say so plainly and let the client retry, instead of a 500.
+    if (isDatabaseUnavailable(error)) {
+      const unavailable = databaseUnavailable();
+      logger.warn({ err: error, url: loggableUrl(req.originalUrl) }, 'database unavailable');
+      res.status(503).set('Retry-After', '5').json({ error: { code: unavailable.code, message: unavailable.message } });
       return;
     }
     logger.error({ err: error, url: loggableUrl(req.originalUrl) }, 'unhandled error');

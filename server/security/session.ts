@@ -3,6 +3,7 @@ import type { RequestHandler } from 'express';
 import session from 'express-session';
 import type pg from 'pg';
 import type { Env } from '../env';
+import type { Logger } from '../lib/logger';
 
 export const sessionCookieName = 'gradepass.sid';
 
@@ -18,10 +19,14 @@ declare module 'express-session' {
  * SESSION_IDLE_MINUTES without a request (rolling: every request moves the expiry on); `endOldSessions` adds the
  * absolute limit of SESSION_MAX_DAYS from sign-in.
  */
-export function sessionMiddleware(env: Env, pool: pg.Pool, secure: boolean): RequestHandler[] {
+export function sessionMiddleware(env: Env, pool: pg.Pool, secure: boolean, logger: Logger): RequestHandler[] {
   const PgStore = connectPgSimple(session);
   const maxAgeMs = env.SESSION_MAX_DAYS * 86_400_000;
-  const store = new PgStore({ pool, tableName: 'session', createTableIfMissing: false });
+  const store = new PgStore({
+    pool, tableName: 'session', createTableIfMissing: false,
+    // The store's own default logs with console.error; a database outage is already answered 503 by the app.
+    errorLog: (...args: unknown[]) => logger.warn({ args }, 'session store error'),
+  });
   const endOldSessions: RequestHandler = (req, res, next) => {
     const signedIn = (req.session as { passport?: unknown }).passport !== undefined;
     const signedInAt = req.session.signedInAt;

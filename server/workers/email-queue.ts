@@ -1,65 +1,74 @@
 import { createHash } from 'node:crypto';
-import { asc, eq } from 'drizzle-orm';
 import PgBoss from 'pg-boss';
 import type { AppContext } from '../context';
-import { emails } from '../db/schema';
-import { deliverEmail } from './email-delivery';
+import { dbTimeouts } from '../context-factory';
+import { poolTimeouts } from '../db/client';
+import { dueEmails } from './email-claims';
+import { deliverEmail, deliverySettings, type DeliverySettings } from './email-delivery';
 
 export const emailQueue = 'email-delivery';
 
 export interface EmailWorkerOptions {
-  /** Attempts after the first before a message is marked dead. */
-  retryLimit?: number;
-  /** The first retry waits about this long; each later one about twice as long (pg-boss backoff with jitter). */
-  retryDelaySeconds?: number;
-  /** How often queued rows are handed to the job queue. */
+  /** Overrides the lease and retry clock from the environment (tests use a short one). */
+  delivery?: Partial<DeliverySettings>;
+  /** How often due rows are handed to the job queue. */
   sweepIntervalMs?: number;
   pollingIntervalSeconds?: number;
 }
 
 /**
- * One job id per outbox row and delivery round: inserting it again is a no-op, so the sweeper can run on every
- * instance as often as it likes; a staff "retry" starts a new round because it changes the attempt count.
+ * One job id per outbox row, due moment and ten-second window: inserting it again is a no-op, so the sweeper can
+ * run on every instance as often as it likes. Every claim, renewal, failure and "send again" moves the due moment,
+ * so each round of a row gets a job of its own; the window gives a row that is still due (its job ran while the
+ * database was away and could not claim it) a new job soon after, instead of a job id already used up.
  */
-export function jobIdFor(emailId: string, attempts: number) {
-  const hex = createHash('sha256').update(`${emailId}:${attempts}`).digest('hex');
+export function jobIdFor(emailId: string, dueAt: string, now = Date.now()) {
+  const hex = createHash('sha256').update(`${emailId}:${dueAt}:${Math.floor(now / 10_000)}`).digest('hex');
   return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-5${hex.slice(13, 16)}-a${hex.slice(17, 20)}-${hex.slice(20, 32)}`;
 }
 
 interface EmailJob { emailId: string }
 
+/**
+ * The job queue only wakes senders; the outbox row decides. Retries, backoff and giving up live on the row, so a
+ * job may expire, run twice or be lost without losing or doubling a message: a job for a row that is not due
+ * (or is claimed by someone else) does nothing, and the sweeper makes a new job for any row that comes due.
+ */
 export async function startEmailWorker(ctx: AppContext, opts: EmailWorkerOptions = {}) {
-  const retryLimit = opts.retryLimit ?? 6;
-  const retryDelay = opts.retryDelaySeconds ?? 5;
-  const boss = new PgBoss({ connectionString: ctx.env.DATABASE_URL, schema: 'pgboss', max: 3, schedule: false, application_name: 'gradepass-worker' });
-  boss.on('error', (error) => ctx.logger.error({ err: error }, 'job queue error'));
+  const settings = { ...deliverySettings(ctx.env), ...opts.delivery };
+  const boss = new PgBoss({
+    connectionString: ctx.env.DATABASE_URL, schema: 'pgboss', max: 3, schedule: false, application_name: 'gradepass-worker',
+    ...poolTimeouts(dbTimeouts(ctx.env)),
+  });
+  boss.on('error', (error) => ctx.logger.warn({ err: error }, 'job queue error'));
   await boss.start();
-  await ensureQueue(boss, { retryLimit, retryDelay });
+  await ensureQueue(boss);
 
-  await boss.work<EmailJob>(emailQueue, { batchSize: 10, includeMetadata: true, pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 1 }, async (jobs) => {
-    for (const job of jobs) {
-      const outcome = await deliverEmail(ctx, job.data.emailId, { finalAttempt: job.retryCount >= job.retryLimit });
-      if (outcome === 'failed' || outcome === 'dead') {
-        // Fail only this job (pg-boss schedules its retry with backoff); the others in the batch complete.
-        await boss.fail(emailQueue, job.id, { outcome });
-        ctx.logger.warn({ emailId: job.data.emailId, attempt: job.retryCount + 1, outcome }, 'e-mail not delivered');
+  await boss.work<EmailJob>(emailQueue, { batchSize: 10, pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 1 }, async (jobs) => {
+    await Promise.all(jobs.map(async (job) => {
+      try {
+        const outcome = await deliverEmail(ctx, job.data.emailId, settings);
+        if (outcome === 'failed' || outcome === 'dead' || outcome === 'lost-lease') {
+          ctx.logger.warn({ emailId: job.data.emailId, outcome }, 'e-mail not delivered on this try');
+        }
+      } catch (error) {
+        // The row keeps its state (a lease runs out by itself), so the sweeper brings it back.
+        ctx.logger.warn({ err: error, emailId: job.data.emailId }, 'e-mail delivery interrupted');
       }
-    }
+    }));
   });
 
   const sweep = async () => {
-    const queued = await ctx.db.select({ id: emails.id, attempts: emails.attempts }).from(emails)
-      .where(eq(emails.status, 'queued')).orderBy(asc(emails.createdAt)).limit(500);
-    if (queued.length === 0) return;
-    await boss.insert(queued.map((row) => ({
-      id: jobIdFor(row.id, row.attempts), name: emailQueue, data: { emailId: row.id },
-      retryLimit, retryDelay, retryBackoff: true, expireInSeconds: 120,
+    const due = await dueEmails(ctx.db, 500);
+    if (due.length === 0) return;
+    await boss.insert(due.map((row) => ({
+      id: jobIdFor(row.id, row.dueAt), name: emailQueue, data: { emailId: row.id }, retryLimit: 0, expireInSeconds: 900,
     })));
   };
   let sweeping: Promise<void> | null = null;
   const timer = setInterval(() => {
     sweeping ??= sweep()
-      .catch((error: unknown) => ctx.logger.error({ err: error }, 'e-mail sweep failed'))
+      .catch((error: unknown) => ctx.logger.warn({ err: error }, 'e-mail sweep failed'))
       .finally(() => { sweeping = null; });
   }, opts.sweepIntervalMs ?? 1000);
 
@@ -73,8 +82,8 @@ export async function startEmailWorker(ctx: AppContext, opts: EmailWorkerOptions
 }
 
 /** Every instance calls this at start; two doing it at once must not stop either from starting. */
-async function ensureQueue(boss: PgBoss, settings: { retryLimit: number; retryDelay: number }) {
-  const options = { name: emailQueue, policy: 'standard' as const, retryBackoff: true, expireInSeconds: 120, ...settings };
+async function ensureQueue(boss: PgBoss) {
+  const options = { name: emailQueue, policy: 'standard' as const, retryLimit: 0, expireInSeconds: 900 };
   if (await boss.getQueue(emailQueue)) return boss.updateQueue(emailQueue, options);
   try {
     await boss.createQueue(emailQueue, options);

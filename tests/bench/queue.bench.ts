@@ -44,7 +44,7 @@ async function main() {
     dataDir: path.join(dir, 'fakes'), bucket: 'bench', allowedOrigins: [origin],
     oauth: { ...devOAuthClient, redirectUris: [`${origin}/auth/google/callback`], identities: [{ email: 'bench.staff@gradepass.test', name: 'Bench Staff' }] },
   });
-  const { pool } = createDb(pg.url('bench'), 2);
+  const { pool } = createDb(pg.url('bench'), { max: 2 });
   let server: ChildProcess | undefined;
   try {
     await ensureDatabase(pg.url('postgres'), 'bench');

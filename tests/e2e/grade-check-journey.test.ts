@@ -17,7 +17,7 @@ const staff = demoPeople.filter((p) => p.role === 'staff')[0];
 
 beforeAll(async () => {
   session = await launchBrowser();
-  db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), 2);
+  db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
   const owner = await ensurePerson(db.db, applicant);
   const [marrow] = await db.db.select().from(jurisdictions).where(eq(jurisdictions.slug, 'marrow-county'));
   request = await createRequestRow(db.db, { applicantId: owner.id, applicantName: applicant.name, status: 'visit_booked', jurisdictionId: marrow.id, visitAt: new Date() });

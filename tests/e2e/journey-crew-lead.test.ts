@@ -18,7 +18,7 @@ let jobId: string;
 let address: string;
 beforeAll(async () => {
   session = await launchBrowser();
-  db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), 2);
+  db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
   const applicant = await ensurePerson(db.db, demoPeople.find((p) => p.role === 'applicant')!);
   const staff = await ensurePerson(db.db, demoPeople.find((p) => p.role === 'staff')!);
   const job = await createReleasedJob(db.db, { applicantId: applicant.id, staffId: staff.id, siteLat: 44.1, siteLng: -72.6 });

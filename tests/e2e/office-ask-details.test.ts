@@ -17,7 +17,7 @@ let request: RequestRow;
 
 beforeAll(async () => {
   session = await launchBrowser();
-  seeded = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), 2);
+  seeded = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
   const [applicant] = await seeded.db.select().from(users).where(eq(users.email, owner.email));
   request = await createRequestRow(seeded.db, { applicantId: applicant.id, applicantName: owner.name, siteAddress: '7 Wren Hollow Road, Fenwick Falls' });
 });

@@ -47,6 +47,25 @@ describe('mail catcher', () => {
     expect(await one.json()).toEqual(found);
   });
 
+  it('plays a slow server when told to: the message is kept while its final reply is still held', async () => {
+    const subject = `Slow ${crypto.randomUUID()}`;
+    mail.setReplyDelay(1_500);
+    let answered = false;
+    const sending = nodemailer.createTransport({ host: mail.smtpHost, port: mail.smtpPort, secure: false, connectionTimeout: 20_000 })
+      .sendMail({ from: 'office@gradepass.test', to: 'owner@example.test', subject, text: 'Slow.' })
+      .then((info) => { answered = true; return info; });
+    try {
+      for (let kept = false; !kept; kept = (await messages()).some((m) => m.subject === subject)) {
+        await new Promise((resolve) => setTimeout(resolve, 100));
+      }
+      expect(answered).toBe(false);
+      await sending;
+      expect(answered).toBe(true);
+    } finally {
+      mail.setReplyDelay(0);
+    }
+  });
+
   it('lists messages oldest first in JSON and newest first on the page', async () => {
     const first = `First ${crypto.randomUUID()}`;
     const second = `Second ${crypto.randomUUID()}`;

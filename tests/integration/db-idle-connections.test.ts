@@ -27,7 +27,7 @@ describe('a database connection ended by the server while idle', () => {
 
   it('is reported to the pool owner and replaced at the next query, not thrown', async () => {
     const onIdleError = vi.fn();
-    const { pool } = createDb(databaseUrl, 4, onIdleError);
+    const { pool } = createDb(databaseUrl, { max: 4, onConnectionError: onIdleError });
     await Promise.all([1, 2, 3].map(() => pool.query('select pg_sleep(0.02)')));
     expect(pool.idleCount).toBe(3);
 
@@ -44,6 +44,41 @@ describe('a database connection ended by the server while idle', () => {
   });
 });
 
+describe('a database connection ended by the server while checked out', () => {
+  let databaseUrl: string;
+  beforeAll(async () => { databaseUrl = await createTestDatabase(); });
+  afterAll(() => dropTestDatabase(databaseUrl));
+
+  it('is reported, not thrown, when it is inside a transaction waiting on something else', async () => {
+    const onError = vi.fn();
+    const { pool } = createDb(databaseUrl, { max: 2, onConnectionError: onError });
+    const client = await pool.connect();
+    await client.query('begin');
+    const reported = new Promise<void>((resolve) => client.once('error', () => resolve()));
+    expect(await terminateBackends(databaseUrl)).toBe(1);
+    await reported;
+    // The server's FATAL message first, then the closed socket: both reach the listener, neither is thrown.
+    expect(onError).toHaveBeenCalled();
+    expect((onError.mock.calls[0][0] as { code?: string }).code).toBe('57P01');
+    client.release(true);
+    expect((await pool.query('select 1 as one')).rows).toEqual([{ one: 1 }]);
+    await pool.end();
+  });
+
+  it('is ended by PostgreSQL when a transaction sits idle past the timeout, and the pool carries on', async () => {
+    const onError = vi.fn();
+    const { pool } = createDb(databaseUrl, { max: 2, onConnectionError: onError, timeouts: { connectMs: 2_000, statementMs: 2_000, idleInTransactionMs: 300 } });
+    const client = await pool.connect();
+    await client.query('begin');
+    await new Promise<void>((resolve) => client.once('error', () => resolve()));
+    // 25P03: idle_in_transaction_session_timeout.
+    expect((onError.mock.calls[0][0] as { code?: string }).code).toBe('25P03');
+    client.release(true);
+    expect((await pool.query('select 1 as one')).rows).toEqual([{ one: 1 }]);
+    await pool.end();
+  });
+});
+
 describe('the app context', () => {
   let t: TestApp;
   beforeAll(async () => { t = await createTestApp(); });
@@ -56,7 +91,7 @@ describe('the app context', () => {
     expect(await terminateBackends(t.databaseUrl)).toBe(2);
     await removed;
     expect(warn).toHaveBeenCalledTimes(2);
-    expect(warn.mock.calls[0][1]).toBe('an idle database connection was closed by the server');
+    expect(warn.mock.calls[0][1]).toBe('a database connection was closed by the server');
     await request(t.app).get('/api/health').expect(200);
   });
 });

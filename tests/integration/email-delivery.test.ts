@@ -19,7 +19,7 @@ let standIns: StandIns;
 let t: TestApp;
 let cast: Cast;
 let workers: Workers | null = null;
-const fast = { retryLimit: 8, retryDelaySeconds: 1, sweepIntervalMs: 200, pollingIntervalSeconds: 0.5 };
+const fast = { delivery: { leaseMs: 2_000, firstDelayMs: 300, maxDelayMs: 1_000, horizonMs: 60_000 }, sweepIntervalMs: 200, pollingIntervalSeconds: 0.5 };
 
 beforeAll(async () => {
   dir = await mkdtemp(join(tmpdir(), 'gradepass-email-'));
@@ -103,9 +103,9 @@ describe('e-mail delivery', () => {
     expect((await caught()).filter((m) => expected.includes(m.messageId))).toHaveLength(3);
   });
 
-  it('marks a message dead after the last retry, keeps the error, and sends it when staff retry it', async () => {
+  it('marks a message dead once the retry period is over, keeps the error, and sends it when staff retry it', async () => {
     await workers?.stop();
-    workers = await startWorkers(t.ctx, { email: { ...fast, retryLimit: 1 } });
+    workers = await startWorkers(t.ctx, { email: { ...fast, delivery: { ...fast.delivery, horizonMs: 1_000 } } });
     await standIns.mail.stopSmtp();
     const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id });
     await cast.staff.agent.post(`/api/requests/${row.id}/transitions`)
@@ -115,7 +115,7 @@ describe('e-mail delivery', () => {
       const [r] = await t.ctx.db.select().from(emails).where(eq(emails.id, email.id));
       return r.status === 'dead' && r;
     });
-    expect(dead.attempts).toBe(2);
+    expect(dead.attempts).toBeGreaterThanOrEqual(2);
     expect(dead.lastError).toMatch(/ECONNREFUSED|connect/i);
 
     const log = await cast.staff.agent.get('/api/emails?status=dead').expect(200);
@@ -129,7 +129,7 @@ describe('e-mail delivery', () => {
     await until('the retried message to arrive', async () =>
       (await caught()).some((m) => m.messageId === messageIdFor(email.id, t.ctx.env.MAIL_FROM)));
     const [sent] = await t.ctx.db.select().from(emails).where(eq(emails.id, email.id));
-    expect(sent).toMatchObject({ status: 'sent', attempts: 3 });
+    expect(sent).toMatchObject({ status: 'sent', attempts: dead.attempts + 1 });
   });
 
   it('sends each message once when two instances run workers on the same database', async () => {

@@ -15,7 +15,7 @@ const dist = fileURLToPath(new URL('../../dist', import.meta.url));
 /** The app as a browser meets it: the built client, a seeded database, background workers running. */
 export async function startE2eApp(stack: TestStack, databaseUrl: string) {
   await ensureDatabase(stack.adminDatabaseUrl, 'gradepass_e2e', stack.templateDatabase);
-  const seed = createDb(databaseUrl, 1);
+  const seed = createDb(databaseUrl, { max: 1 });
   await seedDemo(seed.db);
   await seed.pool.end();
   const env = parseEnv({ ...stack.env, ...relaxedRateLimits, DATABASE_URL: databaseUrl, NODE_ENV: 'test', LOG_LEVEL: 'warn' });

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import type { AppContext } from '../../context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
-import { decodeCursor, emailStatuses, getEmail, listEmails, retryEmail } from '../../services/email/email-log.service';
+import { decodeCursor, emailStatuses, getEmail, listEmails, retryAllDead, retryEmail } from '../../services/email/email-log.service';
 
 export const listEmailsQuerySchema = z.object({
   status: z.enum(emailStatuses, { error: `must be one of: ${emailStatuses.join(', ')}` }).optional(),
@@ -24,6 +24,7 @@ export function emailsRouter({ db }: AppContext) {
   router.use('/api/emails', requireRole(...officeRoles));
   router.get('/api/emails', handle({ query: listEmailsQuerySchema }, async ({ query }) => listEmails(db, query)));
   router.get('/api/emails/:id', handle({ params: uuidParam }, async ({ params }) => ({ email: await getEmail(db, params.id) })));
+  router.post('/api/emails/retry-dead', handle({}, async () => retryAllDead(db)));
   router.post('/api/emails/:id/retry', handle({ params: uuidParam }, async ({ params }) => ({ email: await retryEmail(db, params.id) })));
   return router;
 }

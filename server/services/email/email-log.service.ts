@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { and, count, desc, eq, ilike, or, sql, type SQL } from 'drizzle-orm';
+import { and, count, desc, eq, ilike, inArray, or, sql, type SQL } from 'drizzle-orm';
 import type { DbOrTx } from '../../db/client';
 import { emails, requests } from '../../db/schema';
 import { conflict, notFound } from '../../lib/errors';
@@ -20,6 +20,7 @@ const listColumns = {
   id: emails.id, requestId: emails.requestId, reference: requests.reference, template: emails.template,
   toAddress: emails.toAddress, subject: emails.subject, status: emails.status, attempts: emails.attempts,
   lastError: emails.lastError, messageId: emails.messageId, createdAt: emails.createdAt, sentAt: emails.sentAt,
+  nextAttemptAt: emails.nextAttemptAt,
 };
 
 export async function listEmails(db: DbOrTx, query: EmailLogQuery) {
@@ -54,13 +55,22 @@ export async function getEmail(db: DbOrTx, id: string) {
   return row;
 }
 
-/** Staff can send a dead message again once the cause is fixed; the worker's sweeper picks it up. */
+/** Back to the queue at once, with a fresh retry period: the sweeper picks it up within a second or so. */
+const sendAgain = { status: 'queued' as const, nextAttemptAt: sql`now()`, retryUntil: null, leaseToken: null };
+
+/** Staff can send a failed or dead message again (once the cause is fixed) without waiting for the next try. */
 export async function retryEmail(db: DbOrTx, id: string) {
-  const [row] = await db.update(emails).set({ status: 'queued' })
-    .where(and(eq(emails.id, id), eq(emails.status, 'dead'))).returning({ id: emails.id });
+  const [row] = await db.update(emails).set(sendAgain)
+    .where(and(eq(emails.id, id), inArray(emails.status, ['failed', 'dead']))).returning({ id: emails.id });
   if (row) return getEmail(db, id);
   const current = await getEmail(db, id);
-  throw conflict(`Only a message that gave up ("dead") can be retried; this one is "${current.status}".`);
+  throw conflict(`Only a message that failed or gave up can be sent again; this one is "${current.status}".`);
+}
+
+/** After an outage longer than the retry period: every message that gave up goes back to the queue in one step. */
+export async function retryAllDead(db: DbOrTx) {
+  const rows = await db.update(emails).set(sendAgain).where(eq(emails.status, 'dead')).returning({ id: emails.id });
+  return { queued: rows.length };
 }
 
 export function encodeCursor(createdAt: Date, id: string) {

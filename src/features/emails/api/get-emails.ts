@@ -17,6 +17,8 @@ export interface EmailRow {
   messageId: string | null;
   createdAt: string;
   sentAt: string | null;
+  /** For a failed message: when it is tried next. */
+  nextAttemptAt: string;
 }
 
 export interface EmailLogFilter { status?: EmailStatus; search?: string }

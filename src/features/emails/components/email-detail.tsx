@@ -4,7 +4,7 @@ import { useEmail } from '../api/get-email';
 import { useRetryEmail } from '../api/retry-email';
 import { EmailStatusBadge } from './email-status';
 
-/** One message as it was (or will be) sent, with the last delivery error and a retry for dead ones. */
+/** One message as it was (or will be) sent, with the last delivery error, and "Send again" for one that failed or gave up. */
 export function EmailDetailPanel({ id }: { id: string }) {
   const email = useEmail(id);
   const retry = useRetryEmail();
@@ -15,10 +15,13 @@ export function EmailDetailPanel({ id }: { id: string }) {
     <div className="space-y-3 text-sm">
       <div className="flex flex-wrap items-center gap-3">
         <EmailStatusBadge email={e} />
-        {e.status === 'dead' && (
+        {(e.status === 'dead' || e.status === 'failed') && (
           <Button onClick={() => retry.mutate(e.id)} disabled={retry.isPending}>{retry.isPending ? 'Queuing…' : 'Send again'}</Button>
         )}
       </div>
+      {e.status === 'failed' && (
+        <p className="text-stone-700">Tried {e.attempts} {e.attempts === 1 ? 'time' : 'times'} so far; the next try is due {new Date(e.nextAttemptAt).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'medium' })}.</p>
+      )}
       {retry.error && <ErrorNotice error={retry.error} />}
       {e.lastError && (
         <div>

@@ -6,6 +6,7 @@ import { paths } from '@/config/paths';
 import { emailStatuses, useEmails, type EmailStatus } from '../api/get-emails';
 import { EmailDetailPanel } from './email-detail';
 import { EmailStatusBadge, emailStatusText } from './email-status';
+import { ResendDead } from './resend-dead';
 
 const when = (iso: string | null) => (iso ? new Date(iso).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' }) : '—');
 
@@ -37,6 +38,7 @@ export function EmailLog() {
           <Button type="submit" variant="secondary">Search</Button>
         </form>
       </div>
+      <ResendDead deadCount={totals?.dead ?? 0} />
       {log.error && <ErrorNotice error={log.error} />}
       {log.isPending && <Loading label="Loading the e-mail log…" />}
       {log.data && rows.length === 0 && <Notice title="No e-mails here yet" />}
