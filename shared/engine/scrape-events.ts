@@ -1,5 +1,5 @@
 import type { DesignVehicle } from './rule-profile';
-import { bodyAt, type Ground, newCursor } from './scrape-position';
+import { bodyAt, type Ground, newCursor } from './scrape-drive';
 
 /**
  * Rear-wheel positions, in increasing order, at which something under the vehicle changes: a wheel or an overhang
@@ -30,17 +30,15 @@ export function vertexEvents(g: Ground, v: DesignVehicle): Float64Array {
       break;
     }
   }
-  // An overhang end over vertex i: its distance along the body depends on the body's tilt, found by iteration.
+  // An overhang end over vertex i: its distance along the ground depends on the body's tilt, taken from the body
+  // one overhang length back. Close is enough: a kink a hair off a sample still lies between two samples, where
+  // the local search finds it.
   const cursor = newCursor();
   for (const along of [-v.rearOverhangFt, w + v.frontOverhangFt]) {
     if (along === 0) continue;
     for (let i = 0; i < n; i++) {
-      let rx = xs[i] - along;
-      for (let k = 0; k < 3 && rx >= xs[0] && rx < xs[n - 1]; k++) {
-        if (!bodyAt(g, v, rx, cursor)) break;
-        rx = xs[i] - along * cursor.ux;
-      }
-      events[m++] = rx;
+      const rx = xs[i] - along;
+      events[m++] = rx >= xs[0] && rx < xs[n - 1] && bodyAt(g, v, rx, cursor) ? xs[i] - along * cursor.ux : rx;
     }
   }
   return events.subarray(0, m).sort();

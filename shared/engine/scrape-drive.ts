@@ -154,3 +154,102 @@ export function clearanceAt(g: Ground, v: DesignVehicle, rx: number, out?: Posit
   }
   return worst;
 }
+
+export interface Worst extends Position {
+  positions: number;
+}
+
+// Past this step a stretch between two samples could hold two separate low points and a local search finds only
+// one; with the vertex events and the search, the answer at this step no longer depends on the step asked for.
+const MAX_STEP_FT = 1;
+// Low points refined by a local search, lowest first; further ones sit well clear of the worst.
+const REFINED_LOW_POINTS = 16;
+const SEARCH_ROUNDS = 30;
+const GOLDEN = (Math.sqrt(5) - 1) / 2;
+
+/** Golden-section search for the least clearance between two sample positions (smooth in between). */
+function searchBetween(g: Ground, v: DesignVehicle, lo: number, hi: number): Position | null {
+  let a = lo;
+  let b = hi;
+  const value = (x: number) => clearanceAt(g, v, x)?.clearanceFt ?? Infinity;
+  let c = b - GOLDEN * (b - a);
+  let d = a + GOLDEN * (b - a);
+  let fc = value(c);
+  let fd = value(d);
+  for (let k = 0; k < SEARCH_ROUNDS && b - a > 1e-6; k++) {
+    if (fc <= fd) {
+      b = d; d = c; fd = fc; c = b - GOLDEN * (b - a); fc = value(c);
+    } else {
+      a = c; c = d; fc = fd; d = a + GOLDEN * (b - a); fd = value(d);
+    }
+  }
+  return clearanceAt(g, v, fc <= fd ? c : d);
+}
+
+/** The lowest local minima seen so far, each with the samples either side of it, lowest first. */
+class Lows {
+  readonly items: { value: number; lo: number; at: number; hi: number }[] = [];
+
+  offer(value: number, lo: number, at: number, hi: number) {
+    const items = this.items;
+    if (items.length === REFINED_LOW_POINTS && value >= items[items.length - 1].value) return;
+    let i = items.length;
+    while (i > 0 && items[i - 1].value > value) i--;
+    items.splice(i, 0, { value, lo, at, hi });
+    if (items.length > REFINED_LOW_POINTS) items.pop();
+  }
+}
+
+/**
+ * Drives the vehicle forward along increasing x over the grid merged with the vertex events (sorted), keeping the
+ * lowest local minima, then searches between the samples either side of each of them. In the same module as
+ * clearanceAt because it calls it for every sample.
+ */
+export function drive(g: Ground, v: DesignVehicle, stepFt: number, events: Float64Array): Worst {
+  const start = g.xs[0];
+  const end = g.xs[g.xs.length - 1];
+  const step = Math.min(stepFt, MAX_STEP_FT);
+  const worst: Worst = { clearanceFt: Infinity, x: start, where: 'between-axles', ux: 1, positions: 0 };
+  const keep = (p: Position | null) => {
+    if (p && p.clearanceFt < worst.clearanceFt) {
+      worst.clearanceFt = p.clearanceFt;
+      worst.x = p.x;
+      worst.where = p.where;
+    }
+  };
+  const scratch: Position = { clearanceFt: 0, x: 0, where: 'between-axles', ux: 1 };
+  const cursor = newCursor();
+  const lows = new Lows();
+  // The last two samples, to tell a local minimum once the next one is known.
+  let x1 = NaN;
+  let c1 = Infinity;
+  let x2 = NaN;
+  let c2 = Infinity;
+  let e = 0;
+  while (e < events.length && events[e] < start) e++;
+  for (let k = 0; ; ) {
+    const gridX = start + k * step;
+    const fromGrid = gridX < end && !(e < events.length && events[e] < gridX);
+    const x = fromGrid ? gridX : e < events.length && events[e] < end ? events[e] : NaN;
+    if (Number.isNaN(x)) break;
+    if (fromGrid) k++;
+    else e++;
+    if (x - x2 < 1e-9) continue;
+    const p = clearanceAt(g, v, x, scratch, cursor);
+    if (!p) break;
+    worst.positions++;
+    keep(p);
+    if (c2 <= c1 && c2 <= p.clearanceFt) lows.offer(c2, Number.isNaN(x1) ? x2 : x1, x2, x);
+    x1 = x2;
+    c1 = c2;
+    x2 = x;
+    c2 = p.clearanceFt;
+  }
+  // The last sample is a low when nothing after it is lower.
+  if (c2 <= c1) lows.offer(c2, Number.isNaN(x1) ? x2 : x1, x2, x2);
+  for (const low of lows.items) {
+    if (low.lo < low.at) keep(searchBetween(g, v, low.lo, low.at));
+    if (low.at < low.hi) keep(searchBetween(g, v, low.at, low.hi));
+  }
+  return worst;
+}
