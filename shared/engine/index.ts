@@ -84,6 +84,7 @@ export { type Finding, type FindingStatus } from './findings';
 export { culvertInputSchema, type CulvertInput, type CulvertSummary } from './culvert-checks';
 export { sightInputSchema, geometryInputSchema, type SightInput, type GeometryInput, type SightSummary } from './site-checks';
 export { type CheckSummary } from './summary';
+export { roadSideInputSchema, type RoadSideInput } from './road-edge';
 export { checkEntrance, checkEntranceInputSchema, type CheckEntranceInput, type EntranceReport } from './check-entrance';
 export {
   proposeProfile,
