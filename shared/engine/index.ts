@@ -48,6 +48,13 @@ export {
   type InletControlHeadwaterInput,
 } from './inlet-control';
 export {
+  outletControlHeadwater,
+  outletControlHeadwaterInputSchema,
+  entranceLossCoefficients,
+  type OutletControlHeadwaterInput,
+  type OutletControlResult,
+} from './outlet-control';
+export {
   earthworkVolume,
   earthworkVolumeInputSchema,
   bankToLoose,
