@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { apronInputSchema, checkApron, type ApronSummary } from './apron-edges';
 import { SAFETY_CAUTIONS } from './cautions';
 import { culvertInputSchema, checkCulvert, type CulvertSummary } from './culvert-checks';
 import { parseInput } from './errors';
@@ -19,6 +20,8 @@ export const checkEntranceInputSchema = z.object({
   roadEdgeStationFt: stationFt().optional(),
   // Older saved checks have none: the road-edge break is then "not checked" and the scrape sees the survey alone.
   roadSide: roadSideInputSchema.optional(),
+  // Both edges through the warp from the road's grade to the driveway's cross slope; older checks have none.
+  apron: apronInputSchema.optional(),
   scrapeStepFt: bounded(0.01, 10).default(0.1),
   // Overrides the rule profile's design vehicle for this check only.
   vehicle: designVehicleSchema.optional(),
@@ -40,6 +43,7 @@ export interface EntranceReport {
   scrape: ScrapeResult;
   culvert?: CulvertSummary;
   sight?: SightSummary;
+  apron?: ApronSummary;
   cautions: readonly string[];
 }
 
@@ -65,9 +69,10 @@ export function checkEntrance(input: CheckEntranceInput, ruleProfile: RuleProfil
   const culvert = checkCulvert(p.culvert, rules);
   const sight = checkSight(p.sight, rules, approachPercent);
   const geometry = checkGeometry(p.geometry, rules);
+  const apron = checkApron(p.apron, { points, roadEdgeFt: roadEdge, rules, roadSide: p.roadSide, geometryWidthFt: p.geometry?.widthFt, stepFt: p.scrapeStepFt });
 
   const stamp = { ruleProfileId: rules.id, ruleProfileVersion: rules.version };
-  const findings = [...profile.findings, roadEdgeFinding(points, roadEdge, p.roadSide, rules), ...culvert.findings, ...sight.findings, ...geometry].map((f) => ({ ...f, ...stamp }));
+  const findings = [...profile.findings, roadEdgeFinding(points, roadEdge, p.roadSide, rules), ...culvert.findings, ...sight.findings, ...geometry, ...apron.findings].map((f) => ({ ...f, ...stamp }));
   const summary = summarise(findings, profileLabel(rules));
   return {
     engineVersion: ENGINE_VERSION,
@@ -81,6 +86,7 @@ export function checkEntrance(input: CheckEntranceInput, ruleProfile: RuleProfil
     scrape: profile.scrape,
     culvert: culvert.culvert,
     sight: sight.sight,
+    apron: apron.apron,
     cautions: SAFETY_CAUTIONS,
   };
 }

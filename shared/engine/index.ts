@@ -92,6 +92,7 @@ export { culvertInputSchema, type CulvertInput, type CulvertSummary } from './cu
 export { sightInputSchema, geometryInputSchema, type SightInput, type GeometryInput, type SightSummary } from './site-checks';
 export { type CheckSummary } from './summary';
 export { roadSideInputSchema, type RoadSideInput } from './road-edge';
+export { apronInputSchema, type ApronInput, type ApronSummary, type WarpStake } from './apron-edges';
 export { checkEntrance, checkEntranceInputSchema, type CheckEntranceInput, type EntranceReport } from './check-entrance';
 export {
   proposeProfile,
