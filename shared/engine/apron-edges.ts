@@ -4,8 +4,8 @@ import type { Finding } from './findings';
 import { notChecked } from './findings';
 import { bounded, positive } from './numbers';
 import { checkProfileRules } from './profile-checks';
-import { elevationAt, type ProfilePoint } from './profile';
-import { roadEdgeFinding, type roadSideInputSchema, withRoadSide } from './road-edge';
+import { elevationAt, type ProfilePoint, SAME_STATION_FT } from './profile';
+import { edgePoint, pastEdge, roadEdgeFinding, type roadSideInputSchema, withRoadSide } from './road-edge';
 import type { RuleProfile } from './rule-profile';
 
 export const apronInputSchema = z.object({
@@ -72,10 +72,11 @@ function crossSlopeAt(a: Apron, warpFt: number, distanceFt: number): number {
  * the cross slope is linear within the warp, so edge = centre + slope x offset is linear too.
  */
 function edgeStations(ctx: Context, warpFt: number): number[] {
-  const last = ctx.points[ctx.points.length - 1].stationFt;
-  const set = new Set([ctx.roadEdgeFt, ...ctx.points.map((p) => p.stationFt).filter((s) => s > ctx.roadEdgeFt)]);
-  if (ctx.roadEdgeFt + warpFt < last) set.add(ctx.roadEdgeFt + warpFt);
-  return [...set].sort((x, y) => x - y);
+  const stations = [edgePoint(ctx.points, ctx.roadEdgeFt).stationFt, ...pastEdge(ctx.points, ctx.roadEdgeFt).map((p) => p.stationFt)];
+  const warpEnd = ctx.roadEdgeFt + warpFt;
+  // The warp's end adds a vertex unless a shot already stands there (or it lies past the survey).
+  if (warpEnd < stations[stations.length - 1] && stations.every((s) => Math.abs(s - warpEnd) >= SAME_STATION_FT)) stations.push(warpEnd);
+  return stations.sort((x, y) => x - y);
 }
 
 function stakeTable(ctx: Context, a: Apron, warpFt: number, halfWidthFt: number): WarpStake[] {

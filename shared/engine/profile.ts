@@ -30,7 +30,8 @@ export const profileInputSchema = z.union([
 ]);
 export type ProfileInput = z.input<typeof profileInputSchema>;
 
-const SAME_STATION_FT = 1e-6;
+// Closer than this, two stations are one: the merge below, and a shot at the road edge, both read them so.
+export const SAME_STATION_FT = 1e-6;
 
 function sortAndMerge(points: ProfilePoint[], field: string): ProfilePoint[] {
   const sorted = [...points].sort((a, b) => a.stationFt - b.stationFt);

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { atMost, type Finding, notChecked } from './findings';
 import { bounded, nonNegative } from './numbers';
-import { elevationAt, type ProfilePoint } from './profile';
+import { elevationAt, type ProfilePoint, SAME_STATION_FT } from './profile';
 import type { DesignVehicle, RuleProfile } from './rule-profile';
 
 /**
@@ -34,7 +34,7 @@ const approachGradePercent = (r: RoadSide) => -(r.shoulderWidthFt > 0 ? r.should
  */
 export function withRoadSide(points: readonly ProfilePoint[], roadEdgeFt: number, road: RoadSide | undefined, vehicle: DesignVehicle): readonly ProfilePoint[] {
   if (!road) return points;
-  const edge = { stationFt: roadEdgeFt, elevationFt: elevationAt(points, roadEdgeFt) };
+  const edge = edgePoint(points, roadEdgeFt);
   const laneRunFt = vehicle.wheelbaseFt + vehicle.frontOverhangFt + vehicle.rearOverhangFt;
   const front: ProfilePoint[] = [];
   let at = edge;
@@ -43,8 +43,17 @@ export function withRoadSide(points: readonly ProfilePoint[], roadEdgeFt: number
     front.unshift(at);
   }
   front.unshift({ stationFt: at.stationFt - laneRunFt, elevationFt: at.elevationFt + (road.roadCrossSlopePercent / 100) * laneRunFt });
-  return [...front, edge, ...points.filter((p) => p.stationFt > roadEdgeFt)];
+  return [...front, edge, ...pastEdge(points, roadEdgeFt)];
 }
+
+/** The road edge as a profile point: a shot a floating-point hair from the edge station is the edge, not a new segment. */
+export function edgePoint(points: readonly ProfilePoint[], roadEdgeFt: number): ProfilePoint {
+  const shot = points.find((p) => Math.abs(p.stationFt - roadEdgeFt) < SAME_STATION_FT);
+  return { stationFt: roadEdgeFt, elevationFt: shot ? shot.elevationFt : elevationAt(points, roadEdgeFt) };
+}
+
+/** Shots beyond the road edge, leaving out one that is the edge itself. */
+export const pastEdge = (points: readonly ProfilePoint[], roadEdgeFt: number) => points.filter((p) => p.stationFt >= roadEdgeFt + SAME_STATION_FT);
 
 const slopeWords = (percent: number, what: string) =>
   percent === 0 ? `the ${what} is level` : `the ${what} ${percent > 0 ? 'falls' : 'rises'} ${Math.abs(percent)}% toward the road edge`;
@@ -52,11 +61,10 @@ const slopeWords = (percent: number, what: string) =>
 /** The break between the road side and the first landing grade, against the rule profile's grade-change limit. */
 export function roadEdgeFinding(points: readonly ProfilePoint[], roadEdgeFt: number, road: RoadSide | undefined, rules: RuleProfile): Finding {
   if (!road) return notChecked(RULE, 'no road cross slope in the input');
-  const next = points.findIndex((p) => p.stationFt > roadEdgeFt);
-  if (next < 0) return notChecked(RULE, 'the survey ends at the road edge');
-  const first = points[next];
-  const atEdge = elevationAt(points, roadEdgeFt);
-  const landingPercent = ((first.elevationFt - atEdge) / (first.stationFt - roadEdgeFt)) * 100;
+  const [first] = pastEdge(points, roadEdgeFt);
+  if (!first) return notChecked(RULE, 'the survey ends at the road edge');
+  const edge = edgePoint(points, roadEdgeFt);
+  const landingPercent = ((first.elevationFt - edge.elevationFt) / (first.stationFt - edge.stationFt)) * 100;
   const side = road.shoulderWidthFt > 0 ? slopeWords(road.shoulderSlopePercent!, 'shoulder') : slopeWords(road.roadCrossSlopePercent, 'road');
   const landing = `the landing ${landingPercent >= 0 ? 'rises' : 'falls'} ${Math.abs(Math.round(landingPercent * 100) / 100)}%`;
   const change = Math.abs(landingPercent - approachGradePercent(road));

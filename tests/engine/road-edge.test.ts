@@ -66,3 +66,24 @@ describe('the break at the road edge', () => {
     }
   });
 });
+
+describe('a road edge a floating-point hair from a shot', () => {
+  it('0.1 + 0.2 ft against a shot at 0.3 ft reads the real landing grade, on the centreline and on both edges', () => {
+    const profile = [{ stationFt: 0.3, elevationFt: 100 }, { stationFt: 20.3, elevationFt: 100.8 }, { stationFt: 50.3, elevationFt: 102.6 }];
+    const apron = { roadGradePercent: 0, entranceWidthFt: 12, warpLengthFt: 20 };
+    const r = checkEntrance({ profile, roadEdgeStationFt: 0.1 + 0.2, roadSide: { roadCrossSlopePercent: 2 }, apron }, ruleProfile());
+    expect(findingOf(r.findings, 'grade.road-edge-change').measured).toBeCloseTo(6, 6);
+    expect(findingOf(r.findings, 'apron.left.grade.road-edge-change').measured).toBeCloseTo(6, 6);
+    expect(findingOf(r.findings, 'apron.left.landing.max-grade').measured).toBeCloseTo(4, 6);
+    expect(r.scrape.passes).toBe(true);
+  });
+
+  it('and the other way round: a road edge at 0.3 ft against a shot summed to 0.1 + 0.2 ft', () => {
+    const profile = [{ stationFt: 0.1 + 0.2, elevationFt: 100 }, { stationFt: 20.3, elevationFt: 100.8 }, { stationFt: 50.3, elevationFt: 102.6 }];
+    const apron = { roadGradePercent: 0, entranceWidthFt: 12, warpLengthFt: 20 };
+    const r = checkEntrance({ profile, roadEdgeStationFt: 0.3, roadSide: { roadCrossSlopePercent: 2 }, apron }, ruleProfile());
+    expect(findingOf(r.findings, 'grade.road-edge-change').measured).toBeCloseTo(6, 6);
+    expect(findingOf(r.findings, 'apron.right.grade.road-edge-change').measured).toBeCloseTo(6, 6);
+    expect(findingOf(r.findings, 'apron.right.landing.min-grade').measured).toBeCloseTo(4, 6);
+  });
+});
