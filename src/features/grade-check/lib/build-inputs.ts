@@ -139,13 +139,16 @@ export function buildInputs(s: SurveyState, rules: RuleProfile | undefined): { i
 
   const signedRoadGrade = s.road.rises === 'right' ? roadGrade : -roadGrade;
   const checked: ProfileInput = s.design.applied ? { kind: 'elevations', points: s.design.applied } : surveyed;
-  const laser = rules ? laserFromProfile(checked, roadEdgeStationFt, rules, { roadGradePercent: signedRoadGrade, receiverOffsetFt, stakes }) : undefined;
+  const apron = readApron(s.apron, signedRoadGrade, topWidthFt, errors);
+  // The driveway setup carries the cross slope the warp ends on, so the stakes and the second plane agree.
+  const crew = { roadGradePercent: signedRoadGrade, receiverOffsetFt, stakes, drivewayCrossSlopePercent: apron?.drivewayCrossSlopePercent };
+  const laser = rules ? laserFromProfile(checked, roadEdgeStationFt, rules, crew) : undefined;
   const edge = edgeElevation ?? laser?.originElevationFt;
   const inputs: SavedInputs = {
     profile: checked, roadEdgeStationFt, culvert, geometry,
     sight: Object.values(sight).some((v) => typeof v === 'number') ? sight : undefined,
     road: edge === undefined ? undefined : { gradePercent: signedRoadGrade, edgeElevationFt: edge }, roadSide,
-    apron: readApron(s.apron, signedRoadGrade, topWidthFt, errors),
+    apron,
     laser,
     design: edge === undefined ? undefined : {
       existing: surveyed, roadEdgeElevationFt: edge, targetEndElevationFt: target, applied: Boolean(s.design.applied),

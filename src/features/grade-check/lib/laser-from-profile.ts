@@ -6,7 +6,7 @@ import { elevationAt, normalizeProfile, type LaserSetupInput, type ProfileInput,
  */
 export function laserFromProfile(
   profile: ProfileInput, roadEdgeStationFt: number, rules: RuleProfile,
-  crew: { roadGradePercent: number; receiverOffsetFt: number; stakes: LaserSetupInput['stakes'] },
+  crew: { roadGradePercent: number; receiverOffsetFt: number; stakes: LaserSetupInput['stakes']; drivewayCrossSlopePercent?: number },
 ): LaserSetupInput | undefined {
   let points;
   try {
@@ -24,6 +24,6 @@ export function laserFromProfile(
   const drivewayGradePercent = last > landingEnd ? round(((points[points.length - 1].elevationFt - atLandingEnd) / (last - landingEnd)) * 100) : landingGradePercent;
   return {
     originElevationFt: round(origin), roadGradePercent: crew.roadGradePercent, landingGradePercent,
-    landingLengthFt: landingEnd - roadEdgeStationFt, drivewayGradePercent, receiverOffsetFt: crew.receiverOffsetFt, stakes: crew.stakes,
+    landingLengthFt: landingEnd - roadEdgeStationFt, drivewayGradePercent, drivewayCrossSlopePercent: crew.drivewayCrossSlopePercent ?? 0, receiverOffsetFt: crew.receiverOffsetFt, stakes: crew.stakes,
   };
 }
