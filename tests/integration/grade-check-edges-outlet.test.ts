@@ -1,6 +1,8 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
 import { eq } from 'drizzle-orm';
 import { PDFParse } from 'pdf-parse';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { requests } from '../../server/db/schema';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
@@ -78,6 +80,10 @@ describe('road edge, outlet control and the warped apron in the saved check', ()
     const attached = await cast.staff.agent.post(`/api/grade-checks/${res.body.check.id}/attach`).send({ shareWithApplicant: false }).expect(200);
     const list = await cast.staff.agent.get(`/api/requests/${request.id}/documents`).expect(200);
     const bytes = Buffer.from(await (await fetch(list.body.documents[0].url)).arrayBuffer());
+    // Kept for review beside the other reports' renderings.
+    const dir = path.join(inject('stack').artifactsDir, 'reports');
+    mkdirSync(dir, { recursive: true });
+    writeFileSync(path.join(dir, 'grade-check-edges-outlet.pdf'), bytes);
     const text = await pdfText(bytes);
     expect(text).toMatch(/(inlet|outlet) control governs \(inlet control \d+\.\d\d ft, outlet control \d+\.\d\d ft\)/);
     expect(text).toContain('Entrance edges and warp stakes');
