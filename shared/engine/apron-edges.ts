@@ -48,7 +48,6 @@ interface Context {
   rules: RuleProfile;
   roadSide?: z.output<typeof roadSideInputSchema>;
   geometryWidthFt?: number;
-  stepFt: number;
 }
 
 // The rules an edge is held to; drainage and survey length are the centreline's business.
@@ -99,7 +98,9 @@ function stakeTable(ctx: Context, a: Apron, warpFt: number, halfWidthFt: number)
 
 function edgeFindings(side: keyof typeof SIDES, edge: ProfilePoint[], ctx: Context): Finding[] {
   const graded = withRoadSide(edge, ctx.roadEdgeFt, ctx.roadSide, ctx.rules.designVehicle);
-  const found = checkProfileRules(graded, ctx.rules, ctx.roadEdgeFt, ctx.stepFt).findings.filter((f) => EDGE_RULES.includes(f.ruleId));
+  // No wheel runs along an edge, so its scrape is not reported: one step the length of the edge keeps it to one position.
+  const oneStepFt = graded[graded.length - 1].stationFt - graded[0].stationFt + 1;
+  const found = checkProfileRules(graded, ctx.rules, ctx.roadEdgeFt, oneStepFt).findings.filter((f) => EDGE_RULES.includes(f.ruleId));
   if (ctx.roadSide) found.push(roadEdgeFinding(edge, ctx.roadEdgeFt, ctx.roadSide, ctx.rules));
   return found.map((f) => ({ ...f, ruleId: `apron.${side}.${f.ruleId}`, label: `${SIDES[side]}: ${f.label[0].toLowerCase()}${f.label.slice(1)}` }));
 }

@@ -69,7 +69,7 @@ export function checkEntrance(input: CheckEntranceInput, ruleProfile: RuleProfil
   const culvert = checkCulvert(p.culvert, rules);
   const sight = checkSight(p.sight, rules, approachPercent);
   const geometry = checkGeometry(p.geometry, rules);
-  const apron = checkApron(p.apron, { points, roadEdgeFt: roadEdge, rules, roadSide: p.roadSide, geometryWidthFt: p.geometry?.widthFt, stepFt: p.scrapeStepFt });
+  const apron = checkApron(p.apron, { points, roadEdgeFt: roadEdge, rules, roadSide: p.roadSide, geometryWidthFt: p.geometry?.widthFt });
 
   const stamp = { ruleProfileId: rules.id, ruleProfileVersion: rules.version };
   const findings = [...profile.findings, roadEdgeFinding(points, roadEdge, p.roadSide, rules), ...culvert.findings, ...sight.findings, ...geometry, ...apron.findings].map((f) => ({ ...f, ...stamp }));
