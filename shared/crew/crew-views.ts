@@ -1,4 +1,4 @@
-import type { AsBuiltReadingResult, AsBuiltStatus, CutFillAtStation, LaserWarp, PlaneSetting, ProfilePoint, RuleProfile, StakeResult } from '../engine';
+import type { ApronSummary, AsBuiltReadingResult, AsBuiltStatus, CutFillAtStation, LaserWarp, PlaneSetting, ProfilePoint, RuleProfile, StakeResult } from '../engine';
 import type { RequestStatus } from '../workflow/statuses';
 import type { AsBuiltReadingInput } from './crew-inputs';
 
@@ -62,6 +62,8 @@ export interface CulvertSheet {
   outletInvertFt: number;
   coverIn: number | null;
   slopePercent: number | null;
+  /** Which control sets the headwater, in words; null without a design flow (or for checks saved before). */
+  headwaterText: string | null;
 }
 
 export interface LaserSheet {
@@ -82,6 +84,8 @@ export interface FieldSheetView {
   rules: { landingLengthFt: number; landingMinPercent: number; landingMaxPercent: number; maxGradePercent: number } | null;
   laser: LaserSheet | null;
   culvert: CulvertSheet | null;
+  /** The warped apron's edges and the warp stakes; null when the check did not take the apron. */
+  apron: ApronSummary | null;
   design: { points: ProfilePoint[]; existing: ProfilePoint[] | null; cutFill: CutFillAtStation[] } | null;
   earthwork: EarthworkEstimate | null;
   cautions: string[];

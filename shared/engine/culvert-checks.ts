@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { EngineInputError, within } from './errors';
 import { atLeast, atMost, advisory, type Finding, notChecked } from './findings';
-import { inletControlHeadwater, inletTypes } from './inlet-control';
+import { controllingHeadwater } from './culvert-headwater';
+import { inletTypes } from './inlet-control';
 import { bounded, elevationFt, nonNegative, positive, roundUpTo } from './numbers';
 import { pipeFullFlow, rationalFlow, rationalFlowInputSchema } from './pipe-flow';
 import type { RuleProfile } from './rule-profile';
@@ -20,6 +21,8 @@ export const culvertInputSchema = z.object({
   topWidthFt: positive(200).optional(),
   sideSlopeHPerV: nonNegative(20).optional(),
   designFlowCfs: positive(10_000).optional(),
+  // Water standing in the outlet ditch above the outlet invert, for outlet control; none given is a free outlet.
+  tailwaterDepthFt: nonNegative(50).optional(),
   drainage: rationalFlowInputSchema.optional(),
 });
 export type CulvertInput = z.input<typeof culvertInputSchema>;
@@ -30,8 +33,12 @@ export interface CulvertSummary {
   slopeFtPerFt?: number;
   capacityCfs?: number;
   designFlowCfs?: number;
+  /** The controlling headwater, the larger of inlet and outlet control, and which one it is. */
   headwaterFt?: number;
   hwOverD?: number;
+  control?: 'inlet' | 'outlet';
+  inletHeadwaterFt?: number;
+  outletHeadwaterFt?: number;
 }
 
 const base = (ruleId: string, label: string, unit: string) => ({ ruleId, label, unit });
@@ -56,7 +63,7 @@ const IDS = {
   cover: base('culvert.min-cover', 'Cover over the culvert', 'in'),
   slope: base('culvert.slope', 'Culvert slope from the inverts', 'ft/ft'),
   capacity: base('culvert.capacity', 'Culvert full-flow capacity', 'cfs'),
-  headwater: base('culvert.headwater', 'Headwater at the inlet (HW/D)', 'HW/D'),
+  headwater: base('culvert.headwater', 'Headwater above the inlet, inlet or outlet control (HW/D)', 'HW/D'),
 };
 
 function sizeFindings(c: Culvert, rules: RuleProfile, summary: CulvertSummary): Finding[] {
@@ -106,11 +113,10 @@ function flowFindings(c: Culvert, rules: RuleProfile, summary: CulvertSummary): 
   }
   const capacity = within('culvert', () => pipeFullFlow({ diameterIn: c.diameterIn, manningN: c.manningN, slopeFtPerFt: slope }).flowCfs);
   summary.capacityCfs = capacity;
-  const hw = within('culvert', () => inletControlHeadwater({ inlet: c.inlet, diameterFt: c.diameterIn / 12, flowCfs: flow, slopeFtPerFt: slope }));
-  summary.headwaterFt = hw.headwaterFt;
-  summary.hwOverD = hw.hwOverD;
+  const hw = controllingHeadwater(c, flow, slope, c.lengthFt ?? summary.requiredLengthFt);
+  Object.assign(summary, { headwaterFt: hw.headwaterFt, hwOverD: hw.hwOverD, control: hw.control, inletHeadwaterFt: hw.inletHeadwaterFt, outletHeadwaterFt: hw.outletHeadwaterFt });
   const limit = rules.culvert.maxHeadwaterToDiameter;
-  const note = `${hw.regime} inlet, headwater ${hw.headwaterFt.toFixed(2)} ft`;
+  const note = hw.note;
   return [
     atLeast(IDS.capacity, capacity, flow),
     limit === undefined ? advisory(IDS.headwater, hw.hwOverD, null, `no headwater limit in this rule profile; ${note}`) : atMost({ ...IDS.headwater, note }, hw.hwOverD, limit),

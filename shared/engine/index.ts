@@ -50,6 +50,13 @@ export {
   type InletControlHeadwaterInput,
 } from './inlet-control';
 export {
+  outletControlHeadwater,
+  outletControlHeadwaterInputSchema,
+  entranceLossCoefficients,
+  type OutletControlHeadwaterInput,
+  type OutletControlResult,
+} from './outlet-control';
+export {
   earthworkVolume,
   earthworkVolumeInputSchema,
   bankToLoose,
@@ -86,6 +93,8 @@ export { type Finding, type FindingStatus } from './findings';
 export { culvertInputSchema, type CulvertInput, type CulvertSummary } from './culvert-checks';
 export { sightInputSchema, geometryInputSchema, type SightInput, type GeometryInput, type SightSummary } from './site-checks';
 export { type CheckSummary } from './summary';
+export { roadSideInputSchema, type RoadSideInput } from './road-edge';
+export { apronInputSchema, apronWarpLength, type ApronInput, type ApronSummary, type WarpStake } from './apron-edges';
 export { checkEntrance, checkEntranceInputSchema, type CheckEntranceInput, type EntranceReport } from './check-entrance';
 export {
   proposeProfile,

@@ -1,6 +1,9 @@
 import { z } from 'zod';
 import { EngineInputError, parseInput } from './errors';
+import { criticalSpecificHeadFt } from './critical-depth';
 import { bounded, positive } from './numbers';
+
+export { criticalSpecificHeadFt } from './critical-depth';
 
 export const inletTypes = [
   'concrete-square-headwall',
@@ -34,7 +37,6 @@ const COEFFICIENTS: Record<InletType, InletCoefficients> = {
 // HDS-5: submerged above 4.0; unsubmerged below about 3.5 (from memory). Between them we interpolate.
 const UNSUBMERGED_LIMIT = 3.5;
 const SUBMERGED_LIMIT = 4.0;
-const GRAVITY = 32.2;
 
 export const inletControlHeadwaterInputSchema = z.object({
   inlet: z.enum(inletTypes),
@@ -43,28 +45,6 @@ export const inletControlHeadwaterInputSchema = z.object({
   slopeFtPerFt: bounded(0, 0.5),
 });
 export type InletControlHeadwaterInput = z.input<typeof inletControlHeadwaterInputSchema>;
-
-/** Specific head at critical depth in a circular pipe, found by bisection on Q^2 T = g A^3. */
-export function criticalSpecificHeadFt(diameterFt: number, flowCfs: number): number {
-  const section = (depth: number) => {
-    const theta = 2 * Math.acos(1 - (2 * depth) / diameterFt);
-    const area = ((diameterFt * diameterFt) / 8) * (theta - Math.sin(theta));
-    const top = diameterFt * Math.sin(theta / 2);
-    return { area, top };
-  };
-  let lo = diameterFt * 1e-6;
-  let hi = diameterFt * (1 - 1e-9);
-  for (let i = 0; i < 100; i++) {
-    const mid = (lo + hi) / 2;
-    const { area, top } = section(mid);
-    if (flowCfs * flowCfs * top > GRAVITY * area ** 3) lo = mid;
-    else hi = mid;
-  }
-  const depth = (lo + hi) / 2;
-  const { area } = section(depth);
-  const velocity = flowCfs / area;
-  return depth + (velocity * velocity) / (2 * GRAVITY);
-}
 
 function unsubmergedHwOverD(co: InletCoefficients, d: number, q: number, area: number, s: number): number {
   const hcOverD = criticalSpecificHeadFt(d, q) / d;

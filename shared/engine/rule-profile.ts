@@ -58,6 +58,8 @@ const geometryRulesSchema = z.object({
   minFlareRadiusFt: nonNegative(200).optional(),
   minDistanceToIntersectionFt: nonNegative(5_000).optional(),
   minDistanceToPropertyLineFt: nonNegative(1_000).optional(),
+  // Length over which the apron turns from the road's grade to the driveway's cross slope.
+  warpLengthFt: positive(500).optional(),
 });
 
 // No allowance unless the road authority states one: a default tolerance would be a number nobody published.

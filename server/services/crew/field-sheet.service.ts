@@ -1,5 +1,6 @@
 import { eq } from 'drizzle-orm';
 import { elevationAt, type CutFillAtStation } from '../../../shared/engine';
+import { headwaterWords } from '../../../shared/charts/check-words';
 import { roadOwnerText } from '../../../shared/requests/choices';
 import type { CulvertSheet, FieldSheetView, LaserSheet } from '../../../shared/crew/crew-views';
 import type { SessionUser } from '../../auth/session-user';
@@ -38,7 +39,7 @@ function culvertSheet(check: SavedCheck): CulvertSheet | null {
   return {
     diameterIn: c.diameterIn, lengthFt, lengthIsMinimum: c.lengthFt === undefined && lengthFt !== null,
     inletInvertFt: c.inletInvertFt, outletInvertFt: c.outletInvertFt, coverIn: summary.coverIn ?? null,
-    slopePercent: summary.slopeFtPerFt === undefined ? null : summary.slopeFtPerFt * 100,
+    slopePercent: summary.slopeFtPerFt === undefined ? null : summary.slopeFtPerFt * 100, headwaterText: headwaterWords(summary),
   };
 }
 
@@ -89,6 +90,7 @@ async function sheetFor(db: Db, row: RequestRow): Promise<FieldSheetView> {
     rules: rules ? { landingLengthFt: rules.landing.lengthFt, landingMinPercent: rules.landing.minGradePercent, landingMaxPercent: rules.landing.maxGradePercent, maxGradePercent: rules.maxGradePercent } : null,
     laser: check ? laserSheet(check) : null,
     culvert: check ? culvertSheet(check) : null,
+    apron: check?.apron ?? null,
     design: check ? { points: check.designPoints, existing: check.existingPoints, cutFill: cutFill(check) } : null,
     earthwork: earthworkEstimate(check),
     cautions: fieldCautions,

@@ -17,7 +17,19 @@ import { designPartSchema } from '../grade-checks/grade-check-inputs';
 const pointSchema = z.object({ stationFt: z.number(), elevationFt: z.number() });
 const reportSchema = z.object({
   profile: z.object({ points: z.array(pointSchema).min(2) }),
-  culvert: z.object({ requiredLengthFt: z.number().optional(), coverIn: z.number().optional(), slopeFtPerFt: z.number().optional() }).optional(),
+  culvert: z.object({
+    requiredLengthFt: z.number().optional(), coverIn: z.number().optional(), slopeFtPerFt: z.number().optional(), headwaterFt: z.number().optional(),
+    hwOverD: z.number().optional(), control: z.enum(['inlet', 'outlet']).optional(), inletHeadwaterFt: z.number().optional(), outletHeadwaterFt: z.number().optional(),
+  }).optional(),
+  apron: z.object({
+    halfWidthFt: z.number(), warpLengthFt: z.number(), warpLengthFrom: z.enum(['input', 'rule profile', 'landing length']), warpStartStationFt: z.number(),
+    roadGradePercent: z.number(), drivewayCrossSlopePercent: z.number(),
+    edges: z.object({ left: z.array(pointSchema), right: z.array(pointSchema) }),
+    stakes: z.array(z.object({
+      stationFt: z.number(), crossSlopePercent: z.number(), leftOffsetFt: z.number(), leftElevationFt: z.number(),
+      centreElevationFt: z.number(), rightOffsetFt: z.number(), rightElevationFt: z.number(),
+    })),
+  }).optional(),
 }).loose();
 const proposalSchema = z.object({
   feasible: z.boolean(),
@@ -42,6 +54,8 @@ export interface SavedCheck {
   proposal: z.output<typeof proposalSchema> | null;
   culvert: z.output<typeof culvertInputSchema> | null;
   culvertSummary: EntranceReport['culvert'] | null;
+  /** Checks saved before the apron was an input have none. */
+  apron: EntranceReport['apron'] | null;
   laser: ReturnType<typeof laserSetup> | null;
   laserInput: z.output<typeof laserSetupInputSchema> | null;
 }
@@ -126,6 +140,7 @@ export async function loadJobCheck(db: DbOrTx, requestId: string): Promise<Saved
     proposal: pick(proposalSchema, results.proposal),
     culvert: pick(culvertInputSchema, inputs.culvert as CulvertInput | undefined),
     culvertSummary: report?.culvert ?? null,
+    apron: report?.apron ?? null,
     laser: laserOf(laserInput, results.laser),
     laserInput,
   };

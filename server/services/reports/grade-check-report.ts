@@ -6,6 +6,7 @@ import { chartInputFor } from '../../../shared/charts/chart-input';
 import type { GradeCheck } from '../grade-checks/grade-checks.service';
 import { chartFont, registerReportFonts, reportFonts } from './pdf-fonts';
 import { drawTable, heading, paragraph } from './pdf-table';
+import { apronSection } from './report-apron';
 import { designSections } from './report-design';
 import { findingCells, profileValueRows, reportCautions } from './report-words';
 
@@ -26,7 +27,12 @@ function siteWords(check: GradeCheck): string {
   if (road) {
     parts.push(`road grade ${Math.abs(road.gradePercent)}% ${road.gradePercent >= 0 ? 'rising' : 'falling'} to the right facing into the property`);
     parts.push(`road-edge elevation ${road.edgeElevationFt.toFixed(2)} ft`);
-    if (road.crossSlopePercent !== undefined) parts.push(`cross slope ${road.crossSlopePercent}%`);
+    if (road.crossSlopePercent !== undefined && !check.inputs.roadSide) parts.push(`cross slope ${road.crossSlopePercent}%`);
+  }
+  const side = check.inputs.roadSide;
+  if (side) {
+    parts.push(`road cross slope ${side.roadCrossSlopePercent}% toward the road edge`);
+    if (side.shoulderWidthFt > 0) parts.push(`a ${side.shoulderWidthFt} ft shoulder at ${side.shoulderSlopePercent}% toward the road edge`);
   }
   if (sight?.speedMph !== undefined) parts.push(`speed ${sight.speedMph} mph`);
   if (geometry?.widthFt !== undefined) parts.push(`entrance ${geometry.widthFt} ft wide`);
@@ -77,6 +83,7 @@ export function buildGradeCheckReport(data: ReportData): Promise<Buffer> {
   ], findings.map((f) => findingCells(f, formatStation, profile.units)), { highlight: (i) => findings[i].status === 'fail' });
 
   designSections(doc, check);
+  apronSection(doc, check);
 
   heading(doc, `Rule profile: ${data.jurisdiction.name}, version ${data.version.version}`);
   drawTable(doc, [{ title: 'Value', width: 170 }, { title: 'Setting', width: 80 }, { title: 'Source', width: 266 }], profileValueRows(profile));

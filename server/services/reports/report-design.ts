@@ -1,4 +1,5 @@
 import { formatStation } from '../../../shared/engine';
+import { headwaterWords } from '../../../shared/charts/check-words';
 import { haulEstimate, loadsText } from '../../../shared/charts/cut-fill-table';
 import type { GradeCheck } from '../grade-checks/grade-checks.service';
 import { drawTable, heading, paragraph } from './pdf-table';
@@ -31,6 +32,8 @@ export function designSections(doc: PDFKit.PDFDocument, check: GradeCheck) {
       `full-flow capacity ${maybe(culvert.capacityCfs, 'cfs')} for a design flow of ${maybe(culvert.designFlowCfs, 'cfs')}`,
       `headwater ${maybe(culvert.headwaterFt, 'ft')} (HW/D ${maybe(culvert.hwOverD, 'HW/D').replace(' HW/D', '')})`,
     ].join('; ') + '.');
+    const headwater = headwaterWords(culvert);
+    if (headwater) paragraph(doc, headwater);
   }
   const sight = results.report.sight;
   if (sight) {

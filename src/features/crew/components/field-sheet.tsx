@@ -6,6 +6,7 @@ import { cutFillWords, day, ft, pct, station } from './format';
 import { ProfileChart } from './profile-chart';
 import { SheetCulvert } from './sheet-culvert';
 import { SheetLaser } from './sheet-laser';
+import { SheetWarp } from './sheet-warp';
 
 // One sheet of paper: narrow margins, and the sheet's own type sizes take over from the screen's large ones.
 const pageCss = '@page { size: letter portrait; margin: 0.35in; }';
@@ -63,6 +64,8 @@ export function FieldSheet({ id }: { id: string }) {
       </Section>
 
       <Section title="Laser">{s.laser ? <SheetLaser laser={s.laser} /> : <p>No laser setup in the saved check.</p>}</Section>
+
+      {s.apron && <Section title="Warp stakes at the entrance edges"><SheetWarp apron={s.apron} /></Section>}
 
       <div className="grid gap-4 md:grid-cols-[2fr_1fr] print:grid-cols-[2fr_1fr] print:gap-2">
         <Section title="Design profile">

@@ -11,6 +11,7 @@ export function SheetCulvert({ culvert }: { culvert: CulvertSheet | null }) {
       <dt className="font-semibold">Outlet invert</dt><dd>{ft(culvert.outletInvertFt)}</dd>
       <dt className="font-semibold">Slope</dt><dd>{culvert.slopePercent === null ? '—' : `${pct(culvert.slopePercent)} toward the outlet`}</dd>
       <dt className="font-semibold">Cover</dt><dd>{culvert.coverIn === null ? '—' : `${culvert.coverIn.toFixed(1)} in over the crown`}</dd>
+      {culvert.headwaterText && <><dt className="font-semibold">Headwater</dt><dd>{culvert.headwaterText}</dd></>}
     </dl>
   );
 }

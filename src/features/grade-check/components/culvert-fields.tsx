@@ -1,9 +1,11 @@
 import { inletTypes } from '@shared/engine';
-import type { FieldErrors } from '../lib/read-number';
+import { type FieldErrors, withLabel } from '../lib/read-number';
 import type { SurveyState } from '../lib/survey-state';
 import { ChoiceBox, NumberBox } from './number-box';
 
 type Culvert = SurveyState['culvert'];
+
+const TAILWATER = 'Tailwater depth in the outlet ditch (ft)';
 
 const inletWords: Record<(typeof inletTypes)[number], string> = {
   'concrete-square-headwall': 'Concrete, square edge with headwall',
@@ -35,6 +37,7 @@ export function CulvertFields({ culvert, errors, onChange }: { culvert: Culvert;
           <NumberBox label="or ditch depth at the inlet (ft)" hint="Below the road edge; used when the flowline is blank" value={culvert.inletDitchDepthFt} onChange={(inletDitchDepthFt) => onChange({ inletDitchDepthFt })} />
           <NumberBox label="Flowline (invert) at the outlet (ft)" value={culvert.outletInvertFt} error={e('outletInvertFt')} onChange={(outletInvertFt) => onChange({ outletInvertFt })} />
           <NumberBox label="or ditch depth at the outlet (ft)" hint="Below the road edge; used when the flowline is blank" value={culvert.outletDitchDepthFt} onChange={(outletDitchDepthFt) => onChange({ outletDitchDepthFt })} />
+          <NumberBox label={TAILWATER} hint="Water standing above the outlet invert at the design flow; blank: a free outlet" value={culvert.tailwaterDepthFt} error={withLabel(TAILWATER, e('tailwaterDepthFt'))} onChange={(tailwaterDepthFt) => onChange({ tailwaterDepthFt })} />
           <NumberBox label="Driveway surface over the pipe (ft)" hint="Sets the cover and the pipe length" value={culvert.surfaceElevationFt} error={e('surfaceElevationFt')} onChange={(surfaceElevationFt) => onChange({ surfaceElevationFt })} />
           <NumberBox label="Pipe length (ft)" hint="Blank: the check says what length to order" value={culvert.lengthFt} error={e('lengthFt')} onChange={(lengthFt) => onChange({ lengthFt })} />
           <ChoiceBox label="Flow" value={culvert.flow} options={[['design', 'Design flow given'], ['rational', 'From the drainage area (rational method)']]} onChange={(flow) => onChange({ flow })} />

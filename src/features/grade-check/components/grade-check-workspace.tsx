@@ -9,6 +9,8 @@ import { useSaveGradeCheck } from '../api/save-grade-check';
 import { surveyFromInputs } from '../lib/survey-from-inputs';
 import { initialSurvey, type SurveyState } from '../lib/survey-state';
 import { useLiveCheck } from '../lib/use-live-check';
+import { ApronFields } from './apron-fields';
+import { ApronPanel } from './apron-panel';
 import { CentrelineTable } from './centreline-table';
 import { CulvertFields } from './culvert-fields';
 import { GeometryFields } from './geometry-fields';
@@ -59,6 +61,7 @@ export function GradeCheckWorkspace({ request, checks }: { request: CheckRequest
         <Panel title="The centreline"><CentrelineTable centreline={survey.centreline} errors={errors} onChange={update('centreline')} /></Panel>
         <Panel title="Culvert"><CulvertFields culvert={survey.culvert} errors={errors} onChange={update('culvert')} /></Panel>
         <Panel title="Geometry"><GeometryFields geometry={survey.geometry} errors={errors} onChange={update('geometry')} /></Panel>
+        <Panel title="Entrance edges"><ApronFields apron={survey.apron} errors={errors} onChange={update('apron')} /></Panel>
         <Panel title="Laser and stakes"><StakesEditor laser={survey.laser} errors={errors} onChange={update('laser')} /></Panel>
       </div>
       <div className="space-y-6">
@@ -83,6 +86,7 @@ export function GradeCheckWorkspace({ request, checks }: { request: CheckRequest
             />
           </Panel>
         )}
+        {rules && <Panel title="Warp stakes for the entrance edges"><ApronPanel apron={live.results?.report.apron} /></Panel>}
         {rules && <Panel title="Laser settings for the crew"><LaserPanel laser={live.results?.laser} /></Panel>}
       </div>
     </div>

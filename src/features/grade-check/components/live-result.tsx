@@ -1,3 +1,4 @@
+import { headwaterWords } from '@shared/charts/check-words';
 import type { RuleProfile } from '@shared/engine';
 import { Notice } from '@/components/ui/notice';
 import type { LiveCheck } from '../lib/use-live-check';
@@ -20,6 +21,7 @@ export function LiveResult({ live, rules }: { live: LiveCheck; rules: RuleProfil
           {report.summary.text}
         </Notice>
       </div>
+      {report.culvert && headwaterWords(report.culvert) && <p data-testid="culvert-headwater" className="text-sm">{headwaterWords(report.culvert)}</p>}
       <ProfileChartView inputs={live.inputs} results={live.results} rules={rules} />
       <FindingsTable findings={report.findings} units={rules.units} />
     </div>

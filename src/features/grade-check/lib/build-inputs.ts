@@ -6,6 +6,7 @@ import { centrelineColumns, type SurveyState } from './survey-state';
 
 /** The saved check's inputs, in the shape the server stores (and the crew's field sheet reads). */
 export interface SavedInputs extends CheckEntranceInput {
+  // Checks saved before the road side was an input kept the cross slope here, as a note only.
   road?: { gradePercent: number; edgeElevationFt: number; crossSlopePercent?: number };
   laser?: LaserSetupInput;
   design?: ProposeProfileInput & { applied: boolean; haul?: HaulChoice };
@@ -33,6 +34,29 @@ function readCentreline(s: SurveyState['centreline'], errors: FieldErrors): Prof
   const instrumentHeightFt = readNumber(s.instrumentHeightFt, 'profile.instrumentHeightFt', errors, true);
   if (instrumentHeightFt === undefined) return undefined;
   return { kind: 'rod-readings', instrumentHeightFt, readings: ok.map((p) => ({ stationFt: p.stationFt, rodFt: p.value })) };
+}
+
+/** The road beside the entrance; left out (the break not checked) until its cross slope is typed. */
+function readRoadSide(r: SurveyState['road'], errors: FieldErrors): CheckEntranceInput['roadSide'] {
+  const roadCrossSlopePercent = readNumber(r.crossSlopePercent, 'roadSide.roadCrossSlopePercent', errors);
+  const shoulderWidthFt = readNumber(r.shoulderWidthFt, 'roadSide.shoulderWidthFt', errors);
+  const shoulderSlopePercent = readNumber(r.shoulderSlopePercent, 'roadSide.shoulderSlopePercent', errors);
+  if (shoulderWidthFt && shoulderSlopePercent === undefined) errors['roadSide.shoulderSlopePercent'] ??= 'give the shoulder slope for a shoulder this wide';
+  if (roadCrossSlopePercent === undefined) {
+    if (shoulderWidthFt !== undefined || shoulderSlopePercent !== undefined) errors['roadSide.roadCrossSlopePercent'] ??= 'give the road cross slope with the shoulder';
+    return undefined;
+  }
+  return { roadCrossSlopePercent, shoulderWidthFt, shoulderSlopePercent };
+}
+
+/** The warped apron is checked only when asked for; its width is the geometry's top width. */
+function readApron(a: SurveyState['apron'], roadGradePercent: number, widthFt: number | undefined, errors: FieldErrors): CheckEntranceInput['apron'] {
+  if (!a.checked) return undefined;
+  if (widthFt === undefined) errors['geometry.widthFt'] ??= 'give the top width to place the edges of the entrance';
+  const drivewayCrossSlopePercent = readNumber(a.drivewayCrossSlopePercent, 'apron.drivewayCrossSlopePercent', errors, true);
+  const warpLengthFt = readNumber(a.warpLengthFt, 'apron.warpLengthFt', errors);
+  const stakeIntervalFt = readNumber(a.stakeIntervalFt, 'apron.stakeIntervalFt', errors, true);
+  return { roadGradePercent, drivewayCrossSlopePercent, warpLengthFt, stakeIntervalFt };
 }
 
 /** A flowline typed as an elevation, or as the ditch's depth below the road edge there. */
@@ -67,7 +91,7 @@ function readCulvert(c: SurveyState['culvert'], errors: FieldErrors, edgeFt: num
     inletInvertFt: readFlowline(c.inletInvertFt, c.inletDitchDepthFt, 'inletInvertFt', edgeFt, errors),
     outletInvertFt: readFlowline(c.outletInvertFt, c.outletDitchDepthFt, 'outletInvertFt', edgeFt, errors),
     surfaceElevationFt: n(c.surfaceElevationFt, 'surfaceElevationFt'), lengthFt: n(c.lengthFt, 'lengthFt'), topWidthFt, sideSlopeHPerV,
-    designFlowCfs: c.flow === 'design' ? n(c.designFlowCfs, 'designFlowCfs') : undefined,
+    designFlowCfs: c.flow === 'design' ? n(c.designFlowCfs, 'designFlowCfs') : undefined, tailwaterDepthFt: n(c.tailwaterDepthFt, 'tailwaterDepthFt'),
     drainage: drainage as { runoffC: number; intensityInPerHr: number; areaAcres: number } | undefined,
   };
   return culvert as NonNullable<CheckEntranceInput['culvert']>;
@@ -84,7 +108,7 @@ export function buildInputs(s: SurveyState, rules: RuleProfile | undefined): { i
   const roadEdgeStationFt = readStation(s.road.edgeStation, 'roadEdgeStationFt', errors);
   const roadGrade = readNumber(s.road.gradePercent, 'road.gradePercent', errors, true);
   const edgeElevation = readNumber(s.road.edgeElevationFt, 'road.edgeElevationFt', errors);
-  const crossSlopePercent = readNumber(s.road.crossSlopePercent, 'road.crossSlopePercent', errors);
+  const roadSide = readRoadSide(s.road, errors);
   const g = s.geometry;
   const topWidthFt = readNumber(g.topWidthFt, 'geometry.widthFt', errors);
   const sideSlopeHPerV = readNumber(g.sideSlopeHPerV, 'design.template.cutSlopeHPerV', errors);
@@ -115,12 +139,16 @@ export function buildInputs(s: SurveyState, rules: RuleProfile | undefined): { i
 
   const signedRoadGrade = s.road.rises === 'right' ? roadGrade : -roadGrade;
   const checked: ProfileInput = s.design.applied ? { kind: 'elevations', points: s.design.applied } : surveyed;
-  const laser = rules ? laserFromProfile(checked, roadEdgeStationFt, rules, { roadGradePercent: signedRoadGrade, receiverOffsetFt, stakes }) : undefined;
+  const apron = readApron(s.apron, signedRoadGrade, topWidthFt, errors);
+  // The driveway setup carries the cross slope the warp ends on, so the stakes and the second plane agree.
+  const crew = { roadGradePercent: signedRoadGrade, receiverOffsetFt, stakes, drivewayCrossSlopePercent: apron?.drivewayCrossSlopePercent, warpLengthFt: apron?.warpLengthFt };
+  const laser = rules ? laserFromProfile(checked, roadEdgeStationFt, rules, crew) : undefined;
   const edge = edgeElevation ?? laser?.originElevationFt;
   const inputs: SavedInputs = {
     profile: checked, roadEdgeStationFt, culvert, geometry,
     sight: Object.values(sight).some((v) => typeof v === 'number') ? sight : undefined,
-    road: edge === undefined ? undefined : { gradePercent: signedRoadGrade, edgeElevationFt: edge, crossSlopePercent },
+    road: edge === undefined ? undefined : { gradePercent: signedRoadGrade, edgeElevationFt: edge }, roadSide,
+    apron,
     laser,
     design: edge === undefined ? undefined : {
       existing: surveyed, roadEdgeElevationFt: edge, targetEndElevationFt: target, applied: Boolean(s.design.applied),

@@ -1,4 +1,4 @@
-import { elevationAt, normalizeProfile, type LaserSetupInput, type ProfileInput, type RuleProfile } from '@shared/engine';
+import { apronWarpLength, elevationAt, normalizeProfile, type LaserSetupInput, type ProfileInput, type RuleProfile } from '@shared/engine';
 
 /**
  * The laser plane follows the profile being built: its origin at the road edge, the landing axis at the landing's
@@ -6,7 +6,7 @@ import { elevationAt, normalizeProfile, type LaserSetupInput, type ProfileInput,
  */
 export function laserFromProfile(
   profile: ProfileInput, roadEdgeStationFt: number, rules: RuleProfile,
-  crew: { roadGradePercent: number; receiverOffsetFt: number; stakes: LaserSetupInput['stakes'] },
+  crew: { roadGradePercent: number; receiverOffsetFt: number; stakes: LaserSetupInput['stakes']; drivewayCrossSlopePercent?: number; warpLengthFt?: number },
 ): LaserSetupInput | undefined {
   let points;
   try {
@@ -25,5 +25,10 @@ export function laserFromProfile(
   return {
     originElevationFt: round(origin), roadGradePercent: crew.roadGradePercent, landingGradePercent,
     landingLengthFt: landingEnd - roadEdgeStationFt, drivewayGradePercent, receiverOffsetFt: crew.receiverOffsetFt, stakes: crew.stakes,
+    // With a warped apron the driveway setup takes the cross slope the warp ends on, over the apron's own warp.
+    ...(crew.drivewayCrossSlopePercent === undefined ? {} : {
+      drivewayCrossSlopePercent: crew.drivewayCrossSlopePercent,
+      warpLengthFt: apronWarpLength(crew.warpLengthFt, rules).warpLengthFt,
+    }),
   };
 }

@@ -28,13 +28,14 @@ export function surveyFromInputs(inputs: SavedInputs): SurveyState {
   return {
     road: {
       ...s.road, gradePercent: road ? String(Math.abs(road.gradePercent)) : '0', rises: road && road.gradePercent < 0 ? 'left' : 'right',
-      edgeElevationFt: str(road?.edgeElevationFt), edgeStation: formatStation(inputs.roadEdgeStationFt ?? 0), crossSlopePercent: str(road?.crossSlopePercent),
+      edgeElevationFt: str(road?.edgeElevationFt), edgeStation: formatStation(inputs.roadEdgeStationFt ?? 0), crossSlopePercent: str(inputs.roadSide?.roadCrossSlopePercent ?? road?.crossSlopePercent),
+      shoulderWidthFt: str(inputs.roadSide?.shoulderWidthFt || undefined), shoulderSlopePercent: str(inputs.roadSide?.shoulderSlopePercent),
       sightLeftFt: str(inputs.sight?.measuredLeftFt), sightRightFt: str(inputs.sight?.measuredRightFt), movements: inputs.sight?.movements ?? 'all',
     },
     centreline: centrelineOf(surveyed),
     culvert: c ? {
       ...s.culvert, present: true, diameterIn: String(c.diameterIn), inlet: c.inlet ?? s.culvert.inlet, manningN: String(c.manningN),
-      inletInvertFt: String(c.inletInvertFt), outletInvertFt: String(c.outletInvertFt), surfaceElevationFt: str(c.surfaceElevationFt), lengthFt: str(c.lengthFt),
+      inletInvertFt: String(c.inletInvertFt), outletInvertFt: String(c.outletInvertFt), surfaceElevationFt: str(c.surfaceElevationFt), lengthFt: str(c.lengthFt), tailwaterDepthFt: str(c.tailwaterDepthFt),
       flow: c.drainage ? 'rational' : 'design', designFlowCfs: str(c.designFlowCfs), areaAcres: str(c.drainage?.areaAcres), runoffC: str(c.drainage?.runoffC),
       intensityInPerHr: str(c.drainage?.intensityInPerHr),
     } : s.culvert,
@@ -47,6 +48,10 @@ export function surveyFromInputs(inputs: SavedInputs): SurveyState {
       receiverOffsetFt: str(inputs.laser?.receiverOffsetFt ?? 6),
       stakes: (inputs.laser?.stakes ?? []).map((k) => ({ key: newKey(), label: k.label, offsetFt: String(k.offsetFt), distanceFt: String(k.distanceFt), rodReadingFt: String(k.rodReadingFt) })),
     },
+    apron: inputs.apron ? {
+      checked: true, drivewayCrossSlopePercent: str(inputs.apron.drivewayCrossSlopePercent ?? 0), warpLengthFt: str(inputs.apron.warpLengthFt),
+      stakeIntervalFt: str(inputs.apron.stakeIntervalFt ?? 5),
+    } : s.apron,
     design: {
       proposed: Boolean(inputs.design), applied, targetEndElevationFt: str(inputs.design?.targetEndElevationFt),
       soil: inputs.design?.haul?.soil ?? 'loam', truckCuYd: str(inputs.design?.haul?.truckCuYd ?? 10),

@@ -9,16 +9,18 @@ export interface StakeRow { key: string; label: string; offsetFt: string; distan
 export interface SurveyState {
   road: {
     gradePercent: string; rises: 'right' | 'left'; edgeElevationFt: string; edgeStation: string; crossSlopePercent: string;
+    shoulderWidthFt: string; shoulderSlopePercent: string;
     speedMph: string; sightLeftFt: string; sightRightFt: string; movements: 'all' | 'right-only';
   };
   centreline: { mode: CentrelineMode; instrumentHeightFt: string; startStation: string; startElevationFt: string; rows: CentrelineRow[] };
   culvert: {
     present: boolean; diameterIn: string; inlet: string; manningN: string; inletInvertFt: string; outletInvertFt: string;
-    inletDitchDepthFt: string; outletDitchDepthFt: string;
+    inletDitchDepthFt: string; outletDitchDepthFt: string; tailwaterDepthFt: string;
     surfaceElevationFt: string; lengthFt: string; flow: 'design' | 'rational'; designFlowCfs: string; areaAcres: string; runoffC: string; intensityInPerHr: string;
   };
   geometry: { topWidthFt: string; sideSlopeHPerV: string; flareRadiusFt: string; distanceToIntersectionFt: string; distanceToPropertyLineFt: string };
   laser: { receiverOffsetFt: string; stakes: StakeRow[] };
+  apron: { checked: boolean; drivewayCrossSlopePercent: string; warpLengthFt: string; stakeIntervalFt: string };
   design: { proposed: boolean; applied: ProfilePoint[] | null; targetEndElevationFt: string; soil: Soil; truckCuYd: string };
 }
 
@@ -28,14 +30,15 @@ export const emptyRow = (): CentrelineRow => ({ key: newKey(), station: '', valu
 
 export function initialSurvey(speedMph?: number | null): SurveyState {
   return {
-    road: { gradePercent: '0', rises: 'right', edgeElevationFt: '', edgeStation: '0+00', crossSlopePercent: '', speedMph: speedMph ? String(speedMph) : '', sightLeftFt: '', sightRightFt: '', movements: 'all' },
+    road: { gradePercent: '0', rises: 'right', edgeElevationFt: '', edgeStation: '0+00', crossSlopePercent: '', shoulderWidthFt: '', shoulderSlopePercent: '', speedMph: speedMph ? String(speedMph) : '', sightLeftFt: '', sightRightFt: '', movements: 'all' },
     centreline: { mode: 'elevations', instrumentHeightFt: '', startStation: '0+00', startElevationFt: '', rows: [emptyRow(), emptyRow(), emptyRow()] },
     culvert: {
-      present: false, diameterIn: '18', inlet: 'cmp-projecting', manningN: '0.024', inletInvertFt: '', outletInvertFt: '', inletDitchDepthFt: '', outletDitchDepthFt: '', surfaceElevationFt: '',
+      present: false, diameterIn: '18', inlet: 'cmp-projecting', manningN: '0.024', inletInvertFt: '', outletInvertFt: '', inletDitchDepthFt: '', outletDitchDepthFt: '', tailwaterDepthFt: '', surfaceElevationFt: '',
       lengthFt: '', flow: 'design', designFlowCfs: '', areaAcres: '', runoffC: '', intensityInPerHr: '',
     },
     geometry: { topWidthFt: '12', sideSlopeHPerV: '2', flareRadiusFt: '', distanceToIntersectionFt: '', distanceToPropertyLineFt: '' },
     laser: { receiverOffsetFt: '6', stakes: [] },
+    apron: { checked: false, drivewayCrossSlopePercent: '0', warpLengthFt: '', stakeIntervalFt: '5' },
     design: { proposed: false, applied: null, targetEndElevationFt: '', soil: 'loam', truckCuYd: '10' },
   };
 }

@@ -48,6 +48,7 @@ export const profileGroups: { title: string; fields: ProfileField[] }[] = [
     { path: 'geometry.minFlareRadiusFt', label: 'Smallest flare or return radius', unit: 'ft', optional: true },
     { path: 'geometry.minDistanceToIntersectionFt', label: 'Nearest an intersection may be', unit: 'ft', optional: true },
     { path: 'geometry.minDistanceToPropertyLineFt', label: 'Nearest the property line may be', unit: 'ft', optional: true },
+    { path: 'geometry.warpLengthFt', label: 'Warp length, road grade to driveway cross slope', unit: 'ft', optional: true },
   ] },
   { title: 'As-built tolerance', fields: [
     { path: 'asBuilt.gradeTolerancePercent', label: 'Grade tolerance', unit: '%' },
