@@ -61,7 +61,8 @@ describe('the road edge, outlet control and the warped apron on screen', () => {
     await page.getByLabel('Warp stake every (ft)').fill('10');
     const stakes = page.getByRole('table', { name: 'Warp stakes' });
     await stakes.waitFor();
-    await expect.poll(() => stakes.locator('tbody tr').count()).toBe(3);
+    // Stakes every 10 ft through the 15 ft landing and the 20 ft warp after it: 0+00 to 0+30, then 0+35.
+    await expect.poll(() => stakes.locator('tbody tr').count()).toBe(5);
     expect(await page.locator('tr[data-rule="apron.left.landing.max-grade"]').textContent()).toContain('Left edge of the entrance: landing grade (rising)');
     await saveScreenshot(page, 'grade-check-edges-live');
 
@@ -79,7 +80,7 @@ describe('the road edge, outlet control and the warped apron on screen', () => {
     await signInAs(crewPage, crewLead.email);
     await crewPage.goto(appUrl(`/crew/jobs/${request.id}/field-sheet`));
     await crewPage.getByRole('heading', { name: 'Warp stakes at the entrance edges' }).waitFor();
-    expect(await crewPage.getByRole('table', { name: 'Warp stakes' }).locator('tbody tr').count()).toBe(3);
+    expect(await crewPage.getByRole('table', { name: 'Warp stakes' }).locator('tbody tr').count()).toBe(5);
     await crewPage.getByText(/control governs/).waitFor();
     await saveScreenshot(crewPage, 'field-sheet-warp-stakes');
     await phone.close();

@@ -54,7 +54,9 @@ describe('road edge, outlet control and the warped apron in the saved check', ()
     expect(ids).toEqual(expect.arrayContaining(['grade.road-edge-change', 'apron.left.landing.max-grade', 'apron.right.grade.max-change', 'apron.left.grade.road-edge-change']));
     expect(check.results.report.culvert.control).toMatch(/^(inlet|outlet)$/);
     expect(check.results.report.culvert.outletHeadwaterFt).toBeGreaterThan(0);
-    expect(check.results.report.apron.stakes.map((s: { stationFt: number }) => s.stationFt)).toEqual([0, 10, 20]);
+    expect(check.results.report.apron.stakes.map((s: { stationFt: number }) => s.stationFt)).toEqual([0, 10, 20, 30, 35]);
+    // The 15 ft landing keeps the road's grade across; the 20 ft warp after it ends at 0+35.
+    expect(check.results.report.apron.warpStartStationFt).toBe(15);
   });
 
   it('an older check without the new inputs saves and re-runs, with the road-edge break and the edges not checked', async () => {
@@ -99,7 +101,7 @@ describe('road edge, outlet control and the warped apron in the saved check', ()
     await cast.staff.agent.post(`/api/grade-checks/${res.body.check.id}/attach`).send({ shareWithApplicant: false }).expect(200);
     await t.ctx.db.update(requests).set({ status: 'released' }).where(eq(requests.id, request.id));
     const sheet = (await cast.staff.agent.get(`/api/crew/jobs/${request.id}/field-sheet`).expect(200)).body;
-    expect(sheet.apron.stakes).toHaveLength(3);
+    expect(sheet.apron.stakes).toHaveLength(5);
     expect(sheet.apron.stakes[0]).toMatchObject({ stationFt: 0, leftOffsetFt: -8, rightOffsetFt: 8 });
     // The right edge starts up the road's 1.5% grade over half the 16 ft entrance.
     expect(sheet.apron.stakes[0].rightElevationFt - sheet.apron.stakes[0].centreElevationFt).toBeCloseTo(0.12, 9);
