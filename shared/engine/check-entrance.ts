@@ -67,7 +67,7 @@ export function checkEntrance(input: CheckEntranceInput, ruleProfile: RuleProfil
   }
 
   // Road-side segments end at the road edge, so only the scrape sees them; the landing and grade rules start at the edge.
-  const graded = checkProfileRules(withRoadSide(points, roadEdge, p.roadSide, rules.designVehicle), rules, roadEdge, p.scrapeStepFt);
+  const graded = checkProfileRules(withRoadSide(points, roadEdge, p.roadSide, rules.designVehicle), rules, roadEdge, p.scrapeStepFt, points);
   const profile = { ...graded, segments: p.roadSide ? segmentGrades(points) : graded.segments };
   const landingEnd = Math.min(roadEdge + rules.landing.lengthFt, points[points.length - 1].stationFt);
   // A car leaving climbs toward the road when the landing falls away from it.

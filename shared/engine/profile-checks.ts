@@ -96,12 +96,17 @@ function scrapeFindings(scrape: ScrapeResult, rules: RuleProfile): Finding[] {
   return findings;
 }
 
-/** Landing, grade, grade-break and scrape findings for a normalised profile. */
+/**
+ * Landing, grade, grade-break, low-point and scrape findings for a normalised profile. `surveyed` is the ground as
+ * shot, when `points` also carries the road side drawn from its stated slopes: the car drives over those, but water
+ * on the road's own cross slope runs along the road and its ditch, so only surveyed shots can hold it.
+ */
 export function checkProfileRules(
   points: readonly ProfilePoint[],
   rules: RuleProfile,
   roadEdgeStationFt: number,
   stepFt: number,
+  surveyed: readonly ProfilePoint[] = points,
 ): ProfileCheck {
   const segments = segmentGrades(points);
   const landingEnd = roadEdgeStationFt + rules.landing.lengthFt;
@@ -115,7 +120,7 @@ export function checkProfileRules(
   const findings = [
     ...landingFindings(landing, rules, surveyedFt),
     ...gradeFindings(entrance, beyond, rules),
-    pondingFinding(points, roadEdgeStationFt, rules.minDrainageGradePercent),
+    pondingFinding(surveyed, roadEdgeStationFt, rules.minDrainageGradePercent),
     ...scrapeFindings(scrape, rules),
   ];
   return { segments, findings, scrape };

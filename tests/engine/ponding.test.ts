@@ -29,6 +29,14 @@ describe('a low point that holds water is a finding, with its station', () => {
     expect(f.measured).toBeCloseTo(2.4, 9);
   });
 
+  it('the road side drawn from its stated slopes is driven over but holds no water: the road drains along its edge', () => {
+    // A road falling 2% to its edge and a driveway rising 3% from it: the usual entrance, not a pond (common practice
+    // (no source): water on the road's cross slope runs along the edge to the ditch the culvert carries).
+    const crowned = checkEntrance({ profile: profileFromRuns([[20, 3], [40, 8]]), roadEdgeStationFt: 0, vehicle: highCar, roadSide: { roadCrossSlopePercent: 2 } }, drained);
+    expect(findingOf(crowned.findings, 'drainage.low-point').status).toBe('pass');
+    expect(findingOf(crowned.findings, 'grade.road-edge-change').measured).toBeCloseTo(5, 9);
+  });
+
   it('a profile that drains all the way, or whose low point is on the road itself, passes', () => {
     expect(lowPoint(profileFromRuns([[20, 2], [40, 8]])).status).toBe('pass');
     const roadDip = [{ stationFt: -20, elevationFt: 100 }, { stationFt: -10, elevationFt: 99.8 }, ...profileFromRuns([[20, 2], [40, 8]])];
