@@ -7,7 +7,7 @@ const across = (v: number) => (v === 0 ? 'level across' : `${pct(Math.abs(v))} $
 /** The warp in one sentence: from what, to what, over how long, with the edges where. Screen, report and field sheet alike. */
 export function warpWords(apron: ApronSummary): string {
   const from = apron.warpLengthFrom === 'input' ? 'as entered' : apron.warpLengthFrom === 'rule profile' ? "the rule profile's" : 'the landing length';
-  return `Facing into the property, the landing keeps the road's grade (${across(apron.roadGradePercent)}) across it; from ` +
+  return `Facing into the property, the landing is ${across(apron.roadGradePercent)}, as the road is; from ` +
     `${formatStation(apron.warpStartStationFt)}, where the landing ends, the apron turns to the driveway's cross slope ` +
     `(${across(apron.drivewayCrossSlopePercent)}) over ${apron.warpLengthFt} ft (${from}); its edges run ${apron.halfWidthFt} ft either side of the centreline.`;
 }
