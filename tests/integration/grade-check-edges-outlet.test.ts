@@ -1,13 +1,12 @@
 import { mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { eq } from 'drizzle-orm';
-import { PDFParse } from 'pdf-parse';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { requests } from '../../server/db/schema';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
 import { createTestApp, type TestApp } from '../setup/test-app';
-import { currentVersionId, surveyInputs } from './grade-check-survey';
+import { currentVersionId, pdfText, surveyInputs } from './grade-check-survey';
 
 let t: TestApp;
 let cast: Cast;
@@ -18,15 +17,6 @@ beforeAll(async () => {
   elderbrook = await currentVersionId(t.ctx.db, 'town-of-elderbrook');
 });
 afterAll(() => t.close());
-
-async function pdfText(bytes: Buffer) {
-  const parser = new PDFParse({ data: bytes });
-  try {
-    return (await parser.getText()).text.replace(/\s+/g, ' ');
-  } finally {
-    await parser.destroy();
-  }
-}
 
 /** The invented site with the road side, a tailwater in the outlet ditch and the warped apron. */
 const withEdges = () => {

@@ -2,14 +2,13 @@ import { execFileSync } from 'node:child_process';
 import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { eq } from 'drizzle-orm';
-import { PDFParse } from 'pdf-parse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { inject } from 'vitest';
 import { emails, requestEvents } from '../../server/db/schema';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
 import { createTestApp, type TestApp } from '../setup/test-app';
-import { currentVersionId, surveyInputs } from './grade-check-survey';
+import { currentVersionId, pdfText, surveyInputs } from './grade-check-survey';
 
 let t: TestApp;
 let cast: Cast;
@@ -20,15 +19,6 @@ beforeAll(async () => {
   marrow = await currentVersionId(t.ctx.db, 'marrow-county');
 });
 afterAll(() => t.close());
-
-async function pdfText(bytes: Buffer) {
-  const parser = new PDFParse({ data: bytes });
-  try {
-    return (await parser.getText()).text.replace(/\s+/g, ' ');
-  } finally {
-    await parser.destroy();
-  }
-}
 
 async function savedAndAttached(share: boolean) {
   const request = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'visit_booked' });

@@ -1,3 +1,4 @@
+import { PDFParse } from 'pdf-parse';
 import { eq } from 'drizzle-orm';
 import type { DbOrTx } from '../../server/db/client';
 import { jurisdictions } from '../../server/db/schema';
@@ -42,4 +43,14 @@ export async function currentVersionId(db: DbOrTx, slug: 'marrow-county' | 'town
   const [row] = await db.select({ id: jurisdictions.currentVersionId }).from(jurisdictions).where(eq(jurisdictions.slug, slug));
   if (!row?.id) throw new Error(`${slug} has no current version`);
   return row.id;
+}
+
+/** A PDF's text with its runs of white space made one space, so a test can look for a sentence across lines. */
+export async function pdfText(bytes: Buffer) {
+  const parser = new PDFParse({ data: bytes });
+  try {
+    return (await parser.getText()).text.replace(/\s+/g, ' ');
+  } finally {
+    await parser.destroy();
+  }
 }
