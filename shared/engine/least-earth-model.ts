@@ -1,96 +1,121 @@
-import type { Constraint, Model } from 'yalps';
+import type { LinearModel } from './design-solver';
 import type { ProfilePoint } from './profile';
 import type { RuleProfile } from './rule-profile';
+import { SparseRows } from './sparse-rows';
+import { STATION_TOLERANCE_FT } from './tolerance';
+import { clearanceRows, type ClearanceBudget } from './clearance-rows';
 
-/** Allowed grade of one segment, as a fraction. */
-export interface GradeLimits {
-  lo: number;
-  hi: number;
+/** The grades one segment may take when it rises away from the road and when it falls; null when it cannot. */
+export interface SegmentRanges {
+  rise: { lo: number; hi: number } | null;
+  fall: { lo: number; hi: number } | null;
   inLanding: boolean;
 }
 
-// LP answers sit on their constraints to within the solver's precision; pulling every limit in by this much
-// keeps the answer on the right side of the exact check that follows.
-const SHRINK = 1e-7;
+/**
+ * The solver meets its rows to about 1e-9 ft; pulling each grade limit in by this much (a ten-thousandth of a
+ * percent) keeps its answer on the right side of the exact check that follows. A design that must sit exactly
+ * on a limit is solved again with no margin (see design-search.ts).
+ */
+export const GRADE_MARGIN = 1e-6;
 
-export function segmentLimits(points: readonly ProfilePoint[], rules: RuleProfile): GradeLimits[] {
+/**
+ * A segment "rises" when its grade is at least zero (or the drainage minimum) and "falls" when it is at most
+ * zero (or minus the minimum). The landing is graded as the check grades it: a segment starting before the
+ * landing's end is landing, and the drainage minimum applies only beyond it.
+ */
+export function segmentRanges(points: readonly ProfilePoint[], rules: RuleProfile): SegmentRanges[] {
   const landingEnd = points[0].stationFt + rules.landing.lengthFt;
   const max = rules.maxGradePercent / 100;
-  const min = rules.minDrainageGradePercent === undefined ? undefined : rules.minDrainageGradePercent / 100;
-  const limits: GradeLimits[] = [];
+  const drain = (rules.minDrainageGradePercent ?? 0) / 100;
+  const ranges: SegmentRanges[] = [];
   for (let i = 0; i < points.length - 1; i++) {
-    const a = points[i];
-    const b = points[i + 1];
-    if (a.stationFt < landingEnd) {
-      limits.push({ lo: rules.landing.minGradePercent / 100, hi: rules.landing.maxGradePercent / 100, inLanding: true });
-    } else if (min === undefined) {
-      limits.push({ lo: -max, hi: max, inLanding: false });
-    } else {
-      // |grade| >= min is not convex; following the ground's own direction keeps it linear and moves the least earth.
-      const rising = b.elevationFt >= a.elevationFt;
-      limits.push(rising ? { lo: min, hi: max, inLanding: false } : { lo: -max, hi: -min, inLanding: false });
-    }
+    const inLanding = points[i].stationFt < landingEnd - STATION_TOLERANCE_FT;
+    const lo = inLanding ? rules.landing.minGradePercent / 100 : -max;
+    const hi = inLanding ? rules.landing.maxGradePercent / 100 : max;
+    const m = inLanding ? 0 : drain;
+    const rise = { lo: Math.max(lo, m), hi };
+    const fall = { lo, hi: Math.min(hi, -m) };
+    ranges.push({ rise: rise.lo <= rise.hi ? rise : null, fall: fall.lo <= fall.hi ? fall : null, inLanding });
   }
-  return limits;
+  return ranges;
 }
 
 /**
- * Variables: for each station, cut c_i >= 0 and fill f_i >= 0 with design z_i = e_i - c_i + f_i, because
- * the solver only takes non-negative variables and |z - e| = c + f at the optimum.
+ * How segment directions are decided: 'choose' leaves them to the mixed-integer search, 'relaxed' lets each
+ * lie between rising and falling (a linear programme whose cost is a lower bound), and a number k fixes the
+ * first k segments rising and the rest falling.
+ */
+export type Directions = 'choose' | 'relaxed' | number;
+
+export interface DesignModel {
+  model: LinearModel;
+  read(x: Float64Array): ProfilePoint[];
+}
+
+/**
+ * Columns: design elevation z_i, earth moved u_i >= |z_i - e_i|, and a 0/1 direction r_i per segment (1 rises,
+ * 0 falls). Directions are non-increasing along the profile, so the design climbs and then falls at most once:
+ * a profile shaped like that has no low point for water to stand in, on the driveway or against the road.
+ * Every grade, break and clearance limit is linear in z, so the whole design is one mixed-integer programme.
  */
 export function buildLeastEarthModel(
   points: readonly ProfilePoint[],
-  limits: readonly GradeLimits[],
+  ranges: readonly SegmentRanges[],
   rules: RuleProfile,
   roadEdgeFt: number,
   targetEndFt: number | undefined,
-  changeRatePerFt: number,
-) {
+  budget: ClearanceBudget | undefined,
+  directions: Directions,
+  margin = GRADE_MARGIN,
+): DesignModel {
+  const SHRINK = margin;
   const n = points.length;
+  const x = points.map((p) => p.stationFt);
   const e = points.map((p) => p.elevationFt);
-  const len = points.slice(1).map((p, i) => p.stationFt - points[i].stationFt);
-  const constraints: [string, Constraint][] = [];
-  const coef: Map<string, number>[] = Array.from({ length: 2 * n }, () => new Map());
-  // Coefficient of design offset (f_i - c_i) in constraint `key`.
-  const add = (key: string, i: number, k: number) => {
-    coef[2 * i].set(key, (coef[2 * i].get(key) ?? 0) - k);
-    coef[2 * i + 1].set(key, (coef[2 * i + 1].get(key) ?? 0) + k);
-  };
+  const len = x.slice(1).map((s, i) => s - x[i]);
+  const Z = (i: number) => i;
+  const U = (i: number) => n + i;
+  const R = (i: number) => 2 * n + i;
+  const cols = 3 * n - 1;
+  const cost = new Float64Array(cols);
+  const colLower = new Float64Array(cols).fill(-Infinity);
+  const colUpper = new Float64Array(cols).fill(Infinity);
+  const binary = new Uint8Array(cols);
+  const rows = new SparseRows();
+
   for (let i = 0; i < n; i++) {
-    const weight = ((len[i - 1] ?? 0) + (len[i] ?? 0)) / 2;
-    coef[2 * i].set('earth', weight);
-    coef[2 * i + 1].set('earth', weight);
+    cost[U(i)] = ((len[i - 1] ?? 0) + (len[i] ?? 0)) / 2;
+    colLower[U(i)] = 0;
+    rows.add([[Z(i), 1], [U(i), -1]], -Infinity, e[i]);
+    rows.add([[Z(i), 1], [U(i), 1]], e[i], Infinity);
   }
-  constraints.push(['start', { equal: roadEdgeFt - e[0] }]);
-  add('start', 0, 1);
-  if (targetEndFt !== undefined) {
-    constraints.push(['end', { equal: targetEndFt - e[n - 1] }]);
-    add('end', n - 1, 1);
-  }
+  colLower[Z(0)] = colUpper[Z(0)] = roadEdgeFt;
+  if (targetEndFt !== undefined) colLower[Z(n - 1)] = colUpper[Z(n - 1)] = targetEndFt;
+
   for (let i = 0; i < n - 1; i++) {
-    const de = e[i + 1] - e[i];
-    const key = `g${i}`;
-    constraints.push([key, { min: (limits[i].lo + SHRINK) * len[i] - de, max: (limits[i].hi - SHRINK) * len[i] - de }]);
-    add(key, i + 1, 1);
-    add(key, i, -1);
+    const { rise, fall } = ranges[i];
+    const up = rise ?? fall!;
+    const down = fall ?? rise!;
+    binary[R(i)] = directions === 'choose' ? 1 : 0;
+    colLower[R(i)] = fall ? 0 : 1;
+    colUpper[R(i)] = rise ? 1 : 0;
+    if (typeof directions === 'number') colLower[R(i)] = colUpper[R(i)] = i < directions ? 1 : 0;
+    const L = len[i];
+    // z_{i+1} - z_i between L*fall and L*rise as r_i goes 0 -> 1.
+    rows.add([[Z(i + 1), 1], [Z(i), -1], [R(i), -L * (up.lo - down.lo)]], L * (down.lo + SHRINK), Infinity);
+    rows.add([[Z(i + 1), 1], [Z(i), -1], [R(i), -L * (up.hi - down.hi)]], -Infinity, L * (down.hi - SHRINK));
+    if (i > 0) rows.add([[R(i), 1], [R(i - 1), -1]], -Infinity, 0);
   }
-  const maxChange = rules.maxGradeChangePercent / 100;
-  for (let i = 0; i < n - 2; i++) {
-    const midSpacing = (len[i] + len[i + 1]) / 2;
-    const allowed = Math.min(maxChange, changeRatePerFt * midSpacing) - SHRINK;
-    const existingChange = (e[i + 2] - e[i + 1]) / len[i + 1] - (e[i + 1] - e[i]) / len[i];
-    const key = `c${i}`;
-    constraints.push([key, { min: -allowed - existingChange, max: allowed - existingChange }]);
-    add(key, i + 2, 1 / len[i + 1]);
-    add(key, i + 1, -1 / len[i + 1] - 1 / len[i]);
-    add(key, i, 1 / len[i]);
+
+  const grade = (i: number): [number, number][] => [[Z(i + 1), 1 / len[i]], [Z(i), -1 / len[i]]];
+  const maxChange = rules.maxGradeChangePercent / 100 - SHRINK;
+  for (let v = 1; v < n - 1; v++) rows.add([...grade(v), ...grade(v - 1).map(([c, k]): [number, number] => [c, -k])], -maxChange, maxChange);
+
+  if (budget) {
+    for (const row of clearanceRows(x, budget)) rows.add(row.terms.map(([i, k]): [number, number] => [Z(i), k]), -Infinity, row.upper);
   }
-  const variables: [number, Map<string, number>][] = coef.map((c, j) => [j, c]);
-  const model: Model<number, string> = { direction: 'minimize', objective: 'earth', constraints, variables };
-  const read = (solved: [number, number][]): ProfilePoint[] => {
-    const value = new Float64Array(2 * n);
-    for (const [j, v] of solved) value[j] = v;
-    return points.map((p, i) => ({ stationFt: p.stationFt, elevationFt: e[i] - value[2 * i] + value[2 * i + 1] }));
-  };
-  return { model, read };
+
+  const read = (solution: Float64Array): ProfilePoint[] => points.map((p, i) => ({ stationFt: p.stationFt, elevationFt: solution[Z(i)] }));
+  return { model: { cost, colLower, colUpper, binary, rows }, read };
 }

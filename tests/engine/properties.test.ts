@@ -55,18 +55,18 @@ describe('properties', () => {
     );
   });
 
-  it('a proposed profile always passes the profile rules of checkEntrance', () => {
-    fc.assert(
-      fc.property(
+  it('a proposed profile always passes the profile rules of checkEntrance', async () => {
+    await fc.assert(
+      fc.asyncProperty(
         fc.array(fc.tuple(fc.double({ min: 2, max: 20, noNaN: true }), fc.double({ min: -25, max: 25, noNaN: true })), { minLength: 3, maxLength: 25 }),
         rulesArb,
         fc.double({ min: -1, max: 1, noNaN: true }),
         fc.option(fc.double({ min: -3, max: 3, noNaN: true }), { nil: undefined }),
-        (rs, rules, roadOffset, endOffset) => {
+        async (rs, rules, roadOffset, endOffset) => {
           const existing = toProfile(rs);
           const end = existing[existing.length - 1].elevationFt;
           const targetEndElevationFt = endOffset === undefined ? undefined : end + endOffset;
-          const r = proposeProfile({ existing, roadEdgeElevationFt: 100 + roadOffset, targetEndElevationFt }, rules);
+          const r = await proposeProfile({ existing, roadEdgeElevationFt: 100 + roadOffset, targetEndElevationFt }, rules);
           if (!r.feasible) {
             expect(r.reason).toBeTruthy();
             return;
@@ -81,9 +81,9 @@ describe('properties', () => {
       ),
       { numRuns: 60 },
     );
-  });
+  }, 120_000);
 
-  it('any input at all either computes or throws EngineInputError, never another error', () => {
+  it('any input at all either computes or throws EngineInputError, never another error', async () => {
     const calls: ((x: unknown) => unknown)[] = [
       (x) => engine.stoppingSightDistance(x as never),
       (x) => engine.intersectionSightDistance(x as never),
@@ -102,10 +102,10 @@ describe('properties', () => {
       (x) => engine.truckLoads(x as never),
       (x) => engine.normalizeProfile(x),
     ];
-    fc.assert(
-      fc.property(fc.anything(), fc.nat(calls.length - 1), (x, i) => {
+    await fc.assert(
+      fc.asyncProperty(fc.anything(), fc.nat(calls.length - 1), async (x, i) => {
         try {
-          calls[i](x);
+          await calls[i](x);
         } catch (e) {
           expect(e).toBeInstanceOf(EngineInputError);
         }

@@ -1,0 +1,187 @@
+import type { Highs } from 'highs';
+import { solveLinear } from './design-solver';
+import { transitionStations, withStations } from './design-stations';
+import { crestAllowed, explainInfeasible } from './infeasible-reason';
+import { buildLeastEarthModel, type Directions, GRADE_MARGIN, segmentRanges, type SegmentRanges } from './least-earth-model';
+import type { Finding } from './findings';
+import { checkProfileRules, type ProfileCheck } from './profile-checks';
+import type { ProfilePoint } from './profile';
+import type { DesignVehicle, RuleProfile } from './rule-profile';
+
+export interface DesignFound {
+  /** The stations designed: the survey's, plus the landing's end and any transition stations. */
+  ground: ProfilePoint[];
+  design?: ProfilePoint[];
+  reason?: string;
+}
+
+interface Job {
+  highs: Highs;
+  rules: RuleProfile;
+  roadEdgeFt: number;
+  targetEndFt: number | undefined;
+  scrapeStepFt: number;
+  margin: number;
+}
+
+const MAX_TIGHTENING = 8;
+const TIGHTEN = 0.7;
+// The first attempts tighten only where the exact check scraped; after these, everywhere, so the loop ends.
+const LOCAL_ATTEMPTS = 3;
+// Transition stations may double a long survey's stations at most.
+const MAX_DESIGN_STATIONS = 4_000;
+
+/** The earth objective itself: |design - ground| integrated along the stations (trapezoids). */
+export function earthMoved(ground: readonly ProfilePoint[], design: readonly ProfilePoint[]): number {
+  let sum = 0;
+  for (let i = 0; i < ground.length - 1; i++) {
+    const a = Math.abs(design[i].elevationFt - ground[i].elevationFt);
+    const b = Math.abs(design[i + 1].elevationFt - ground[i + 1].elevationFt);
+    sum += ((a + b) / 2) * (ground[i + 1].stationFt - ground[i].stationFt);
+  }
+  return sum;
+}
+
+const scrapeReason = (v: DesignVehicle) => `no profile keeps a ${v.name.toLowerCase()} from scraping while meeting the other limits`;
+
+function bendReason(rules: RuleProfile): string {
+  const drain = rules.minDrainageGradePercent === undefined ? '' : ` while keeping the ${rules.minDrainageGradePercent}% drainage grade`;
+  return `the ${rules.maxGradeChangePercent}% grade-change limit cannot bend the profile enough to reach the end elevation${drain} without a low point that holds water`;
+}
+
+type Attempt =
+  | { status: 'infeasible'; detail: string }
+  | { status: 'failed'; detail: string }
+  | { status: 'solved'; design: ProfilePoint[]; rising: Float64Array; check: ProfileCheck; failing: Finding[] };
+
+function solveOnce(job: Job, ground: ProfilePoint[], ranges: SegmentRanges[], share: Float64Array | undefined, directions: Directions): Attempt {
+  const budget = share ? { vehicle: job.rules.designVehicle, share } : undefined;
+  const built = buildLeastEarthModel(ground, ranges, job.rules, job.roadEdgeFt, job.targetEndFt, budget, directions, job.margin);
+  const out = solveLinear(job.highs, built.model);
+  if (out.status === 'infeasible' || out.status === 'failed') return out;
+  const design = built.read(out.x);
+  const check = checkProfileRules(design, job.rules, design[0].stationFt, job.scrapeStepFt);
+  const rising = out.x.slice(2 * ground.length);
+  return { status: 'solved', design, rising, check, failing: check.findings.filter((f) => f.status === 'fail') };
+}
+
+const risingCount = (rising: Float64Array, above: number) => {
+  let k = 0;
+  while (k < rising.length && rising[k] > above) k++;
+  return k;
+};
+
+/**
+ * Where the design turns from rising to falling. The linear relaxation is solved first: its cost bounds every
+ * design from below, and its directions rounded at a few thresholds give crest positions to try as plain linear
+ * programmes. Only when none of them is feasible does the mixed-integer search (bounded by a node limit) decide,
+ * so "impossible" is said only when the relaxation or the full search proves it.
+ */
+function chooseCrest(job: Job, ground: ProfilePoint[], ranges: SegmentRanges[], share: Float64Array | undefined, allowed: (k: number) => boolean): { out: Attempt; k?: number } {
+  const relaxed = solveOnce(job, ground, ranges, share, 'relaxed');
+  if (relaxed.status !== 'solved') return { out: relaxed };
+  const ks = [...new Set([0.5, 1 - 1e-6, 1e-6].map((t) => risingCount(relaxed.rising, t)))].filter(allowed);
+  let best: { out: Attempt & { status: 'solved' }; k: number; earth: number } | undefined;
+  for (const k of ks) {
+    const out = solveOnce(job, ground, ranges, share, k);
+    if (out.status !== 'solved') continue;
+    const earth = earthMoved(ground, out.design);
+    if (!best || earth < best.earth) best = { out, k, earth };
+    if (earth <= earthMoved(ground, relaxed.design) + 1e-9) break;
+  }
+  if (best) return best;
+  const mip = solveOnce(job, ground, ranges, share, 'choose');
+  return mip.status === 'solved' ? { out: mip, k: risingCount(mip.rising, 0.5) } : { out: mip };
+}
+
+/** Lowers the clearance share of every window that could sit under the vehicle where it scraped. */
+function tighten(share: Float64Array, ground: readonly ProfilePoint[], stationFt: number, v: DesignVehicle, local: boolean): void {
+  const reach = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
+  let any = false;
+  for (let i = 0; i < ground.length; i++) {
+    if (local && Math.abs(ground[i].stationFt - stationFt) <= reach) {
+      share[i] *= TIGHTEN;
+      any = true;
+    }
+  }
+  if (!any || !local) share.forEach((s, i) => (share[i] = s * TIGHTEN));
+}
+
+/** Clearance in the model, then the exact scrape check; where it still scrapes, that neighbourhood is tightened. */
+function designOn(job: Job, ground: ProfilePoint[]): DesignFound {
+  const ranges = segmentRanges(ground, job.rules);
+  const reason = explainInfeasible(ground, ranges, job.rules, job.roadEdgeFt, job.targetEndFt);
+  if (reason) return { ground, reason };
+  const allowed = crestAllowed(ground, ranges, job.roadEdgeFt, job.targetEndFt);
+  const share = new Float64Array(ground.length).fill(1);
+  let k: number | undefined;
+  for (let attempt = 0; attempt < MAX_TIGHTENING; attempt++) {
+    let out = k === undefined ? undefined : solveOnce(job, ground, ranges, share, k);
+    if (!out || out.status === 'infeasible') {
+      const pick = chooseCrest(job, ground, ranges, share, allowed);
+      out = pick.out;
+      k = pick.k;
+    }
+    if (out.status === 'failed') return { ground, reason: `no design was found within the solver's search limit (${out.detail}); the limits may still allow one` };
+    if (out.status === 'infeasible') {
+      // The clearance limits are linear estimates; without them the programme says whether the rest can be met.
+      const free = chooseCrest(job, ground, ranges, undefined, allowed).out;
+      if (free.status === 'infeasible') return { ground, reason: bendReason(job.rules) };
+      if (free.status === 'solved' && free.failing.length === 0) return { ground, design: free.design };
+      return { ground, reason: scrapeReason(job.rules.designVehicle) };
+    }
+    if (out.failing.length === 0) return { ground, design: out.design };
+    if (out.failing.some((f) => f.ruleId !== 'scrape.clearance')) {
+      return { ground, reason: `the solver's profile still breaks ${out.failing.map((f) => f.label.toLowerCase()).join(', ')}` };
+    }
+    tighten(share, ground, out.check.scrape.atStationFt, job.rules.designVehicle, attempt < LOCAL_ATTEMPTS);
+  }
+  return { ground, reason: scrapeReason(job.rules.designVehicle) };
+}
+
+/** Breaks that use more than half of what one break may take under the vehicle: where a short curve may be cheaper. */
+function clearanceBreaks(design: readonly ProfilePoint[], v: DesignVehicle): number[] {
+  const c = v.clearanceIn / 12;
+  const crest = (4 * c) / v.wheelbaseFt;
+  const overhang = Math.max(v.frontOverhangFt, v.rearOverhangFt);
+  const sag = overhang > 0 ? c / overhang : Infinity;
+  const out: number[] = [];
+  for (let i = 1; i < design.length - 1; i++) {
+    const g0 = (design[i].elevationFt - design[i - 1].elevationFt) / (design[i].stationFt - design[i - 1].stationFt);
+    const g1 = (design[i + 1].elevationFt - design[i].elevationFt) / (design[i + 1].stationFt - design[i].stationFt);
+    const a = g1 - g0;
+    if (a < -crest / 2 || a > sag / 2) out.push(design[i].stationFt);
+  }
+  return out;
+}
+
+export function searchDesign(
+  highs: Highs,
+  survey: readonly ProfilePoint[],
+  rules: RuleProfile,
+  roadEdgeFt: number,
+  targetEndFt: number | undefined,
+  scrapeStepFt: number,
+): DesignFound {
+  const job: Job = { highs, rules, roadEdgeFt, targetEndFt, scrapeStepFt, margin: GRADE_MARGIN };
+  // The design needs a station where the landing ends so it can break there rather than at the next shot.
+  const ground = withStations(survey, [survey[0].stationFt + rules.landing.lengthFt]);
+  let first = designOn(job, ground);
+  // Only a design sitting exactly on a limit needs the margin gone; the exact check still has the last word.
+  if (!first.design) {
+    const exact = designOn({ ...job, margin: 0 }, ground);
+    if (exact.design) first = exact;
+  }
+  const v = rules.designVehicle;
+  const breaks = first.design ? clearanceBreaks(first.design, v) : [];
+  if (!first.design || breaks.length === 0) return first;
+  // A short vertical curve over stations a fraction of the wheelbase apart often clears with less earth than
+  // holding one sharp break to the single-break limit.
+  const radius = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
+  const step = v.wheelbaseFt / 8;
+  const dense = withStations(ground, transitionStations(ground, breaks, radius, step, MAX_DESIGN_STATIONS - ground.length), step / 2);
+  if (dense.length === ground.length) return first;
+  const second = designOn(job, dense);
+  if (second.design && earthMoved(dense, second.design) < earthMoved(ground, first.design) - 1e-9) return second;
+  return first;
+}
