@@ -155,6 +155,25 @@ function clearanceBreaks(design: readonly ProfilePoint[], v: DesignVehicle): num
   return out;
 }
 
+/** Rises and then falls at most once, so no low point holds water (the shape every design is given). */
+function drainsEverywhere(points: readonly ProfilePoint[]): boolean {
+  let fallen = false;
+  for (let i = 0; i < points.length - 1; i++) {
+    const d = points[i + 1].elevationFt - points[i].elevationFt;
+    if (d < 0) fallen = true;
+    else if (d > 0 && fallen) return false;
+  }
+  return true;
+}
+
+/** Ground that already meets every limit from the given road edge to the given end is the least-earth design. */
+function alreadyComplies(survey: readonly ProfilePoint[], job: Job): boolean {
+  const last = survey[survey.length - 1].elevationFt;
+  if (survey[0].elevationFt !== job.roadEdgeFt || (job.targetEndFt !== undefined && last !== job.targetEndFt)) return false;
+  if (!drainsEverywhere(survey)) return false;
+  return checkProfileRules(survey, job.rules, survey[0].stationFt, job.scrapeStepFt).findings.every((f) => f.status !== 'fail');
+}
+
 export function searchDesign(
   highs: Highs,
   survey: readonly ProfilePoint[],
@@ -164,6 +183,8 @@ export function searchDesign(
   scrapeStepFt: number,
 ): DesignFound {
   const job: Job = { highs, rules, roadEdgeFt, targetEndFt, scrapeStepFt, margin: GRADE_MARGIN };
+  // Checked as surveyed: a landing station added to straight ground could make a rule apply that did not before.
+  if (alreadyComplies(survey, job)) return { ground: [...survey], design: survey.map((p) => ({ ...p })) };
   // The design needs a station where the landing ends so it can break there rather than at the next shot.
   const ground = withStations(survey, [survey[0].stationFt + rules.landing.lengthFt]);
   let first = designOn(job, ground);

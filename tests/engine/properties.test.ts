@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import * as engine from '../../shared/engine';
 import { checkEntrance, commonRuralTemplate, EngineInputError, passengerCarPreset, proposeProfile, type RuleProfile } from '../../shared/engine';
+import { holdsWater } from './water';
 
 const runs = fc.array(fc.tuple(fc.double({ min: 1, max: 30, noNaN: true }), fc.double({ min: -15, max: 15, noNaN: true })), { minLength: 1, maxLength: 12 });
 
@@ -27,6 +28,11 @@ const rulesArb: fc.Arbitrary<RuleProfile> = fc
     maxGradePercent: r.maxGrade,
     maxGradeChangePercent: r.maxChange,
   }));
+
+// The same rules, some with a drainage minimum (the proposal must then choose each segment's direction).
+const designRulesArb: fc.Arbitrary<RuleProfile> = fc
+  .tuple(rulesArb, fc.option(fc.double({ min: 0.5, max: 3, noNaN: true }), { nil: undefined }))
+  .map(([rules, drain]) => (drain === undefined ? rules : { ...rules, minDrainageGradePercent: drain }));
 
 const GRADE_RULES = ['landing.max-grade', 'landing.min-grade', 'grade.max', 'grade.max-change', 'scrape.clearance'];
 
@@ -75,11 +81,32 @@ describe('properties', () => {
           const check = checkEntrance({ profile: r.profile }, rules);
           const failed = check.findings.filter((f) => f.status === 'fail');
           expect(failed).toEqual([]);
+          expect(holdsWater(r.profile)).toBe(false);
           expect(r.cutCuYd).toBeGreaterThanOrEqual(0);
           expect(r.fillCuYd).toBeGreaterThanOrEqual(0);
         },
       ),
       { numRuns: 60 },
+    );
+  }, 120_000);
+
+  it('never proposes worse than the ground when the ground already complies and drains', async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.array(fc.tuple(fc.double({ min: 2, max: 20, noNaN: true }), fc.double({ min: 0.6, max: 2, noNaN: true })), { minLength: 2, maxLength: 15 }),
+        designRulesArb,
+        async (rs, rules) => {
+          const existing = toProfile(rs);
+          const asFound = checkEntrance({ profile: existing }, rules);
+          fc.pre(asFound.passes && !holdsWater(existing));
+          const r = await proposeProfile({ existing, roadEdgeElevationFt: existing[0].elevationFt }, rules);
+          expect(r.feasible).toBe(true);
+          expect(checkEntrance({ profile: r.profile }, rules).passes).toBe(true);
+          // Leaving the ground as it is moves nothing; the proposal may move no more (to 0.01 cu yd).
+          expect(r.cutCuYd + r.fillCuYd).toBeLessThanOrEqual(0.01);
+        },
+      ),
+      { numRuns: 40 },
     );
   }, 120_000);
 
