@@ -80,6 +80,8 @@ const risingCount = (rising: Float64Array, above: number) => {
 function chooseCrest(job: Job, ground: ProfilePoint[], ranges: SegmentRanges[], share: Float64Array | undefined, allowed: (k: number) => boolean): { out: Attempt; k?: number } {
   const relaxed = solveOnce(job, ground, ranges, share, 'relaxed');
   if (relaxed.status !== 'solved') return { out: relaxed };
+  // Whole directions already: the relaxation's answer is itself the best design.
+  if (relaxed.rising.every((r) => r < 1e-7 || r > 1 - 1e-7)) return { out: relaxed, k: risingCount(relaxed.rising, 0.5) };
   const ks = [...new Set([0.5, 1 - 1e-6, 1e-6].map((t) => risingCount(relaxed.rising, t)))].filter(allowed);
   let best: { out: Attempt & { status: 'solved' }; k: number; earth: number } | undefined;
   for (const k of ks) {
