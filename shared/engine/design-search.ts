@@ -1,12 +1,14 @@
 import type { Highs } from 'highs';
 import { solveLinear } from './design-solver';
 import { transitionStations, withStations } from './design-stations';
+import { designVertices, type FineStretch } from './design-vertices';
 import { crestAllowed, explainInfeasible } from './infeasible-reason';
 import { buildLeastEarthModel, type Directions, GRADE_MARGIN, segmentRanges, type SegmentRanges } from './least-earth-model';
 import type { Finding } from './findings';
 import { checkProfileRules, type ProfileCheck } from './profile-checks';
 import type { ProfilePoint } from './profile';
 import type { DesignVehicle, RuleProfile } from './rule-profile';
+import { STATION_TOLERANCE_FT } from './tolerance';
 
 export interface DesignFound {
   /** The stations designed: the survey's, plus the landing's end and any transition stations. */
@@ -54,14 +56,21 @@ type Attempt =
   | { status: 'failed'; detail: string }
   | { status: 'solved'; design: ProfilePoint[]; rising: Float64Array; check: ProfileCheck; failing: Finding[] };
 
-function solveOnce(job: Job, ground: ProfilePoint[], ranges: SegmentRanges[], share: Float64Array | undefined, directions: Directions): Attempt {
+/** The stations designed, and the indices of those where the design may break. */
+interface Layout {
+  ground: ProfilePoint[];
+  vertices: number[];
+}
+
+function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Float64Array | undefined, directions: Directions): Attempt {
   const budget = share ? { vehicle: job.rules.designVehicle, share } : undefined;
-  const built = buildLeastEarthModel(ground, ranges, job.rules, job.roadEdgeFt, job.targetEndFt, budget, directions, job.margin);
+  const { ground, vertices } = layout;
+  const built = buildLeastEarthModel(ground, vertices, ranges, job.rules, job.roadEdgeFt, job.targetEndFt, budget, directions, job.margin);
   const out = solveLinear(job.highs, built.model);
   if (out.status === 'infeasible' || out.status === 'failed') return out;
   const design = built.read(out.x);
   const check = checkProfileRules(design, job.rules, design[0].stationFt, job.scrapeStepFt);
-  const rising = out.x.slice(2 * ground.length);
+  const rising = built.rising(out.x);
   return { status: 'solved', design, rising, check, failing: check.findings.filter((f) => f.status === 'fail') };
 }
 
@@ -77,31 +86,32 @@ const risingCount = (rising: Float64Array, above: number) => {
  * programmes. Only when none of them is feasible does the mixed-integer search (bounded by a node limit) decide,
  * so "impossible" is said only when the relaxation or the full search proves it.
  */
-function chooseCrest(job: Job, ground: ProfilePoint[], ranges: SegmentRanges[], share: Float64Array | undefined, allowed: (k: number) => boolean): { out: Attempt; k?: number } {
-  const relaxed = solveOnce(job, ground, ranges, share, 'relaxed');
+function chooseCrest(job: Job, layout: Layout, ranges: SegmentRanges[], share: Float64Array | undefined, allowed: (k: number) => boolean): { out: Attempt; k?: number } {
+  const { ground } = layout;
+  const relaxed = solveOnce(job, layout, ranges, share, 'relaxed');
   if (relaxed.status !== 'solved') return { out: relaxed };
   // Whole directions already: the relaxation's answer is itself the best design.
   if (relaxed.rising.every((r) => r < 1e-7 || r > 1 - 1e-7)) return { out: relaxed, k: risingCount(relaxed.rising, 0.5) };
   const ks = [...new Set([0.5, 1 - 1e-6, 1e-6].map((t) => risingCount(relaxed.rising, t)))].filter(allowed);
   let best: { out: Attempt & { status: 'solved' }; k: number; earth: number } | undefined;
   for (const k of ks) {
-    const out = solveOnce(job, ground, ranges, share, k);
+    const out = solveOnce(job, layout, ranges, share, k);
     if (out.status !== 'solved') continue;
     const earth = earthMoved(ground, out.design);
     if (!best || earth < best.earth) best = { out, k, earth };
     if (earth <= earthMoved(ground, relaxed.design) + 1e-9) break;
   }
   if (best) return best;
-  const mip = solveOnce(job, ground, ranges, share, 'choose');
+  const mip = solveOnce(job, layout, ranges, share, 'choose');
   return mip.status === 'solved' ? { out: mip, k: risingCount(mip.rising, 0.5) } : { out: mip };
 }
 
 /** Lowers the clearance share of every window that could sit under the vehicle where it scraped. */
-function tighten(share: Float64Array, ground: readonly ProfilePoint[], stationFt: number, v: DesignVehicle, local: boolean): void {
+function tighten(share: Float64Array, vertices: readonly ProfilePoint[], stationFt: number, v: DesignVehicle, local: boolean): void {
   const reach = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
   let any = false;
-  for (let i = 0; i < ground.length; i++) {
-    if (local && Math.abs(ground[i].stationFt - stationFt) <= reach) {
+  for (let i = 0; i < vertices.length; i++) {
+    if (local && Math.abs(vertices[i].stationFt - stationFt) <= reach) {
       share[i] *= TIGHTEN;
       any = true;
     }
@@ -110,24 +120,26 @@ function tighten(share: Float64Array, ground: readonly ProfilePoint[], stationFt
 }
 
 /** Clearance in the model, then the exact scrape check; where it still scrapes, that neighbourhood is tightened. */
-function designOn(job: Job, ground: ProfilePoint[]): DesignFound {
-  const ranges = segmentRanges(ground, job.rules);
-  const reason = explainInfeasible(ground, ranges, job.rules, job.roadEdgeFt, job.targetEndFt);
+function designOn(job: Job, layout: Layout): DesignFound {
+  const { ground } = layout;
+  const corners = layout.vertices.map((i) => ground[i]);
+  const ranges = segmentRanges(corners, job.rules);
+  const reason = explainInfeasible(corners, ranges, job.rules, job.roadEdgeFt, job.targetEndFt);
   if (reason) return { ground, reason };
-  const allowed = crestAllowed(ground, ranges, job.roadEdgeFt, job.targetEndFt);
-  const share = new Float64Array(ground.length).fill(1);
+  const allowed = crestAllowed(corners, ranges, job.roadEdgeFt, job.targetEndFt);
+  const share = new Float64Array(corners.length).fill(1);
   let k: number | undefined;
   for (let attempt = 0; attempt < MAX_TIGHTENING; attempt++) {
-    let out = k === undefined ? undefined : solveOnce(job, ground, ranges, share, k);
+    let out = k === undefined ? undefined : solveOnce(job, layout, ranges, share, k);
     if (!out || out.status === 'infeasible') {
-      const pick = chooseCrest(job, ground, ranges, share, allowed);
+      const pick = chooseCrest(job, layout, ranges, share, allowed);
       out = pick.out;
       k = pick.k;
     }
     if (out.status === 'failed') return { ground, reason: `no design was found within the solver's search limit (${out.detail}); the limits may still allow one` };
     if (out.status === 'infeasible') {
       // The clearance limits are linear estimates; without them the programme says whether the rest can be met.
-      const free = chooseCrest(job, ground, ranges, undefined, allowed).out;
+      const free = chooseCrest(job, layout, ranges, undefined, allowed).out;
       if (free.status === 'infeasible') return { ground, reason: bendReason(job.rules) };
       if (free.status === 'solved' && free.failing.length === 0) return { ground, design: free.design };
       return { ground, reason: scrapeReason(job.rules.designVehicle) };
@@ -136,7 +148,7 @@ function designOn(job: Job, ground: ProfilePoint[]): DesignFound {
     if (out.failing.some((f) => f.ruleId !== 'scrape.clearance')) {
       return { ground, reason: `the solver's profile still breaks ${out.failing.map((f) => f.label.toLowerCase()).join(', ')}` };
     }
-    tighten(share, ground, out.check.scrape.atStationFt, job.rules.designVehicle, attempt < LOCAL_ATTEMPTS);
+    tighten(share, corners, out.check.scrape.atStationFt, job.rules.designVehicle, attempt < LOCAL_ATTEMPTS);
   }
   return { ground, reason: scrapeReason(job.rules.designVehicle) };
 }
@@ -188,13 +200,15 @@ export function searchDesign(
   // Checked as surveyed: a landing station added to straight ground could make a rule apply that did not before.
   if (alreadyComplies(survey, job)) return { ground: [...survey], design: survey.map((p) => ({ ...p })) };
   // The design needs a station where the landing ends so it can break there rather than at the next shot.
-  const ground = withStations(survey, [survey[0].stationFt + rules.landing.lengthFt]);
-  let first = designOn(job, ground);
-  // Only a design sitting exactly on a limit needs the margin gone; the exact check still has the last word.
-  if (!first.design) {
-    const exact = designOn({ ...job, margin: 0 }, ground);
-    if (exact.design) first = exact;
-  }
+  const landingEnd = survey[0].stationFt + rules.landing.lengthFt;
+  const ground = withStations(survey, [landingEnd]);
+  const surveyed = new Set(survey.map((p) => p.stationFt));
+  // Added stations (the landing's end, a curve's) are always vertices; so is a shot within tolerance of the landing's end.
+  const keep = new Set(ground.map((p) => p.stationFt).filter((s) => !surveyed.has(s) || Math.abs(s - landingEnd) < STATION_TOLERANCE_FT));
+  const coarse: Layout = { ground, vertices: designVertices(ground, keep) };
+  let first = designWithMargin(job, coarse);
+  // Fewer vertices restrict the design; before saying no design exists, every station is given a vertex.
+  if (!first.design && coarse.vertices.length < ground.length) first = designWithMargin(job, { ground, vertices: ground.map((_, i) => i) });
   const v = rules.designVehicle;
   const breaks = first.design ? clearanceBreaks(first.design, v) : [];
   if (!first.design || breaks.length === 0) return first;
@@ -203,8 +217,19 @@ export function searchDesign(
   const radius = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
   const step = v.wheelbaseFt / 8;
   const dense = withStations(ground, transitionStations(ground, breaks, radius, step, MAX_DESIGN_STATIONS - ground.length), step / 2);
-  if (dense.length === ground.length) return first;
-  const second = designOn(job, dense);
-  if (second.design && earthMoved(dense, second.design) < earthMoved(ground, first.design) - 1e-9) return second;
+  const fine: FineStretch[] = breaks.map((b) => ({ fromFt: b - radius, toFt: b + radius, stepFt: step }));
+  const denseKeep = new Set([...keep, ...dense.map((p) => p.stationFt).filter((s) => !surveyed.has(s))]);
+  const curved: Layout = { ground: dense, vertices: designVertices(dense, denseKeep, fine) };
+  if (dense.length === ground.length && curved.vertices.length === coarse.vertices.length) return first;
+  const second = designOn(job, curved);
+  if (second.design && earthMoved(dense, second.design) < earthMoved(first.ground, first.design) - 1e-9) return second;
   return first;
+}
+
+/** Only a design sitting exactly on a limit needs the margin gone; the exact check still has the last word. */
+function designWithMargin(job: Job, layout: Layout): DesignFound {
+  const found = designOn(job, layout);
+  if (found.design) return found;
+  const exact = designOn({ ...job, margin: 0 }, layout);
+  return exact.design ? exact : found;
 }

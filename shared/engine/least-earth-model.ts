@@ -50,17 +50,22 @@ export type Directions = 'choose' | 'relaxed' | number;
 
 export interface DesignModel {
   model: LinearModel;
+  /** The design at every station: straight between vertices. */
   read(x: Float64Array): ProfilePoint[];
+  /** Each vertex segment's direction, 1 rising to 0 falling. */
+  rising(x: Float64Array): Float64Array;
 }
 
 /**
- * Columns: design elevation z_i, earth moved u_i >= |z_i - e_i|, and a 0/1 direction r_i per segment (1 rises,
+ * Columns: design elevation z_j at each vertex, earth moved u_i >= |z(x_i) - e_i| at every station (z read on
+ * the straight line between the vertices either side), and a 0/1 direction r_j per vertex segment (1 rises,
  * 0 falls). Directions are non-increasing along the profile, so the design climbs and then falls at most once:
  * a profile shaped like that has no low point for water to stand in, on the driveway or against the road.
  * Every grade, break and clearance limit is linear in z, so the whole design is one mixed-integer programme.
  */
 export function buildLeastEarthModel(
   points: readonly ProfilePoint[],
+  vertices: readonly number[],
   ranges: readonly SegmentRanges[],
   rules: RuleProfile,
   roadEdgeFt: number,
@@ -71,51 +76,67 @@ export function buildLeastEarthModel(
 ): DesignModel {
   const SHRINK = margin;
   const n = points.length;
-  const x = points.map((p) => p.stationFt);
-  const e = points.map((p) => p.elevationFt);
-  const len = x.slice(1).map((s, i) => s - x[i]);
-  const Z = (i: number) => i;
-  const U = (i: number) => n + i;
-  const R = (i: number) => 2 * n + i;
-  const cols = 3 * n - 1;
+  const m = vertices.length;
+  const x = vertices.map((i) => points[i].stationFt);
+  const len = x.slice(1).map((s, j) => s - x[j]);
+  const Z = (j: number) => j;
+  const U = (i: number) => m + i;
+  const R = (j: number) => m + n + j;
+  const cols = 2 * m + n - 1;
   const cost = new Float64Array(cols);
   const colLower = new Float64Array(cols).fill(-Infinity);
   const colUpper = new Float64Array(cols).fill(Infinity);
   const binary = new Uint8Array(cols);
   const rows = new SparseRows();
 
+  // Station i sits on vertex segment seg[i] at fraction t[i] of its length.
+  const seg = new Int32Array(n);
+  const t = new Float64Array(n);
+  for (let i = 0, j = 0; i < n; i++) {
+    while (j < m - 2 && vertices[j + 1] <= i) j++;
+    seg[i] = j;
+    t[i] = m > 1 ? (points[i].stationFt - x[j]) / len[j] : 0;
+  }
   for (let i = 0; i < n; i++) {
-    cost[U(i)] = ((len[i - 1] ?? 0) + (len[i] ?? 0)) / 2;
+    const e = points[i].elevationFt;
+    cost[U(i)] = (i > 0 ? points[i].stationFt - points[i - 1].stationFt : 0) / 2 + (i < n - 1 ? points[i + 1].stationFt - points[i].stationFt : 0) / 2;
     colLower[U(i)] = 0;
-    rows.add([[Z(i), 1], [U(i), -1]], -Infinity, e[i]);
-    rows.add([[Z(i), 1], [U(i), 1]], e[i], Infinity);
+    const j = seg[i];
+    const at: [number, number][] = t[i] === 0 ? [[Z(j), 1]] : t[i] === 1 ? [[Z(j + 1), 1]] : [[Z(j), 1 - t[i]], [Z(j + 1), t[i]]];
+    rows.add([...at, [U(i), -1]], -Infinity, e);
+    rows.add([...at, [U(i), 1]], e, Infinity);
   }
   colLower[Z(0)] = colUpper[Z(0)] = roadEdgeFt;
-  if (targetEndFt !== undefined) colLower[Z(n - 1)] = colUpper[Z(n - 1)] = targetEndFt;
+  if (targetEndFt !== undefined) colLower[Z(m - 1)] = colUpper[Z(m - 1)] = targetEndFt;
 
-  for (let i = 0; i < n - 1; i++) {
-    const { rise, fall } = ranges[i];
+  for (let j = 0; j < m - 1; j++) {
+    const { rise, fall } = ranges[j];
     const up = rise ?? fall!;
     const down = fall ?? rise!;
-    binary[R(i)] = directions === 'choose' ? 1 : 0;
-    colLower[R(i)] = fall ? 0 : 1;
-    colUpper[R(i)] = rise ? 1 : 0;
-    if (typeof directions === 'number') colLower[R(i)] = colUpper[R(i)] = i < directions ? 1 : 0;
-    const L = len[i];
-    // z_{i+1} - z_i between L*fall and L*rise as r_i goes 0 -> 1.
-    rows.add([[Z(i + 1), 1], [Z(i), -1], [R(i), -L * (up.lo - down.lo)]], L * (down.lo + SHRINK), Infinity);
-    rows.add([[Z(i + 1), 1], [Z(i), -1], [R(i), -L * (up.hi - down.hi)]], -Infinity, L * (down.hi - SHRINK));
-    if (i > 0) rows.add([[R(i), 1], [R(i - 1), -1]], -Infinity, 0);
+    binary[R(j)] = directions === 'choose' ? 1 : 0;
+    colLower[R(j)] = fall ? 0 : 1;
+    colUpper[R(j)] = rise ? 1 : 0;
+    if (typeof directions === 'number') colLower[R(j)] = colUpper[R(j)] = j < directions ? 1 : 0;
+    const L = len[j];
+    // z_{j+1} - z_j between L*fall and L*rise as r_j goes 0 -> 1.
+    rows.add([[Z(j + 1), 1], [Z(j), -1], [R(j), -L * (up.lo - down.lo)]], L * (down.lo + SHRINK), Infinity);
+    rows.add([[Z(j + 1), 1], [Z(j), -1], [R(j), -L * (up.hi - down.hi)]], -Infinity, L * (down.hi - SHRINK));
+    if (j > 0) rows.add([[R(j), 1], [R(j - 1), -1]], -Infinity, 0);
   }
 
-  const grade = (i: number): [number, number][] => [[Z(i + 1), 1 / len[i]], [Z(i), -1 / len[i]]];
+  const grade = (j: number): [number, number][] => [[Z(j + 1), 1 / len[j]], [Z(j), -1 / len[j]]];
   const maxChange = rules.maxGradeChangePercent / 100 - SHRINK;
-  for (let v = 1; v < n - 1; v++) rows.add([...grade(v), ...grade(v - 1).map(([c, k]): [number, number] => [c, -k])], -maxChange, maxChange);
+  for (let v = 1; v < m - 1; v++) rows.add([...grade(v), ...grade(v - 1).map(([c, k]): [number, number] => [c, -k])], -maxChange, maxChange);
 
   if (budget) {
-    for (const row of clearanceRows(x, budget)) rows.add(row.terms.map(([i, k]): [number, number] => [Z(i), k]), -Infinity, row.upper);
+    for (const row of clearanceRows(x, budget)) rows.add(row.terms.map(([j, k]): [number, number] => [Z(j), k]), -Infinity, row.upper);
   }
 
-  const read = (solution: Float64Array): ProfilePoint[] => points.map((p, i) => ({ stationFt: p.stationFt, elevationFt: solution[Z(i)] }));
-  return { model: { cost, colLower, colUpper, binary, rows }, read };
+  const read = (solution: Float64Array): ProfilePoint[] =>
+    points.map((p, i) => {
+      const j = seg[i];
+      const z = t[i] === 0 ? solution[Z(j)] : t[i] === 1 ? solution[Z(j + 1)] : (1 - t[i]) * solution[Z(j)] + t[i] * solution[Z(j + 1)];
+      return { stationFt: p.stationFt, elevationFt: z };
+    });
+  return { model: { cost, colLower, colUpper, binary, rows }, read, rising: (solution) => solution.slice(R(0), R(0) + m - 1) };
 }
