@@ -80,6 +80,33 @@ const risingCount = (rising: Float64Array, above: number) => {
   return k;
 };
 
+// How far outside a direction's grade range a solved grade may sit and still count as in it (the solver's own
+// tolerance over the shortest segment); the exact check afterwards judges the limits themselves.
+const DIRECTION_SLACK = 1e-7;
+
+// A crest whose design moves no more earth than the relaxation's lower bound plus this depth over the whole
+// length is taken without trying the others: half the hundredth of a foot a survey is read to, so no survey
+// could tell the designs apart.
+const EARTH_TOLERANCE_FT = 0.005;
+
+/**
+ * The crest position (segments rising before it) that the design's own grades fit, nearest `near`: every
+ * segment before it within its rising range and every one after within its falling range; none if no position fits.
+ */
+function crestOf(design: readonly ProfilePoint[], vertices: readonly number[], ranges: readonly SegmentRanges[], near: number): number | undefined {
+  const m = ranges.length;
+  const within = (g: number, r: { lo: number; hi: number } | null) => r !== null && g >= r.lo - DIRECTION_SLACK && g <= r.hi + DIRECTION_SLACK;
+  const grade = (j: number) => {
+    const [a, b] = [design[vertices[j]], design[vertices[j + 1]]];
+    return (b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt);
+  };
+  let rises = 0;
+  while (rises < m && within(grade(rises), ranges[rises].rise)) rises++;
+  let fallsFrom = m;
+  while (fallsFrom > 0 && within(grade(fallsFrom - 1), ranges[fallsFrom - 1].fall)) fallsFrom--;
+  return fallsFrom <= rises ? Math.min(rises, Math.max(fallsFrom, near)) : undefined;
+}
+
 /**
  * Where the design turns from rising to falling. The linear relaxation is solved first: its cost bounds every
  * design from below, and its directions rounded at a few thresholds give crest positions to try as plain linear
@@ -90,16 +117,22 @@ function chooseCrest(job: Job, layout: Layout, ranges: SegmentRanges[], share: F
   const { ground } = layout;
   const relaxed = solveOnce(job, layout, ranges, share, 'relaxed');
   if (relaxed.status !== 'solved') return { out: relaxed };
-  // Whole directions already: the relaxation's answer is itself the best design.
-  if (relaxed.rising.every((r) => r < 1e-7 || r > 1 - 1e-7)) return { out: relaxed, k: risingCount(relaxed.rising, 0.5) };
+  // Whole directions, or grades that already rise and then fall within their limits: the relaxation's answer
+  // is itself a design, and its cost is a lower bound, so it is the best design.
+  const whole = risingCount(relaxed.rising, 0.5);
+  if (relaxed.rising.every((r) => r < 1e-7 || r > 1 - 1e-7)) return { out: relaxed, k: whole };
+  const consistent = crestOf(relaxed.design, layout.vertices, ranges, whole);
+  if (consistent !== undefined) return { out: relaxed, k: consistent };
   const ks = [...new Set([0.5, 1 - 1e-6, 1e-6].map((t) => risingCount(relaxed.rising, t)))].filter(allowed);
   let best: { out: Attempt & { status: 'solved' }; k: number; earth: number } | undefined;
+  const bound = earthMoved(ground, relaxed.design);
+  const length = ground[ground.length - 1].stationFt - ground[0].stationFt;
   for (const k of ks) {
     const out = solveOnce(job, layout, ranges, share, k);
     if (out.status !== 'solved') continue;
     const earth = earthMoved(ground, out.design);
     if (!best || earth < best.earth) best = { out, k, earth };
-    if (earth <= earthMoved(ground, relaxed.design) + 1e-9) break;
+    if (earth <= bound + EARTH_TOLERANCE_FT * length) break;
   }
   if (best) return best;
   const mip = solveOnce(job, layout, ranges, share, 'choose');

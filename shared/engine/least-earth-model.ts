@@ -81,8 +81,9 @@ export function buildLeastEarthModel(
   const len = x.slice(1).map((s, j) => s - x[j]);
   const Z = (j: number) => j;
   const U = (i: number) => m + i;
-  const R = (j: number) => m + n + j;
-  const cols = 2 * m + n - 1;
+  const Q = (i: number) => m + n + i;
+  const R = (j: number) => m + 2 * n + j;
+  const cols = 2 * m + 2 * n - 1;
   const cost = new Float64Array(cols);
   const colLower = new Float64Array(cols).fill(-Infinity);
   const colUpper = new Float64Array(cols).fill(Infinity);
@@ -99,12 +100,11 @@ export function buildLeastEarthModel(
   }
   for (let i = 0; i < n; i++) {
     const e = points[i].elevationFt;
-    cost[U(i)] = (i > 0 ? points[i].stationFt - points[i - 1].stationFt : 0) / 2 + (i < n - 1 ? points[i + 1].stationFt - points[i].stationFt : 0) / 2;
-    colLower[U(i)] = 0;
+    cost[U(i)] = cost[Q(i)] = (i > 0 ? points[i].stationFt - points[i - 1].stationFt : 0) / 2 + (i < n - 1 ? points[i + 1].stationFt - points[i].stationFt : 0) / 2;
+    colLower[U(i)] = colLower[Q(i)] = 0;
     const j = seg[i];
     const at: [number, number][] = t[i] === 0 ? [[Z(j), 1]] : t[i] === 1 ? [[Z(j + 1), 1]] : [[Z(j), 1 - t[i]], [Z(j + 1), t[i]]];
-    rows.add([...at, [U(i), -1]], -Infinity, e);
-    rows.add([...at, [U(i), 1]], e, Infinity);
+    rows.add([...at, [U(i), -1], [Q(i), 1]], e, e);
   }
   colLower[Z(0)] = colUpper[Z(0)] = roadEdgeFt;
   if (targetEndFt !== undefined) colLower[Z(m - 1)] = colUpper[Z(m - 1)] = targetEndFt;
