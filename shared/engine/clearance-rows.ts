@@ -10,6 +10,8 @@ export interface ClearanceBudget {
 export interface ClearanceRow {
   terms: [number, number][];
   upper: number;
+  /** The vertex whose share sets the upper limit. */
+  vertex: number;
 }
 
 /** z at station s as a weighted pair of neighbouring stations, or null off the profile. */
@@ -51,7 +53,7 @@ export function clearanceRows(x: readonly number[], budget: ClearanceBudget): Cl
     const here: [number, number][] = [[i, 1]];
     const left = at(x, x[i] - w / 2);
     const right = at(x, x[i] + w / 2);
-    if (left && right) rows.push({ terms: [...here, ...scaled(left, -0.5), ...scaled(right, -0.5)], upper: limit });
+    if (left && right) rows.push({ terms: [...here, ...scaled(left, -0.5), ...scaled(right, -0.5)], upper: limit, vertex: i });
     if (overhang <= 0) continue;
     for (const side of [1, -1]) {
       // Wheel at x_i, the other wheel W behind it, the overhang's end L beyond: z(end) - z_i - (L/W)(z_i - z(other)) <= c.
@@ -59,7 +61,7 @@ export function clearanceRows(x: readonly number[], budget: ClearanceBudget): Cl
       const end = at(x, x[i] + side * overhang);
       if (!other || !end) continue;
       const k = overhang / w;
-      rows.push({ terms: [...scaled(end, 1), [i, -1 - k], ...scaled(other, k)], upper: limit });
+      rows.push({ terms: [...scaled(end, 1), [i, -1 - k], ...scaled(other, k)], upper: limit, vertex: i });
     }
   }
   return rows;

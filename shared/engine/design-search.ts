@@ -1,9 +1,10 @@
 import type { Highs } from 'highs';
-import { solveLinear } from './design-solver';
+import { DesignProgram } from './design-program';
+import { solveLinear, type SolveOutcome } from './design-solver';
 import { transitionStations, withStations } from './design-stations';
 import { designVertices, type FineStretch } from './design-vertices';
 import { crestAllowed, explainInfeasible } from './infeasible-reason';
-import { buildLeastEarthModel, type Directions, GRADE_MARGIN, segmentRanges, type SegmentRanges } from './least-earth-model';
+import { buildLeastEarthModel, type DesignModel, type Directions, GRADE_MARGIN, segmentRanges, type SegmentRanges } from './least-earth-model';
 import type { Finding } from './findings';
 import { checkProfileRules, type ProfileCheck } from './profile-checks';
 import type { ProfilePoint } from './profile';
@@ -60,13 +61,22 @@ type Attempt =
 interface Layout {
   ground: ProfilePoint[];
   vertices: number[];
+  /** The linear programme on these stations, loaded once for every crest and share tried. */
+  program?: DesignProgram;
 }
 
 function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Float64Array | undefined, directions: Directions): Attempt {
-  const budget = share ? { vehicle: job.rules.designVehicle, share } : undefined;
-  const { ground, vertices } = layout;
-  const built = buildLeastEarthModel(ground, vertices, ranges, job.rules, job.roadEdgeFt, job.targetEndFt, budget, directions, job.margin);
-  const out = solveLinear(job.highs, built.model);
+  const { ground, vertices, program } = layout;
+  let built: DesignModel;
+  let out: SolveOutcome;
+  if (program && directions !== 'choose') {
+    built = program.built;
+    out = program.solve(share, directions);
+  } else {
+    const budget = share ? { vehicle: job.rules.designVehicle, share } : undefined;
+    built = buildLeastEarthModel(ground, vertices, ranges, job.rules, job.roadEdgeFt, job.targetEndFt, budget, directions, job.margin);
+    out = solveLinear(job.highs, built.model);
+  }
   if (out.status === 'infeasible' || out.status === 'failed') return out;
   const design = built.read(out.x);
   const check = checkProfileRules(design, job.rules, design[0].stationFt, job.scrapeStepFt);
@@ -153,12 +163,23 @@ function tighten(share: Float64Array, vertices: readonly ProfilePoint[], station
 }
 
 /** Clearance in the model, then the exact scrape check; where it still scrapes, that neighbourhood is tightened. */
-function designOn(job: Job, layout: Layout): DesignFound {
-  const { ground } = layout;
-  const corners = layout.vertices.map((i) => ground[i]);
+function designOn(job: Job, bare: Layout): DesignFound {
+  const { ground } = bare;
+  const corners = bare.vertices.map((i) => ground[i]);
   const ranges = segmentRanges(corners, job.rules);
   const reason = explainInfeasible(corners, ranges, job.rules, job.roadEdgeFt, job.targetEndFt);
   if (reason) return { ground, reason };
+  const { rules, roadEdgeFt, targetEndFt, margin } = job;
+  const program = new DesignProgram(job.highs, { ground, vertices: bare.vertices, ranges, rules, roadEdgeFt, targetEndFt, margin });
+  try {
+    return designWith(job, { ...bare, program }, corners, ranges);
+  } finally {
+    program.dispose();
+  }
+}
+
+function designWith(job: Job, layout: Layout, corners: ProfilePoint[], ranges: SegmentRanges[]): DesignFound {
+  const { ground } = layout;
   const allowed = crestAllowed(corners, ranges, job.roadEdgeFt, job.targetEndFt);
   const share = new Float64Array(corners.length).fill(1);
   let k: number | undefined;

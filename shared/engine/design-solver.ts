@@ -33,6 +33,23 @@ const MIP_NODE_LIMIT = 400;
 const MIP_GAP = 0.002;
 
 export function solveLinear(highs: Highs, m: LinearModel): SolveOutcome {
+  const open = openLinear(highs, m);
+  try {
+    return open.run();
+  } finally {
+    open.dispose();
+  }
+}
+
+/** A programme loaded once; bounds can change between runs and each run starts from the last basis. */
+export interface OpenLinear {
+  setColBounds(first: number, lower: Float64Array, upper: Float64Array): void;
+  setRowBounds(first: number, lower: Float64Array, upper: Float64Array): void;
+  run(): SolveOutcome;
+  dispose(): void;
+}
+
+export function openLinear(highs: Highs, m: LinearModel): OpenLinear {
   const numCols = m.cost.length;
   const hasBinary = m.binary.some((b) => b === 1);
   const model = highs.createModel({
@@ -53,25 +70,34 @@ export function solveLinear(highs: Highs, m: LinearModel): SolveOutcome {
     },
     integrality: hasBinary ? Int32Array.from(m.binary) : undefined,
   });
-  try {
-    // Serial dual simplex measured fastest on these chain-shaped programmes (200 and 2,000 stations); a MIP
-    // must keep the default choice or HiGHS would drop the integrality.
-    model.options.set(
-      hasBinary
-        ? { output_flag: false, mip_rel_gap: MIP_GAP, mip_max_nodes: MIP_NODE_LIMIT }
-        : { output_flag: false, solver: 'simplex', simplex_strategy: 1, primal_feasibility_tolerance: 1e-9 },
-    );
-    const run = model.run();
-    const codes = highs.constants.modelStatus;
-    const status = run.modelStatus;
-    if (status === codes.infeasible) return { status: 'infeasible', detail: 'infeasible' };
-    if (status === codes.optimal) return { status: 'optimal', x: model.getSolution().colValue };
-    // A node limit ends the search with the best design found so far, which still meets every row.
-    if (hasIncumbent(model)) return { status: 'limit', x: model.getSolution().colValue };
-    return { status: 'failed', detail: `solver status ${status}` };
-  } finally {
-    model.dispose();
-  }
+  // Serial dual simplex measured fastest on these chain-shaped programmes (200 and 2,000 stations), and it
+  // restarts from the last basis after a bound changes; a MIP must keep the default choice or HiGHS would
+  // drop the integrality.
+  model.options.set(
+    hasBinary
+      ? { output_flag: false, mip_rel_gap: MIP_GAP, mip_max_nodes: MIP_NODE_LIMIT }
+      : { output_flag: false, solver: 'simplex', simplex_strategy: 1, primal_feasibility_tolerance: 1e-9 },
+  );
+  const range = (from: number, count: number) => ({ kind: 'range' as const, from, to: from + count - 1 });
+  return {
+    setColBounds(first, lower, upper) {
+      if (lower.length > 0) model.changeColsBounds(range(first, lower.length), lower, upper);
+    },
+    setRowBounds(first, lower, upper) {
+      if (lower.length > 0) model.changeRowsBounds(range(first, lower.length), lower, upper);
+    },
+    run() {
+      const run = model.run();
+      const codes = highs.constants.modelStatus;
+      const status = run.modelStatus;
+      if (status === codes.infeasible) return { status: 'infeasible', detail: 'infeasible' };
+      if (status === codes.optimal) return { status: 'optimal', x: model.getSolution().colValue };
+      // A node limit ends the search with the best design found so far, which still meets every row.
+      if (hasIncumbent(model)) return { status: 'limit', x: model.getSolution().colValue };
+      return { status: 'failed', detail: `solver status ${status}` };
+    },
+    dispose: () => model.dispose(),
+  };
 }
 
 function hasIncumbent(model: { info: { get(name: string): unknown } }): boolean {

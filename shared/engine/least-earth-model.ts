@@ -54,6 +54,10 @@ export interface DesignModel {
   read(x: Float64Array): ProfilePoint[];
   /** Each vertex segment's direction, 1 rising to 0 falling. */
   rising(x: Float64Array): Float64Array;
+  /** The direction columns (one per vertex segment, from `first`) and the bounds they were built with. */
+  directionCols: { first: number; lower: Float64Array; upper: Float64Array };
+  /** The clearance rows (from `first`): the vertex each belongs to and the clearance that share scales. */
+  clearance: { first: number; vertex: Int32Array; clearanceFt: number };
 }
 
 /**
@@ -128,9 +132,9 @@ export function buildLeastEarthModel(
   const maxChange = rules.maxGradeChangePercent / 100 - SHRINK;
   for (let v = 1; v < m - 1; v++) rows.add([...grade(v), ...grade(v - 1).map(([c, k]): [number, number] => [c, -k])], -maxChange, maxChange);
 
-  if (budget) {
-    for (const row of clearanceRows(x, budget)) rows.add(row.terms.map(([j, k]): [number, number] => [Z(j), k]), -Infinity, row.upper);
-  }
+  const firstClearance = rows.count;
+  const clearance = budget ? clearanceRows(x, budget) : [];
+  for (const row of clearance) rows.add(row.terms.map(([j, k]): [number, number] => [Z(j), k]), -Infinity, row.upper);
 
   const read = (solution: Float64Array): ProfilePoint[] =>
     points.map((p, i) => {
@@ -138,5 +142,11 @@ export function buildLeastEarthModel(
       const z = t[i] === 0 ? solution[Z(j)] : t[i] === 1 ? solution[Z(j + 1)] : (1 - t[i]) * solution[Z(j)] + t[i] * solution[Z(j + 1)];
       return { stationFt: p.stationFt, elevationFt: z };
     });
-  return { model: { cost, colLower, colUpper, binary, rows }, read, rising: (solution) => solution.slice(R(0), R(0) + m - 1) };
+  return {
+    model: { cost, colLower, colUpper, binary, rows },
+    read,
+    rising: (solution) => solution.slice(R(0), R(0) + m - 1),
+    directionCols: { first: R(0), lower: colLower.slice(R(0), R(0) + m - 1), upper: colUpper.slice(R(0), R(0) + m - 1) },
+    clearance: { first: firstClearance, vertex: Int32Array.from(clearance, (r) => r.vertex), clearanceFt: rules.designVehicle.clearanceIn / 12 },
+  };
 }
