@@ -1,4 +1,4 @@
-import type { Highs } from 'highs';
+import type { Basis, Highs } from 'highs';
 import { openLinear, type OpenLinear, type SolveOutcome } from './design-solver';
 import { buildLeastEarthModel, type DesignModel, type SegmentRanges } from './least-earth-model';
 import type { ProfilePoint } from './profile';
@@ -22,6 +22,8 @@ export interface ProgramSpec {
 export class DesignProgram {
   readonly built: DesignModel;
   private readonly open: OpenLinear;
+  private relaxedBasis: Basis | undefined;
+  private last: 'relaxed' | number | undefined;
 
   constructor(highs: Highs, spec: ProgramSpec) {
     const share = new Float64Array(spec.vertices.length).fill(1);
@@ -37,10 +39,16 @@ export class DesignProgram {
     else {
       const fixed = Float64Array.from(d.lower, (_, j) => (j < directions ? 1 : 0));
       this.open.setColBounds(d.first, fixed, fixed);
+      // Every crest position is a rounding of the relaxation, so each starts from its basis, not the last try's.
+      // A tighter clearance at the same crest starts from where that crest left off.
+      if (this.relaxedBasis && directions !== this.last) this.open.restoreBasis(this.relaxedBasis);
     }
     const upper = Float64Array.from(c.vertex, (v) => (share ? c.clearanceFt * share[v] : Infinity));
     this.open.setRowBounds(c.first, new Float64Array(upper.length).fill(-Infinity), upper);
-    return this.open.run();
+    const out = this.open.run();
+    this.last = directions;
+    if (directions === 'relaxed') this.relaxedBasis = out.status === 'optimal' ? this.open.saveBasis() : undefined;
+    return out;
   }
 
   dispose(): void {

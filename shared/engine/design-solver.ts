@@ -1,4 +1,4 @@
-import loadHighs, { type Highs } from 'highs';
+import loadHighs, { type Basis, type Highs } from 'highs';
 import type { SparseRows } from './sparse-rows';
 
 /**
@@ -46,6 +46,9 @@ export interface OpenLinear {
   setColBounds(first: number, lower: Float64Array, upper: Float64Array): void;
   setRowBounds(first: number, lower: Float64Array, upper: Float64Array): void;
   run(): SolveOutcome;
+  /** The current basis, to start a later run from (see restoreBasis). */
+  saveBasis(): Basis;
+  restoreBasis(basis: Basis): void;
   dispose(): void;
 }
 
@@ -87,14 +90,18 @@ export function openLinear(highs: Highs, m: LinearModel): OpenLinear {
       if (lower.length > 0) model.changeRowsBounds(range(first, lower.length), lower, upper);
     },
     run() {
-      const run = model.run();
-      const codes = highs.constants.modelStatus;
+        const run = model.run();
+        const codes = highs.constants.modelStatus;
       const status = run.modelStatus;
       if (status === codes.infeasible) return { status: 'infeasible', detail: 'infeasible' };
       if (status === codes.optimal) return { status: 'optimal', x: model.getSolution().colValue };
       // A node limit ends the search with the best design found so far, which still meets every row.
       if (hasIncumbent(model)) return { status: 'limit', x: model.getSolution().colValue };
       return { status: 'failed', detail: `solver status ${status}` };
+    },
+    saveBasis: () => model.getBasis(),
+    restoreBasis(basis) {
+      model.setBasis(basis);
     },
     dispose: () => model.dispose(),
   };
