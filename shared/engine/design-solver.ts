@@ -74,12 +74,14 @@ export function openLinear(highs: Highs, m: LinearModel): OpenLinear {
     integrality: hasBinary ? Int32Array.from(m.binary) : undefined,
   });
   // Serial dual simplex measured fastest on these chain-shaped programmes (200 and 2,000 stations), and it
-  // restarts from the last basis after a bound changes; a MIP must keep the default choice or HiGHS would
-  // drop the integrality.
+  // restarts from the last basis after a bound changes. Devex pricing (edge weight strategy 1) measured about
+  // twice as fast as the default steepest edge at 2,000 stations: its weights cost nothing to set up, and a
+  // restart after a large bound change does not pay to recompute them. A MIP must keep the default choice or
+  // HiGHS would drop the integrality.
   model.options.set(
     hasBinary
       ? { output_flag: false, mip_rel_gap: MIP_GAP, mip_max_nodes: MIP_NODE_LIMIT }
-      : { output_flag: false, solver: 'simplex', simplex_strategy: 1, primal_feasibility_tolerance: 1e-9 },
+      : { output_flag: false, solver: 'simplex', simplex_strategy: 1, simplex_dual_edge_weight_strategy: 1, primal_feasibility_tolerance: 1e-9 },
   );
   const range = (from: number, count: number) => ({ kind: 'range' as const, from, to: from + count - 1 });
   return {
