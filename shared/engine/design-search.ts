@@ -61,6 +61,8 @@ type Attempt =
 interface Layout {
   ground: ProfilePoint[];
   vertices: number[];
+  /** Where an earlier design on these stations turned from rising to falling: the crest to try first. */
+  crestFt?: number;
   /** The linear programme on these stations, loaded once for every crest and share tried. */
   program?: DesignProgram;
 }
@@ -182,7 +184,8 @@ function designWith(job: Job, layout: Layout, corners: ProfilePoint[], ranges: S
   const { ground } = layout;
   const allowed = crestAllowed(corners, ranges, job.roadEdgeFt, job.targetEndFt);
   const share = new Float64Array(corners.length).fill(1);
-  let k: number | undefined;
+  // A known crest is tried as it is; only if it cannot be met is the relaxation solved to choose again.
+  let k = layout.crestFt === undefined ? undefined : corners.slice(1).filter((c) => c.stationFt <= layout.crestFt! + STATION_TOLERANCE_FT).length;
   for (let attempt = 0; attempt < MAX_TIGHTENING; attempt++) {
     let out = k === undefined ? undefined : solveOnce(job, layout, ranges, share, k);
     if (!out || out.status === 'infeasible') {
@@ -273,11 +276,17 @@ export function searchDesign(
   const dense = withStations(ground, transitionStations(ground, breaks, radius, step, MAX_DESIGN_STATIONS - ground.length), step / 2);
   const fine: FineStretch[] = breaks.map((b) => ({ fromFt: b - radius, toFt: b + radius, stepFt: step }));
   const denseKeep = new Set([...keep, ...dense.map((p) => p.stationFt).filter((s) => !surveyed.has(s))]);
-  const curved: Layout = { ground: dense, vertices: designVertices(dense, denseKeep, fine) };
+  const curved: Layout = { ground: dense, vertices: designVertices(dense, denseKeep, fine), crestFt: crestStation(first.design) };
   if (dense.length === ground.length && curved.vertices.length === coarse.vertices.length) return first;
   const second = designOn(job, curved);
   if (second.design && earthMoved(dense, second.design) < earthMoved(first.ground, first.design) - 1e-9) return second;
   return first;
+}
+
+/** The first station at the design's highest point: everything before it rises, everything after falls. */
+function crestStation(design: readonly ProfilePoint[]): number {
+  const top = Math.max(...design.map((p) => p.elevationFt));
+  return design.find((p) => p.elevationFt >= top - 1e-9)!.stationFt;
 }
 
 /** Only a design sitting exactly on a limit needs the margin gone; the exact check still has the last word. */

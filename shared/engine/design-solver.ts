@@ -92,8 +92,8 @@ export function openLinear(highs: Highs, m: LinearModel): OpenLinear {
       if (lower.length > 0) model.changeRowsBounds(range(first, lower.length), lower, upper);
     },
     run() {
-        const run = model.run();
-        const codes = highs.constants.modelStatus;
+      const run = model.run();
+      const codes = highs.constants.modelStatus;
       const status = run.modelStatus;
       if (status === codes.infeasible) return { status: 'infeasible', detail: 'infeasible' };
       if (status === codes.optimal) return { status: 'optimal', x: model.getSolution().colValue };
