@@ -44,7 +44,8 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
       directives: {
         'img-src': ["'self'", 'data:', 'blob:', s3Origin],
         'connect-src': ["'self'", s3Origin, ...(options.clientMiddleware ? ['ws:'] : [])],
-        'script-src': ["'self'", ...(options.clientMiddleware ? ["'unsafe-inline'"] : [])],
+        // The design worker compiles the solver's WebAssembly (served from 'self'); this allows that and no JS eval.
+        'script-src': ["'self'", "'wasm-unsafe-eval'", ...(options.clientMiddleware ? ["'unsafe-inline'"] : [])],
         'upgrade-insecure-requests': secure ? [] : null,
       },
     },

@@ -3,6 +3,7 @@ import { fileURLToPath } from 'node:url';
 import { createApp, type AppOptions } from './app';
 import { closeContext, createContext } from './context-factory';
 import { parseEnv } from './env';
+import { closeDesignPool } from './services/design/design-pool';
 import { startWorkers } from './workers';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
@@ -34,6 +35,7 @@ async function main() {
     setTimeout(() => server.closeAllConnections(), 5_000).unref();
     await closed;
     await workers?.stop();
+    await closeDesignPool();
     await client.close();
     await closeContext(ctx);
     process.exit(0);

@@ -1,96 +1,152 @@
-import type { Constraint, Model } from 'yalps';
+import type { LinearModel } from './design-solver';
 import type { ProfilePoint } from './profile';
 import type { RuleProfile } from './rule-profile';
+import { SparseRows } from './sparse-rows';
+import { STATION_TOLERANCE_FT } from './station-tolerance';
+import { clearanceRows, type ClearanceBudget } from './clearance-rows';
 
-/** Allowed grade of one segment, as a fraction. */
-export interface GradeLimits {
-  lo: number;
-  hi: number;
+/** The grades one segment may take when it rises away from the road and when it falls; null when it cannot. */
+export interface SegmentRanges {
+  rise: { lo: number; hi: number } | null;
+  fall: { lo: number; hi: number } | null;
   inLanding: boolean;
 }
 
-// LP answers sit on their constraints to within the solver's precision; pulling every limit in by this much
-// keeps the answer on the right side of the exact check that follows.
-const SHRINK = 1e-7;
+/**
+ * The solver meets its rows to about 1e-9 ft; pulling each grade limit in by this much (a ten-thousandth of a
+ * percent) keeps its answer on the right side of the exact check that follows. A design that must sit exactly
+ * on a limit is solved again with no margin (see design-search.ts).
+ */
+export const GRADE_MARGIN = 1e-6;
 
-export function segmentLimits(points: readonly ProfilePoint[], rules: RuleProfile): GradeLimits[] {
+/**
+ * A segment "rises" when its grade is at least zero (or the drainage minimum) and "falls" when it is at most
+ * zero (or minus the minimum). The landing is graded as the check grades it: a segment starting before the
+ * landing's end is landing, and the drainage minimum applies only beyond it.
+ */
+export function segmentRanges(points: readonly ProfilePoint[], rules: RuleProfile): SegmentRanges[] {
   const landingEnd = points[0].stationFt + rules.landing.lengthFt;
   const max = rules.maxGradePercent / 100;
-  const min = rules.minDrainageGradePercent === undefined ? undefined : rules.minDrainageGradePercent / 100;
-  const limits: GradeLimits[] = [];
+  const drain = (rules.minDrainageGradePercent ?? 0) / 100;
+  const ranges: SegmentRanges[] = [];
   for (let i = 0; i < points.length - 1; i++) {
-    const a = points[i];
-    const b = points[i + 1];
-    if (a.stationFt < landingEnd) {
-      limits.push({ lo: rules.landing.minGradePercent / 100, hi: rules.landing.maxGradePercent / 100, inLanding: true });
-    } else if (min === undefined) {
-      limits.push({ lo: -max, hi: max, inLanding: false });
-    } else {
-      // |grade| >= min is not convex; following the ground's own direction keeps it linear and moves the least earth.
-      const rising = b.elevationFt >= a.elevationFt;
-      limits.push(rising ? { lo: min, hi: max, inLanding: false } : { lo: -max, hi: -min, inLanding: false });
-    }
+    const inLanding = points[i].stationFt < landingEnd - STATION_TOLERANCE_FT;
+    const lo = inLanding ? rules.landing.minGradePercent / 100 : -max;
+    const hi = inLanding ? rules.landing.maxGradePercent / 100 : max;
+    const m = inLanding ? 0 : drain;
+    const rise = { lo: Math.max(lo, m), hi };
+    const fall = { lo, hi: Math.min(hi, -m) };
+    ranges.push({ rise: rise.lo <= rise.hi ? rise : null, fall: fall.lo <= fall.hi ? fall : null, inLanding });
   }
-  return limits;
+  return ranges;
 }
 
 /**
- * Variables: for each station, cut c_i >= 0 and fill f_i >= 0 with design z_i = e_i - c_i + f_i, because
- * the solver only takes non-negative variables and |z - e| = c + f at the optimum.
+ * How segment directions are decided: 'choose' leaves them to the mixed-integer search, 'relaxed' lets each
+ * lie between rising and falling (a linear programme whose cost is a lower bound), and a number k fixes the
+ * first k segments rising and the rest falling.
+ */
+export type Directions = 'choose' | 'relaxed' | number;
+
+export interface DesignModel {
+  model: LinearModel;
+  /** The design at every station: straight between vertices. */
+  read(x: Float64Array): ProfilePoint[];
+  /** Each vertex segment's direction, 1 rising to 0 falling. */
+  rising(x: Float64Array): Float64Array;
+  /** The direction columns (one per vertex segment, from `first`) and the bounds they were built with. */
+  directionCols: { first: number; lower: Float64Array; upper: Float64Array };
+  /** The clearance rows (from `first`): the vertex each belongs to and the clearance that share scales. */
+  clearance: { first: number; vertex: Int32Array; clearanceFt: number };
+}
+
+/**
+ * Columns: design elevation z_j at each vertex, earth moved u_i >= |z(x_i) - e_i| at every station (z read on
+ * the straight line between the vertices either side), and a 0/1 direction r_j per vertex segment (1 rises,
+ * 0 falls). Directions are non-increasing along the profile, so the design climbs and then falls at most once:
+ * a profile shaped like that has no low point for water to stand in, on the driveway or against the road.
+ * Every grade, break and clearance limit is linear in z, so the whole design is one mixed-integer programme.
  */
 export function buildLeastEarthModel(
   points: readonly ProfilePoint[],
-  limits: readonly GradeLimits[],
+  vertices: readonly number[],
+  ranges: readonly SegmentRanges[],
   rules: RuleProfile,
   roadEdgeFt: number,
   targetEndFt: number | undefined,
-  changeRatePerFt: number,
-) {
+  budget: ClearanceBudget | undefined,
+  directions: Directions,
+  margin = GRADE_MARGIN,
+): DesignModel {
+  const SHRINK = margin;
   const n = points.length;
-  const e = points.map((p) => p.elevationFt);
-  const len = points.slice(1).map((p, i) => p.stationFt - points[i].stationFt);
-  const constraints: [string, Constraint][] = [];
-  const coef: Map<string, number>[] = Array.from({ length: 2 * n }, () => new Map());
-  // Coefficient of design offset (f_i - c_i) in constraint `key`.
-  const add = (key: string, i: number, k: number) => {
-    coef[2 * i].set(key, (coef[2 * i].get(key) ?? 0) - k);
-    coef[2 * i + 1].set(key, (coef[2 * i + 1].get(key) ?? 0) + k);
-  };
+  const m = vertices.length;
+  const x = vertices.map((i) => points[i].stationFt);
+  const len = x.slice(1).map((s, j) => s - x[j]);
+  const Z = (j: number) => j;
+  const U = (i: number) => m + i;
+  const Q = (i: number) => m + n + i;
+  const R = (j: number) => m + 2 * n + j;
+  const cols = 2 * m + 2 * n - 1;
+  const cost = new Float64Array(cols);
+  const colLower = new Float64Array(cols).fill(-Infinity);
+  const colUpper = new Float64Array(cols).fill(Infinity);
+  const binary = new Uint8Array(cols);
+  const rows = new SparseRows();
+
+  // Station i sits on vertex segment seg[i] at fraction t[i] of its length.
+  const seg = new Int32Array(n);
+  const t = new Float64Array(n);
+  for (let i = 0, j = 0; i < n; i++) {
+    while (j < m - 2 && vertices[j + 1] <= i) j++;
+    seg[i] = j;
+    t[i] = m > 1 ? (points[i].stationFt - x[j]) / len[j] : 0;
+  }
   for (let i = 0; i < n; i++) {
-    const weight = ((len[i - 1] ?? 0) + (len[i] ?? 0)) / 2;
-    coef[2 * i].set('earth', weight);
-    coef[2 * i + 1].set('earth', weight);
+    const e = points[i].elevationFt;
+    cost[U(i)] = cost[Q(i)] = (i > 0 ? points[i].stationFt - points[i - 1].stationFt : 0) / 2 + (i < n - 1 ? points[i + 1].stationFt - points[i].stationFt : 0) / 2;
+    colLower[U(i)] = colLower[Q(i)] = 0;
+    const j = seg[i];
+    const at: [number, number][] = t[i] === 0 ? [[Z(j), 1]] : t[i] === 1 ? [[Z(j + 1), 1]] : [[Z(j), 1 - t[i]], [Z(j + 1), t[i]]];
+    rows.add([...at, [U(i), -1], [Q(i), 1]], e, e);
   }
-  constraints.push(['start', { equal: roadEdgeFt - e[0] }]);
-  add('start', 0, 1);
-  if (targetEndFt !== undefined) {
-    constraints.push(['end', { equal: targetEndFt - e[n - 1] }]);
-    add('end', n - 1, 1);
+  colLower[Z(0)] = colUpper[Z(0)] = roadEdgeFt;
+  if (targetEndFt !== undefined) colLower[Z(m - 1)] = colUpper[Z(m - 1)] = targetEndFt;
+
+  for (let j = 0; j < m - 1; j++) {
+    const { rise, fall } = ranges[j];
+    const up = rise ?? fall!;
+    const down = fall ?? rise!;
+    binary[R(j)] = directions === 'choose' ? 1 : 0;
+    colLower[R(j)] = fall ? 0 : 1;
+    colUpper[R(j)] = rise ? 1 : 0;
+    if (typeof directions === 'number') colLower[R(j)] = colUpper[R(j)] = j < directions ? 1 : 0;
+    const L = len[j];
+    // z_{j+1} - z_j between L*fall and L*rise as r_j goes 0 -> 1.
+    rows.add([[Z(j + 1), 1], [Z(j), -1], [R(j), -L * (up.lo - down.lo)]], L * (down.lo + SHRINK), Infinity);
+    rows.add([[Z(j + 1), 1], [Z(j), -1], [R(j), -L * (up.hi - down.hi)]], -Infinity, L * (down.hi - SHRINK));
+    if (j > 0) rows.add([[R(j), 1], [R(j - 1), -1]], -Infinity, 0);
   }
-  for (let i = 0; i < n - 1; i++) {
-    const de = e[i + 1] - e[i];
-    const key = `g${i}`;
-    constraints.push([key, { min: (limits[i].lo + SHRINK) * len[i] - de, max: (limits[i].hi - SHRINK) * len[i] - de }]);
-    add(key, i + 1, 1);
-    add(key, i, -1);
-  }
-  const maxChange = rules.maxGradeChangePercent / 100;
-  for (let i = 0; i < n - 2; i++) {
-    const midSpacing = (len[i] + len[i + 1]) / 2;
-    const allowed = Math.min(maxChange, changeRatePerFt * midSpacing) - SHRINK;
-    const existingChange = (e[i + 2] - e[i + 1]) / len[i + 1] - (e[i + 1] - e[i]) / len[i];
-    const key = `c${i}`;
-    constraints.push([key, { min: -allowed - existingChange, max: allowed - existingChange }]);
-    add(key, i + 2, 1 / len[i + 1]);
-    add(key, i + 1, -1 / len[i + 1] - 1 / len[i]);
-    add(key, i, 1 / len[i]);
-  }
-  const variables: [number, Map<string, number>][] = coef.map((c, j) => [j, c]);
-  const model: Model<number, string> = { direction: 'minimize', objective: 'earth', constraints, variables };
-  const read = (solved: [number, number][]): ProfilePoint[] => {
-    const value = new Float64Array(2 * n);
-    for (const [j, v] of solved) value[j] = v;
-    return points.map((p, i) => ({ stationFt: p.stationFt, elevationFt: e[i] - value[2 * i] + value[2 * i + 1] }));
+
+  const grade = (j: number): [number, number][] => [[Z(j + 1), 1 / len[j]], [Z(j), -1 / len[j]]];
+  const maxChange = rules.maxGradeChangePercent / 100 - SHRINK;
+  for (let v = 1; v < m - 1; v++) rows.add([...grade(v), ...grade(v - 1).map(([c, k]): [number, number] => [c, -k])], -maxChange, maxChange);
+
+  const firstClearance = rows.count;
+  const clearance = budget ? clearanceRows(x, budget) : [];
+  for (const row of clearance) rows.add(row.terms.map(([j, k]): [number, number] => [Z(j), k]), -Infinity, row.upper);
+
+  const read = (solution: Float64Array): ProfilePoint[] =>
+    points.map((p, i) => {
+      const j = seg[i];
+      const z = t[i] === 0 ? solution[Z(j)] : t[i] === 1 ? solution[Z(j + 1)] : (1 - t[i]) * solution[Z(j)] + t[i] * solution[Z(j + 1)];
+      return { stationFt: p.stationFt, elevationFt: z };
+    });
+  return {
+    model: { cost, colLower, colUpper, binary, rows },
+    read,
+    rising: (solution) => solution.slice(R(0), R(0) + m - 1),
+    directionCols: { first: R(0), lower: colLower.slice(R(0), R(0) + m - 1), upper: colUpper.slice(R(0), R(0) + m - 1) },
+    clearance: { first: firstClearance, vertex: Int32Array.from(clearance, (r) => r.vertex), clearanceFt: rules.designVehicle.clearanceIn / 12 },
   };
-  return { model, read };
 }

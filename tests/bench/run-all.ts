@@ -3,7 +3,7 @@ import { existsSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 
 /** `npm run bench`: each benchmark in its own process, so one's heap and JIT state cannot colour the next. */
-const benches = ['engine.bench.ts', 'queue.bench.ts'];
+const benches = ['engine.bench.ts', 'design-pool.bench.ts', 'queue.bench.ts'];
 let failed = false;
 for (const bench of benches) {
   const file = fileURLToPath(new URL(bench, import.meta.url));

@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import * as engine from '../../shared/engine';
 import { checkEntrance, commonRuralTemplate, EngineInputError, passengerCarPreset, proposeProfile, type RuleProfile } from '../../shared/engine';
+import { holdsWater } from './water';
 
 const runs = fc.array(fc.tuple(fc.double({ min: 1, max: 30, noNaN: true }), fc.double({ min: -15, max: 15, noNaN: true })), { minLength: 1, maxLength: 12 });
 
@@ -27,6 +28,11 @@ const rulesArb: fc.Arbitrary<RuleProfile> = fc
     maxGradePercent: r.maxGrade,
     maxGradeChangePercent: r.maxChange,
   }));
+
+// The same rules, some with a drainage minimum (the proposal must then choose each segment's direction).
+const designRulesArb: fc.Arbitrary<RuleProfile> = fc
+  .tuple(rulesArb, fc.option(fc.double({ min: 0.5, max: 3, noNaN: true }), { nil: undefined }))
+  .map(([rules, drain]) => (drain === undefined ? rules : { ...rules, minDrainageGradePercent: drain }));
 
 const GRADE_RULES = ['landing.max-grade', 'landing.min-grade', 'grade.max', 'grade.max-change', 'scrape.clearance'];
 
@@ -57,18 +63,18 @@ describe('properties', () => {
     );
   });
 
-  it('a proposed profile always passes the profile rules of checkEntrance', () => {
-    fc.assert(
-      fc.property(
+  it('a proposed profile always passes the profile rules of checkEntrance', async () => {
+    await fc.assert(
+      fc.asyncProperty(
         fc.array(fc.tuple(fc.double({ min: 2, max: 20, noNaN: true }), fc.double({ min: -25, max: 25, noNaN: true })), { minLength: 3, maxLength: 25 }),
         rulesArb,
         fc.double({ min: -1, max: 1, noNaN: true }),
         fc.option(fc.double({ min: -3, max: 3, noNaN: true }), { nil: undefined }),
-        (rs, rules, roadOffset, endOffset) => {
+        async (rs, rules, roadOffset, endOffset) => {
           const existing = toProfile(rs);
           const end = existing[existing.length - 1].elevationFt;
           const targetEndElevationFt = endOffset === undefined ? undefined : end + endOffset;
-          const r = proposeProfile({ existing, roadEdgeElevationFt: 100 + roadOffset, targetEndElevationFt }, rules);
+          const r = await proposeProfile({ existing, roadEdgeElevationFt: 100 + roadOffset, targetEndElevationFt }, rules);
           if (!r.feasible) {
             expect(r.reason).toBeTruthy();
             return;
@@ -77,15 +83,36 @@ describe('properties', () => {
           const check = checkEntrance({ profile: r.profile }, rules);
           const failed = check.findings.filter((f) => f.status === 'fail');
           expect(failed).toEqual([]);
+          expect(holdsWater(r.profile)).toBe(false);
           expect(r.cutCuYd).toBeGreaterThanOrEqual(0);
           expect(r.fillCuYd).toBeGreaterThanOrEqual(0);
         },
       ),
       { numRuns: 60 },
     );
-  });
+  }, 120_000);
 
-  it('any input at all either computes or throws EngineInputError, never another error', () => {
+  it('never proposes worse than the ground when the ground already complies and drains', async () => {
+    await fc.assert(
+      fc.asyncProperty(
+        fc.array(fc.tuple(fc.double({ min: 2, max: 20, noNaN: true }), fc.double({ min: 0.6, max: 2, noNaN: true })), { minLength: 2, maxLength: 15 }),
+        designRulesArb,
+        async (rs, rules) => {
+          const existing = toProfile(rs);
+          const asFound = checkEntrance({ profile: existing }, rules);
+          fc.pre(asFound.passes && !holdsWater(existing));
+          const r = await proposeProfile({ existing, roadEdgeElevationFt: existing[0].elevationFt }, rules);
+          expect(r.feasible).toBe(true);
+          expect(checkEntrance({ profile: r.profile }, rules).passes).toBe(true);
+          // Leaving the ground as it is moves nothing; the proposal may move no more (to 0.01 cu yd).
+          expect(r.cutCuYd + r.fillCuYd).toBeLessThanOrEqual(0.01);
+        },
+      ),
+      { numRuns: 40 },
+    );
+  }, 120_000);
+
+  it('any input at all either computes or throws EngineInputError, never another error', async () => {
     const calls: ((x: unknown) => unknown)[] = [
       (x) => engine.stoppingSightDistance(x as never),
       (x) => engine.intersectionSightDistance(x as never),
@@ -104,10 +131,10 @@ describe('properties', () => {
       (x) => engine.truckLoads(x as never),
       (x) => engine.normalizeProfile(x),
     ];
-    fc.assert(
-      fc.property(fc.anything(), fc.nat(calls.length - 1), (x, i) => {
+    await fc.assert(
+      fc.asyncProperty(fc.anything(), fc.nat(calls.length - 1), async (x, i) => {
         try {
-          calls[i](x);
+          await calls[i](x);
         } catch (e) {
           expect(e).toBeInstanceOf(EngineInputError);
         }

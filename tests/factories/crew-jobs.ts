@@ -56,7 +56,7 @@ export async function createCrewCheck(db: DbOrTx, requestId: string, createdById
   const designPart = { existing, roadEdgeElevationFt: 100, applied: false };
   const inputs = { profile: design, roadEdgeStationFt: 0, culvert, laser, design: designPart };
   const report = checkEntrance({ profile: design, roadEdgeStationFt: 0, culvert }, stamped);
-  const results = { report, laser: laserSetup(laser), proposal: proposeProfile({ existing, roadEdgeElevationFt: 100 }, stamped) };
+  const results = { report, laser: laserSetup(laser), proposal: await proposeProfile({ existing, roadEdgeElevationFt: 100 }, stamped) };
   const [check] = await db.insert(gradeChecks).values({
     requestId, number: 1, ruleProfileVersionId: version.id, engineVersion: ENGINE_VERSION, inputs, results,
     passed: report.passes, summary: report.summary.text, attachedAt: new Date(), createdById,

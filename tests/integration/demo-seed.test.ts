@@ -41,7 +41,7 @@ describe('the demo scenario', () => {
       expect(check.attachedAt).not.toBeNull();
       const rules = ruleProfileSchema.parse(version.profile);
       const stamped = { ...rules, id: version.id, version: version.version, jurisdictionName: (check.results as { report: { jurisdictionName: string } }).report.jurisdictionName };
-      const again = runGradeCheck(check.inputs as Parameters<typeof runGradeCheck>[0], stamped);
+      const again = await runGradeCheck(check.inputs as Parameters<typeof runGradeCheck>[0], stamped);
       expect(JSON.parse(JSON.stringify(again))).toEqual(check.results);
     }
   });

@@ -1,12 +1,15 @@
-import { describe, expect, it } from 'vitest';
+import { afterAll, describe, expect, it } from 'vitest';
 import { buildInputs } from '../../src/features/grade-check/lib/build-inputs';
 import { parsePastedCentreline } from '../../src/features/grade-check/lib/paste-centreline';
 import { initialSurvey, type SurveyState } from '../../src/features/grade-check/lib/survey-state';
 import { surveyFromInputs } from '../../src/features/grade-check/lib/survey-from-inputs';
-import { runLiveCheck } from '../../src/features/grade-check/lib/use-live-check';
+import { runLiveCheck, runLiveCheckWithProposal } from '../../src/features/grade-check/lib/use-live-check';
 import { demoJurisdictions } from '../../server/db/seed/jurisdictions';
+import { closeDesignPool } from '../../server/services/design/design-pool';
 import { parseGradeCheckInputs, runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
-import { ruleProfileSchema } from '../../shared/engine';
+import { proposeProfile, ruleProfileSchema } from '../../shared/engine';
+
+afterAll(() => closeDesignPool());
 
 const marrow = { ...ruleProfileSchema.parse(demoJurisdictions[0].profile), id: 'v1', version: 1, jurisdictionName: 'Marrow County' };
 
@@ -40,21 +43,22 @@ describe('survey entry in the browser', () => {
     expect(live.inputs?.culvert).toMatchObject({ inletInvertFt: 98, outletInvertFt: 97.7 });
   });
 
-  it('gets exactly the results the server records from the same inputs', () => {
+  it('gets exactly the results the server records from the same inputs', async () => {
     const s = survey('0+00\t100\n0+10\t100.55\n0+20\t101.1\n0+40\t103.5\n0+80\t108.3', (st) => {
       st.road.sightLeftFt = '650';
       st.road.sightRightFt = '600';
       st.design.proposed = true;
     });
-    const live = runLiveCheck(s, marrow);
+    const live = await runLiveCheckWithProposal(s, marrow, proposeProfile);
     expect(live.results?.report.passes).toBe(false);
-    const applied = runLiveCheck({ ...s, design: { ...s.design, applied: live.results!.proposal!.profile } }, marrow);
+    const applied = await runLiveCheckWithProposal({ ...s, design: { ...s.design, applied: live.results!.proposal!.profile } }, marrow, proposeProfile);
     expect(applied.results?.report.passes).toBe(true);
-    const server = runGradeCheck(parseGradeCheckInputs(JSON.parse(JSON.stringify(applied.inputs))), marrow);
+    // The server runs the proposal in its worker threads; the answer is the same.
+    const server = await runGradeCheck(parseGradeCheckInputs(JSON.parse(JSON.stringify(applied.inputs))), marrow);
     expect(JSON.parse(JSON.stringify(server))).toEqual(JSON.parse(JSON.stringify(applied.results)));
   });
 
-  it('puts a saved check back in the form so a new survey starts from it', () => {
+  it('puts a saved check back in the form so a new survey starts from it', async () => {
     const s = survey('0+00\t4.00\n0+20\t2.90\n0+60\t-1.90', (st) => {
       st.centreline.mode = 'rod-readings';
       st.centreline.instrumentHeightFt = '104';
@@ -64,7 +68,7 @@ describe('survey entry in the browser', () => {
       Object.assign(st.culvert, { present: true, inletInvertFt: '98', outletInvertFt: '97.7', flow: 'rational', areaAcres: '2', runoffC: '0.3', intensityInPerHr: '4' });
       st.design.proposed = true;
     });
-    const first = runLiveCheck(s, marrow);
+    const first = await runLiveCheckWithProposal(s, marrow, proposeProfile);
     const applied = { ...s, design: { ...s.design, applied: first.results!.proposal!.profile } };
     const { inputs } = buildInputs(applied, marrow);
     expect(buildInputs(surveyFromInputs(inputs!), marrow).inputs).toEqual(inputs);

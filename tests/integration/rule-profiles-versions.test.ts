@@ -39,7 +39,7 @@ describe('rule profile versions', () => {
     const stored = await loadGradeCheck(t.ctx.db, saved.body.check.id);
     expect(stored.engineVersion).toBe(ENGINE_VERSION);
     const { profile } = await loadPublishedProfile(t.ctx.db, stored.ruleProfileVersionId);
-    const again = JSON.parse(JSON.stringify(runGradeCheck(stored.inputs, profile)));
+    const again = JSON.parse(JSON.stringify(await runGradeCheck(stored.inputs, profile)));
     expect(again).toEqual(stored.results);
   });
 

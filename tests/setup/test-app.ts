@@ -5,6 +5,7 @@ import { inject } from 'vitest';
 import { createApp } from '../../server/app';
 import type { AppContext } from '../../server/context';
 import { closeContext, createContext } from '../../server/context-factory';
+import { closeDesignPool } from '../../server/services/design/design-pool';
 import { parseEnv } from '../../server/env';
 import { ensureDatabase } from '../../server/dev/postgres';
 import { relaxedRateLimits } from './relaxed-limits';
@@ -48,6 +49,7 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
     ctx, app, databaseUrl, env,
     close: async () => {
       await closeContext(ctx);
+      await closeDesignPool();
       await dropTestDatabase(databaseUrl);
     },
   };

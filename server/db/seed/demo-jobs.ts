@@ -46,7 +46,7 @@ export async function seedDemoJobs(db: Db) {
       .where(eq(jurisdictions.slug, 'marrow-county'));
     if (!owner || !office || !county) return;
     const rules = { ...ruleProfileSchema.parse(county.v.profile), id: county.v.id, version: county.v.version, jurisdictionName: county.j.name };
-    const computed = demoCheck(rules, site);
+    const computed = await demoCheck(rules, site);
     const now = Date.now();
     const day = (offset: number) => new Date(now + offset * 86_400_000);
     const [request] = await tx.insert(requests).values({

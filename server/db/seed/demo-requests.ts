@@ -83,7 +83,7 @@ async function seedOne(tx: Tx, people: People, demo: DemoRequest, now: number) {
   }
   if (!reached(path, 'checked') || !demo.site) return;
 
-  const check = demoCheck(found.rules, demo.site);
+  const check = await demoCheck(found.rules, demo.site);
   const [saved] = await tx.insert(gradeChecks).values({
     requestId: request.id, number: 1, ruleProfileVersionId: found.versionId, ...check, createdAt: eventAt(3), attachedAt: eventAt(3), createdById: office.id,
   }).returning();

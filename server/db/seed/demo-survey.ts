@@ -27,8 +27,8 @@ export interface DemoSite { ground: ProfilePoint[]; speedMph: number; sightLeftF
  * The inputs the office's check screen would save for a demo site: the least-earth design applied when the
  * ground fails, a culvert under the entrance, sight lines and the laser setup with two stakes.
  */
-export function demoCheckInputs(rules: RuleProfile, site: DemoSite) {
-  const proposal = proposeProfile({ existing: site.ground, roadEdgeElevationFt: 100 }, rules);
+export async function demoCheckInputs(rules: RuleProfile, site: DemoSite) {
+  const proposal = await proposeProfile({ existing: site.ground, roadEdgeElevationFt: 100 }, rules);
   const design = proposal.feasible ? proposal.profile : site.ground;
   return {
     profile: { kind: 'elevations', points: design }, roadEdgeStationFt: 0,
@@ -58,9 +58,12 @@ export async function currentRules(tx: DbOrTx, slug: string) {
   return { jurisdictionId: row.j.id, versionId: row.v.id, rules };
 }
 
-/** A saved check's columns, computed by the same server code a real save runs. */
-export function demoCheck(rules: RuleProfile, site: DemoSite) {
-  const inputs = parseGradeCheckInputs(demoCheckInputs(rules, site));
-  const results = runGradeCheck(inputs, rules);
+/**
+ * A saved check's columns, computed by the same server code a real save runs. Seeding is a one-off before the
+ * server answers anyone, so its proposals run on this thread rather than in the design pool.
+ */
+export async function demoCheck(rules: RuleProfile, site: DemoSite) {
+  const inputs = parseGradeCheckInputs(await demoCheckInputs(rules, site));
+  const results = await runGradeCheck(inputs, rules, proposeProfile);
   return { inputs, results, passed: results.report.passes, summary: plainSummary(inputs, results, rules), engineVersion: results.report.engineVersion };
 }

@@ -56,7 +56,7 @@ export async function saveGradeCheck(db: Db, user: SessionUser, requestId: strin
       throw conflict('Grade checks are saved from the site visit until the permit is decided; this request is past that point or not there yet.');
     }
     const { id: versionId, profile } = await loadPublishedProfile(tx, body.ruleProfileVersionId);
-    const results = runGradeCheck(inputs, profile);
+    const results = await runGradeCheck(inputs, profile);
     const [{ last }] = await tx.select({ last: max(gradeChecks.number) }).from(gradeChecks).where(eq(gradeChecks.requestId, request.id));
     const [row] = await tx.insert(gradeChecks).values({
       requestId: request.id, number: (last ?? 0) + 1, ruleProfileVersionId: versionId, engineVersion: results.report.engineVersion,

@@ -1,6 +1,7 @@
 import {
-  checkEntrance, EngineInputError, laserSetup, proposeProfile, type RuleProfile,
+  checkEntrance, EngineInputError, laserSetup, type ProposedProfile, type ProposeProfileInput, type RuleProfile,
 } from '../../../shared/engine';
+import { proposeOffThread } from '../design/design-pool';
 import { parseInput } from '../../../shared/engine/errors';
 import { AppError } from '../../lib/errors';
 import { gradeCheckInputsSchema, type GradeCheckInputs, type GradeCheckResults } from './grade-check-inputs';
@@ -27,6 +28,16 @@ function attempt<T>(prefix: string, run: () => T, given?: object): T {
   }
 }
 
+async function attemptAsync<T>(prefix: string, run: () => Promise<T>, given?: object): Promise<T> {
+  try {
+    return await run();
+  } catch (error) {
+    asBadRequest(error, prefix, given);
+  }
+}
+
+export type Propose = (input: ProposeProfileInput, rules: RuleProfile) => Promise<ProposedProfile>;
+
 /** Validates raw inputs with the engine's parser, which reports the profile form the user meant, not a vague union. */
 export function parseGradeCheckInputs(raw: unknown): GradeCheckInputs {
   return attempt('inputs', () => parseInput(gradeCheckInputsSchema, raw));
@@ -34,16 +45,17 @@ export function parseGradeCheckInputs(raw: unknown): GradeCheckInputs {
 
 /**
  * The record of a check: the engine run on the server from stored inputs and one rule profile version.
- * Pure, so running it again on the same inputs and profile gives the same results.
+ * Deterministic, so running it again on the same inputs and profile gives the same results. The design
+ * proposal runs in the design pool's worker threads unless the caller passes another runner.
  */
-export function runGradeCheck(inputs: GradeCheckInputs, profile: RuleProfile): GradeCheckResults {
+export async function runGradeCheck(inputs: GradeCheckInputs, profile: RuleProfile, propose: Propose = proposeOffThread): Promise<GradeCheckResults> {
   const { road: _road, laser, design, ...check } = inputs;
   const report = attempt('inputs', () => checkEntrance(check, profile));
   const results: GradeCheckResults = { report };
   if (laser) results.laser = attempt('inputs.laser', () => laserSetup(laser));
   if (design) {
-    const { applied, haul: _haul, ...propose } = design;
-    results.proposal = attempt('inputs.design', () => proposeProfile(propose, profile), propose);
+    const { applied, haul: _haul, ...designInput } = design;
+    results.proposal = await attemptAsync('inputs.design', () => propose(designInput, profile), designInput);
     if (applied) results.surveyed = attempt('inputs.design.existing', () => checkEntrance({ ...check, profile: design.existing }, profile));
   }
   return results;

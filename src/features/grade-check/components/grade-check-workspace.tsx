@@ -78,7 +78,7 @@ export function GradeCheckWorkspace({ request, checks }: { request: CheckRequest
         {rules && (
           <Panel title="Compliant profile">
             <ProposalPanel
-              proposal={live.results?.proposal} requested={survey.design.proposed} applied={Boolean(survey.design.applied)}
+              proposal={live.results?.proposal} designing={live.designing} requested={survey.design.proposed} applied={Boolean(survey.design.applied)}
               haul={{ soil: survey.design.soil, truckCuYd: Number(survey.design.truckCuYd) || 10 }}
               onSuggest={() => update('design')({ proposed: true })}
               onApply={(p) => update('design')({ applied: p.profile })}

@@ -8,6 +8,8 @@ interface ProposalPanelProps {
   requested: boolean;
   applied: boolean;
   haul: HaulChoice;
+  /** The proposal is being solved on its own thread. */
+  designing?: boolean;
   onSuggest: () => void;
   onApply: (proposal: ProposedProfile) => void;
   onUndo: () => void;
@@ -16,9 +18,11 @@ interface ProposalPanelProps {
 const ft = (v: number) => v.toFixed(2);
 
 /** "Suggest a compliant profile": the least-earth design, its cut and fill per station, volumes and truck loads. */
-export function ProposalPanel({ proposal, requested, applied, haul, onSuggest, onApply, onUndo }: ProposalPanelProps) {
+export function ProposalPanel({ proposal, designing, requested, applied, haul, onSuggest, onApply, onUndo }: ProposalPanelProps) {
   if (!requested && !applied) return <Button variant="secondary" onClick={onSuggest}>Suggest a compliant profile</Button>;
-  if (!proposal) return <p className="text-sm text-stone-500">Finish the survey to get a proposal.</p>;
+  if (!proposal) {
+    return <p role="status" className="text-sm text-stone-500">{designing ? 'Working out the least-earth profile…' : 'Finish the survey to get a proposal.'}</p>;
+  }
   if (!proposal.feasible) return <Notice tone="warn" title="No compliant profile found">{proposal.reason}</Notice>;
   const estimate = haulEstimate(proposal, haul);
   return (

@@ -1,0 +1,298 @@
+import type { Highs } from 'highs';
+import { DesignProgram } from './design-program';
+import { solveLinear, type SolveOutcome } from './design-solver';
+import { transitionStations, withStations } from './design-stations';
+import { designVertices, type FineStretch } from './design-vertices';
+import { crestAllowed, explainInfeasible } from './infeasible-reason';
+import { buildLeastEarthModel, type DesignModel, type Directions, GRADE_MARGIN, segmentRanges, type SegmentRanges } from './least-earth-model';
+import type { Finding } from './findings';
+import { checkProfileRules, type ProfileCheck } from './profile-checks';
+import type { ProfilePoint } from './profile';
+import type { DesignVehicle, RuleProfile } from './rule-profile';
+import { STATION_TOLERANCE_FT } from './station-tolerance';
+
+export interface DesignFound {
+  /** The stations designed: the survey's, plus the landing's end and any transition stations. */
+  ground: ProfilePoint[];
+  design?: ProfilePoint[];
+  reason?: string;
+}
+
+interface Job {
+  highs: Highs;
+  rules: RuleProfile;
+  roadEdgeFt: number;
+  targetEndFt: number | undefined;
+  scrapeStepFt: number;
+  margin: number;
+}
+
+const MAX_TIGHTENING = 8;
+const TIGHTEN = 0.7;
+// The first attempts tighten only where the exact check scraped; after these, everywhere, so the loop ends.
+const LOCAL_ATTEMPTS = 3;
+// Transition stations may double a long survey's stations at most.
+const MAX_DESIGN_STATIONS = 4_000;
+
+/** The earth objective itself: |design - ground| integrated along the stations (trapezoids). */
+export function earthMoved(ground: readonly ProfilePoint[], design: readonly ProfilePoint[]): number {
+  let sum = 0;
+  for (let i = 0; i < ground.length - 1; i++) {
+    const a = Math.abs(design[i].elevationFt - ground[i].elevationFt);
+    const b = Math.abs(design[i + 1].elevationFt - ground[i + 1].elevationFt);
+    sum += ((a + b) / 2) * (ground[i + 1].stationFt - ground[i].stationFt);
+  }
+  return sum;
+}
+
+const scrapeReason = (v: DesignVehicle) => `no profile keeps a ${v.name.toLowerCase()} from scraping while meeting the other limits`;
+
+function bendReason(rules: RuleProfile): string {
+  const drain = rules.minDrainageGradePercent === undefined ? '' : ` while keeping the ${rules.minDrainageGradePercent}% drainage grade`;
+  return `the ${rules.maxGradeChangePercent}% grade-change limit cannot bend the profile enough to reach the end elevation${drain} without a low point that holds water`;
+}
+
+type Attempt =
+  | { status: 'infeasible'; detail: string }
+  | { status: 'failed'; detail: string }
+  | { status: 'solved'; design: ProfilePoint[]; rising: Float64Array; check: ProfileCheck; failing: Finding[] };
+
+/** The stations designed, and the indices of those where the design may break. */
+interface Layout {
+  ground: ProfilePoint[];
+  vertices: number[];
+  /** Where an earlier design on these stations turned from rising to falling: the crest to try first. */
+  crestFt?: number;
+  /** The linear programme on these stations, loaded once for every crest and share tried. */
+  program?: DesignProgram;
+}
+
+function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Float64Array | undefined, directions: Directions): Attempt {
+  const { ground, vertices, program } = layout;
+  let built: DesignModel;
+  let out: SolveOutcome;
+  if (program && directions !== 'choose') {
+    built = program.built;
+    out = program.solve(share, directions);
+  } else {
+    const budget = share ? { vehicle: job.rules.designVehicle, share } : undefined;
+    built = buildLeastEarthModel(ground, vertices, ranges, job.rules, job.roadEdgeFt, job.targetEndFt, budget, directions, job.margin);
+    out = solveLinear(job.highs, built.model);
+  }
+  if (out.status === 'infeasible' || out.status === 'failed') return out;
+  const design = built.read(out.x);
+  const check = checkProfileRules(design, job.rules, design[0].stationFt, job.scrapeStepFt);
+  const rising = built.rising(out.x);
+  return { status: 'solved', design, rising, check, failing: check.findings.filter((f) => f.status === 'fail') };
+}
+
+const risingCount = (rising: Float64Array, above: number) => {
+  let k = 0;
+  while (k < rising.length && rising[k] > above) k++;
+  return k;
+};
+
+// How far outside a direction's grade range a solved grade may sit and still count as in it (the solver's own
+// tolerance over the shortest segment); the exact check afterwards judges the limits themselves.
+const DIRECTION_SLACK = 1e-7;
+
+// A crest whose design moves no more earth than the relaxation's lower bound plus this depth over the whole
+// length is taken without trying the others: half the hundredth of a foot a survey is read to, so no survey
+// could tell the designs apart.
+const EARTH_TOLERANCE_FT = 0.005;
+
+/**
+ * The crest position (segments rising before it) that the design's own grades fit, nearest `near`: every
+ * segment before it within its rising range and every one after within its falling range; none if no position fits.
+ */
+function crestOf(design: readonly ProfilePoint[], vertices: readonly number[], ranges: readonly SegmentRanges[], near: number): number | undefined {
+  const m = ranges.length;
+  const within = (g: number, r: { lo: number; hi: number } | null) => r !== null && g >= r.lo - DIRECTION_SLACK && g <= r.hi + DIRECTION_SLACK;
+  const grade = (j: number) => {
+    const [a, b] = [design[vertices[j]], design[vertices[j + 1]]];
+    return (b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt);
+  };
+  let rises = 0;
+  while (rises < m && within(grade(rises), ranges[rises].rise)) rises++;
+  let fallsFrom = m;
+  while (fallsFrom > 0 && within(grade(fallsFrom - 1), ranges[fallsFrom - 1].fall)) fallsFrom--;
+  return fallsFrom <= rises ? Math.min(rises, Math.max(fallsFrom, near)) : undefined;
+}
+
+/**
+ * Where the design turns from rising to falling. The linear relaxation is solved first: its cost bounds every
+ * design from below, and its directions rounded at a few thresholds give crest positions to try as plain linear
+ * programmes. Only when none of them is feasible does the mixed-integer search (bounded by a node limit) decide,
+ * so "impossible" is said only when the relaxation or the full search proves it.
+ */
+function chooseCrest(job: Job, layout: Layout, ranges: SegmentRanges[], share: Float64Array | undefined, allowed: (k: number) => boolean): { out: Attempt; k?: number } {
+  const { ground } = layout;
+  const relaxed = solveOnce(job, layout, ranges, share, 'relaxed');
+  if (relaxed.status !== 'solved') return { out: relaxed };
+  // Whole directions, or grades that already rise and then fall within their limits: the relaxation's answer
+  // is itself a design, and its cost is a lower bound, so it is the best design.
+  const whole = risingCount(relaxed.rising, 0.5);
+  if (relaxed.rising.every((r) => r < 1e-7 || r > 1 - 1e-7)) return { out: relaxed, k: whole };
+  const consistent = crestOf(relaxed.design, layout.vertices, ranges, whole);
+  if (consistent !== undefined) return { out: relaxed, k: consistent };
+  const ks = [...new Set([0.5, 1 - 1e-6, 1e-6].map((t) => risingCount(relaxed.rising, t)))].filter(allowed);
+  let best: { out: Attempt & { status: 'solved' }; k: number; earth: number } | undefined;
+  const bound = earthMoved(ground, relaxed.design);
+  const length = ground[ground.length - 1].stationFt - ground[0].stationFt;
+  for (const k of ks) {
+    const out = solveOnce(job, layout, ranges, share, k);
+    if (out.status !== 'solved') continue;
+    const earth = earthMoved(ground, out.design);
+    if (!best || earth < best.earth) best = { out, k, earth };
+    if (earth <= bound + EARTH_TOLERANCE_FT * length) break;
+  }
+  if (best) return best;
+  const mip = solveOnce(job, layout, ranges, share, 'choose');
+  return mip.status === 'solved' ? { out: mip, k: risingCount(mip.rising, 0.5) } : { out: mip };
+}
+
+/** Lowers the clearance share of every window that could sit under the vehicle where it scraped. */
+function tighten(share: Float64Array, vertices: readonly ProfilePoint[], stationFt: number, v: DesignVehicle, local: boolean): void {
+  const reach = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
+  let any = false;
+  for (let i = 0; i < vertices.length; i++) {
+    if (local && Math.abs(vertices[i].stationFt - stationFt) <= reach) {
+      share[i] *= TIGHTEN;
+      any = true;
+    }
+  }
+  if (!any || !local) share.forEach((s, i) => (share[i] = s * TIGHTEN));
+}
+
+/** Clearance in the model, then the exact scrape check; where it still scrapes, that neighbourhood is tightened. */
+function designOn(job: Job, bare: Layout): DesignFound {
+  const { ground } = bare;
+  const corners = bare.vertices.map((i) => ground[i]);
+  const ranges = segmentRanges(corners, job.rules);
+  const reason = explainInfeasible(corners, ranges, job.rules, job.roadEdgeFt, job.targetEndFt);
+  if (reason) return { ground, reason };
+  const { rules, roadEdgeFt, targetEndFt, margin } = job;
+  const program = new DesignProgram(job.highs, { ground, vertices: bare.vertices, ranges, rules, roadEdgeFt, targetEndFt, margin });
+  try {
+    return designWith(job, { ...bare, program }, corners, ranges);
+  } finally {
+    program.dispose();
+  }
+}
+
+function designWith(job: Job, layout: Layout, corners: ProfilePoint[], ranges: SegmentRanges[]): DesignFound {
+  const { ground } = layout;
+  const allowed = crestAllowed(corners, ranges, job.roadEdgeFt, job.targetEndFt);
+  const share = new Float64Array(corners.length).fill(1);
+  // A known crest is tried as it is; only if it cannot be met is the relaxation solved to choose again.
+  let k = layout.crestFt === undefined ? undefined : corners.slice(1).filter((c) => c.stationFt <= layout.crestFt! + STATION_TOLERANCE_FT).length;
+  for (let attempt = 0; attempt < MAX_TIGHTENING; attempt++) {
+    let out = k === undefined ? undefined : solveOnce(job, layout, ranges, share, k);
+    if (!out || out.status === 'infeasible') {
+      const pick = chooseCrest(job, layout, ranges, share, allowed);
+      out = pick.out;
+      k = pick.k;
+    }
+    if (out.status === 'failed') return { ground, reason: `no design was found within the solver's search limit (${out.detail}); the limits may still allow one` };
+    if (out.status === 'infeasible') {
+      // The clearance limits are linear estimates; without them the programme says whether the rest can be met.
+      const free = chooseCrest(job, layout, ranges, undefined, allowed).out;
+      if (free.status === 'infeasible') return { ground, reason: bendReason(job.rules) };
+      if (free.status === 'solved' && free.failing.length === 0) return { ground, design: free.design };
+      return { ground, reason: scrapeReason(job.rules.designVehicle) };
+    }
+    if (out.failing.length === 0) return { ground, design: out.design };
+    if (out.failing.some((f) => f.ruleId !== 'scrape.clearance')) {
+      return { ground, reason: `the solver's profile still breaks ${out.failing.map((f) => f.label.toLowerCase()).join(', ')}` };
+    }
+    tighten(share, corners, out.check.scrape.atStationFt, job.rules.designVehicle, attempt < LOCAL_ATTEMPTS);
+  }
+  return { ground, reason: scrapeReason(job.rules.designVehicle) };
+}
+
+/** Breaks that use more than half of what one break may take under the vehicle: where a short curve may be cheaper. */
+function clearanceBreaks(design: readonly ProfilePoint[], v: DesignVehicle): number[] {
+  const c = v.clearanceIn / 12;
+  const crest = (4 * c) / v.wheelbaseFt;
+  const overhang = Math.max(v.frontOverhangFt, v.rearOverhangFt);
+  const sag = overhang > 0 ? c / overhang : Infinity;
+  const out: number[] = [];
+  for (let i = 1; i < design.length - 1; i++) {
+    const g0 = (design[i].elevationFt - design[i - 1].elevationFt) / (design[i].stationFt - design[i - 1].stationFt);
+    const g1 = (design[i + 1].elevationFt - design[i].elevationFt) / (design[i + 1].stationFt - design[i].stationFt);
+    const a = g1 - g0;
+    if (a < -crest / 2 || a > sag / 2) out.push(design[i].stationFt);
+  }
+  return out;
+}
+
+/** Rises and then falls at most once, so no low point holds water (the shape every design is given). */
+function drainsEverywhere(points: readonly ProfilePoint[]): boolean {
+  let fallen = false;
+  for (let i = 0; i < points.length - 1; i++) {
+    const d = points[i + 1].elevationFt - points[i].elevationFt;
+    if (d < 0) fallen = true;
+    else if (d > 0 && fallen) return false;
+  }
+  return true;
+}
+
+/** Ground that already meets every limit from the given road edge to the given end is the least-earth design. */
+function alreadyComplies(survey: readonly ProfilePoint[], job: Job): boolean {
+  const last = survey[survey.length - 1].elevationFt;
+  if (survey[0].elevationFt !== job.roadEdgeFt || (job.targetEndFt !== undefined && last !== job.targetEndFt)) return false;
+  if (!drainsEverywhere(survey)) return false;
+  return checkProfileRules(survey, job.rules, survey[0].stationFt, job.scrapeStepFt).findings.every((f) => f.status !== 'fail');
+}
+
+export function searchDesign(
+  highs: Highs,
+  survey: readonly ProfilePoint[],
+  rules: RuleProfile,
+  roadEdgeFt: number,
+  targetEndFt: number | undefined,
+  scrapeStepFt: number,
+): DesignFound {
+  const job: Job = { highs, rules, roadEdgeFt, targetEndFt, scrapeStepFt, margin: GRADE_MARGIN };
+  // Checked as surveyed: a landing station added to straight ground could make a rule apply that did not before.
+  if (alreadyComplies(survey, job)) return { ground: [...survey], design: survey.map((p) => ({ ...p })) };
+  // The design needs a station where the landing ends so it can break there rather than at the next shot.
+  const landingEnd = survey[0].stationFt + rules.landing.lengthFt;
+  const ground = withStations(survey, [landingEnd]);
+  const surveyed = new Set(survey.map((p) => p.stationFt));
+  // Added stations (the landing's end, a curve's) are always vertices; so is a shot within tolerance of the landing's end.
+  const keep = new Set(ground.map((p) => p.stationFt).filter((s) => !surveyed.has(s) || Math.abs(s - landingEnd) < STATION_TOLERANCE_FT));
+  const coarse: Layout = { ground, vertices: designVertices(ground, keep) };
+  let first = designWithMargin(job, coarse);
+  // Fewer vertices restrict the design; before saying no design exists, every station is given a vertex.
+  if (!first.design && coarse.vertices.length < ground.length) first = designWithMargin(job, { ground, vertices: ground.map((_, i) => i) });
+  const v = rules.designVehicle;
+  const breaks = first.design ? clearanceBreaks(first.design, v) : [];
+  if (!first.design || breaks.length === 0) return first;
+  // A short vertical curve over stations a fraction of the wheelbase apart often clears with less earth than
+  // holding one sharp break to the single-break limit.
+  const radius = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
+  const step = v.wheelbaseFt / 8;
+  const dense = withStations(ground, transitionStations(ground, breaks, radius, step, MAX_DESIGN_STATIONS - ground.length), step / 2);
+  const fine: FineStretch[] = breaks.map((b) => ({ fromFt: b - radius, toFt: b + radius, stepFt: step }));
+  const denseKeep = new Set([...keep, ...dense.map((p) => p.stationFt).filter((s) => !surveyed.has(s))]);
+  const curved: Layout = { ground: dense, vertices: designVertices(dense, denseKeep, fine), crestFt: crestStation(first.design) };
+  if (dense.length === ground.length && curved.vertices.length === coarse.vertices.length) return first;
+  const second = designOn(job, curved);
+  if (second.design && earthMoved(dense, second.design) < earthMoved(first.ground, first.design) - 1e-9) return second;
+  return first;
+}
+
+/** The first station at the design's highest point: everything before it rises, everything after falls. */
+function crestStation(design: readonly ProfilePoint[]): number {
+  const top = Math.max(...design.map((p) => p.elevationFt));
+  return design.find((p) => p.elevationFt >= top - 1e-9)!.stationFt;
+}
+
+/** Only a design sitting exactly on a limit needs the margin gone; the exact check still has the last word. */
+function designWithMargin(job: Job, layout: Layout): DesignFound {
+  const found = designOn(job, layout);
+  if (found.design) return found;
+  const exact = designOn({ ...job, margin: 0 }, layout);
+  return exact.design ? exact : found;
+}
