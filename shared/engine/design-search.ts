@@ -55,7 +55,13 @@ function bendReason(rules: RuleProfile): string {
 type Attempt =
   | { status: 'infeasible'; detail: string }
   | { status: 'failed'; detail: string }
-  | { status: 'solved'; design: ProfilePoint[]; rising: Float64Array; check: ProfileCheck; failing: Finding[] };
+  | { status: 'solved'; design: ProfilePoint[]; rising: Float64Array; verdict: () => Verdict };
+
+/** The exact check of a solved design, made only when asked for: most relaxations and crests tried are never kept. */
+interface Verdict {
+  check: ProfileCheck;
+  failing: Finding[];
+}
 
 /** The stations designed, and the indices of those where the design may break. */
 interface Layout {
@@ -81,9 +87,12 @@ function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Flo
   }
   if (out.status === 'infeasible' || out.status === 'failed') return out;
   const design = built.read(out.x);
-  const check = checkProfileRules(design, job.rules, design[0].stationFt, job.scrapeStepFt);
-  const rising = built.rising(out.x);
-  return { status: 'solved', design, rising, check, failing: check.findings.filter((f) => f.status === 'fail') };
+  let verdict: Verdict | undefined;
+  const judge = () => {
+    const check = checkProfileRules(design, job.rules, design[0].stationFt, job.scrapeStepFt);
+    return { check, failing: check.findings.filter((f) => f.status === 'fail') };
+  };
+  return { status: 'solved', design, rising: built.rising(out.x), verdict: () => (verdict ??= judge()) };
 }
 
 const risingCount = (rising: Float64Array, above: number) => {
@@ -198,14 +207,15 @@ function designWith(job: Job, layout: Layout, corners: ProfilePoint[], ranges: S
       // The clearance limits are linear estimates; without them the programme says whether the rest can be met.
       const free = chooseCrest(job, layout, ranges, undefined, allowed).out;
       if (free.status === 'infeasible') return { ground, reason: bendReason(job.rules) };
-      if (free.status === 'solved' && free.failing.length === 0) return { ground, design: free.design };
+      if (free.status === 'solved' && free.verdict().failing.length === 0) return { ground, design: free.design };
       return { ground, reason: scrapeReason(job.rules.designVehicle) };
     }
-    if (out.failing.length === 0) return { ground, design: out.design };
-    if (out.failing.some((f) => f.ruleId !== 'scrape.clearance')) {
-      return { ground, reason: `the solver's profile still breaks ${out.failing.map((f) => f.label.toLowerCase()).join(', ')}` };
+    const { check, failing } = out.verdict();
+    if (failing.length === 0) return { ground, design: out.design };
+    if (failing.some((f) => f.ruleId !== 'scrape.clearance')) {
+      return { ground, reason: `the solver's profile still breaks ${failing.map((f) => f.label.toLowerCase()).join(', ')}` };
     }
-    tighten(share, corners, out.check.scrape.atStationFt, job.rules.designVehicle, attempt < LOCAL_ATTEMPTS);
+    tighten(share, corners, check.scrape.atStationFt, job.rules.designVehicle, attempt < LOCAL_ATTEMPTS);
   }
   return { ground, reason: scrapeReason(job.rules.designVehicle) };
 }
