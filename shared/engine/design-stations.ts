@@ -44,11 +44,3 @@ export function transitionStations(points: readonly ProfilePoint[], breaks: read
   }
   return out.filter((s) => s > points[0].stationFt && s < points[points.length - 1].stationFt);
 }
-
-/** Two shots closer than the station tolerance cannot both carry a grade; the survey is refused with both named. */
-export function closeStations(points: readonly ProfilePoint[]): [number, number] | undefined {
-  for (let i = 1; i < points.length; i++) {
-    if (points[i].stationFt - points[i - 1].stationFt < STATION_TOLERANCE_FT) return [points[i - 1].stationFt, points[i].stationFt];
-  }
-  return undefined;
-}

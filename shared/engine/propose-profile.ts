@@ -1,9 +1,7 @@
 import { z } from 'zod';
 import { earthworkFromProfiles, sectionTemplateSchema } from './cross-sections';
 import { designSolver } from './design-solver';
-import { closeStations } from './design-stations';
 import { EngineInputError, parseInput } from './errors';
-import { formatStation } from './station';
 import { bounded, elevationFt } from './numbers';
 import { normalizeParsedProfile, profileInputSchema, type ProfilePoint } from './profile';
 import { type RuleProfile, type RuleProfileInput, ruleProfileSchema } from './rule-profile';
@@ -52,11 +50,6 @@ export async function proposeProfile(input: ProposeProfileInput, ruleProfile: Ru
   const ground = normalizeParsedProfile(p.existing, 'existing');
   if (ground.length > MAX_STATIONS) {
     throw new EngineInputError('existing', `at most ${MAX_STATIONS} stations can be designed at once (got ${ground.length})`);
-  }
-  const close = closeStations(ground);
-  if (close) {
-    const [a, b] = close.map((s) => formatStation(s, 3));
-    throw new EngineInputError('existing', `stations ${a} and ${b} are closer than a hundredth of a foot; merge them into one shot`);
   }
   const found = searchDesign(await designSolver(), ground, rules, p.roadEdgeElevationFt, p.targetEndElevationFt, p.scrapeStepFt);
   if (!found.design) {
