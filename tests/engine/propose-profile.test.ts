@@ -7,7 +7,7 @@ const profileFindings = (profile: { stationFt: number; elevationFt: number }[], 
 
 // Limits are the common rural template (common practice (no source), docs/sources.md "Grades and vehicles"); every
 // proposal is judged by checkEntrance itself, the scrape by the geometry in "Vertical transitions".
-describe('least-earth proposal (linear programme, yalps)', () => {
+describe('least-earth proposal (linear programme, HiGHS)', () => {
   it('leaves a ground profile that already complies untouched and moves no earth', async () => {
     const existing = profileFromRuns([[10, 2], [10, 2], [20, 6], [20, 8], [20, 8]]);
     const r = await proposeProfile({ existing, roadEdgeElevationFt: 100 }, commonRuralTemplate);
