@@ -1,18 +1,9 @@
 // Times GET /api/queue against 50,000 seeded requests beside a floor endpoint on the same server that runs one
 // trivial query behind the same session and sign-in. A script, not a test: figures vary by machine.
-import { fork, type ChildProcess } from 'node:child_process';
-import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
-import { fileURLToPath } from 'node:url';
 import os from 'node:os';
-import path from 'node:path';
 import autocannon from 'autocannon';
-import { startStandIns } from '../../fakes';
-import { applyMigrations, createDb } from '../../server/db/client';
-import { devOAuthClient } from '../../server/dev/dev-config';
-import { ensureDatabase, startPostgres } from '../../server/dev/postgres';
-import { standInEnv } from '../../server/dev/stand-in-env';
-import { relaxedRateLimits } from '../setup/relaxed-limits';
-import { freePort } from '../setup/free-port';
+import { createDb } from '../../server/db/client';
+import { prepareBenchStack } from './bench-stack';
 import { seedQueue } from './queue-seed';
 import { signInCookie } from './sign-in-cookie';
 
@@ -35,30 +26,15 @@ async function measure(url: string, cookie: string) {
 }
 
 async function main() {
-  const dir = mkdtempSync(path.join(os.tmpdir(), 'gradepass-bench-'));
-  chmodSync(dir, 0o755); // initdb runs as the postgres user and must reach its folder
-  const pg = await startPostgres(path.join(dir, 'postgres'), await freePort(), { throwaway: true });
-  const port = await freePort();
-  const origin = `http://127.0.0.1:${port}`;
-  const standIns = await startStandIns({
-    dataDir: path.join(dir, 'fakes'), bucket: 'bench', allowedOrigins: [origin],
-    oauth: { ...devOAuthClient, redirectUris: [`${origin}/auth/google/callback`], identities: [{ email: 'bench.staff@gradepass.test', name: 'Bench Staff' }] },
-  });
-  const { pool } = createDb(pg.url('bench'), { max: 2 });
-  let server: ChildProcess | undefined;
+  const stack = await prepareBenchStack([{ email: 'bench.staff@gradepass.test', name: 'Bench Staff' }]);
+  const { origin } = stack;
+  const { pool } = createDb(stack.databaseUrl, { max: 2 });
   try {
-    await ensureDatabase(pg.url('postgres'), 'bench');
-    await applyMigrations(pg.url('bench'));
     const started = Date.now();
     const seeded = await seedQueue(pool);
     console.log(`seeded ${seeded.requests} requests and ${seeded.events} events in ${((Date.now() - started) / 1000).toFixed(1)} s`);
 
-    const env = { ...process.env, ...relaxedRateLimits, ...standInEnv(standIns, { appOrigin: origin, port, databaseUrl: pg.url('bench') }), NODE_ENV: 'production', LOG_LEVEL: 'silent', RUN_WORKERS: 'false' };
-    server = fork(fileURLToPath(new URL('queue-bench-server.ts', import.meta.url)), { env, execArgv: ['--import', 'tsx', ...(process.env.BENCH_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`] : [])] });
-    await new Promise<void>((resolve, reject) => {
-      server!.once('message', () => resolve());
-      server!.once('exit', (code) => reject(new Error(`the app exited (${code}) before it was ready`)));
-    });
+    const server = await stack.startServer('queue-bench-server.ts', process.env.BENCH_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`] : []);
     const cookie = await signInCookie(origin, 'bench.staff@gradepass.test');
 
     const [place] = (await pool.query("select id from jurisdictions where name = 'Fenwick County'")).rows as { id: string }[];
@@ -79,8 +55,8 @@ async function main() {
     for (const [, target] of targets) await measureWarm(origin + target, cookie);
     const results = [];
     const cpu = async () => new Promise<number>((resolve) => {
-      server!.once('message', (m: { cpuMicros: NodeJS.CpuUsage }) => resolve(m.cpuMicros.user + m.cpuMicros.system));
-      server!.send('cpu');
+      server.once('message', (m: { cpuMicros: NodeJS.CpuUsage }) => resolve(m.cpuMicros.user + m.cpuMicros.system));
+      server.send('cpu');
     });
     for (const [label, target] of targets) {
       const before = await cpu();
@@ -99,15 +75,8 @@ async function main() {
     console.log(`load average while measuring (other work on this machine shows here): ${os.loadavg().map((l) => l.toFixed(2)).join(' ')}`);
     console.log(`\ntarget: p95 < 50 ms and within 3x of the floor -> queue p95 ${main.p95.toFixed(1)} ms, ${(main.p95 / floor.p95).toFixed(2)}x the floor`);
   } finally {
-    if (server && server.exitCode === null) {
-      const exited = new Promise((resolve) => server!.once('exit', resolve));
-      server.kill('SIGTERM');
-      await exited;
-    }
     await pool.end();
-    await standIns.stop();
-    pg.stop();
-    rmSync(dir, { recursive: true, force: true });
+    await stack.stop();
   }
 }
 
