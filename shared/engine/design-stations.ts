@@ -1,15 +1,9 @@
-import { elevationAt, type ProfilePoint } from './profile';
+import { bracketing, elevationAt, type ProfilePoint } from './profile';
 import { STATION_TOLERANCE_FT } from './station-tolerance';
 
 /** Whether a sorted profile has a station within `gap` of s. */
 function near(points: readonly ProfilePoint[], s: number, gap: number): boolean {
-  let lo = 0;
-  let hi = points.length - 1;
-  while (hi - lo > 1) {
-    const mid = (lo + hi) >> 1;
-    if (points[mid].stationFt <= s) lo = mid;
-    else hi = mid;
-  }
+  const [lo, hi] = bracketing(points, s);
   return Math.abs(points[lo].stationFt - s) < gap || Math.abs(points[hi].stationFt - s) < gap;
 }
 

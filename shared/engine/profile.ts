@@ -139,11 +139,8 @@ export function gradeBreaks(segments: readonly ProfileSegment[]): GradeBreak[] {
   return breaks;
 }
 
-/** Elevation on the straight lines between shots; stations outside the profile take the end elevation. */
-export function elevationAt(points: readonly ProfilePoint[], station: number): number {
-  if (station <= points[0].stationFt) return points[0].elevationFt;
-  const last = points[points.length - 1];
-  if (station >= last.stationFt) return last.elevationFt;
+/** The indexes of the two neighbouring shots of a sorted profile that a station falls between (a binary search). */
+export function bracketing(points: readonly ProfilePoint[], station: number): [number, number] {
   let lo = 0;
   let hi = points.length - 1;
   while (hi - lo > 1) {
@@ -151,6 +148,15 @@ export function elevationAt(points: readonly ProfilePoint[], station: number): n
     if (points[mid].stationFt <= station) lo = mid;
     else hi = mid;
   }
+  return [lo, hi];
+}
+
+/** Elevation on the straight lines between shots; stations outside the profile take the end elevation. */
+export function elevationAt(points: readonly ProfilePoint[], station: number): number {
+  if (station <= points[0].stationFt) return points[0].elevationFt;
+  const last = points[points.length - 1];
+  if (station >= last.stationFt) return last.elevationFt;
+  const [lo, hi] = bracketing(points, station);
   const a = points[lo];
   const b = points[hi];
   return a.elevationFt + ((station - a.stationFt) / (b.stationFt - a.stationFt)) * (b.elevationFt - a.elevationFt);
