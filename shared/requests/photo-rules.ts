@@ -19,18 +19,3 @@ export const captionSuggestions = [
 ];
 
 export const photoCaptionSchema = z.string({ error: 'Must be text.' }).trim().max(200, 'Keep captions under 200 characters.');
-
-export const photoUploadInputSchema = z.strictObject({
-  fileName: z.string({ error: 'This is required.' }).trim().min(1, 'The file needs a name.').max(200, 'Keep file names under 200 characters.'),
-  contentType: z.enum(photoContentTypes, { error: 'Photos must be JPEG, PNG, WebP or HEIC images.' }),
-  sizeBytes: z.number({ error: 'Must be the file size in bytes.' }).int('Must be a whole number of bytes.')
-    .min(1, 'The file is empty.').max(maxPhotoBytes, 'Photos may be at most 15 MB each.'),
-});
-
-export const photoConfirmInputSchema = z.strictObject({
-  caption: photoCaptionSchema.optional(),
-  gpsLat: z.number({ error: 'Must be a number.' }).min(-90, 'Latitude is between -90 and 90.').max(90, 'Latitude is between -90 and 90.').nullable().optional(),
-  gpsLng: z.number({ error: 'Must be a number.' }).min(-180, 'Longitude is between -180 and 180.').max(180, 'Longitude is between -180 and 180.').nullable().optional(),
-});
-
-export const photoCaptionInputSchema = z.strictObject({ caption: photoCaptionSchema });

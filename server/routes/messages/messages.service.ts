@@ -1,5 +1,6 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { isOfficeRole } from '../../../shared/workflow/statuses';
+import type { MessageVisibility } from '../../../shared/contracts/messages';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db, Tx } from '../../db/client';
 import { messages, users } from '../../db/schema';
@@ -8,7 +9,7 @@ import { messageEmails } from '../../services/email/message-emails';
 import { enqueueEmails } from '../../services/email/outbox';
 import { loadVisibleRequest, type RequestRow } from '../../services/requests/request-access';
 
-type Visibility = 'internal' | 'shared';
+type Visibility = MessageVisibility;
 
 /** Crew talk with the office only about a job they hold, not about every job waiting on the board. */
 async function loadForMessages(db: Db, user: SessionUser, requestId: string): Promise<RequestRow> {

@@ -1,6 +1,8 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { photoCaptionInputSchema, photoConfirmInputSchema, photoUploadInputSchema } from '../../../shared/requests/photo-rules';
+import {
+  photoCaptionInputSchema, photoConfirmInputSchema, photoUploadInputSchema, type PhotoLinkAnswer, type PhotoView,
+} from '../../../shared/contracts/photos';
 import type { AppContext } from '../../context';
 import { notFound } from '../../lib/errors';
 import { handle, uuidParam } from '../../lib/handle';
@@ -13,7 +15,7 @@ import {
 const photoParams = z.object({ id: z.uuid('must be a valid id'), photoId: z.uuid('must be a valid id') });
 
 /** What a photo looks like to its readers: never the storage key, never anything read from the file itself. */
-const photoView = (photo: PhotoRow, url?: string) => ({
+const photoView = (photo: PhotoRow, url?: string): PhotoView<Date> => ({
   id: photo.id, fileName: photo.fileName, contentType: photo.contentType, sizeBytes: photo.sizeBytes,
   caption: photo.caption, gpsLat: photo.gpsLat, gpsLng: photo.gpsLng, createdAt: photo.createdAt, storedAt: photo.storedAt,
   ...(url ? { url, urlExpiresInSeconds: viewSeconds } : {}),
@@ -34,7 +36,7 @@ export function photosRouter({ db, s3, env }: AppContext) {
     await loadVisibleRequest(db, user, params.id);
     const photo = (await listStored(db, params.id)).find((p) => p.id === params.photoId);
     if (!photo) throw notFound('Photo');
-    return { url: await viewUrl(store, photo), expiresInSeconds: viewSeconds };
+    return { url: await viewUrl(store, photo), expiresInSeconds: viewSeconds } satisfies PhotoLinkAnswer;
   }));
 
   router.post('/api/requests/:id/photos', owner, handle({ params: uuidParam, body: photoUploadInputSchema }, async ({ params, body, user, res }) => {

@@ -3,11 +3,12 @@ import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 import { and, asc, eq, gt, inArray, or } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import { maxPhotosPerRequest, photoExtensions, type photoContentTypes } from '../../../shared/requests/photo-rules';
+import { photosEditable } from '../../../shared/contracts/photos';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { photos } from '../../db/schema';
 import { badRequest, conflict, notFound } from '../../lib/errors';
-import { loadVisibleRequest, type RequestRow } from '../../services/requests/request-access';
+import { loadVisibleRequest } from '../../services/requests/request-access';
 import { photoTypeOf, readLeadingBytes } from './photo-content';
 
 export interface Storage { s3: S3Client; bucket: string }
@@ -15,14 +16,12 @@ export type PhotoRow = typeof photos.$inferSelect;
 
 export const uploadSeconds = 300;
 export const viewSeconds = 300;
-/** Photos can change until the site visit has happened: after that the office works from what it saw. */
-const photoEditable = new Set<RequestRow['status']>(['draft', 'submitted', 'needs_details', 'visit_booked']);
 
 /** The owner's own request, in a status that still takes photos; others get 404, late changes 409. */
 export async function loadOwnEditable(tx: DbOrTx, user: SessionUser, requestId: string) {
   const row = await loadVisibleRequest(tx, user, requestId, { forUpdate: true });
   if (row.applicantId !== user.id) throw notFound('Request');
-  if (!photoEditable.has(row.status)) throw conflict('Photos can no longer be changed on this request. Send the office a message instead.');
+  if (!photosEditable(row.status)) throw conflict('Photos can no longer be changed on this request. Send the office a message instead.');
   return row;
 }
 

@@ -1,5 +1,6 @@
 import { and, count, desc, eq } from 'drizzle-orm';
 import { applicationDraftSchema, type ApplicationDraft } from '../../../shared/requests/application-schema';
+import { answerEditableStatuses } from '../../../shared/contracts/requests';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db } from '../../db/client';
 import { requests, users } from '../../db/schema';
@@ -7,8 +8,7 @@ import { conflict } from '../../lib/errors';
 import { loadVisibleRequest } from '../../services/requests/request-access';
 import { nextReference } from '../../services/requests/reference';
 
-/** The applicant may change the answers while the request is a draft or the office has asked for more. */
-export const editableStatuses = new Set(['draft', 'needs_details']);
+export const editableStatuses = new Set<string>(answerEditableStatuses);
 
 /** Unsent requests one owner may have at once: enough for several properties, not for filling the database. */
 export const maxOpenDrafts = 5;

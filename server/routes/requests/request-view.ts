@@ -2,6 +2,8 @@ import { allowedTransitions } from '../../../shared/workflow/transitions';
 import { isOfficeRole, statusText } from '../../../shared/workflow/statuses';
 import type { SessionUser } from '../../auth/session-user';
 import type { RequestRow } from '../../services/requests/request-access';
+import type { OfficeRequestView, RequestView } from '../../../shared/contracts/requests';
+import type { ApplicationDraft } from '../../../shared/requests/application-schema';
 
 export const isOffice = (user: SessionUser) => isOfficeRole(user.role);
 
@@ -16,8 +18,8 @@ export function expectedOfApplicant(status: RequestRow['status']): string {
  * One request as its reader may see it. Everything the applicant gave goes to everyone who can see the request;
  * the office's own bookkeeping (assignee, crew, jurisdiction) only to the office.
  */
-export function requestView(row: RequestRow, user: SessionUser) {
-  const base = {
+export function requestView(row: RequestRow, user: SessionUser): RequestView<Date> | OfficeRequestView<Date> {
+  const base: RequestView<Date> = {
     id: row.id,
     reference: row.reference,
     status: row.status,
@@ -25,7 +27,8 @@ export function requestView(row: RequestRow, user: SessionUser) {
     whatNext: statusText[row.status].next,
     version: row.version,
     wizardStep: row.wizardStep,
-    application: row.application,
+    // Written only through the wizard's schema (drafts.service), so it has that shape.
+    application: row.application as ApplicationDraft,
     applicantName: row.applicantName,
     siteAddress: row.siteAddress,
     roadName: row.roadName,
@@ -43,5 +46,5 @@ export function requestView(row: RequestRow, user: SessionUser) {
     actions: allowedTransitions(row.status, user.role).map(({ action, label, needs, to }) => ({ action, label, needs, to })),
   };
   if (!isOffice(user)) return base;
-  return { ...base, applicantId: row.applicantId, assigneeId: row.assigneeId, crewId: row.crewId, jurisdictionId: row.jurisdictionId };
+  return { ...base, applicantId: row.applicantId, assigneeId: row.assigneeId, crewId: row.crewId, jurisdictionId: row.jurisdictionId } satisfies OfficeRequestView<Date>;
 }

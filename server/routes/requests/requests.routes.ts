@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { entranceStepShape, siteStepShape } from '../../../shared/requests/application-schema';
+import { saveDraftInputSchema, type MyRequestRow } from '../../../shared/contracts/requests';
+import type { EventsAnswer } from '../../../shared/contracts/events';
 import type { AppContext } from '../../context';
 import { handle, uuidParam } from '../../lib/handle';
 import { requireRole } from '../../middleware/require-role';
@@ -9,14 +9,6 @@ import { createDraft, listMine, saveDraft } from './drafts.service';
 import { expectedOfApplicant, requestView } from './request-view';
 import { listDocumentViews } from '../documents/documents.service';
 import { listEvents } from './timeline.service';
-
-export const saveDraftInputSchema = z.strictObject({
-  expectedVersion: z.number({ error: 'Must be the version number you last read.' }).int().min(1),
-  wizardStep: z.number({ error: 'Must be a step number.' }).int().min(0, 'Steps are 0 to 3.').max(3, 'Steps are 0 to 3.').optional(),
-  site: siteStepShape.partial().optional(),
-  entrance: entranceStepShape.partial().optional(),
-});
-
 
 export function requestsRouter({ db }: AppContext) {
   const router = Router();
@@ -30,7 +22,7 @@ export function requestsRouter({ db }: AppContext) {
     requests: (await listMine(db, user)).map((row) => ({
       id: row.id, reference: row.reference, status: row.status, siteAddress: row.siteAddress, roadName: row.roadName,
       statusChangedAt: row.statusChangedAt, updatedAt: row.updatedAt, expected: expectedOfApplicant(row.status),
-    })),
+    } satisfies MyRequestRow<Date>)),
   })));
 
   router.patch('/api/requests/:id/draft', requireRole('applicant'), handle({ params: uuidParam, body: saveDraftInputSchema }, async ({ params, body, user }) => ({
@@ -44,7 +36,7 @@ export function requestsRouter({ db }: AppContext) {
 
   router.get('/api/requests/:id/events', handle({ params: uuidParam }, async ({ params, user }) => {
     await loadVisibleRequest(db, user, params.id);
-    return { events: await listEvents(db, user, params.id) };
+    return { events: await listEvents(db, user, params.id) } satisfies EventsAnswer<Date>;
   }));
 
   return router;

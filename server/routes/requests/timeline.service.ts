@@ -1,4 +1,5 @@
 import { and, asc, eq } from 'drizzle-orm';
+import type { EventView } from '../../../shared/contracts/events';
 import type { SessionUser } from '../../auth/session-user';
 import type { DbOrTx } from '../../db/client';
 import { requestEvents, users } from '../../db/schema';
@@ -15,5 +16,5 @@ export async function listEvents(db: DbOrTx, user: SessionUser, requestId: strin
     actorName: users.name, actorRole: users.role,
   }).from(requestEvents).leftJoin(users, eq(users.id, requestEvents.actorId)).where(where)
     .orderBy(asc(requestEvents.createdAt), asc(requestEvents.id));
-  return rows.map(({ internal, ...event }) => (office ? { ...event, internal } : event));
+  return rows.map(({ internal, ...event }): EventView<Date> => (office ? { ...event, internal } : event));
 }

@@ -4,8 +4,9 @@ import type { DbOrTx } from '../../db/client';
 import { emails, requests } from '../../db/schema';
 import { conflict, notFound } from '../../lib/errors';
 
-export const emailStatuses = ['queued', 'sending', 'sent', 'failed', 'dead'] as const;
-export type EmailStatus = (typeof emailStatuses)[number];
+import { emailStatuses, type EmailStatus } from '../../../shared/contracts/emails';
+
+export { emailStatuses, type EmailStatus };
 
 export interface EmailLogQuery {
   status?: EmailStatus;
@@ -44,7 +45,7 @@ export async function listEmails(db: DbOrTx, query: EmailLogQuery) {
   return {
     emails: items,
     nextCursor: more && last ? encodeCursor(last.createdAt, last.id) : null,
-    totals: Object.fromEntries(emailStatuses.map((s) => [s, totals.find((t) => t.status === s)?.n ?? 0])),
+    totals: Object.fromEntries(emailStatuses.map((s) => [s, totals.find((t) => t.status === s)?.n ?? 0])) as Record<EmailStatus, number>,
   };
 }
 
