@@ -3,20 +3,21 @@ import { RequireRole } from '@/app/layout/require-role';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { PageHeader, Panel } from '@/components/ui/panel';
 import { paths } from '@/config/paths';
+import { photosEditable } from '@shared/contracts/photos';
+import { useLatestQuestion } from '@/features/events/api/get-events';
+import { EventList } from '@/features/events/components/event-list';
 import { CheckSummary } from '@/features/grade-check/components/check-summary';
+import { MessageThread } from '@/features/messages/components/message-thread';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
 import { PhotoStep } from '@/features/photos/components/photo-step';
 import { useRequest } from '@/features/requests/api/get-request';
 import { ApplicationSummary } from '@/features/requests/components/application-summary';
 import { RequestDocuments } from '@/features/requests/components/request-documents';
-import { RequestMessages } from '@/features/requests/components/request-messages';
 import { RequestStatus } from '@/features/requests/components/request-status';
-import { RequestTimeline } from '@/features/requests/components/request-timeline';
-
-const photosEditable = new Set(['draft', 'submitted', 'needs_details', 'visit_booked']);
 
 function RequestPage({ id }: { id: string }) {
   const { data, error, isPending } = useRequest(id);
+  const question = useLatestQuestion(id, data?.request.status === 'needs_details');
   if (isPending) return <Loading />;
   if (error) return <ErrorNotice error={error} />;
   const { request, documents } = data;
@@ -25,13 +26,13 @@ function RequestPage({ id }: { id: string }) {
       <PageHeader title={request.siteAddress || 'Driveway entrance request'} lead={`Reference ${request.reference}${request.roadName ? ` · on ${request.roadName}` : ''}`} />
       <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
         <div className="space-y-6">
-          <Panel title="Where it stands"><RequestStatus request={request} editHref={paths.applicant.editRequest.getHref(id)} /></Panel>
-          <Panel title="Messages with the office"><RequestMessages requestId={id} canWrite={request.status !== 'draft'} /></Panel>
-          <Panel title="Photos">{photosEditable.has(request.status) ? <PhotoStep requestId={id} /> : <PhotoGallery requestId={id} />}</Panel>
+          <Panel title="Where it stands"><RequestStatus request={request} editHref={paths.applicant.editRequest.getHref(id)} question={question} /></Panel>
+          <Panel title="Messages with the office"><MessageThread requestId={id} canWrite={request.status !== 'draft'} /></Panel>
+          <Panel title="Photos">{photosEditable(request.status) ? <PhotoStep requestId={id} /> : <PhotoGallery requestId={id} />}</Panel>
           <Panel title="Your answers"><ApplicationSummary application={request.application} /></Panel>
         </div>
         <div className="space-y-6">
-          <Panel title="Timeline"><RequestTimeline requestId={id} /></Panel>
+          <Panel title="Timeline"><EventList requestId={id} /></Panel>
           <Panel title="Grade check"><CheckSummary requestId={id} /></Panel>
           <Panel title="Documents"><RequestDocuments requestId={id} documents={documents} /></Panel>
         </div>

@@ -5,7 +5,7 @@ import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/get-me';
 import { useFieldSheet } from '@/features/crew/api/get-field-sheet';
 import { FieldSheet } from '@/features/crew/components/field-sheet';
-import { RequestMessages } from '@/features/requests/components/request-messages';
+import { MessageThread } from '@/features/messages/components/message-thread';
 
 export function Component() {
   const { id = '' } = useParams();
@@ -20,7 +20,7 @@ export function Component() {
       <FieldSheet id={id} />
       {holdsJob && (
         <Panel title="Messages with the property owner and the office" className="no-print mt-6">
-          <RequestMessages requestId={id} canWrite writeLabel="Write to the property owner and the office" />
+          <MessageThread requestId={id} writeLabel="Write to the property owner and the office" />
         </Panel>
       )}
     </RequireRole>

@@ -1,20 +1,39 @@
 import { useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
+import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useMe } from '@/features/auth/api/get-me';
 import { AsBuiltReview } from '@/features/crew/components/as-built-review';
-import { useOfficeRequest } from '@/features/office/api/get-office-request';
+import { EventList } from '@/features/events/components/event-list';
+import { MessageThread } from '@/features/messages/components/message-thread';
 import { RequestWorkspace } from '@/features/office/components/request-workspace';
+import { PhotoGallery } from '@/features/photos/components/photo-gallery';
+import { useOfficeRequest } from '@/features/requests/api/get-request';
 import { ApplicationSummary } from '@/features/requests/components/application-summary';
+
+function OfficeRequestPage({ id }: { id: string }) {
+  const me = useMe().data;
+  const query = useOfficeRequest(id);
+  if (query.isPending) return <Loading label="Loading the request…" />;
+  if (query.error) return <ErrorNotice error={query.error} />;
+  const { request } = query.data;
+  // The crew's as-built set is what the office reviews before closing or sending the job back.
+  const built = ['under_construction', 'built', 'closed'].includes(request.status);
+  return (
+    <>
+      {me && (
+        <RequestWorkspace key={id} request={request} me={me} sections={{
+          application: () => <ApplicationSummary application={request.application} />,
+          photos: () => <PhotoGallery requestId={id} emptyText="The property owner has not added photos." />,
+          messages: () => <MessageThread requestId={id} office />,
+          history: () => <EventList requestId={id} office label="History" />,
+        }} />
+      )}
+      {built && <div className="mt-6"><AsBuiltReview requestId={id} /></div>}
+    </>
+  );
+}
 
 export function Component() {
   const { id = '' } = useParams();
-  const me = useMe().data;
-  // The crew's as-built set is what the office reviews before closing or sending the job back.
-  const built = ['under_construction', 'built', 'closed'].includes(useOfficeRequest(id).data?.request.status ?? '');
-  return (
-    <RequireRole roles={['staff', 'admin']}>
-      {me && <RequestWorkspace key={id} requestId={id} me={me} renderApplication={(request) => <ApplicationSummary application={request.application} />} />}
-      {built && <div className="mt-6"><AsBuiltReview requestId={id} /></div>}
-    </RequireRole>
-  );
+  return <RequireRole roles={['staff', 'admin']}><OfficeRequestPage id={id} /></RequireRole>;
 }

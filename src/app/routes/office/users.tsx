@@ -1,7 +1,7 @@
 import { RequireRole } from '@/app/layout/require-role';
 import { PageHeader, Panel } from '@/components/ui/panel';
-import { InviteUserForm } from '@/features/users/components/invite-user-form';
-import { UsersTable } from '@/features/users/components/users-table';
+import { InviteUserForm } from '@/features/people/components/invite-user-form';
+import { UsersTable } from '@/features/people/components/users-table';
 
 export function Component() {
   return (

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { getEmailsQueryOptions } from './get-emails';
+import { emailKeys } from '@/lib/query-keys';
 
 /** Every message that gave up goes back to the queue; the answer says how many. */
 export const retryDeadEmails = () => api.post<{ queued: number }>('/api/emails/retry-dead');
@@ -9,6 +9,6 @@ export function useRetryDeadEmails() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: retryDeadEmails,
-    onSettled: () => queryClient.invalidateQueries({ queryKey: getEmailsQueryOptions().queryKey.slice(0, 1) }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: emailKeys.lists() }),
   });
 }

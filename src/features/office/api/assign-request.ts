@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { getOfficeRequestQueryOptions } from './get-office-request';
+import { eventKeys, requestKeys } from '@/lib/query-keys';
 import { allQueuesKey } from './get-queue';
-import { getRequestEventsQueryOptions } from './get-request-events';
 
 export const assignRequest = (id: string, assigneeId: string | null) =>
   api.put<{ request: { id: string; assigneeId: string | null } }>(`/api/requests/${id}/assignee`, { assigneeId });
@@ -13,8 +12,8 @@ export function useAssignRequest() {
     mutationFn: ({ id, assigneeId }: { id: string; assigneeId: string | null }) => assignRequest(id, assigneeId),
     onSuccess: (_data, { id }) => Promise.all([
       queryClient.invalidateQueries({ queryKey: allQueuesKey() }),
-      queryClient.invalidateQueries({ queryKey: getOfficeRequestQueryOptions(id).queryKey }),
-      queryClient.invalidateQueries({ queryKey: getRequestEventsQueryOptions(id).queryKey }),
+      queryClient.invalidateQueries({ queryKey: requestKeys.one(id) }),
+      queryClient.invalidateQueries({ queryKey: eventKeys.ofRequest(id) }),
     ]),
   });
 }

@@ -1,9 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { getOfficeRequestQueryOptions } from './get-office-request';
+import { statusChangeKeys } from '@/lib/query-keys';
 import { allQueuesKey } from './get-queue';
-import { getRequestEventsQueryOptions } from './get-request-events';
-import { getRequestMessagesQueryOptions } from './get-request-messages';
 
 export interface TransitionInput {
   action: string;
@@ -24,11 +22,6 @@ export function useRunOfficeTransition(id: string) {
   return useMutation({
     mutationFn: (input: TransitionInput) => runOfficeTransition(id, input),
     // A 409 means someone else moved the request: refresh either way so the screen shows where it stands.
-    onSettled: () => Promise.all([
-      queryClient.invalidateQueries({ queryKey: getOfficeRequestQueryOptions(id).queryKey }),
-      queryClient.invalidateQueries({ queryKey: getRequestEventsQueryOptions(id).queryKey }),
-      queryClient.invalidateQueries({ queryKey: getRequestMessagesQueryOptions(id).queryKey }),
-      queryClient.invalidateQueries({ queryKey: allQueuesKey() }),
-    ]),
+    onSettled: () => Promise.all([...statusChangeKeys(id), allQueuesKey()].map((queryKey) => queryClient.invalidateQueries({ queryKey }))),
   });
 }

@@ -1,4 +1,3 @@
-import type { RequestViewBase, TimelineEventView } from '@shared/requests/request-views';
 import type { RequestStatus, Role } from '@shared/workflow/statuses';
 
 export const queueSorts = ['waiting', 'reference', 'applicant', 'road', 'created'] as const;
@@ -35,35 +34,3 @@ export interface QueuePage { requests: QueueRow[]; nextCursor: string | null; to
 
 export interface OfficePerson { id: string; name: string; role: Role }
 export interface QueueOptions { jurisdictions: { id: string; name: string }[]; people: OfficePerson[] }
-
-/** A request as GET /api/requests/:id returns it to the office. */
-export interface OfficeRequest extends RequestViewBase {
-  permitExpiresOn: string | null;
-  applicantId: string;
-  assigneeId: string | null;
-  crewId: string | null;
-  jurisdictionId: string | null;
-}
-
-export type OfficeEvent = TimelineEventView & { internal: boolean };
-
-export interface OfficeMessage {
-  id: string;
-  body: string;
-  createdAt: string;
-  authorName: string;
-  authorRole: Role;
-  mine: boolean;
-  internal: boolean;
-}
-
-export interface OfficePhoto {
-  id: string;
-  fileName: string;
-  contentType: string;
-  caption: string;
-  gpsLat: number | null;
-  gpsLng: number | null;
-  createdAt: string;
-  url?: string;
-}

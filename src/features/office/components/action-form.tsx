@@ -3,7 +3,7 @@ import type { Transition } from '@shared/workflow/transitions';
 import { Button } from '@/components/ui/button';
 import { Field, TextArea, TextInput } from '@/components/ui/field';
 import { ApiError } from '@/lib/api-client';
-import type { OfficeRequest } from '../api/types';
+import type { OfficeRequestView as OfficeRequest } from '@shared/contracts/requests';
 import type { TransitionInput } from '../api/run-office-transition';
 
 const noteLabel: Record<string, { label: string; hint: string }> = {

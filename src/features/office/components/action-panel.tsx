@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { paths } from '@/config/paths';
 import { useRunOfficeTransition } from '../api/run-office-transition';
-import type { OfficeRequest } from '../api/types';
+import type { OfficeRequestView as OfficeRequest } from '@shared/contracts/requests';
 import { ActionForm } from './action-form';
 
 /** The moves open from the current status for this person, each opening a form for what it needs. */

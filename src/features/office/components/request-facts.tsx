@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { StatusBadge } from '@/components/ui/status-badge';
-import type { OfficeRequest } from '../api/types';
+import type { OfficeRequestView as OfficeRequest } from '@shared/contracts/requests';
 import { AssignControl } from './assign-control';
 import { formatWhen, timeInStatus } from './time-in-status';
 

@@ -1,15 +1,10 @@
 import type { ReactNode } from 'react';
 import { Link, useSearchParams } from 'react-router';
 import type { Role } from '@shared/workflow/statuses';
-import { ErrorNotice, Loading } from '@/components/ui/notice';
+import type { OfficeRequestView } from '@shared/contracts/requests';
 import { PageHeader, Panel } from '@/components/ui/panel';
 import { paths } from '@/config/paths';
-import { useOfficeRequest } from '../api/get-office-request';
-import type { OfficeRequest } from '../api/types';
 import { ActionPanel } from './action-panel';
-import { HistoryList } from './history-list';
-import { MessageThread } from './message-thread';
-import { PhotoViewer } from './photo-viewer';
 import { RequestFacts } from './request-facts';
 
 const tabs = [
@@ -21,20 +16,16 @@ const tabs = [
 type Tab = (typeof tabs)[number]['id'];
 
 interface WorkspaceProps {
-  requestId: string;
+  request: OfficeRequestView;
   me: { id: string; role: Role };
-  /** The full application, drawn by the screen that composes this workspace. */
-  renderApplication: (request: OfficeRequest) => ReactNode;
+  /** The parts other features draw, composed by the screen: the full application, photos, messages, history. */
+  sections: Record<'application' | 'photos' | 'messages' | 'history', () => ReactNode>;
 }
 
 /** One request for the office: what the owner gave, photos, messages, history, and the moves open now. */
-export function RequestWorkspace({ requestId, me, renderApplication }: WorkspaceProps) {
+export function RequestWorkspace({ request, me, sections }: WorkspaceProps) {
   const [params, setParams] = useSearchParams();
   const tab: Tab = tabs.some((t) => t.id === params.get('tab')) ? (params.get('tab') as Tab) : 'overview';
-  const query = useOfficeRequest(requestId);
-  if (query.isPending) return <Loading label="Loading the request…" />;
-  if (query.error) return <ErrorNotice error={query.error} />;
-  const request = query.data.request;
 
   return (
     <>
@@ -58,12 +49,12 @@ export function RequestWorkspace({ requestId, me, renderApplication }: Workspace
           {tab === 'overview' && (
             <>
               <Panel title="At a glance"><RequestFacts request={request} meId={me.id} /></Panel>
-              <Panel title="What the owner told us">{renderApplication(request)}</Panel>
+              <Panel title="What the owner told us">{sections.application()}</Panel>
             </>
           )}
-          {tab === 'photos' && <Panel title="Site photos"><PhotoViewer requestId={request.id} /></Panel>}
-          {tab === 'messages' && <Panel title="Messages"><MessageThread requestId={request.id} /></Panel>}
-          {tab === 'history' && <Panel title="History"><HistoryList requestId={request.id} /></Panel>}
+          {tab === 'photos' && <Panel title="Site photos">{sections.photos()}</Panel>}
+          {tab === 'messages' && <Panel title="Messages">{sections.messages()}</Panel>}
+          {tab === 'history' && <Panel title="History">{sections.history()}</Panel>}
         </div>
         <aside className="order-first space-y-4 lg:order-none">
           <Panel title="Next step">

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { getPhotosQueryOptions } from './get-photos';
+import { photoKeys } from '@/lib/query-keys';
 
 export const removePhoto = ({ requestId, photoId }: { requestId: string; photoId: string }) =>
   api.delete<void>(`/api/requests/${requestId}/photos/${photoId}`);
@@ -9,6 +9,6 @@ export function useRemovePhoto(requestId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (photoId: string) => removePhoto({ requestId, photoId }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: getPhotosQueryOptions(requestId).queryKey }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: photoKeys.ofRequest(requestId) }),
   });
 }

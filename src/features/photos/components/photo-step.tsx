@@ -3,7 +3,8 @@ import { lazy, Suspense, useState } from 'react';
 import { maxPhotosPerRequest } from '@shared/requests/photo-rules';
 import { Button } from '@/components/ui/button';
 import { Loading, Notice } from '@/components/ui/notice';
-import { getPhotosQueryOptions, usePhotos } from '../api/get-photos';
+import { photoKeys } from '@/lib/query-keys';
+import { usePhotos } from '../api/get-photos';
 import { PhotoGallery } from './photo-gallery';
 
 // The uploader carries most of the client's weight, so it loads only when someone reaches the photos step.
@@ -22,7 +23,7 @@ export function PhotoStep({ requestId, onUsePosition }: PhotoStepProps) {
   const [problems, setProblems] = useState<string[]>([]);
   const [offer, setOffer] = useState<{ lat: number; lng: number } | null>(null);
   const [used, setUsed] = useState(false);
-  const refresh = () => queryClient.invalidateQueries({ queryKey: getPhotosQueryOptions(requestId).queryKey });
+  const refresh = () => queryClient.invalidateQueries({ queryKey: photoKeys.ofRequest(requestId) });
   const accept = async () => {
     if (!offer || !onUsePosition) return;
     await onUsePosition(offer.lat, offer.lng);

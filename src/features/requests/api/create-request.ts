@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { getMyRequestsQueryOptions } from './get-my-requests';
-import type { RequestDetail } from './types';
+import type { RequestView } from '@shared/contracts/requests';
 
-export const createRequest = () => api.post<{ request: RequestDetail }>('/api/requests', {});
+export const createRequest = () => api.post<{ request: RequestView }>('/api/requests', {});
 
 export function useCreateRequest() {
   const queryClient = useQueryClient();

@@ -1,20 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { RequestStatus } from '@shared/workflow/statuses';
+import type { MyRequestRow } from '@shared/contracts/requests';
 import { api } from '@/lib/api-client';
-
-export interface MyRequestRow {
-  id: string;
-  reference: string;
-  status: RequestStatus;
-  siteAddress: string;
-  roadName: string;
-  statusChangedAt: string;
-  updatedAt: string;
-  expected: string;
-}
+import { requestKeys } from '@/lib/query-keys';
 
 export const getMyRequests = () => api.get<{ requests: MyRequestRow[] }>('/api/requests/mine');
 
-export const getMyRequestsQueryOptions = () => queryOptions({ queryKey: ['requests', 'mine'], queryFn: getMyRequests });
+export const getMyRequestsQueryOptions = () => queryOptions({ queryKey: requestKeys.mine(), queryFn: getMyRequests });
 
 export const useMyRequests = () => useQuery(getMyRequestsQueryOptions());

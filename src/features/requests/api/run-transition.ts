@@ -1,9 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { getEventsQueryOptions } from './get-events';
-import { getMessagesQueryOptions } from './get-messages';
-import { getMyRequestsQueryOptions } from './get-my-requests';
-import { getRequestQueryOptions } from './get-request';
+import { requestKeys, statusChangeKeys } from '@/lib/query-keys';
 
 /** The applicant's status changes: send, answer the office's question, withdraw. */
 export type ApplicantAction = 'submit' | 'answer' | 'withdraw';
@@ -17,11 +14,6 @@ export function useRunTransition(id: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (call: Omit<TransitionCall, 'id'>) => runTransition({ id, ...call }),
-    onSuccess: () => Promise.all([
-      queryClient.invalidateQueries({ queryKey: getRequestQueryOptions(id).queryKey }),
-      queryClient.invalidateQueries({ queryKey: getEventsQueryOptions(id).queryKey }),
-      queryClient.invalidateQueries({ queryKey: getMessagesQueryOptions(id).queryKey }),
-      queryClient.invalidateQueries({ queryKey: getMyRequestsQueryOptions().queryKey }),
-    ]),
+    onSuccess: () => Promise.all([...statusChangeKeys(id), requestKeys.mine()].map((queryKey) => queryClient.invalidateQueries({ queryKey }))),
   });
 }

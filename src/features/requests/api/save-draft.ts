@@ -1,19 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { EntranceStep, SiteStep } from '@shared/requests/application-schema';
+import type { RequestView, SaveDraftInput } from '@shared/contracts/requests';
 import { api } from '@/lib/api-client';
 import { getMyRequestsQueryOptions } from './get-my-requests';
 import { getRequestQueryOptions } from './get-request';
-import type { RequestDetail } from './types';
 
-export interface DraftChange {
-  id: string;
-  expectedVersion: number;
-  wizardStep?: number;
-  site?: Partial<SiteStep>;
-  entrance?: Partial<EntranceStep>;
-}
+export type DraftChange = SaveDraftInput & { id: string };
 
-export const saveDraft = ({ id, ...change }: DraftChange) => api.patch<{ request: RequestDetail }>(`/api/requests/${id}/draft`, change);
+export const saveDraft = ({ id, ...change }: DraftChange) => api.patch<{ request: RequestView }>(`/api/requests/${id}/draft`, change);
 
 /** For the moment the page goes away: the browser finishes a keepalive request even after the tab closes. */
 export function saveDraftOnExit({ id, ...change }: DraftChange) {

@@ -2,12 +2,12 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice } from '@/components/ui/notice';
 import { getDocumentUrl } from '../api/get-document-url';
-import type { RequestDocument } from '../api/types';
+import type { RequestDocumentView } from '@shared/contracts/requests';
 
 const size = (bytes: number) => (bytes > 1024 * 1024 ? `${(bytes / 1024 / 1024).toFixed(1)} MB` : `${Math.max(1, Math.round(bytes / 1024))} kB`);
 
 /** What the office has shared: the grade check report, the permit. */
-export function RequestDocuments({ requestId, documents }: { requestId: string; documents: RequestDocument[] }) {
+export function RequestDocuments({ requestId, documents }: { requestId: string; documents: RequestDocumentView[] }) {
   const [error, setError] = useState<unknown>(null);
   if (documents.length === 0) return <p className="text-sm text-stone-500">The office has not shared any documents yet.</p>;
   const open = async (id: string) => {

@@ -5,12 +5,18 @@ import { TextArea } from '@/components/ui/field';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { ApiError } from '@/lib/api-client';
-import { useEvents } from '../api/get-events';
 import { useRunTransition } from '../api/run-transition';
-import type { RequestDetail } from '../api/types';
+import type { RequestView } from '@shared/contracts/requests';
 
 /** Where the request stands in plain words, and the applicant's own moves from here. */
-export function RequestStatus({ request, editHref }: { request: RequestDetail; editHref: string }) {
+interface RequestStatusProps {
+  request: RequestView;
+  editHref: string;
+  /** The office's latest question, when it has asked for details. */
+  question?: string;
+}
+
+export function RequestStatus({ request, editHref, question }: RequestStatusProps) {
   const transition = useRunTransition(request.id);
   const can = (action: string) => request.actions.some((a) => a.action === action);
   return (
@@ -22,17 +28,15 @@ export function RequestStatus({ request, editHref }: { request: RequestDetail; e
       {request.status === 'draft' && (
         <Link to={editHref} className="inline-flex rounded-md bg-pine-700 px-4 py-2 text-sm font-semibold text-white hover:bg-pine-800">Continue the form</Link>
       )}
-      {request.status === 'needs_details' && <AnswerForm request={request} editHref={editHref} />}
+      {request.status === 'needs_details' && <AnswerForm request={request} editHref={editHref} question={question} />}
       {can('withdraw') && <Withdraw onConfirm={() => transition.mutate({ action: 'withdraw', expectedVersion: request.version })} pending={transition.isPending} />}
       <ErrorNotice error={transition.error} />
     </div>
   );
 }
 
-function AnswerForm({ request, editHref }: { request: RequestDetail; editHref: string }) {
+function AnswerForm({ request, editHref, question }: RequestStatusProps) {
   const id = useId();
-  const events = useEvents(request.id).data?.events ?? [];
-  const question = [...events].reverse().find((e) => e.toStatus === 'needs_details')?.note;
   const transition = useRunTransition(request.id);
   const [answer, setAnswer] = useState('');
   const fieldError = transition.error instanceof ApiError ? transition.error.fields.answer : undefined;

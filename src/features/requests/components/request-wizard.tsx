@@ -9,7 +9,7 @@ import { ApiError } from '@/lib/api-client';
 import { getRequestQueryOptions, useRequest } from '../api/get-request';
 import { useRunTransition } from '../api/run-transition';
 import { saveDraftOnExit, useSaveDraft } from '../api/save-draft';
-import type { RequestDetail } from '../api/types';
+import type { RequestView } from '@shared/contracts/requests';
 import { ApplicationSummary } from './application-summary';
 import { EntranceStepForm } from './entrance-step';
 import { answeredOnly, fieldsByStep, type StepSnapshot } from './form-helpers';
@@ -43,7 +43,7 @@ export function RequestWizard({ requestId, ...rest }: WizardProps) {
   return <WizardBody key={request.id} request={request} {...rest} />;
 }
 
-function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'requestId'> & { request: RequestDetail }) {
+function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'requestId'> & { request: RequestView }) {
   const queryClient = useQueryClient();
   const [step, setStep] = useState(Math.min(Math.max(request.wizardStep, 0), 3));
   const [serverFields, setServerFields] = useState<ReturnType<typeof fieldsByStep>>(null);

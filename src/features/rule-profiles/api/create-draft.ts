@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CreateVersionInput, ProfileVersion } from '@shared/contracts/rule-profiles';
 import { api } from '@/lib/api-client';
-import { getJurisdictionQueryOptions, type ProfileVersion } from './get-jurisdiction';
-import { getJurisdictionsQueryOptions } from './get-jurisdictions';
+import { ruleProfileKeys } from '@/lib/query-keys';
 
-export const createDraft = ({ jurisdictionId, fromVersionId }: { jurisdictionId: string; fromVersionId?: string }) =>
+export const createDraft = ({ jurisdictionId, fromVersionId }: CreateVersionInput & { jurisdictionId: string }) =>
   api.post<{ version: ProfileVersion }>(`/api/jurisdictions/${jurisdictionId}/versions`, { fromVersionId });
 
 export function useCreateDraft(jurisdictionId: string) {
@@ -11,8 +11,8 @@ export function useCreateDraft(jurisdictionId: string) {
   return useMutation({
     mutationFn: createDraft,
     onSuccess: () => Promise.all([
-      queryClient.invalidateQueries({ queryKey: getJurisdictionQueryOptions(jurisdictionId).queryKey }),
-      queryClient.invalidateQueries({ queryKey: getJurisdictionsQueryOptions().queryKey, exact: true }),
+      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
+      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.list() }),
     ]),
   });
 }

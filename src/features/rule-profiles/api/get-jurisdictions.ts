@@ -1,27 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { JurisdictionSummary } from '@shared/contracts/rule-profiles';
 import { api } from '@/lib/api-client';
+import { ruleProfileKeys } from '@/lib/query-keys';
 
-export interface VersionSummary {
-  id: string;
-  jurisdictionId: string;
-  version: number;
-  status: 'draft' | 'published';
-  publishedAt: string | null;
-  changeNote: string;
-  createdAt: string;
-}
-
-export interface JurisdictionSummary {
-  id: string;
-  slug: string;
-  name: string;
-  authority: string;
-  currentVersionId: string | null;
-  versions: VersionSummary[];
-}
+export type { JurisdictionSummary, VersionSummary } from '@shared/contracts/rule-profiles';
 
 export const getJurisdictions = () => api.get<{ jurisdictions: JurisdictionSummary[] }>('/api/jurisdictions');
 
-export const getJurisdictionsQueryOptions = () => queryOptions({ queryKey: ['jurisdictions'], queryFn: getJurisdictions });
+export const getJurisdictionsQueryOptions = () => queryOptions({ queryKey: ruleProfileKeys.list(), queryFn: getJurisdictions });
 
 export const useJurisdictions = () => useQuery(getJurisdictionsQueryOptions());

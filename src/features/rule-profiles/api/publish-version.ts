@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { ProfileVersion } from '@shared/contracts/rule-profiles';
 import { api } from '@/lib/api-client';
-import { getJurisdictionQueryOptions, type ProfileVersion } from './get-jurisdiction';
-import { getJurisdictionsQueryOptions } from './get-jurisdictions';
+import { ruleProfileKeys } from '@/lib/query-keys';
 
 export const publishVersion = (versionId: string) => api.post<{ version: ProfileVersion }>(`/api/rule-profile-versions/${versionId}/publish`);
 
@@ -10,8 +10,8 @@ export function usePublishVersion(jurisdictionId: string) {
   return useMutation({
     mutationFn: publishVersion,
     onSuccess: () => Promise.all([
-      queryClient.invalidateQueries({ queryKey: getJurisdictionQueryOptions(jurisdictionId).queryKey }),
-      queryClient.invalidateQueries({ queryKey: getJurisdictionsQueryOptions().queryKey, exact: true }),
+      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
+      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.list() }),
     ]),
   });
 }
