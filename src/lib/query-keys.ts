@@ -34,6 +34,14 @@ export const ruleProfileKeys = {
   list: () => ['rule-profiles', 'list'] as const,
   /** GET /api/jurisdictions/:id */
   one: (jurisdictionId: string) => ['rule-profiles', 'one', jurisdictionId] as const,
+  /** GET /api/rule-profile-versions/:id */
+  version: (versionId: string) => ['rule-profiles', 'version', versionId] as const,
+};
+
+/** The office's queue: every filtered view of GET /api/queue sits under `all`. */
+export const queueKeys = {
+  all: ['queue'] as const,
+  list: (filters: object) => ['queue', 'list', filters] as const,
 };
 
 export const emailKeys = {

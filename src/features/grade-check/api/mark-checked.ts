@@ -1,5 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { queueKeys, statusChangeKeys } from '@/lib/query-keys';
+import { getGradeChecksQueryOptions } from './get-grade-checks';
 
 /** The status change lives in the office workflow; this screen only offers the one step that follows a check. */
 export const markChecked = ({ requestId, expectedVersion }: { requestId: string; expectedVersion: number }) =>
@@ -9,8 +11,11 @@ export function useMarkChecked() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: markChecked,
-    // A status change shows on every screen that holds the request (queue, workspace, timeline), and those belong to
-    // other features whose query keys this one does not know: everything cached is refreshed.
-    onSuccess: () => queryClient.invalidateQueries(),
+    // A status change shows on every screen that holds the request: the request and its history, the queue, and
+    // the check screen's own header.
+    onSuccess: (_answer, { requestId }) => Promise.all(
+      [...statusChangeKeys(requestId), queueKeys.all, getGradeChecksQueryOptions(requestId).queryKey]
+        .map((queryKey) => queryClient.invalidateQueries({ queryKey })),
+    ),
   });
 }

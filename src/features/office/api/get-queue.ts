@@ -1,5 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { queueKeys } from '@/lib/query-keys';
 import type { QueueFilters, QueuePage } from './types';
 
 export const defaultQueueFilters: QueueFilters = {
@@ -19,10 +20,10 @@ export const getQueue = (filters: QueueFilters) => api.get<QueuePage>('/api/queu
 });
 
 export const getQueueQueryOptions = (filters: QueueFilters = defaultQueueFilters) =>
-  queryOptions({ queryKey: ['office', 'queue', filters], queryFn: () => getQueue(filters), staleTime: 10_000 });
+  queryOptions({ queryKey: queueKeys.list(filters), queryFn: () => getQueue(filters), staleTime: 10_000 });
 
 /** Every view of the queue at once, for invalidating after a change. */
-export const allQueuesKey = () => getQueueQueryOptions().queryKey.slice(0, 2);
+export const allQueuesKey = () => queueKeys.all;
 
 /** The previous page stays on screen while the next one loads, so the table does not jump. */
 export const useQueue = (filters: QueueFilters) => useQuery({ ...getQueueQueryOptions(filters), placeholderData: keepPreviousData });
