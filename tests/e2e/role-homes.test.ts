@@ -36,3 +36,22 @@ describe('each role signs in through the picker and lands on its own home', () =
     });
   }
 });
+
+describe('the admin adds a person', () => {
+  it('is told at the E-mail field when that e-mail already belongs to someone', async () => {
+    const admin = demoPeople.find((p) => p.role === 'admin')!;
+    const owner = demoPeople.find((p) => p.role === 'applicant')!;
+    const context = await session.browser.newContext();
+    const page = await context.newPage();
+    await signInAs(page, admin.email);
+    await page.waitForURL((url) => url.pathname === '/office/queue');
+    await page.getByRole('link', { name: 'Users and roles' }).click();
+    await page.getByLabel('Name').fill('Someone Else');
+    await page.getByLabel('E-mail').fill(owner.email);
+    await page.getByRole('button', { name: 'Add person' }).click();
+    await expect.poll(() => page.getByRole('alert').first().textContent()).toContain(`E-mail: ${owner.email} already belongs to ${owner.name}`);
+    expect(await page.getByLabel('E-mail').getAttribute('aria-invalid')).toBe('true');
+    await saveScreenshot(page, 'users-duplicate-email');
+    await context.close();
+  });
+});
