@@ -27,7 +27,8 @@ export const sortsEndedLast = (sort: QueueSort) => sort === 'waiting';
 
 /** Which filters a page uses and how it is ordered: everything that changes the SQL text, and nothing else. */
 export interface QueueShape {
-  statuses: boolean;
+  /** One status is an equality, so an index on (authority, status, sort column) can hand rows over in order. */
+  statuses: 'one' | 'many' | null;
   waiting: boolean;
   jurisdiction: 'none' | 'one' | null;
   assignee: 'none' | 'one' | null;
@@ -39,6 +40,7 @@ export interface QueueShape {
 
 /** The values a page fills into its shape's statement. */
 export interface QueueValues {
+  status?: string;
   statuses?: string[];
   jurisdiction?: string;
   assignee?: string;
@@ -53,7 +55,8 @@ const p = (name: keyof QueueValues) => sql.placeholder(name);
 
 function filters(shape: QueueShape): SQL[] {
   const where: SQL[] = [ne(requests.status, 'draft')];
-  if (shape.statuses) where.push(sql`${requests.status} = any(${p('statuses')})`);
+  if (shape.statuses === 'one') where.push(sql`${requests.status} = ${p('status')}`);
+  else if (shape.statuses) where.push(sql`${requests.status} = any(${p('statuses')})`);
   if (shape.waiting) where.push(inArray(requests.status, [...waitingOnOffice]));
   if (shape.jurisdiction === 'none') where.push(isNull(requests.jurisdictionId));
   else if (shape.jurisdiction) where.push(eq(requests.jurisdictionId, p('jurisdiction')));

@@ -36,11 +36,11 @@ export async function listQueue(db: DbOrTx, user: SessionUser, query: QueueQuery
   if (query.cursor && !cursor) throw badRequest('The page position is not one this list gave out.', { cursor: 'start again from the first page' });
   const one = (value: string | undefined) => (value === 'none' ? 'none' : value ? 'one' : null);
   const shape: QueueShape = {
-    statuses: Boolean(query.status), waiting: query.waiting, jurisdiction: one(query.jurisdiction), assignee: one(query.assignee),
+    statuses: !query.status ? null : query.status.length === 1 ? 'one' : 'many', waiting: query.waiting, jurisdiction: one(query.jurisdiction), assignee: one(query.assignee),
     search: Boolean(search), cursor: Boolean(cursor), sort: query.sort, dir: query.dir,
   };
   const values: QueueValues = {
-    statuses: query.status, jurisdiction: query.jurisdiction, search: search ?? undefined, limit: query.limit + 1,
+    status: query.status?.[0], statuses: query.status, jurisdiction: query.jurisdiction, search: search ?? undefined, limit: query.limit + 1,
     assignee: query.assignee === 'me' ? user.id : query.assignee, cursorValue: cursor?.value, cursorId: cursor?.id, cursorEnded: cursor?.ended,
   };
   const rows = await queueStatement(db, shape).execute({ ...values });
