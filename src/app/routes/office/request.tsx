@@ -1,3 +1,4 @@
+import { officeRoles } from '@shared/workflow/roles';
 import { useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { useMe } from '@/features/auth/api/get-me';
@@ -12,7 +13,7 @@ export function Component() {
   // The crew's as-built set is what the office reviews before closing or sending the job back.
   const built = ['under_construction', 'built', 'closed'].includes(useOfficeRequest(id).data?.request.status ?? '');
   return (
-    <RequireRole roles={['staff', 'admin']}>
+    <RequireRole roles={officeRoles}>
       {me && <RequestWorkspace key={id} requestId={id} me={me} renderApplication={(request) => <ApplicationSummary application={request.application} />} />}
       {built && <div className="mt-6"><AsBuiltReview requestId={id} /></div>}
     </RequireRole>
