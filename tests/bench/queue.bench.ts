@@ -44,6 +44,8 @@ async function main() {
       ['floor (session + select 1)', '/bench/floor'],
       ['floor + the API rate-limit count', '/bench/limited/api/floor'],
       ['queue: waiting on us, by time in status', '/api/queue?waiting=true&sort=waiting&limit=50'],
+      // The screen's default view: everything, longest wait first, ended requests after the open ones.
+      ['queue: everything, longest wait first', '/api/queue?sort=waiting&limit=50'],
       ['queue: submitted in one authority, by applicant', `/api/queue?status=submitted&jurisdiction=${place.id}&sort=applicant&limit=50`],
       ['queue: search "quarry ridge", newest first', '/api/queue?q=quarry%20ridge&sort=created&dir=desc&limit=50'],
       ['queue: everything, by road, page 3', ''],
@@ -54,7 +56,7 @@ async function main() {
       const page = await (await fetch(`${origin}/api/queue?sort=road&limit=50${cursor ? `&cursor=${cursor}` : ''}`, { headers: { cookie } })).json() as { nextCursor: string };
       cursor = page.nextCursor;
     }
-    targets[5][1] = `/api/queue?sort=road&limit=50&cursor=${cursor}`;
+    targets[targets.length - 1][1] = `/api/queue?sort=road&limit=50&cursor=${cursor}`;
     for (const [, target] of targets) await measureWarm(origin + target, cookie);
     const results = [];
     const cpu = async () => new Promise<number>((resolve) => {
