@@ -1,8 +1,8 @@
 import { and, asc, eq, ilike, or, sql } from 'drizzle-orm';
-import type { Role } from '../../shared/workflow/statuses';
+import { roleLabels, type Role } from '../../shared/workflow/statuses';
 import type { DbOrTx } from '../db/client';
 import { users } from '../db/schema';
-import { forbidden, notFound } from '../lib/errors';
+import { conflict, forbidden, notFound } from '../lib/errors';
 import type { SessionUser } from './session-user';
 
 const publicColumns = { id: users.id, email: users.email, name: users.name, role: users.role };
@@ -54,15 +54,18 @@ export async function setUserAccess(db: DbOrTx, actor: SessionUser, id: string, 
   return updated;
 }
 
-/** Admins can add people before their first sign-in, so they arrive with the right role. */
+/**
+ * Admins can add people before their first sign-in, so they arrive with the right role. An e-mail already in use
+ * is refused: the person behind it is changed only from the list, where the admin sees who they are changing.
+ */
 export async function inviteUser(db: DbOrTx, input: { email: string; name: string; role: Role }) {
   const email = input.email.trim().toLowerCase();
-  const columns = { ...publicColumns, disabled: users.disabled };
-  const [existing] = await db.select({ id: users.id }).from(users).where(sql`lower(${users.email}) = ${email}`);
+  const [existing] = await db.select({ name: users.name, role: users.role }).from(users).where(sql`lower(${users.email}) = ${email}`);
   if (existing) {
-    const [row] = await db.update(users).set({ role: input.role, name: input.name }).where(eq(users.id, existing.id)).returning(columns);
-    return row;
+    const who = `${existing.name} (${roleLabels[existing.role]})`;
+    throw conflict(`E-mail: ${email} already belongs to ${who}. Change their role in the list of people instead.`,
+      { email: `already belongs to ${who}` });
   }
-  const [row] = await db.insert(users).values({ ...input, email }).returning(columns);
+  const [row] = await db.insert(users).values({ ...input, email }).returning({ ...publicColumns, disabled: users.disabled });
   return row;
 }

@@ -3,7 +3,7 @@ import {
   bigint, bigserial, boolean, customType, date, doublePrecision, index, integer, jsonb, pgEnum, pgTable, text, timestamp,
   uniqueIndex, uuid, varchar,
 } from 'drizzle-orm/pg-core';
-import { requestStatuses, roles } from '../../shared/workflow/statuses';
+import { requestStatuses, roles, terminalStatuses } from '../../shared/workflow/statuses';
 
 const tsvector = customType<{ data: string }>({ dataType: () => 'tsvector' });
 const createdAt = () => timestamp({ withTimezone: true }).notNull().defaultNow();
@@ -90,10 +90,14 @@ export const requests = pgTable('requests', {
   searchVector: tsvector().generatedAlwaysAs(
     sql`to_tsvector('simple', reference || ' ' || applicant_name || ' ' || site_address || ' ' || road_name)`,
   ),
+  /** In one of the statuses nothing follows (finished, declined, withdrawn, refused): waiting on nobody. */
+  ended: boolean().notNull().generatedAlwaysAs(sql.raw(`status in (${terminalStatuses.map((s) => `'${s}'`).join(', ')})`)),
 }, (t) => [
   index('requests_applicant_idx').on(t.applicantId, t.updatedAt),
   index('requests_status_changed_idx').on(t.status, t.statusChangedAt, t.id),
-  index('requests_status_changed_any_idx').on(t.statusChangedAt, t.id),
+  // Oldest wait first keeps ended requests last in both directions: newest first reads the second index backwards.
+  index('requests_waiting_idx').on(t.ended, t.statusChangedAt, t.id),
+  index('requests_waiting_newest_idx').on(sql`(not ${t.ended})`, t.statusChangedAt, t.id),
   index('requests_jurisdiction_idx').on(t.jurisdictionId, t.statusChangedAt),
   index('requests_assignee_idx').on(t.assigneeId, t.statusChangedAt),
   index('requests_crew_idx').on(t.crewId, t.status),
@@ -103,6 +107,8 @@ export const requests = pgTable('requests', {
   index('requests_road_name_idx').on(t.roadName, t.id),
   // A status filter combined with an authority or an assignee is the office's everyday view.
   index('requests_jurisdiction_status_idx').on(t.jurisdictionId, t.status),
+  // One authority's requests in one status, by applicant: read in order straight from the index.
+  index('requests_jurisdiction_status_applicant_idx').on(t.jurisdictionId, t.status, t.applicantName, t.id),
   index('requests_assignee_status_idx').on(t.assigneeId, t.status),
   index('requests_search_idx').using('gin', t.searchVector),
 ]);

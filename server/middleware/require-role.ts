@@ -8,7 +8,7 @@ export function requireSignIn(): RequestHandler {
 }
 
 /** Admins can do everything office staff can; pass the roles the route is for. */
-export function requireRole(...allowed: Role[]): RequestHandler {
+export function requireRole(...allowed: readonly Role[]): RequestHandler {
   return (req, _res, next) => {
     const user = req.user as SessionUser | undefined;
     if (!user) return next(unauthenticated());
@@ -17,4 +17,5 @@ export function requireRole(...allowed: Role[]): RequestHandler {
   };
 }
 
-export const officeRoles: Role[] = ['staff', 'admin'];
+// The office's roles are one fact in shared/, which the client's screens use too.
+export { officeRoles } from '../../shared/workflow/roles';

@@ -1,18 +1,7 @@
 import { z } from 'zod';
 
-export const roles = ['applicant', 'staff', 'crew', 'admin'] as const;
-export const roleSchema = z.enum(roles);
-export type Role = z.infer<typeof roleSchema>;
-
-/** Staff and the admin work as the office: they see every request, internal notes and every check. */
-export const isOfficeRole = (role: Role) => role === 'staff' || role === 'admin';
-
-export const roleLabels: Record<Role, string> = {
-  applicant: 'Property owner',
-  staff: 'Office',
-  crew: 'Crew lead',
-  admin: 'Owner (admin)',
-};
+// Roles live in ./roles; re-exported here for the many files that already import them from this one.
+export { isOfficeRole, roleLabels, roles, roleSchema, type Role } from './roles';
 
 export const requestStatuses = [
   'draft',

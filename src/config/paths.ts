@@ -1,3 +1,6 @@
+import { sharedPaths } from '@shared/paths';
+import type { Role } from '@shared/workflow/statuses';
+
 /** Every client route, paired with the helper that builds a link to it. */
 export const paths = {
   home: { path: '/', getHref: () => '/' },
@@ -6,11 +9,11 @@ export const paths = {
     requests: { path: '/my/requests', getHref: () => '/my/requests' },
     newRequest: { path: '/my/requests/new', getHref: () => '/my/requests/new' },
     editRequest: { path: '/my/requests/:id/edit', getHref: (id: string) => `/my/requests/${id}/edit` },
-    request: { path: '/my/requests/:id', getHref: (id: string) => `/my/requests/${id}` },
+    request: sharedPaths.applicantRequest,
   },
   office: {
     queue: { path: '/office/queue', getHref: (search = '') => `/office/queue${search}` },
-    request: { path: '/office/requests/:id', getHref: (id: string, tab = '') => `/office/requests/${id}${tab ? `?tab=${tab}` : ''}` },
+    request: sharedPaths.officeRequest,
     gradeCheck: { path: '/office/requests/:id/grade-check', getHref: (id: string) => `/office/requests/${id}/grade-check` },
     ruleProfiles: { path: '/office/rule-profiles', getHref: () => '/office/rule-profiles' },
     ruleProfile: { path: '/office/rule-profiles/:id', getHref: (id: string) => `/office/rule-profiles/${id}` },
@@ -18,14 +21,13 @@ export const paths = {
     users: { path: '/office/users', getHref: () => '/office/users' },
   },
   crew: {
-    board: { path: '/crew/board', getHref: () => '/crew/board' },
+    board: sharedPaths.crewBoard,
     myJobs: { path: '/crew/my-jobs', getHref: () => '/crew/my-jobs' },
-    fieldSheet: { path: '/crew/jobs/:id/field-sheet', getHref: (id: string) => `/crew/jobs/${id}/field-sheet` },
+    fieldSheet: sharedPaths.crewFieldSheet,
     asBuilt: { path: '/crew/jobs/:id/as-built', getHref: (id: string) => `/crew/jobs/${id}/as-built` },
   },
 } as const;
 
-import type { Role } from '@shared/workflow/statuses';
 
 export function roleHome(role: Role): string {
   if (role === 'applicant') return paths.applicant.requests.getHref();

@@ -9,6 +9,8 @@ import { signInCookie } from './sign-in-cookie';
 
 const connections = 20;
 const seconds = Number(process.env.BENCH_SECONDS ?? 10);
+const targetP95 = 50;
+const targetRatio = 3;
 
 async function measure(url: string, cookie: string) {
   const times: number[] = [];
@@ -40,7 +42,10 @@ async function main() {
     const [place] = (await pool.query("select id from jurisdictions where name = 'Fenwick County'")).rows as { id: string }[];
     const targets: [string, string][] = [
       ['floor (session + select 1)', '/bench/floor'],
+      ['floor + the API rate-limit count', '/bench/limited/api/floor'],
       ['queue: waiting on us, by time in status', '/api/queue?waiting=true&sort=waiting&limit=50'],
+      // The screen's default view: everything, longest wait first, ended requests after the open ones.
+      ['queue: everything, longest wait first', '/api/queue?sort=waiting&limit=50'],
       ['queue: submitted in one authority, by applicant', `/api/queue?status=submitted&jurisdiction=${place.id}&sort=applicant&limit=50`],
       ['queue: search "quarry ridge", newest first', '/api/queue?q=quarry%20ridge&sort=created&dir=desc&limit=50'],
       ['queue: everything, by road, page 3', ''],
@@ -51,7 +56,7 @@ async function main() {
       const page = await (await fetch(`${origin}/api/queue?sort=road&limit=50${cursor ? `&cursor=${cursor}` : ''}`, { headers: { cookie } })).json() as { nextCursor: string };
       cursor = page.nextCursor;
     }
-    targets[4][1] = `/api/queue?sort=road&limit=50&cursor=${cursor}`;
+    targets[targets.length - 1][1] = `/api/queue?sort=road&limit=50&cursor=${cursor}`;
     for (const [, target] of targets) await measureWarm(origin + target, cookie);
     const results = [];
     const cpu = async () => new Promise<number>((resolve) => {
@@ -71,9 +76,18 @@ async function main() {
       console.log(r.label.padEnd(52), r.p50.toFixed(1).padStart(8), r.p95.toFixed(1).padStart(8), r.rps.toFixed(0).padStart(8),
         (r.p95 / floor.p95).toFixed(2).padStart(10), r.cpuMs.toFixed(2).padStart(15), String(r.errors).padStart(8));
     }
-    const main = results[1];
     console.log(`load average while measuring (other work on this machine shows here): ${os.loadavg().map((l) => l.toFixed(2)).join(' ')}`);
-    console.log(`\ntarget: p95 < 50 ms and within 3x of the floor -> queue p95 ${main.p95.toFixed(1)} ms, ${(main.p95 / floor.p95).toFixed(2)}x the floor`);
+    // Each queue view against the target, compared at the precision printed (0.1 ms, 0.01x): not one headline view.
+    console.log(`\ntarget for every queue view: p95 <= ${targetP95} ms and p95 <= ${targetRatio}x the floor's`);
+    let failing = 0;
+    for (const r of results.filter((x) => x.label.startsWith('queue'))) {
+      const p95 = Number(r.p95.toFixed(1));
+      const ratio = Number((r.p95 / floor.p95).toFixed(2));
+      const pass = p95 <= targetP95 && ratio <= targetRatio;
+      if (!pass) failing++;
+      console.log(`${pass ? 'PASS' : 'FAIL'}  ${r.label.padEnd(52)} p95 ${p95.toFixed(1)} ms, ${ratio.toFixed(2)}x the floor`);
+    }
+    console.log(failing ? `${failing} queue view(s) miss the target` : 'every queue view meets the target');
   } finally {
     await pool.end();
     await stack.stop();

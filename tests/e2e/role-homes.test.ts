@@ -36,3 +36,23 @@ describe('each role signs in through the picker and lands on its own home', () =
     });
   }
 });
+
+describe('the admin adds a person', () => {
+  it('is told at the E-mail field when that e-mail already belongs to someone', async () => {
+    const admin = demoPeople.find((p) => p.role === 'admin')!;
+    const owner = demoPeople.find((p) => p.role === 'applicant')!;
+    const context = await session.browser.newContext();
+    const page = await context.newPage();
+    await signInAs(page, admin.email);
+    await page.waitForURL((url) => url.pathname === '/office/queue');
+    await page.getByRole('link', { name: 'Users and roles' }).click();
+    const email = page.getByRole('textbox', { name: 'E-mail', exact: true });
+    await page.getByRole('textbox', { name: 'Name', exact: true }).fill('Someone Else');
+    await email.fill(owner.email);
+    await page.getByRole('button', { name: 'Add person' }).click();
+    await expect.poll(() => page.getByRole('alert').first().textContent()).toContain(`E-mail: ${owner.email} already belongs to ${owner.name}`);
+    expect(await email.getAttribute('aria-invalid')).toBe('true');
+    await saveScreenshot(page, 'users-duplicate-email');
+    await context.close();
+  });
+});

@@ -79,6 +79,17 @@ describe('role guards', () => {
     expect(after.body.user.role).toBe('staff');
   });
 
+  it('refuses to add a person whose e-mail is already in use, naming the E-mail field, and leaves them as they were', async () => {
+    const admin = await signIn(t.app, person('admin').email);
+    const owner = person('applicant');
+    const res = await admin.post('/api/users').send({ email: owner.email.toUpperCase(), name: 'Someone Else', role: 'staff' }).expect(409);
+    expect(res.body.error.message).toMatch(/^E-mail: /);
+    expect(res.body.error.fields).toHaveProperty('email');
+    const listed = (await admin.get('/api/users').query({ search: owner.email }).expect(200)).body.users;
+    expect(listed).toHaveLength(1);
+    expect(listed[0]).toMatchObject({ name: owner.name, role: 'applicant' });
+  });
+
   it('refuses bad input with 400 naming the field', async () => {
     const admin = await signIn(t.app, person('admin').email);
     const res = await admin.patch('/api/users/not-a-uuid').send({ role: 'boss' }).expect(400);

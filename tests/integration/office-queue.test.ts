@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { requestEvents } from '../../server/db/schema';
-import type { RequestStatus } from '../../shared/workflow/statuses';
+import { terminalStatuses, type RequestStatus } from '../../shared/workflow/statuses';
 import { createJurisdiction } from '../factories/grade-checks';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
@@ -40,11 +40,26 @@ describe('the office queue', () => {
     const res = await queue('limit=100').expect(200);
     const open = made.filter((m) => m.status !== 'draft');
     expect(res.body.requests).toHaveLength(open.length);
-    const times = res.body.requests.map((r: { statusChangedAt: string }) => r.statusChangedAt);
-    expect([...times].sort()).toEqual(times);
+    // Oldest wait first means the open requests, longest in their status first; finished ones come after them.
+    const rows = res.body.requests as { status: RequestStatus; statusChangedAt: string }[];
+    const ended = rows.map((r) => terminalStatuses.includes(r.status));
+    expect(ended).toEqual([...ended].sort((a, b) => Number(a) - Number(b)));
+    expect(ended).toContain(true);
+    for (const part of [rows.filter((_, i) => !ended[i]), rows.filter((_, i) => ended[i])]) {
+      const times = part.map((r) => r.statusChangedAt);
+      expect([...times].sort()).toEqual(times);
+    }
     const first = res.body.requests.find((r: { status: string }) => r.status === 'submitted');
     expect(first.nextAction).toBe('Ask for details or Book the site visit');
     expect(first.statusLabel).toBe('Sent to the office');
+  });
+
+  it('keeps finished requests after the open ones when the newest in status come first', async () => {
+    const rows = (await queue('sort=waiting&dir=desc&limit=100').expect(200)).body.requests as { status: RequestStatus; statusChangedAt: string }[];
+    const ended = rows.map((r) => terminalStatuses.includes(r.status));
+    expect(ended).toEqual([...ended].sort((a, b) => Number(a) - Number(b)));
+    const open = rows.filter((_, i) => !ended[i]).map((r) => r.statusChangedAt);
+    expect([...open].sort().reverse()).toEqual(open);
   });
 
   it('filters by status, jurisdiction, assignee and "waiting on us"', async () => {

@@ -1,4 +1,5 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
+import { officeRoles } from '../../../shared/workflow/roles';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { jurisdictions, requestEvents, requests, users } from '../../db/schema';
@@ -8,7 +9,7 @@ import { loadVisibleRequest } from '../../services/requests/request-access';
 /** People a request can be given to: the office and the owner, while their accounts are on. */
 export async function officePeople(db: DbOrTx) {
   return db.select({ id: users.id, name: users.name, role: users.role }).from(users)
-    .where(and(inArray(users.role, ['staff', 'admin']), eq(users.disabled, false))).orderBy(asc(users.name));
+    .where(and(inArray(users.role, [...officeRoles]), eq(users.disabled, false))).orderBy(asc(users.name));
 }
 
 export async function queueOptions(db: DbOrTx) {
@@ -26,7 +27,7 @@ export async function assignRequest(db: Db, actor: SessionUser, requestId: strin
     let name = '';
     if (assigneeId) {
       const [person] = await tx.select({ name: users.name }).from(users)
-        .where(and(eq(users.id, assigneeId), inArray(users.role, ['staff', 'admin']), eq(users.disabled, false)));
+        .where(and(eq(users.id, assigneeId), inArray(users.role, [...officeRoles]), eq(users.disabled, false)));
       if (!person) throw badRequest('That person is not in the office.', { assigneeId: 'choose someone from the office' });
       name = person.name;
     }

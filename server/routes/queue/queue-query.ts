@@ -40,24 +40,25 @@ export function searchQuery(text: string): string | null {
   return words.map((w) => (/^\d+$/.test(w) ? `('${w}':* | '-${w}':*)` : `'${w}':*`)).join(' & ');
 }
 
-/** The position after the last row of a page: the sort value and the id that breaks ties. */
-export function encodeQueueCursor(value: string, id: string) {
-  return Buffer.from(JSON.stringify([value, id])).toString('base64url');
+/** The position after the last row of a page: the sort value, the id that breaks ties, and for the wait sort whether it had ended. */
+export function encodeQueueCursor(value: string, id: string, ended?: boolean) {
+  return Buffer.from(JSON.stringify(ended === undefined ? [value, id] : [value, id, ended])).toString('base64url');
 }
 
 // A time as PostgreSQL writes timestamptz as text, which is what a time-sorted page's cursor carries.
 const pgTimestamp = /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?[+-]\d{2}(:\d{2})?$/;
 
 /** A cursor this list gave out for the sort in use, or null: the value must read back in the sort column's type. */
-export function decodeQueueCursor(cursor: string, sortsBy: 'time' | 'text'): { value: string; id: string } | null {
+export function decodeQueueCursor(cursor: string, sortsBy: 'time' | 'text', withEnded = false): { value: string; id: string; ended?: boolean } | null {
   try {
     const parsed: unknown = JSON.parse(Buffer.from(cursor, 'base64url').toString());
-    if (!Array.isArray(parsed) || parsed.length !== 2) return null;
-    const [value, id] = parsed as unknown[];
+    if (!Array.isArray(parsed) || parsed.length !== (withEnded ? 3 : 2)) return null;
+    const [value, id, ended] = parsed as unknown[];
     if (typeof value !== 'string' || typeof id !== 'string' || !z.uuid().safeParse(id).success) return null;
+    if (withEnded && typeof ended !== 'boolean') return null;
     if (value.includes('\u0000')) return null;
     if (sortsBy === 'time' && !(pgTimestamp.test(value) && Number.isFinite(Date.parse(value.replace(' ', 'T').replace(/([+-]\d{2})$/, '$1:00'))))) return null;
-    return { value, id };
+    return { value, id, ...(withEnded ? { ended: ended as boolean } : {}) };
   } catch {
     return null;
   }

@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, fillPlaceholders, inArray, isNull, ne, sql, type AnyColumn, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, isNull, ne, not, sql, type AnyColumn, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
 import { waitingOnOffice } from '../../../shared/workflow/statuses';
 import type { DbOrTx } from '../../db/client';
@@ -19,9 +19,16 @@ const sortColumns: Record<QueueSort, { column: AnyColumn; cast: string }> = {
   created: { column: requests.createdAt, cast: 'timestamptz' },
 };
 
+/**
+ * Time in status says how long a request has waited only while it is open: a finished request is not waiting on
+ * anyone, so the wait sort puts every open request before every ended one, in either direction.
+ */
+export const sortsEndedLast = (sort: QueueSort) => sort === 'waiting';
+
 /** Which filters a page uses and how it is ordered: everything that changes the SQL text, and nothing else. */
 export interface QueueShape {
-  statuses: boolean;
+  /** One status is an equality, so an index on (authority, status, sort column) can hand rows over in order. */
+  statuses: 'one' | 'many' | null;
   waiting: boolean;
   jurisdiction: 'none' | 'one' | null;
   assignee: 'none' | 'one' | null;
@@ -33,12 +40,14 @@ export interface QueueShape {
 
 /** The values a page fills into its shape's statement. */
 export interface QueueValues {
+  status?: string;
   statuses?: string[];
   jurisdiction?: string;
   assignee?: string;
   search?: string;
   cursorValue?: string;
   cursorId?: string;
+  cursorEnded?: boolean;
   limit: number;
 }
 
@@ -46,7 +55,8 @@ const p = (name: keyof QueueValues) => sql.placeholder(name);
 
 function filters(shape: QueueShape): SQL[] {
   const where: SQL[] = [ne(requests.status, 'draft')];
-  if (shape.statuses) where.push(sql`${requests.status} = any(${p('statuses')})`);
+  if (shape.statuses === 'one') where.push(sql`${requests.status} = ${p('status')}`);
+  else if (shape.statuses) where.push(sql`${requests.status} = any(${p('statuses')})`);
   if (shape.waiting) where.push(inArray(requests.status, [...waitingOnOffice]));
   if (shape.jurisdiction === 'none') where.push(isNull(requests.jurisdictionId));
   else if (shape.jurisdiction) where.push(eq(requests.jurisdictionId, p('jurisdiction')));
@@ -56,61 +66,66 @@ function filters(shape: QueueShape): SQL[] {
   return where;
 }
 
+/**
+ * The order and the keyset condition after a cursor. Ended-last in both directions is a mixed order, which one
+ * index cannot serve; so newest-first runs on "not ended", whose own index read backwards gives that order.
+ */
+function ordering(shape: QueueShape) {
+  const { column, cast } = sortColumns[shape.sort];
+  const order = shape.dir === 'asc' ? asc : desc;
+  const cmp = sql.raw(shape.dir === 'asc' ? '>' : '<');
+  const after = sql`${p('cursorValue')}::${sql.raw(cast)}, ${p('cursorId')}::uuid`;
+  if (!sortsEndedLast(shape.sort)) {
+    return { orderBy: [order(column), order(requests.id)], after: sql`(${column}, ${requests.id}) ${cmp} (${after})` };
+  }
+  const ended = shape.dir === 'asc' ? sql`${requests.ended}` : sql`(${not(requests.ended)})`;
+  const endedAt = shape.dir === 'asc' ? sql`${p('cursorEnded')}::boolean` : sql`not ${p('cursorEnded')}::boolean`;
+  return {
+    orderBy: [order(ended), order(column), order(requests.id)],
+    after: sql`(${ended}, ${column}, ${requests.id}) ${cmp} (${endedAt}, ${after})`,
+  };
+}
+
 // Times come back as ISO text straight from PostgreSQL: no Date objects to build and serialise again per row.
 const iso = (column: AnyColumn) => sql<string>`to_char(${column} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.MS"Z"')`;
 
-/** The columns of a page row, in the order the statement returns them. */
-export const queueColumns = [
-  'id', 'reference', 'status', 'applicantName', 'roadName', 'statusChangedAt', 'jurisdictionId', 'jurisdictionName',
-  'assigneeId', 'assigneeName', 'sortKey', 'total',
-] as const;
-
-function build(db: DbOrTx, shape: QueueShape) {
+function build(db: DbOrTx, shape: QueueShape, name: string) {
   const where = filters(shape);
-  const { column, cast } = sortColumns[shape.sort];
-  const order = shape.dir === 'asc' ? asc : desc;
-  const page = [...where];
-  if (shape.cursor) {
-    const cmp = sql.raw(shape.dir === 'asc' ? '>' : '<');
-    page.push(sql`(${column}, ${requests.id}) ${cmp} (${p('cursorValue')}::${sql.raw(cast)}, ${p('cursorId')}::uuid)`);
-  }
+  const { orderBy, after } = ordering(shape);
   // The total belongs to the view, not the page: counted up to a cap on the first page only, inside the same
   // statement (an uncorrelated subquery runs once), so a page costs one round trip. Past a few hundred the exact
   // number changes nothing for the office, and counting further is the costly part.
   const capped = db.select({ one: sql`1` }).from(requests).where(and(...where)).limit(queueCountCap + 1);
   const total = shape.cursor ? sql<null>`null::int` : sql<number>`(select count(*)::int from (${capped}) as capped)`;
-  const fields = {
+  return db.select({
     id: requests.id, reference: requests.reference, status: requests.status,
     applicantName: requests.applicantName, roadName: requests.roadName, statusChangedAt: iso(requests.statusChangedAt),
     jurisdictionId: jurisdictions.id, jurisdictionName: jurisdictions.name,
     assigneeId: assignee.id, assigneeName: assignee.name,
-    sortKey: sql<string>`${column}::text`,
+    sortKey: sql<string>`${sortColumns[shape.sort].column}::text`, ended: requests.ended,
     total,
-  } satisfies Record<(typeof queueColumns)[number], unknown>;
-  // The rows are read by position, so the field order must be the column order above.
-  if (Object.keys(fields).join() !== queueColumns.join()) throw new Error('queue columns out of order');
-  return db.select(fields).from(requests)
+  }).from(requests)
     .leftJoin(jurisdictions, eq(jurisdictions.id, requests.jurisdictionId))
     .leftJoin(assignee, eq(assignee.id, requests.assigneeId))
-    .where(and(...page))
-    .orderBy(order(column), order(requests.id))
+    .where(and(...where, ...(shape.cursor ? [after] : [])))
+    .orderBy(...orderBy)
     .limit(p('limit'))
-    .toSQL();
+    .prepare(name);
 }
 
-const statements = new Map<string, { name: string; text: string; params: unknown[] }>();
+type QueueStatement = ReturnType<typeof build>;
+const prepared = new WeakMap<DbOrTx, Map<string, QueueStatement>>();
 
 /**
- * The hottest office query, written by Drizzle once per shape and kept: later pages of the same shape only fill
- * in their values, and the statement's name lets PostgreSQL parse and plan it once per connection.
+ * The hottest office query, one Drizzle prepared statement per shape: later pages of a shape only fill in their
+ * values, and the statement's name (made from the shape, so the same on every connection) lets PostgreSQL parse
+ * and plan it once per connection.
  */
-export function queueStatement(db: DbOrTx, shape: QueueShape, values: QueueValues) {
-  const key = JSON.stringify(shape);
-  let statement = statements.get(key);
-  if (!statement) {
-    const built = build(db, shape);
-    statement = { name: `queue_${statements.size + 1}`, text: built.sql, params: built.params };
-    statements.set(key, statement);
-  }
-  return { name: statement.name, text: statement.text, values: fillPlaceholders(statement.params, { ...values }) };
+export function queueStatement(db: DbOrTx, shape: QueueShape): QueueStatement {
+  let byShape = prepared.get(db);
+  if (!byShape) prepared.set(db, (byShape = new Map()));
+  const name = `queue_${Object.values(shape).map((v) => (v === true ? 1 : v === false || v === null ? 0 : v)).join('_')}`;
+  let statement = byShape.get(name);
+  if (!statement) byShape.set(name, (statement = build(db, shape, name)));
+  return statement;
 }

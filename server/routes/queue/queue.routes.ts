@@ -11,10 +11,10 @@ export const assignInputSchema = z.strictObject({
   assigneeId: z.uuid('must be a person’s id, or null to unassign').nullable(),
 });
 
-export function queueRouter({ db, pool }: AppContext) {
+export function queueRouter({ db }: AppContext) {
   const router = Router();
   const office = requireRole(...officeRoles);
-  router.get('/api/queue', office, handle({ query: queueQuerySchema }, async ({ query, user }) => listQueue(db, pool, user, query)));
+  router.get('/api/queue', office, handle({ query: queueQuerySchema }, async ({ query, user }) => listQueue(db, user, query)));
   router.get('/api/queue/options', office, handle({}, async () => queueOptions(db)));
   router.put('/api/requests/:id/assignee', office, handle({ params: uuidParam, body: assignInputSchema }, async ({ params, body, user }) => {
     const row = await assignRequest(db, user, params.id, body.assigneeId);

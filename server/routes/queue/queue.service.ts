@@ -4,14 +4,7 @@ import type { SessionUser } from '../../auth/session-user';
 import type { DbOrTx } from '../../db/client';
 import { badRequest } from '../../lib/errors';
 import { decodeQueueCursor, encodeQueueCursor, searchQuery, type QueueQuery } from './queue-query';
-import { queueColumns, queueCountCap, queueStatement, sortsByTime, type QueueShape, type QueueValues } from './queue-statement';
-
-interface Queryable { query<R extends unknown[]>(config: { name: string; text: string; values: unknown[]; rowMode: 'array' }): Promise<{ rows: R[] }> }
-interface QueueRow {
-  id: string; reference: string; status: RequestStatus; applicantName: string; roadName: string; statusChangedAt: string;
-  jurisdictionId: string | null; jurisdictionName: string | null; assigneeId: string | null; assigneeName: string | null;
-  sortKey: string; total: number | null;
-}
+import { queueCountCap, queueStatement, sortsByTime, sortsEndedLast, type QueueShape, type QueueValues } from './queue-statement';
 
 const waitingElsewhere: Partial<Record<RequestStatus, string>> = {
   draft: 'The property owner is still filling it in',
@@ -37,35 +30,33 @@ const rowWords = Object.fromEntries(requestStatuses.map((status) => [status, {
  * One page of the office queue in a single query (assignee and jurisdiction joined, not fetched per row), with
  * keyset paging so page 200 costs what page 1 does. The total is counted only up to a cap, for the same reason.
  */
-export async function listQueue(db: DbOrTx, pool: Queryable, user: SessionUser, query: QueueQuery) {
+export async function listQueue(db: DbOrTx, user: SessionUser, query: QueueQuery) {
   const search = query.q ? searchQuery(query.q) : null;
-  const cursor = query.cursor ? decodeQueueCursor(query.cursor, sortsByTime(query.sort) ? 'time' : 'text') : null;
+  const cursor = query.cursor ? decodeQueueCursor(query.cursor, sortsByTime(query.sort) ? 'time' : 'text', sortsEndedLast(query.sort)) : null;
   if (query.cursor && !cursor) throw badRequest('The page position is not one this list gave out.', { cursor: 'start again from the first page' });
   const one = (value: string | undefined) => (value === 'none' ? 'none' : value ? 'one' : null);
   const shape: QueueShape = {
-    statuses: Boolean(query.status), waiting: query.waiting, jurisdiction: one(query.jurisdiction), assignee: one(query.assignee),
+    statuses: !query.status ? null : query.status.length === 1 ? 'one' : 'many', waiting: query.waiting, jurisdiction: one(query.jurisdiction), assignee: one(query.assignee),
     search: Boolean(search), cursor: Boolean(cursor), sort: query.sort, dir: query.dir,
   };
   const values: QueueValues = {
-    statuses: query.status, jurisdiction: query.jurisdiction, search: search ?? undefined, limit: query.limit + 1,
-    assignee: query.assignee === 'me' ? user.id : query.assignee, cursorValue: cursor?.value, cursorId: cursor?.id,
+    status: query.status?.[0], statuses: query.status, jurisdiction: query.jurisdiction, search: search ?? undefined, limit: query.limit + 1,
+    assignee: query.assignee === 'me' ? user.id : query.assignee, cursorValue: cursor?.value, cursorId: cursor?.id, cursorEnded: cursor?.ended,
   };
-  // Rows come back as arrays in column order (every column is already text, uuid or int: nothing to decode).
-  const result = await pool.query<unknown[]>({ ...queueStatement(db, shape, values), rowMode: 'array' });
-  const rows = result.rows.map((cells) => Object.fromEntries(queueColumns.map((key, i) => [key, cells[i]])) as unknown as QueueRow);
+  const rows = await queueStatement(db, shape).execute({ ...values });
   // No row on a first page means nothing matched at all.
   const n = cursor ? null : (rows[0]?.total ?? 0);
   const more = rows.length > query.limit;
   const items = more ? rows.slice(0, query.limit) : rows;
   const last = items.at(-1);
   return {
-    requests: items.map(({ sortKey: _key, total: _total, jurisdictionId, jurisdictionName, assigneeId, assigneeName, ...row }) => ({
+    requests: items.map(({ sortKey: _key, ended: _ended, total: _total, jurisdictionId, jurisdictionName, assigneeId, assigneeName, ...row }) => ({
       ...row,
       ...rowWords[row.status],
       jurisdiction: jurisdictionId ? { id: jurisdictionId, name: jurisdictionName ?? '' } : null,
       assignee: assigneeId ? { id: assigneeId, name: assigneeName ?? '' } : null,
     })),
-    nextCursor: more && last ? encodeQueueCursor(last.sortKey, last.id) : null,
+    nextCursor: more && last ? encodeQueueCursor(last.sortKey, last.id, sortsEndedLast(query.sort) ? last.ended : undefined) : null,
     total: n === null ? null : Math.min(n, queueCountCap),
     totalIsCapped: n !== null && n > queueCountCap,
   };

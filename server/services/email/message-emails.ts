@@ -1,3 +1,4 @@
+import { sharedPaths } from '../../../shared/paths';
 import { isOfficeRole, type Role } from '../../../shared/workflow/statuses';
 import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
@@ -32,15 +33,15 @@ export function messageEmails(input: MessageEmailInput): OutgoingEmail[] {
   };
   const out: OutgoingEmail[] = [];
   if (author.id !== input.applicant.id) {
-    out.push(build(input.applicant.email, `Hello ${input.applicant.name},`, `${input.appOrigin}/my/requests/${request.id}`,
+    out.push(build(input.applicant.email, `Hello ${input.applicant.name},`, input.appOrigin + sharedPaths.applicantRequest.getHref(request.id),
       `${request.reference}: a message from ${roleWords[author.role]}`));
   }
   if (!isOfficeRole(author.role)) {
-    out.push(build(input.officeEmail, 'Hello office,', `${input.appOrigin}/office/requests/${request.id}`,
+    out.push(build(input.officeEmail, 'Hello office,', input.appOrigin + sharedPaths.officeRequest.getHref(request.id),
       `[${request.reference}] Message from ${author.name}`));
   }
   if (input.crew && author.id !== input.crew.id) {
-    out.push(build(input.crew.email, `Hello ${input.crew.name},`, `${input.appOrigin}/crew/jobs/${request.id}/field-sheet`,
+    out.push(build(input.crew.email, `Hello ${input.crew.name},`, input.appOrigin + sharedPaths.crewFieldSheet.getHref(request.id),
       `[${request.reference}] Message from ${author.name}`));
   }
   return out;

@@ -1,3 +1,4 @@
+import { sharedPaths } from '../../../shared/paths';
 import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
 import type { Person } from './transition-emails';
@@ -37,13 +38,13 @@ export function scheduleEmails(input: ScheduleEmailInput): OutgoingEmail[] {
   const content: EmailContent = {
     greeting: `Hello ${input.applicant.name},`,
     paragraphs,
-    link: { href: `${input.appOrigin}/my/requests/${input.request.id}`, label: 'See your request' },
+    link: { href: input.appOrigin + sharedPaths.applicantRequest.getHref(input.request.id), label: 'See your request' },
   };
   const subject = `${input.request.reference}: work planned for ${day}`;
   const officeContent: EmailContent = {
     greeting: 'Hello office,',
     paragraphs: [`${input.crew.name} planned ${input.request.reference} (${input.request.siteAddress}) for ${day}.`, ...(input.note ? [`Note: ${input.note}`] : [])],
-    link: { href: `${input.appOrigin}/office/requests/${input.request.id}`, label: 'Open it in Gradepass' },
+    link: { href: input.appOrigin + sharedPaths.officeRequest.getHref(input.request.id), label: 'Open it in Gradepass' },
   };
   const build = (to: string, c: EmailContent, s: string): OutgoingEmail => ({
     to, template: 'crew.schedule', subject: s, requestId: input.request.id, text: renderText(c, requestFooter), html: renderHtml(c, requestFooter),

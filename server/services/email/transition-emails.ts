@@ -1,3 +1,4 @@
+import { sharedPaths } from '../../../shared/paths';
 import { statusText } from '../../../shared/workflow/statuses';
 import type { Transition } from '../../../shared/workflow/transitions';
 import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
@@ -56,7 +57,7 @@ function applicantContent(input: TransitionEmailInput): EmailContent {
   return {
     greeting: `Hello ${input.applicant.name},`,
     paragraphs,
-    link: { href: `${input.appOrigin}/my/requests/${request.id}`, label: 'See your request' },
+    link: { href: input.appOrigin + sharedPaths.applicantRequest.getHref(request.id), label: 'See your request' },
   };
 }
 
@@ -77,8 +78,8 @@ export function emailsForTransition(input: TransitionEmailInput): OutgoingEmail[
     to, template: `transition.${transition.action}`, subject, requestId: request.id,
     text: renderText(content, requestFooter), html: renderHtml(content, requestFooter),
   });
-  const officeHref = `${input.appOrigin}/office/requests/${request.id}`;
-  const crewHref = `${input.appOrigin}/crew/board`;
+  const officeHref = input.appOrigin + sharedPaths.officeRequest.getHref(request.id);
+  const crewHref = input.appOrigin + sharedPaths.crewBoard.getHref();
   const out: OutgoingEmail[] = [];
   for (const audience of audiences[transition.action] ?? []) {
     if (audience === 'applicant') {

@@ -6,7 +6,7 @@ import { useMe } from '@/features/auth/api/get-me';
 import { Loading, Notice } from '@/components/ui/notice';
 
 /** The client only hides what the server refuses anyway; this keeps people out of screens that would fail. */
-export function RequireRole({ roles, children }: { roles: Role[]; children: ReactNode }) {
+export function RequireRole({ roles, children }: { roles: readonly Role[]; children: ReactNode }) {
   const { data: me, isPending } = useMe();
   const location = useLocation();
   if (isPending) return <Loading />;

@@ -1,3 +1,4 @@
+import { crewScreenRoles } from '@shared/workflow/roles';
 import { Link, useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { paths } from '@/config/paths';
@@ -8,7 +9,7 @@ export function Component() {
   const { id = '' } = useParams();
   const crew = useMe().data?.role === 'crew';
   return (
-    <RequireRole roles={['crew', 'staff', 'admin']}>
+    <RequireRole roles={crewScreenRoles}>
       <p className="mb-3 flex flex-wrap gap-4">
         <Link to={crew ? paths.crew.myJobs.getHref() : paths.office.request.getHref(id)} className="font-semibold text-pine-800 underline">{crew ? '← My jobs' : '← The request'}</Link>
         <Link to={paths.crew.fieldSheet.getHref(id)} className="font-semibold text-pine-800 underline">Field sheet</Link>

@@ -1,3 +1,4 @@
+import { crewScreenRoles } from '@shared/workflow/roles';
 import { RequireRole } from '@/app/layout/require-role';
 import { PageHeader, Panel } from '@/components/ui/panel';
 import { useMe } from '@/features/auth/api/get-me';
@@ -7,7 +8,7 @@ import { YardForm } from '@/features/crew/components/yard-form';
 export function Component() {
   const me = useMe().data;
   return (
-    <RequireRole roles={['crew', 'staff', 'admin']}>
+    <RequireRole roles={crewScreenRoles}>
       <PageHeader title="Released jobs" lead="Permit granted, grade check attached, waiting for a crew. The first crew lead to take a job gets it." />
       <div className="space-y-6">
         {me?.role === 'admin' && <Panel title="Where the crews start from"><YardForm /></Panel>}

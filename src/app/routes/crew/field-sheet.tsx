@@ -1,3 +1,4 @@
+import { crewScreenRoles } from '@shared/workflow/roles';
 import { Link, useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { Panel } from '@/components/ui/panel';
@@ -15,7 +16,7 @@ export function Component() {
   const sheet = useFieldSheet(id);
   const holdsJob = crew && sheet.data?.job.crewId === me?.id;
   return (
-    <RequireRole roles={['crew', 'staff', 'admin']}>
+    <RequireRole roles={crewScreenRoles}>
       <p className="no-print mb-3"><Link to={crew ? paths.crew.myJobs.getHref() : paths.crew.board.getHref()} className="font-semibold text-pine-800 underline">{crew ? '← My jobs' : '← Released jobs'}</Link></p>
       <FieldSheet id={id} />
       {holdsJob && (

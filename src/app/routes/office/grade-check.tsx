@@ -1,3 +1,4 @@
+import { officeRoles } from '@shared/workflow/roles';
 import { Link, useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
@@ -34,5 +35,5 @@ function GradeCheckPage({ id }: { id: string }) {
 
 export function Component() {
   const { id = '' } = useParams();
-  return <RequireRole roles={['staff', 'admin']}><GradeCheckPage key={id} id={id} /></RequireRole>;
+  return <RequireRole roles={officeRoles}><GradeCheckPage key={id} id={id} /></RequireRole>;
 }

@@ -1,3 +1,4 @@
+import { officeRoles } from '@shared/workflow/roles';
 import { useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
@@ -35,5 +36,5 @@ function OfficeRequestPage({ id }: { id: string }) {
 
 export function Component() {
   const { id = '' } = useParams();
-  return <RequireRole roles={['staff', 'admin']}><OfficeRequestPage id={id} /></RequireRole>;
+  return <RequireRole roles={officeRoles}><OfficeRequestPage id={id} /></RequireRole>;
 }

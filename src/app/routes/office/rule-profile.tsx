@@ -1,3 +1,4 @@
+import { officeRoles } from '@shared/workflow/roles';
 import { Link, useParams, useSearchParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
@@ -42,5 +43,5 @@ function RuleProfilePage({ id }: { id: string }) {
 
 export function Component() {
   const { id = '' } = useParams();
-  return <RequireRole roles={['staff', 'admin']}><RuleProfilePage key={id} id={id} /></RequireRole>;
+  return <RequireRole roles={officeRoles}><RuleProfilePage key={id} id={id} /></RequireRole>;
 }

@@ -24,6 +24,7 @@ export function InviteUserForm() {
         </SelectInput>
       )}</Field>
       <Button type="submit" disabled={invite.isPending}>Add person</Button>
+      {invite.error && <p role="alert" className="text-sm font-medium text-clay sm:col-span-4">{invite.error.message}</p>}
     </form>
   );
 }
