@@ -3,7 +3,7 @@ import type { ProfileChartInput } from './profile-chart';
 
 export interface ChartSource {
   roadEdgeStationFt?: number;
-  design?: { applied: boolean };
+  design?: { applied?: boolean };
 }
 
 export interface ChartResults {
