@@ -87,7 +87,7 @@ export interface FieldSheetView {
   culvert: CulvertSheet | null;
   /** The warped apron's edges and the warp stakes; null when the check did not take the apron. */
   apron: ApronSummary | null;
-  /** `chart` is the saved check's profile chart input, drawn by shared/charts as on the check screen and in the report. */
+  /** `chart`: what is built over the ground as surveyed, drawn by shared/charts as on the check screen and in the report. */
   design: { points: ProfilePoint[]; existing: ProfilePoint[] | null; cutFill: CutFillAtStation[]; chart: ProfileChartInput } | null;
   earthwork: EarthworkEstimate | null;
   cautions: string[];

@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import { gradeChecks } from '../../server/db/schema';
-import { chartInputFor } from '../../shared/charts/chart-input';
+import { buildChartInputFor } from '../../shared/charts/chart-input';
 import { defaultHaul } from '../../shared/charts/cut-fill-table';
 import { profileChartSvg } from '../../shared/charts/profile-chart';
 import { GRADE_CHECK_FORMAT_VERSION } from '../../shared/contracts/grade-checks';
@@ -39,12 +39,15 @@ describe('a check saved before the format version', () => {
 });
 
 describe('the field sheet', () => {
-  it('carries the chart input shared/charts draws on the check screen and in the report, from the same record', async () => {
+  it('carries a chart input for shared/charts, which draws the check screen and the report, from the same record', async () => {
     const job = await createReleasedJob(t.ctx.db, { applicantId: cast.applicant.id, staffId: cast.staff.id });
     const [row] = await t.ctx.db.select().from(gradeChecks).where(eq(gradeChecks.id, job.gradeCheckId));
     const record = readGradeCheckRecord(row);
     const sheet = (await cast.crew.agent.get(`/api/crew/jobs/${job.id}/field-sheet`).expect(200)).body as FieldSheetView;
-    expect(sheet.design?.chart).toEqual(JSON.parse(JSON.stringify(chartInputFor(record.inputs, record.results, harlowRules))));
+    const ground = sheet.design!.existing!;
+    expect(sheet.design?.chart).toEqual(JSON.parse(JSON.stringify(buildChartInputFor(record.inputs, record.results, harlowRules, ground))));
+    // What the crew builds is the design line, over the ground as surveyed; the proposal nobody applied is not drawn.
+    expect(sheet.design?.chart).toMatchObject({ ground, design: record.results.report.profile.points, checked: 'design' });
     const svg = profileChartSvg(sheet.design!.chart);
     expect(svg).toMatch(/^<svg [^>]*role="img"/);
     expect(svg).toContain(`Landing ${harlowRules.landing.lengthFt} ft`);

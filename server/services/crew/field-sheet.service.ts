@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import { elevationAt, type CutFillAtStation } from '../../../shared/engine';
-import { chartInputFor } from '../../../shared/charts/chart-input';
+import { buildChartInputFor } from '../../../shared/charts/chart-input';
 import { headwaterWords } from '../../../shared/charts/check-words';
 import { roadOwnerText } from '../../../shared/requests/choices';
 import type { CulvertSheet, FieldSheetView, LaserSheet } from '../../../shared/crew/crew-views';
@@ -94,7 +94,7 @@ async function sheetFor(db: Db, row: RequestRow) {
     apron: check?.apron ?? null,
     design: check ? {
       points: check.designPoints, existing: check.existingPoints, cutFill: cutFill(check),
-      chart: chartInputFor(check.record.inputs, check.record.results, check.ruleProfile),
+      chart: buildChartInputFor(check.record.inputs, check.record.results, check.ruleProfile, check.existingPoints),
     } : null,
     earthwork: earthworkEstimate(check),
     cautions: fieldCautions,
