@@ -31,15 +31,37 @@ function refusedFields(error: unknown): FieldErrors {
  * design proposal comes back as `proposalWanted` (the parsed inputs) for runGradeCheck to finish on a worker.
  */
 export function runLiveCheck(state: SurveyState, rules: RuleProfile | undefined): LiveCheck & { proposalWanted?: GradeCheckInputs } {
-  const { inputs, errors } = buildInputs(state, rules);
-  if (!inputs || !rules) return { inputs, errors, ready: false };
+  const { inputs, errors: typed } = buildInputs(state, rules);
+  if (!inputs || !rules) return { inputs, errors: typed, ready: false };
+  const { parsed, errors: refused } = parseForLive(inputs);
+  const errors = { ...typed, ...refused };
+  if (!parsed) return { inputs, errors, ready: false };
   try {
-    const parsed = parseInput(gradeCheckInputsSchema, inputs);
     const { results, designRequest } = checkWithoutProposal(parsed, rules);
     const wanted = designRequest && (state.design.proposed || parsed.design?.applied) ? parsed : undefined;
     return { inputs, errors, results, proposalWanted: wanted, ready: Object.keys(errors).length === 0 && !wanted };
   } catch (error) {
     return { inputs, errors: { ...errors, ...refusedFields(error) }, ready: false };
+  }
+}
+
+/**
+ * The inputs as the server will parse them. A design part the server would refuse marks its boxes and leaves the
+ * proposal out, but the checks of the entrance still run on the rest, as they do while a proposal is worked out.
+ */
+function parseForLive(inputs: GradeCheckInputsInput): { parsed?: GradeCheckInputs; errors: FieldErrors } {
+  try {
+    return { parsed: parseInput(gradeCheckInputsSchema, inputs), errors: {} };
+  } catch (error) {
+    const errors = refusedFields(error);
+    const designOnly = Object.keys(errors).every((field) => field === 'design' || field.startsWith('design.'));
+    if (!designOnly || !inputs.design) return { errors };
+    const { design: _refused, ...rest } = inputs;
+    try {
+      return { parsed: parseInput(gradeCheckInputsSchema, rest), errors };
+    } catch {
+      return { errors };
+    }
   }
 }
 
