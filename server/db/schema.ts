@@ -161,6 +161,8 @@ export const gradeChecks = pgTable('grade_checks', {
   number: integer().notNull(),
   ruleProfileVersionId: uuid().notNull().references(() => ruleProfileVersions.id),
   engineVersion: text().notNull(),
+  // The shape of inputs and results (shared/grade-check/stored-check.ts); rows from before it existed are 1.
+  formatVersion: integer().notNull().default(1),
   inputs: jsonb().notNull(),
   results: jsonb().notNull(),
   passed: boolean().notNull(),

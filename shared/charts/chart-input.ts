@@ -1,9 +1,10 @@
 import type { EntranceReport, ProposedProfile, RuleProfile } from '../engine';
+import type { ChartPoint } from './chart-geometry';
 import type { ProfileChartInput } from './profile-chart';
 
 export interface ChartSource {
   roadEdgeStationFt?: number;
-  design?: { applied: boolean };
+  design?: { applied?: boolean };
 }
 
 export interface ChartResults {
@@ -50,4 +51,15 @@ export function chartInputFor(inputs: ChartSource, results: ChartResults, profil
     failingStationsFt: failingStations(report, profile, inputs.roadEdgeStationFt ?? report.profile.points[0].stationFt),
     scrapePoints,
   };
+}
+
+/**
+ * The field sheet's chart, drawn by the same function: what the crew builds (the checked profile) over the ground
+ * as surveyed. A proposal the office did not apply is not drawn, since nobody builds it.
+ */
+export function buildChartInputFor(inputs: ChartSource, results: ChartResults, profile: RuleProfile, groundAsSurveyed: readonly ChartPoint[] | null): ProfileChartInput {
+  const chart = chartInputFor(inputs, results, profile);
+  const built = results.report.profile.points;
+  if (!groundAsSurveyed) return { ...chart, ground: built, design: undefined, checked: 'ground' };
+  return { ...chart, ground: groundAsSurveyed, design: built, checked: 'design' };
 }

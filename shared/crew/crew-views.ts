@@ -1,4 +1,5 @@
 import type { ApronSummary, AsBuiltReadingResult, AsBuiltStatus, CutFillAtStation, LaserWarp, PlaneSetting, ProfilePoint, RuleProfile, StakeResult } from '../engine';
+import type { ProfileChartInput } from '../charts/profile-chart';
 import type { RequestStatus } from '../workflow/statuses';
 import type { AsBuiltReadingInput } from './crew-inputs';
 
@@ -86,7 +87,8 @@ export interface FieldSheetView {
   culvert: CulvertSheet | null;
   /** The warped apron's edges and the warp stakes; null when the check did not take the apron. */
   apron: ApronSummary | null;
-  design: { points: ProfilePoint[]; existing: ProfilePoint[] | null; cutFill: CutFillAtStation[] } | null;
+  /** `chart`: what is built over the ground as surveyed, drawn by shared/charts as on the check screen and in the report. */
+  design: { points: ProfilePoint[]; existing: ProfilePoint[] | null; cutFill: CutFillAtStation[]; chart: ProfileChartInput } | null;
   earthwork: EarthworkEstimate | null;
   cautions: string[];
 }

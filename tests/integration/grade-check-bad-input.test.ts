@@ -50,10 +50,10 @@ describe('nothing a client sends gets a 500', () => {
     const many = Array.from({ length: 501 }, (_, i) => ({ stationFt: i, elevationFt: 100 + i * 0.02 }));
     const tooMany = await cast.staff.agent.post(`/api/requests/${requestId}/grade-checks`)
       .send({ ruleProfileVersionId: marrow, inputs: surveyInputs({ profile: many }) }).expect(400);
-    expect(tooMany.body.error.fields).toHaveProperty(['inputs.profile']);
+    expect(tooMany.body.error.fields).toHaveProperty(['profile']);
     const long = [{ stationFt: 0, elevationFt: 100 }, { stationFt: 90_000, elevationFt: 120 }];
     const fine = await cast.staff.agent.post(`/api/requests/${requestId}/grade-checks`)
       .send({ ruleProfileVersionId: marrow, inputs: surveyInputs({ profile: long, scrapeStepFt: 0.01 }) }).expect(400);
-    expect(fine.body.error.fields).toHaveProperty(['inputs.scrapeStepFt']);
+    expect(fine.body.error.fields).toHaveProperty(['scrapeStepFt']);
   });
 });

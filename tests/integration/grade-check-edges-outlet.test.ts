@@ -61,10 +61,10 @@ describe('road edge, outlet control and the warped apron in the saved check', ()
     const { geometry: _g, ...noGeometry } = withEdges();
     const { res } = await save(noGeometry);
     expect(res.status).toBe(400);
-    expect(res.body.error.fields).toHaveProperty(['inputs.apron.entranceWidthFt']);
+    expect(res.body.error.fields).toHaveProperty(['apron.entranceWidthFt']);
     const shoulder = await save({ ...withEdges(), roadSide: { roadCrossSlopePercent: 2, shoulderWidthFt: 3 } });
     expect(shoulder.res.status).toBe(400);
-    expect(shoulder.res.body.error.fields).toHaveProperty(['inputs.roadSide.shoulderSlopePercent']);
+    expect(shoulder.res.body.error.fields).toHaveProperty(['roadSide.shoulderSlopePercent']);
   });
 
   it('the PDF report says which control sets the headwater and prints the warp stakes and the edge findings', async () => {

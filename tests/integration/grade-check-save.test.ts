@@ -43,18 +43,18 @@ describe('saving a grade check', () => {
     const request = await visitBooked();
     const badPoint = surveyInputs({ profile: { kind: 'elevations', points: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 'ten', elevationFt: 101 }] } });
     const res = await save(request.id, { ruleProfileVersionId: marrow, inputs: badPoint }).expect(400);
-    expect(res.body.error.fields).toHaveProperty(['inputs.profile.points.1.stationFt']);
+    expect(res.body.error.fields).toHaveProperty(['profile.points.1.stationFt']);
 
     const badCulvert = await save(request.id, { ruleProfileVersionId: marrow, inputs: surveyInputs({ culvert: { ...surveyInputs().culvert, diameterIn: -3 } }) }).expect(400);
-    expect(Object.keys(badCulvert.body.error.fields)).toEqual(['inputs.culvert.diameterIn']);
+    expect(Object.keys(badCulvert.body.error.fields)).toEqual(['culvert.diameterIn']);
 
     const badLaser = await save(request.id, { ruleProfileVersionId: marrow, inputs: surveyInputs({ laser: { originElevationFt: 100 } }) }).expect(400);
-    expect(Object.keys(badLaser.body.error.fields)).toContain('inputs.laser.roadGradePercent');
+    expect(Object.keys(badLaser.body.error.fields)).toContain('laser.roadGradePercent');
 
     const twice = surveyInputs({ profile: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 0, elevationFt: 101 }, { stationFt: 20, elevationFt: 101 }] });
     const conflict = await save(request.id, { ruleProfileVersionId: marrow, inputs: twice }).expect(400);
     // The repeated shot, the second one typed at 0+00, is the box named.
-    expect(conflict.body.error.fields).toHaveProperty(['inputs.profile.1.stationFt']);
+    expect(conflict.body.error.fields).toHaveProperty(['profile.1.stationFt']);
 
     await save(request.id, { ruleProfileVersionId: '00000000-0000-4000-8000-000000000000', inputs: surveyInputs() }).expect(400)
       .then((r) => expect(r.body.error.fields).toHaveProperty(['ruleProfileVersionId']));

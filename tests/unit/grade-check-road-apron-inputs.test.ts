@@ -3,6 +3,7 @@ import { commonRuralTemplate } from '../../shared/engine';
 import { buildInputs } from '../../src/features/grade-check/lib/build-inputs';
 import { initialSurvey, newKey, type SurveyState } from '../../src/features/grade-check/lib/survey-state';
 import { surveyFromInputs } from '../../src/features/grade-check/lib/survey-from-inputs';
+import { runLiveCheck } from '../../src/features/grade-check/lib/use-live-check';
 
 function survey(patch: (s: SurveyState) => void): SurveyState {
   const s = initialSurvey(45);
@@ -53,5 +54,15 @@ describe('the road side and the apron as typed on the grade check screen', () =>
     expect(back.road).toMatchObject({ crossSlopePercent: '2', shoulderWidthFt: '4', shoulderSlopePercent: '6' });
     expect(back.apron).toEqual(typed.apron);
     expect(back.culvert.tailwaterDepthFt).toBe('0.6');
+  });
+});
+
+describe('the live check with a design part the server would refuse', () => {
+  it('marks the side slopes box and still checks the entrance, but cannot be saved', () => {
+    const live = runLiveCheck(survey((s) => { s.road.edgeElevationFt = '100'; s.geometry.sideSlopeHPerV = '-2'; }), commonRuralTemplate);
+    expect(live.errors['design.template.cutSlopeHPerV']).toBeDefined();
+    expect(Object.keys(live.errors).every((field) => field.startsWith('design.template.'))).toBe(true);
+    expect(live.results?.report.profile.points).toHaveLength(3);
+    expect(live.ready).toBe(false);
   });
 });

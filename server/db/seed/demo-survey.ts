@@ -2,6 +2,7 @@ import { proposeProfile, ruleProfileSchema, type ProfilePoint, type RuleProfile 
 import { plainSummary } from '../../services/grade-checks/plain-summary';
 import { parseGradeCheckInputs, runGradeCheck } from '../../services/grade-checks/run-grade-check';
 import { eq } from 'drizzle-orm';
+import { toStoredColumns } from '../../../shared/grade-check/stored-check';
 import type { DbOrTx } from '../client';
 import { jurisdictions, ruleProfileVersions } from '../schema';
 
@@ -65,5 +66,5 @@ export async function currentRules(tx: DbOrTx, slug: string) {
 export async function demoCheck(rules: RuleProfile, site: DemoSite) {
   const inputs = parseGradeCheckInputs(await demoCheckInputs(rules, site));
   const results = await runGradeCheck(inputs, rules, proposeProfile);
-  return { inputs, results, passed: results.report.passes, summary: plainSummary(inputs, results, rules), engineVersion: results.report.engineVersion };
+  return { ...toStoredColumns(inputs, results), passed: results.report.passes, summary: plainSummary(inputs, results, rules), engineVersion: results.report.engineVersion };
 }

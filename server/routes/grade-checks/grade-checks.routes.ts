@@ -1,19 +1,13 @@
 import { Router } from 'express';
-import { z } from 'zod';
+import {
+  attachGradeCheckInputSchema, saveGradeCheckInputSchema, type GradeCheckAttachedView, type GradeCheckListView, type GradeCheckSavedView,
+} from '../../../shared/contracts/grade-checks';
 import type { AppContext } from '../../context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
 import { attachGradeCheck } from '../../services/grade-checks/attach-grade-check';
 import { listGradeChecks, loadVisibleGradeCheck, saveGradeCheck } from '../../services/grade-checks/grade-checks.service';
 import { checkView, requestHeader } from './grade-check-view';
-
-export const saveGradeCheckInputSchema = z.object({
-  ruleProfileVersionId: z.uuid('must be a rule profile version id'),
-  // Validated by the engine's own schemas in the service, which name the exact field that is wrong.
-  inputs: z.unknown().refine((v) => v !== undefined, { message: 'is required' }),
-  results: z.undefined({ error: 'is computed by the server; send only the inputs' }).optional(),
-});
-export const attachGradeCheckInputSchema = z.strictObject({ shareWithApplicant: z.boolean('must be true or false').default(false) });
 
 export function gradeChecksRouter(ctx: AppContext) {
   const { db } = ctx;
@@ -22,19 +16,19 @@ export function gradeChecksRouter(ctx: AppContext) {
 
   router.get('/api/requests/:id/grade-checks', handle({ params: uuidParam }, async ({ params, user }) => {
     const { request, checks } = await listGradeChecks(db, user, params.id);
-    return { request: requestHeader(request), checks: checks.map((c) => checkView(c, user)) };
+    return { request: requestHeader(request), checks: checks.map((c) => checkView(c, user)) } satisfies GradeCheckListView;
   }));
   router.post('/api/requests/:id/grade-checks', office, handle({ params: uuidParam, body: saveGradeCheckInputSchema }, async ({ params, body, user, res }) => {
     const row = await saveGradeCheck(db, user, params.id, body);
     res.status(201);
-    return { check: checkView(row, user) };
+    return { check: checkView(row, user) } satisfies GradeCheckSavedView;
   }));
   router.get('/api/grade-checks/:id', handle({ params: uuidParam }, async ({ params, user }) => ({
     check: checkView(await loadVisibleGradeCheck(db, user, params.id), user),
-  })));
+  }) satisfies GradeCheckSavedView));
   router.post('/api/grade-checks/:id/attach', office, handle({ params: uuidParam, body: attachGradeCheckInputSchema }, async ({ params, body, user }) => {
     const { document, check } = await attachGradeCheck(ctx, user, params.id, body.shareWithApplicant);
-    return { check: checkView(check, user), documentId: document.id };
+    return { check: checkView(check, user), documentId: document.id } satisfies GradeCheckAttachedView;
   }));
   return router;
 }

@@ -1,5 +1,6 @@
 import { eq } from 'drizzle-orm';
 import { elevationAt, type CutFillAtStation } from '../../../shared/engine';
+import { buildChartInputFor } from '../../../shared/charts/chart-input';
 import { headwaterWords } from '../../../shared/charts/check-words';
 import { roadOwnerText } from '../../../shared/requests/choices';
 import type { CulvertSheet, FieldSheetView, LaserSheet } from '../../../shared/crew/crew-views';
@@ -64,7 +65,7 @@ function whereText(site: Record<string, unknown> | undefined): string {
   return '';
 }
 
-async function sheetFor(db: Db, row: RequestRow): Promise<FieldSheetView> {
+async function sheetFor(db: Db, row: RequestRow) {
   const check = await loadJobCheck(db, row.id);
   const [job] = await db.select({ scheduledFor: jobs.scheduledFor }).from(jobs).where(eq(jobs.requestId, row.id));
   const [crew] = row.crewId ? await db.select({ name: users.name }).from(users).where(eq(users.id, row.crewId)) : [];
@@ -91,10 +92,13 @@ async function sheetFor(db: Db, row: RequestRow): Promise<FieldSheetView> {
     laser: check ? laserSheet(check) : null,
     culvert: check ? culvertSheet(check) : null,
     apron: check?.apron ?? null,
-    design: check ? { points: check.designPoints, existing: check.existingPoints, cutFill: cutFill(check) } : null,
+    design: check ? {
+      points: check.designPoints, existing: check.existingPoints, cutFill: cutFill(check),
+      chart: buildChartInputFor(check.record.inputs, check.record.results, check.ruleProfile, check.existingPoints),
+    } : null,
     earthwork: earthworkEstimate(check),
     cautions: fieldCautions,
-  };
+  } satisfies FieldSheetView;
 }
 
 /** Everything the crew takes to site, for the crew that has the job (or any crew while it is on the board) and the office. */

@@ -1,44 +1,17 @@
 import { and, desc, eq, isNotNull } from 'drizzle-orm';
-import { z } from 'zod';
 import {
-  culvertInputSchema, laserSetup, laserSetupInputSchema, laserStepAtChangeFt, SURVEY_ELEVATION_PRECISION_FT, normalizeProfile, profileInputSchema,
-  ruleProfileSchema, type CulvertInput, type EntranceReport, type ProfilePoint, type RuleProfile,
+  laserSetup, laserStepAtChangeFt, normalizeProfile, ruleProfileSchema, SURVEY_ELEVATION_PRECISION_FT,
+  type EntranceReport, type LaserSetupInput, type ProfilePoint, type RuleProfile,
 } from '../../../shared/engine';
+import type { GradeCheckInputs, GradeCheckRecord, GradeCheckResults } from '../../../shared/contracts/grade-checks';
+import { readGradeCheckRecordOrNull } from '../../../shared/grade-check/stored-check';
 import type { DbOrTx } from '../../db/client';
 import { gradeChecks, jobs, jurisdictions, ruleProfileVersions } from '../../db/schema';
-// The design part is read with the very schema the check screen saved it with.
-import { designPartSchema } from '../grade-checks/grade-check-inputs';
 
 /**
- * A saved grade check read back for the crew. The stored JSON was written by the office's check screen through
- * the engine; it is parsed again here piece by piece, so one odd part (an older check without a laser setup)
- * leaves that section of the field sheet empty instead of breaking the whole sheet.
+ * A saved grade check as the crew builds from it: the stored record read through the grade check contract's one
+ * reader (older formats upgraded), and the few things the crew's screens derive from it.
  */
-const pointSchema = z.object({ stationFt: z.number(), elevationFt: z.number() });
-const reportSchema = z.object({
-  profile: z.object({ points: z.array(pointSchema).min(2) }),
-  culvert: z.object({
-    requiredLengthFt: z.number().optional(), coverIn: z.number().optional(), slopeFtPerFt: z.number().optional(), headwaterFt: z.number().optional(),
-    hwOverD: z.number().optional(), control: z.enum(['inlet', 'outlet']).optional(), inletHeadwaterFt: z.number().optional(), outletHeadwaterFt: z.number().optional(),
-  }).optional(),
-  apron: z.object({
-    halfWidthFt: z.number(), warpLengthFt: z.number(), warpLengthFrom: z.enum(['input', 'rule profile', 'landing length']), warpStartStationFt: z.number(),
-    roadGradePercent: z.number(), drivewayCrossSlopePercent: z.number(),
-    edges: z.object({ left: z.array(pointSchema), right: z.array(pointSchema) }),
-    stakes: z.array(z.object({
-      stationFt: z.number(), crossSlopePercent: z.number(), leftOffsetFt: z.number(), leftElevationFt: z.number(),
-      centreElevationFt: z.number(), rightOffsetFt: z.number(), rightElevationFt: z.number(),
-    })),
-  }).optional(),
-}).loose();
-const proposalSchema = z.object({
-  feasible: z.boolean(),
-  profile: z.array(pointSchema),
-  cutFillByStation: z.array(z.object({ stationFt: z.number(), existingFt: z.number(), designFt: z.number(), cutFillFt: z.number() })),
-  cutCuYd: z.number(),
-  fillCuYd: z.number(),
-});
-
 export interface SavedCheck {
   id: string;
   number: number;
@@ -46,51 +19,41 @@ export interface SavedCheck {
   passed: boolean;
   engineVersion: string;
   ruleProfile: RuleProfile;
+  record: GradeCheckRecord;
   /** The profile the check approved: the entrance as it is to be built. */
   designPoints: ProfilePoint[];
   roadEdgeStationFt: number;
   existingPoints: ProfilePoint[] | null;
-  design: z.output<typeof designPartSchema> | null;
-  proposal: z.output<typeof proposalSchema> | null;
-  culvert: z.output<typeof culvertInputSchema> | null;
+  design: NonNullable<GradeCheckInputs['design']> | null;
+  proposal: NonNullable<GradeCheckResults['proposal']> | null;
+  culvert: NonNullable<GradeCheckInputs['culvert']> | null;
   culvertSummary: EntranceReport['culvert'] | null;
   /** Checks saved before the apron was an input have none. */
   apron: EntranceReport['apron'] | null;
   laser: ReturnType<typeof laserSetup> | null;
-  laserInput: z.output<typeof laserSetupInputSchema> | null;
+  laserInput: NonNullable<GradeCheckInputs['laser']> | null;
 }
-
-const pick = <S extends z.ZodType>(schema: S, value: unknown): z.output<S> | null => {
-  const parsed = schema.safeParse(value);
-  return parsed.success ? parsed.data : null;
-};
 
 // Wider than any single-lane entrance, so a step anywhere across the driveway shows.
 const STEP_CHECK_HALF_WIDTH_FT = 15;
 
-function laserOf(input: z.output<typeof laserSetupInputSchema> | null, stored: unknown) {
+function laserOf(input: LaserSetupInput | undefined, saved: GradeCheckResults['laser']) {
   if (!input) return null;
-  const saved = stored as ReturnType<typeof laserSetup> | undefined;
   // The stored result is the record; recompute only when it is missing, or when it was saved by an engine whose
   // second setup stepped away from the first at the change line (the crew must never be handed a step).
   const usable = saved && typeof saved.alongRoadPercent === 'number' && saved.secondSetup && Array.isArray(saved.stakes);
   if (usable && laserStepAtChangeFt(saved, STEP_CHECK_HALF_WIDTH_FT) < SURVEY_ELEVATION_PRECISION_FT) return saved;
-  // Inputs saved before warps existed carry the old default cross slope of 0, which no screen ever let anyone
-  // choose; without a warp length it is dropped so the driveway keeps the road's tilt and the setups meet.
-  const { drivewayCrossSlopePercent, ...rest } = input;
   try {
-    return laserSetup(input.warpLengthFt === undefined ? rest : { ...rest, drivewayCrossSlopePercent });
+    return laserSetup(input);
   } catch {
     return null;
   }
 }
 
-function pointsOf(report: z.output<typeof reportSchema> | null, rawProfile: unknown): ProfilePoint[] | null {
-  if (report) return report.profile.points;
-  const input = pick(profileInputSchema, rawProfile);
-  if (!input) return null;
+function existingOf(design: GradeCheckInputs['design']): ProfilePoint[] | null {
+  if (!design) return null;
   try {
-    return normalizeProfile(input);
+    return normalizeProfile(design.existing);
   } catch {
     return null;
   }
@@ -110,39 +73,29 @@ export async function loadJobCheck(db: DbOrTx, requestId: string): Promise<Saved
     .orderBy(desc(gradeChecks.attachedAt))
     .limit(1);
   if (!row) return null;
-  const rules = pick(ruleProfileSchema, row.version.profile);
-  if (!rules) return null;
-  const inputs = (row.check.inputs ?? {}) as Record<string, unknown>;
-  const results = (row.check.results ?? {}) as Record<string, unknown>;
-  const report = pick(reportSchema, results.report);
-  const designPoints = pointsOf(report, inputs.profile);
-  if (!designPoints) return null;
-  const design = pick(designPartSchema, inputs.design);
-  const laserInput = pick(laserSetupInputSchema, inputs.laser);
-  let existingPoints: ProfilePoint[] | null = null;
-  try {
-    existingPoints = design ? normalizeProfile(design.existing) : null;
-  } catch {
-    existingPoints = null;
-  }
-  const roadEdge = typeof inputs.roadEdgeStationFt === 'number' ? inputs.roadEdgeStationFt : designPoints[0].stationFt;
+  const rules = ruleProfileSchema.safeParse(row.version.profile);
+  const record = readGradeCheckRecordOrNull(row.check);
+  if (!rules.success || !record) return null;
+  const { inputs, results } = record;
+  const designPoints = results.report.profile.points;
   return {
     id: row.check.id,
     number: row.check.number,
     summary: row.check.summary,
     passed: row.check.passed,
     engineVersion: row.check.engineVersion,
-    ruleProfile: { ...rules, id: row.version.id, version: row.version.version, jurisdictionName: row.jurisdictionName },
+    ruleProfile: { ...rules.data, id: row.version.id, version: row.version.version, jurisdictionName: row.jurisdictionName },
+    record,
     designPoints,
-    roadEdgeStationFt: roadEdge,
-    existingPoints,
-    design,
-    proposal: pick(proposalSchema, results.proposal),
-    culvert: pick(culvertInputSchema, inputs.culvert as CulvertInput | undefined),
-    culvertSummary: report?.culvert ?? null,
-    apron: report?.apron ?? null,
-    laser: laserOf(laserInput, results.laser),
-    laserInput,
+    roadEdgeStationFt: inputs.roadEdgeStationFt ?? designPoints[0].stationFt,
+    existingPoints: existingOf(inputs.design),
+    design: inputs.design ?? null,
+    proposal: results.proposal ?? null,
+    culvert: inputs.culvert ?? null,
+    culvertSummary: results.report.culvert ?? null,
+    apron: results.report.apron ?? null,
+    laser: laserOf(inputs.laser, results.laser),
+    laserInput: inputs.laser ?? null,
   };
 }
 

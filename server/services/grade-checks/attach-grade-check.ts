@@ -50,6 +50,6 @@ export async function attachGradeCheck(ctx: Pick<AppContext, 'db' | 's3' | 'env'
       });
     }
     const [saved] = document ? [document] : await tx.select().from(documents).where(eq(documents.objectKey, objectKey));
-    return { document: saved, check: attached ?? check };
+    return { document: saved, check: attached ? { ...check, attachedAt: attached.attachedAt } : check };
   });
 }

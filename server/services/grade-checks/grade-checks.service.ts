@@ -6,15 +6,16 @@ import type { Db, DbOrTx } from '../../db/client';
 import { gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
 import { AppError, conflict, notFound } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
-import type { GradeCheckInputs, GradeCheckResults } from './grade-check-inputs';
+import type { GradeCheckRecord } from '../../../shared/contracts/grade-checks';
+import { readGradeCheckRecord, toStoredColumns } from '../../../shared/grade-check/stored-check';
 import { plainSummary } from './plain-summary';
 import { parseGradeCheckInputs, runGradeCheck } from './run-grade-check';
 
 export type GradeCheckRow = typeof gradeChecks.$inferSelect;
-export interface GradeCheck extends Omit<GradeCheckRow, 'inputs' | 'results'> {
-  inputs: GradeCheckInputs;
-  results: GradeCheckResults;
-}
+/** A saved check with its inputs and results read (and upgraded) through the contract's one reader. */
+export type GradeCheck = Omit<GradeCheckRow, 'formatVersion' | 'inputs' | 'results'> & GradeCheckRecord;
+
+export const readGradeCheckRow = ({ formatVersion, inputs, results, ...row }: GradeCheckRow): GradeCheck => ({ ...row, ...readGradeCheckRecord({ formatVersion, inputs, results }) });
 
 // From the visit until the crew has it, a new survey may still be checked; after release the record is settled.
 const checkableStatuses: readonly RequestStatus[] = ['visit_booked', 'checked', 'permit_filed', 'permit_refused'];
@@ -23,7 +24,7 @@ const checkableStatuses: readonly RequestStatus[] = ['visit_booked', 'checked', 
 export async function loadGradeCheck(db: DbOrTx, id: string): Promise<GradeCheck> {
   const [row] = await db.select().from(gradeChecks).where(eq(gradeChecks.id, id));
   if (!row) throw notFound('Grade check');
-  return { ...row, inputs: row.inputs as GradeCheckInputs, results: row.results as GradeCheckResults };
+  return readGradeCheckRow(row);
 }
 
 /** Property owners and crews see a check once the office has attached it to the request; the office sees all. */
@@ -60,14 +61,14 @@ export async function saveGradeCheck(db: Db, user: SessionUser, requestId: strin
     const [{ last }] = await tx.select({ last: max(gradeChecks.number) }).from(gradeChecks).where(eq(gradeChecks.requestId, request.id));
     const [row] = await tx.insert(gradeChecks).values({
       requestId: request.id, number: (last ?? 0) + 1, ruleProfileVersionId: versionId, engineVersion: results.report.engineVersion,
-      inputs, results, passed: results.report.passes, summary: plainSummary(inputs, results, profile), createdById: user.id,
+      ...toStoredColumns(inputs, results), passed: results.report.passes, summary: plainSummary(inputs, results, profile), createdById: user.id,
     }).returning();
     // The office's history shows each check as it is made; the owner hears of it once a report is attached.
     await tx.insert(requestEvents).values({
       requestId: request.id, actorId: user.id, kind: 'grade-check', internal: true,
       note: `Grade check ${row.number} saved against ${profile.jurisdictionName ?? 'the rule profile'} version ${profile.version}: ${row.passed ? 'meets the rules' : 'does not meet the rules'}.`,
     });
-    return row;
+    return readGradeCheckRow(row);
   });
 }
 
@@ -75,5 +76,5 @@ export async function listGradeChecks(db: DbOrTx, user: SessionUser, requestId: 
   const request = await loadVisibleRequest(db, user, requestId);
   const where = isOfficeRole(user.role) ? eq(gradeChecks.requestId, request.id) : and(eq(gradeChecks.requestId, request.id), isNotNull(gradeChecks.attachedAt));
   const rows = await db.select().from(gradeChecks).where(where).orderBy(desc(gradeChecks.number));
-  return { request, checks: rows };
+  return { request, checks: rows.map(readGradeCheckRow) };
 }

@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
+import { ProfileChart } from '@/components/ui/profile-chart';
 import { useFieldSheet } from '../api/get-field-sheet';
 import { EarthworkLine } from './earthwork-line';
 import { cutFillWords, day, ft, pct, station } from './format';
-import { ProfileChart } from './profile-chart';
 import { SheetCulvert } from './sheet-culvert';
 import { SheetLaser } from './sheet-laser';
 import { SheetWarp } from './sheet-warp';
@@ -69,7 +69,7 @@ export function FieldSheet({ id }: { id: string }) {
 
       <div className="grid gap-4 md:grid-cols-[2fr_1fr] print:grid-cols-[2fr_1fr] print:gap-2">
         <Section title="Design profile">
-          {s.design ? <ProfileChart design={s.design.points} existing={s.design.existing} landingLengthFt={s.rules?.landingLengthFt ?? null} /> : <p>No profile in the saved check.</p>}
+          {s.design ? <ProfileChart chart={s.design.chart} className="print:[&>svg]:h-[1.6in] print:[&>svg]:w-auto" /> : <p>No profile in the saved check.</p>}
           {s.design && s.design.cutFill.length > 0 && (
             <table className="mt-1 w-full border-collapse text-left">
               <caption className="text-left font-bold">Cut and fill on the centreline</caption>

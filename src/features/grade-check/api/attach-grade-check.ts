@@ -1,10 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { AttachGradeCheckInput, GradeCheckAttachedView } from '@shared/contracts/grade-checks';
 import { api } from '@/lib/api-client';
 import { getDocumentsQueryOptions } from './get-documents';
-import { getGradeChecksQueryOptions, type SavedCheck } from './get-grade-checks';
+import { getGradeChecksQueryOptions } from './get-grade-checks';
 
-export const attachGradeCheck = ({ checkId, shareWithApplicant }: { checkId: string; shareWithApplicant: boolean }) =>
-  api.post<{ check: SavedCheck; documentId: string }>(`/api/grade-checks/${checkId}/attach`, { shareWithApplicant });
+export const attachGradeCheck = ({ checkId, ...body }: AttachGradeCheckInput & { checkId: string }) =>
+  api.post<GradeCheckAttachedView>(`/api/grade-checks/${checkId}/attach`, body);
 
 export function useAttachGradeCheck(requestId: string) {
   const queryClient = useQueryClient();

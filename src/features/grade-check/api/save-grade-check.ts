@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { GradeCheckSavedView, SaveGradeCheckInput } from '@shared/contracts/grade-checks';
 import { api } from '@/lib/api-client';
-import type { SavedInputs } from '../lib/build-inputs';
-import { getGradeChecksQueryOptions, type SavedCheck } from './get-grade-checks';
+import { getGradeChecksQueryOptions } from './get-grade-checks';
 
 /** Only the inputs travel: the server runs the engine itself and keeps its own result. */
-export const saveGradeCheck = ({ requestId, ...body }: { requestId: string; ruleProfileVersionId: string; inputs: SavedInputs }) =>
-  api.post<{ check: SavedCheck }>(`/api/requests/${requestId}/grade-checks`, body);
+export const saveGradeCheck = ({ requestId, ...body }: SaveGradeCheckInput & { requestId: string }) =>
+  api.post<GradeCheckSavedView>(`/api/requests/${requestId}/grade-checks`, body);
 
 export function useSaveGradeCheck(requestId: string) {
   const queryClient = useQueryClient();

@@ -3,7 +3,7 @@ import { Button } from '@/components/ui/button';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
-import type { CheckRequestHeader, SavedCheck } from '../api/get-grade-checks';
+import type { GradeCheckRequestHeader, GradeCheckView } from '@shared/contracts/grade-checks';
 import { useProfileVersion, useRuleProfileChoices } from '../api/get-rule-profile-choices';
 import { useSaveGradeCheck } from '../api/save-grade-check';
 import { surveyFromInputs } from '../lib/survey-from-inputs';
@@ -22,7 +22,7 @@ import { RuleProfilePicker } from './rule-profile-picker';
 import { StakesEditor } from './stakes-editor';
 
 /** Survey entry on the left, the live check on the right; saving asks the server to run and keep the check. */
-export function GradeCheckWorkspace({ request, checks }: { request: CheckRequestHeader; checks: SavedCheck[] }) {
+export function GradeCheckWorkspace({ request, checks }: { request: GradeCheckRequestHeader; checks: GradeCheckView[] }) {
   const [survey, setSurvey] = useState<SurveyState>(() => initialSurvey(request.application.site?.postedSpeedMph));
   const choices = useRuleProfileChoices();
   const [jurisdictionId, setJurisdictionId] = useState(request.jurisdictionId ?? '');
@@ -39,9 +39,8 @@ export function GradeCheckWorkspace({ request, checks }: { request: CheckRequest
       // A design applied to other ground no longer fits once the ground changes.
       design: part === 'centreline' ? { ...s.design, applied: null } : part === 'design' ? { ...s.design, ...patch } : s.design,
     }));
-  const serverFields = save.error instanceof ApiError
-    ? Object.fromEntries(Object.entries(save.error.fields).map(([k, v]) => [k.replace(/^inputs\./, ''), v]))
-    : {};
+  // The server's 400 names the inputs' boxes by the same paths the live check does.
+  const serverFields = save.error instanceof ApiError ? save.error.fields : {};
   const errors = { ...serverFields, ...live.errors };
 
   if (choices.isPending) return <Loading />;

@@ -1,7 +1,7 @@
 import { formatStation } from '@shared/engine';
-import type { CheckResults } from '../lib/use-live-check';
+import type { GradeCheckResults } from '@shared/contracts/grade-checks';
 
-type Laser = NonNullable<CheckResults['laser']>;
+type Laser = NonNullable<GradeCheckResults['laser']>;
 
 const setupWords: Record<Laser['stakes'][number]['setup'], string> = { first: 'first', warp: 'warp (from stakes)', second: 'second' };
 

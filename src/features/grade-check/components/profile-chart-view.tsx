@@ -1,14 +1,11 @@
 import { useMemo } from 'react';
 import type { RuleProfile } from '@shared/engine';
 import { chartInputFor, type ChartSource } from '@shared/charts/chart-input';
-import { profileChartSvg } from '@shared/charts/profile-chart';
-import type { CheckResults } from '../lib/use-live-check';
+import type { GradeCheckResults } from '@shared/contracts/grade-checks';
+import { ProfileChart } from '@/components/ui/profile-chart';
 
-/**
- * The same SVG the report prints, drawn from the same function. The string is built by our own code from numbers
- * and escaped labels, so setting it as markup carries nothing a user typed unescaped.
- */
-export function ProfileChartView({ inputs, results, rules }: { inputs: ChartSource; results: CheckResults; rules: RuleProfile }) {
-  const svg = useMemo(() => profileChartSvg({ ...chartInputFor(inputs, results, rules), fontFamily: 'ui-sans-serif, system-ui, sans-serif' }), [inputs, results, rules]);
-  return <div className="w-full overflow-hidden rounded border border-stone-200 bg-white [&>svg]:h-auto [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: svg }} />;
+/** The live check's chart: the same input the report and the field sheet draw from a saved check. */
+export function ProfileChartView({ inputs, results, rules }: { inputs: ChartSource; results: GradeCheckResults; rules: RuleProfile }) {
+  const chart = useMemo(() => chartInputFor(inputs, results, rules), [inputs, results, rules]);
+  return <ProfileChart chart={chart} className="rounded border border-stone-200" />;
 }

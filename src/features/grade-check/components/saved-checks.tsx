@@ -2,11 +2,11 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { useAttachGradeCheck } from '../api/attach-grade-check';
-import type { CheckRequestHeader, SavedCheck } from '../api/get-grade-checks';
+import type { GradeCheckRequestHeader, GradeCheckView } from '@shared/contracts/grade-checks';
 import { useMarkChecked } from '../api/mark-checked';
 
 /** Saved checks, newest first: attach one as the request's report, then mark the request checked. */
-export function SavedChecks({ request, checks }: { request: CheckRequestHeader; checks: SavedCheck[] }) {
+export function SavedChecks({ request, checks }: { request: GradeCheckRequestHeader; checks: GradeCheckView[] }) {
   const attach = useAttachGradeCheck(request.id);
   const markChecked = useMarkChecked();
   const [share, setShare] = useState(true);

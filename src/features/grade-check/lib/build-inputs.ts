@@ -1,16 +1,8 @@
-import { elevationAt, normalizeProfile, type CheckEntranceInput, type LaserSetupInput, type ProfileInput, type ProposeProfileInput, type RuleProfile } from '@shared/engine';
-import type { HaulChoice } from '@shared/charts/cut-fill-table';
+import { elevationAt, normalizeProfile, type CheckEntranceInput, type ProfileInput, type RuleProfile } from '@shared/engine';
+import type { GradeCheckInputsInput } from '@shared/contracts/grade-checks';
 import { laserFromProfile } from './laser-from-profile';
 import { type FieldErrors, readNumber, readStation } from './read-number';
 import { centrelineColumns, type SurveyState } from './survey-state';
-
-/** The saved check's inputs, in the shape the server stores (and the crew's field sheet reads). */
-export interface SavedInputs extends CheckEntranceInput {
-  // Checks saved before the road side was an input kept the cross slope here, as a note only.
-  road?: { gradePercent: number; edgeElevationFt: number; crossSlopePercent?: number };
-  laser?: LaserSetupInput;
-  design?: ProposeProfileInput & { applied: boolean; haul?: HaulChoice };
-}
 
 function readCentreline(s: SurveyState['centreline'], errors: FieldErrors): ProfileInput | undefined {
   const cols = centrelineColumns[s.mode];
@@ -102,7 +94,7 @@ function readCulvert(c: SurveyState['culvert'], errors: FieldErrors, edgeFt: num
  * server use, so one map marks the cells whoever found the problem. Inputs come back whenever the centreline and
  * road can be read, so the live check keeps running; a survey with any error left is not ready to save.
  */
-export function buildInputs(s: SurveyState, rules: RuleProfile | undefined): { inputs?: SavedInputs; errors: FieldErrors } {
+export function buildInputs(s: SurveyState, rules: RuleProfile | undefined): { inputs?: GradeCheckInputsInput; errors: FieldErrors } {
   const errors: FieldErrors = {};
   const surveyed = readCentreline(s.centreline, errors);
   const roadEdgeStationFt = readStation(s.road.edgeStation, 'roadEdgeStationFt', errors);
@@ -144,7 +136,7 @@ export function buildInputs(s: SurveyState, rules: RuleProfile | undefined): { i
   const crew = { roadGradePercent: signedRoadGrade, receiverOffsetFt, stakes, drivewayCrossSlopePercent: apron?.drivewayCrossSlopePercent, warpLengthFt: apron?.warpLengthFt };
   const laser = rules ? laserFromProfile(checked, roadEdgeStationFt, rules, crew) : undefined;
   const edge = edgeElevation ?? laser?.originElevationFt;
-  const inputs: SavedInputs = {
+  const inputs: GradeCheckInputsInput = {
     profile: checked, roadEdgeStationFt, culvert, geometry,
     sight: Object.values(sight).some((v) => typeof v === 'number') ? sight : undefined,
     road: edge === undefined ? undefined : { gradePercent: signedRoadGrade, edgeElevationFt: edge }, roadSide,

@@ -1,5 +1,5 @@
 import { formatStation, type ProfileInput } from '@shared/engine';
-import type { SavedInputs } from './build-inputs';
+import type { GradeCheckInputsInput } from '@shared/contracts/grade-checks';
 import { initialSurvey, newKey, type CentrelineRow, type SurveyState } from './survey-state';
 
 const str = (v: number | undefined) => (v === undefined ? '' : String(v));
@@ -19,7 +19,7 @@ function centrelineOf(profile: ProfileInput): SurveyState['centreline'] {
 }
 
 /** A saved check's inputs back in the form, to survey again from where that check left off (as a new check). */
-export function surveyFromInputs(inputs: SavedInputs): SurveyState {
+export function surveyFromInputs(inputs: GradeCheckInputsInput): SurveyState {
   const s = initialSurvey(inputs.sight?.speedMph);
   const applied = inputs.design?.applied && !Array.isArray(inputs.profile) && inputs.profile.kind === 'elevations' ? inputs.profile.points : null;
   const surveyed = applied && inputs.design ? inputs.design.existing : inputs.profile;

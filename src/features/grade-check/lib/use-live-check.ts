@@ -1,77 +1,91 @@
 import { useEffect, useMemo, useState } from 'react';
-import { checkEntrance, EngineInputError, laserSetup, type ProposedProfile, type ProposeProfileInput, type RuleProfile } from '@shared/engine';
-import type { SavedCheck } from '../api/get-grade-checks';
-import { buildInputs, type SavedInputs } from './build-inputs';
+import { EngineInputError, type RuleProfile } from '@shared/engine';
+import { parseInput } from '@shared/engine/errors';
+import { gradeCheckInputsSchema, type GradeCheckInputs, type GradeCheckInputsInput, type GradeCheckResults } from '@shared/contracts/grade-checks';
+import { checkWithoutProposal, fieldsOf, GradeCheckFieldsError, runGradeCheck, type Propose } from '@shared/grade-check/run-check';
+import { buildInputs } from './build-inputs';
 import { proposeInWorker } from './propose-in-worker';
 import type { FieldErrors } from './read-number';
 import type { SurveyState } from './survey-state';
 
-export type CheckResults = SavedCheck['results'];
 export interface LiveCheck {
-  inputs?: SavedInputs;
+  /** What saving sends: the inputs as the form built them. */
+  inputs?: GradeCheckInputsInput;
   errors: FieldErrors;
-  results?: CheckResults;
+  results?: GradeCheckResults;
   /** Every box reads cleanly and the engine ran: the survey can be saved as a check. */
   ready: boolean;
   /** The design proposal asked for, still being worked out on its own thread. */
   designing?: boolean;
 }
 
-type Propose = (input: ProposeProfileInput, rules: RuleProfile) => Promise<ProposedProfile>;
-
-function engineErrors(error: unknown, prefix: string): FieldErrors {
-  if (!(error instanceof EngineInputError)) throw error;
-  const errors: FieldErrors = {};
-  for (const issue of error.issues) errors[[prefix, issue.field].filter(Boolean).join('.')] ??= issue.message;
-  return errors;
+/** The engine's refusal under the form's field paths, exactly as the server's 400 names them. */
+function refusedFields(error: unknown): FieldErrors {
+  if (error instanceof GradeCheckFieldsError) return error.fields;
+  if (error instanceof EngineInputError) return fieldsOf(error, '');
+  throw error;
 }
 
 /**
- * The same engine the server runs, on the survey as typed; the server's own run is the record. The checks
- * run here at once; a requested design proposal is returned as `designRequest` for a worker to solve.
+ * The survey as typed, parsed by the contract's schema and checked by the shared grade check at once; a requested
+ * design proposal comes back as `proposalWanted` (the parsed inputs) for runGradeCheck to finish on a worker.
  */
-export function runLiveCheck(state: SurveyState, rules: RuleProfile | undefined): LiveCheck & { designRequest?: ProposeProfileInput } {
-  const { inputs, errors } = buildInputs(state, rules);
-  if (!inputs || !rules) return { inputs, errors, ready: false };
-  const { road: _road, laser, design, ...check } = inputs;
-  let step = '';
+export function runLiveCheck(state: SurveyState, rules: RuleProfile | undefined): LiveCheck & { proposalWanted?: GradeCheckInputs } {
+  const { inputs, errors: typed } = buildInputs(state, rules);
+  if (!inputs || !rules) return { inputs, errors: typed, ready: false };
+  const { parsed, errors: refused } = parseForLive(inputs);
+  const errors = { ...typed, ...refused };
+  if (!parsed) return { inputs, errors, ready: false };
   try {
-    const report = checkEntrance(check, rules);
-    step = 'laser';
-    const results: CheckResults = { report, laser: laser ? laserSetup(laser) : undefined };
-    step = 'design';
-    let designRequest: ProposeProfileInput | undefined;
-    if (design && (state.design.proposed || design.applied)) {
-      const { applied: _applied, haul: _haul, ...propose } = design;
-      designRequest = propose;
+    const { results, designRequest } = checkWithoutProposal(parsed, rules);
+    const wanted = designRequest && (state.design.proposed || parsed.design?.applied) ? parsed : undefined;
+    return { inputs, errors, results, proposalWanted: wanted, ready: Object.keys(errors).length === 0 && !wanted };
+  } catch (error) {
+    return { inputs, errors: { ...errors, ...refusedFields(error) }, ready: false };
+  }
+}
+
+/**
+ * The inputs as the server will parse them. A design part the server would refuse marks its boxes and leaves the
+ * proposal out, but the checks of the entrance still run on the rest, as they do while a proposal is worked out.
+ */
+function parseForLive(inputs: GradeCheckInputsInput): { parsed?: GradeCheckInputs; errors: FieldErrors } {
+  try {
+    return { parsed: parseInput(gradeCheckInputsSchema, inputs), errors: {} };
+  } catch (error) {
+    const errors = refusedFields(error);
+    const designOnly = Object.keys(errors).every((field) => field === 'design' || field.startsWith('design.'));
+    if (!designOnly || !inputs.design) return { errors };
+    const { design: _refused, ...rest } = inputs;
+    try {
+      return { parsed: parseInput(gradeCheckInputsSchema, rest), errors };
+    } catch {
+      return { errors };
     }
-    if (design?.applied) results.surveyed = checkEntrance({ ...check, profile: design.existing }, rules);
-    return { inputs, errors, results, designRequest, ready: Object.keys(errors).length === 0 && !designRequest };
-  } catch (error) {
-    return { inputs, errors: { ...errors, ...engineErrors(error, step) }, ready: false };
   }
 }
 
-/** The proposal's answer folded into a live check: its result, or its complaint under the design's fields. */
-function withProposal(live: LiveCheck, answer: { proposal?: ProposedProfile; errors?: FieldErrors }): LiveCheck {
-  if (answer.errors) return { ...live, errors: { ...live.errors, ...answer.errors }, ready: false, designing: false };
-  const results = live.results && { ...live.results, proposal: answer.proposal };
-  return { ...live, results, ready: Object.keys(live.errors).length === 0, designing: false };
-}
+type Answer = { results: GradeCheckResults; errors?: undefined } | { errors: FieldErrors; results?: undefined };
 
-async function answerFor(request: ProposeProfileInput, rules: RuleProfile, propose: Propose) {
+/** The whole check with its proposal: the same runGradeCheck the server records, here with the browser's runner. */
+async function answerFor(inputs: GradeCheckInputs, rules: RuleProfile, propose: Propose): Promise<Answer> {
   try {
-    return { proposal: await propose(request, rules) };
+    return { results: await runGradeCheck(inputs, rules, propose) };
   } catch (error) {
-    return { errors: engineErrors(error, 'design') };
+    return { errors: refusedFields(error) };
   }
+}
+
+function withAnswer(live: LiveCheck, answer: Answer): LiveCheck {
+  if (answer.errors) return { ...live, errors: { ...live.errors, ...answer.errors }, ready: false, designing: false };
+  return { ...live, results: answer.results, ready: Object.keys(live.errors).length === 0, designing: false };
 }
 
 /** The whole live check with its proposal, for callers that can wait (tests, and the worker-backed hook). */
 export async function runLiveCheckWithProposal(state: SurveyState, rules: RuleProfile | undefined, propose: Propose): Promise<LiveCheck> {
-  const { designRequest, ...live } = runLiveCheck(state, rules);
-  if (!designRequest || !rules) return live;
-  return withProposal(live, await answerFor(designRequest, rules, propose));
+  const { proposalWanted, ...live } = runLiveCheck(state, rules);
+  if (!proposalWanted || !rules) return live;
+  return withAnswer(live, await answerFor(proposalWanted, rules, propose));
 }
 
 /**
@@ -84,19 +98,19 @@ export function useLiveCheck(state: SurveyState, rules: RuleProfile | undefined,
     const timer = setTimeout(() => setSettled(state), delayMs);
     return () => clearTimeout(timer);
   }, [state, delayMs]);
-  const { designRequest, ...live } = useMemo(() => runLiveCheck(settled, rules), [settled, rules]);
-  const key = designRequest && rules ? JSON.stringify([designRequest, rules]) : undefined;
-  const [answer, setAnswer] = useState<{ key: string; proposal?: ProposedProfile; errors?: FieldErrors }>();
+  const { proposalWanted, ...live } = useMemo(() => runLiveCheck(settled, rules), [settled, rules]);
+  const key = proposalWanted && rules ? JSON.stringify([proposalWanted, rules]) : undefined;
+  const [answer, setAnswer] = useState<Answer & { key: string }>();
   useEffect(() => {
-    if (!key || !designRequest || !rules) return;
+    if (!key || !proposalWanted || !rules) return;
     let current = true;
-    void answerFor(designRequest, rules, proposeInWorker).then((a) => current && setAnswer({ key, ...a }));
+    void answerFor(proposalWanted, rules, proposeInWorker).then((a) => current && setAnswer({ key, ...a }));
     return () => {
       current = false;
     };
-    // The key carries the request and the rules; the objects themselves change identity on every render.
+    // The key carries the inputs and the rules; the objects themselves change identity on every render.
   }, [key]);
   if (!key) return live;
   if (answer?.key !== key) return { ...live, ready: false, designing: true };
-  return withProposal(live, answer);
+  return withAnswer(live, answer);
 }

@@ -1,0 +1,1 @@
+ALTER TABLE "grade_checks" ADD COLUMN "format_version" integer DEFAULT 1 NOT NULL;
