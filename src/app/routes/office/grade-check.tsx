@@ -1,3 +1,4 @@
+import type { GradeCheckRequestHeader, GradeCheckView } from '@shared/contracts/grade-checks';
 import { officeRoles } from '@shared/workflow/roles';
 import { Link, useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
@@ -9,6 +10,13 @@ import { useGradeChecks } from '@/features/grade-check/api/get-grade-checks';
 import { DocumentsList } from '@/features/grade-check/components/documents-list';
 import { GradeCheckWorkspace } from '@/features/grade-check/components/grade-check-workspace';
 import { SavedChecks } from '@/features/grade-check/components/saved-checks';
+import { useRuleProfileChoice } from '@/features/rule-profiles/components/use-rule-profile-choice';
+
+// Mounted once the request is loaded, so the picker starts on the request's own road authority.
+function Workspace({ request, checks }: { request: GradeCheckRequestHeader; checks: GradeCheckView[] }) {
+  const ruleProfile = useRuleProfileChoice(request.jurisdictionId);
+  return <GradeCheckWorkspace request={request} checks={checks} ruleProfile={ruleProfile} />;
+}
 
 function GradeCheckPage({ id }: { id: string }) {
   const { data, isPending, error } = useGradeChecks(id);
@@ -23,7 +31,7 @@ function GradeCheckPage({ id }: { id: string }) {
         actions={<><StatusBadge status={request.status} /><Link to={paths.office.request.getHref(request.id)} className="text-sm font-semibold text-pine-700 hover:underline">← Back to the request</Link></>}
       />
       <div className="space-y-6">
-        <GradeCheckWorkspace request={request} checks={checks} />
+        <Workspace request={request} checks={checks} />
         <div className="grid gap-6 lg:grid-cols-2">
           <Panel title="Saved checks"><SavedChecks request={request} checks={checks} /></Panel>
           <Panel title="Documents"><DocumentsList requestId={request.id} canShare /></Panel>

@@ -1,10 +1,10 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
-import { ErrorNotice, Loading } from '@/components/ui/notice';
+import { ErrorNotice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import type { GradeCheckRequestHeader, GradeCheckView } from '@shared/contracts/grade-checks';
-import { useProfileVersion, useRuleProfileChoices } from '../api/get-rule-profile-choices';
+import type { RuleProfile } from '@shared/engine';
 import { useSaveGradeCheck } from '../api/save-grade-check';
 import { surveyFromInputs } from '../lib/survey-from-inputs';
 import { initialSurvey, type SurveyState } from '../lib/survey-state';
@@ -18,17 +18,20 @@ import { LaserPanel } from './laser-panel';
 import { LiveResult } from './live-result';
 import { ProposalPanel } from './proposal-panel';
 import { RoadFields } from './road-fields';
-import { RuleProfilePicker } from './rule-profile-picker';
 import { StakesEditor } from './stakes-editor';
 
+/** The rule profile the check is made against, chosen by the screen's picker. */
+export interface ChosenRuleProfile {
+  picker: ReactNode;
+  versionId: string | null;
+  rules: RuleProfile | undefined;
+  loadingRules: boolean;
+}
+
 /** Survey entry on the left, the live check on the right; saving asks the server to run and keep the check. */
-export function GradeCheckWorkspace({ request, checks }: { request: GradeCheckRequestHeader; checks: GradeCheckView[] }) {
+export function GradeCheckWorkspace({ request, checks, ruleProfile }: { request: GradeCheckRequestHeader; checks: GradeCheckView[]; ruleProfile: ChosenRuleProfile }) {
   const [survey, setSurvey] = useState<SurveyState>(() => initialSurvey(request.application.site?.postedSpeedMph));
-  const choices = useRuleProfileChoices();
-  const [jurisdictionId, setJurisdictionId] = useState(request.jurisdictionId ?? '');
-  const chosen = choices.data?.jurisdictions.find((j) => j.id === jurisdictionId);
-  const version = useProfileVersion(chosen?.currentVersionId ?? undefined);
-  const rules = version.data?.version.profile;
+  const { rules, versionId } = ruleProfile;
   const live = useLiveCheck(survey, rules);
   const save = useSaveGradeCheck(request.id);
 
@@ -43,12 +46,11 @@ export function GradeCheckWorkspace({ request, checks }: { request: GradeCheckRe
   const serverFields = save.error instanceof ApiError ? save.error.fields : {};
   const errors = { ...serverFields, ...live.errors };
 
-  if (choices.isPending) return <Loading />;
   return (
     <div className="grid gap-6 xl:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
       <div className="space-y-6">
         <Panel title="Rule profile">
-          {choices.error ? <ErrorNotice error={choices.error} /> : <RuleProfilePicker choices={choices.data.jurisdictions} value={jurisdictionId} onChange={setJurisdictionId} />}
+          {ruleProfile.picker}
           {checks.length > 0 && (
             <div className="mt-4 flex flex-wrap gap-2">
               <span className="self-center text-sm text-stone-600">Survey again from</span>
@@ -65,14 +67,14 @@ export function GradeCheckWorkspace({ request, checks }: { request: GradeCheckRe
       </div>
       <div className="space-y-6">
         <Panel title="Live check" actions={
-          <Button disabled={!live.ready || !chosen?.currentVersionId || save.isPending}
-            onClick={() => live.inputs && chosen?.currentVersionId && save.mutate({ requestId: request.id, ruleProfileVersionId: chosen.currentVersionId, inputs: live.inputs })}>
+          <Button disabled={!live.ready || !versionId || save.isPending}
+            onClick={() => live.inputs && versionId && save.mutate({ requestId: request.id, ruleProfileVersionId: versionId, inputs: live.inputs })}>
             {save.isPending ? 'Saving…' : 'Save this check'}
           </Button>
         }>
           {save.isSuccess && <p role="status" className="mb-3 text-sm font-semibold text-pine-800">Saved as check {save.data.check.number}.</p>}
           <ErrorNotice error={save.error} />
-          {!rules ? <p className="text-sm text-stone-500">{version.isFetching ? 'Loading the rule profile…' : 'Choose the rule profile to check against.'}</p> : <LiveResult live={live} rules={rules} />}
+          {!rules ? <p className="text-sm text-stone-500">{ruleProfile.loadingRules ? 'Loading the rule profile…' : 'Choose the rule profile to check against.'}</p> : <LiveResult live={live} rules={rules} />}
         </Panel>
         {rules && (
           <Panel title="Compliant profile">

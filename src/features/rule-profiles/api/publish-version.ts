@@ -9,8 +9,9 @@ export function usePublishVersion(jurisdictionId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: publishVersion,
-    onSuccess: () => Promise.all([
+    onSuccess: (_data, versionId) => Promise.all([
       queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
+      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.version(versionId) }),
       queryClient.invalidateQueries({ queryKey: ruleProfileKeys.list() }),
     ]),
   });

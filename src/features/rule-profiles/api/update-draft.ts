@@ -9,5 +9,11 @@ export const updateDraft = ({ versionId, ...body }: { versionId: string; profile
 
 export function useUpdateDraft(jurisdictionId: string) {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: updateDraft, onSuccess: () => queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }) });
+  return useMutation({
+    mutationFn: updateDraft,
+    onSuccess: (_data, { versionId }) => Promise.all([
+      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
+      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.version(versionId) }),
+    ]),
+  });
 }

@@ -1,8 +1,8 @@
 import { Field, SelectInput } from '@/components/ui/field';
-import type { JurisdictionChoice } from '../api/get-rule-profile-choices';
+import type { JurisdictionSummary } from '@shared/contracts/rule-profiles';
 
 /** Only published versions make a record; the jurisdiction's current one is used. */
-export function RuleProfilePicker({ choices, value, onChange }: { choices: JurisdictionChoice[]; value: string; onChange: (jurisdictionId: string) => void }) {
+export function RuleProfilePicker({ choices, value, onChange }: { choices: JurisdictionSummary[]; value: string; onChange: (jurisdictionId: string) => void }) {
   const usable = choices.filter((j) => j.currentVersionId);
   return (
     <Field label="Road authority's rule profile" hint="Checks use the authority's current published version.">
