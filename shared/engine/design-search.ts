@@ -8,6 +8,7 @@ import { buildLeastEarthModel, type DesignModel, type Directions, GRADE_MARGIN, 
 import type { Finding } from './findings';
 import { checkProfileRules, type ProfileCheck } from './profile-checks';
 import type { ProfilePoint } from './profile';
+import { firstGradeRange, roadEdgeFinding, roadSidePoints, roadSideWords, type RoadSide, withRoadSide } from './road-edge';
 import type { DesignVehicle, RuleProfile } from './rule-profile';
 import { STATION_TOLERANCE_FT } from './station-tolerance';
 
@@ -25,6 +26,10 @@ interface Job {
   targetEndFt: number | undefined;
   scrapeStepFt: number;
   margin: number;
+  /** The road side, when given: the break at the road edge and the scrape over it are held like any other. */
+  road?: RoadSide;
+  /** The road side's fixed points in front of the road edge. */
+  before?: ProfilePoint[];
 }
 
 const MAX_TIGHTENING = 8;
@@ -73,6 +78,27 @@ interface Layout {
   program?: DesignProgram;
 }
 
+/** The profile rules as checkEntrance applies them, the road side's break and scrape included when it is given. */
+function checkDesign(design: readonly ProfilePoint[], job: Job): ProfileCheck {
+  const edge = design[0].stationFt;
+  const check = checkProfileRules(withRoadSide(design, edge, job.road, job.rules.designVehicle), job.rules, edge, job.scrapeStepFt, design);
+  if (!job.road) return check;
+  return { ...check, findings: [...check.findings, roadEdgeFinding(design, edge, job.road, job.rules)] };
+}
+
+/** Segment ranges with the first grade held to what the break at the road edge allows. */
+function withRoadEdge(ranges: SegmentRanges[], job: Job): SegmentRanges[] {
+  if (!job.road || ranges.length === 0) return ranges;
+  const edge = firstGradeRange(job.road, job.rules);
+  const cut = (r: { lo: number; hi: number } | null) => {
+    if (!r) return null;
+    const lo = Math.max(r.lo, edge.lo);
+    const hi = Math.min(r.hi, edge.hi);
+    return lo <= hi ? { lo, hi } : null;
+  };
+  return [{ ...ranges[0], rise: cut(ranges[0].rise), fall: cut(ranges[0].fall) }, ...ranges.slice(1)];
+}
+
 function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Float64Array | undefined, directions: Directions): Attempt {
   const { ground, vertices, program } = layout;
   let built: DesignModel;
@@ -81,7 +107,7 @@ function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Flo
     built = program.built;
     out = program.solve(share, directions);
   } else {
-    const budget = share ? { vehicle: job.rules.designVehicle, share } : undefined;
+    const budget = share ? { vehicle: job.rules.designVehicle, share, before: job.before } : undefined;
     built = buildLeastEarthModel(ground, vertices, ranges, job.rules, job.roadEdgeFt, job.targetEndFt, budget, directions, job.margin);
     out = solveLinear(job.highs, built.model);
   }
@@ -89,7 +115,7 @@ function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Flo
   const design = built.read(out.x);
   let verdict: Verdict | undefined;
   const judge = () => {
-    const check = checkProfileRules(design, job.rules, design[0].stationFt, job.scrapeStepFt);
+    const check = checkDesign(design, job);
     return { check, failing: check.findings.filter((f) => f.status === 'fail') };
   };
   return { status: 'solved', design, rising: built.rising(out.x), verdict: () => (verdict ??= judge()) };
@@ -177,11 +203,12 @@ function tighten(share: Float64Array, vertices: readonly ProfilePoint[], station
 function designOn(job: Job, bare: Layout): DesignFound {
   const { ground } = bare;
   const corners = bare.vertices.map((i) => ground[i]);
-  const ranges = segmentRanges(corners, job.rules);
+  const ranges = withRoadEdge(segmentRanges(corners, job.rules), job);
+  if (ranges.length > 0 && !ranges[0].rise && !ranges[0].fall) return { ground, reason: roadEdgeReason(job) };
   const reason = explainInfeasible(corners, ranges, job.rules, job.roadEdgeFt, job.targetEndFt);
   if (reason) return { ground, reason };
-  const { rules, roadEdgeFt, targetEndFt, margin } = job;
-  const program = new DesignProgram(job.highs, { ground, vertices: bare.vertices, ranges, rules, roadEdgeFt, targetEndFt, margin });
+  const { rules, roadEdgeFt, targetEndFt, margin, before } = job;
+  const program = new DesignProgram(job.highs, { ground, vertices: bare.vertices, ranges, rules, roadEdgeFt, targetEndFt, margin, before });
   try {
     return designWith(job, { ...bare, program }, corners, ranges);
   } finally {
@@ -247,12 +274,20 @@ function drainsEverywhere(points: readonly ProfilePoint[]): boolean {
   return true;
 }
 
+function roadEdgeReason(job: Job): string {
+  const { landing, maxGradeChangePercent } = job.rules;
+  return (
+    `no first grade within the landing's ${landing.minGradePercent}% to ${landing.maxGradePercent}% keeps the break at the road edge ` +
+    `within the ${maxGradeChangePercent}% grade-change limit (${roadSideWords(job.road!)})`
+  );
+}
+
 /** Ground that already meets every limit from the given road edge to the given end is the least-earth design. */
 function alreadyComplies(survey: readonly ProfilePoint[], job: Job): boolean {
   const last = survey[survey.length - 1].elevationFt;
   if (survey[0].elevationFt !== job.roadEdgeFt || (job.targetEndFt !== undefined && last !== job.targetEndFt)) return false;
   if (!drainsEverywhere(survey)) return false;
-  return checkProfileRules(survey, job.rules, survey[0].stationFt, job.scrapeStepFt).findings.every((f) => f.status !== 'fail');
+  return checkDesign(survey, job).findings.every((f) => f.status !== 'fail');
 }
 
 export function searchDesign(
@@ -262,8 +297,10 @@ export function searchDesign(
   roadEdgeFt: number,
   targetEndFt: number | undefined,
   scrapeStepFt: number,
+  road?: RoadSide,
 ): DesignFound {
-  const job: Job = { highs, rules, roadEdgeFt, targetEndFt, scrapeStepFt, margin: GRADE_MARGIN };
+  const before = road ? roadSidePoints({ stationFt: survey[0].stationFt, elevationFt: roadEdgeFt }, road, rules.designVehicle) : undefined;
+  const job: Job = { highs, rules, roadEdgeFt, targetEndFt, scrapeStepFt, margin: GRADE_MARGIN, road, before };
   // Checked as surveyed: a landing station added to straight ground could make a rule apply that did not before.
   if (alreadyComplies(survey, job)) return { ground: [...survey], design: survey.map((p) => ({ ...p })) };
   // The design needs a station where the landing ends so it can break there rather than at the next shot.
