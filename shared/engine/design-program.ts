@@ -12,6 +12,8 @@ export interface ProgramSpec {
   roadEdgeFt: number;
   targetEndFt: number | undefined;
   margin: number;
+  /** The road side in front of the first station, fixed, for the clearance rows. */
+  before?: readonly ProfilePoint[];
 }
 
 /**
@@ -27,7 +29,7 @@ export class DesignProgram {
 
   constructor(highs: Highs, spec: ProgramSpec) {
     const share = new Float64Array(spec.vertices.length).fill(1);
-    const budget = { vehicle: spec.rules.designVehicle, share };
+    const budget = { vehicle: spec.rules.designVehicle, share, before: spec.before };
     this.built = buildLeastEarthModel(spec.ground, spec.vertices, spec.ranges, spec.rules, spec.roadEdgeFt, spec.targetEndFt, budget, 'relaxed', spec.margin);
     this.open = openLinear(highs, this.built.model);
   }
@@ -43,7 +45,7 @@ export class DesignProgram {
       // A tighter clearance at the same crest starts from where that crest left off.
       if (this.relaxedBasis && directions !== this.last) this.open.restoreBasis(this.relaxedBasis);
     }
-    const upper = Float64Array.from(c.vertex, (v) => (share ? c.clearanceFt * share[v] : Infinity));
+    const upper = Float64Array.from(c.vertex, (v, r) => (share ? c.clearanceFt * share[v] - c.fixedFt[r] : Infinity));
     this.open.setRowBounds(c.first, new Float64Array(upper.length).fill(-Infinity), upper);
     const out = this.open.run();
     this.last = directions;

@@ -1,4 +1,5 @@
 import type { Highs } from 'highs';
+import { clearanceBreaks, crestStation, drainsEverywhere, earthMoved, tighten } from './design-measures';
 import { DesignProgram } from './design-program';
 import { solveLinear, type SolveOutcome } from './design-solver';
 import { transitionStations, withStations } from './design-stations';
@@ -6,8 +7,10 @@ import { designVertices, type FineStretch } from './design-vertices';
 import { crestAllowed, explainInfeasible } from './infeasible-reason';
 import { buildLeastEarthModel, type DesignModel, type Directions, GRADE_MARGIN, segmentRanges, type SegmentRanges } from './least-earth-model';
 import type { Finding } from './findings';
-import { checkProfileRules, type ProfileCheck } from './profile-checks';
+import type { ProfileCheck } from './profile-checks';
 import type { ProfilePoint } from './profile';
+import { checkDesign, roadEdgeReason, withRoadEdge } from './design-road-side';
+import { roadSidePoints, type RoadSide } from './road-edge';
 import type { DesignVehicle, RuleProfile } from './rule-profile';
 import { STATION_TOLERANCE_FT } from './station-tolerance';
 
@@ -25,25 +28,19 @@ interface Job {
   targetEndFt: number | undefined;
   scrapeStepFt: number;
   margin: number;
+  /** The road side, when given: the break at the road edge and the scrape over it are held like any other. */
+  road?: RoadSide;
+  /** The road side's fixed points in front of the road edge. */
+  before?: ProfilePoint[];
+  /** Hand back the first solution without the exact check (see searchDesign). */
+  unchecked?: boolean;
 }
 
 const MAX_TIGHTENING = 8;
-const TIGHTEN = 0.7;
 // The first attempts tighten only where the exact check scraped; after these, everywhere, so the loop ends.
 const LOCAL_ATTEMPTS = 3;
 // Transition stations may double a long survey's stations at most.
 const MAX_DESIGN_STATIONS = 4_000;
-
-/** The earth objective itself: |design - ground| integrated along the stations (trapezoids). */
-export function earthMoved(ground: readonly ProfilePoint[], design: readonly ProfilePoint[]): number {
-  let sum = 0;
-  for (let i = 0; i < ground.length - 1; i++) {
-    const a = Math.abs(design[i].elevationFt - ground[i].elevationFt);
-    const b = Math.abs(design[i + 1].elevationFt - ground[i + 1].elevationFt);
-    sum += ((a + b) / 2) * (ground[i + 1].stationFt - ground[i].stationFt);
-  }
-  return sum;
-}
 
 const scrapeReason = (v: DesignVehicle) => `no profile keeps a ${v.name.toLowerCase()} from scraping while meeting the other limits`;
 
@@ -81,7 +78,7 @@ function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Flo
     built = program.built;
     out = program.solve(share, directions);
   } else {
-    const budget = share ? { vehicle: job.rules.designVehicle, share } : undefined;
+    const budget = share ? { vehicle: job.rules.designVehicle, share, before: job.before } : undefined;
     built = buildLeastEarthModel(ground, vertices, ranges, job.rules, job.roadEdgeFt, job.targetEndFt, budget, directions, job.margin);
     out = solveLinear(job.highs, built.model);
   }
@@ -89,7 +86,7 @@ function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Flo
   const design = built.read(out.x);
   let verdict: Verdict | undefined;
   const judge = () => {
-    const check = checkProfileRules(design, job.rules, design[0].stationFt, job.scrapeStepFt);
+    const check = checkDesign(design, job.rules, job.road, job.scrapeStepFt);
     return { check, failing: check.findings.filter((f) => f.status === 'fail') };
   };
   return { status: 'solved', design, rising: built.rising(out.x), verdict: () => (verdict ??= judge()) };
@@ -160,28 +157,16 @@ function chooseCrest(job: Job, layout: Layout, ranges: SegmentRanges[], share: F
   return mip.status === 'solved' ? { out: mip, k: risingCount(mip.rising, 0.5) } : { out: mip };
 }
 
-/** Lowers the clearance share of every window that could sit under the vehicle where it scraped. */
-function tighten(share: Float64Array, vertices: readonly ProfilePoint[], stationFt: number, v: DesignVehicle, local: boolean): void {
-  const reach = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
-  let any = false;
-  for (let i = 0; i < vertices.length; i++) {
-    if (local && Math.abs(vertices[i].stationFt - stationFt) <= reach) {
-      share[i] *= TIGHTEN;
-      any = true;
-    }
-  }
-  if (!any || !local) share.forEach((s, i) => (share[i] = s * TIGHTEN));
-}
-
 /** Clearance in the model, then the exact scrape check; where it still scrapes, that neighbourhood is tightened. */
 function designOn(job: Job, bare: Layout): DesignFound {
   const { ground } = bare;
   const corners = bare.vertices.map((i) => ground[i]);
-  const ranges = segmentRanges(corners, job.rules);
+  const ranges = withRoadEdge(segmentRanges(corners, job.rules), job.road, job.rules);
+  if (job.road && ranges.length > 0 && !ranges[0].rise && !ranges[0].fall) return { ground, reason: roadEdgeReason(job.rules, job.road) };
   const reason = explainInfeasible(corners, ranges, job.rules, job.roadEdgeFt, job.targetEndFt);
   if (reason) return { ground, reason };
-  const { rules, roadEdgeFt, targetEndFt, margin } = job;
-  const program = new DesignProgram(job.highs, { ground, vertices: bare.vertices, ranges, rules, roadEdgeFt, targetEndFt, margin });
+  const { rules, roadEdgeFt, targetEndFt, margin, before } = job;
+  const program = new DesignProgram(job.highs, { ground, vertices: bare.vertices, ranges, rules, roadEdgeFt, targetEndFt, margin, before });
   try {
     return designWith(job, { ...bare, program }, corners, ranges);
   } finally {
@@ -203,6 +188,7 @@ function designWith(job: Job, layout: Layout, corners: ProfilePoint[], ranges: S
       k = pick.k;
     }
     if (out.status === 'failed') return { ground, reason: `no design was found within the solver's search limit (${out.detail}); the limits may still allow one` };
+    if (job.unchecked) return out.status === 'solved' ? { ground, design: out.design } : { ground, reason: 'not solved' };
     if (out.status === 'infeasible') {
       // The clearance limits are linear estimates; without them the programme says whether the rest can be met.
       const free = chooseCrest(job, layout, ranges, undefined, allowed).out;
@@ -220,39 +206,15 @@ function designWith(job: Job, layout: Layout, corners: ProfilePoint[], ranges: S
   return { ground, reason: scrapeReason(job.rules.designVehicle) };
 }
 
-/** Breaks that use more than half of what one break may take under the vehicle: where a short curve may be cheaper. */
-function clearanceBreaks(design: readonly ProfilePoint[], v: DesignVehicle): number[] {
-  const c = v.clearanceIn / 12;
-  const crest = (4 * c) / v.wheelbaseFt;
-  const overhang = Math.max(v.frontOverhangFt, v.rearOverhangFt);
-  const sag = overhang > 0 ? c / overhang : Infinity;
-  const out: number[] = [];
-  for (let i = 1; i < design.length - 1; i++) {
-    const g0 = (design[i].elevationFt - design[i - 1].elevationFt) / (design[i].stationFt - design[i - 1].stationFt);
-    const g1 = (design[i + 1].elevationFt - design[i].elevationFt) / (design[i + 1].stationFt - design[i].stationFt);
-    const a = g1 - g0;
-    if (a < -crest / 2 || a > sag / 2) out.push(design[i].stationFt);
-  }
-  return out;
-}
-
-/** Rises and then falls at most once, so no low point holds water (the shape every design is given). */
-function drainsEverywhere(points: readonly ProfilePoint[]): boolean {
-  let fallen = false;
-  for (let i = 0; i < points.length - 1; i++) {
-    const d = points[i + 1].elevationFt - points[i].elevationFt;
-    if (d < 0) fallen = true;
-    else if (d > 0 && fallen) return false;
-  }
-  return true;
-}
+const passes = (design: readonly ProfilePoint[], job: Job) =>
+  checkDesign(design, job.rules, job.road, job.scrapeStepFt).findings.every((f) => f.status !== 'fail');
 
 /** Ground that already meets every limit from the given road edge to the given end is the least-earth design. */
 function alreadyComplies(survey: readonly ProfilePoint[], job: Job): boolean {
   const last = survey[survey.length - 1].elevationFt;
   if (survey[0].elevationFt !== job.roadEdgeFt || (job.targetEndFt !== undefined && last !== job.targetEndFt)) return false;
   if (!drainsEverywhere(survey)) return false;
-  return checkProfileRules(survey, job.rules, survey[0].stationFt, job.scrapeStepFt).findings.every((f) => f.status !== 'fail');
+  return passes(survey, job);
 }
 
 export function searchDesign(
@@ -262,8 +224,10 @@ export function searchDesign(
   roadEdgeFt: number,
   targetEndFt: number | undefined,
   scrapeStepFt: number,
+  road?: RoadSide,
 ): DesignFound {
-  const job: Job = { highs, rules, roadEdgeFt, targetEndFt, scrapeStepFt, margin: GRADE_MARGIN };
+  const before = road ? roadSidePoints({ stationFt: survey[0].stationFt, elevationFt: roadEdgeFt }, road, rules.designVehicle) : undefined;
+  const job: Job = { highs, rules, roadEdgeFt, targetEndFt, scrapeStepFt, margin: GRADE_MARGIN, road, before };
   // Checked as surveyed: a landing station added to straight ground could make a rule apply that did not before.
   if (alreadyComplies(survey, job)) return { ground: [...survey], design: survey.map((p) => ({ ...p })) };
   // The design needs a station where the landing ends so it can break there rather than at the next shot.
@@ -273,30 +237,45 @@ export function searchDesign(
   // Added stations (the landing's end, a curve's) are always vertices; so is a shot within tolerance of the landing's end.
   const keep = new Set(ground.map((p) => p.stationFt).filter((s) => !surveyed.has(s) || Math.abs(s - landingEnd) < STATION_TOLERANCE_FT));
   const coarse: Layout = { ground, vertices: designVertices(ground, keep) };
+  const curves = (found: DesignFound, base: Layout) => curved(job, found, base, keep, surveyed);
+  // The curves are placed from the first solution before its exact check. A curved design that moves less earth
+  // than that solution also beats whatever the check and tightening would make of it (they only add earth), so
+  // the coarse design is then never checked; if that solution passes the check as it is, it is the first design.
+  const quick = designOn({ ...job, unchecked: true }, coarse);
+  if (quick.design) {
+    const second = curves(quick, coarse);
+    if (second) return second;
+    if (passes(quick.design, job)) return quick;
+  }
   let first = designWithMargin(job, coarse);
+  let base = coarse;
   // Fewer vertices restrict the design; before saying no design exists, every station is given a vertex.
-  if (!first.design && coarse.vertices.length < ground.length) first = designWithMargin(job, { ground, vertices: ground.map((_, i) => i) });
-  const v = rules.designVehicle;
-  const breaks = first.design ? clearanceBreaks(first.design, v) : [];
-  if (!first.design || breaks.length === 0) return first;
-  // A short vertical curve over stations a fraction of the wheelbase apart often clears with less earth than
-  // holding one sharp break to the single-break limit.
+  if (!first.design && coarse.vertices.length < ground.length) {
+    base = { ground, vertices: ground.map((_, i) => i) };
+    first = designWithMargin(job, base);
+  }
+  return (first.design && curves(first, base)) || first;
+}
+
+/**
+ * A short vertical curve over stations a fraction of the wheelbase apart often clears with less earth than
+ * holding one sharp break to the single-break limit: the design on stations added around the breaks that use
+ * more than half of what one break may take, when it moves less earth than `first`.
+ */
+function curved(job: Job, first: DesignFound, base: Layout, keep: ReadonlySet<number>, surveyed: ReadonlySet<number>): DesignFound | undefined {
+  const v = job.rules.designVehicle;
+  const { ground } = base;
+  const breaks = clearanceBreaks(first.design!, v);
+  if (breaks.length === 0) return undefined;
   const radius = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
   const step = v.wheelbaseFt / 8;
   const dense = withStations(ground, transitionStations(ground, breaks, radius, step, MAX_DESIGN_STATIONS - ground.length), step / 2);
   const fine: FineStretch[] = breaks.map((b) => ({ fromFt: b - radius, toFt: b + radius, stepFt: step }));
   const denseKeep = new Set([...keep, ...dense.map((p) => p.stationFt).filter((s) => !surveyed.has(s))]);
-  const curved: Layout = { ground: dense, vertices: designVertices(dense, denseKeep, fine), crestFt: crestStation(first.design) };
-  if (dense.length === ground.length && curved.vertices.length === coarse.vertices.length) return first;
-  const second = designOn(job, curved);
-  if (second.design && earthMoved(dense, second.design) < earthMoved(first.ground, first.design) - 1e-9) return second;
-  return first;
-}
-
-/** The first station at the design's highest point: everything before it rises, everything after falls. */
-function crestStation(design: readonly ProfilePoint[]): number {
-  const top = Math.max(...design.map((p) => p.elevationFt));
-  return design.find((p) => p.elevationFt >= top - 1e-9)!.stationFt;
+  const layout: Layout = { ground: dense, vertices: designVertices(dense, denseKeep, fine), crestFt: crestStation(first.design!) };
+  if (dense.length === ground.length && layout.vertices.length === base.vertices.length) return undefined;
+  const second = designOn(job, layout);
+  return second.design && earthMoved(dense, second.design) < earthMoved(first.ground, first.design!) - 1e-9 ? second : undefined;
 }
 
 /** Only a design sitting exactly on a limit needs the margin gone; the exact check still has the last word. */

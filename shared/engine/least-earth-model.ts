@@ -56,8 +56,8 @@ export interface DesignModel {
   rising(x: Float64Array): Float64Array;
   /** The direction columns (one per vertex segment, from `first`) and the bounds they were built with. */
   directionCols: { first: number; lower: Float64Array; upper: Float64Array };
-  /** The clearance rows (from `first`): the vertex each belongs to and the clearance that share scales. */
-  clearance: { first: number; vertex: Int32Array; clearanceFt: number };
+  /** The clearance rows (from `first`): the vertex each belongs to, the clearance that share scales and each row's fixed part. */
+  clearance: { first: number; vertex: Int32Array; clearanceFt: number; fixedFt: Float64Array };
 }
 
 /**
@@ -147,6 +147,6 @@ export function buildLeastEarthModel(
     read,
     rising: (solution) => solution.slice(R(0), R(0) + m - 1),
     directionCols: { first: R(0), lower: colLower.slice(R(0), R(0) + m - 1), upper: colUpper.slice(R(0), R(0) + m - 1) },
-    clearance: { first: firstClearance, vertex: Int32Array.from(clearance, (r) => r.vertex), clearanceFt: rules.designVehicle.clearanceIn / 12 },
+    clearance: { first: firstClearance, vertex: Int32Array.from(clearance, (r) => r.vertex), clearanceFt: rules.designVehicle.clearanceIn / 12, fixedFt: Float64Array.from(clearance, (r) => r.fixedFt) },
   };
 }

@@ -6,6 +6,7 @@ import { bounded, elevationFt } from './numbers';
 import { normalizeParsedProfile, profileInputSchema, type ProfilePoint } from './profile';
 import { type RuleProfile, type RuleProfileInput, ruleProfileSchema } from './rule-profile';
 import { searchDesign } from './design-search';
+import { roadSideInputSchema } from './road-edge';
 import { ENGINE_VERSION } from './version';
 
 export const proposeProfileInputSchema = z.object({
@@ -16,6 +17,9 @@ export const proposeProfileInputSchema = z.object({
   // 12 ft top and 2:1 slopes: common practice (no source) for a single-car rural entrance.
   template: sectionTemplateSchema.default({ topWidthFt: 12, cutSlopeHPerV: 2, fillSlopeHPerV: 2, groundCrossSlopePercent: 0 }),
   scrapeStepFt: bounded(0.01, 10).default(0.1),
+  // The road's cross slope or shoulder in front of the road edge: the design then keeps the break there and the
+  // scrape over it within the limits, as checkEntrance checks them with the same road side.
+  roadSide: roadSideInputSchema.optional(),
 });
 export type ProposeProfileInput = z.input<typeof proposeProfileInputSchema>;
 
@@ -51,7 +55,7 @@ export async function proposeProfile(input: ProposeProfileInput, ruleProfile: Ru
   if (ground.length > MAX_STATIONS) {
     throw new EngineInputError('existing', `at most ${MAX_STATIONS} stations can be designed at once (got ${ground.length})`);
   }
-  const found = searchDesign(await designSolver(), ground, rules, p.roadEdgeElevationFt, p.targetEndElevationFt, p.scrapeStepFt);
+  const found = searchDesign(await designSolver(), ground, rules, p.roadEdgeElevationFt, p.targetEndElevationFt, p.scrapeStepFt, p.roadSide);
   if (!found.design) {
     return { engineVersion: ENGINE_VERSION, feasible: false, reason: found.reason, profile: [], cutFillByStation: [], cutCuYd: 0, fillCuYd: 0 };
   }

@@ -21,7 +21,7 @@ export const roadSideInputSchema = z
     path: ['shoulderSlopePercent'],
   });
 export type RoadSideInput = z.input<typeof roadSideInputSchema>;
-type RoadSide = z.output<typeof roadSideInputSchema>;
+export type RoadSide = z.output<typeof roadSideInputSchema>;
 
 const RULE = { ruleId: 'grade.road-edge-change', label: 'Grade change at the road edge', unit: '%' };
 
@@ -36,6 +36,11 @@ const approachGradePercent = (r: RoadSide) => -(r.shoulderWidthFt > 0 ? r.should
 export function withRoadSide(points: readonly ProfilePoint[], roadEdgeFt: number, road: RoadSide | undefined, vehicle: DesignVehicle): readonly ProfilePoint[] {
   if (!road) return points;
   const edge = edgePoint(points, roadEdgeFt);
+  return [...roadSidePoints(edge, road, vehicle), edge, ...pastEdge(points, roadEdgeFt)];
+}
+
+/** The road side's own points in front of the road edge (lane start, then the shoulder's outer edge if any). */
+export function roadSidePoints(edge: ProfilePoint, road: RoadSide, vehicle: DesignVehicle): ProfilePoint[] {
   const laneRunFt = vehicle.wheelbaseFt + vehicle.frontOverhangFt + vehicle.rearOverhangFt;
   const front: ProfilePoint[] = [];
   let at = edge;
@@ -44,8 +49,18 @@ export function withRoadSide(points: readonly ProfilePoint[], roadEdgeFt: number
     front.unshift(at);
   }
   front.unshift({ stationFt: at.stationFt - laneRunFt, elevationFt: at.elevationFt + (road.roadCrossSlopePercent / 100) * laneRunFt });
-  return [...front, edge, ...pastEdge(points, roadEdgeFt)];
+  return front;
 }
+
+/** The first grade past the road edge (a fraction) that keeps the break there within the grade-change limit. */
+export function firstGradeRange(road: RoadSide, rules: RuleProfile): { lo: number; hi: number } {
+  const approach = approachGradePercent(road);
+  return { lo: (approach - rules.maxGradeChangePercent) / 100, hi: (approach + rules.maxGradeChangePercent) / 100 };
+}
+
+/** The road side in words, as the road-edge finding and the proposal's reasons say it. */
+export const roadSideWords = (road: RoadSide) =>
+  road.shoulderWidthFt > 0 ? slopeWords(road.shoulderSlopePercent!, 'shoulder') : slopeWords(road.roadCrossSlopePercent, 'road');
 
 /** The road edge as a profile point: a shot a floating-point hair from the edge station is the edge, not a new segment. */
 export function edgePoint(points: readonly ProfilePoint[], roadEdgeFt: number): ProfilePoint {
@@ -66,7 +81,7 @@ export function roadEdgeFinding(points: readonly ProfilePoint[], roadEdgeFt: num
   if (!first) return notChecked(RULE, 'the survey ends at the road edge');
   const edge = edgePoint(points, roadEdgeFt);
   const landingPercent = ((first.elevationFt - edge.elevationFt) / (first.stationFt - edge.stationFt)) * 100;
-  const side = road.shoulderWidthFt > 0 ? slopeWords(road.shoulderSlopePercent!, 'shoulder') : slopeWords(road.roadCrossSlopePercent, 'road');
+  const side = roadSideWords(road);
   const landing = `the landing ${landingPercent >= 0 ? 'rises' : 'falls'} ${Math.abs(Math.round(landingPercent * 100) / 100)}%`;
   const change = Math.abs(landingPercent - approachGradePercent(road));
   return atMost({ ...RULE, stationFt: roadEdgeFt, note: `${side}; ${landing}` }, change, rules.maxGradeChangePercent);

@@ -12,14 +12,24 @@ export class SparseRows {
 
   /** Terms as [column, coefficient]; a column named twice has its coefficients summed. */
   add(terms: readonly (readonly [number, number])[], lower: number, upper: number): void {
-    const merged = new Map<number, number>();
-    for (const [col, k] of terms) merged.set(col, (merged.get(col) ?? 0) + k);
-    for (const [col, k] of merged) {
-      if (k === 0) continue;
-      this.indices.push(col);
-      this.values.push(k);
+    // Rows hold a handful of terms, so a scan of the row so far merges repeats faster than a map per row.
+    const start = this.indices.length;
+    for (const [col, k] of terms) {
+      let at = start;
+      while (at < this.indices.length && this.indices[at] !== col) at++;
+      if (at === this.indices.length) {
+        this.indices.push(col);
+        this.values.push(k);
+      } else this.values[at] += k;
     }
-    this.starts.push(this.indices.length);
+    let kept = start;
+    for (let at = start; at < this.indices.length; at++) {
+      if (this.values[at] === 0) continue;
+      this.indices[kept] = this.indices[at];
+      this.values[kept++] = this.values[at];
+    }
+    this.indices.length = this.values.length = kept;
+    this.starts.push(kept);
     this.lower.push(lower);
     this.upper.push(upper);
   }

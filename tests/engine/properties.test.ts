@@ -34,6 +34,17 @@ const designRulesArb: fc.Arbitrary<RuleProfile> = fc
   .tuple(rulesArb, fc.option(fc.double({ min: 0.5, max: 3, noNaN: true }), { nil: undefined }))
   .map(([rules, drain]) => (drain === undefined ? rules : { ...rules, minDrainageGradePercent: drain }));
 
+// A road side in front of the road edge: a crown or a banked road, sometimes a shoulder (slopes + fall toward the edge).
+const roadSideArb = fc.option(
+  fc.record({
+    roadCrossSlopePercent: fc.double({ min: -6, max: 6, noNaN: true }),
+    shoulder: fc.option(fc.tuple(fc.double({ min: 1, max: 10, noNaN: true }), fc.double({ min: -10, max: 10, noNaN: true })), { nil: undefined }),
+  }).map(({ roadCrossSlopePercent, shoulder }) =>
+    shoulder ? { roadCrossSlopePercent, shoulderWidthFt: shoulder[0], shoulderSlopePercent: shoulder[1] } : { roadCrossSlopePercent },
+  ),
+  { nil: undefined },
+);
+
 const GRADE_RULES = ['landing.max-grade', 'landing.min-grade', 'grade.max', 'grade.max-change', 'scrape.clearance'];
 
 /** Every number anywhere in a result must be finite: the engine never hands back NaN or Infinity. */
@@ -63,24 +74,25 @@ describe('properties', () => {
     );
   });
 
-  it('a proposed profile always passes the profile rules of checkEntrance', async () => {
+  it('a proposed profile always passes the profile rules of checkEntrance, with the same road side', async () => {
     await fc.assert(
       fc.asyncProperty(
         fc.array(fc.tuple(fc.double({ min: 2, max: 20, noNaN: true }), fc.double({ min: -25, max: 25, noNaN: true })), { minLength: 3, maxLength: 25 }),
         rulesArb,
         fc.double({ min: -1, max: 1, noNaN: true }),
         fc.option(fc.double({ min: -3, max: 3, noNaN: true }), { nil: undefined }),
-        async (rs, rules, roadOffset, endOffset) => {
+        roadSideArb,
+        async (rs, rules, roadOffset, endOffset, roadSide) => {
           const existing = toProfile(rs);
           const end = existing[existing.length - 1].elevationFt;
           const targetEndElevationFt = endOffset === undefined ? undefined : end + endOffset;
-          const r = await proposeProfile({ existing, roadEdgeElevationFt: 100 + roadOffset, targetEndElevationFt }, rules);
+          const r = await proposeProfile({ existing, roadEdgeElevationFt: 100 + roadOffset, targetEndElevationFt, roadSide }, rules);
           if (!r.feasible) {
             expect(r.reason).toBeTruthy();
             return;
           }
           if (targetEndElevationFt !== undefined) expect(r.profile[r.profile.length - 1].elevationFt).toBeCloseTo(targetEndElevationFt, 6);
-          const check = checkEntrance({ profile: r.profile }, rules);
+          const check = checkEntrance({ profile: r.profile, roadSide }, rules);
           const failed = check.findings.filter((f) => f.status === 'fail');
           expect(failed).toEqual([]);
           expect(holdsWater(r.profile)).toBe(false);
