@@ -48,8 +48,10 @@ export function checkWithoutProposal(inputs: GradeCheckInputs, rules: RuleProfil
   const results: GradeCheckResults = { report: attempt('', () => checkEntrance(check, rules)) };
   if (laser) results.laser = attempt('laser', () => laserSetup(laser));
   if (!design) return { results };
-  const { applied, haul: _haul, ...designRequest } = design;
+  const { applied, haul: _haul, ...designPart } = design;
   if (applied) results.surveyed = attempt('design.existing', () => checkEntrance({ ...check, profile: design.existing }, rules));
+  // The proposal is held to the road-edge break and scrape the check itself applies with the road side typed.
+  const designRequest = { ...designPart, roadSide: designPart.roadSide ?? check.roadSide };
   return { results, designRequest };
 }
 
