@@ -1,6 +1,8 @@
 import js from '@eslint/js';
 import checkFile from 'eslint-plugin-check-file';
 import importPlugin from 'eslint-plugin-import';
+import jsxA11y from 'eslint-plugin-jsx-a11y';
+import reactHooks from 'eslint-plugin-react-hooks';
 import { readdirSync } from 'node:fs';
 import tseslint from 'typescript-eslint';
 
@@ -10,6 +12,11 @@ export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', '.data/**', 'test-artifacts/**', 'drizzle/**'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
+  // The hooks rules (including the compiler's checks of refs, state and effects) and the JSX accessibility rules.
+  { files: ['src/**/*.{ts,tsx}'], ...reactHooks.configs.flat['recommended-latest'] },
+  { files: ['src/**/*.{ts,tsx}'], ...jsxA11y.flatConfigs.recommended },
+  // Only says which components the React Compiler would skip (react-hook-form's watch, TanStack Table); we do not run it.
+  { files: ['src/**/*.{ts,tsx}'], rules: { 'react-hooks/incompatible-library': 'off' } },
   {
     languageOptions: { ecmaVersion: 2023, sourceType: 'module', globals: { console: 'readonly', process: 'readonly', window: 'readonly', document: 'readonly', fetch: 'readonly', URL: 'readonly', URLSearchParams: 'readonly', setTimeout: 'readonly', clearTimeout: 'readonly' } },
     plugins: { import: importPlugin, 'check-file': checkFile },

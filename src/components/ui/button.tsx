@@ -1,4 +1,4 @@
-import type { ButtonHTMLAttributes } from 'react';
+import type { ComponentProps } from 'react';
 
 type Variant = 'primary' | 'secondary' | 'danger' | 'quiet';
 
@@ -9,7 +9,7 @@ const variants: Record<Variant, string> = {
   quiet: 'text-pine-700 underline-offset-2 hover:underline disabled:text-stone-400',
 };
 
-export function Button({ variant = 'primary', className = '', type = 'button', ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
+export function Button({ variant = 'primary', className = '', type = 'button', ...props }: ComponentProps<'button'> & { variant?: Variant }) {
   return (
     <button
       type={type}

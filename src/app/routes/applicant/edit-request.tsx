@@ -5,7 +5,12 @@ import { paths } from '@/config/paths';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
 import { PhotoStep } from '@/features/photos/components/photo-step';
 import { useRequest } from '@/features/requests/api/get-request';
-import { RequestWizard } from '@/features/requests/components/request-wizard';
+import { RequestWizard, type PhotoSlotProps } from '@/features/requests/components/request-wizard';
+
+// The wizard's photos: added on their step, shown read-only on the summary.
+function WizardPhotos({ requestId, readOnly, onUsePosition }: PhotoSlotProps) {
+  return readOnly ? <PhotoGallery requestId={requestId} /> : <PhotoStep requestId={requestId} onUsePosition={onUsePosition} />;
+}
 
 export function Component() {
   const { id = '' } = useParams();
@@ -16,9 +21,7 @@ export function Component() {
       <PageHeader title="Your driveway entrance request" lead={reference ? `Reference ${reference}. Saved as you go.` : undefined} />
       <RequestWizard requestId={id} requestHref={paths.applicant.request.getHref(id)}
         onSent={(requestId) => navigate(paths.applicant.request.getHref(requestId))}
-        renderPhotos={({ requestId, readOnly, onUsePosition }) => (readOnly
-          ? <PhotoGallery requestId={requestId} />
-          : <PhotoStep requestId={requestId} onUsePosition={onUsePosition} />)} />
+        Photos={WizardPhotos} />
     </RequireRole>
   );
 }

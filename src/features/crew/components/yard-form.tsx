@@ -1,4 +1,4 @@
-import { useEffect, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { Button } from '@/components/ui/button';
 import { Field, TextInput } from '@/components/ui/field';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
@@ -11,10 +11,13 @@ export function YardForm() {
   const yard = useYard();
   const save = useSetYard();
   const [form, setForm] = useState({ label: '', lat: '', lng: '' });
-  useEffect(() => {
+  // The boxes take the saved yard each time it arrives from the server, without an extra render pass.
+  const [shown, setShown] = useState<typeof yard.data>();
+  if (yard.data !== shown) {
+    setShown(yard.data);
     const y = yard.data?.yard;
     if (y) setForm({ label: y.label, lat: String(y.lat), lng: String(y.lng) });
-  }, [yard.data]);
+  }
   const fields = save.error instanceof ApiError ? save.error.fields : {};
   const number = (text: string) => (text.trim() === '' ? Number.NaN : Number(text));
   const submit = (event: FormEvent) => {

@@ -109,6 +109,7 @@ export function useLiveCheck(state: SurveyState, rules: RuleProfile | undefined,
       current = false;
     };
     // The key carries the inputs and the rules; the objects themselves change identity on every render.
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on their content, above
   }, [key]);
   if (!key) return live;
   if (answer?.key !== key) return { ...live, ready: false, designing: true };

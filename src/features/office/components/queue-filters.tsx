@@ -1,4 +1,4 @@
-import { useEffect, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import { statusText, type RequestStatus } from '@shared/workflow/statuses';
 import { Button } from '@/components/ui/button';
 import { useQueueOptions } from '../api/get-queue-options';
@@ -20,7 +20,12 @@ const select = 'rounded-md border border-stone-300 bg-white px-2 py-1.5 text-sm'
 export function QueueFilterBar({ filters, onChange }: { filters: QueueFilters; onChange: (change: Partial<QueueFilters>) => void }) {
   const options = useQueueOptions().data;
   const [search, setSearch] = useState(filters.q);
-  useEffect(() => setSearch(filters.q), [filters.q]);
+  // The box follows the address bar (back, forward, a shared link) while keeping what is being typed otherwise.
+  const [shownQ, setShownQ] = useState(filters.q);
+  if (filters.q !== shownQ) {
+    setShownQ(filters.q);
+    setSearch(filters.q);
+  }
   const submit = (e: FormEvent) => {
     e.preventDefault();
     onChange({ q: search.trim() });

@@ -1,4 +1,4 @@
-import { useEffect, useState, type ReactNode } from 'react';
+import { useState, type ReactNode } from 'react';
 import { UnshowablePhoto } from '@/components/ui/unshowable-photo';
 import { getPhotoUrl, type ListedPhoto } from '../api/get-photos';
 
@@ -19,7 +19,14 @@ export function PhotoImage({ requestId, photo, className, fileLink, onUnshowable
   const [src, setSrc] = useState<string | undefined>(photo.url);
   const [retried, setRetried] = useState(false);
   const [unshowable, setUnshowable] = useState(false);
-  useEffect(() => { setSrc(photo.url); setRetried(false); setUnshowable(false); }, [photo.url]);
+  // A new link from the server starts over: it may load where the last one did not.
+  const [shownUrl, setShownUrl] = useState(photo.url);
+  if (photo.url !== shownUrl) {
+    setShownUrl(photo.url);
+    setSrc(photo.url);
+    setRetried(false);
+    setUnshowable(false);
+  }
   const giveUp = () => { setUnshowable(true); onUnshowable?.(); };
   const refresh = () => {
     if (retried) { giveUp(); return; }

@@ -69,7 +69,10 @@ function buildUppy(props: { current: UploaderProps }) {
 /** The drop area: each photo goes from the browser straight to storage under a URL the server signed for it. */
 export default function PhotoUploader(props: UploaderProps) {
   const latest = useRef(props);
-  latest.current = props;
+  // Uppy's handlers read the latest props when a file finishes; they are never read while rendering.
+  useEffect(() => {
+    latest.current = props;
+  });
   const [uppy, setUppy] = useState<ReturnType<typeof buildUppy> | null>(null);
   useEffect(() => {
     const instance = buildUppy(latest);

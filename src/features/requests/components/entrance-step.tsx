@@ -1,3 +1,4 @@
+import { useImperativeHandle } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
@@ -17,7 +18,8 @@ export function EntranceStepForm({ initial, serverFields, saving, snapshot, onNe
   const { register, handleSubmit, setError, getValues, formState: { errors, isDirty } } = useForm<z.input<typeof entranceStepSchema>, unknown, EntranceStep>({
     resolver: zodResolver(entranceStepSchema), defaultValues: { ...emptyEntrance, ...initial }, shouldFocusError: true,
   });
-  snapshot.current = () => ({ values: getValues(), dirty: isDirty });
+  // The wizard reads the unsaved answers when the person leaves, never while rendering.
+  useImperativeHandle(snapshot, () => () => ({ values: getValues(), dirty: isDirty }), [getValues, isDirty]);
   useServerFields(serverFields, setError);
   // Registered in page order (not inside Field's render prop) so the first error to get focus is the topmost.
   const number = (name: 'drivewayLengthFt' | 'riseToHouseFt', label: string, hint: string) => {

@@ -1,4 +1,4 @@
-import { useEffect, type RefObject } from 'react';
+import { useEffect, type Ref } from 'react';
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import { ApiError } from '@/lib/api-client';
 
@@ -43,7 +43,7 @@ export interface StepProps<T> {
   serverFields?: Record<string, string>;
   saving: boolean;
   /** Lets the wizard read unsaved answers when the person leaves the page. */
-  snapshot: RefObject<(() => StepSnapshot) | null>;
+  snapshot: Ref<() => StepSnapshot>;
   onNext: (values: T) => void;
   onBack?: (values: Partial<T>) => void;
 }

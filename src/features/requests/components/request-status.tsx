@@ -1,4 +1,4 @@
-import { useId, useState, type FormEvent } from 'react';
+import { useEffect, useId, useRef, useState, type FormEvent } from 'react';
 import { Link } from 'react-router';
 import { Button } from '@/components/ui/button';
 import { TextArea } from '@/components/ui/field';
@@ -61,12 +61,17 @@ function AnswerForm({ request, editHref, question }: RequestStatusProps) {
 
 function Withdraw({ onConfirm, pending }: { onConfirm: () => void; pending: boolean }) {
   const [asking, setAsking] = useState(false);
+  const confirm = useRef<HTMLButtonElement>(null);
+  // The question takes focus when it appears, so a keyboard user answers it next.
+  useEffect(() => {
+    if (asking) confirm.current?.focus();
+  }, [asking]);
   if (!asking) return <Button variant="secondary" onClick={() => setAsking(true)}>Withdraw this request</Button>;
   return (
     <Notice tone="warn" title="Withdraw this request?">
       <p>The office stops work on it. This cannot be undone; you would need to start a new request.</p>
       <div className="mt-2 flex gap-2">
-        <Button variant="danger" onClick={onConfirm} disabled={pending} autoFocus>Yes, withdraw</Button>
+        <Button variant="danger" onClick={onConfirm} disabled={pending} ref={confirm}>Yes, withdraw</Button>
         <Button variant="secondary" onClick={() => setAsking(false)}>Keep it</Button>
       </div>
     </Notice>

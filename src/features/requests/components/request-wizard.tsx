@@ -1,5 +1,5 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useEffect, useRef, useState, type ReactNode } from 'react';
+import { type ComponentType, useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router';
 import type { EntranceStep, SiteStep } from '@shared/requests/application-schema';
 import { Button } from '@/components/ui/button';
@@ -27,7 +27,7 @@ export interface PhotoSlotProps {
 interface WizardProps {
   requestId: string;
   /** The photos step comes from the photos feature; the route module passes it in. */
-  renderPhotos: (props: PhotoSlotProps) => ReactNode;
+  Photos: ComponentType<PhotoSlotProps>;
   onSent: (requestId: string) => void;
   requestHref: string;
 }
@@ -43,7 +43,7 @@ export function RequestWizard({ requestId, ...rest }: WizardProps) {
   return <WizardBody key={request.id} request={request} {...rest} />;
 }
 
-function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'requestId'> & { request: RequestView }) {
+function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> & { request: RequestView }) {
   const queryClient = useQueryClient();
   const [step, setStep] = useState(Math.min(Math.max(request.wizardStep, 0), 3));
   const [serverFields, setServerFields] = useState<ReturnType<typeof fieldsByStep>>(null);
@@ -54,7 +54,9 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
   const heading = useRef<HTMLHeadingElement>(null);
   const firstRender = useRef(true);
   const hasServerFields = useRef(false);
-  hasServerFields.current = serverFields !== null;
+  useEffect(() => {
+    hasServerFields.current = serverFields !== null;
+  });
   const save = useSaveDraft();
   const { mutate: saveQuietly } = save;
   const transition = useRunTransition(request.id);
@@ -162,14 +164,14 @@ function WizardBody({ request, renderPhotos, onSent }: Omit<WizardProps, 'reques
         )}
         {step === 2 && (
           <form noValidate onSubmit={(e) => { e.preventDefault(); void persist({}, 3); }} className="space-y-5" aria-label="Photos">
-            {renderPhotos({ requestId: request.id, readOnly: false, onUsePosition: usePosition })}
+            <Photos requestId={request.id} readOnly={false} onUsePosition={usePosition} />
             <StepButtons saving={busy} onBack={() => void persist({}, 1)} />
           </form>
         )}
         {step === 3 && (
           <div className="space-y-6">
             <ApplicationSummary application={latest.application} />
-            {renderPhotos({ requestId: request.id, readOnly: true, onUsePosition: usePosition })}
+            <Photos requestId={request.id} readOnly onUsePosition={usePosition} />
             <p className="text-sm text-stone-600">{request.status === 'needs_details'
               ? 'Your changes are saved. Answer the office’s question on the request page to send it back to them.'
               : 'When you send it, the office gets your request and you get a receipt by e-mail. You can still withdraw it later.'}</p>

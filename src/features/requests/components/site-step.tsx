@@ -1,3 +1,4 @@
+import { useImperativeHandle } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
@@ -18,7 +19,8 @@ export function SiteStepForm({ initial, serverFields, saving, snapshot, onNext }
     resolver: zodResolver(siteStepSchema), defaultValues: { ...emptySite, ...initial }, shouldFocusError: true,
   });
   const { register, handleSubmit, watch, setError, getValues, formState: { errors, isDirty } } = form;
-  snapshot.current = () => ({ values: getValues(), dirty: isDirty });
+  // The wizard reads the unsaved answers when the person leaves, never while rendering.
+  useImperativeHandle(snapshot, () => () => ({ values: getValues(), dirty: isDirty }), [getValues, isDirty]);
   useServerFields(serverFields, setError);
   const byLandmark = watch('positionKind') !== 'coordinates';
   const num = { setValueAs: numberOrNull };
