@@ -32,6 +32,9 @@ export const requestStatuses = [
   'withdrawn',
 ] as const;
 export const requestStatusSchema = z.enum(requestStatuses);
+
+/** From release on the request is a crew job: what the board, the field sheet and the as-built pages may show. */
+export const crewStages: readonly RequestStatus[] = ['released', 'crew_assigned', 'under_construction', 'built', 'closed'];
 export type RequestStatus = z.infer<typeof requestStatusSchema>;
 
 /** Plain-words label and what happens next, as the people involved read them. */

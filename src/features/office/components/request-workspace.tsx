@@ -6,7 +6,7 @@ import { PageHeader, Panel } from '@/components/ui/panel';
 import { paths } from '@/config/paths';
 import { useOfficeRequest } from '../api/get-office-request';
 import type { OfficeRequest } from '../api/types';
-import { ActionPanel } from './action-panel';
+import { ActionPanel, type Cautions } from './action-panel';
 import { HistoryList } from './history-list';
 import { MessageThread } from './message-thread';
 import { PhotoViewer } from './photo-viewer';
@@ -25,10 +25,12 @@ interface WorkspaceProps {
   me: { id: string; role: Role };
   /** The full application, drawn by the screen that composes this workspace. */
   renderApplication: (request: OfficeRequest) => ReactNode;
+  /** What the screen knows the office should weigh before a move, such as failing as-built readings. */
+  cautions?: Cautions;
 }
 
 /** One request for the office: what the owner gave, photos, messages, history, and the moves open now. */
-export function RequestWorkspace({ requestId, me, renderApplication }: WorkspaceProps) {
+export function RequestWorkspace({ requestId, me, renderApplication, cautions }: WorkspaceProps) {
   const [params, setParams] = useSearchParams();
   const tab: Tab = tabs.some((t) => t.id === params.get('tab')) ? (params.get('tab') as Tab) : 'overview';
   const query = useOfficeRequest(requestId);
@@ -68,7 +70,7 @@ export function RequestWorkspace({ requestId, me, renderApplication }: Workspace
         <aside className="order-first space-y-4 lg:order-none">
           <Panel title="Next step">
             <p className="mb-3 text-sm text-stone-600">{request.whatNext}</p>
-            <ActionPanel request={request} role={me.role} />
+            <ActionPanel request={request} role={me.role} cautions={cautions} />
           </Panel>
         </aside>
       </div>
