@@ -4,6 +4,7 @@ import type { AppContext } from '../../context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
 import { attachGradeCheck } from '../../services/grade-checks/attach-grade-check';
+import { withdrawGradeCheck } from '../../services/grade-checks/withdraw-grade-check';
 import { listGradeChecks, loadVisibleGradeCheck, saveGradeCheck } from '../../services/grade-checks/grade-checks.service';
 import { checkView, requestHeader } from './grade-check-view';
 
@@ -13,7 +14,11 @@ export const saveGradeCheckInputSchema = z.object({
   inputs: z.unknown().refine((v) => v !== undefined, { message: 'is required' }),
   results: z.undefined({ error: 'is computed by the server; send only the inputs' }).optional(),
 });
-export const attachGradeCheckInputSchema = z.strictObject({ shareWithApplicant: z.boolean('must be true or false').default(false) });
+export const attachGradeCheckInputSchema = z.strictObject({
+  shareWithApplicant: z.boolean('must be true or false').default(false),
+  /** The office's yes to attaching a check that does not meet the rules. */
+  confirmFailing: z.boolean('must be true or false').default(false),
+});
 
 export function gradeChecksRouter(ctx: AppContext) {
   const { db } = ctx;
@@ -33,8 +38,11 @@ export function gradeChecksRouter(ctx: AppContext) {
     check: checkView(await loadVisibleGradeCheck(db, user, params.id), user),
   })));
   router.post('/api/grade-checks/:id/attach', office, handle({ params: uuidParam, body: attachGradeCheckInputSchema }, async ({ params, body, user }) => {
-    const { document, check } = await attachGradeCheck(ctx, user, params.id, body.shareWithApplicant);
+    const { document, check } = await attachGradeCheck(ctx, user, params.id, body.shareWithApplicant, body.confirmFailing);
     return { check: checkView(check, user), documentId: document.id };
   }));
+  router.post('/api/grade-checks/:id/withdraw', office, handle({ params: uuidParam }, async ({ params, user }) => ({
+    check: checkView(await withdrawGradeCheck(db, user, params.id), user),
+  })));
   return router;
 }

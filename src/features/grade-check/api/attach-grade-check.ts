@@ -3,8 +3,9 @@ import { api } from '@/lib/api-client';
 import { getDocumentsQueryOptions } from './get-documents';
 import { getGradeChecksQueryOptions, type SavedCheck } from './get-grade-checks';
 
-export const attachGradeCheck = ({ checkId, shareWithApplicant }: { checkId: string; shareWithApplicant: boolean }) =>
-  api.post<{ check: SavedCheck; documentId: string }>(`/api/grade-checks/${checkId}/attach`, { shareWithApplicant });
+/** `confirmFailing` is the office's yes to attaching a check that does not meet the rules; the server asks for it. */
+export const attachGradeCheck = ({ checkId, ...body }: { checkId: string; shareWithApplicant: boolean; confirmFailing?: boolean }) =>
+  api.post<{ check: SavedCheck; documentId: string }>(`/api/grade-checks/${checkId}/attach`, body);
 
 export function useAttachGradeCheck(requestId: string) {
   const queryClient = useQueryClient();
