@@ -12,6 +12,8 @@ export interface TransitionEmailInput {
   audiences: readonly Audience[];
   /** Who reads the note; left out, everyone told does. */
   noteTo?: readonly Audience[];
+  ownerNoteLead?: string;
+  ownerReceipt?: boolean;
   request: { id: string; reference: string; siteAddress: string };
   note: string;
   applicant: Person;
@@ -31,12 +33,12 @@ function applicantContent(input: TransitionEmailInput): EmailContent {
   const { transition, request, detail } = input;
   const note = noteFor(input, 'applicant');
   const to = statusText[transition.to];
-  const first = transition.action === 'submit'
+  const first = input.ownerReceipt
     ? `Thank you: we have your request ${request.reference} for a driveway entrance at ${request.siteAddress}.`
     : `Your request ${request.reference} for ${request.siteAddress} is now: ${to.label}.`;
   const paragraphs = [first];
   if (detail) paragraphs.push(detail);
-  if (note) paragraphs.push(transition.action === 'ask-details' ? `The office asks: ${note}` : `Note from the office: ${note}`);
+  if (note) paragraphs.push(`${input.ownerNoteLead ?? 'Note from the office:'} ${note}`);
   paragraphs.push(`What happens next: ${to.next}`);
   return {
     greeting: `Hello ${input.applicant.name},`,
@@ -68,7 +70,7 @@ export function emailsForTransition(input: TransitionEmailInput): OutgoingEmail[
   const out: OutgoingEmail[] = [];
   for (const audience of input.audiences) {
     if (audience === 'applicant') {
-      const subject = transition.action === 'submit' ? `We received your request ${request.reference}` : `${request.reference}: ${label}`;
+      const subject = input.ownerReceipt ? `We received your request ${request.reference}` : `${request.reference}: ${label}`;
       out.push(build(input.applicant.email, applicantContent(input), subject));
     } else if (audience === 'office') {
       out.push(build(input.officeEmail, teamContent(input, 'office', 'office', officeHref), `[${request.reference}] ${label}`));

@@ -36,6 +36,10 @@ export interface ActionDef<A extends TransitionAction> {
     to: readonly Audience[];
     /** Who reads the note; left out, everyone told does. A note kept from the owner also stays off their history. */
     noteTo?: readonly Audience[];
+    /** How the owner's e-mail introduces the note; "Note from the office:" when left out. */
+    ownerNoteLead?: string;
+    /** The owner's e-mail thanks them and confirms receipt rather than announcing a new status. */
+    ownerReceipt?: boolean;
   };
   /** Runs inside the change's transaction after the row is locked and the move is allowed. */
   run?: (step: ActionStep<A>) => Promise<ActionResult | void>;

@@ -61,7 +61,8 @@ async function transitionEmails(tx: Tx, ctx: TransitionContext, { transition, de
     ? await tx.select(person).from(users).where(and(eq(users.role, 'crew'), eq(users.disabled, false)))
     : [];
   return emailsForTransition({
-    transition, audiences: def.emails.to, noteTo: def.emails.noteTo, request: row, note, applicant,
+    transition, audiences: def.emails.to, noteTo: def.emails.noteTo, ownerNoteLead: def.emails.ownerNoteLead,
+    ownerReceipt: def.emails.ownerReceipt, request: row, note, applicant,
     officeEmail: ctx.officeEmail, crew, crewLeads, appOrigin: ctx.appOrigin, detail,
   }).map((email) => ({ ...email, eventId }));
 }

@@ -23,7 +23,7 @@ function permitDecision({ row, body }: ActionStep<'record-granted' | 'record-ref
   return { patch: { permitDecidedOn: body.permitDecidedOn, ...(body.permitReference ? { permitReference: body.permitReference } : {}), ...extra } };
 }
 
-export const askDetails: ActionDef<'ask-details'> = { emails: { to: ['applicant'] } };
+export const askDetails: ActionDef<'ask-details'> = { emails: { to: ['applicant'], ownerNoteLead: 'The office asks:' } };
 
 export const bookVisit: ActionDef<'book-visit'> = {
   emails: { to: ['applicant'] },

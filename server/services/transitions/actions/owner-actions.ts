@@ -4,7 +4,7 @@ import type { ActionDef } from '../action-def';
 
 /** The property owner's own moves: send, answer the office's questions, withdraw. */
 export const submit: ActionDef<'submit'> = {
-  emails: { to: ['applicant', 'office'] },
+  emails: { to: ['applicant', 'office'], ownerReceipt: true },
   run: async ({ row, now }) => {
     await assertReadyToSubmit(row);
     return { patch: { submittedAt: now } };
