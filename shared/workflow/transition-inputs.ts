@@ -31,8 +31,10 @@ const permitReference = (required: boolean) => (required
 const decidedOn = () => z.string({ error: 'enter the date the road authority decided' }).pipe(dayInput('must be a date, e.g. 2026-05-04'))
   .register(fieldText, { label: 'Decided on', control: 'date' });
 
-const input = <A extends TransitionAction, S extends z.ZodRawShape>(action: A, shape: S) =>
-  z.strictObject({ action: z.literal(action), expectedVersion: expectedVersionSchema, note: plainNote, ...shape });
+// Every change may carry a note; an action that asks for it in its own words replaces this one, in the type too.
+const input = <A extends TransitionAction, S extends z.ZodRawShape>(action: A, shape: S) => z.strictObject({
+  action: z.literal(action), expectedVersion: expectedVersionSchema, ...({ note: plainNote } as Omit<{ note: typeof plainNote }, keyof S>), ...shape,
+});
 
 /**
  * What each status change takes from the person making it. The server parses these; the office's form draws its
