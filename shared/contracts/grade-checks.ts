@@ -95,7 +95,11 @@ export const saveGradeCheckInputSchema = z.object({
 });
 export type SaveGradeCheckInput = { ruleProfileVersionId: string; inputs: GradeCheckInputsInput };
 
-export const attachGradeCheckInputSchema = z.strictObject({ shareWithApplicant: z.boolean('must be true or false').default(false) });
+export const attachGradeCheckInputSchema = z.strictObject({
+  shareWithApplicant: z.boolean('must be true or false').default(false),
+  /** The office's yes to attaching a check that does not meet the rules. */
+  confirmFailing: z.boolean('must be true or false').default(false),
+});
 export type AttachGradeCheckInput = z.input<typeof attachGradeCheckInputSchema>;
 
 /** One saved check as the API returns it. Dates travel as ISO strings. */

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { dayInput } from '../workflow/dates';
+import { expectedVersionSchema, transitionInputs } from '../workflow/transition-inputs';
 
 /**
  * What the crew screens send. Shared so the phone form can mark a bad box before it is sent; the server
@@ -8,16 +9,12 @@ import { dayInput } from '../workflow/dates';
 // zod 4 numbers refuse NaN and Infinity already; the message says which number was expected.
 const finite = (what: string) => z.number({ error: `must be a number (${what})` });
 
-export const expectedVersionSchema = z.number({ error: 'must be the version number you loaded' }).int().min(1);
+export { expectedVersionSchema };
 
-export const acceptJobInputSchema = z.strictObject({ expectedVersion: expectedVersionSchema });
-
-export const handBackInputSchema = z.strictObject({
-  expectedVersion: expectedVersionSchema,
-  note: z.string().trim().min(1, 'say why the job goes back on the board').max(2000, 'must be at most 2000 characters'),
-});
-
-export const startWorkInputSchema = acceptJobInputSchema;
+// The crew's status changes at their own addresses: the action's shared input without the action, which the address names.
+export const acceptJobInputSchema = transitionInputs['accept-job'].omit({ action: true });
+export const handBackInputSchema = transitionInputs['hand-back'].omit({ action: true });
+export const startWorkInputSchema = transitionInputs['start-work'].omit({ action: true });
 
 export const scheduleJobInputSchema = z.strictObject({
   date: dayInput('must be a date, e.g. 2026-12-08'),
@@ -44,10 +41,7 @@ export const saveAsBuiltInputSchema = z.strictObject({
 });
 export type SaveAsBuiltInput = z.infer<typeof saveAsBuiltInputSchema>;
 
-export const markBuiltInputSchema = z.strictObject({
-  expectedVersion: expectedVersionSchema,
-  note: z.string().trim().max(4000, 'must be at most 4000 characters').optional(),
-});
+export const markBuiltInputSchema = transitionInputs['mark-built'].omit({ action: true });
 
 export const yardInputSchema = z.strictObject({
   label: z.string().trim().min(1, 'name the yard, e.g. "Main yard"').max(80, 'must be at most 80 characters'),

@@ -6,6 +6,8 @@ export const eventKindLabels: Record<string, string> = {
   'grade-check-report': 'Grade check report attached',
   document: 'Document shared',
   'work-day-planned': 'Work day planned',
+  'crew-note': 'Note for the crew',
+  'grade-check-withdrawn': 'Grade check withdrawn',
 };
 
 export const eventKindLabel = (kind: string) => eventKindLabels[kind] ?? 'Update';

@@ -21,6 +21,12 @@ export const requestStatuses = [
   'withdrawn',
 ] as const;
 export const requestStatusSchema = z.enum(requestStatuses);
+
+/** From release on the request is a crew job: what the board, the field sheet and the as-built pages may show. */
+export const crewStages: readonly RequestStatus[] = ['released', 'crew_assigned', 'under_construction', 'built', 'closed'];
+
+/** From the visit until the crew has the job a grade check may still change; after release the crew builds against it. */
+export const gradeCheckOpenStatuses: readonly RequestStatus[] = ['visit_booked', 'checked', 'permit_filed', 'permit_refused'];
 export type RequestStatus = z.infer<typeof requestStatusSchema>;
 
 /** Plain-words label and what happens next, as the people involved read them. */

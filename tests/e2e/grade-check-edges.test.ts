@@ -69,6 +69,9 @@ describe('the road edge, outlet control and the warped apron on screen', () => {
     await page.getByRole('button', { name: 'Save this check' }).click();
     await page.getByText('Saved as check 1.').waitFor();
     await page.getByRole('button', { name: 'Attach check 1' }).click();
+    // The left edge's landing is over the limit, so the check fails: the office says yes before it is attached.
+    await page.getByText('Check 1 does not meet the rules').waitFor();
+    await page.getByRole('button', { name: 'Attach it anyway' }).click();
     await page.getByRole('list', { name: 'Saved checks' }).getByText('Attached').waitFor();
     const [saved] = await db.db.select().from(gradeChecks).where(eq(gradeChecks.requestId, request.id));
     expect((saved.inputs as { roadSide?: unknown }).roadSide).toEqual({ roadCrossSlopePercent: 2, shoulderWidthFt: 3, shoulderSlopePercent: 4 });

@@ -69,7 +69,7 @@ describe('road edge, outlet control and the warped apron in the saved check', ()
 
   it('the PDF report says which control sets the headwater and prints the warp stakes and the edge findings', async () => {
     const { request, res } = await save(withEdges());
-    const attached = await cast.staff.agent.post(`/api/grade-checks/${res.body.check.id}/attach`).send({ shareWithApplicant: false }).expect(200);
+    const attached = await cast.staff.agent.post(`/api/grade-checks/${res.body.check.id}/attach`).send({ shareWithApplicant: false, confirmFailing: true }).expect(200);
     const list = await cast.staff.agent.get(`/api/requests/${request.id}/documents`).expect(200);
     const bytes = Buffer.from(await (await fetch(list.body.documents[0].url)).arrayBuffer());
     // Kept for review beside the other reports' renderings.
@@ -88,7 +88,7 @@ describe('road edge, outlet control and the warped apron in the saved check', ()
 
   it('the crew field sheet carries the warp stakes and the controlling headwater', async () => {
     const { request, res } = await save(withEdges());
-    await cast.staff.agent.post(`/api/grade-checks/${res.body.check.id}/attach`).send({ shareWithApplicant: false }).expect(200);
+    await cast.staff.agent.post(`/api/grade-checks/${res.body.check.id}/attach`).send({ shareWithApplicant: false, confirmFailing: true }).expect(200);
     await t.ctx.db.update(requests).set({ status: 'released' }).where(eq(requests.id, request.id));
     const sheet = (await cast.staff.agent.get(`/api/crew/jobs/${request.id}/field-sheet`).expect(200)).body;
     expect(sheet.apron.stakes).toHaveLength(5);

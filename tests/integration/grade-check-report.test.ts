@@ -23,7 +23,7 @@ afterAll(() => t.close());
 async function savedAndAttached(share: boolean) {
   const request = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'visit_booked' });
   const saved = await cast.staff.agent.post(`/api/requests/${request.id}/grade-checks`).send({ ruleProfileVersionId: marrow, inputs: surveyInputs() }).expect(201);
-  const attached = await cast.staff.agent.post(`/api/grade-checks/${saved.body.check.id}/attach`).send({ shareWithApplicant: share }).expect(200);
+  const attached = await cast.staff.agent.post(`/api/grade-checks/${saved.body.check.id}/attach`).send({ shareWithApplicant: share, confirmFailing: true }).expect(200);
   return { request, check: attached.body.check, documentId: attached.body.documentId as string };
 }
 
@@ -87,7 +87,7 @@ describe('the grade check report', () => {
 
   it('attaches once, then lets the request be marked checked with the summary in the owner’s e-mail', async () => {
     const { request, check, documentId } = await savedAndAttached(true);
-    const again = await cast.staff.agent.post(`/api/grade-checks/${check.id}/attach`).send({}).expect(200);
+    const again = await cast.staff.agent.post(`/api/grade-checks/${check.id}/attach`).send({ confirmFailing: true }).expect(200);
     expect(again.body.documentId).toBe(documentId);
     await cast.staff.agent.post(`/api/requests/${request.id}/transitions`).send({ action: 'mark-checked', expectedVersion: request.version }).expect(200);
     const sent = await t.ctx.db.select().from(emails).where(eq(emails.requestId, request.id));

@@ -48,7 +48,7 @@ describe('rule profile versions', () => {
     const before = await current();
     const v1 = before.currentVersionId as string;
     const saved = await cast.staff.agent.post(`/api/requests/${request.id}/grade-checks`).send({ ruleProfileVersionId: v1, inputs: surveyInputs() }).expect(201);
-    await cast.staff.agent.post(`/api/grade-checks/${saved.body.check.id}/attach`).send({}).expect(200);
+    await cast.staff.agent.post(`/api/grade-checks/${saved.body.check.id}/attach`).send({ confirmFailing: true }).expect(200);
     const [rowBefore] = await t.ctx.db.select().from(gradeChecks).where(eq(gradeChecks.id, saved.body.check.id));
     const reportBefore = await pdfText((await reportFor(t.ctx, staffUser(), saved.body.check.id)).pdf);
 

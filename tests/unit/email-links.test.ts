@@ -4,7 +4,8 @@ import { messageEmails } from '../../server/services/email/message-emails';
 import type { OutgoingEmail } from '../../server/services/email/outbox';
 import { scheduleEmails } from '../../server/services/email/schedule-emails';
 import { emailsForTransition } from '../../server/services/email/transition-emails';
-import { transitions } from '../../shared/workflow/transitions';
+import { actionDefs } from '../../server/services/transitions/registry';
+import { transitions, type TransitionAction } from '../../shared/workflow/transitions';
 import { paths } from '../../src/config/paths';
 
 const appOrigin = 'https://gradepass.example.test';
@@ -29,14 +30,16 @@ function expectRoute(pathname: string, route: { path: string }, id?: string) {
   if (id) expect(match!.params.id).toBe(id);
 }
 
-const transition = (action: string) => transitions.find((t) => t.action === action)!;
+const transition = (action: TransitionAction) => transitions.find((t) => t.action === action)!;
+// Who hears of a change, as the action's own entry on the server says.
+const told = (action: TransitionAction) => ({ transition: transition(action), audiences: actionDefs[action].emails.to, noteTo: actionDefs[action].emails.noteTo });
 
 describe('every e-mail link opens the client screen it names', () => {
   it('status changes link the owner, the office and the crew leads to their own screens', () => {
-    const built = linkPaths(emailsForTransition({ transition: transition('mark-built'), request, note: '', applicant, officeEmail, appOrigin }));
+    const built = linkPaths(emailsForTransition({ ...told('mark-built'), request, note: '', applicant, officeEmail, appOrigin }));
     expectRoute(built[applicant.email], paths.applicant.request, request.id);
     expectRoute(built[officeEmail], paths.office.request, request.id);
-    const released = linkPaths(emailsForTransition({ transition: transition('release'), request, note: '', applicant, officeEmail, crewLeads: [crew], appOrigin }));
+    const released = linkPaths(emailsForTransition({ ...told('release'), request, note: '', applicant, officeEmail, crewLeads: [crew], appOrigin }));
     expectRoute(released[crew.email], paths.crew.board);
   });
 

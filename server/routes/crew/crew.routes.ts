@@ -8,12 +8,12 @@ import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
 import { asBuiltPage, saveAsBuiltSet } from '../../services/crew/as-built.service';
 import { listBoard } from '../../services/crew/board.service';
-import { acceptJob, handBackJob, startWork } from '../../services/crew/claim.service';
 import { fieldSheet } from '../../services/crew/field-sheet.service';
-import { markBuilt } from '../../services/crew/mark-built.service';
 import { listMyJobs } from '../../services/crew/my-jobs.service';
 import { scheduleJob } from '../../services/crew/schedule.service';
 import { loadYard, saveYard } from '../../services/crew/yard.service';
+import { changeStatus } from '../../services/transitions/change-status';
+import type { TransitionBody } from '../../../shared/workflow/transition-inputs';
 import { requestView } from '../requests/request-view';
 
 /**
@@ -35,28 +35,27 @@ export function crewRouter({ db, env }: AppContext) {
   router.get(`${job}/field-sheet`, handle({ params: uuidParam }, async ({ params, user }) => fieldSheet(db, user, params.id)));
   router.get(`${job}/as-built`, handle({ params: uuidParam }, async ({ params, user }) => asBuiltPage(db, user, params.id)));
 
-  router.post(`${job}/accept`, crewOnly, handle({ params: uuidParam, body: acceptJobInputSchema }, async ({ params, body, user }) => {
-    const { request } = await acceptJob(ctx, user, params.id, body.expectedVersion);
-    return { request: requestView(request, user) };
-  }));
-  router.post(`${job}/hand-back`, crewOnly, handle({ params: uuidParam, body: handBackInputSchema }, async ({ params, body, user }) => {
-    const { request } = await handBackJob(ctx, user, params.id, body.expectedVersion, body.note);
-    return { request: requestView(request, user) };
-  }));
+  // The crew's own addresses for their status changes: each names the action, then goes through the one door.
+  const move = (user: Parameters<typeof changeStatus>[1], id: string, body: TransitionBody) => changeStatus(ctx, user, id, body)
+    .then(({ request }) => ({ request: requestView(request, user) }));
+  router.post(`${job}/accept`, crewOnly, handle({ params: uuidParam, body: acceptJobInputSchema }, async ({ params, body, user }) => (
+    move(user, params.id, { action: 'accept-job', ...body })
+  )));
+  router.post(`${job}/hand-back`, crewOnly, handle({ params: uuidParam, body: handBackInputSchema }, async ({ params, body, user }) => (
+    move(user, params.id, { action: 'hand-back', ...body })
+  )));
   router.post(`${job}/schedule`, crewOnly, handle({ params: uuidParam, body: scheduleJobInputSchema }, async ({ params, body, user }) => (
     scheduleJob(ctx, user, params.id, body)
   )));
-  router.post(`${job}/start`, crewOnly, handle({ params: uuidParam, body: startWorkInputSchema }, async ({ params, body, user }) => {
-    const { request } = await startWork(ctx, user, params.id, body.expectedVersion);
-    return { request: requestView(request, user) };
-  }));
+  router.post(`${job}/start`, crewOnly, handle({ params: uuidParam, body: startWorkInputSchema }, async ({ params, body, user }) => (
+    move(user, params.id, { action: 'start-work', ...body })
+  )));
   router.post(`${job}/as-built`, crewOnly, handle({ params: uuidParam, body: saveAsBuiltInputSchema }, async ({ params, body, user, res }) => {
     res.status(201);
     return { set: await saveAsBuiltSet(db, user, params.id, body) };
   }));
-  router.post(`${job}/mark-built`, crewOnly, handle({ params: uuidParam, body: markBuiltInputSchema }, async ({ params, body, user }) => {
-    const { request } = await markBuilt(ctx, user, params.id, body.expectedVersion, body.note ?? '');
-    return { request: requestView(request, user) };
-  }));
+  router.post(`${job}/mark-built`, crewOnly, handle({ params: uuidParam, body: markBuiltInputSchema }, async ({ params, body, user }) => (
+    move(user, params.id, { action: 'mark-built', ...body })
+  )));
   return router;
 }

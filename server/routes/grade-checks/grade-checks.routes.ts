@@ -6,6 +6,7 @@ import type { AppContext } from '../../context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
 import { attachGradeCheck } from '../../services/grade-checks/attach-grade-check';
+import { withdrawGradeCheck } from '../../services/grade-checks/withdraw-grade-check';
 import { listGradeChecks, loadVisibleGradeCheck, saveGradeCheck } from '../../services/grade-checks/grade-checks.service';
 import { checkView, requestHeader } from './grade-check-view';
 
@@ -27,8 +28,11 @@ export function gradeChecksRouter(ctx: AppContext) {
     check: checkView(await loadVisibleGradeCheck(db, user, params.id), user),
   }) satisfies GradeCheckSavedView));
   router.post('/api/grade-checks/:id/attach', office, handle({ params: uuidParam, body: attachGradeCheckInputSchema }, async ({ params, body, user }) => {
-    const { document, check } = await attachGradeCheck(ctx, user, params.id, body.shareWithApplicant);
+    const { document, check } = await attachGradeCheck(ctx, user, params.id, body.shareWithApplicant, body.confirmFailing);
     return { check: checkView(check, user), documentId: document.id } satisfies GradeCheckAttachedView;
   }));
+  router.post('/api/grade-checks/:id/withdraw', office, handle({ params: uuidParam }, async ({ params, user }) => ({
+    check: checkView(await withdrawGradeCheck(db, user, params.id), user),
+  })));
   return router;
 }

@@ -2,7 +2,7 @@ import { desc, eq } from 'drizzle-orm';
 import { checkAsBuilt, EngineInputError, type AsBuiltReadingResult, type AsBuiltStatus } from '../../../shared/engine';
 import type { SaveAsBuiltInput } from '../../../shared/crew/crew-inputs';
 import type { AsBuiltPageView, AsBuiltSetView } from '../../../shared/crew/crew-views';
-import { statusText } from '../../../shared/workflow/statuses';
+import { crewStages, statusText } from '../../../shared/workflow/statuses';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { asBuiltSets, users } from '../../db/schema';
@@ -10,7 +10,6 @@ import { AppError, conflict } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
 import { ruleProfileLabel, loadJobCheck, type SavedCheck } from './saved-check';
 
-const crewStages = new Set(['released', 'crew_assigned', 'under_construction', 'built', 'closed']);
 
 export async function requireJobCheck(db: DbOrTx, requestId: string): Promise<SavedCheck> {
   const check = await loadJobCheck(db, requestId);
@@ -55,7 +54,7 @@ export async function listSets(db: DbOrTx, requestId: string): Promise<AsBuiltSe
 
 export async function asBuiltPage(db: Db, user: SessionUser, requestId: string): Promise<AsBuiltPageView> {
   const row = await loadVisibleRequest(db, user, requestId);
-  if (!crewStages.has(row.status)) throw new AppError(404, 'not_found', 'Job was not found.');
+  if (!crewStages.includes(row.status)) throw new AppError(404, 'not_found', 'Job was not found.');
   const check = await requireJobCheck(db, row.id);
   return {
     job: { requestId: row.id, reference: row.reference, status: row.status, version: row.version, siteAddress: row.siteAddress },

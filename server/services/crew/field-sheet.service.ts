@@ -3,6 +3,7 @@ import { elevationAt, type CutFillAtStation } from '../../../shared/engine';
 import { buildChartInputFor } from '../../../shared/charts/chart-input';
 import { headwaterWords } from '../../../shared/charts/check-words';
 import { roadOwnerText } from '../../../shared/requests/choices';
+import { crewStages } from '../../../shared/workflow/statuses';
 import type { CulvertSheet, FieldSheetView, LaserSheet } from '../../../shared/crew/crew-views';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db } from '../../db/client';
@@ -20,7 +21,6 @@ export const fieldCautions = [
   'The road authority’s inspection prevails: these figures support the crew, they do not replace the inspector, local codes or a licensed engineer.',
 ];
 
-const crewStages = new Set(['released', 'crew_assigned', 'under_construction', 'built', 'closed']);
 
 function laserSheet(check: SavedCheck): LaserSheet | null {
   const { laser, laserInput } = check;
@@ -104,6 +104,6 @@ async function sheetFor(db: Db, row: RequestRow) {
 /** Everything the crew takes to site, for the crew that has the job (or any crew while it is on the board) and the office. */
 export async function fieldSheet(db: Db, user: SessionUser, requestId: string): Promise<FieldSheetView> {
   const row = await loadVisibleRequest(db, user, requestId);
-  if (!crewStages.has(row.status)) throw notFound('Job');
+  if (!crewStages.includes(row.status)) throw notFound('Job');
   return sheetFor(db, row);
 }

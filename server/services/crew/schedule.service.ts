@@ -7,7 +7,7 @@ import { badRequest, conflict } from '../../lib/errors';
 import { enqueueEmails } from '../email/outbox';
 import { dayInWords, scheduleEmails } from '../email/schedule-emails';
 import { loadVisibleRequest } from '../requests/request-access';
-import type { TransitionContext } from '../requests/transition.service';
+import type { TransitionContext } from '../transitions/apply-transition';
 
 const DAY_MS = 86_400_000;
 const isoDay = (ms: number) => new Date(ms).toISOString().slice(0, 10);

@@ -3,11 +3,18 @@ import { statusText } from '../../../shared/workflow/statuses';
 import type { Transition } from '../../../shared/workflow/transitions';
 import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
+import type { Audience } from '../transitions/action-def';
 
 export interface Person { email: string; name: string }
 
 export interface TransitionEmailInput {
   transition: Transition;
+  /** Who hears about the change, as the action's definition says. */
+  audiences: readonly Audience[];
+  /** Who reads the note; left out, everyone told does. */
+  noteTo?: readonly Audience[];
+  ownerNoteLead?: string;
+  ownerReceipt?: boolean;
   request: { id: string; reference: string; siteAddress: string };
   note: string;
   applicant: Person;
@@ -21,38 +28,18 @@ export interface TransitionEmailInput {
 }
 
 
-type Audience = 'applicant' | 'office' | 'crew' | 'crewLeads';
-
-/** Who hears about each status change. */
-const audiences: Record<string, Audience[]> = {
-  submit: ['applicant', 'office'],
-  'ask-details': ['applicant'],
-  answer: ['office'],
-  'book-visit': ['applicant'],
-  'mark-checked': ['applicant'],
-  'file-permit': ['applicant'],
-  'record-granted': ['applicant'],
-  'record-refused': ['applicant'],
-  release: ['applicant', 'crewLeads'],
-  'accept-job': ['applicant', 'office'],
-  'hand-back': ['office'],
-  'start-work': ['applicant'],
-  'mark-built': ['applicant', 'office'],
-  'send-back': ['crew'],
-  close: ['applicant', 'crew'],
-  decline: ['applicant'],
-  withdraw: ['office'],
-};
+const noteFor = (input: TransitionEmailInput, audience: Audience) => (!input.noteTo || input.noteTo.includes(audience) ? input.note : '');
 
 function applicantContent(input: TransitionEmailInput): EmailContent {
-  const { transition, request, note, detail } = input;
+  const { transition, request, detail } = input;
+  const note = noteFor(input, 'applicant');
   const to = statusText[transition.to];
-  const first = transition.action === 'submit'
+  const first = input.ownerReceipt
     ? `Thank you: we have your request ${request.reference} for a driveway entrance at ${request.siteAddress}.`
     : `Your request ${request.reference} for ${request.siteAddress} is now: ${to.label}.`;
   const paragraphs = [first];
   if (detail) paragraphs.push(detail);
-  if (note) paragraphs.push(transition.action === 'ask-details' ? `The office asks: ${note}` : `Note from the office: ${note}`);
+  if (note) paragraphs.push(`${input.ownerNoteLead ?? 'Note from the office:'} ${note}`);
   paragraphs.push(`What happens next: ${to.next}`);
   return {
     greeting: `Hello ${input.applicant.name},`,
@@ -61,8 +48,9 @@ function applicantContent(input: TransitionEmailInput): EmailContent {
   };
 }
 
-function teamContent(input: TransitionEmailInput, who: string, href: string): EmailContent {
-  const { transition, request, note, detail } = input;
+function teamContent(input: TransitionEmailInput, audience: Audience, who: string, href: string): EmailContent {
+  const { transition, request, detail } = input;
+  const note = noteFor(input, audience);
   const paragraphs = [
     `${request.reference} (${request.siteAddress}) moved from "${statusText[transition.from].label}" to "${statusText[transition.to].label}".`,
   ];
@@ -81,17 +69,17 @@ export function emailsForTransition(input: TransitionEmailInput): OutgoingEmail[
   const officeHref = input.appOrigin + sharedPaths.officeRequest.getHref(request.id);
   const crewHref = input.appOrigin + sharedPaths.crewBoard.getHref();
   const out: OutgoingEmail[] = [];
-  for (const audience of audiences[transition.action] ?? []) {
+  for (const audience of input.audiences) {
     if (audience === 'applicant') {
-      const subject = transition.action === 'submit' ? `We received your request ${request.reference}` : `${request.reference}: ${label}`;
+      const subject = input.ownerReceipt ? `We received your request ${request.reference}` : `${request.reference}: ${label}`;
       out.push(build(input.applicant.email, applicantContent(input), subject));
     } else if (audience === 'office') {
-      out.push(build(input.officeEmail, teamContent(input, 'office', officeHref), `[${request.reference}] ${label}`));
+      out.push(build(input.officeEmail, teamContent(input, 'office', 'office', officeHref), `[${request.reference}] ${label}`));
     } else if (audience === 'crew' && input.crew) {
-      out.push(build(input.crew.email, teamContent(input, input.crew.name, crewHref), `[${request.reference}] ${label}`));
+      out.push(build(input.crew.email, teamContent(input, 'crew', input.crew.name, crewHref), `[${request.reference}] ${label}`));
     } else if (audience === 'crewLeads') {
       for (const lead of input.crewLeads ?? []) {
-        out.push(build(lead.email, teamContent(input, lead.name, crewHref), `New job on the board: ${request.reference}`));
+        out.push(build(lead.email, teamContent(input, 'crewLeads', lead.name, crewHref), `New job on the board: ${request.reference}`));
       }
     }
   }

@@ -2,6 +2,7 @@ import { and, eq, isNull } from 'drizzle-orm';
 import type { SessionUser } from '../../auth/session-user';
 import type { AppContext } from '../../context';
 import { documents, gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
+import { badRequest } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
 import { buildGradeCheckReport } from '../reports/grade-check-report';
 import { storeReport } from '../reports/report-storage';
@@ -26,21 +27,30 @@ export async function reportFor(ctx: Pick<AppContext, 'db'>, user: SessionUser, 
 
 /**
  * Makes the report, stores it and attaches it to the request as a document. Attaching twice is harmless: the key is
- * fixed per check and the second call finds the first's document.
+ * fixed per check and the second call finds the first's document. A check that fails the rules is attached only
+ * when the office confirms it, since the owner reads it as the office's finding.
  */
-export async function attachGradeCheck(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, checkId: string, share: boolean) {
+export async function attachGradeCheck(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, checkId: string, share: boolean, confirmFailing = false) {
   const data = await reportData(ctx, user, checkId);
   const { check, request } = data;
+  if (!check.passed && !check.attachedAt && !confirmFailing) {
+    throw badRequest(`Check ${check.number} does not meet the road authority's rules: confirm with "Attach it anyway" to attach it.`, {
+      confirmFailing: `Attach it anyway: check ${check.number} does not meet the rules; confirm that the owner should read it`,
+    });
+  }
   const objectKey = `reports/${request.id}/grade-check-${check.number}-${check.id}.pdf`;
   const [existing] = await ctx.db.select().from(documents).where(eq(documents.objectKey, objectKey));
-  if (existing) return { document: existing, check };
-  const pdf = await buildGradeCheckReport(data);
-  await storeReport(ctx, objectKey, pdf);
+  if (existing && check.attachedAt) return { document: existing, check };
+  // A withdrawn check attached again reuses its stored report.
+  const pdf = existing ? null : await buildGradeCheckReport(data);
+  if (pdf) await storeReport(ctx, objectKey, pdf);
   return ctx.db.transaction(async (tx) => {
-    const [document] = await tx.insert(documents).values({
-      requestId: request.id, gradeCheckId: check.id, kind: REPORT_KIND, title: `Grade check ${check.number} report`,
-      objectKey, contentType: 'application/pdf', sizeBytes: pdf.length, sharedWithApplicant: share, createdById: user.id,
-    }).onConflictDoNothing({ target: documents.objectKey }).returning();
+    const [document] = pdf
+      ? await tx.insert(documents).values({
+        requestId: request.id, gradeCheckId: check.id, kind: REPORT_KIND, title: `Grade check ${check.number} report`,
+        objectKey, contentType: 'application/pdf', sizeBytes: pdf.length, sharedWithApplicant: share, createdById: user.id,
+      }).onConflictDoNothing({ target: documents.objectKey }).returning()
+      : await tx.update(documents).set({ sharedWithApplicant: share }).where(eq(documents.objectKey, objectKey)).returning();
     const [attached] = await tx.update(gradeChecks).set({ attachedAt: new Date() })
       .where(and(eq(gradeChecks.id, check.id), isNull(gradeChecks.attachedAt))).returning();
     if (document) {

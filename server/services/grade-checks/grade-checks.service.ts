@@ -1,6 +1,6 @@
 import { and, desc, eq, isNotNull, max } from 'drizzle-orm';
 import type { RuleProfile } from '../../../shared/engine';
-import { isOfficeRole, type RequestStatus } from '../../../shared/workflow/statuses';
+import { gradeCheckOpenStatuses, isOfficeRole } from '../../../shared/workflow/statuses';
 import type { SessionUser } from '../../auth/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
@@ -17,8 +17,6 @@ export type GradeCheck = Omit<GradeCheckRow, 'formatVersion' | 'inputs' | 'resul
 
 export const readGradeCheckRow = ({ formatVersion, inputs, results, ...row }: GradeCheckRow): GradeCheck => ({ ...row, ...readGradeCheckRecord({ formatVersion, inputs, results }) });
 
-// From the visit until the crew has it, a new survey may still be checked; after release the record is settled.
-const checkableStatuses: readonly RequestStatus[] = ['visit_booked', 'checked', 'permit_filed', 'permit_refused'];
 
 /** A saved check with its parts typed, for the report, the crew's field sheet and the as-built comparison. */
 export async function loadGradeCheck(db: DbOrTx, id: string): Promise<GradeCheck> {
@@ -53,7 +51,8 @@ export async function saveGradeCheck(db: Db, user: SessionUser, requestId: strin
   const inputs = parseGradeCheckInputs(body.inputs);
   return db.transaction(async (tx) => {
     const request = await loadVisibleRequest(tx, user, requestId, { forUpdate: true });
-    if (!checkableStatuses.includes(request.status)) {
+    // From the visit until the crew has it, a new survey may still be checked; after release the record is settled.
+    if (!gradeCheckOpenStatuses.includes(request.status)) {
       throw conflict('Grade checks are saved from the site visit until the permit is decided; this request is past that point or not there yet.');
     }
     const { id: versionId, profile } = await loadPublishedProfile(tx, body.ruleProfileVersionId);

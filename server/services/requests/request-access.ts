@@ -1,4 +1,4 @@
-import { isOfficeRole } from '../../../shared/workflow/statuses';
+import { crewStages, isOfficeRole } from '../../../shared/workflow/statuses';
 import { eq } from 'drizzle-orm';
 import type { SessionUser } from '../../auth/session-user';
 import type { DbOrTx } from '../../db/client';
@@ -7,7 +7,6 @@ import { notFound } from '../../lib/errors';
 
 export type RequestRow = typeof requests.$inferSelect;
 
-const crewVisible = new Set(['released', 'crew_assigned', 'under_construction', 'built', 'closed']);
 
 /**
  * Who may see a request: its applicant, the office, and crew once it is released (any crew while it waits on
@@ -16,7 +15,7 @@ const crewVisible = new Set(['released', 'crew_assigned', 'under_construction', 
 export function canSee(user: SessionUser, row: RequestRow): boolean {
   if (isOfficeRole(user.role)) return true;
   if (user.role === 'applicant') return row.applicantId === user.id;
-  if (!crewVisible.has(row.status)) return false;
+  if (!crewStages.includes(row.status)) return false;
   return row.status === 'released' ? row.crewId === null : row.crewId === user.id;
 }
 

@@ -3,6 +3,7 @@ import { useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useMe } from '@/features/auth/api/get-me';
+import { useAsBuilt } from '@/features/crew/api/get-as-built';
 import { AsBuiltReview } from '@/features/crew/components/as-built-review';
 import { EventList } from '@/features/events/components/event-list';
 import { MessageThread } from '@/features/messages/components/message-thread';
@@ -11,18 +12,23 @@ import { PhotoGallery } from '@/features/photos/components/photo-gallery';
 import { useOfficeRequest } from '@/features/requests/api/get-request';
 import { ApplicationSummary } from '@/features/requests/components/application-summary';
 
+// The crew's as-built set is what the office reviews before closing or sending the job back.
 function OfficeRequestPage({ id }: { id: string }) {
   const me = useMe().data;
   const query = useOfficeRequest(id);
+  const built = ['under_construction', 'built', 'closed'].includes(query.data?.request.status ?? '');
+  const latest = useAsBuilt(id, built).data?.sets[0];
+  // Closing over failing readings is allowed, but the office sees them first and writes down why.
+  const cautions = latest && !latest.passed
+    ? { close: `The crew’s last as-built readings fail the rule profile${latest.note ? ` (crew’s note: “${latest.note}”)` : ''}. Closing anyway needs a note saying why.` }
+    : undefined;
   if (query.isPending) return <Loading label="Loading the request…" />;
   if (query.error) return <ErrorNotice error={query.error} />;
   const { request } = query.data;
-  // The crew's as-built set is what the office reviews before closing or sending the job back.
-  const built = ['under_construction', 'built', 'closed'].includes(request.status);
   return (
     <>
       {me && (
-        <RequestWorkspace key={id} request={request} me={me} sections={{
+        <RequestWorkspace key={id} request={request} me={me} cautions={cautions} sections={{
           application: () => <ApplicationSummary application={request.application} />,
           photos: () => <PhotoGallery requestId={id} emptyText="The property owner has not added photos." />,
           messages: () => <MessageThread requestId={id} office />,

@@ -7,4 +7,4 @@ export const getAsBuilt = (id: string) => api.get<AsBuiltPageView>(`/api/crew/jo
 export const getAsBuiltQueryOptions = (id: string) =>
   queryOptions({ queryKey: ['crew', 'as-built', id], queryFn: () => getAsBuilt(id) });
 
-export const useAsBuilt = (id: string) => useQuery(getAsBuiltQueryOptions(id));
+export const useAsBuilt = (id: string, enabled = true) => useQuery({ ...getAsBuiltQueryOptions(id), enabled });

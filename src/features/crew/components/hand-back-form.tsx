@@ -1,10 +1,13 @@
 import { useState, type FormEvent } from 'react';
 import type { MyJob } from '@shared/crew/crew-views';
+import { formFieldsOf } from '@shared/workflow/transition-inputs';
 import { Button } from '@/components/ui/button';
 import { Field, TextArea } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import { useHandBackJob } from '../api/hand-back-job';
+
+const [noteField] = formFieldsOf('hand-back');
 
 /** Giving a job back is deliberate: the form opens on a button press and asks why, for the office. */
 export function HandBackForm({ job }: { job: MyJob }) {
@@ -19,7 +22,7 @@ export function HandBackForm({ job }: { job: MyJob }) {
   };
   return (
     <form onSubmit={submit} noValidate className="w-full space-y-3 rounded-md border-2 border-clay/40 p-3">
-      <Field label="Why does it go back on the board?" hint="The office reads this." error={fields.note}>
+      <Field label={noteField.text.label} hint={noteField.text.hint} error={fields.note}>
         {({ id, describedBy, invalid }) => <TextArea id={id} aria-describedby={describedBy} aria-invalid={invalid} value={note} onChange={(e) => setNote(e.target.value)} />}
       </Field>
       {handBack.error && <ErrorNotice error={handBack.error} />}

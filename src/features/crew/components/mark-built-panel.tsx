@@ -1,12 +1,15 @@
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router';
 import type { AsBuiltPageView } from '@shared/crew/crew-views';
+import { formFieldsOf } from '@shared/workflow/transition-inputs';
 import { Button } from '@/components/ui/button';
 import { Field, TextArea } from '@/components/ui/field';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { useMarkBuilt } from '../api/mark-built';
+
+const [reasonField] = formFieldsOf('mark-built');
 
 /** "Built" goes to the office with the last saved set; a failing set goes with the crew's explanation. */
 export function MarkBuiltPanel({ page }: { page: AsBuiltPageView }) {
@@ -28,7 +31,7 @@ export function MarkBuiltPanel({ page }: { page: AsBuiltPageView }) {
       {latest.passed
         ? <p>The last saved set passes{latest.status === 'advisory' ? ', with readings inside the tolerance for the inspector to judge' : ''}.</p>
         : <Notice tone="warn" title="The last saved set fails">Say what you found and why; the office reads it before closing or sending the job back.</Notice>}
-      <Field label={latest.passed ? 'Note for the office (optional)' : 'Why the readings fail'} error={fields.note}>
+      <Field label={latest.passed ? 'Note for the office (optional)' : reasonField.text.label} error={fields.note}>
         {({ id, describedBy, invalid }) => <TextArea id={id} aria-describedby={describedBy} aria-invalid={invalid} value={note} onChange={(e) => setNote(e.target.value)} />}
       </Field>
       {markBuilt.error && <ErrorNotice error={markBuilt.error} />}

@@ -1,5 +1,6 @@
 import { Link } from 'react-router';
 import type { MyJob } from '@shared/crew/crew-views';
+import { allowedTransitions, type TransitionAction } from '@shared/workflow/transitions';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { StatusBadge } from '@/components/ui/status-badge';
@@ -14,6 +15,8 @@ const linkButton = 'inline-flex min-h-11 items-center rounded-md border-2 border
 /** One of my jobs, with the next things to do for it at hand. */
 export function MyJobCard({ job }: { job: MyJob }) {
   const start = useStartWork();
+  // The moves offered are the shared table's, as the server checks them.
+  const can = (action: TransitionAction) => allowedTransitions(job.status, 'crew').some((t) => t.action === action);
   return (
     <article className="space-y-3 rounded-lg border-2 border-stone-300 bg-white p-4 text-base" aria-labelledby={`my-${job.requestId}`}>
       <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -30,11 +33,11 @@ export function MyJobCard({ job }: { job: MyJob }) {
       {start.error && <ErrorNotice error={start.error} />}
       <div className="flex flex-wrap gap-3">
         <Link to={paths.crew.fieldSheet.getHref(job.requestId)} className={linkButton}>Field sheet</Link>
-        {job.status === 'crew_assigned' && (
+        {can('start-work') && (
           <Button onClick={() => start.mutate({ id: job.requestId, expectedVersion: job.version })} disabled={start.isPending} className="min-h-11">Start work</Button>
         )}
-        {job.status === 'under_construction' && <Link to={paths.crew.asBuilt.getHref(job.requestId)} className={linkButton}>Enter as-built readings</Link>}
-        {job.status === 'crew_assigned' && <HandBackForm job={job} />}
+        {can('mark-built') && <Link to={paths.crew.asBuilt.getHref(job.requestId)} className={linkButton}>Enter as-built readings</Link>}
+        {can('hand-back') && <HandBackForm job={job} />}
       </div>
     </article>
   );

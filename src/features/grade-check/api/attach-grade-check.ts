@@ -4,6 +4,7 @@ import { api } from '@/lib/api-client';
 import { getDocumentsQueryOptions } from './get-documents';
 import { getGradeChecksQueryOptions } from './get-grade-checks';
 
+/** `confirmFailing` is the office's yes to attaching a check that does not meet the rules; the server asks for it. */
 export const attachGradeCheck = ({ checkId, ...body }: AttachGradeCheckInput & { checkId: string }) =>
   api.post<GradeCheckAttachedView>(`/api/grade-checks/${checkId}/attach`, body);
 

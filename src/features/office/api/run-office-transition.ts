@@ -1,18 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { TransitionBody } from '@shared/workflow/transition-inputs';
 import { api } from '@/lib/api-client';
 import { statusChangeKeys } from '@/lib/query-keys';
 import { allQueuesKey } from './get-queue';
 
-export interface TransitionInput {
-  action: string;
-  expectedVersion: number;
-  note?: string;
-  visitAt?: string;
-  permitReference?: string;
-  permitDecidedOn?: string;
-  permitConditions?: string;
-  permitExpiresOn?: string;
-}
+/** The body of any status change, as the shared input schemas define it. */
+export type TransitionInput = TransitionBody;
 
 export const runOfficeTransition = (id: string, input: TransitionInput) =>
   api.post<{ request: { id: string; status: string; version: number } }>(`/api/requests/${id}/transitions`, input);

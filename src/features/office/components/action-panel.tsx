@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
 import { statusText, type Role } from '@shared/workflow/statuses';
-import { allowedTransitions, type Transition } from '@shared/workflow/transitions';
+import { allowedTransitions, type Transition, type TransitionAction } from '@shared/workflow/transitions';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { paths } from '@/config/paths';
@@ -9,8 +9,10 @@ import { useRunOfficeTransition } from '../api/run-office-transition';
 import type { OfficeRequestView as OfficeRequest } from '@shared/contracts/requests';
 import { ActionForm } from './action-form';
 
+export type Cautions = Partial<Record<TransitionAction, string>>;
+
 /** The moves open from the current status for this person, each opening a form for what it needs. */
-export function ActionPanel({ request, role }: { request: OfficeRequest; role: Role }) {
+export function ActionPanel({ request, role, cautions = {} }: { request: OfficeRequest; role: Role; cautions?: Cautions }) {
   const moves = allowedTransitions(request.status, role);
   const [open, setOpen] = useState<Transition | null>(null);
   const [done, setDone] = useState('');
@@ -27,6 +29,7 @@ export function ActionPanel({ request, role }: { request: OfficeRequest; role: R
           key={open.action}
           transition={open}
           request={request}
+          caution={cautions[open.action]}
           pending={run.isPending}
           error={run.error}
           onCancel={() => { setOpen(null); run.reset(); }}

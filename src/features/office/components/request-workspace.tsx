@@ -4,7 +4,7 @@ import type { Role } from '@shared/workflow/statuses';
 import type { OfficeRequestView } from '@shared/contracts/requests';
 import { PageHeader, Panel } from '@/components/ui/panel';
 import { paths } from '@/config/paths';
-import { ActionPanel } from './action-panel';
+import { ActionPanel, type Cautions } from './action-panel';
 import { RequestFacts } from './request-facts';
 
 const tabs = [
@@ -20,10 +20,12 @@ interface WorkspaceProps {
   me: { id: string; role: Role };
   /** The parts other features draw, composed by the screen: the full application, photos, messages, history. */
   sections: Record<'application' | 'photos' | 'messages' | 'history', () => ReactNode>;
+  /** What the screen knows the office should weigh before a move, such as failing as-built readings. */
+  cautions?: Cautions;
 }
 
 /** One request for the office: what the owner gave, photos, messages, history, and the moves open now. */
-export function RequestWorkspace({ request, me, sections }: WorkspaceProps) {
+export function RequestWorkspace({ request, me, sections, cautions }: WorkspaceProps) {
   const [params, setParams] = useSearchParams();
   const tab: Tab = tabs.some((t) => t.id === params.get('tab')) ? (params.get('tab') as Tab) : 'overview';
 
@@ -59,7 +61,7 @@ export function RequestWorkspace({ request, me, sections }: WorkspaceProps) {
         <aside className="order-first space-y-4 lg:order-none">
           <Panel title="Next step">
             <p className="mb-3 text-sm text-stone-600">{request.whatNext}</p>
-            <ActionPanel request={request} role={me.role} />
+            <ActionPanel request={request} role={me.role} cautions={cautions} />
           </Panel>
         </aside>
       </div>
