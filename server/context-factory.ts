@@ -1,13 +1,9 @@
 import type { AppContext } from './context';
-import { createDb, type DbTimeouts } from './db/client';
-import type { Env } from './env';
+import { createDb } from './db/client';
+import { dbTimeouts, type Env } from './env';
 import { createLogger } from './lib/logger';
 import { createMailer } from './services/mailer';
 import { createS3Client } from './services/storage';
-
-export function dbTimeouts(env: Env): DbTimeouts {
-  return { connectMs: env.DB_CONNECT_TIMEOUT_MS, statementMs: env.DB_STATEMENT_TIMEOUT_MS, idleInTransactionMs: env.DB_IDLE_IN_TRANSACTION_TIMEOUT_MS };
-}
 
 export function createContext(env: Env): AppContext {
   const logger = createLogger(env.LOG_LEVEL);

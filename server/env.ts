@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { DbTimeouts } from './db/client';
 import { securityEnvShape } from './security/security-env';
 
 const port = z.coerce.number().int().min(0).max(65535);
@@ -68,4 +69,8 @@ export function parseEnv(source: NodeJS.ProcessEnv = process.env): Env {
     throw new Error(`Gradepass cannot start: the environment is not valid.\n${lines.join('\n')}`);
   }
   return result.data;
+}
+
+export function dbTimeouts(env: Env): DbTimeouts {
+  return { connectMs: env.DB_CONNECT_TIMEOUT_MS, statementMs: env.DB_STATEMENT_TIMEOUT_MS, idleInTransactionMs: env.DB_IDLE_IN_TRANSACTION_TIMEOUT_MS };
 }

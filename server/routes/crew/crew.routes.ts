@@ -20,9 +20,9 @@ import { requestView } from '../requests/request-view';
  * The crew's side: the board of released jobs, taking and handing back, planning the day, the field sheet and
  * the as-built readings. The office may read the board and the sheets; only crew leads act on jobs.
  */
-export function crewRouter({ db, env }: AppContext) {
+export function crewRouter(ctx: AppContext) {
+  const { db } = ctx;
   const router = Router();
-  const ctx = { db, officeEmail: env.OFFICE_EMAIL, appOrigin: env.APP_ORIGIN };
   const crewOnly = requireRole('crew');
   router.use('/api/crew', requireRole('crew', ...officeRoles));
 

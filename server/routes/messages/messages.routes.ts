@@ -4,15 +4,15 @@ import type { AppContext } from '../../context';
 import { handle, uuidParam } from '../../lib/handle';
 import { listMessages, postMessage } from './messages.service';
 
-export function messagesRouter({ db, env }: AppContext) {
+export function messagesRouter(ctx: AppContext) {
+  const { db } = ctx;
   const router = Router();
-  const mail = { officeEmail: env.OFFICE_EMAIL, appOrigin: env.APP_ORIGIN };
   router.get('/api/requests/:id/messages', handle({ params: uuidParam }, async ({ params, user }) => ({
     messages: await listMessages(db, user, params.id),
   }) satisfies MessagesAnswer<Date>));
   router.post('/api/requests/:id/messages', handle({ params: uuidParam, body: postMessageInputSchema }, async ({ params, body, user, res }) => {
     res.status(201);
-    return { message: await postMessage(db, mail, user, params.id, body) } satisfies PostMessageAnswer<Date>;
+    return { message: await postMessage(ctx, user, params.id, body) } satisfies PostMessageAnswer<Date>;
   }));
   return router;
 }

@@ -2,6 +2,7 @@ import { and, asc, eq, inArray } from 'drizzle-orm';
 import { isOfficeRole } from '../../../shared/workflow/statuses';
 import type { MessageVisibility } from '../../../shared/contracts/messages';
 import type { SessionUser } from '../../auth/session-user';
+import type { AppContext } from '../../context';
 import type { Db, Tx } from '../../db/client';
 import { messages, users } from '../../db/schema';
 import { badRequest, conflict, notFound } from '../../lib/errors';
@@ -30,20 +31,20 @@ export async function listMessages(db: Db, user: SessionUser, requestId: string)
   return rows.map(({ visibility, ...m }) => ({ ...m, mine: m.authorId === user.id, ...(office ? { internal: visibility === 'internal' } : {}) }));
 }
 
-export interface MessageMail { officeEmail: string; appOrigin: string }
 
-async function emailsForMessage(tx: Tx, mail: MessageMail, row: RequestRow, author: SessionUser, message: { body: string; visibility: Visibility }) {
+async function emailsForMessage(tx: Tx, env: AppContext['env'], row: RequestRow, author: SessionUser, message: { body: string; visibility: Visibility }) {
   if (message.visibility === 'internal') return [];
   const people = await tx.select({ id: users.id, email: users.email, name: users.name }).from(users)
     .where(inArray(users.id, row.crewId ? [row.applicantId, row.crewId] : [row.applicantId]));
   const applicant = people.find((p) => p.id === row.applicantId)!;
   const crew = people.find((p) => p.id === row.crewId) ?? null;
-  return messageEmails({ request: row, author, body: message.body, visibility: message.visibility, applicant, crew, ...mail });
+  return messageEmails({ request: row, author, body: message.body, visibility: message.visibility, applicant, crew,
+    officeEmail: env.OFFICE_EMAIL, appOrigin: env.APP_ORIGIN });
 }
 
 /** Saves a message and, in the same transaction, the e-mails that tell the others on the request about it. */
-export async function postMessage(db: Db, mail: MessageMail, user: SessionUser, requestId: string, input: { body: string; visibility?: Visibility }) {
-  const row = await loadForMessages(db, user, requestId);
+export async function postMessage(ctx: Pick<AppContext, 'db' | 'env'>, user: SessionUser, requestId: string, input: { body: string; visibility?: Visibility }) {
+  const row = await loadForMessages(ctx.db, user, requestId);
   const office = isOfficeRole(user.role);
   // The office decides each time; its default keeps a slip of the hand from reaching the property owner.
   const visibility = input.visibility ?? (office ? 'internal' : 'shared');
@@ -51,9 +52,9 @@ export async function postMessage(db: Db, mail: MessageMail, user: SessionUser, 
     throw badRequest('Only the office can write internal notes.', { visibility: 'messages from you are always shared with the office' });
   }
   if (!office && row.status === 'draft') throw conflict('Send the request to the office first; then you can write to them here.');
-  const message = await db.transaction(async (tx) => {
+  const message = await ctx.db.transaction(async (tx) => {
     const [saved] = await tx.insert(messages).values({ requestId, authorId: user.id, visibility, body: input.body }).returning();
-    await enqueueEmails(tx, await emailsForMessage(tx, mail, row, user, saved));
+    await enqueueEmails(tx, await emailsForMessage(tx, ctx.env, row, user, saved));
     return saved;
   });
   return { id: message.id, body: message.body, createdAt: message.createdAt, authorId: user.id, authorName: user.name, authorRole: user.role, mine: true, ...(office ? { internal: visibility === 'internal' } : {}) };

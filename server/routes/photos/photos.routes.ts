@@ -9,7 +9,7 @@ import { handle, uuidParam } from '../../lib/handle';
 import { requireRole } from '../../middleware/require-role';
 import { loadVisibleRequest } from '../../services/requests/request-access';
 import {
-  confirmUpload, listStored, presignUpload, removePhoto, setCaption, viewSeconds, viewUrl, type PhotoRow, type Storage,
+  confirmUpload, listStored, presignUpload, removePhoto, setCaption, viewSeconds, viewUrl, type PhotoRow,
 } from './photos.service';
 
 const photoParams = z.object({ id: z.uuid('must be a valid id'), photoId: z.uuid('must be a valid id') });
@@ -21,33 +21,33 @@ const photoView = (photo: PhotoRow, url?: string): PhotoView<Date> => ({
   ...(url ? { url, urlExpiresInSeconds: viewSeconds } : {}),
 });
 
-export function photosRouter({ db, s3, env }: AppContext) {
-  const store: Storage = { s3, bucket: env.S3_BUCKET };
+export function photosRouter(ctx: AppContext) {
+  const { db } = ctx;
   const router = Router();
   const owner = requireRole('applicant');
 
   router.get('/api/requests/:id/photos', handle({ params: uuidParam }, async ({ params, user }) => {
     await loadVisibleRequest(db, user, params.id);
     const rows = await listStored(db, params.id);
-    return { photos: await Promise.all(rows.map(async (p) => photoView(p, await viewUrl(store, p)))) };
+    return { photos: await Promise.all(rows.map(async (p) => photoView(p, await viewUrl(ctx, p)))) };
   }));
 
   router.get('/api/requests/:id/photos/:photoId/url', handle({ params: photoParams }, async ({ params, user }) => {
     await loadVisibleRequest(db, user, params.id);
     const photo = (await listStored(db, params.id)).find((p) => p.id === params.photoId);
     if (!photo) throw notFound('Photo');
-    return { url: await viewUrl(store, photo), expiresInSeconds: viewSeconds } satisfies PhotoLinkAnswer;
+    return { url: await viewUrl(ctx, photo), expiresInSeconds: viewSeconds } satisfies PhotoLinkAnswer;
   }));
 
   router.post('/api/requests/:id/photos', owner, handle({ params: uuidParam, body: photoUploadInputSchema }, async ({ params, body, user, res }) => {
-    const { photo, upload } = await presignUpload(db, store, user, params.id, body);
+    const { photo, upload } = await presignUpload(ctx, user, params.id, body);
     res.status(201);
     return { photo: photoView(photo), upload };
   }));
 
   router.post('/api/requests/:id/photos/:photoId/confirm', owner, handle({ params: photoParams, body: photoConfirmInputSchema }, async ({ params, body, user }) => {
-    const photo = await confirmUpload(db, store, user, params.id, params.photoId, body);
-    return { photo: photoView(photo, await viewUrl(store, photo)) };
+    const photo = await confirmUpload(ctx, user, params.id, params.photoId, body);
+    return { photo: photoView(photo, await viewUrl(ctx, photo)) };
   }));
 
   router.patch('/api/requests/:id/photos/:photoId', owner, handle({ params: photoParams, body: photoCaptionInputSchema }, async ({ params, body, user }) => ({
@@ -55,7 +55,7 @@ export function photosRouter({ db, s3, env }: AppContext) {
   })));
 
   router.delete('/api/requests/:id/photos/:photoId', owner, handle({ params: photoParams }, async ({ params, user }) => {
-    await removePhoto(db, store, user, params.id, params.photoId);
+    await removePhoto(ctx, user, params.id, params.photoId);
   }));
   return router;
 }

@@ -1,17 +1,20 @@
-import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand, type S3Client } from '@aws-sdk/client-s3';
+import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 import { and, asc, eq, gt, inArray, or } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import { maxPhotosPerRequest, photoExtensions, type photoContentTypes } from '../../../shared/requests/photo-rules';
 import { photosEditable } from '../../../shared/contracts/photos';
 import type { SessionUser } from '../../auth/session-user';
+import type { AppContext } from '../../context';
 import type { Db, DbOrTx } from '../../db/client';
 import { photos } from '../../db/schema';
 import { badRequest, conflict, notFound } from '../../lib/errors';
 import { loadVisibleRequest } from '../../services/requests/request-access';
 import { photoTypeOf, readLeadingBytes } from './photo-content';
 
-export interface Storage { s3: S3Client; bucket: string }
+/** What reaching the photo bucket takes, from the app's context. */
+export type Storage = Pick<AppContext, 's3' | 'env'>;
+type PhotoContext = Pick<AppContext, 'db' | 's3' | 'env'>;
 export type PhotoRow = typeof photos.$inferSelect;
 
 export const uploadSeconds = 300;
@@ -25,9 +28,9 @@ export async function loadOwnEditable(tx: DbOrTx, user: SessionUser, requestId: 
   return row;
 }
 
-export async function presignUpload(db: Db, store: Storage, user: SessionUser, requestId: string,
+export async function presignUpload(ctx: PhotoContext, user: SessionUser, requestId: string,
   file: { fileName: string; contentType: (typeof photoContentTypes)[number]; sizeBytes: number }) {
-  return db.transaction(async (tx) => {
+  return ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
     // An upload that never got confirmed stops counting once its URL has expired.
     const recent = new Date(Date.now() - uploadSeconds * 1000);
@@ -39,9 +42,9 @@ export async function presignUpload(db: Db, store: Storage, user: SessionUser, r
     const id = randomUUID();
     const objectKey = `requests/${requestId}/photos/${id}.${photoExtensions[file.contentType]}`;
     const [photo] = await tx.insert(photos).values({ id, requestId, uploaderId: user.id, objectKey, ...file }).returning();
-    const command = new PutObjectCommand({ Bucket: store.bucket, Key: objectKey, ContentType: file.contentType, ContentLength: file.sizeBytes });
+    const command = new PutObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: objectKey, ContentType: file.contentType, ContentLength: file.sizeBytes });
     // Signing type and length means storage refuses any other file under this URL.
-    const url = await getSignedUrl(store.s3, command, { expiresIn: uploadSeconds, signableHeaders: new Set(['content-type']) });
+    const url = await getSignedUrl(ctx.s3, command, { expiresIn: uploadSeconds, signableHeaders: new Set(['content-type']) });
     return { photo, upload: { method: 'PUT' as const, url, headers: { 'content-type': file.contentType }, expiresInSeconds: uploadSeconds } };
   });
 }
@@ -53,8 +56,8 @@ async function loadPhoto(tx: DbOrTx, requestId: string, photoId: string) {
 }
 
 /** The stored object must be exactly the announced file, and a photo by its own first bytes, whatever it was called. */
-async function checkStoredFile(db: Db, store: Storage, photo: PhotoRow) {
-  const head = await store.s3.send(new HeadObjectCommand({ Bucket: store.bucket, Key: photo.objectKey })).catch((error: { name?: string }) => {
+async function checkStoredFile(ctx: PhotoContext, photo: PhotoRow) {
+  const head = await ctx.s3.send(new HeadObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: photo.objectKey })).catch((error: { name?: string }) => {
     if (error.name === 'NotFound' || error.name === 'NoSuchKey') return null;
     throw error;
   });
@@ -62,10 +65,10 @@ async function checkStoredFile(db: Db, store: Storage, photo: PhotoRow) {
   if (head.ContentLength !== photo.sizeBytes || head.ContentType !== photo.contentType) {
     throw conflict('The stored file is not the one that was announced. Upload it again.');
   }
-  if (photoTypeOf(await readLeadingBytes(store, photo.objectKey)) === photo.contentType) return;
+  if (photoTypeOf(await readLeadingBytes(ctx, photo.objectKey)) === photo.contentType) return;
   // Not a photo (an SVG or a web page sent as an image, say): it must never be listed or served.
-  await db.update(photos).set({ status: 'removed' }).where(eq(photos.id, photo.id));
-  await store.s3.send(new DeleteObjectCommand({ Bucket: store.bucket, Key: photo.objectKey }));
+  await ctx.db.update(photos).set({ status: 'removed' }).where(eq(photos.id, photo.id));
+  await ctx.s3.send(new DeleteObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: photo.objectKey }));
   throw badRequest(`"${photo.fileName}" is not a JPEG, PNG, WebP or HEIC photo, so it was not added. Choose a photo file instead.`, {
     fileName: 'is not a JPEG, PNG, WebP or HEIC photo',
   });
@@ -75,14 +78,14 @@ async function checkStoredFile(db: Db, store: Storage, photo: PhotoRow) {
  * Lists a photo only once storage holds the file that was announced. Storage is read between two short
  * transactions, so no row lock is held while waiting on the network.
  */
-export async function confirmUpload(db: Db, store: Storage, user: SessionUser, requestId: string, photoId: string,
+export async function confirmUpload(ctx: PhotoContext, user: SessionUser, requestId: string, photoId: string,
   extra: { caption?: string; gpsLat?: number | null; gpsLng?: number | null }) {
-  const announced = await db.transaction(async (tx) => {
+  const announced = await ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
     return loadPhoto(tx, requestId, photoId);
   });
-  await checkStoredFile(db, store, announced);
-  return db.transaction(async (tx) => {
+  await checkStoredFile(ctx, announced);
+  return ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
     const photo = await loadPhoto(tx, requestId, photoId);
     const [stored] = await tx.update(photos).set({
@@ -102,14 +105,14 @@ export async function setCaption(db: Db, user: SessionUser, requestId: string, p
   });
 }
 
-export async function removePhoto(db: Db, store: Storage, user: SessionUser, requestId: string, photoId: string) {
-  const photo = await db.transaction(async (tx) => {
+export async function removePhoto(ctx: PhotoContext, user: SessionUser, requestId: string, photoId: string) {
+  const photo = await ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
     const row = await loadPhoto(tx, requestId, photoId);
     await tx.update(photos).set({ status: 'removed' }).where(eq(photos.id, photoId));
     return row;
   });
-  await store.s3.send(new DeleteObjectCommand({ Bucket: store.bucket, Key: photo.objectKey }));
+  await ctx.s3.send(new DeleteObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: photo.objectKey }));
 }
 
 export async function listStored(db: DbOrTx, requestId: string) {
@@ -126,7 +129,7 @@ const headerSafeName = (name: string) => name.replace(/[^\w.-]+/g, '-').slice(0,
  */
 export function viewUrl(store: Storage, photo: PhotoRow) {
   return getSignedUrl(store.s3, new GetObjectCommand({
-    Bucket: store.bucket,
+    Bucket: store.env.S3_BUCKET,
     Key: photo.objectKey,
     ResponseContentType: photo.contentType,
     ResponseContentDisposition: `inline; filename="${headerSafeName(photo.fileName)}"`,

@@ -5,12 +5,11 @@ import { handle, uuidParam } from '../../lib/handle';
 import { changeStatus } from '../../services/transitions/change-status';
 import { requestView } from '../requests/request-view';
 
-export function transitionsRouter({ db, env }: AppContext) {
+export function transitionsRouter(ctx: AppContext) {
   const router = Router();
-  const transitionCtx = { db, officeEmail: env.OFFICE_EMAIL, appOrigin: env.APP_ORIGIN };
 
   router.post('/api/requests/:id/transitions', handle({ params: uuidParam, body: transitionInputSchema }, async ({ params, body, user }) => {
-    const { request } = await changeStatus(transitionCtx, user, params.id, body);
+    const { request } = await changeStatus(ctx, user, params.id, body);
     return { request: requestView(request, user) };
   }));
   return router;

@@ -42,7 +42,7 @@ export async function scheduleJob(ctx: TransitionContext, crew: SessionUser, req
     }).returning({ id: requestEvents.id });
     const [applicant] = await tx.select({ email: users.email, name: users.name }).from(users).where(eq(users.id, row.applicantId));
     const emails = scheduleEmails({
-      request: row, applicant, crew, officeEmail: ctx.officeEmail, date: input.date, previousDate: previous, note, appOrigin: ctx.appOrigin,
+      request: row, applicant, crew, officeEmail: ctx.env.OFFICE_EMAIL, date: input.date, previousDate: previous, note, appOrigin: ctx.env.APP_ORIGIN,
     });
     await enqueueEmails(tx, emails.map((e) => ({ ...e, eventId: event.id })));
     return { scheduledFor: input.date, previousDate: previous };

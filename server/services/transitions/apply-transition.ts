@@ -3,7 +3,8 @@ import { statusText } from '../../../shared/workflow/statuses';
 import { findTransition, type Transition, type TransitionAction } from '../../../shared/workflow/transitions';
 import type { TransitionBody, TransitionBodyOf } from '../../../shared/workflow/transition-inputs';
 import type { SessionUser } from '../../auth/session-user';
-import type { Db, Tx } from '../../db/client';
+import type { AppContext } from '../../context';
+import type { Tx } from '../../db/client';
 import { requestEvents, requests, users } from '../../db/schema';
 import { conflict, forbidden } from '../../lib/errors';
 import { emailsForTransition } from '../email/transition-emails';
@@ -12,7 +13,8 @@ import { loadVisibleRequest, type RequestRow } from '../requests/request-access'
 import type { ActionDef, ActionResult } from './action-def';
 import { actionDefs } from './registry';
 
-export interface TransitionContext { db: Db; officeEmail: string; appOrigin: string }
+/** What a status change needs from the app: the database, and the office's address and origin for its e-mails. */
+export type TransitionContext = Pick<AppContext, 'db' | 'env'>;
 
 /**
  * The status change itself, in a single transaction: lock the row, check the action is allowed from its current
@@ -63,6 +65,6 @@ async function transitionEmails(tx: Tx, ctx: TransitionContext, { transition, de
   return emailsForTransition({
     transition, audiences: def.emails.to, noteTo: def.emails.noteTo, ownerNoteLead: def.emails.ownerNoteLead,
     ownerReceipt: def.emails.ownerReceipt, request: row, note, applicant,
-    officeEmail: ctx.officeEmail, crew, crewLeads, appOrigin: ctx.appOrigin, detail,
+    officeEmail: ctx.env.OFFICE_EMAIL, crew, crewLeads, appOrigin: ctx.env.APP_ORIGIN, detail,
   }).map((email) => ({ ...email, eventId }));
 }
