@@ -1,9 +1,9 @@
-import type { AppContext } from './context';
+import type { AppContext } from './config/context';
 import { createDb } from './db/client';
-import { dbTimeouts, type Env } from './env';
+import { dbTimeouts, type Env } from './config/env';
 import { createLogger } from './lib/logger';
-import { createMailer } from './services/mailer';
-import { createS3Client } from './services/storage';
+import { createMailer } from './infra/mailer';
+import { createS3Client } from './infra/storage';
 
 export function createContext(env: Env): AppContext {
   const logger = createLogger(env.LOG_LEVEL);

@@ -2,7 +2,7 @@ import type { Server } from 'node:http';
 import { fileURLToPath } from 'node:url';
 import { createApp, type AppOptions } from './app';
 import { closeContext, createContext } from './context-factory';
-import { parseEnv } from './env';
+import { parseEnv } from './config/env';
 import { closeDesignPool } from './services/design/design-pool';
 import { startWorkers } from './workers';
 

@@ -1,6 +1,6 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { z } from 'zod';
-import type { SessionUser } from '../auth/session-user';
+import type { SessionUser } from './session-user';
 import { AppError, unauthenticated } from './errors';
 
 /** Turn zod issues into `{ "field.path": "message" }`, the shape every 400 carries. */

@@ -1,7 +1,7 @@
 import type { RequestHandler } from 'express';
 import type { Role } from '../../shared/workflow/statuses';
 import { forbidden, unauthenticated } from '../lib/errors';
-import type { SessionUser } from '../auth/session-user';
+import type { SessionUser } from '../lib/session-user';
 
 export function requireSignIn(): RequestHandler {
   return (req, _res, next) => next(req.user ? undefined : unauthenticated());

@@ -1,5 +1,5 @@
 import type { Express } from 'express';
-import type { AppContext } from '../context';
+import type { AppContext } from '../config/context';
 import { crewRouter } from './crew/crew.routes';
 import { documentsRouter } from './documents/documents.routes';
 import { emailsRouter } from './emails/emails.routes';

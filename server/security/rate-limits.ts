@@ -2,7 +2,7 @@ import { Router, type Request, type RequestHandler } from 'express';
 import { RateLimiterDrizzle, RateLimiterRes } from 'rate-limiter-flexible';
 import type { Db } from '../db/client';
 import { rateLimits } from '../db/schema';
-import type { Env } from '../env';
+import type { Env } from '../config/env';
 import { AppError } from '../lib/errors';
 import { addressKey } from './client-address';
 

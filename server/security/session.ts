@@ -2,7 +2,7 @@ import connectPgSimple from 'connect-pg-simple';
 import type { RequestHandler } from 'express';
 import session from 'express-session';
 import type pg from 'pg';
-import type { Env } from '../env';
+import type { Env } from '../config/env';
 import type { Logger } from '../lib/logger';
 
 export const sessionCookieName = 'gradepass.sid';

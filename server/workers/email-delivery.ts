@@ -1,4 +1,4 @@
-import type { AppContext } from '../context';
+import type { AppContext } from '../config/context';
 import { isDatabaseUnavailable } from '../lib/db-unavailable';
 import { claimEmail, recordFailure, recordSent } from './email-claims';
 import { keepLease } from './email-lease';

@@ -1,7 +1,7 @@
 import { createHash } from 'node:crypto';
 import PgBoss from 'pg-boss';
-import type { AppContext } from '../context';
-import { dbTimeouts } from '../env';
+import type { AppContext } from '../config/context';
+import { dbTimeouts } from '../config/env';
 import { poolTimeouts } from '../db/client';
 import { dueEmails } from './email-claims';
 import { deliverEmail, deliverySettings, type DeliverySettings } from './email-delivery';

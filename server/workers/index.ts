@@ -1,4 +1,4 @@
-import type { AppContext } from '../context';
+import type { AppContext } from '../config/context';
 import { startEmailWorker, type EmailWorkerOptions } from './email-queue';
 import { startUploadSweep } from './upload-sweep';
 

@@ -1,6 +1,6 @@
 import { DeleteObjectCommand } from '@aws-sdk/client-s3';
 import { and, asc, eq, lt } from 'drizzle-orm';
-import type { AppContext } from '../context';
+import type { AppContext } from '../config/context';
 import { photos } from '../db/schema';
 
 type SweepContext = Pick<AppContext, 'db' | 's3' | 'env' | 'logger'>;

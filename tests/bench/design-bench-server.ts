@@ -3,7 +3,7 @@
 import type { Server } from 'node:http';
 import { createApp } from '../../server/app';
 import { closeContext, createContext } from '../../server/context-factory';
-import { parseEnv } from '../../server/env';
+import { parseEnv } from '../../server/config/env';
 import { closeDesignPool, proposeOffThread } from '../../server/services/design/design-pool';
 import { commonRuralTemplate } from '../../shared/engine';
 

@@ -2,7 +2,7 @@
 import type { Server } from 'node:http';
 import { createApp } from '../../server/app';
 import { closeContext, createContext } from '../../server/context-factory';
-import { parseEnv } from '../../server/env';
+import { parseEnv } from '../../server/config/env';
 import { handle } from '../../server/lib/handle';
 import { rateLimitRouter } from '../../server/security/rate-limits';
 

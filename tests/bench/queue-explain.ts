@@ -2,8 +2,8 @@
 // A diagnostic script (node --import tsx tests/bench/queue-explain.ts), not part of npm run bench.
 import { fillPlaceholders } from 'drizzle-orm';
 import { createDb } from '../../server/db/client';
-import { listQueue } from '../../server/routes/queue/queue.service';
-import { queueQuerySchema } from '../../server/routes/queue/queue-query';
+import { listQueue } from '../../server/services/queue/queue.service';
+import { queueQuerySchema } from '../../server/services/queue/queue-query';
 import { prepareBenchStack } from './bench-stack';
 import { seedQueue } from './queue-seed';
 

@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDb } from '../../server/db/client';
 import { gradeChecks, jurisdictions, requests } from '../../server/db/schema';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { ensurePerson } from '../factories/people';
 import { createRequestRow, type RequestRow } from '../factories/request-rows';
 import { appUrl, launchBrowser, saveScreenshot, signInAs } from '../setup/browser';

@@ -3,7 +3,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDb } from '../../server/db/client';
 import { jurisdictions } from '../../server/db/schema';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { ensurePerson } from '../factories/people';
 import { createRequestRow, type RequestRow } from '../factories/request-rows';
 import { appUrl, launchBrowser, saveScreenshot, signInAs, signOut } from '../setup/browser';

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { appUrl, launchBrowser, saveScreenshot, signInAs, signOut } from '../setup/browser';
 
 let session: Awaited<ReturnType<typeof launchBrowser>>;

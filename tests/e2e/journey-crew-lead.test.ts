@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import { createDb } from '../../server/db/client';
 import { emails, messages } from '../../server/db/schema';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { saveYard } from '../../server/services/crew/yard.service';
 import { createReleasedJob } from '../factories/crew-jobs';
 import { ensurePerson } from '../factories/people';

@@ -4,7 +4,7 @@ import path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { StoredMessage } from '../../fakes';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { solidPng } from '../factories/photo-images';
 import { appUrl, caughtMail, launchBrowser, saveScreenshot, screenshotPath, signInAs, siteJpeg } from '../setup/browser';
 

@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { StoredMessage } from '../../fakes';
 import { createDb } from '../../server/db/client';
 import { requests, users } from '../../server/db/schema';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { createRequestRow, type RequestRow } from '../factories/request-rows';
 import { appUrl, caughtMail, launchBrowser, saveScreenshot, signInAs } from '../setup/browser';
 

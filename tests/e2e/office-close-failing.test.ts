@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDb } from '../../server/db/client';
 import { jobs, requests } from '../../server/db/schema';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { createReleasedJob } from '../factories/crew-jobs';
 import { createAsBuiltSet } from '../factories/grade-checks';
 import { ensurePerson } from '../factories/people';

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { heicWithPosition } from '../factories/photo-images';
 import { completeApplication } from '../factories/request-rows';
 import { appUrl, launchBrowser, saveScreenshot, signInAs } from '../setup/browser';

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { createDb } from '../../server/db/client';
 import { emails } from '../../server/db/schema';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { appUrl, caughtMail, launchBrowser, saveScreenshot, signInAs } from '../setup/browser';
 
 const staff = demoPeople.find((p) => p.role === 'staff')!;

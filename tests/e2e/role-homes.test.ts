@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { launchBrowser, saveScreenshot, signInAs, signOut } from '../setup/browser';
 
 let session: Awaited<ReturnType<typeof launchBrowser>>;

@@ -1,4 +1,4 @@
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import type { Role } from '../../shared/workflow/statuses';
 import { afterAll, beforeAll } from 'vitest';
 import { createTestApp, signIn, type TestApp } from '../setup/test-app';

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import type { RequestStatus } from '../../shared/workflow/statuses';
 import { createReleasedJob, createCrewCheck } from '../factories/crew-jobs';
 import { signInCast, type Agent, type Cast } from '../factories/office-cast';

@@ -1,8 +1,8 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { requests } from '../../server/db/schema';
-import { seedDemo } from '../../server/db/seed';
-import { seedDemoJobs } from '../../server/db/seed/demo-jobs';
+import { seedDemo } from '../../server/dev/seed';
+import { seedDemoJobs } from '../../server/dev/seed/demo-jobs';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createTestApp, type TestApp } from '../setup/test-app';
 

@@ -3,8 +3,8 @@ import { eq, isNotNull } from 'drizzle-orm';
 import { PDFParse } from 'pdf-parse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { documents, gradeChecks, requestEvents, requests } from '../../server/db/schema';
-import { seedDemo } from '../../server/db/seed';
-import { seedDemoReports } from '../../server/db/seed/demo-reports';
+import { seedDemo } from '../../server/dev/seed';
+import { seedDemoReports } from '../../server/dev/seed/demo-reports';
 import { createTestApp, signIn, type TestApp } from '../setup/test-app';
 
 let t: TestApp;

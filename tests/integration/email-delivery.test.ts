@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startStandIns, type StandIns, type StoredMessage } from '../../fakes';
 import { emails } from '../../server/db/schema';
 import { closeContext, createContext } from '../../server/context-factory';
-import { parseEnv } from '../../server/env';
+import { parseEnv } from '../../server/config/env';
 import { startWorkers, type Workers } from '../../server/workers';
 import { messageIdFor } from '../../server/workers/email-delivery';
 import { signInCast, type Cast } from '../factories/office-cast';

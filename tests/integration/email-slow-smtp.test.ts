@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startStandIns, type StandIns } from '../../fakes';
 import { closeContext, createContext } from '../../server/context-factory';
 import { emails } from '../../server/db/schema';
-import { parseEnv } from '../../server/env';
+import { parseEnv } from '../../server/config/env';
 import { startWorkers, type Workers } from '../../server/workers';
 import { claimEmail, recordFailure, recordSent } from '../../server/workers/email-claims';
 import { emailQueue, jobIdFor } from '../../server/workers/email-queue';

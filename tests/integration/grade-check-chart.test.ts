@@ -3,7 +3,7 @@ import { cutFillBands } from '../../shared/charts/chart-geometry';
 import { chartInputFor } from '../../shared/charts/chart-input';
 import { profileChartSvg } from '../../shared/charts/profile-chart';
 import { checkEntrance, ruleProfileSchema } from '../../shared/engine';
-import { demoJurisdictions } from '../../server/db/seed/jurisdictions';
+import { demoJurisdictions } from '../../server/dev/seed/jurisdictions';
 import { groundPoints } from './grade-check-survey';
 
 const marrow = { ...ruleProfileSchema.parse(demoJurisdictions[0].profile), id: 'v1', version: 1, jurisdictionName: 'Marrow County' };

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { demoJurisdictions } from '../../server/db/seed/jurisdictions';
+import { demoJurisdictions } from '../../server/dev/seed/jurisdictions';
 import { plainSummary } from '../../server/services/grade-checks/plain-summary';
 import { parseGradeCheckInputs, runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
 import { proposeProfile, ruleProfileSchema } from '../../shared/engine';

@@ -4,7 +4,7 @@ import { parsePastedCentreline } from '../../src/features/grade-check/lib/paste-
 import { initialSurvey, type SurveyState } from '../../src/features/grade-check/lib/survey-state';
 import { surveyFromInputs } from '../../src/features/grade-check/lib/survey-from-inputs';
 import { runLiveCheck, runLiveCheckWithProposal } from '../../src/features/grade-check/lib/use-live-check';
-import { demoJurisdictions } from '../../server/db/seed/jurisdictions';
+import { demoJurisdictions } from '../../server/dev/seed/jurisdictions';
 import { closeDesignPool } from '../../server/services/design/design-pool';
 import { parseGradeCheckInputs, runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
 import { proposeProfile, ruleProfileSchema } from '../../shared/engine';

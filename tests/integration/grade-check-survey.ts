@@ -2,7 +2,7 @@ import { PDFParse } from 'pdf-parse';
 import { eq } from 'drizzle-orm';
 import type { DbOrTx } from '../../server/db/client';
 import { jurisdictions } from '../../server/db/schema';
-import { seedJurisdictions } from '../../server/db/seed/jurisdictions';
+import { seedJurisdictions } from '../../server/dev/seed/jurisdictions';
 
 /**
  * An invented site: a 5.5% landing, then 12% up to the house. Marrow County's 4% landing limit fails it;

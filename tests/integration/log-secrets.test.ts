@@ -1,11 +1,11 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
-import type { AppContext } from '../../server/context';
+import type { AppContext } from '../../server/config/context';
 import { closeContext, createContext } from '../../server/context-factory';
-import { demoPeople } from '../../server/db/seed/demo-people';
-import { seedDemo } from '../../server/db/seed';
-import { parseEnv } from '../../server/env';
+import { demoPeople } from '../../server/dev/seed/demo-people';
+import { seedDemo } from '../../server/dev/seed';
+import { parseEnv } from '../../server/config/env';
 import { createLogger } from '../../server/lib/logger';
 import { createTestDatabase, dropTestDatabase, testEnv } from '../setup/test-app';
 

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { requests } from '../../server/db/schema';
-import { queueCountCap } from '../../server/routes/queue/queue-statement';
+import { queueCountCap } from '../../server/services/queue/queue-statement';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createTestApp, type TestApp } from '../setup/test-app';
 

@@ -1,10 +1,10 @@
 import request from 'supertest';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
-import type { AppContext } from '../../server/context';
+import type { AppContext } from '../../server/config/context';
 import { closeContext, createContext } from '../../server/context-factory';
-import { parseEnv } from '../../server/env';
-import { maxOpenDrafts } from '../../server/routes/requests/drafts.service';
+import { parseEnv } from '../../server/config/env';
+import { maxOpenDrafts } from '../../server/services/requests/drafts.service';
 import { createRequestRow } from '../factories/request-rows';
 import { createTestApp, signIn, type TestApp } from '../setup/test-app';
 

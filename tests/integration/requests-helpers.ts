@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import type request from 'supertest';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { ensurePerson } from '../factories/people';
 import { completeApplication } from '../factories/request-rows';
 import { signIn, type TestApp } from '../setup/test-app';

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { demoPeople } from '../../server/db/seed/demo-people';
-import { seedDemo } from '../../server/db/seed';
+import { demoPeople } from '../../server/dev/seed/demo-people';
+import { seedDemo } from '../../server/dev/seed';
 import { createTestApp, signIn, type TestApp } from '../setup/test-app';
 
 let t: TestApp;

@@ -5,7 +5,7 @@ import { fileURLToPath } from 'node:url';
 import type { TestProject } from 'vitest/node';
 import { startStandIns } from '../../fakes';
 import { applyMigrations } from '../../server/db/client';
-import { demoPeople } from '../../server/db/seed/demo-people';
+import { demoPeople } from '../../server/dev/seed/demo-people';
 import { devOAuthClient } from '../../server/dev/dev-config';
 import { ensureDatabase, startPostgres } from '../../server/dev/postgres';
 import { standInEnv } from '../../server/dev/stand-in-env';

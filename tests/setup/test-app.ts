@@ -3,10 +3,10 @@ import pg from 'pg';
 import request from 'supertest';
 import { inject } from 'vitest';
 import { createApp } from '../../server/app';
-import type { AppContext } from '../../server/context';
+import type { AppContext } from '../../server/config/context';
 import { closeContext, createContext } from '../../server/context-factory';
 import { closeDesignPool } from '../../server/services/design/design-pool';
-import { parseEnv } from '../../server/env';
+import { parseEnv } from '../../server/config/env';
 import { ensureDatabase } from '../../server/dev/postgres';
 import { relaxedRateLimits } from './relaxed-limits';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { photoTypeOf } from '../../server/routes/photos/photo-content';
+import { photoTypeOf } from '../../server/services/photos/photo-content';
 import { heicWithPosition, solidPng } from '../factories/photo-images';
 
 const bytes = (...parts: (string | number[])[]) =>

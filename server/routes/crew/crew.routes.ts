@@ -3,7 +3,7 @@ import {
   acceptJobInputSchema, boardQuerySchema, handBackInputSchema, markBuiltInputSchema, saveAsBuiltInputSchema, scheduleJobInputSchema,
   startWorkInputSchema, yardInputSchema,
 } from '../../../shared/crew/crew-inputs';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
 import { asBuiltPage, saveAsBuiltSet } from '../../services/crew/as-built.service';
@@ -14,7 +14,7 @@ import { scheduleJob } from '../../services/crew/schedule.service';
 import { loadYard, saveYard } from '../../services/crew/yard.service';
 import { changeStatus } from '../../services/transitions/change-status';
 import type { TransitionBody } from '../../../shared/workflow/transition-inputs';
-import { requestView } from '../requests/request-view';
+import { requestView } from '../../services/requests/request-view';
 
 /**
  * The crew's side: the board of released jobs, taking and handing back, planning the day, the field sheet and

@@ -1,9 +1,9 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
-import { documentLink, listDocuments, setShared } from './documents.service';
+import { documentLink, listDocuments, setShared } from '../../services/documents/documents.service';
 
 const documentParams = z.object({ id: z.uuid('must be a valid id'), documentId: z.uuid('must be a valid id') });
 

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { listEmailsQuerySchema, type EmailDetailView, type EmailLogPage } from '../../../shared/contracts/emails';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
 import { decodeCursor, getEmail, listEmails, retryAllDead, retryEmail } from '../../services/email/email-log.service';

@@ -2,13 +2,13 @@ import { Router } from 'express';
 import {
   attachGradeCheckInputSchema, saveGradeCheckInputSchema, type GradeCheckAttachedView, type GradeCheckListView, type GradeCheckSavedView,
 } from '../../../shared/contracts/grade-checks';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
-import { attachGradeCheck } from '../../services/grade-checks/attach-grade-check';
+import { attachGradeCheck } from '../../services/documents/attach-grade-check';
 import { withdrawGradeCheck } from '../../services/grade-checks/withdraw-grade-check';
 import { listGradeChecks, loadVisibleGradeCheck, saveGradeCheck } from '../../services/grade-checks/grade-checks.service';
-import { checkView, requestHeader } from './grade-check-view';
+import { checkView, requestHeader } from '../../services/grade-checks/grade-check-view';
 
 export function gradeChecksRouter(ctx: AppContext) {
   const { db } = ctx;

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { sql } from 'drizzle-orm';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 
 export function healthRouter({ db }: AppContext) {
   const router = Router();

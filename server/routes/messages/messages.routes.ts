@@ -1,8 +1,8 @@
 import { Router } from 'express';
 import { postMessageInputSchema, type MessagesAnswer, type PostMessageAnswer } from '../../../shared/contracts/messages';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
-import { listMessages, postMessage } from './messages.service';
+import { listMessages, postMessage } from '../../services/messages/messages.service';
 
 export function messagesRouter(ctx: AppContext) {
   const { db } = ctx;

@@ -3,14 +3,14 @@ import { z } from 'zod';
 import {
   photoCaptionInputSchema, photoConfirmInputSchema, photoUploadInputSchema, type PhotoLinkAnswer, type PhotoView,
 } from '../../../shared/contracts/photos';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 import { notFound } from '../../lib/errors';
 import { handle, uuidParam } from '../../lib/handle';
 import { requireRole } from '../../middleware/require-role';
 import { loadVisibleRequest } from '../../services/requests/request-access';
 import {
   confirmUpload, listStored, presignUpload, removePhoto, setCaption, viewSeconds, viewUrl, type PhotoRow,
-} from './photos.service';
+} from '../../services/photos/photos.service';
 
 const photoParams = z.object({ id: z.uuid('must be a valid id'), photoId: z.uuid('must be a valid id') });
 

@@ -1,11 +1,11 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
-import { assignRequest, queueOptions } from './assignment.service';
-import { queueQuerySchema } from './queue-query';
-import { listQueue } from './queue.service';
+import { assignRequest, queueOptions } from '../../services/queue/assignment.service';
+import { queueQuerySchema } from '../../services/queue/queue-query';
+import { listQueue } from '../../services/queue/queue.service';
 
 export const assignInputSchema = z.strictObject({
   assigneeId: z.uuid('must be a person’s id, or null to unassign').nullable(),

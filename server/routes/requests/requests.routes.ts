@@ -1,14 +1,14 @@
 import { Router } from 'express';
 import { saveDraftInputSchema, type MyRequestRow } from '../../../shared/contracts/requests';
 import type { EventsAnswer } from '../../../shared/contracts/events';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { requireRole } from '../../middleware/require-role';
 import { loadVisibleRequest } from '../../services/requests/request-access';
-import { createDraft, listMine, saveDraft } from './drafts.service';
-import { expectedOfApplicant, requestView } from './request-view';
-import { listDocumentViews } from '../documents/documents.service';
-import { listEvents } from './timeline.service';
+import { createDraft, listMine, saveDraft } from '../../services/requests/drafts.service';
+import { expectedOfApplicant, requestView } from '../../services/requests/request-view';
+import { listDocumentViews } from '../../services/documents/documents.service';
+import { listEvents } from '../../services/requests/timeline.service';
 
 export function requestsRouter({ db }: AppContext) {
   const router = Router();

@@ -2,12 +2,12 @@ import { Router } from 'express';
 import {
   createJurisdictionInputSchema, createVersionInputSchema, updateVersionInputSchema, type JurisdictionSummary,
 } from '../../../shared/contracts/rule-profiles';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
 import {
   createDraft, createJurisdiction, listJurisdictions, loadJurisdiction, loadVersion, publishVersion, updateDraft,
-} from './rule-profiles.service';
+} from '../../services/rule-profiles/rule-profiles.service';
 
 /** Staff read the limits they check against; only admins change them. */
 export function ruleProfilesRouter({ db }: AppContext) {

@@ -1,9 +1,9 @@
 import { Router } from 'express';
 import { transitionInputSchema } from '../../../shared/workflow/transition-inputs';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { changeStatus } from '../../services/transitions/change-status';
-import { requestView } from '../requests/request-view';
+import { requestView } from '../../services/requests/request-view';
 
 export function transitionsRouter(ctx: AppContext) {
   const router = Router();

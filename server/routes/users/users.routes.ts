@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { addPersonInputSchema, listPeopleQuerySchema, updatePersonInputSchema, type PersonView } from '../../../shared/contracts/people';
-import { inviteUser, listUsers, setUserAccess } from '../../auth/users.service';
-import type { AppContext } from '../../context';
+import { inviteUser, listUsers, setUserAccess } from '../../services/users/users.service';
+import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { requireRole } from '../../middleware/require-role';
 

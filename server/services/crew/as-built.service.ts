@@ -3,7 +3,7 @@ import { checkAsBuilt, EngineInputError, type AsBuiltReadingResult, type AsBuilt
 import type { SaveAsBuiltInput } from '../../../shared/crew/crew-inputs';
 import type { AsBuiltPageView, AsBuiltSetView } from '../../../shared/crew/crew-views';
 import { crewStages, statusText } from '../../../shared/workflow/statuses';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { asBuiltSets, users } from '../../db/schema';
 import { AppError, conflict } from '../../lib/errors';

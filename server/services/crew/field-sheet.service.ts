@@ -5,7 +5,7 @@ import { headwaterWords } from '../../../shared/charts/check-words';
 import { roadOwnerText } from '../../../shared/requests/choices';
 import { crewStages } from '../../../shared/workflow/statuses';
 import type { CulvertSheet, FieldSheetView, LaserSheet } from '../../../shared/crew/crew-views';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { Db } from '../../db/client';
 import { jobs, jurisdictions, users } from '../../db/schema';
 import { notFound } from '../../lib/errors';

@@ -1,6 +1,6 @@
 import { and, desc, eq, gt, inArray, or } from 'drizzle-orm';
 import type { MyJob } from '../../../shared/crew/crew-views';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx } from '../../db/client';
 import { asBuiltSets, jobs, requestEvents, requests } from '../../db/schema';
 import { permitOf } from './board.service';

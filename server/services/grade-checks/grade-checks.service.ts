@@ -1,7 +1,7 @@
 import { and, desc, eq, isNotNull, max } from 'drizzle-orm';
 import type { RuleProfile } from '../../../shared/engine';
 import { gradeCheckOpenStatuses, isOfficeRole } from '../../../shared/workflow/statuses';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
 import { AppError, conflict, notFound } from '../../lib/errors';

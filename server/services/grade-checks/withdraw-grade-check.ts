@@ -1,6 +1,6 @@
 import { and, eq } from 'drizzle-orm';
 import { gradeCheckOpenStatuses } from '../../../shared/workflow/statuses';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { Db } from '../../db/client';
 import { documents, gradeChecks, requestEvents } from '../../db/schema';
 import { conflict } from '../../lib/errors';

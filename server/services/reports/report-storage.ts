@@ -1,6 +1,6 @@
 import { GetObjectCommand, PutObjectCommand } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
-import type { AppContext } from '../../context';
+import type { AppContext } from '../../config/context';
 
 /** Long enough to open or save the file, short enough that a forwarded link soon stops working. */
 export const DOWNLOAD_SECONDS = 300;

@@ -1,6 +1,6 @@
 import { crewStages, isOfficeRole } from '../../../shared/workflow/statuses';
 import { eq } from 'drizzle-orm';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx } from '../../db/client';
 import { requests } from '../../db/schema';
 import { notFound } from '../../lib/errors';

@@ -1,6 +1,6 @@
 import type { TransitionAction } from '../../../shared/workflow/transitions';
 import type { TransitionBodyOf } from '../../../shared/workflow/transition-inputs';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx, Tx } from '../../db/client';
 import type { requests } from '../../db/schema';
 import type { AppError } from '../../lib/errors';

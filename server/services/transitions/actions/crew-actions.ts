@@ -1,5 +1,5 @@
 import { eq } from 'drizzle-orm';
-import type { SessionUser } from '../../../auth/session-user';
+import type { SessionUser } from '../../../lib/session-user';
 import type { DbOrTx } from '../../../db/client';
 import { jobs, requests, users } from '../../../db/schema';
 import { AppError } from '../../../lib/errors';

@@ -12,7 +12,7 @@ export const useRequest = (id: string) => useQuery(getRequestQueryOptions(id));
 
 /**
  * The same query, read by an office screen: for office roles the server adds its bookkeeping fields to the view
- * (server/routes/requests/request-view.ts).
+ * (server/services/requests/request-view.ts).
  */
 export const useOfficeRequest = (id: string) =>
   useQuery({ ...getRequestQueryOptions(id), select: (answer) => answer as RequestAnswer<OfficeRequestView> });

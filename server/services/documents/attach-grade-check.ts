@@ -1,13 +1,13 @@
 import { and, eq, isNull } from 'drizzle-orm';
-import type { SessionUser } from '../../auth/session-user';
-import type { AppContext } from '../../context';
+import type { SessionUser } from '../../lib/session-user';
+import type { AppContext } from '../../config/context';
 import { documents, gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
 import { badRequest } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
 import { buildGradeCheckReport } from '../reports/grade-check-report';
 import { storeReport } from '../reports/report-storage';
 import type { RuleProfile } from '../../../shared/engine';
-import { loadVisibleGradeCheck } from './grade-checks.service';
+import { loadVisibleGradeCheck } from '../grade-checks/grade-checks.service';
 
 export const REPORT_KIND = 'grade-check-report';
 

@@ -1,9 +1,9 @@
 import passport from 'passport';
 import { Strategy as GoogleStrategy, type Profile, type StrategyOptions, type VerifyCallback } from 'passport-google-oauth20';
-import type { Env } from '../env';
+import type { Env } from '../config/env';
 import type { Db } from '../db/client';
 import { OAuthStateCookieStore } from './oauth-state-cookie';
-import { findSessionUser, signInWithProfile } from './users.service';
+import { findSessionUser, signInWithProfile } from '../services/users/users.service';
 
 export const callbackPath = '/auth/google/callback';
 

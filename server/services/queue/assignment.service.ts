@@ -1,10 +1,10 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { officeRoles } from '../../../shared/workflow/roles';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { jurisdictions, requestEvents, requests, users } from '../../db/schema';
 import { badRequest } from '../../lib/errors';
-import { loadVisibleRequest } from '../../services/requests/request-access';
+import { loadVisibleRequest } from '../requests/request-access';
 
 /** People a request can be given to: the office and the owner, while their accounts are on. */
 export async function officePeople(db: DbOrTx) {

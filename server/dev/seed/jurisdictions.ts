@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { passengerCarPreset, ruleProfileSchema, type RuleProfileInput } from '../../../shared/engine';
-import type { DbOrTx } from '../client';
-import { jurisdictions, ruleProfileVersions } from '../schema';
+import type { DbOrTx } from '../../db/client';
+import { jurisdictions, ruleProfileVersions } from '../../db/schema';
 
 interface DemoJurisdiction { slug: string; name: string; authority: string; profile: RuleProfileInput }
 

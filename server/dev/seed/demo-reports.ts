@@ -1,7 +1,7 @@
 import { and, eq, isNotNull, isNull, like } from 'drizzle-orm';
-import type { AppContext } from '../../context';
-import { attachGradeCheck } from '../../services/grade-checks/attach-grade-check';
-import { documents, gradeChecks, requestEvents, users } from '../schema';
+import type { AppContext } from '../../config/context';
+import { attachGradeCheck } from '../../services/documents/attach-grade-check';
+import { documents, gradeChecks, requestEvents, users } from '../../db/schema';
 
 /**
  * The demo's attached grade checks get their PDF reports, made and stored exactly as attaching one in the app does,

@@ -1,6 +1,6 @@
 import { sql } from 'drizzle-orm';
-import type { Db } from '../client';
-import { users } from '../schema';
+import type { Db } from '../../db/client';
+import { users } from '../../db/schema';
 import { demoPeople } from './demo-people';
 import { seedDemoJobs } from './demo-jobs';
 import { seedDemoRequests } from './demo-requests';

@@ -1,6 +1,6 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { EventView } from '../../../shared/contracts/events';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx } from '../../db/client';
 import { requestEvents, users } from '../../db/schema';
 import { isOffice } from './request-view';

@@ -4,12 +4,12 @@ import { and, asc, eq, gt, inArray, or } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import { maxPhotosPerRequest, photoExtensions, type photoContentTypes } from '../../../shared/requests/photo-rules';
 import { photosEditable } from '../../../shared/contracts/photos';
-import type { SessionUser } from '../../auth/session-user';
-import type { AppContext } from '../../context';
+import type { SessionUser } from '../../lib/session-user';
+import type { AppContext } from '../../config/context';
 import type { Db, DbOrTx } from '../../db/client';
 import { photos } from '../../db/schema';
 import { badRequest, conflict, notFound } from '../../lib/errors';
-import { loadVisibleRequest } from '../../services/requests/request-access';
+import { loadVisibleRequest } from '../requests/request-access';
 import { photoTypeOf, readLeadingBytes } from './photo-content';
 
 /** What reaching the photo bucket takes, from the app's context. */

@@ -1,5 +1,5 @@
 import nodemailer from 'nodemailer';
-import type { Env } from '../env';
+import type { Env } from '../config/env';
 
 export function createMailer(env: Env) {
   return nodemailer.createTransport({

@@ -3,8 +3,8 @@ import { plainSummary } from '../../services/grade-checks/plain-summary';
 import { parseGradeCheckInputs, runGradeCheck } from '../../services/grade-checks/run-grade-check';
 import { eq } from 'drizzle-orm';
 import { toStoredColumns } from '../../../shared/grade-check/stored-check';
-import type { DbOrTx } from '../client';
-import { jurisdictions, ruleProfileVersions } from '../schema';
+import type { DbOrTx } from '../../db/client';
+import { jurisdictions, ruleProfileVersions } from '../../db/schema';
 
 /** Ground shots along an invented site's centreline, rising `landingRisePercent` and then `drivewayRisePercent`. */
 export function demoGround(landingRisePercent: number, drivewayRisePercent: number, lengthFt = 80): ProfilePoint[] {

@@ -1,11 +1,11 @@
 import { and, desc, eq } from 'drizzle-orm';
-import type { SessionUser } from '../../auth/session-user';
-import type { AppContext } from '../../context';
+import type { SessionUser } from '../../lib/session-user';
+import type { AppContext } from '../../config/context';
 import type { Db } from '../../db/client';
 import { documents, requestEvents } from '../../db/schema';
 import { notFound } from '../../lib/errors';
-import { loadVisibleRequest } from '../../services/requests/request-access';
-import { DOWNLOAD_SECONDS, downloadUrl } from '../../services/reports/report-storage';
+import { loadVisibleRequest } from '../requests/request-access';
+import { DOWNLOAD_SECONDS, downloadUrl } from '../reports/report-storage';
 
 type DocumentRow = typeof documents.$inferSelect;
 

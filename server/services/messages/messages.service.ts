@@ -1,14 +1,14 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { isOfficeRole } from '../../../shared/workflow/statuses';
 import type { MessageVisibility } from '../../../shared/contracts/messages';
-import type { SessionUser } from '../../auth/session-user';
-import type { AppContext } from '../../context';
+import type { SessionUser } from '../../lib/session-user';
+import type { AppContext } from '../../config/context';
 import type { Db, Tx } from '../../db/client';
 import { messages, users } from '../../db/schema';
 import { badRequest, conflict, notFound } from '../../lib/errors';
-import { messageEmails } from '../../services/email/message-emails';
-import { enqueueEmails } from '../../services/email/outbox';
-import { loadVisibleRequest, type RequestRow } from '../../services/requests/request-access';
+import { messageEmails } from '../email/message-emails';
+import { enqueueEmails } from '../email/outbox';
+import { loadVisibleRequest, type RequestRow } from '../requests/request-access';
 
 type Visibility = MessageVisibility;
 

@@ -1,9 +1,9 @@
 import type { S3Client } from '@aws-sdk/client-s3';
 import type { Transporter } from 'nodemailer';
 import type pg from 'pg';
-import type { Db } from './db/client';
+import type { Db } from '../db/client';
 import type { Env } from './env';
-import type { Logger } from './lib/logger';
+import type { Logger } from '../lib/logger';
 
 /** Everything a route or service needs from the outside world, built once at start-up and passed down. */
 export interface AppContext {

@@ -1,5 +1,5 @@
 import { S3Client } from '@aws-sdk/client-s3';
-import type { Env } from '../env';
+import type { Env } from '../config/env';
 
 export function createS3Client(env: Env) {
   return new S3Client({

@@ -3,8 +3,8 @@ import { ruleProfileSchema, type ProfilePoint } from '../../../shared/engine';
 import type { SubmittedApplication } from '../../../shared/requests/application-schema';
 import type { RequestStatus } from '../../../shared/workflow/statuses';
 import { nextReference } from '../../services/requests/reference';
-import type { Db } from '../client';
-import { gradeChecks, jobs, jurisdictions, requestEvents, requests, ruleProfileVersions, users } from '../schema';
+import type { Db } from '../../db/client';
+import { gradeChecks, jobs, jurisdictions, requestEvents, requests, ruleProfileVersions, users } from '../../db/schema';
 import { demoCheck, type DemoSite } from './demo-survey';
 
 const address = '57 Juniper Ridge Road, Marrow Crossing';

@@ -4,8 +4,8 @@ import type { RequestStatus } from '../../../shared/workflow/statuses';
 import { loadJobCheck } from '../../services/crew/saved-check';
 import { verifyReadings } from '../../services/crew/as-built.service';
 import { nextReference } from '../../services/requests/reference';
-import type { Tx } from '../client';
-import { asBuiltSets, gradeChecks, jobs, messages, requestEvents, requests, users } from '../schema';
+import type { Tx } from '../../db/client';
+import { asBuiltSets, gradeChecks, jobs, messages, requestEvents, requests, users } from '../../db/schema';
 import { demoScenario, type DemoRequest } from './demo-scenario';
 import { currentRules, demoCheck } from './demo-survey';
 

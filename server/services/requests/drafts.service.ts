@@ -1,12 +1,12 @@
 import { and, count, desc, eq } from 'drizzle-orm';
 import { applicationDraftSchema, type ApplicationDraft } from '../../../shared/requests/application-schema';
 import { answerEditableStatuses } from '../../../shared/contracts/requests';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { Db } from '../../db/client';
 import { requests, users } from '../../db/schema';
 import { conflict } from '../../lib/errors';
-import { loadVisibleRequest } from '../../services/requests/request-access';
-import { nextReference } from '../../services/requests/reference';
+import { loadVisibleRequest } from './request-access';
+import { nextReference } from './reference';
 
 export const editableStatuses = new Set<string>(answerEditableStatuses);
 

@@ -1,8 +1,8 @@
 import type { GradeCheckRequestHeader, GradeCheckView } from '../../../shared/contracts/grade-checks';
 import { isOfficeRole } from '../../../shared/workflow/statuses';
-import type { SessionUser } from '../../auth/session-user';
-import type { GradeCheck } from '../../services/grade-checks/grade-checks.service';
-import type { RequestRow } from '../../services/requests/request-access';
+import type { SessionUser } from '../../lib/session-user';
+import type { GradeCheck } from './grade-checks.service';
+import type { RequestRow } from '../requests/request-access';
 
 /** What the check screens need to know about the request, without the applicant's whole application. */
 export function requestHeader(r: RequestRow) {

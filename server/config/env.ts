@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import type { DbTimeouts } from './db/client';
-import { securityEnvShape } from './security/security-env';
+import type { DbTimeouts } from '../db/client';
+import { securityEnvShape } from './security-env';
 
 const port = z.coerce.number().int().min(0).max(65535);
 

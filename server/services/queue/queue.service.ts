@@ -1,6 +1,6 @@
 import { requestStatuses, statusText, waitingOnOffice, type RequestStatus } from '../../../shared/workflow/statuses';
 import { allowedTransitions } from '../../../shared/workflow/transitions';
-import type { SessionUser } from '../../auth/session-user';
+import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx } from '../../db/client';
 import { badRequest } from '../../lib/errors';
 import { decodeQueueCursor, encodeQueueCursor, searchQuery, type QueueQuery } from './queue-query';

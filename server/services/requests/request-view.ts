@@ -1,7 +1,7 @@
 import { allowedTransitions } from '../../../shared/workflow/transitions';
 import { isOfficeRole, statusText } from '../../../shared/workflow/statuses';
-import type { SessionUser } from '../../auth/session-user';
-import type { RequestRow } from '../../services/requests/request-access';
+import type { SessionUser } from '../../lib/session-user';
+import type { RequestRow } from './request-access';
 import type { OfficeRequestView, RequestView } from '../../../shared/contracts/requests';
 import type { ApplicationDraft } from '../../../shared/requests/application-schema';
 

@@ -3,7 +3,7 @@ import { z } from 'zod';
 const count = z.coerce.number().int().min(1);
 
 /**
- * The environment for sessions, request limits and storage clean-up, spread into the one schema in server/env.ts.
+ * The environment for sessions, request limits and storage clean-up, spread into the one schema in server/config/env.ts.
  * Defaults are meant for production; tests raise the limits they do not test.
  */
 export const securityEnvShape = {

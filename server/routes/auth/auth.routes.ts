@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { sessionCookieName } from '../security/session';
-import { callbackPath, type PassportInstance } from './passport';
+import { sessionCookieName } from '../../security/session';
+import { callbackPath, type PassportInstance } from '../../security/passport';
 
 export function authRouter(passport: PassportInstance) {
   const router = Router();

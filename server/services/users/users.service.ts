@@ -1,9 +1,9 @@
 import { and, asc, eq, ilike, or, sql } from 'drizzle-orm';
-import { roleLabels, type Role } from '../../shared/workflow/statuses';
-import type { DbOrTx } from '../db/client';
-import { users } from '../db/schema';
-import { conflict, forbidden, notFound } from '../lib/errors';
-import type { SessionUser } from './session-user';
+import { roleLabels, type Role } from '../../../shared/workflow/statuses';
+import type { DbOrTx } from '../../db/client';
+import { users } from '../../db/schema';
+import { conflict, forbidden, notFound } from '../../lib/errors';
+import type { SessionUser } from '../../lib/session-user';
 
 const publicColumns = { id: users.id, email: users.email, name: users.name, role: users.role };
 
