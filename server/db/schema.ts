@@ -3,7 +3,7 @@ import {
   bigint, bigserial, boolean, customType, date, doublePrecision, index, integer, jsonb, pgEnum, pgTable, text, timestamp,
   uniqueIndex, uuid, varchar,
 } from 'drizzle-orm/pg-core';
-import { requestStatuses, roles, terminalStatuses } from '../../shared/workflow/statuses';
+import { requestStatuses, roles, terminalStatuses } from '@shared/workflow/statuses';
 
 const tsvector = customType<{ data: string }>({ dataType: () => 'tsvector' });
 const createdAt = () => timestamp({ withTimezone: true }).notNull().defaultNow();

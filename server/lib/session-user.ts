@@ -1,4 +1,4 @@
-import type { Role } from '../../shared/workflow/statuses';
+import type { Role } from '@shared/workflow/statuses';
 
 /** What a signed-in request carries as `req.user`: loaded fresh from the database on every request. */
 export interface SessionUser {

@@ -1,5 +1,5 @@
 import type { RequestHandler } from 'express';
-import type { Role } from '../../shared/workflow/statuses';
+import type { Role } from '@shared/workflow/statuses';
 import { forbidden, unauthenticated } from '../lib/errors';
 import type { SessionUser } from '../lib/session-user';
 
@@ -18,4 +18,4 @@ export function requireRole(...allowed: readonly Role[]): RequestHandler {
 }
 
 // The office's roles are one fact in shared/, which the client's screens use too.
-export { officeRoles } from '../../shared/workflow/roles';
+export { officeRoles } from '@shared/workflow/roles';

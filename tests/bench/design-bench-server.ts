@@ -5,7 +5,7 @@ import { createApp } from '../../server/app';
 import { closeContext, createContext } from '../../server/context-factory';
 import { parseEnv } from '../../server/config/env';
 import { closeDesignPool, proposeOffThread } from '../../server/services/design/design-pool';
-import { commonRuralTemplate } from '../../shared/engine';
+import { commonRuralTemplate } from '@shared/engine';
 
 const env = parseEnv(process.env);
 const ctx = createContext(env);

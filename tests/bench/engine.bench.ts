@@ -1,6 +1,6 @@
 // Prints per-call timings of checkEntrance and proposeProfile on the same grounds, and their ratio. A script,
 // not a test: timings vary by machine and are never asserted.
-import { checkEntrance, commonRuralTemplate, proposeProfile, type RuleProfile } from '../../shared/engine/index';
+import { checkEntrance, commonRuralTemplate, proposeProfile, type RuleProfile } from '@shared/engine/index';
 
 interface Point {
   stationFt: number;

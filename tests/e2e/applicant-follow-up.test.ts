@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { statusText } from '../../shared/workflow/statuses';
+import { statusText } from '@shared/workflow/statuses';
 import { completeApplication } from '../factories/request-rows';
 import { gpsTiff, heicWithPosition, solidPng, withPngMetadata } from '../factories/photo-images';
 import { appUrl, launchBrowser, signInAs } from '../setup/browser';

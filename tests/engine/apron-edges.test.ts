@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, EngineInputError, laserSetup } from '../../shared/engine';
+import { checkEntrance, EngineInputError, laserSetup } from '@shared/engine';
 import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 
 // The landing is one plane carrying the road's grade across (the first laser setup); from the landing's end the warp

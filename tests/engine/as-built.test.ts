@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkAsBuilt, classifyAsBuiltReading, commonRuralTemplate, EngineInputError } from '../../shared/engine';
+import { checkAsBuilt, classifyAsBuiltReading, commonRuralTemplate, EngineInputError } from '@shared/engine';
 import { ruleProfile } from './fixtures';
 
 // Limits from the common rural template (common practice (no source), docs/sources.md "Grades and vehicles"); an

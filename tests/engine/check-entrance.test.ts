@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, commonRuralTemplate, ENGINE_VERSION, EngineInputError, ruleProfileSchema } from '../../shared/engine';
+import { checkEntrance, commonRuralTemplate, ENGINE_VERSION, EngineInputError, ruleProfileSchema } from '@shared/engine';
 import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 
 // A vehicle with no overhangs and a high body, so that these tests isolate the grade rules from scrape.

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, commonRuralTemplate, scrapeCheck, STATION_TOLERANCE_FT, type RuleProfile } from '../../shared/engine';
+import { checkEntrance, commonRuralTemplate, scrapeCheck, STATION_TOLERANCE_FT, type RuleProfile } from '@shared/engine';
 
 // Properties of the check itself, not against a published value: geometry and the survey's 0.01 ft precision
 // (docs/sources.md, "Survey precision": common practice (no source)).

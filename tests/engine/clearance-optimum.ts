@@ -1,5 +1,5 @@
 import loadHighs from 'highs';
-import { elevationAt, type DesignVehicle } from '../../shared/engine';
+import { elevationAt, type DesignVehicle } from '@shared/engine';
 
 interface Point {
   stationFt: number;

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { crossSectionAreas, EngineInputError, earthworkFromProfiles } from '../../shared/engine';
+import { crossSectionAreas, EngineInputError, earthworkFromProfiles } from '@shared/engine';
 
 /** Shoelace area of a polygon: an oracle independent of the engine's piecewise integration. */
 const shoelace = (pts: [number, number][]) =>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance } from '../../shared/engine';
+import { checkEntrance } from '@shared/engine';
 import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 
 // 12 in of cover over the pipe: local codes (docs/sources.md, "Culvert minimums in local codes"). The crown is the

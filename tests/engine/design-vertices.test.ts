@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { designVertices, MIN_VERTEX_SPACING_FT } from '../../shared/engine/design-vertices';
-import { proposeProfile } from '../../shared/engine';
+import { designVertices, MIN_VERTEX_SPACING_FT } from '@shared/engine/design-vertices';
+import { proposeProfile } from '@shared/engine';
 import { ruleProfile } from './fixtures';
 
 const shots = (count: number, spacingFt: number) => Array.from({ length: count }, (_, i) => ({ stationFt: i * spacingFt, elevationFt: 100 }));

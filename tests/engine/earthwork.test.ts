@@ -8,7 +8,7 @@ import {
   earthworkVolume,
   soilFactors,
   truckLoads,
-} from '../../shared/engine';
+} from '@shared/engine';
 
 // Section areas and lengths below are arbitrary inputs; the expectations are the published formulas
 // (Wikibooks, Fundamentals of Transportation / Earthwork) worked by hand.

@@ -1,4 +1,4 @@
-import { commonRuralTemplate, type RuleProfile } from '../../shared/engine';
+import { commonRuralTemplate, type RuleProfile } from '@shared/engine';
 
 /** Points from a start elevation and a list of [lengthFt, gradePercent] runs. */
 export function profileFromRuns(runs: [number, number][], start = 100): { stationFt: number; elevationFt: number }[] {

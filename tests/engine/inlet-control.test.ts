@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { EngineInputError, inletControlHeadwater, inletTypes } from '../../shared/engine';
+import { EngineInputError, inletControlHeadwater, inletTypes } from '@shared/engine';
 
 describe('inlet-control headwater (FHWA HDS-5 3rd ed. 2012, Appendix A Table A.1)', () => {
   // Computed from these coefficients (not a published example): docs/sources.md ("Culvert inlet control") gives 4.621, 1.515 and 2.27.

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { EngineInputError, laserSetup, laserStepAtChangeFt, type PlaneSetting } from '../../shared/engine';
+import { EngineInputError, laserSetup, laserStepAtChangeFt, type PlaneSetting } from '@shared/engine';
 
 const base = {
   originElevationFt: 100,

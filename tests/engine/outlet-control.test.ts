@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, entranceLossCoefficients, EngineInputError, inletControlHeadwater, inletTypes, outletControlHeadwater } from '../../shared/engine';
+import { checkEntrance, entranceLossCoefficients, EngineInputError, inletControlHeadwater, inletTypes, outletControlHeadwater } from '@shared/engine';
 import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 
 // FHWA HDS-5, Hydraulic Design of Highway Culverts, 3rd ed. 2012, chapter 3 and Appendix C:

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { pipeFullFlow, rationalFlow } from '../../shared/engine';
+import { pipeFullFlow, rationalFlow } from '@shared/engine';
 
 const within = (actual: number, expected: number, fraction: number) =>
   expect(Math.abs(actual - expected) / expected).toBeLessThanOrEqual(fraction);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, commonRuralTemplate } from '../../shared/engine';
+import { checkEntrance, commonRuralTemplate } from '@shared/engine';
 import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 
 // A profile that falls and then rises holds water at its low point: geometry. The 1% drainage minimum is a test

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { EngineInputError, formatStation, gradeBreaks, normalizeProfile, parseStation, segmentGrades } from '../../shared/engine';
+import { EngineInputError, formatStation, gradeBreaks, normalizeProfile, parseStation, segmentGrades } from '@shared/engine';
 
 describe('station notation (trade practice: hundreds + feet)', () => {
   it.each([

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import * as engine from '../../shared/engine';
-import { checkEntrance, commonRuralTemplate, EngineInputError, passengerCarPreset, proposeProfile, type RuleProfile } from '../../shared/engine';
+import * as engine from '@shared/engine';
+import { checkEntrance, commonRuralTemplate, EngineInputError, passengerCarPreset, proposeProfile, type RuleProfile } from '@shared/engine';
 import { holdsWater } from './water';
 
 const runs = fc.array(fc.tuple(fc.double({ min: 1, max: 30, noNaN: true }), fc.double({ min: -15, max: 15, noNaN: true })), { minLength: 1, maxLength: 12 });

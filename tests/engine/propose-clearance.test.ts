@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { commonRuralTemplate, proposeProfile, scrapeCheck } from '../../shared/engine';
+import { commonRuralTemplate, proposeProfile, scrapeCheck } from '@shared/engine';
 import { earthBetween, independentOptimum } from './clearance-optimum';
 import { profileFromRuns } from './fixtures';
 

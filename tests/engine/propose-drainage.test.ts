@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, proposeProfile } from '../../shared/engine';
+import { checkEntrance, proposeProfile } from '@shared/engine';
 import { profileFromRuns, ruleProfile } from './fixtures';
 import { holdsWater } from './water';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, commonRuralTemplate, proposeProfile } from '../../shared/engine';
+import { checkEntrance, commonRuralTemplate, proposeProfile } from '@shared/engine';
 import { profileFromRuns, ruleProfile } from './fixtures';
 import { directionChanges, holdsWater } from './water';
 

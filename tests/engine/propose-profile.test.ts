@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, commonRuralTemplate, proposeProfile, segmentGrades } from '../../shared/engine';
+import { checkEntrance, commonRuralTemplate, proposeProfile, segmentGrades } from '@shared/engine';
 import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 
 const profileFindings = (profile: { stationFt: number; elevationFt: number }[], rules = commonRuralTemplate) =>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, proposeProfile } from '../../shared/engine';
+import { checkEntrance, proposeProfile } from '@shared/engine';
 import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 
 // The proposal is held to the same road-edge break and scrape as checkEntrance when the road side is given.

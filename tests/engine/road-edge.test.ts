@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, EngineInputError } from '../../shared/engine';
+import { checkEntrance, EngineInputError } from '@shared/engine';
 import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 
 // Grade change = algebraic difference of the two grades (exact geometry). The 13% limit is the common rural

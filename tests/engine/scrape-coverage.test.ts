@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, commonRuralTemplate, scrapeCheck } from '../../shared/engine';
+import { checkEntrance, commonRuralTemplate, scrapeCheck } from '@shared/engine';
 import { profileFromRuns } from './fixtures';
 
 // Passenger car 11 ft wheelbase, 3 ft and 5 ft overhangs (docs/sources.md, "Grades and vehicles": from memory). To

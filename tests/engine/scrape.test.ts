@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { breakOverAngleDeg, EngineInputError, gradePercentToDegrees, passengerCarPreset, scrapeCheck } from '../../shared/engine';
+import { breakOverAngleDeg, EngineInputError, gradePercentToDegrees, passengerCarPreset, scrapeCheck } from '@shared/engine';
 
 const vehicle = { name: 'Test car', wheelbaseFt: 11, frontOverhangFt: 3, rearOverhangFt: 5, clearanceIn: 5 };
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { EngineInputError, intersectionSightDistance, stoppingSightDistance } from '../../shared/engine';
+import { EngineInputError, intersectionSightDistance, stoppingSightDistance } from '@shared/engine';
 
 // AASHTO Green Book values as reproduced in the Highway Engineering Handbook Table 2.2 and the TxDOT
 // Roadway Design Manual 4.11.1 (docs/sources.md, "Sight distance").

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SparseRows } from '../../shared/engine/sparse-rows';
+import { SparseRows } from '@shared/engine/sparse-rows';
 
 // Plain bookkeeping of the solver's input (no published source needed): the rows go to HiGHS as written here.
 describe('sparse rows', () => {

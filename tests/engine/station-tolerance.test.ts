@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkAsBuilt, checkEntrance, commonRuralTemplate, EngineInputError, normalizeProfile, STATION_TOLERANCE_FT } from '../../shared/engine';
+import { checkAsBuilt, checkEntrance, commonRuralTemplate, EngineInputError, normalizeProfile, STATION_TOLERANCE_FT } from '@shared/engine';
 import { findingOf } from './fixtures';
 
 // Landing 4% for 20 ft, 17% beyond: common practice (no source). Stations to 0.01 ft: common survey practice (no source).

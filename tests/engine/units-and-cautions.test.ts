@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, commonRuralTemplate, displayLength, displaySmallLength, SAFETY_CAUTIONS } from '../../shared/engine';
+import { checkEntrance, commonRuralTemplate, displayLength, displaySmallLength, SAFETY_CAUTIONS } from '@shared/engine';
 import { profileFromRuns } from './fixtures';
 
 // 1 ft = 0.3048 m and 1 in = 25.4 mm exactly: the international yard and pound agreement (1959), from memory.

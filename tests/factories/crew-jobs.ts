@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import {
   checkEntrance, ENGINE_VERSION, laserSetup, proposeProfile, type LaserSetupInput, type RuleProfile,
-} from '../../shared/engine';
+} from '@shared/engine';
 import type { DbOrTx } from '../../server/db/client';
 import { gradeChecks, jobs, jurisdictions, requests, ruleProfileVersions } from '../../server/db/schema';
 import { completeApplication, createRequestRow, type RequestRow } from './request-rows';

@@ -1,5 +1,5 @@
 import { demoPeople } from '../../server/dev/seed/demo-people';
-import type { Role } from '../../shared/workflow/statuses';
+import type { Role } from '@shared/workflow/statuses';
 import { afterAll, beforeAll } from 'vitest';
 import { createTestApp, signIn, type TestApp } from '../setup/test-app';
 import { ensurePerson } from './people';

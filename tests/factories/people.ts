@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { eq } from 'drizzle-orm';
-import type { Role } from '../../shared/workflow/statuses';
+import type { Role } from '@shared/workflow/statuses';
 import type { DbOrTx } from '../../server/db/client';
 import { users } from '../../server/db/schema';
 

@@ -1,7 +1,7 @@
 import type { DbOrTx } from '../../server/db/client';
 import { jobs, requestEvents, requests } from '../../server/db/schema';
 import { nextReference } from '../../server/services/requests/reference';
-import type { SubmittedApplication } from '../../shared/requests/application-schema';
+import type { SubmittedApplication } from '@shared/requests/application-schema';
 
 export type RequestRow = typeof requests.$inferSelect;
 

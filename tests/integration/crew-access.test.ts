@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoPeople } from '../../server/dev/seed/demo-people';
-import type { RequestStatus } from '../../shared/workflow/statuses';
+import type { RequestStatus } from '@shared/workflow/statuses';
 import { createReleasedJob, createCrewCheck } from '../factories/crew-jobs';
 import { signInCast, type Agent, type Cast } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';

@@ -1,10 +1,10 @@
 import { eq, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { requestStatuses } from '../../shared/workflow/statuses';
+import { requestStatuses } from '@shared/workflow/statuses';
 import { asBuiltSets, gradeChecks, jobs, requestEvents, requests, ruleProfileVersions } from '../../server/db/schema';
 import { seedDemo } from '../../server/dev/seed';
 import { runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
-import { ruleProfileSchema } from '../../shared/engine';
+import { ruleProfileSchema } from '@shared/engine';
 import { createTestApp, signIn, type TestApp } from '../setup/test-app';
 
 let t: TestApp;

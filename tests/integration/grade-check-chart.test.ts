@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { cutFillBands } from '../../shared/charts/chart-geometry';
-import { chartInputFor } from '../../shared/charts/chart-input';
-import { profileChartSvg } from '../../shared/charts/profile-chart';
-import { checkEntrance, ruleProfileSchema } from '../../shared/engine';
+import { cutFillBands } from '@shared/charts/chart-geometry';
+import { chartInputFor } from '@shared/charts/chart-input';
+import { profileChartSvg } from '@shared/charts/profile-chart';
+import { checkEntrance, ruleProfileSchema } from '@shared/engine';
 import { demoJurisdictions } from '../../server/dev/seed/jurisdictions';
 import { groundPoints } from './grade-check-survey';
 

@@ -1,12 +1,12 @@
 import { eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import { gradeChecks } from '../../server/db/schema';
-import { buildChartInputFor } from '../../shared/charts/chart-input';
-import { defaultHaul } from '../../shared/charts/cut-fill-table';
-import { profileChartSvg } from '../../shared/charts/profile-chart';
-import { GRADE_CHECK_FORMAT_VERSION } from '../../shared/contracts/grade-checks';
-import type { FieldSheetView } from '../../shared/crew/crew-views';
-import { readGradeCheckRecord } from '../../shared/grade-check/stored-check';
+import { buildChartInputFor } from '@shared/charts/chart-input';
+import { defaultHaul } from '@shared/charts/cut-fill-table';
+import { profileChartSvg } from '@shared/charts/profile-chart';
+import { GRADE_CHECK_FORMAT_VERSION } from '@shared/contracts/grade-checks';
+import type { FieldSheetView } from '@shared/crew/crew-views';
+import { readGradeCheckRecord } from '@shared/grade-check/stored-check';
 import { createReleasedJob, harlowRules } from '../factories/crew-jobs';
 import { type Cast, withCastApp } from '../factories/office-cast';
 import type { TestApp } from '../setup/test-app';

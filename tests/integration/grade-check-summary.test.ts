@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { demoJurisdictions } from '../../server/dev/seed/jurisdictions';
 import { plainSummary } from '../../server/services/grade-checks/plain-summary';
 import { parseGradeCheckInputs, runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
-import { proposeProfile, ruleProfileSchema } from '../../shared/engine';
+import { proposeProfile, ruleProfileSchema } from '@shared/engine';
 
 const marrow = { ...ruleProfileSchema.parse(demoJurisdictions[0].profile), id: 'v1', version: 1, jurisdictionName: 'Marrow County' };
 const steepBeyond = [{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 100.6 }, { stationFt: 40, elevationFt: 104.6 }, { stationFt: 80, elevationFt: 110 }];

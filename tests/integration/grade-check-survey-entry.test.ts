@@ -7,7 +7,7 @@ import { runLiveCheck, runLiveCheckWithProposal } from '../../src/features/grade
 import { demoJurisdictions } from '../../server/dev/seed/jurisdictions';
 import { closeDesignPool } from '../../server/services/design/design-pool';
 import { parseGradeCheckInputs, runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
-import { proposeProfile, ruleProfileSchema } from '../../shared/engine';
+import { proposeProfile, ruleProfileSchema } from '@shared/engine';
 
 afterAll(() => closeDesignPool());
 

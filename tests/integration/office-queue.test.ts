@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { requestEvents } from '../../server/db/schema';
-import { terminalStatuses, type RequestStatus } from '../../shared/workflow/statuses';
+import { terminalStatuses, type RequestStatus } from '@shared/workflow/statuses';
 import { createJurisdiction } from '../factories/grade-checks';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';

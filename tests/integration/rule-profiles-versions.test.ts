@@ -6,7 +6,7 @@ import { seedJurisdictions } from '../../server/dev/seed/jurisdictions';
 import { loadGradeCheck, loadPublishedProfile } from '../../server/services/grade-checks/grade-checks.service';
 import { runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
 import { reportFor } from '../../server/services/documents/attach-grade-check';
-import { ENGINE_VERSION } from '../../shared/engine';
+import { ENGINE_VERSION } from '@shared/engine';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
 import { createTestApp, type TestApp } from '../setup/test-app';

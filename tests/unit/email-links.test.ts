@@ -5,7 +5,7 @@ import type { OutgoingEmail } from '../../server/services/email/outbox';
 import { scheduleEmails } from '../../server/services/email/schedule-emails';
 import { emailsForTransition } from '../../server/services/email/transition-emails';
 import { actionDefs } from '../../server/services/transitions/registry';
-import { transitions, type TransitionAction } from '../../shared/workflow/transitions';
+import { transitions, type TransitionAction } from '@shared/workflow/transitions';
 import { paths } from '../../src/config/paths';
 
 const appOrigin = 'https://gradepass.example.test';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, commonRuralTemplate, proposeProfile } from '../../shared/engine';
-import { runGradeCheck } from '../../shared/grade-check/run-check';
-import { gradeCheckInputsSchema } from '../../shared/contracts/grade-checks';
+import { checkEntrance, commonRuralTemplate, proposeProfile } from '@shared/engine';
+import { runGradeCheck } from '@shared/grade-check/run-check';
+import { gradeCheckInputsSchema } from '@shared/contracts/grade-checks';
 import { profileFromRuns } from '../engine/fixtures';
 
 // The check's one run hands the road side the office typed to the design proposal, so a proposal the screen offers

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { EngineInputError } from '../../shared/engine';
-import { fieldsOf } from '../../shared/grade-check/run-check';
+import { EngineInputError } from '@shared/engine';
+import { fieldsOf } from '@shared/grade-check/run-check';
 
 describe('engine complaints become the form’s own field paths', () => {
   it('names a value the user typed from the inputs’ root, as the form does', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { commonRuralTemplate } from '../../shared/engine';
+import { commonRuralTemplate } from '@shared/engine';
 import { buildInputs } from '../../src/features/grade-check/lib/build-inputs';
 import { initialSurvey, newKey, type SurveyState } from '../../src/features/grade-check/lib/survey-state';
 import { surveyFromInputs } from '../../src/features/grade-check/lib/survey-from-inputs';

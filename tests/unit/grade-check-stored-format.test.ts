@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { defaultHaul } from '../../shared/charts/cut-fill-table';
-import { GRADE_CHECK_FORMAT_VERSION, gradeCheckInputsSchema } from '../../shared/contracts/grade-checks';
-import { checkEntrance, commonRuralTemplate, laserSetup } from '../../shared/engine';
-import { readGradeCheckRecord, readGradeCheckRecordOrNull, StoredGradeCheckError, toStoredColumns } from '../../shared/grade-check/stored-check';
+import { defaultHaul } from '@shared/charts/cut-fill-table';
+import { GRADE_CHECK_FORMAT_VERSION, gradeCheckInputsSchema } from '@shared/contracts/grade-checks';
+import { checkEntrance, commonRuralTemplate, laserSetup } from '@shared/engine';
+import { readGradeCheckRecord, readGradeCheckRecordOrNull, StoredGradeCheckError, toStoredColumns } from '@shared/grade-check/stored-check';
 
 const ground = [{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 100.6 }, { stationFt: 60, elevationFt: 104 }];
 const laser = {

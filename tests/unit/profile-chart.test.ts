@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { ticks } from '../../shared/charts/chart-geometry';
-import { haulEstimate, loadsText } from '../../shared/charts/cut-fill-table';
-import { profileChartSvg, type ProfileChartInput } from '../../shared/charts/profile-chart';
+import { ticks } from '@shared/charts/chart-geometry';
+import { haulEstimate, loadsText } from '@shared/charts/cut-fill-table';
+import { profileChartSvg, type ProfileChartInput } from '@shared/charts/profile-chart';
 
 const chart = (ground: ProfileChartInput['ground'], roadEdgeStationFt = ground[0].stationFt): ProfileChartInput => ({
   ground, roadEdgeStationFt, landing: { lengthFt: 20, minGradePercent: -4, maxGradePercent: 4 }, maxGradePercent: 15,

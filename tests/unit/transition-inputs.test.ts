@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { formFieldsOf, transitionInputSchema, transitionInputs } from '../../shared/workflow/transition-inputs';
-import { transitionActions, transitions } from '../../shared/workflow/transitions';
+import { formFieldsOf, transitionInputSchema, transitionInputs } from '@shared/workflow/transition-inputs';
+import { transitionActions, transitions } from '@shared/workflow/transitions';
 
 describe('each status change’s shared input', () => {
   it('exists for every action of the table, and names its own action', () => {

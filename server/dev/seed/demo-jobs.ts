@@ -1,7 +1,7 @@
 import { and, eq, sql } from 'drizzle-orm';
-import { ruleProfileSchema, type ProfilePoint } from '../../../shared/engine';
-import type { SubmittedApplication } from '../../../shared/requests/application-schema';
-import type { RequestStatus } from '../../../shared/workflow/statuses';
+import { ruleProfileSchema, type ProfilePoint } from '@shared/engine';
+import type { SubmittedApplication } from '@shared/requests/application-schema';
+import type { RequestStatus } from '@shared/workflow/statuses';
 import { nextReference } from '../../services/requests/reference';
 import type { Db } from '../../db/client';
 import { gradeChecks, jobs, jurisdictions, requestEvents, requests, ruleProfileVersions, users } from '../../db/schema';

@@ -1,4 +1,4 @@
-import type { Role } from '../../../shared/workflow/statuses';
+import type { Role } from '@shared/workflow/statuses';
 
 /** The invented demo company and its customers. Anyone else who signs in becomes a property owner. */
 export const demoPeople: { email: string; name: string; role: Role }[] = [

@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
-import type { SubmittedApplication } from '../../../shared/requests/application-schema';
-import type { RequestStatus } from '../../../shared/workflow/statuses';
+import type { SubmittedApplication } from '@shared/requests/application-schema';
+import type { RequestStatus } from '@shared/workflow/statuses';
 import { loadJobCheck } from '../../services/crew/saved-check';
 import { verifyReadings } from '../../services/crew/as-built.service';
 import { nextReference } from '../../services/requests/reference';

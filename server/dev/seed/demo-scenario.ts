@@ -1,5 +1,5 @@
-import type { SubmittedApplication } from '../../../shared/requests/application-schema';
-import type { RequestStatus } from '../../../shared/workflow/statuses';
+import type { SubmittedApplication } from '@shared/requests/application-schema';
+import type { RequestStatus } from '@shared/workflow/statuses';
 import { demoGround, type DemoSite } from './demo-survey';
 
 export interface DemoRequest {

@@ -1,8 +1,8 @@
-import { proposeProfile, ruleProfileSchema, type ProfilePoint, type RuleProfile } from '../../../shared/engine';
+import { proposeProfile, ruleProfileSchema, type ProfilePoint, type RuleProfile } from '@shared/engine';
 import { plainSummary } from '../../services/grade-checks/plain-summary';
 import { parseGradeCheckInputs, runGradeCheck } from '../../services/grade-checks/run-grade-check';
 import { eq } from 'drizzle-orm';
-import { toStoredColumns } from '../../../shared/grade-check/stored-check';
+import { toStoredColumns } from '@shared/grade-check/stored-check';
 import type { DbOrTx } from '../../db/client';
 import { jurisdictions, ruleProfileVersions } from '../../db/schema';
 

@@ -1,5 +1,5 @@
 import { eq } from 'drizzle-orm';
-import { passengerCarPreset, ruleProfileSchema, type RuleProfileInput } from '../../../shared/engine';
+import { passengerCarPreset, ruleProfileSchema, type RuleProfileInput } from '@shared/engine';
 import type { DbOrTx } from '../../db/client';
 import { jurisdictions, ruleProfileVersions } from '../../db/schema';
 

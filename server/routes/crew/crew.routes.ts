@@ -2,7 +2,7 @@ import { Router } from 'express';
 import {
   acceptJobInputSchema, boardQuerySchema, handBackInputSchema, markBuiltInputSchema, saveAsBuiltInputSchema, scheduleJobInputSchema,
   startWorkInputSchema, yardInputSchema,
-} from '../../../shared/crew/crew-inputs';
+} from '@shared/crew/crew-inputs';
 import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
@@ -13,7 +13,7 @@ import { listMyJobs } from '../../services/crew/my-jobs.service';
 import { scheduleJob } from '../../services/crew/schedule.service';
 import { loadYard, saveYard } from '../../services/crew/yard.service';
 import { changeStatus } from '../../services/transitions/change-status';
-import type { TransitionBody } from '../../../shared/workflow/transition-inputs';
+import type { TransitionBody } from '@shared/workflow/transition-inputs';
 import { requestView } from '../../services/requests/request-view';
 
 /**

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { listEmailsQuerySchema, type EmailDetailView, type EmailLogPage } from '../../../shared/contracts/emails';
+import { listEmailsQuerySchema, type EmailDetailView, type EmailLogPage } from '@shared/contracts/emails';
 import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';

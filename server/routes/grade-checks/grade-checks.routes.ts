@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import {
   attachGradeCheckInputSchema, saveGradeCheckInputSchema, type GradeCheckAttachedView, type GradeCheckListView, type GradeCheckSavedView,
-} from '../../../shared/contracts/grade-checks';
+} from '@shared/contracts/grade-checks';
 import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';

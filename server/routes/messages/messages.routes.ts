@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { postMessageInputSchema, type MessagesAnswer, type PostMessageAnswer } from '../../../shared/contracts/messages';
+import { postMessageInputSchema, type MessagesAnswer, type PostMessageAnswer } from '@shared/contracts/messages';
 import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { listMessages, postMessage } from '../../services/messages/messages.service';

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import {
   photoCaptionInputSchema, photoConfirmInputSchema, photoUploadInputSchema, type PhotoLinkAnswer, type PhotoView,
-} from '../../../shared/contracts/photos';
+} from '@shared/contracts/photos';
 import type { AppContext } from '../../config/context';
 import { notFound } from '../../lib/errors';
 import { handle, uuidParam } from '../../lib/handle';

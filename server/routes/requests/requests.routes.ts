@@ -1,6 +1,6 @@
 import { Router } from 'express';
-import { saveDraftInputSchema, type MyRequestRow } from '../../../shared/contracts/requests';
-import type { EventsAnswer } from '../../../shared/contracts/events';
+import { saveDraftInputSchema, type MyRequestRow } from '@shared/contracts/requests';
+import type { EventsAnswer } from '@shared/contracts/events';
 import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { requireRole } from '../../middleware/require-role';

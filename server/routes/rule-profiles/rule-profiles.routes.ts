@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import {
   createJurisdictionInputSchema, createVersionInputSchema, updateVersionInputSchema, type JurisdictionSummary,
-} from '../../../shared/contracts/rule-profiles';
+} from '@shared/contracts/rule-profiles';
 import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { transitionInputSchema } from '../../../shared/workflow/transition-inputs';
+import { transitionInputSchema } from '@shared/workflow/transition-inputs';
 import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { changeStatus } from '../../services/transitions/change-status';

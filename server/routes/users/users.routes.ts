@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { addPersonInputSchema, listPeopleQuerySchema, updatePersonInputSchema, type PersonView } from '../../../shared/contracts/people';
+import { addPersonInputSchema, listPeopleQuerySchema, updatePersonInputSchema, type PersonView } from '@shared/contracts/people';
 import { inviteUser, listUsers, setUserAccess } from '../../services/users/users.service';
 import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';

@@ -1,8 +1,8 @@
 import { desc, eq } from 'drizzle-orm';
-import { checkAsBuilt, EngineInputError, type AsBuiltReadingResult, type AsBuiltStatus } from '../../../shared/engine';
-import type { SaveAsBuiltInput } from '../../../shared/crew/crew-inputs';
-import type { AsBuiltPageView, AsBuiltSetView } from '../../../shared/crew/crew-views';
-import { crewStages, statusText } from '../../../shared/workflow/statuses';
+import { checkAsBuilt, EngineInputError, type AsBuiltReadingResult, type AsBuiltStatus } from '@shared/engine';
+import type { SaveAsBuiltInput } from '@shared/crew/crew-inputs';
+import type { AsBuiltPageView, AsBuiltSetView } from '@shared/crew/crew-views';
+import { crewStages, statusText } from '@shared/workflow/statuses';
 import type { SessionUser } from '../../lib/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { asBuiltSets, users } from '../../db/schema';

@@ -1,6 +1,6 @@
 import { and, asc, eq, isNull } from 'drizzle-orm';
-import type { BoardSort } from '../../../shared/crew/crew-inputs';
-import type { BoardJob, BoardView } from '../../../shared/crew/crew-views';
+import type { BoardSort } from '@shared/crew/crew-inputs';
+import type { BoardJob, BoardView } from '@shared/crew/crew-views';
 import type { DbOrTx } from '../../db/client';
 import { jobs, jurisdictions, requests } from '../../db/schema';
 import { distanceFromYard, earthworkEstimate, siteCoordinates, wantedFrom } from './job-facts';

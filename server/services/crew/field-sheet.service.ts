@@ -1,10 +1,10 @@
 import { eq } from 'drizzle-orm';
-import { elevationAt, type CutFillAtStation } from '../../../shared/engine';
-import { buildChartInputFor } from '../../../shared/charts/chart-input';
-import { headwaterWords } from '../../../shared/charts/check-words';
-import { roadOwnerText } from '../../../shared/requests/choices';
-import { crewStages } from '../../../shared/workflow/statuses';
-import type { CulvertSheet, FieldSheetView, LaserSheet } from '../../../shared/crew/crew-views';
+import { elevationAt, type CutFillAtStation } from '@shared/engine';
+import { buildChartInputFor } from '@shared/charts/chart-input';
+import { headwaterWords } from '@shared/charts/check-words';
+import { roadOwnerText } from '@shared/requests/choices';
+import { crewStages } from '@shared/workflow/statuses';
+import type { CulvertSheet, FieldSheetView, LaserSheet } from '@shared/crew/crew-views';
 import type { SessionUser } from '../../lib/session-user';
 import type { Db } from '../../db/client';
 import { jobs, jurisdictions, users } from '../../db/schema';

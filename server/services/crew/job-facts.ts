@@ -1,8 +1,8 @@
 import {
   bankToLoose, earthworkFromProfiles, soilFactors, truckLoads, unlessRefused, type ProfilePoint,
-} from '../../../shared/engine';
-import { timingText, timings } from '../../../shared/requests/choices';
-import type { EarthworkEstimate, Wanted, Yard } from '../../../shared/crew/crew-views';
+} from '@shared/engine';
+import { timingText, timings } from '@shared/requests/choices';
+import type { EarthworkEstimate, Wanted, Yard } from '@shared/crew/crew-views';
 import type { SavedCheck } from './saved-check';
 
 // Without the office's choice: loam, and a tandem dump truck of about 10 cu yd loose (common practice, no source).

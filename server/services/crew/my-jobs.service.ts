@@ -1,5 +1,5 @@
 import { and, desc, eq, gt, inArray, or } from 'drizzle-orm';
-import type { MyJob } from '../../../shared/crew/crew-views';
+import type { MyJob } from '@shared/crew/crew-views';
 import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx } from '../../db/client';
 import { asBuiltSets, jobs, requestEvents, requests } from '../../db/schema';

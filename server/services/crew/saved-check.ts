@@ -2,9 +2,9 @@ import { and, desc, eq, isNotNull } from 'drizzle-orm';
 import {
   laserSetup, laserStepAtChangeFt, normalizeProfile, ruleProfileSchema, SURVEY_ELEVATION_PRECISION_FT,
   type EntranceReport, type LaserSetupInput, type ProfilePoint, type RuleProfile,
-} from '../../../shared/engine';
-import type { GradeCheckInputs, GradeCheckRecord, GradeCheckResults } from '../../../shared/contracts/grade-checks';
-import { readGradeCheckRecordOrNull } from '../../../shared/grade-check/stored-check';
+} from '@shared/engine';
+import type { GradeCheckInputs, GradeCheckRecord, GradeCheckResults } from '@shared/contracts/grade-checks';
+import { readGradeCheckRecordOrNull } from '@shared/grade-check/stored-check';
 import type { DbOrTx } from '../../db/client';
 import { gradeChecks, jobs, jurisdictions, ruleProfileVersions } from '../../db/schema';
 

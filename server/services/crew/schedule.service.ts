@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
-import { statusText } from '../../../shared/workflow/statuses';
-import type { ScheduleJobInput } from '../../../shared/crew/crew-inputs';
+import { statusText } from '@shared/workflow/statuses';
+import type { ScheduleJobInput } from '@shared/crew/crew-inputs';
 import type { SessionUser } from '../../lib/session-user';
 import { jobs, requestEvents, requests, users } from '../../db/schema';
 import { badRequest, conflict } from '../../lib/errors';

@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
-import { yardInputSchema, type YardInput } from '../../../shared/crew/crew-inputs';
-import type { Yard } from '../../../shared/crew/crew-views';
+import { yardInputSchema, type YardInput } from '@shared/crew/crew-inputs';
+import type { Yard } from '@shared/crew/crew-views';
 import type { DbOrTx } from '../../db/client';
 import { settings } from '../../db/schema';
 

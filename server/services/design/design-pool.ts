@@ -1,8 +1,8 @@
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { Piscina } from 'piscina';
-import type { ProposedProfile, ProposeProfileInput, RuleProfileInput } from '../../../shared/engine';
-import { fromReply, type DesignReply } from '../../../shared/engine/design-refusal';
+import type { ProposedProfile, ProposeProfileInput, RuleProfileInput } from '@shared/engine';
+import { fromReply, type DesignReply } from '@shared/engine/design-refusal';
 
 const thread = fileURLToPath(new URL('./design-thread.ts', import.meta.url));
 

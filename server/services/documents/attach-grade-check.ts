@@ -6,7 +6,7 @@ import { badRequest } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
 import { buildGradeCheckReport } from '../reports/grade-check-report';
 import { storeReport } from '../reports/report-storage';
-import type { RuleProfile } from '../../../shared/engine';
+import type { RuleProfile } from '@shared/engine';
 import { loadVisibleGradeCheck } from '../grade-checks/grade-checks.service';
 
 export const REPORT_KIND = 'grade-check-report';

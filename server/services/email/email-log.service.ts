@@ -4,7 +4,7 @@ import type { DbOrTx } from '../../db/client';
 import { emails, requests } from '../../db/schema';
 import { conflict, notFound } from '../../lib/errors';
 
-import { emailStatuses, type EmailStatus } from '../../../shared/contracts/emails';
+import { emailStatuses, type EmailStatus } from '@shared/contracts/emails';
 
 export { emailStatuses, type EmailStatus };
 

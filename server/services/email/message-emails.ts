@@ -1,5 +1,5 @@
-import { sharedPaths } from '../../../shared/paths';
-import { isOfficeRole, type Role } from '../../../shared/workflow/statuses';
+import { sharedPaths } from '@shared/paths';
+import { isOfficeRole, type Role } from '@shared/workflow/statuses';
 import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
 import type { Person } from './transition-emails';

@@ -1,4 +1,4 @@
-import { sharedPaths } from '../../../shared/paths';
+import { sharedPaths } from '@shared/paths';
 import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
 import type { Person } from './transition-emails';

@@ -1,6 +1,6 @@
-import { sharedPaths } from '../../../shared/paths';
-import { statusText } from '../../../shared/workflow/statuses';
-import type { Transition } from '../../../shared/workflow/transitions';
+import { sharedPaths } from '@shared/paths';
+import { statusText } from '@shared/workflow/statuses';
+import type { Transition } from '@shared/workflow/transitions';
 import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
 import type { Audience } from '../transitions/action-def';

@@ -1,5 +1,5 @@
-import type { GradeCheckRequestHeader, GradeCheckView } from '../../../shared/contracts/grade-checks';
-import { isOfficeRole } from '../../../shared/workflow/statuses';
+import type { GradeCheckRequestHeader, GradeCheckView } from '@shared/contracts/grade-checks';
+import { isOfficeRole } from '@shared/workflow/statuses';
 import type { SessionUser } from '../../lib/session-user';
 import type { GradeCheck } from './grade-checks.service';
 import type { RequestRow } from '../requests/request-access';

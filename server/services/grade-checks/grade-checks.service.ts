@@ -1,13 +1,13 @@
 import { and, desc, eq, isNotNull, max } from 'drizzle-orm';
-import type { RuleProfile } from '../../../shared/engine';
-import { gradeCheckOpenStatuses, isOfficeRole } from '../../../shared/workflow/statuses';
+import type { RuleProfile } from '@shared/engine';
+import { gradeCheckOpenStatuses, isOfficeRole } from '@shared/workflow/statuses';
 import type { SessionUser } from '../../lib/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
 import { AppError, conflict, notFound } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
-import type { GradeCheckRecord } from '../../../shared/contracts/grade-checks';
-import { readGradeCheckRecord, toStoredColumns } from '../../../shared/grade-check/stored-check';
+import type { GradeCheckRecord } from '@shared/contracts/grade-checks';
+import { readGradeCheckRecord, toStoredColumns } from '@shared/grade-check/stored-check';
 import { plainSummary } from './plain-summary';
 import { parseGradeCheckInputs, runGradeCheck } from './run-grade-check';
 

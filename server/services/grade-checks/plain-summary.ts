@@ -1,6 +1,6 @@
-import type { Finding, ProfileSegment, RuleProfile } from '../../../shared/engine';
-import { formatStation } from '../../../shared/engine';
-import type { GradeCheckInputs, GradeCheckResults } from '../../../shared/contracts/grade-checks';
+import type { Finding, ProfileSegment, RuleProfile } from '@shared/engine';
+import { formatStation } from '@shared/engine';
+import type { GradeCheckInputs, GradeCheckResults } from '@shared/contracts/grade-checks';
 
 const pct = (v: number) => `${Math.round(Math.abs(v) * 10) / 10}%`;
 const yd = (v: number) => `${Math.round(v)} cu yd`;

@@ -1,7 +1,7 @@
-import type { RuleProfile } from '../../../shared/engine';
-import { parseInput } from '../../../shared/engine/errors';
-import { gradeCheckInputsSchema, type GradeCheckInputs, type GradeCheckResults } from '../../../shared/contracts/grade-checks';
-import { fieldsOf, GradeCheckFieldsError, runGradeCheck as runCheck, type Propose } from '../../../shared/grade-check/run-check';
+import type { RuleProfile } from '@shared/engine';
+import { parseInput } from '@shared/engine/errors';
+import { gradeCheckInputsSchema, type GradeCheckInputs, type GradeCheckResults } from '@shared/contracts/grade-checks';
+import { fieldsOf, GradeCheckFieldsError, runGradeCheck as runCheck, type Propose } from '@shared/grade-check/run-check';
 import { AppError } from '../../lib/errors';
 import { proposeOffThread } from '../design/design-pool';
 

@@ -1,5 +1,5 @@
 import { and, eq } from 'drizzle-orm';
-import { gradeCheckOpenStatuses } from '../../../shared/workflow/statuses';
+import { gradeCheckOpenStatuses } from '@shared/workflow/statuses';
 import type { SessionUser } from '../../lib/session-user';
 import type { Db } from '../../db/client';
 import { documents, gradeChecks, requestEvents } from '../../db/schema';

@@ -1,6 +1,6 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
-import { isOfficeRole } from '../../../shared/workflow/statuses';
-import type { MessageVisibility } from '../../../shared/contracts/messages';
+import { isOfficeRole } from '@shared/workflow/statuses';
+import type { MessageVisibility } from '@shared/contracts/messages';
 import type { SessionUser } from '../../lib/session-user';
 import type { AppContext } from '../../config/context';
 import type { Db, Tx } from '../../db/client';

@@ -1,5 +1,5 @@
 import { GetObjectCommand } from '@aws-sdk/client-s3';
-import type { photoContentTypes } from '../../../shared/requests/photo-rules';
+import type { photoContentTypes } from '@shared/requests/photo-rules';
 import type { Storage } from './photos.service';
 
 type PhotoType = (typeof photoContentTypes)[number];

@@ -2,8 +2,8 @@ import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectComm
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
 import { and, asc, eq, gt, inArray, or } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
-import { maxPhotosPerRequest, photoExtensions, type photoContentTypes } from '../../../shared/requests/photo-rules';
-import { photosEditable } from '../../../shared/contracts/photos';
+import { maxPhotosPerRequest, photoExtensions, type photoContentTypes } from '@shared/requests/photo-rules';
+import { photosEditable } from '@shared/contracts/photos';
 import type { SessionUser } from '../../lib/session-user';
 import type { AppContext } from '../../config/context';
 import type { Db, DbOrTx } from '../../db/client';

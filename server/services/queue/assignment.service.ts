@@ -1,5 +1,5 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
-import { officeRoles } from '../../../shared/workflow/roles';
+import { officeRoles } from '@shared/workflow/roles';
 import type { SessionUser } from '../../lib/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { jurisdictions, requestEvents, requests, users } from '../../db/schema';

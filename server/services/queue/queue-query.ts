@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { requestStatusSchema } from '../../../shared/workflow/statuses';
+import { requestStatusSchema } from '@shared/workflow/statuses';
 
 export const queueSorts = ['waiting', 'reference', 'applicant', 'road', 'created'] as const;
 export type QueueSort = (typeof queueSorts)[number];

@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, inArray, isNull, ne, not, sql, type AnyColumn, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
-import { waitingOnOffice } from '../../../shared/workflow/statuses';
+import { waitingOnOffice } from '@shared/workflow/statuses';
 import type { DbOrTx } from '../../db/client';
 import { jurisdictions, requests, users } from '../../db/schema';
 import type { QueueSort } from './queue-query';

@@ -1,5 +1,5 @@
-import { requestStatuses, statusText, waitingOnOffice, type RequestStatus } from '../../../shared/workflow/statuses';
-import { allowedTransitions } from '../../../shared/workflow/transitions';
+import { requestStatuses, statusText, waitingOnOffice, type RequestStatus } from '@shared/workflow/statuses';
+import { allowedTransitions } from '@shared/workflow/transitions';
 import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx } from '../../db/client';
 import { badRequest } from '../../lib/errors';

@@ -1,8 +1,8 @@
 import PDFDocument from 'pdfkit';
 import SVGtoPDF from 'svg-to-pdfkit';
-import { formatStation, type RuleProfile } from '../../../shared/engine';
-import { profileChartSvg } from '../../../shared/charts/profile-chart';
-import { chartInputFor } from '../../../shared/charts/chart-input';
+import { formatStation, type RuleProfile } from '@shared/engine';
+import { profileChartSvg } from '@shared/charts/profile-chart';
+import { chartInputFor } from '@shared/charts/chart-input';
 import type { GradeCheck } from '../grade-checks/grade-checks.service';
 import { chartFont, registerReportFonts, reportFonts } from './pdf-fonts';
 import { drawTable, heading, paragraph } from './pdf-table';

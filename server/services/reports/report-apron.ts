@@ -1,4 +1,4 @@
-import { warpStakeColumns, warpStakeRows, warpWords } from '../../../shared/charts/check-words';
+import { warpStakeColumns, warpStakeRows, warpWords } from '@shared/charts/check-words';
 import type { GradeCheck } from '../grade-checks/grade-checks.service';
 import { drawTable, heading, paragraph } from './pdf-table';
 

@@ -1,6 +1,6 @@
-import { formatStation } from '../../../shared/engine';
-import { headwaterWords } from '../../../shared/charts/check-words';
-import { haulEstimate, loadsText } from '../../../shared/charts/cut-fill-table';
+import { formatStation } from '@shared/engine';
+import { headwaterWords } from '@shared/charts/check-words';
+import { haulEstimate, loadsText } from '@shared/charts/cut-fill-table';
 import type { GradeCheck } from '../grade-checks/grade-checks.service';
 import { drawTable, heading, paragraph } from './pdf-table';
 import { valueText } from './report-words';

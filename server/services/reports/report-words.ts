@@ -1,4 +1,4 @@
-import { displayLength, displaySmallLength, type DisplayUnits, type Finding, type FindingStatus, type RuleProfile } from '../../../shared/engine';
+import { displayLength, displaySmallLength, type DisplayUnits, type Finding, type FindingStatus, type RuleProfile } from '@shared/engine';
 
 /** Printed on every grade check report; the field sheet carries the same reminders. */
 export const reportCautions = [

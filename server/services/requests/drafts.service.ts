@@ -1,6 +1,6 @@
 import { and, count, desc, eq } from 'drizzle-orm';
-import { applicationDraftSchema, type ApplicationDraft } from '../../../shared/requests/application-schema';
-import { answerEditableStatuses } from '../../../shared/contracts/requests';
+import { applicationDraftSchema, type ApplicationDraft } from '@shared/requests/application-schema';
+import { answerEditableStatuses } from '@shared/contracts/requests';
 import type { SessionUser } from '../../lib/session-user';
 import type { Db } from '../../db/client';
 import { requests, users } from '../../db/schema';

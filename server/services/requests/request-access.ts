@@ -1,4 +1,4 @@
-import { crewStages, isOfficeRole } from '../../../shared/workflow/statuses';
+import { crewStages, isOfficeRole } from '@shared/workflow/statuses';
 import { eq } from 'drizzle-orm';
 import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx } from '../../db/client';

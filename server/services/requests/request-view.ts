@@ -1,9 +1,9 @@
-import { allowedTransitions } from '../../../shared/workflow/transitions';
-import { isOfficeRole, statusText } from '../../../shared/workflow/statuses';
+import { allowedTransitions } from '@shared/workflow/transitions';
+import { isOfficeRole, statusText } from '@shared/workflow/statuses';
 import type { SessionUser } from '../../lib/session-user';
 import type { RequestRow } from './request-access';
-import type { OfficeRequestView, RequestView } from '../../../shared/contracts/requests';
-import type { ApplicationDraft } from '../../../shared/requests/application-schema';
+import type { OfficeRequestView, RequestView } from '@shared/contracts/requests';
+import type { ApplicationDraft } from '@shared/requests/application-schema';
 
 export const isOffice = (user: SessionUser) => isOfficeRole(user.role);
 

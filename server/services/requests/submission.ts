@@ -1,4 +1,4 @@
-import { submittedApplicationSchema } from '../../../shared/requests/application-schema';
+import { submittedApplicationSchema } from '@shared/requests/application-schema';
 import { badRequest } from '../../lib/errors';
 import { zodFields } from '../../lib/handle';
 import type { RequestRow } from './request-access';

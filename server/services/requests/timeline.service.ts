@@ -1,5 +1,5 @@
 import { and, asc, eq } from 'drizzle-orm';
-import type { EventView } from '../../../shared/contracts/events';
+import type { EventView } from '@shared/contracts/events';
 import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx } from '../../db/client';
 import { requestEvents, users } from '../../db/schema';

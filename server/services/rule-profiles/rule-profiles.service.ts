@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, max } from 'drizzle-orm';
-import { commonRuralTemplate, ruleProfileSchema, type RuleProfile } from '../../../shared/engine';
+import { commonRuralTemplate, ruleProfileSchema, type RuleProfile } from '@shared/engine';
 import type { SessionUser } from '../../lib/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { jurisdictions, ruleProfileVersions } from '../../db/schema';

@@ -1,5 +1,5 @@
-import type { TransitionAction } from '../../../shared/workflow/transitions';
-import type { TransitionBodyOf } from '../../../shared/workflow/transition-inputs';
+import type { TransitionAction } from '@shared/workflow/transitions';
+import type { TransitionBodyOf } from '@shared/workflow/transition-inputs';
 import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx, Tx } from '../../db/client';
 import type { requests } from '../../db/schema';

@@ -1,7 +1,7 @@
 import { and, eq } from 'drizzle-orm';
-import { statusText } from '../../../shared/workflow/statuses';
-import { findTransition, type Transition, type TransitionAction } from '../../../shared/workflow/transitions';
-import type { TransitionBody, TransitionBodyOf } from '../../../shared/workflow/transition-inputs';
+import { statusText } from '@shared/workflow/statuses';
+import { findTransition, type Transition, type TransitionAction } from '@shared/workflow/transitions';
+import type { TransitionBody, TransitionBodyOf } from '@shared/workflow/transition-inputs';
 import type { SessionUser } from '../../lib/session-user';
 import type { AppContext } from '../../config/context';
 import type { Tx } from '../../db/client';

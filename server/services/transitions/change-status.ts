@@ -1,6 +1,6 @@
-import { statusText, type RequestStatus } from '../../../shared/workflow/statuses';
-import { allowedTransitions } from '../../../shared/workflow/transitions';
-import type { TransitionBody } from '../../../shared/workflow/transition-inputs';
+import { statusText, type RequestStatus } from '@shared/workflow/statuses';
+import { allowedTransitions } from '@shared/workflow/transitions';
+import type { TransitionBody } from '@shared/workflow/transition-inputs';
 import type { SessionUser } from '../../lib/session-user';
 import { AppError, conflict } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';

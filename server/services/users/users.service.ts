@@ -1,5 +1,5 @@
 import { and, asc, eq, ilike, or, sql } from 'drizzle-orm';
-import { roleLabels, type Role } from '../../../shared/workflow/statuses';
+import { roleLabels, type Role } from '@shared/workflow/statuses';
 import type { DbOrTx } from '../../db/client';
 import { users } from '../../db/schema';
 import { conflict, forbidden, notFound } from '../../lib/errors';
