@@ -7,6 +7,10 @@ import { readdirSync } from 'node:fs';
 import tseslint from 'typescript-eslint';
 
 const features = readdirSync('./src/features');
+// The server's rooms by what they may import; see DEVELOPERS.md ("Folders").
+const server = (...names) => names.map((name) => `./server/${name}`);
+const httpSide = server('routes', 'middleware', 'security', 'workers', 'dev', 'app.ts', 'index.ts', 'context-factory.ts');
+const notDev = readdirSync('./server').filter((name) => name !== 'dev').map((name) => `./server/${name}`);
 
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', '.data/**', 'test-artifacts/**', 'drizzle/**'] },
@@ -38,6 +42,10 @@ export default tseslint.config(
           { target: ['./src/components', './src/lib', './src/hooks'], from: ['./src/features', './src/app'], message: 'Shared client code must not import features or the app.' },
           { target: './shared', from: ['./src', './server', './fakes'], message: 'shared/ is pure and imports neither client nor server.' },
           { target: './src', from: ['./server', './fakes'], message: 'The client never imports server code.' },
+          { target: './server/services', from: httpSide, message: 'Services do domain work and know nothing of HTTP, sign-in, workers or the dev start-up; routes call services, not the other way.' },
+          { target: server('infra', 'lib', 'db', 'config'), from: [...server('services'), ...httpSide], message: 'infra, lib, db and config sit below services and routes and import neither.' },
+          { target: './server/db', from: './server/config', message: 'db is below config: config may name the Db type, db never reads the environment.' },
+          { target: notDev, from: './server/dev', message: 'Only dev (local start-up and the demo seed) imports dev.' },
         ],
       }],
     },
