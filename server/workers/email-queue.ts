@@ -1,8 +1,6 @@
 import { createHash } from 'node:crypto';
-import PgBoss from 'pg-boss';
 import type { AppContext } from '../config/context';
-import { dbTimeouts } from '../config/env';
-import { poolTimeouts } from '../db/client';
+import { ensureQueue, startJobQueue } from '../infra/job-queue';
 import { dueEmails } from './email-claims';
 import { deliverEmail, deliverySettings, type DeliverySettings } from './email-delivery';
 
@@ -36,13 +34,8 @@ interface EmailJob { emailId: string }
  */
 export async function startEmailWorker(ctx: AppContext, opts: EmailWorkerOptions = {}) {
   const settings = { ...deliverySettings(ctx.env), ...opts.delivery };
-  const boss = new PgBoss({
-    connectionString: ctx.env.DATABASE_URL, schema: 'pgboss', max: 3, schedule: false, application_name: 'gradepass-worker',
-    ...poolTimeouts(dbTimeouts(ctx.env)),
-  });
-  boss.on('error', (error) => ctx.logger.warn({ err: error }, 'job queue error'));
-  await boss.start();
-  await ensureQueue(boss);
+  const boss = await startJobQueue(ctx);
+  await ensureQueue(boss, { name: emailQueue, policy: 'standard', retryLimit: 0, expireInSeconds: 900 });
 
   await boss.work<EmailJob>(emailQueue, { batchSize: 10, pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 1 }, async (jobs) => {
     await Promise.all(jobs.map(async (job) => {
@@ -79,15 +72,4 @@ export async function startEmailWorker(ctx: AppContext, opts: EmailWorkerOptions
       await boss.stop({ graceful: true, wait: true, timeout: 10_000 });
     },
   };
-}
-
-/** Every instance calls this at start; two doing it at once must not stop either from starting. */
-async function ensureQueue(boss: PgBoss) {
-  const options = { name: emailQueue, policy: 'standard' as const, retryLimit: 0, expireInSeconds: 900 };
-  if (await boss.getQueue(emailQueue)) return boss.updateQueue(emailQueue, options);
-  try {
-    await boss.createQueue(emailQueue, options);
-  } catch (error) {
-    if (!(await boss.getQueue(emailQueue))) throw error;
-  }
 }
