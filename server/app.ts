@@ -32,7 +32,7 @@ const requireJsonWrites: RequestHandler = (req, _res, next) => {
 };
 
 export function createApp(ctx: AppContext, options: AppOptions = {}) {
-  const { env, pool, logger, db } = ctx;
+  const { env, logger } = ctx;
   const app = express();
   const secure = env.APP_ORIGIN.startsWith('https://');
   if (secure) app.set('trust proxy', 1);
@@ -55,11 +55,11 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   app.use('/api', noStore, requireJsonWrites);
   app.use(express.json({ limit: '1mb' }));
 
-  app.use(sessionMiddleware(env, pool, secure, logger));
-  const passport = configurePassport(env, db);
+  app.use(sessionMiddleware(ctx, secure));
+  const passport = configurePassport(ctx);
   app.use(passport.initialize());
   app.use(passport.session());
-  app.use(rateLimitRouter(env, db));
+  app.use(rateLimitRouter(ctx));
 
   app.use(authRouter(passport));
   registerRoutes(app, ctx);

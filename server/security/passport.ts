@@ -1,7 +1,6 @@
 import passport from 'passport';
 import { Strategy as GoogleStrategy, type Profile, type StrategyOptions, type VerifyCallback } from 'passport-google-oauth20';
-import type { Env } from '../config/env';
-import type { Db } from '../db/client';
+import type { AppContext } from '../config/context';
 import { OAuthStateCookieStore } from './oauth-state-cookie';
 import { findSessionUser, signInWithProfile } from '../services/users/users.service';
 
@@ -10,7 +9,7 @@ export const callbackPath = '/auth/google/callback';
 /**
  * Google sign-in. The same strategy talks to the local stand-in or to Google: only the three URL variables differ.
  */
-export function configurePassport(env: Env, db: Db) {
+export function configurePassport({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   const strategy = new GoogleStrategy(
     {
       clientID: env.GOOGLE_CLIENT_ID,

@@ -1,8 +1,7 @@
 import { Router, type Request, type RequestHandler } from 'express';
 import { RateLimiterDrizzle, RateLimiterRes } from 'rate-limiter-flexible';
-import type { Db } from '../db/client';
+import type { AppContext } from '../config/context';
 import { rateLimits } from '../db/schema';
-import type { Env } from '../config/env';
 import { AppError } from '../lib/errors';
 import { addressKey } from './client-address';
 
@@ -37,7 +36,7 @@ function limited(counts: Counts, tooMany: string): RequestHandler {
  * session (to know who is signed in) and before the routes. Limits are per signed-in person, and per address
  * (RATE_LIMIT_ADDRESS_FACTOR times as many, since an office or a household shares one).
  */
-export function rateLimitRouter(env: Env, db: Db) {
+export function rateLimitRouter({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   let first = true;
   const counter = (keyPrefix: string, points: number, duration: number) => {
     // One limiter per process is enough to clear the shared table of expired counts.

@@ -1,9 +1,7 @@
 import connectPgSimple from 'connect-pg-simple';
 import type { RequestHandler } from 'express';
 import session from 'express-session';
-import type pg from 'pg';
-import type { Env } from '../config/env';
-import type { Logger } from '../lib/logger';
+import type { AppContext } from '../config/context';
 
 export const sessionCookieName = 'gradepass.sid';
 
@@ -19,7 +17,7 @@ declare module 'express-session' {
  * SESSION_IDLE_MINUTES without a request (rolling: every request moves the expiry on); `endOldSessions` adds the
  * absolute limit of SESSION_MAX_DAYS from sign-in.
  */
-export function sessionMiddleware(env: Env, pool: pg.Pool, secure: boolean, logger: Logger): RequestHandler[] {
+export function sessionMiddleware({ env, pool, logger }: Pick<AppContext, 'env' | 'pool' | 'logger'>, secure: boolean): RequestHandler[] {
   const PgStore = connectPgSimple(session);
   const maxAgeMs = env.SESSION_MAX_DAYS * 86_400_000;
   const store = new PgStore({
