@@ -13,7 +13,7 @@ const app = createApp(ctx);
 app.get('/bench/floor', handle({}, async () => (await ctx.pool.query('select 1 as one')).rows[0]));
 // The same floor behind the API's rate-limit ceiling (its own counters, mounted so that their "/api" matches
 // here): the difference between the two floors is what the per-request counter write costs.
-app.use('/bench/limited', rateLimitRouter(env, ctx.db));
+app.use('/bench/limited', rateLimitRouter(ctx));
 app.get('/bench/limited/api/floor', handle({}, async () => (await ctx.pool.query('select 1 as one')).rows[0]));
 
 const server: Server = app.listen(env.PORT, '127.0.0.1', () => process.send?.('ready'));

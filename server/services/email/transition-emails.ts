@@ -3,9 +3,11 @@ import { statusText } from '@shared/workflow/statuses';
 import type { Transition } from '@shared/workflow/transitions';
 import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
-import type { Audience } from '../transitions/action-def';
 
 export interface Person { email: string; name: string }
+
+/** Who a status change's e-mail can go to. */
+export type Audience = 'applicant' | 'office' | 'crew' | 'crewLeads';
 
 export interface TransitionEmailInput {
   transition: Transition;

@@ -6,7 +6,9 @@ import type { requests } from '../../db/schema';
 import type { AppError } from '../../lib/errors';
 import type { RequestRow } from '../requests/request-access';
 
-export type Audience = 'applicant' | 'office' | 'crew' | 'crewLeads';
+import type { Audience } from '../email/transition-emails';
+
+export type { Audience };
 
 /** What one action adds to its status change; the door writes it, nothing is handed back by mutation. */
 export interface ActionResult {

@@ -1,9 +1,9 @@
 import type { ActionDefs } from './action-def';
-import { acceptJob, handBack, markBuilt, startWork } from './actions/crew-actions';
+import { acceptJob, handBack, markBuilt, startWork } from './crew-actions';
 import {
   askDetails, bookVisit, close, decline, filePermit, markChecked, recordGranted, recordRefused, release, sendBack,
-} from './actions/office-actions';
-import { answer, submit, withdraw } from './actions/owner-actions';
+} from './office-actions';
+import { answer, submit, withdraw } from './owner-actions';
 
 /**
  * Every action of the shared transition table with what it does on the server. The type asks for every action,

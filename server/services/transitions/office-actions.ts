@@ -1,9 +1,9 @@
 import { and, desc, eq, isNotNull } from 'drizzle-orm';
-import type { Tx } from '../../../db/client';
-import { gradeChecks, jobs } from '../../../db/schema';
-import { badRequest, conflict } from '../../../lib/errors';
-import type { RequestRow } from '../../requests/request-access';
-import type { ActionDef, ActionStep } from '../action-def';
+import type { Tx } from '../../db/client';
+import { gradeChecks, jobs } from '../../db/schema';
+import { badRequest, conflict } from '../../lib/errors';
+import type { RequestRow } from '../requests/request-access';
+import type { ActionDef, ActionStep } from './action-def';
 import { lastAsBuiltSet } from './as-built-state';
 
 async function attachedGradeCheck(tx: Tx, requestId: string) {

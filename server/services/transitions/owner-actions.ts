@@ -1,6 +1,6 @@
-import { messages } from '../../../db/schema';
-import { assertReadyToSubmit } from '../../requests/submission';
-import type { ActionDef } from '../action-def';
+import { messages } from '../../db/schema';
+import { assertReadyToSubmit } from '../requests/submission';
+import type { ActionDef } from './action-def';
 
 /** The property owner's own moves: send, answer the office's questions, withdraw. */
 export const submit: ActionDef<'submit'> = {

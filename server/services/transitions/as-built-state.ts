@@ -1,7 +1,7 @@
 import { and, desc, eq } from 'drizzle-orm';
-import type { DbOrTx, Tx } from '../../../db/client';
-import { asBuiltSets, requestEvents } from '../../../db/schema';
-import { badRequest, conflict } from '../../../lib/errors';
+import type { DbOrTx, Tx } from '../../db/client';
+import { asBuiltSets, requestEvents } from '../../db/schema';
+import { badRequest, conflict } from '../../lib/errors';
 
 export async function lastAsBuiltSet(db: DbOrTx, requestId: string) {
   const [set] = await db.select().from(asBuiltSets).where(eq(asBuiltSets.requestId, requestId)).orderBy(desc(asBuiltSets.createdAt)).limit(1);

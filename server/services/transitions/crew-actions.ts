@@ -1,9 +1,9 @@
 import { eq } from 'drizzle-orm';
-import type { SessionUser } from '../../../lib/session-user';
-import type { DbOrTx } from '../../../db/client';
-import { jobs, requests, users } from '../../../db/schema';
-import { AppError } from '../../../lib/errors';
-import type { ActionDef } from '../action-def';
+import type { SessionUser } from '../../lib/session-user';
+import type { DbOrTx } from '../../db/client';
+import { jobs, requests, users } from '../../db/schema';
+import { AppError } from '../../lib/errors';
+import type { ActionDef } from './action-def';
 import { assertBuildable } from './as-built-state';
 
 const takenStatuses = new Set(['crew_assigned', 'under_construction', 'built', 'closed']);
