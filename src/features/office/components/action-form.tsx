@@ -6,7 +6,7 @@ import { Field, TextArea, TextInput } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import type { OfficeRequestView as OfficeRequest } from '@shared/contracts/requests';
-import type { TransitionInput } from '../api/run-office-transition';
+import type { TransitionBody } from '@shared/workflow/transition-inputs';
 
 /** The datetime-local control speaks local time without a zone; the API wants an instant. */
 const toInstant = (local: string) => (local ? new Date(local).toISOString() : undefined);
@@ -19,7 +19,7 @@ interface ActionFormProps {
   caution?: string;
   pending: boolean;
   error: unknown;
-  onSubmit: (input: TransitionInput) => void;
+  onSubmit: (input: TransitionBody) => void;
   onCancel: () => void;
 }
 
@@ -40,7 +40,7 @@ export function ActionForm({ transition, request, caution, pending, error, onSub
       const value = values[field.name].trim();
       body[field.name] = field.text.control === 'datetime' ? toInstant(value) : value || undefined;
     }
-    onSubmit({ ...body, action: transition.action, expectedVersion: request.version } as TransitionInput);
+    onSubmit({ ...body, action: transition.action, expectedVersion: request.version } as TransitionBody);
   };
 
   return (

@@ -5,7 +5,7 @@ import { allowedTransitions, type Transition, type TransitionAction } from '@sha
 import { Button } from '@/components/ui/button';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { paths } from '@/config/paths';
-import { useRunOfficeTransition } from '../api/run-office-transition';
+import { useRunTransition } from '@/lib/status-change';
 import type { OfficeRequestView as OfficeRequest } from '@shared/contracts/requests';
 import { ActionForm } from './action-form';
 
@@ -16,7 +16,7 @@ export function ActionPanel({ request, role, cautions = {} }: { request: OfficeR
   const moves = allowedTransitions(request.status, role);
   const [open, setOpen] = useState<Transition | null>(null);
   const [done, setDone] = useState('');
-  const run = useRunOfficeTransition(request.id);
+  const run = useRunTransition(request.id);
 
   if (moves.length === 0) {
     return <Notice title={request.statusLabel}>{request.whatNext} Nothing for the office to do from here.</Notice>;

@@ -1,4 +1,4 @@
-import { useImperativeHandle } from 'react';
+import { useEffect } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
@@ -14,12 +14,13 @@ import { StepButtons } from './step-buttons';
 
 const emptyEntrance: Partial<EntranceStep> = { vehicles: [], drivewayLengthFt: null, riseToHouseFt: null, notes: '', timing: 'flexible' };
 
-export function EntranceStepForm({ initial, serverFields, saving, snapshot, onNext, onBack }: StepProps<EntranceStep>) {
+export function EntranceStepForm({ initial, serverFields, saving, keepSnapshot, onNext, onBack }: StepProps<EntranceStep>) {
   const { register, handleSubmit, setError, getValues, formState: { errors, isDirty } } = useForm<z.input<typeof entranceStepSchema>, unknown, EntranceStep>({
     resolver: zodResolver(entranceStepSchema), defaultValues: { ...emptyEntrance, ...initial }, shouldFocusError: true,
   });
   // The wizard reads the unsaved answers when the person leaves, never while rendering.
-  useImperativeHandle(snapshot, () => () => ({ values: getValues(), dirty: isDirty }), [getValues, isDirty]);
+  // Kept by the wizard after this step unmounts, so answers typed just before leaving are still saved.
+  useEffect(() => keepSnapshot(() => ({ values: getValues(), dirty: isDirty })));
   useServerFields(serverFields, setError);
   // Registered in page order (not inside Field's render prop) so the first error to get focus is the topmost.
   const number = (name: 'drivewayLengthFt' | 'riseToHouseFt', label: string, hint: string) => {

@@ -1,4 +1,4 @@
-import { useEffect, type Ref } from 'react';
+import { useEffect } from 'react';
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import { ApiError } from '@/lib/api-client';
 
@@ -43,7 +43,8 @@ export interface StepProps<T> {
   serverFields?: Record<string, string>;
   saving: boolean;
   /** Lets the wizard read unsaved answers when the person leaves the page. */
-  snapshot: Ref<() => StepSnapshot>;
+  /** Hands the wizard a way to read the step's unsaved answers when the person leaves. */
+  keepSnapshot: (read: () => StepSnapshot) => void;
   onNext: (values: T) => void;
   onBack?: (values: Partial<T>) => void;
 }

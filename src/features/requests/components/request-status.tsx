@@ -5,7 +5,7 @@ import { TextArea } from '@/components/ui/field';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { ApiError } from '@/lib/api-client';
-import { useRunTransition } from '../api/run-transition';
+import { useRunTransition } from '@/lib/status-change';
 import type { RequestView } from '@shared/contracts/requests';
 
 /** Where the request stands in plain words, and the applicant's own moves from here. */

@@ -1,5 +1,5 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { type ComponentType, useEffect, useRef, useState } from 'react';
+import { type ComponentType, useCallback, useEffect, useRef, useState } from 'react';
 import { Link } from 'react-router';
 import type { EntranceStep, SiteStep } from '@shared/requests/application-schema';
 import { Button } from '@/components/ui/button';
@@ -7,7 +7,7 @@ import { ErrorNotice, Loading, Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { getRequestQueryOptions, useRequest } from '../api/get-request';
-import { useRunTransition } from '../api/run-transition';
+import { useRunTransition } from '@/lib/status-change';
 import { saveDraftOnExit, useSaveDraft } from '../api/save-draft';
 import type { RequestView } from '@shared/contracts/requests';
 import { ApplicationSummary } from './application-summary';
@@ -51,6 +51,9 @@ function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> 
   const [reloads, setReloads] = useState(0);
   const version = useRef(request.version);
   const snapshot = useRef<(() => StepSnapshot) | null>(null);
+  const keepSnapshot = useCallback((read: () => StepSnapshot) => {
+    snapshot.current = read;
+  }, []);
   const heading = useRef<HTMLHeadingElement>(null);
   const firstRender = useRef(true);
   const hasServerFields = useRef(false);
@@ -156,11 +159,11 @@ function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> 
         {problem !== null && <div className="mb-4"><ErrorNotice error={problem} /></div>}
         {step === 0 && (
           <SiteStepForm key={stepKey} initial={latest.application.site ?? {}} serverFields={serverFields?.site} saving={busy}
-            snapshot={snapshot} onNext={(site) => persist({ site }, 1)} />
+            keepSnapshot={keepSnapshot} onNext={(site) => persist({ site }, 1)} />
         )}
         {step === 1 && (
           <EntranceStepForm key={stepKey} initial={latest.application.entrance ?? {}} serverFields={serverFields?.entrance} saving={busy}
-            snapshot={snapshot} onNext={(entrance) => persist({ entrance }, 2)} onBack={(entrance) => persist({ entrance: answeredOnly(entrance) }, 0)} />
+            keepSnapshot={keepSnapshot} onNext={(entrance) => persist({ entrance }, 2)} onBack={(entrance) => persist({ entrance: answeredOnly(entrance) }, 0)} />
         )}
         {step === 2 && (
           <form noValidate onSubmit={(e) => { e.preventDefault(); void persist({}, 3); }} className="space-y-5" aria-label="Photos">

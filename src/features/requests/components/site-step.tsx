@@ -1,4 +1,4 @@
-import { useImperativeHandle } from 'react';
+import { useEffect } from 'react';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
@@ -14,13 +14,14 @@ const emptySite: Partial<SiteStep> = {
   positionKind: 'landmark', landmark: '', distanceFromLandmarkFt: null, siteLat: null, siteLng: null,
 };
 
-export function SiteStepForm({ initial, serverFields, saving, snapshot, onNext }: StepProps<SiteStep>) {
+export function SiteStepForm({ initial, serverFields, saving, keepSnapshot, onNext }: StepProps<SiteStep>) {
   const form = useForm<z.input<typeof siteStepSchema>, unknown, SiteStep>({
     resolver: zodResolver(siteStepSchema), defaultValues: { ...emptySite, ...initial }, shouldFocusError: true,
   });
   const { register, handleSubmit, watch, setError, getValues, formState: { errors, isDirty } } = form;
   // The wizard reads the unsaved answers when the person leaves, never while rendering.
-  useImperativeHandle(snapshot, () => () => ({ values: getValues(), dirty: isDirty }), [getValues, isDirty]);
+  // Kept by the wizard after this step unmounts, so answers typed just before leaving are still saved.
+  useEffect(() => keepSnapshot(() => ({ values: getValues(), dirty: isDirty })));
   useServerFields(serverFields, setError);
   const byLandmark = watch('positionKind') !== 'coordinates';
   const num = { setValueAs: numberOrNull };
