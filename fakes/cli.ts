@@ -17,7 +17,11 @@ const { values } = parseArgs({
     origin: { type: 'string', multiple: true, default: ['http://127.0.0.1:5170', 'http://localhost:5170'] },
     'client-id': { type: 'string', default: 'gradepass-local' },
     'client-secret': { type: 'string', default: 'gradepass-local-secret' },
-    'redirect-uri': { type: 'string', multiple: true, default: ['http://127.0.0.1:5170/api/auth/google/callback', 'http://localhost:5170/api/auth/google/callback'] },
+    'redirect-uri': {
+      type: 'string',
+      multiple: true,
+      default: ['http://127.0.0.1:5170/api/auth/google/callback', 'http://localhost:5170/api/auth/google/callback'],
+    },
     help: { type: 'boolean', default: false },
   },
 });

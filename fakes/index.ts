@@ -22,12 +22,24 @@ export interface StandInOptions {
   bucket: string;
   /** Page origins allowed to upload straight to storage; 127.0.0.1 and localhost are different origins. */
   allowedOrigins: string[];
-  oauth: { clientId: string; clientSecret: string; redirectUris: string[]; identities: { email: string; name: string; role?: string }[] };
+  oauth: {
+    clientId: string;
+    clientSecret: string;
+    redirectUris: string[];
+    identities: { email: string; name: string; role?: string }[];
+  };
 }
 
 export interface StandIns {
   s3: { endpoint: string; accessKeyId: string; secretAccessKey: string; region: string; bucket: string };
-  mail: { smtpHost: string; smtpPort: number; webUrl: string; stopSmtp(): Promise<void>; startSmtp(): Promise<void>; setReplyDelay(ms: number): void };
+  mail: {
+    smtpHost: string;
+    smtpPort: number;
+    webUrl: string;
+    stopSmtp(): Promise<void>;
+    startSmtp(): Promise<void>;
+    setReplyDelay(ms: number): void;
+  };
   oauth: { issuer: string; authorizationUrl: string; tokenUrl: string; userinfoUrl: string };
   stop(): Promise<void>;
 }
@@ -37,14 +49,30 @@ export async function startStandIns(opts: StandInOptions): Promise<StandIns> {
   const host = opts.host ?? defaultHost;
   const started: { stop(): Promise<void> }[] = [];
   const stopAll = async () => {
-    const results = await Promise.allSettled(started.splice(0).reverse().map((service) => service.stop()));
+    const results = await Promise.allSettled(
+      started
+        .splice(0)
+        .reverse()
+        .map((service) => service.stop()),
+    );
     const failed = results.find((result): result is PromiseRejectedResult => result.status === 'rejected');
     if (failed) throw failed.reason;
   };
   try {
-    const s3 = await startS3StandIn({ dir: join(opts.dataDir, 's3'), host, port: opts.s3Port, bucket: opts.bucket, allowedOrigins: opts.allowedOrigins });
+    const s3 = await startS3StandIn({
+      dir: join(opts.dataDir, 's3'),
+      host,
+      port: opts.s3Port,
+      bucket: opts.bucket,
+      allowedOrigins: opts.allowedOrigins,
+    });
     started.push(s3);
-    const mail = await startMailStandIn({ dir: join(opts.dataDir, 'mail'), host, smtpPort: opts.smtpPort, webPort: opts.mailWebPort });
+    const mail = await startMailStandIn({
+      dir: join(opts.dataDir, 'mail'),
+      host,
+      smtpPort: opts.smtpPort,
+      webPort: opts.mailWebPort,
+    });
     started.push(mail);
     const oauth = await startOAuthStandIn({ host, port: opts.oauthPort, ...opts.oauth });
     started.push(oauth);

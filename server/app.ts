@@ -25,7 +25,9 @@ const requireJsonWrites: RequestHandler = (req, _res, next) => {
   const writes = req.method !== 'GET' && req.method !== 'HEAD' && req.method !== 'OPTIONS';
   const hasBody = Number(req.headers['content-length'] ?? 0) > 0 || req.headers['transfer-encoding'] !== undefined;
   if (writes && hasBody && !req.is('application/json')) {
-    next(new AppError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).'));
+    next(
+      new AppError(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).'),
+    );
     return;
   }
   next();
@@ -39,17 +41,19 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   app.disable('x-powered-by');
 
   const s3Origin = env.S3_ENDPOINT ? new URL(env.S3_ENDPOINT).origin : 'https://*.amazonaws.com';
-  app.use(helmet({
-    contentSecurityPolicy: {
-      directives: {
-        'img-src': ["'self'", 'data:', 'blob:', s3Origin],
-        'connect-src': ["'self'", s3Origin, ...(options.clientMiddleware ? ['ws:'] : [])],
-        // The design worker compiles the solver's WebAssembly (served from 'self'); this allows that and no JS eval.
-        'script-src': ["'self'", "'wasm-unsafe-eval'", ...(options.clientMiddleware ? ["'unsafe-inline'"] : [])],
-        'upgrade-insecure-requests': secure ? [] : null,
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:', s3Origin],
+          'connect-src': ["'self'", s3Origin, ...(options.clientMiddleware ? ['ws:'] : [])],
+          // The design worker compiles the solver's WebAssembly (served from 'self'); this allows that and no JS eval.
+          'script-src': ["'self'", "'wasm-unsafe-eval'", ...(options.clientMiddleware ? ["'unsafe-inline'"] : [])],
+          'upgrade-insecure-requests': secure ? [] : null,
+        },
       },
-    },
-  }));
+    }),
+  );
   app.use(httpLogger(logger));
   app.use(requireSameOrigin(env.APP_ORIGIN));
   app.use('/api', noStore, requireJsonWrites);

@@ -8,7 +8,8 @@ import { createS3Client } from './infra/storage';
 export function createContext(env: Env): AppContext {
   const logger = createLogger(env.LOG_LEVEL);
   const { db, pool } = createDb(env.DATABASE_URL, {
-    max: 10, timeouts: dbTimeouts(env),
+    max: 10,
+    timeouts: dbTimeouts(env),
     onConnectionError: (error) => logger.warn({ err: error }, 'a database connection was closed by the server'),
   });
   return { env, db, pool, logger, s3: createS3Client(env), mailer: createMailer(env) };

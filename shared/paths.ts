@@ -4,7 +4,10 @@
  */
 export const sharedPaths = {
   applicantRequest: { path: '/my/requests/:id', getHref: (id: string) => `/my/requests/${id}` },
-  officeRequest: { path: '/office/requests/:id', getHref: (id: string, tab = '') => `/office/requests/${id}${tab ? `?tab=${tab}` : ''}` },
+  officeRequest: {
+    path: '/office/requests/:id',
+    getHref: (id: string, tab = '') => `/office/requests/${id}${tab ? `?tab=${tab}` : ''}`,
+  },
   crewBoard: { path: '/crew/board', getHref: () => '/crew/board' },
   crewFieldSheet: { path: '/crew/jobs/:id/field-sheet', getHref: (id: string) => `/crew/jobs/${id}/field-sheet` },
 } as const;

@@ -50,7 +50,9 @@ export class MessageStore {
   /** Oldest first. */
   async list(): Promise<StoredMessage[]> {
     const names = (await readdir(this.dir)).filter((name) => name.endsWith('.json')).sort();
-    return Promise.all(names.map(async (name) => JSON.parse(await readFile(join(this.dir, name), 'utf8')) as StoredMessage));
+    return Promise.all(
+      names.map(async (name) => JSON.parse(await readFile(join(this.dir, name), 'utf8')) as StoredMessage),
+    );
   }
 
   async get(id: string): Promise<StoredMessage | undefined> {
@@ -78,7 +80,10 @@ function addresses(field: AddressObject | AddressObject[] | undefined): string[]
 function headerMap(parsed: ParsedMail): Record<string, string> {
   const map: Record<string, string> = {};
   for (const { key, line } of parsed.headerLines) {
-    const value = line.slice(line.indexOf(':') + 1).replace(/\r?\n[ \t]+/g, ' ').trim();
+    const value = line
+      .slice(line.indexOf(':') + 1)
+      .replace(/\r?\n[ \t]+/g, ' ')
+      .trim();
     map[key] = key in map ? `${map[key]}\n${value}` : value;
   }
   return map;

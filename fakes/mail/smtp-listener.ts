@@ -71,7 +71,10 @@ export class SmtpListener {
           const envelopeTo = session.envelope.rcptTo.map((rcpt) => rcpt.address);
           simpleParser(raw)
             .then((parsed) => this.store.save(parsed, raw, envelopeTo))
-            .then(() => this.later(callback), (error: Error) => callback(error));
+            .then(
+              () => this.later(callback),
+              (error: Error) => callback(error),
+            );
         });
       },
     });

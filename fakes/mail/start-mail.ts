@@ -48,7 +48,9 @@ export async function startMailStandIn(options: MailStandInOptions): Promise<Mai
     webUrl: urlFor(host, webPort),
     stopSmtp: () => smtp.stop(),
     startSmtp: () => smtp.start(),
-    setReplyDelay: (ms: number) => { smtp.replyDelayMs = ms; },
+    setReplyDelay: (ms: number) => {
+      smtp.replyDelayMs = ms;
+    },
     async stop() {
       await smtp.stop();
       await close(web);

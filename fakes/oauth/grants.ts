@@ -37,14 +37,19 @@ export class Grants {
 
   /** Checks a token request the way a real provider would and returns the person the code was issued for. */
   redeem(body: Record<string, string | undefined>, client: { id: string; secret: string }): OpenIdProfile {
-    if (body.grant_type !== 'authorization_code') throw new OAuthError(400, 'unsupported_grant_type', 'Only authorization_code is offered.');
-    if (body.client_id !== client.id || body.client_secret !== client.secret) throw new OAuthError(401, 'invalid_client', 'Unknown client or wrong secret.');
+    if (body.grant_type !== 'authorization_code')
+      throw new OAuthError(400, 'unsupported_grant_type', 'Only authorization_code is offered.');
+    if (body.client_id !== client.id || body.client_secret !== client.secret)
+      throw new OAuthError(401, 'invalid_client', 'Unknown client or wrong secret.');
     const pending = this.codes.get(body.code ?? '');
     // A code works once, whatever happens next.
     this.codes.delete(body.code ?? '');
-    if (!pending || pending.expiresAt < Date.now()) throw new OAuthError(400, 'invalid_grant', 'The code is unknown, used or expired.');
-    if (pending.clientId !== body.client_id) throw new OAuthError(400, 'invalid_grant', 'The code was issued to another client.');
-    if (pending.redirectUri !== body.redirect_uri) throw new OAuthError(400, 'invalid_grant', 'redirect_uri differs from the one used to get the code.');
+    if (!pending || pending.expiresAt < Date.now())
+      throw new OAuthError(400, 'invalid_grant', 'The code is unknown, used or expired.');
+    if (pending.clientId !== body.client_id)
+      throw new OAuthError(400, 'invalid_grant', 'The code was issued to another client.');
+    if (pending.redirectUri !== body.redirect_uri)
+      throw new OAuthError(400, 'invalid_grant', 'redirect_uri differs from the one used to get the code.');
     if (!body.code_verifier || !s256Matches(body.code_verifier, pending.codeChallenge)) {
       throw new OAuthError(400, 'invalid_grant', 'code_verifier does not match the S256 code_challenge.');
     }

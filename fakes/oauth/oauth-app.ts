@@ -13,7 +13,8 @@ export interface OAuthAppOptions {
   urls: { issuer: string; internal: string };
 }
 
-const pagePolicy = "default-src 'none'; style-src 'unsafe-inline'; img-src 'self'; base-uri 'none'; frame-ancestors 'none'";
+const pagePolicy =
+  "default-src 'none'; style-src 'unsafe-inline'; img-src 'self'; base-uri 'none'; frame-ancestors 'none'";
 
 /** The provider's public face: our picker at /authorize, our checks at /token, the rest handed to the mock. */
 export function createOAuthApp(options: OAuthAppOptions) {
@@ -25,7 +26,8 @@ export function createOAuthApp(options: OAuthAppOptions) {
     const query = req.originalUrl.split(/\?(.*)/s)[1] ?? '';
     const request = readAuthorizeRequest(query, options);
     // Tests go straight through with login_hint; people get the page.
-    if (request.loginHint) return complete(res, query, request, identityFor(request.loginHint, undefined, options.identities), options);
+    if (request.loginHint)
+      return complete(res, query, request, identityFor(request.loginHint, undefined, options.identities), options);
     return sendPage(res, 200, pickerPage(query, options.identities));
   });
 
@@ -33,7 +35,12 @@ export function createOAuthApp(options: OAuthAppOptions) {
     const query = String(req.body?.query ?? '');
     const request = readAuthorizeRequest(query, options);
     const email = String(req.body?.email ?? '').trim();
-    if (!emailPattern.test(email)) return sendPage(res, 400, pickerPage(query, options.identities, 'Enter an e-mail address like name@example.test.'));
+    if (!emailPattern.test(email))
+      return sendPage(
+        res,
+        400,
+        pickerPage(query, options.identities, 'Enter an e-mail address like name@example.test.'),
+      );
     return complete(res, query, request, identityFor(email, String(req.body?.name ?? ''), options.identities), options);
   });
 
@@ -44,9 +51,15 @@ export function createOAuthApp(options: OAuthAppOptions) {
       const answer = await fetch(`${options.urls.internal}/token`, {
         method: 'POST',
         headers: { 'content-type': 'application/x-www-form-urlencoded' },
-        body: new URLSearchParams(Object.entries(body).filter((entry): entry is [string, string] => typeof entry[1] === 'string')),
+        body: new URLSearchParams(
+          Object.entries(body).filter((entry): entry is [string, string] => typeof entry[1] === 'string'),
+        ),
       });
-      res.status(answer.status).set('Cache-Control', 'no-store').type('json').send(await answer.text());
+      res
+        .status(answer.status)
+        .set('Cache-Control', 'no-store')
+        .type('json')
+        .send(await answer.text());
     } finally {
       options.grants.finishRedeeming(String(body.code ?? ''), undefined);
     }
@@ -54,17 +67,25 @@ export function createOAuthApp(options: OAuthAppOptions) {
 
   for (const path of ['/userinfo', '/jwks', '/.well-known/openid-configuration']) {
     app.get(path, async (req, res) => {
-      const headers: Record<string, string> = req.headers.authorization ? { authorization: req.headers.authorization } : {};
+      const headers: Record<string, string> = req.headers.authorization
+        ? { authorization: req.headers.authorization }
+        : {};
       const query = req.originalUrl.split(/\?(.*)/s)[1];
       const answer = await fetch(`${options.urls.internal}${path}${query ? `?${query}` : ''}`, { headers });
-      res.status(answer.status).type('json').send(await answer.text());
+      res
+        .status(answer.status)
+        .type('json')
+        .send(await answer.text());
     });
   }
 
   app.get('/avatars/:file', (req, res) => {
     const sub = /^(\d{1,30})\.svg$/.exec(req.params.file)?.[1];
     if (!sub) return res.status(404).end();
-    return res.type('image/svg+xml').set('Cache-Control', 'public, max-age=86400').send(avatarSvg(sub, String(req.query.name ?? '?')));
+    return res
+      .type('image/svg+xml')
+      .set('Cache-Control', 'public, max-age=86400')
+      .send(avatarSvg(sub, String(req.query.name ?? '?')));
   });
 
   app.use((error: unknown, req: Request, res: Response, _next: NextFunction) => {
@@ -87,15 +108,23 @@ function readAuthorizeRequest(query: string, options: OAuthAppOptions): Authoriz
   const clientId = params.get('client_id') ?? '';
   const redirectUri = params.get('redirect_uri') ?? '';
   // Never redirect to an unregistered address: these problems are shown on our own page instead.
-  if (clientId !== options.clientId) throw new OAuthError(400, 'unauthorized_client', `Unknown client_id "${clientId}".`);
-  if (!options.redirectUris.includes(redirectUri)) throw new OAuthError(400, 'invalid_request', `redirect_uri "${redirectUri}" is not registered for this client.`);
-  if (params.get('response_type') !== 'code') throw new OAuthError(400, 'unsupported_response_type', 'Only response_type=code is offered.');
+  if (clientId !== options.clientId)
+    throw new OAuthError(400, 'unauthorized_client', `Unknown client_id "${clientId}".`);
+  if (!options.redirectUris.includes(redirectUri))
+    throw new OAuthError(400, 'invalid_request', `redirect_uri "${redirectUri}" is not registered for this client.`);
+  if (params.get('response_type') !== 'code')
+    throw new OAuthError(400, 'unsupported_response_type', 'Only response_type=code is offered.');
   const codeChallenge = params.get('code_challenge') ?? '';
   if (!codeChallenge || params.get('code_challenge_method') !== 'S256') {
-    throw new OAuthError(400, 'invalid_request', 'PKCE is required: send code_challenge with code_challenge_method=S256.');
+    throw new OAuthError(
+      400,
+      'invalid_request',
+      'PKCE is required: send code_challenge with code_challenge_method=S256.',
+    );
   }
   const loginHint = params.get('login_hint')?.trim();
-  if (loginHint && !emailPattern.test(loginHint)) throw new OAuthError(400, 'invalid_request', 'login_hint must be an e-mail address.');
+  if (loginHint && !emailPattern.test(loginHint))
+    throw new OAuthError(400, 'invalid_request', 'login_hint must be an e-mail address.');
   return { clientId, redirectUri, codeChallenge, loginHint: loginHint || undefined };
 }
 
@@ -106,14 +135,26 @@ function identityFor(email: string, typedName: string | undefined, identities: D
 }
 
 /** Lets oauth2-mock-server issue the code and redirect, and remembers who that code is for. */
-async function complete(res: Response, query: string, request: AuthorizeRequest, identity: DemoIdentity, options: OAuthAppOptions) {
+async function complete(
+  res: Response,
+  query: string,
+  request: AuthorizeRequest,
+  identity: DemoIdentity,
+  options: OAuthAppOptions,
+) {
   const answer = await fetch(`${options.urls.internal}/authorize?${query}`, { redirect: 'manual' });
   const location = answer.headers.get('location');
   const code = location ? new URL(location).searchParams.get('code') : null;
-  if (!location || !code) throw new OAuthError(502, 'server_error', `The OAuth server did not issue a code (status ${answer.status}).`);
+  if (!location || !code)
+    throw new OAuthError(502, 'server_error', `The OAuth server did not issue a code (status ${answer.status}).`);
   const profile = profileFor(identity, options.urls.issuer);
   profile.picture += `?name=${encodeURIComponent(profile.name)}`;
-  options.grants.issueCode(code, { profile, clientId: request.clientId, redirectUri: request.redirectUri, codeChallenge: request.codeChallenge });
+  options.grants.issueCode(code, {
+    profile,
+    clientId: request.clientId,
+    redirectUri: request.redirectUri,
+    codeChallenge: request.codeChallenge,
+  });
   res.redirect(302, location);
 }
 

@@ -14,7 +14,12 @@ const extraStyles = `
 `;
 
 // Plain words for the app's roles; any other label is shown as given.
-const roleLabels: Record<string, string> = { applicant: 'Applicant', staff: 'Office staff', crew: 'Crew lead', admin: 'Administrator' };
+const roleLabels: Record<string, string> = {
+  applicant: 'Applicant',
+  staff: 'Office staff',
+  crew: 'Crew lead',
+  admin: 'Administrator',
+};
 
 /** The sign-in page people see locally instead of Google's: pick a demo person or type any e-mail. */
 export function pickerPage(query: string, identities: DemoIdentity[], error?: string): string {

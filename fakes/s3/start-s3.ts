@@ -43,7 +43,13 @@ export async function startS3StandIn(options: S3StandInOptions): Promise<S3Stand
   const agent = new Agent({ keepAlive: true });
   try {
     const usedSignatures = await UsedUploadSignatures.open(join(options.dir, 'spent-upload-signatures.txt'));
-    const proxy = createVerifyingProxy({ credentials, allowedOrigins: options.allowedOrigins, upstreamPort, usedSignatures, agent });
+    const proxy = createVerifyingProxy({
+      credentials,
+      allowedOrigins: options.allowedOrigins,
+      upstreamPort,
+      usedSignatures,
+      agent,
+    });
     const port = await listen(proxy, options.port ?? 0, host);
     return {
       endpoint: urlFor(host, port),

@@ -32,32 +32,69 @@ type SignerRequest = Parameters<SignatureV4['presign']>[0];
 
 const allowedClockSkewMs = 15 * 60 * 1000;
 const maxPresignSeconds = 7 * 24 * 3600;
-const presignParams = ['X-Amz-Algorithm', 'X-Amz-Credential', 'X-Amz-Date', 'X-Amz-Expires', 'X-Amz-SignedHeaders', 'X-Amz-Signature', 'X-Amz-Security-Token'];
+const presignParams = [
+  'X-Amz-Algorithm',
+  'X-Amz-Credential',
+  'X-Amz-Date',
+  'X-Amz-Expires',
+  'X-Amz-SignedHeaders',
+  'X-Amz-Signature',
+  'X-Amz-Security-Token',
+];
 const mismatch = (why: string) =>
-  new S3Refusal(403, 'SignatureDoesNotMatch', `The request signature we calculated does not match the signature you provided. ${why}`);
+  new S3Refusal(
+    403,
+    'SignatureDoesNotMatch',
+    `The request signature we calculated does not match the signature you provided. ${why}`,
+  );
 
 /** Recomputes SigV4 for a header-signed or presigned request with the SDK's own signer; throws an S3Refusal. */
-export async function verifySignature(req: IncomingMessage, creds: Credentials, now = Date.now()): Promise<VerifiedRequest> {
+export async function verifySignature(
+  req: IncomingMessage,
+  creds: Credentials,
+  now = Date.now(),
+): Promise<VerifiedRequest> {
   const [path, rawQuery = ''] = (req.url ?? '/').split(/\?(.*)/s);
   const query = parseQuery(rawQuery);
-  const signer = new SignatureV4({ credentials: creds, region: creds.region, service: 's3', sha256: Sha256, uriEscapePath: false, applyChecksum: false });
+  const signer = new SignatureV4({
+    credentials: creds,
+    region: creds.region,
+    service: 's3',
+    sha256: Sha256,
+    uriEscapePath: false,
+    applyChecksum: false,
+  });
   if (req.headers.authorization) return verifyHeaderSigned(req, path, query, signer, creds, now);
   if ('X-Amz-Signature' in query) return verifyPresigned(req, path, query, signer, creds, now);
   throw new S3Refusal(403, 'AccessDenied', 'Access Denied: the request carries no signature.');
 }
 
-async function verifyHeaderSigned(req: IncomingMessage, path: string, query: Query, signer: SignatureV4, creds: Credentials, now: number) {
-  const match = /^AWS4-HMAC-SHA256 Credential=([^,]+),\s*SignedHeaders=([^,]+),\s*Signature=([0-9a-f]{64})$/.exec(String(req.headers.authorization));
+async function verifyHeaderSigned(
+  req: IncomingMessage,
+  path: string,
+  query: Query,
+  signer: SignatureV4,
+  creds: Credentials,
+  now: number,
+) {
+  const match = /^AWS4-HMAC-SHA256 Credential=([^,]+),\s*SignedHeaders=([^,]+),\s*Signature=([0-9a-f]{64})$/.exec(
+    String(req.headers.authorization),
+  );
   if (!match) throw new S3Refusal(400, 'AuthorizationHeaderMalformed', 'The authorization header is malformed.');
   const [, credential, signedHeaderList, provided] = match;
   const scope = checkScope(credential, creds);
   const signingDate = parseAmzDate(String(req.headers['x-amz-date'] ?? ''), scope);
   if (Math.abs(now - signingDate.getTime()) > allowedClockSkewMs) {
-    throw new S3Refusal(403, 'RequestTimeTooSkewed', 'The difference between the request time and the current time is too large.');
+    throw new S3Refusal(
+      403,
+      'RequestTimeTooSkewed',
+      'The difference between the request time and the current time is too large.',
+    );
   }
   const signedHeaders = signedHeaderList.split(';');
   const payloadHash = String(req.headers['x-amz-content-sha256'] ?? '');
-  if (!payloadHash) throw new S3Refusal(400, 'InvalidRequest', 'Missing required header for this request: x-amz-content-sha256.');
+  if (!payloadHash)
+    throw new S3Refusal(400, 'InvalidRequest', 'Missing required header for this request: x-amz-content-sha256.');
   const signed = await signer.sign(toSignerRequest(req, path, query, signedHeaders), {
     signingDate,
     signableHeaders: new Set(signedHeaders),
@@ -69,17 +106,30 @@ async function verifyHeaderSigned(req: IncomingMessage, path: string, query: Que
   return { mode: 'header', signature: provided, signedHeaders, payloadHash } satisfies VerifiedRequest;
 }
 
-async function verifyPresigned(req: IncomingMessage, path: string, query: Query, signer: SignatureV4, creds: Credentials, now: number) {
-  if (query['X-Amz-Algorithm'] !== 'AWS4-HMAC-SHA256') throw new S3Refusal(400, 'AuthorizationQueryParametersError', 'X-Amz-Algorithm must be AWS4-HMAC-SHA256.');
+async function verifyPresigned(
+  req: IncomingMessage,
+  path: string,
+  query: Query,
+  signer: SignatureV4,
+  creds: Credentials,
+  now: number,
+) {
+  if (query['X-Amz-Algorithm'] !== 'AWS4-HMAC-SHA256')
+    throw new S3Refusal(400, 'AuthorizationQueryParametersError', 'X-Amz-Algorithm must be AWS4-HMAC-SHA256.');
   const scope = checkScope(String(query['X-Amz-Credential'] ?? ''), creds);
   const signingDate = parseAmzDate(String(query['X-Amz-Date'] ?? ''), scope);
   const expiresIn = Number(query['X-Amz-Expires']);
   if (!Number.isInteger(expiresIn) || expiresIn < 1 || expiresIn > maxPresignSeconds) {
-    throw new S3Refusal(400, 'AuthorizationQueryParametersError', 'X-Amz-Expires must be a whole number of seconds from 1 to 604800.');
+    throw new S3Refusal(
+      400,
+      'AuthorizationQueryParametersError',
+      'X-Amz-Expires must be a whole number of seconds from 1 to 604800.',
+    );
   }
   const expiresAt = signingDate.getTime() + expiresIn * 1000;
   if (now > expiresAt) throw new S3Refusal(403, 'AccessDenied', 'Request has expired');
-  if (signingDate.getTime() - now > allowedClockSkewMs) throw new S3Refusal(403, 'AccessDenied', 'Request is not valid yet');
+  if (signingDate.getTime() - now > allowedClockSkewMs)
+    throw new S3Refusal(403, 'AccessDenied', 'Request is not valid yet');
   const provided = String(query['X-Amz-Signature']);
   const signedHeaders = String(query['X-Amz-SignedHeaders'] ?? '').split(';');
   const rest: Query = Object.fromEntries(Object.entries(query).filter(([key]) => !presignParams.includes(key)));
@@ -98,7 +148,8 @@ async function verifyPresigned(req: IncomingMessage, path: string, query: Query,
     unsignableHeaders: new Set(signedHeaders.includes('x-amz-content-sha256') ? [] : ['x-amz-content-sha256']),
     unhoistableHeaders: new Set([...signedAmz, 'x-amz-content-sha256']),
   });
-  if (!sameHex(String(presigned.query?.['X-Amz-Signature'] ?? ''), provided)) throw mismatch('The URL may have been altered.');
+  if (!sameHex(String(presigned.query?.['X-Amz-Signature'] ?? ''), provided))
+    throw mismatch('The URL may have been altered.');
   return { mode: 'presigned', signature: provided, signedHeaders, payloadHash, expiresAt } satisfies VerifiedRequest;
 }
 
@@ -111,7 +162,15 @@ function toSignerRequest(req: IncomingMessage, path: string, query: Query, signe
   }
   // Canonical host is whatever the client put in Host (127.0.0.1 vs localhost, with its port), never our own idea.
   const [hostname, port] = String(req.headers.host ?? '').split(/:(?=\d+$)/);
-  return { method: req.method ?? 'GET', protocol: 'http:', hostname, port: port ? Number(port) : undefined, path, query, headers };
+  return {
+    method: req.method ?? 'GET',
+    protocol: 'http:',
+    hostname,
+    port: port ? Number(port) : undefined,
+    path,
+    query,
+    headers,
+  };
 }
 
 function checkScope(credential: string, creds: Credentials): Scope {

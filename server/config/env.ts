@@ -44,17 +44,26 @@ const envSchema = z.object({
   S3_BUCKET: z.string().min(1),
   S3_ACCESS_KEY_ID: z.string().min(1),
   S3_SECRET_ACCESS_KEY: z.string().min(1),
-  S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  S3_FORCE_PATH_STYLE: z
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((v) => v === 'true'),
   SMTP_HOST: z.string().min(1),
   SMTP_PORT: port,
-  SMTP_SECURE: z.enum(['true', 'false']).default('false').transform((v) => v === 'true'),
+  SMTP_SECURE: z
+    .enum(['true', 'false'])
+    .default('false')
+    .transform((v) => v === 'true'),
   SMTP_USER: z.string().optional(),
   SMTP_PASSWORD: z.string().optional(),
   MAIL_FROM: z.string().default('Gradepass <no-reply@gradepass.test>'),
   MAIL_REPLY_TO: z.string().optional(),
   OFFICE_EMAIL: z.email().default('office@gradepass.test'),
   /** Background work (e-mail delivery) runs in every instance unless turned off. */
-  RUN_WORKERS: z.enum(['true', 'false']).default('true').transform((v) => v === 'true'),
+  RUN_WORKERS: z
+    .enum(['true', 'false'])
+    .default('true')
+    .transform((v) => v === 'true'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   ...databaseTimeouts,
   ...emailDelivery,
@@ -72,5 +81,9 @@ export function parseEnv(source: NodeJS.ProcessEnv = process.env): Env {
 }
 
 export function dbTimeouts(env: Env): DbTimeouts {
-  return { connectMs: env.DB_CONNECT_TIMEOUT_MS, statementMs: env.DB_STATEMENT_TIMEOUT_MS, idleInTransactionMs: env.DB_IDLE_IN_TRANSACTION_TIMEOUT_MS };
+  return {
+    connectMs: env.DB_CONNECT_TIMEOUT_MS,
+    statementMs: env.DB_STATEMENT_TIMEOUT_MS,
+    idleInTransactionMs: env.DB_IDLE_IN_TRANSACTION_TIMEOUT_MS,
+  };
 }

@@ -38,10 +38,18 @@ export interface DbOptions {
  */
 export function createDb(databaseUrl: string, options: DbOptions = {}) {
   const onError = options.onConnectionError ?? (() => undefined);
-  const pool = new pg.Pool({ connectionString: databaseUrl, max: options.max ?? 10, ...(options.timeouts ? poolTimeouts(options.timeouts) : {}) });
+  const pool = new pg.Pool({
+    connectionString: databaseUrl,
+    max: options.max ?? 10,
+    ...(options.timeouts ? poolTimeouts(options.timeouts) : {}),
+  });
   const checkedOut = new WeakSet<pg.Client>();
   pool.on('error', onError);
-  pool.on('connect', (client) => client.on('error', (error) => { if (checkedOut.has(client)) onError(error); }));
+  pool.on('connect', (client) =>
+    client.on('error', (error) => {
+      if (checkedOut.has(client)) onError(error);
+    }),
+  );
   pool.on('acquire', (client) => checkedOut.add(client));
   pool.on('release', (_error, client) => {
     checkedOut.delete(client);

@@ -6,16 +6,25 @@ import pg from 'pg';
 const binDir = process.env.PG_BIN_DIR ?? '/usr/lib/postgresql/15/bin';
 const isRoot = process.getuid?.() === 0;
 
-export interface LocalPostgres { url: (database: string) => string; port: number; stop(): void }
+export interface LocalPostgres {
+  url: (database: string) => string;
+  port: number;
+  stop(): void;
+}
 
 function ensureBinaries() {
   if (existsSync(path.join(binDir, 'initdb'))) return;
   if (!isRoot) {
-    throw new Error(`PostgreSQL 15 is not installed (no ${binDir}/initdb). Install it with: sudo apt-get install -y postgresql-15`);
+    throw new Error(
+      `PostgreSQL 15 is not installed (no ${binDir}/initdb). Install it with: sudo apt-get install -y postgresql-15`,
+    );
   }
   console.log('Installing PostgreSQL 15 from Debian packages...');
   execFileSync('apt-get', ['update'], { stdio: 'inherit' });
-  execFileSync('apt-get', ['install', '-y', 'postgresql-15'], { stdio: 'inherit', env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' } });
+  execFileSync('apt-get', ['install', '-y', 'postgresql-15'], {
+    stdio: 'inherit',
+    env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' },
+  });
 }
 
 /** initdb and pg_ctl refuse to run as root, so as root they run as the postgres user, which must own the folder. */
@@ -25,12 +34,18 @@ function run(binary: string, args: string[], dir: string) {
     ? spawnSync('runuser', ['-u', 'postgres', '--', command, ...args], { encoding: 'utf8' })
     : spawnSync(command, args, { encoding: 'utf8' });
   if (result.status !== 0) {
-    throw new Error(`${binary} failed (${result.status}): ${result.stderr || result.stdout}\nSee ${path.join(dir, 'server.log')}`);
+    throw new Error(
+      `${binary} failed (${result.status}): ${result.stderr || result.stdout}\nSee ${path.join(dir, 'server.log')}`,
+    );
   }
 }
 
 /** Start (initialising the first time) a PostgreSQL cluster in `dir`, on 127.0.0.1 only. */
-export async function startPostgres(dir: string, port: number, opts: { throwaway?: boolean } = {}): Promise<LocalPostgres> {
+export async function startPostgres(
+  dir: string,
+  port: number,
+  opts: { throwaway?: boolean } = {},
+): Promise<LocalPostgres> {
   ensureBinaries();
   const data = path.join(dir, 'data');
   mkdirSync(dir, { recursive: true });
@@ -44,8 +59,20 @@ export async function startPostgres(dir: string, port: number, opts: { throwaway
   if (status.status === 0) {
     throw new Error(`PostgreSQL is already running from ${data}: is another Gradepass running? Stop it first.`);
   }
-  run('pg_ctl', ['-D', data, '-l', path.join(dir, 'server.log'), '-w', '-o',
-    `-p ${port} -k ${data} -c listen_addresses=127.0.0.1 -c max_connections=200${opts.throwaway ? ' -c fsync=off -c synchronous_commit=off' : ''}`, 'start'], dir);
+  run(
+    'pg_ctl',
+    [
+      '-D',
+      data,
+      '-l',
+      path.join(dir, 'server.log'),
+      '-w',
+      '-o',
+      `-p ${port} -k ${data} -c listen_addresses=127.0.0.1 -c max_connections=200${opts.throwaway ? ' -c fsync=off -c synchronous_commit=off' : ''}`,
+      'start',
+    ],
+    dir,
+  );
   const url = (database: string) => `postgres://postgres@127.0.0.1:${port}/${database}`;
   return {
     url,
@@ -67,5 +94,9 @@ export async function ensureDatabase(adminUrl: string, name: string, template?: 
   }
 }
 
-function uidOf(user: string) { return Number(execFileSync('id', ['-u', user], { encoding: 'utf8' }).trim()); }
-function gidOf(user: string) { return Number(execFileSync('id', ['-g', user], { encoding: 'utf8' }).trim()); }
+function uidOf(user: string) {
+  return Number(execFileSync('id', ['-u', user], { encoding: 'utf8' }).trim());
+}
+function gidOf(user: string) {
+  return Number(execFileSync('id', ['-g', user], { encoding: 'utf8' }).trim());
+}

@@ -34,7 +34,11 @@ async function main() {
       await exited;
     }
     for (const stop of stops.reverse()) {
-      try { await stop(); } catch (error) { console.error(error instanceof Error ? error.message : error); }
+      try {
+        await stop();
+      } catch (error) {
+        console.error(error instanceof Error ? error.message : error);
+      }
     }
     process.exit(code);
   };
@@ -54,31 +58,46 @@ async function main() {
     const appOrigin = `http://127.0.0.1:${devPorts.app}`;
     const standIns = await startStandIns({
       dataDir: `${dataDir}/fakes`,
-      s3Port: devPorts.s3, smtpPort: devPorts.smtp, mailWebPort: devPorts.mailWeb, oauthPort: devPorts.oauth,
+      s3Port: devPorts.s3,
+      smtpPort: devPorts.smtp,
+      mailWebPort: devPorts.mailWeb,
+      oauthPort: devPorts.oauth,
       bucket: devBucket,
       allowedOrigins: [appOrigin, `http://localhost:${devPorts.app}`],
       oauth: { ...devOAuthClient, redirectUris: [`${appOrigin}/auth/google/callback`], identities: demoPeople },
     });
     stops.push(() => standIns.stop());
 
-    const env = { ...process.env, ...standInEnv(standIns, { appOrigin, port: devPorts.app, databaseUrl }), NODE_ENV: 'development' };
+    const env = {
+      ...process.env,
+      ...standInEnv(standIns, { appOrigin, port: devPorts.app, databaseUrl }),
+      NODE_ENV: 'development',
+    };
     // The demo's reports go into storage, so they can only be made now that it runs.
     const seedCtx = createContext(parseEnv({ ...env, LOG_LEVEL: 'warn' }));
-    try { await seedDemoReports(seedCtx); } finally { await closeContext(seedCtx); }
+    try {
+      await seedDemoReports(seedCtx);
+    } finally {
+      await closeContext(seedCtx);
+    }
     server = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], { cwd: root, env, stdio: 'inherit' });
-    server.once('exit', (code) => { if (!stopping) void stopAll(code ?? 1); });
+    server.once('exit', (code) => {
+      if (!stopping) void stopAll(code ?? 1);
+    });
 
-    console.log([
-      '',
-      'Gradepass is running. Press Ctrl-C to stop everything.',
-      `  App:             ${appOrigin}`,
-      `  Sign-in picker:  ${standIns.oauth.authorizationUrl} (opens from the app's Sign in button)`,
-      `  Mail catcher:    ${standIns.mail.webUrl}`,
-      `  File storage:    ${standIns.s3.endpoint} (bucket ${standIns.s3.bucket})`,
-      `  PostgreSQL:      ${databaseUrl}`,
-      `  Data folder:     ${dataDir}`,
-      '',
-    ].join('\n'));
+    console.log(
+      [
+        '',
+        'Gradepass is running. Press Ctrl-C to stop everything.',
+        `  App:             ${appOrigin}`,
+        `  Sign-in picker:  ${standIns.oauth.authorizationUrl} (opens from the app's Sign in button)`,
+        `  Mail catcher:    ${standIns.mail.webUrl}`,
+        `  File storage:    ${standIns.s3.endpoint} (bucket ${standIns.s3.bucket})`,
+        `  PostgreSQL:      ${databaseUrl}`,
+        `  Data folder:     ${dataDir}`,
+        '',
+      ].join('\n'),
+    );
   } catch (error) {
     console.error(error instanceof Error ? error.message : error);
     await stopAll(1);

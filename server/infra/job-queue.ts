@@ -9,7 +9,11 @@ import { poolTimeouts } from '../db/client';
  */
 export async function startJobQueue({ env, logger }: Pick<AppContext, 'env' | 'logger'>): Promise<PgBoss> {
   const boss = new PgBoss({
-    connectionString: env.DATABASE_URL, schema: 'pgboss', max: 3, schedule: false, application_name: 'gradepass-worker',
+    connectionString: env.DATABASE_URL,
+    schema: 'pgboss',
+    max: 3,
+    schedule: false,
+    application_name: 'gradepass-worker',
     ...poolTimeouts(dbTimeouts(env)),
   });
   boss.on('error', (error) => logger.warn({ err: error }, 'job queue error'));

@@ -15,4 +15,5 @@ export const badRequest = (message: string, fields?: Record<string, string>) =>
 export const unauthenticated = () => new AppError(401, 'unauthenticated', 'Please sign in first.');
 export const forbidden = (message = 'Your role does not allow this.') => new AppError(403, 'forbidden', message);
 export const notFound = (what = 'That') => new AppError(404, 'not_found', `${what} was not found.`);
-export const conflict = (message: string, fields?: Record<string, string>) => new AppError(409, 'conflict', message, fields);
+export const conflict = (message: string, fields?: Record<string, string>) =>
+  new AppError(409, 'conflict', message, fields);

@@ -38,9 +38,13 @@ export function nulFields(value: unknown): Record<string, string> {
     const key = path || '(body)';
     if (typeof item === 'string') {
       if (item.includes('\u0000')) fields[key] ??= 'must not contain a NUL character';
-      else if (!(item as string & { isWellFormed(): boolean }).isWellFormed()) fields[key] ??= 'holds a broken character (a lone UTF-16 surrogate)';
+      else if (!(item as string & { isWellFormed(): boolean }).isWellFormed())
+        fields[key] ??= 'holds a broken character (a lone UTF-16 surrogate)';
     } else if (item && typeof item === 'object') {
-      if (depth >= deepestBody) { fields[key] ??= 'is nested too deeply'; continue; }
+      if (depth >= deepestBody) {
+        fields[key] ??= 'is nested too deeply';
+        continue;
+      }
       for (const [name, child] of Object.entries(item)) {
         if (name.includes('\u0000')) fields[key] ??= 'names must not contain a NUL character';
         else pending.push([child, path ? `${path}.${name}` : name, depth + 1]);
@@ -70,8 +74,13 @@ interface Input<B, Q, P> {
  * so nothing downstream parses them again. The caller must be signed in; role checks happen in the router.
  */
 export function handle<
-  B extends z.ZodType = z.ZodUnknown, Q extends z.ZodType = z.ZodUnknown, P extends z.ZodType = z.ZodUnknown,
->(contract: Contract<B, Q, P>, fn: (input: Input<z.infer<B>, z.infer<Q>, z.infer<P>>) => Promise<unknown>): RequestHandler {
+  B extends z.ZodType = z.ZodUnknown,
+  Q extends z.ZodType = z.ZodUnknown,
+  P extends z.ZodType = z.ZodUnknown,
+>(
+  contract: Contract<B, Q, P>,
+  fn: (input: Input<z.infer<B>, z.infer<Q>, z.infer<P>>) => Promise<unknown>,
+): RequestHandler {
   return async (req: Request, res: Response, next: NextFunction) => {
     try {
       if (!req.user) throw unauthenticated();
@@ -89,7 +98,12 @@ export function handle<
       const query = part(contract.query, req.query, '') as z.infer<Q>;
       const body = part(contract.body, req.body ?? {}, '') as z.infer<B>;
       if (Object.keys(fields).length > 0) {
-        throw new AppError(400, 'invalid_input', `Some values are not valid: ${Object.keys(fields).join(', ')}.`, fields);
+        throw new AppError(
+          400,
+          'invalid_input',
+          `Some values are not valid: ${Object.keys(fields).join(', ')}.`,
+          fields,
+        );
       }
       const result = await fn({ body, query, params, user: req.user as SessionUser, req, res });
       if (!res.headersSent) {

@@ -29,7 +29,11 @@ export function httpLogger(logger: Logger) {
     logger,
     autoLogging: { ignore: (req) => !logged(req) },
     serializers: {
-      req: (req: { id?: unknown; method?: string; url?: string }) => ({ id: req.id, method: req.method, url: loggableUrl(req.url ?? '') }),
+      req: (req: { id?: unknown; method?: string; url?: string }) => ({
+        id: req.id,
+        method: req.method,
+        url: loggableUrl(req.url ?? ''),
+      }),
       res: (res: { statusCode?: number }) => ({ statusCode: res.statusCode }),
     },
     customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? 'error' : 'info'),

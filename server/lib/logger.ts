@@ -1,7 +1,13 @@
 import pino, { type DestinationStream } from 'pino';
 
 /** A second line of defence: the request logger's own serializers never emit headers, but nothing else may either. */
-const secretPaths = ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]', 'headers.cookie', 'headers["set-cookie"]'];
+const secretPaths = [
+  'req.headers.cookie',
+  'req.headers.authorization',
+  'res.headers["set-cookie"]',
+  'headers.cookie',
+  'headers["set-cookie"]',
+];
 
 /** `destination` lets a test read what would have been written. */
 export function createLogger(level: string, destination?: DestinationStream) {

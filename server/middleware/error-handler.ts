@@ -9,13 +9,21 @@ const uniqueFields: Record<string, string> = { users_email_key: 'email', jurisdi
 
 /** PostgreSQL's unique_violation (23505), straight from pg or wrapped by Drizzle as the cause. */
 function uniqueViolation(error: unknown): { constraint?: string } | null {
-  for (let e = error as { code?: string; cause?: unknown; constraint?: string } | undefined, i = 0; e && i < 3; e = e.cause as typeof e, i += 1) {
+  for (
+    let e = error as { code?: string; cause?: unknown; constraint?: string } | undefined, i = 0;
+    e && i < 3;
+    e = e.cause as typeof e, i += 1
+  ) {
     if (e.code === '23505') return { constraint: e.constraint };
   }
   return null;
 }
 
-interface BodyParserError { type?: string; status?: number; expose?: boolean }
+interface BodyParserError {
+  type?: string;
+  status?: number;
+  expose?: boolean;
+}
 
 /** The one place errors become responses: `{ error: { code, message, fields? } }`. */
 export function errorHandler(logger: Logger): ErrorRequestHandler {
@@ -27,7 +35,15 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     const parserError = error as BodyParserError;
     if (parserError.type === 'entity.parse.failed') {
-      res.status(400).json({ error: { code: 'malformed_json', message: 'The request body is not valid JSON.', fields: { '(body)': 'not valid JSON' } } });
+      res
+        .status(400)
+        .json({
+          error: {
+            code: 'malformed_json',
+            message: 'The request body is not valid JSON.',
+            fields: { '(body)': 'not valid JSON' },
+          },
+        });
       return;
     }
     if (parserError.type === 'entity.too.large') {
@@ -36,28 +52,56 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     // The router decodes path parameters; a broken %-escape in the address (such as "%E0%A4%A") cannot be decoded.
     if (error instanceof URIError && parserError.status === 400) {
-      res.status(400).json({ error: { code: 'bad_path', message: 'The address holds a broken %-escape.', fields: { '(path)': 'not a valid address' } } });
+      res
+        .status(400)
+        .json({
+          error: {
+            code: 'bad_path',
+            message: 'The address holds a broken %-escape.',
+            fields: { '(path)': 'not a valid address' },
+          },
+        });
       return;
     }
     if (parserError.expose && parserError.status && parserError.status < 500) {
-      res.status(parserError.status).json({ error: { code: 'bad_request', message: String((error as Error).message) } });
+      res
+        .status(parserError.status)
+        .json({ error: { code: 'bad_request', message: String((error as Error).message) } });
       return;
     }
     // The services check before they insert; two identical requests at the same moment can still both pass the check.
     const duplicate = uniqueViolation(error);
     if (duplicate) {
       const field = duplicate.constraint ? uniqueFields[duplicate.constraint] : undefined;
-      res.status(409).json({ error: { code: 'already_exists', message: 'That already exists: it may have been added a moment ago. Reload to see it.', ...(field ? { fields: { [field]: 'is already taken' } } : {}) } });
+      res
+        .status(409)
+        .json({
+          error: {
+            code: 'already_exists',
+            message: 'That already exists: it may have been added a moment ago. Reload to see it.',
+            ...(field ? { fields: { [field]: 'is already taken' } } : {}),
+          },
+        });
       return;
     }
     // A restart, failover or frozen server: say so plainly and let the client retry, instead of a 500.
     if (isDatabaseUnavailable(error)) {
       const unavailable = databaseUnavailable();
       logger.warn({ err: error, url: loggableUrl(req.originalUrl) }, 'database unavailable');
-      res.status(503).set('Retry-After', '5').json({ error: { code: unavailable.code, message: unavailable.message } });
+      res
+        .status(503)
+        .set('Retry-After', '5')
+        .json({ error: { code: unavailable.code, message: unavailable.message } });
       return;
     }
     logger.error({ err: error, url: loggableUrl(req.originalUrl) }, 'unhandled error');
-    res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Nothing you sent was lost; please try again.' } });
+    res
+      .status(500)
+      .json({
+        error: {
+          code: 'internal',
+          message: 'Something went wrong on our side. Nothing you sent was lost; please try again.',
+        },
+      });
   };
 }

@@ -5,7 +5,12 @@ const cookieName = 'gradepass.oauth';
 const lifetimeMs = 10 * 60 * 1000;
 const retry = 'The sign-in took too long or was started again in another tab. Please try again.';
 
-interface Sealed { h: string; v: string; s?: unknown; e: number }
+interface Sealed {
+  h: string;
+  v: string;
+  s?: unknown;
+  e: number;
+}
 type Verified = (error: Error | null, verifier: string | false, stateOrInfo?: unknown) => void;
 
 function readCookie(req: Request, name: string): string | undefined {
@@ -32,9 +37,19 @@ export class OAuthStateCookieStore {
     this.cookie = { httpOnly: true, sameSite: 'lax', secure, path: '/auth/google', maxAge: lifetimeMs };
   }
 
-  store(req: Request, verifier: string, state: unknown, _meta: unknown, done: (error: Error | null, handle?: string) => void) {
+  store(
+    req: Request,
+    verifier: string,
+    state: unknown,
+    _meta: unknown,
+    done: (error: Error | null, handle?: string) => void,
+  ) {
     const handle = randomBytes(18).toString('base64url');
-    req.res!.cookie(cookieName, this.seal({ h: handle, v: verifier, s: state, e: Date.now() + lifetimeMs }), this.cookie);
+    req.res!.cookie(
+      cookieName,
+      this.seal({ h: handle, v: verifier, s: state, e: Date.now() + lifetimeMs }),
+      this.cookie,
+    );
     done(null, handle);
   }
 

@@ -1,5 +1,10 @@
 import passport from 'passport';
-import { Strategy as GoogleStrategy, type Profile, type StrategyOptions, type VerifyCallback } from 'passport-google-oauth20';
+import {
+  Strategy as GoogleStrategy,
+  type Profile,
+  type StrategyOptions,
+  type VerifyCallback,
+} from 'passport-google-oauth20';
 import type { AppContext } from '../config/context';
 import { OAuthStateCookieStore } from './oauth-state-cookie';
 import { findSessionUser, signInWithProfile } from '../services/users/users.service';
@@ -23,7 +28,10 @@ export function configurePassport({ env, db }: Pick<AppContext, 'env' | 'db'>) {
       state: true,
       pkce: true,
       // passport-oauth2 calls a five-argument store when PKCE is on; its types know only the older forms.
-      store: new OAuthStateCookieStore(env.SESSION_SECRET, env.APP_ORIGIN.startsWith('https://')) as unknown as StrategyOptions['store'],
+      store: new OAuthStateCookieStore(
+        env.SESSION_SECRET,
+        env.APP_ORIGIN.startsWith('https://'),
+      ) as unknown as StrategyOptions['store'],
     } as StrategyOptions,
     (_accessToken: string, _refreshToken: string, profile: Profile, done: VerifyCallback) => {
       const email = profile.emails?.[0]?.value;
@@ -41,7 +49,9 @@ export function configurePassport({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   instance.use('google', strategy);
   instance.serializeUser((user, done) => done(null, user.id));
   instance.deserializeUser((id: string, done) => {
-    findSessionUser(db, id).then((user) => done(null, user ?? false)).catch((error: unknown) => done(error));
+    findSessionUser(db, id)
+      .then((user) => done(null, user ?? false))
+      .catch((error: unknown) => done(error));
   });
   return instance;
 }

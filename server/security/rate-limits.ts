@@ -40,7 +40,14 @@ export function rateLimitRouter({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   let first = true;
   const counter = (keyPrefix: string, points: number, duration: number) => {
     // One limiter per process is enough to clear the shared table of expired counts.
-    const limiter = new RateLimiterDrizzle({ storeClient: db, schema: rateLimits, keyPrefix, points, duration, clearExpiredByTimeout: first });
+    const limiter = new RateLimiterDrizzle({
+      storeClient: db,
+      schema: rateLimits,
+      keyPrefix,
+      points,
+      duration,
+      clearExpiredByTimeout: first,
+    });
     first = false;
     return limiter;
   };
@@ -48,7 +55,10 @@ export function rateLimitRouter({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   const personAndAddress = (name: string, perPerson: number, seconds: number): Counts => {
     const person = counter(`${name}-person`, perPerson, seconds);
     const address = counter(`${name}-address`, perPerson * factor, seconds);
-    return (req) => [...(req.user ? [[person, req.user.id] as [RateLimiterDrizzle, string]] : []), [address, addressKey(req.ip)]];
+    return (req) => [
+      ...(req.user ? [[person, req.user.id] as [RateLimiterDrizzle, string]] : []),
+      [address, addressKey(req.ip)],
+    ];
   };
 
   // The ceiling on all API use costs one count per request: the person's when signed in, otherwise the address's.
@@ -61,9 +71,24 @@ export function rateLimitRouter({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   const ceiling = limited(api, 'Too many requests in a short time.');
   // The health check answers load balancers and must not depend on the counters' table.
   router.use('/api', (req, res, next) => (req.path === '/health' ? next() : ceiling(req, res, next)));
-  router.get('/auth/google', limited((req) => [[signInAddress, addressKey(req.ip)]], 'Too many sign-ins were started from this address.'));
-  router.post('/api/requests', limited(personAndAddress('drafts', env.RATE_LIMIT_DRAFTS_PER_HOUR, HOUR), 'Too many new requests in a short time.'));
-  router.post('/api/requests/:id/messages', limited(personAndAddress('messages', env.RATE_LIMIT_MESSAGES_PER_HOUR, HOUR), 'Too many messages in a short time.'));
-  router.post('/api/requests/:id/photos', limited(personAndAddress('uploads', env.RATE_LIMIT_UPLOADS_PER_HOUR, HOUR), 'Too many photo uploads in a short time.'));
+  router.get(
+    '/auth/google',
+    limited((req) => [[signInAddress, addressKey(req.ip)]], 'Too many sign-ins were started from this address.'),
+  );
+  router.post(
+    '/api/requests',
+    limited(personAndAddress('drafts', env.RATE_LIMIT_DRAFTS_PER_HOUR, HOUR), 'Too many new requests in a short time.'),
+  );
+  router.post(
+    '/api/requests/:id/messages',
+    limited(personAndAddress('messages', env.RATE_LIMIT_MESSAGES_PER_HOUR, HOUR), 'Too many messages in a short time.'),
+  );
+  router.post(
+    '/api/requests/:id/photos',
+    limited(
+      personAndAddress('uploads', env.RATE_LIMIT_UPLOADS_PER_HOUR, HOUR),
+      'Too many photo uploads in a short time.',
+    ),
+  );
   return router;
 }

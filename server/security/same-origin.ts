@@ -17,7 +17,13 @@ export function requireSameOrigin(appOrigin: string): RequestHandler {
     const site = req.headers['sec-fetch-site'];
     const ours = origin !== undefined ? origin === expected : site === undefined || site === 'same-origin';
     if (ours) return next();
-    next(new AppError(403, 'cross_site', 'This change was sent from another site, so it was refused. Make it from the Gradepass pages themselves.'));
+    next(
+      new AppError(
+        403,
+        'cross_site',
+        'This change was sent from another site, so it was refused. Make it from the Gradepass pages themselves.',
+      ),
+    );
   };
 }
 

@@ -17,11 +17,16 @@ declare module 'express-session' {
  * SESSION_IDLE_MINUTES without a request (rolling: every request moves the expiry on); `endOldSessions` adds the
  * absolute limit of SESSION_MAX_DAYS from sign-in.
  */
-export function sessionMiddleware({ env, pool, logger }: Pick<AppContext, 'env' | 'pool' | 'logger'>, secure: boolean): RequestHandler[] {
+export function sessionMiddleware(
+  { env, pool, logger }: Pick<AppContext, 'env' | 'pool' | 'logger'>,
+  secure: boolean,
+): RequestHandler[] {
   const PgStore = connectPgSimple(session);
   const maxAgeMs = env.SESSION_MAX_DAYS * 86_400_000;
   const store = new PgStore({
-    pool, tableName: 'session', createTableIfMissing: false,
+    pool,
+    tableName: 'session',
+    createTableIfMissing: false,
     // The store's own default logs with console.error; a database outage is already answered 503 by the app.
     errorLog: (...args: unknown[]) => logger.warn({ args }, 'session store error'),
   });
@@ -35,13 +40,16 @@ export function sessionMiddleware({ env, pool, logger }: Pick<AppContext, 'env' 
       next(error);
     });
   };
-  return [session({
-    name: sessionCookieName,
-    secret: env.SESSION_SECRET,
-    store,
-    resave: false,
-    saveUninitialized: false,
-    rolling: true,
-    cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: env.SESSION_IDLE_MINUTES * 60_000 },
-  }), endOldSessions];
+  return [
+    session({
+      name: sessionCookieName,
+      secret: env.SESSION_SECRET,
+      store,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure, maxAge: env.SESSION_IDLE_MINUTES * 60_000 },
+    }),
+    endOldSessions,
+  ];
 }

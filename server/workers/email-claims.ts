@@ -16,14 +16,23 @@ export type Claim = typeof emails.$inferSelect & { leaseToken: string };
 
 /** Rows that are due: queued, failed past their next try, or sending under a lease that ran out. */
 export async function dueEmails(db: Db, limit: number) {
-  return db.select({ id: emails.id, dueAt: sql<string>`${emails.nextAttemptAt}::text` }).from(emails)
+  return db
+    .select({ id: emails.id, dueAt: sql<string>`${emails.nextAttemptAt}::text` })
+    .from(emails)
     .where(and(inArray(emails.status, [...dueStatuses]), lte(emails.nextAttemptAt, sql`now()`)))
-    .orderBy(asc(emails.nextAttemptAt)).limit(limit);
+    .orderBy(asc(emails.nextAttemptAt))
+    .limit(limit);
 }
 
 export async function claimEmail(db: Db, id: string, leaseMs: number): Promise<Claim | null> {
-  const [row] = await db.update(emails)
-    .set({ status: 'sending', attempts: sql`${emails.attempts} + 1`, leaseToken: randomUUID(), nextAttemptAt: after(leaseMs) })
+  const [row] = await db
+    .update(emails)
+    .set({
+      status: 'sending',
+      attempts: sql`${emails.attempts} + 1`,
+      leaseToken: randomUUID(),
+      nextAttemptAt: after(leaseMs),
+    })
     .where(and(eq(emails.id, id), inArray(emails.status, [...dueStatuses]), lte(emails.nextAttemptAt, sql`now()`)))
     .returning();
   return row ? (row as Claim) : null;
@@ -31,14 +40,17 @@ export async function claimEmail(db: Db, id: string, leaseMs: number): Promise<C
 
 /** False once the lease is no longer ours (it ran out and another sender claimed the row). */
 export async function renewLease(db: Db, claim: Claim, leaseMs: number): Promise<boolean> {
-  const rows = await db.update(emails).set({ nextAttemptAt: after(leaseMs) })
+  const rows = await db
+    .update(emails)
+    .set({ nextAttemptAt: after(leaseMs) })
     .where(and(eq(emails.id, claim.id), eq(emails.leaseToken, claim.leaseToken), eq(emails.status, 'sending')))
     .returning({ id: emails.id });
   return rows.length > 0;
 }
 
 export async function recordSent(db: Db, claim: Claim, messageId: string): Promise<boolean> {
-  const rows = await db.update(emails)
+  const rows = await db
+    .update(emails)
     .set({ status: 'sent', sentAt: sql`now()`, messageId, lastError: null, leaseToken: null })
     .where(and(eq(emails.id, claim.id), eq(emails.leaseToken, claim.leaseToken)))
     .returning({ id: emails.id });
@@ -51,11 +63,16 @@ export async function recordSent(db: Db, claim: Claim, messageId: string): Promi
  */
 export async function recordFailure(db: Db, claim: Claim, error: string, delayMs: number, horizonMs: number) {
   const giveUpAt = sql`coalesce(${emails.retryUntil}, ${after(horizonMs)})`;
-  const [row] = await db.update(emails).set({
-    status: sql`case when ${giveUpAt} <= now() then 'dead'::email_status else 'failed'::email_status end`,
-    retryUntil: giveUpAt,
-    nextAttemptAt: sql`least(${after(delayMs)}, ${giveUpAt})`,
-    lastError: error, leaseToken: null,
-  }).where(and(eq(emails.id, claim.id), eq(emails.leaseToken, claim.leaseToken))).returning({ status: emails.status });
+  const [row] = await db
+    .update(emails)
+    .set({
+      status: sql`case when ${giveUpAt} <= now() then 'dead'::email_status else 'failed'::email_status end`,
+      retryUntil: giveUpAt,
+      nextAttemptAt: sql`least(${after(delayMs)}, ${giveUpAt})`,
+      lastError: error,
+      leaseToken: null,
+    })
+    .where(and(eq(emails.id, claim.id), eq(emails.leaseToken, claim.leaseToken)))
+    .returning({ status: emails.status });
   return row?.status as 'failed' | 'dead' | undefined;
 }

@@ -15,8 +15,10 @@ export interface DeliverySettings {
 
 export function deliverySettings(env: AppContext['env']): DeliverySettings {
   return {
-    leaseMs: env.EMAIL_LEASE_SECONDS * 1000, firstDelayMs: env.EMAIL_RETRY_FIRST_DELAY_SECONDS * 1000,
-    maxDelayMs: env.EMAIL_RETRY_MAX_DELAY_SECONDS * 1000, horizonMs: env.EMAIL_RETRY_HORIZON_SECONDS * 1000,
+    leaseMs: env.EMAIL_LEASE_SECONDS * 1000,
+    firstDelayMs: env.EMAIL_RETRY_FIRST_DELAY_SECONDS * 1000,
+    maxDelayMs: env.EMAIL_RETRY_MAX_DELAY_SECONDS * 1000,
+    horizonMs: env.EMAIL_RETRY_HORIZON_SECONDS * 1000,
   };
 }
 
@@ -43,12 +45,20 @@ export async function deliverEmail(ctx: AppContext, emailId: string, s: Delivery
   if (!claim) return 'skipped';
   const messageId = messageIdFor(claim.id, ctx.env.MAIL_FROM);
   const abort = new AbortController();
-  const lease = keepLease(ctx.db, claim, s.leaseMs, claimedAt, (reason) => abort.abort(new Error(`sending stopped: ${reason}`)));
+  const lease = keepLease(ctx.db, claim, s.leaseMs, claimedAt, (reason) =>
+    abort.abort(new Error(`sending stopped: ${reason}`)),
+  );
   let failure: unknown = null;
   try {
     await ctx.mailer.sendMail({
-      from: ctx.env.MAIL_FROM, replyTo: ctx.env.MAIL_REPLY_TO, to: claim.toAddress, subject: claim.subject,
-      text: claim.textBody, html: claim.htmlBody, messageId, headers: { 'X-Gradepass-Email-Id': claim.id },
+      from: ctx.env.MAIL_FROM,
+      replyTo: ctx.env.MAIL_REPLY_TO,
+      to: claim.toAddress,
+      subject: claim.subject,
+      text: claim.textBody,
+      html: claim.htmlBody,
+      messageId,
+      headers: { 'X-Gradepass-Email-Id': claim.id },
       signal: abort.signal,
     });
   } catch (error) {
@@ -60,7 +70,9 @@ export async function deliverEmail(ctx: AppContext, emailId: string, s: Delivery
   if (failure === null) {
     return (await persist(ctx, () => recordSent(ctx.db, claim, messageId))) ? 'sent' : 'lost-lease';
   }
-  const status = await persist(ctx, () => recordFailure(ctx.db, claim, describe(failure), retryDelayMs(claim.attempts, s), s.horizonMs));
+  const status = await persist(ctx, () =>
+    recordFailure(ctx.db, claim, describe(failure), retryDelayMs(claim.attempts, s), s.horizonMs),
+  );
   return status ?? 'lost-lease';
 }
 

@@ -14,18 +14,33 @@ export function keepLease(db: Db, claim: Claim, leaseMs: number, claimedAt: numb
   let lastRenewal = claimedAt;
   let renewing = false;
   let stopped = false;
-  const stop = () => { stopped = true; clearInterval(timer); };
-  const lose = (reason: string) => { if (!stopped) { stop(); abort(reason); } };
+  const stop = () => {
+    stopped = true;
+    clearInterval(timer);
+  };
+  const lose = (reason: string) => {
+    if (!stopped) {
+      stop();
+      abort(reason);
+    }
+  };
   const tick = () => {
     if (Date.now() >= validUntil) return lose('the lease could not be renewed in time');
     if (renewing || Date.now() - lastRenewal < leaseMs / 3) return;
     const started = Date.now();
     lastRenewal = started;
     renewing = true;
-    renewLease(db, claim, leaseMs).then(
-      (ours) => { if (ours) validUntil = started + leaseMs - margin; else lose('another sender holds the row now'); },
-      () => undefined, // the database is away: the deadline above decides
-    ).finally(() => { renewing = false; });
+    renewLease(db, claim, leaseMs)
+      .then(
+        (ours) => {
+          if (ours) validUntil = started + leaseMs - margin;
+          else lose('another sender holds the row now');
+        },
+        () => undefined, // the database is away: the deadline above decides
+      )
+      .finally(() => {
+        renewing = false;
+      });
   };
   const timer = setInterval(tick, Math.max(50, Math.min(1_000, leaseMs / 10)));
   return { stop };

@@ -21,11 +21,15 @@ export interface EmailWorkerOptions {
  * database was away and could not claim it) a new job soon after, instead of a job id already used up.
  */
 export function jobIdFor(emailId: string, dueAt: string, now = Date.now()) {
-  const hex = createHash('sha256').update(`${emailId}:${dueAt}:${Math.floor(now / 10_000)}`).digest('hex');
+  const hex = createHash('sha256')
+    .update(`${emailId}:${dueAt}:${Math.floor(now / 10_000)}`)
+    .digest('hex');
   return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-5${hex.slice(13, 16)}-a${hex.slice(17, 20)}-${hex.slice(20, 32)}`;
 }
 
-interface EmailJob { emailId: string }
+interface EmailJob {
+  emailId: string;
+}
 
 /**
  * The job queue only wakes senders; the outbox row decides. Retries, backoff and giving up live on the row, so a
@@ -37,32 +41,46 @@ export async function startEmailWorker(ctx: AppContext, opts: EmailWorkerOptions
   const boss = await startJobQueue(ctx);
   await ensureQueue(boss, { name: emailQueue, policy: 'standard', retryLimit: 0, expireInSeconds: 900 });
 
-  await boss.work<EmailJob>(emailQueue, { batchSize: 10, pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 1 }, async (jobs) => {
-    await Promise.all(jobs.map(async (job) => {
-      try {
-        const outcome = await deliverEmail(ctx, job.data.emailId, settings);
-        if (outcome === 'failed' || outcome === 'dead' || outcome === 'lost-lease') {
-          ctx.logger.warn({ emailId: job.data.emailId, outcome }, 'e-mail not delivered on this try');
-        }
-      } catch (error) {
-        // The row keeps its state (a lease runs out by itself), so the sweeper brings it back.
-        ctx.logger.warn({ err: error, emailId: job.data.emailId }, 'e-mail delivery interrupted');
-      }
-    }));
-  });
+  await boss.work<EmailJob>(
+    emailQueue,
+    { batchSize: 10, pollingIntervalSeconds: opts.pollingIntervalSeconds ?? 1 },
+    async (jobs) => {
+      await Promise.all(
+        jobs.map(async (job) => {
+          try {
+            const outcome = await deliverEmail(ctx, job.data.emailId, settings);
+            if (outcome === 'failed' || outcome === 'dead' || outcome === 'lost-lease') {
+              ctx.logger.warn({ emailId: job.data.emailId, outcome }, 'e-mail not delivered on this try');
+            }
+          } catch (error) {
+            // The row keeps its state (a lease runs out by itself), so the sweeper brings it back.
+            ctx.logger.warn({ err: error, emailId: job.data.emailId }, 'e-mail delivery interrupted');
+          }
+        }),
+      );
+    },
+  );
 
   const sweep = async () => {
     const due = await dueEmails(ctx.db, 500);
     if (due.length === 0) return;
-    await boss.insert(due.map((row) => ({
-      id: jobIdFor(row.id, row.dueAt), name: emailQueue, data: { emailId: row.id }, retryLimit: 0, expireInSeconds: 900,
-    })));
+    await boss.insert(
+      due.map((row) => ({
+        id: jobIdFor(row.id, row.dueAt),
+        name: emailQueue,
+        data: { emailId: row.id },
+        retryLimit: 0,
+        expireInSeconds: 900,
+      })),
+    );
   };
   let sweeping: Promise<void> | null = null;
   const timer = setInterval(() => {
     sweeping ??= sweep()
       .catch((error: unknown) => ctx.logger.warn({ err: error }, 'e-mail sweep failed'))
-      .finally(() => { sweeping = null; });
+      .finally(() => {
+        sweeping = null;
+      });
   }, opts.sweepIntervalMs ?? 1000);
 
   return {

@@ -16,12 +16,19 @@ const everyMs = 15 * 60_000;
  */
 export async function sweepUnconfirmedUploads(ctx: SweepContext, now = new Date()): Promise<number> {
   const cutoff = new Date(now.getTime() - ctx.env.UNCONFIRMED_UPLOAD_HOURS * 3_600_000);
-  const stale = await ctx.db.select({ id: photos.id, objectKey: photos.objectKey }).from(photos)
-    .where(and(eq(photos.status, 'pending'), lt(photos.createdAt, cutoff))).orderBy(asc(photos.createdAt)).limit(batch);
+  const stale = await ctx.db
+    .select({ id: photos.id, objectKey: photos.objectKey })
+    .from(photos)
+    .where(and(eq(photos.status, 'pending'), lt(photos.createdAt, cutoff)))
+    .orderBy(asc(photos.createdAt))
+    .limit(batch);
   let removed = 0;
   for (const photo of stale) {
-    const [claimed] = await ctx.db.update(photos).set({ status: 'removed' })
-      .where(and(eq(photos.id, photo.id), eq(photos.status, 'pending'))).returning({ id: photos.id });
+    const [claimed] = await ctx.db
+      .update(photos)
+      .set({ status: 'removed' })
+      .where(and(eq(photos.id, photo.id), eq(photos.status, 'pending')))
+      .returning({ id: photos.id });
     if (!claimed) continue;
     // Deleting a key that was never uploaded succeeds too.
     await ctx.s3.send(new DeleteObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: photo.objectKey }));
@@ -35,12 +42,21 @@ export async function sweepUnconfirmedUploads(ctx: SweepContext, now = new Date(
 export function startUploadSweep(ctx: SweepContext) {
   const run = () => {
     sweepUnconfirmedUploads(ctx)
-      .then((removed) => { if (removed > 0) ctx.logger.info({ removed }, 'removed unconfirmed uploads'); })
-      .catch((error: unknown) => ctx.logger.warn({ err: error }, 'the clean-up of unconfirmed uploads failed; it runs again later'));
+      .then((removed) => {
+        if (removed > 0) ctx.logger.info({ removed }, 'removed unconfirmed uploads');
+      })
+      .catch((error: unknown) =>
+        ctx.logger.warn({ err: error }, 'the clean-up of unconfirmed uploads failed; it runs again later'),
+      );
   };
   const first = setTimeout(run, 60_000);
   const timer = setInterval(run, everyMs);
   first.unref();
   timer.unref();
-  return { stop: () => { clearTimeout(first); clearInterval(timer); } };
+  return {
+    stop: () => {
+      clearTimeout(first);
+      clearInterval(timer);
+    },
+  };
 }

@@ -9,7 +9,8 @@ export function lineAt(points: readonly ChartPoint[], station: number): number {
   for (let i = 1; i < points.length; i++) {
     const a = points[i - 1];
     const b = points[i];
-    if (station <= b.stationFt) return a.elevationFt + ((station - a.stationFt) / (b.stationFt - a.stationFt)) * (b.elevationFt - a.elevationFt);
+    if (station <= b.stationFt)
+      return a.elevationFt + ((station - a.stationFt) / (b.stationFt - a.stationFt)) * (b.elevationFt - a.elevationFt);
   }
   return points[points.length - 1].elevationFt;
 }
@@ -28,11 +29,14 @@ export function cutFillBands(ground: readonly ChartPoint[], design: readonly Cha
   const from = Math.max(ground[0].stationFt, design[0].stationFt);
   const to = Math.min(ground[ground.length - 1].stationFt, design[design.length - 1].stationFt);
   const diff = (s: number) => lineAt(ground, s) - lineAt(design, s);
-  const base = [...new Set([from, to, ...[...ground, ...design].map((p) => p.stationFt).filter((s) => s > from && s < to)])].sort((a, b) => a - b);
+  const base = [
+    ...new Set([from, to, ...[...ground, ...design].map((p) => p.stationFt).filter((s) => s > from && s < to)]),
+  ].sort((a, b) => a - b);
   const stations: number[] = [];
   base.forEach((s, i) => {
     const prev = base[i - 1];
-    if (prev !== undefined && diff(prev) * diff(s) < 0) stations.push(prev + (diff(prev) / (diff(prev) - diff(s))) * (s - prev));
+    if (prev !== undefined && diff(prev) * diff(s) < 0)
+      stations.push(prev + (diff(prev) / (diff(prev) - diff(s))) * (s - prev));
     stations.push(s);
   });
   type Run = { kind: Band['kind']; at: number[] };
@@ -55,7 +59,9 @@ export function cutFillBands(ground: readonly ChartPoint[], design: readonly Cha
   }
   return runs.map(({ kind, at }) => {
     const upper = at.map((s) => ({ stationFt: s, elevationFt: Math.max(lineAt(ground, s), lineAt(design, s)) }));
-    const lower = at.map((s) => ({ stationFt: s, elevationFt: Math.min(lineAt(ground, s), lineAt(design, s)) })).reverse();
+    const lower = at
+      .map((s) => ({ stationFt: s, elevationFt: Math.min(lineAt(ground, s), lineAt(design, s)) }))
+      .reverse();
     return { kind, outline: [...upper, ...lower] };
   });
 }

@@ -19,12 +19,20 @@ export interface ChartResults {
  */
 function failingStations(report: EntranceReport, profile: RuleProfile, roadEdgeFt: number): number[] {
   const landingEnd = roadEdgeFt + profile.landing.lengthFt;
-  const over = report.profile.segments.filter((s) => {
-    if (s.toStationFt <= roadEdgeFt) return false;
-    if (s.fromStationFt < landingEnd) return s.gradePercent > profile.landing.maxGradePercent + 1e-9 || s.gradePercent < profile.landing.minGradePercent - 1e-9;
-    return Math.abs(s.gradePercent) > profile.maxGradePercent + 1e-9;
-  }).map((s) => s.fromStationFt);
-  const named = report.findings.filter((f) => f.status === 'fail' && f.stationFt !== undefined).map((f) => f.stationFt as number);
+  const over = report.profile.segments
+    .filter((s) => {
+      if (s.toStationFt <= roadEdgeFt) return false;
+      if (s.fromStationFt < landingEnd)
+        return (
+          s.gradePercent > profile.landing.maxGradePercent + 1e-9 ||
+          s.gradePercent < profile.landing.minGradePercent - 1e-9
+        );
+      return Math.abs(s.gradePercent) > profile.maxGradePercent + 1e-9;
+    })
+    .map((s) => s.fromStationFt);
+  const named = report.findings
+    .filter((f) => f.status === 'fail' && f.stationFt !== undefined)
+    .map((f) => f.stationFt as number);
   return [...new Set([...named, ...over])];
 }
 
@@ -38,9 +46,15 @@ export function chartInputFor(inputs: ChartSource, results: ChartResults, profil
   const ground = applied && surveyed ? surveyed.profile.points : report.profile.points;
   const design = applied ? report.profile.points : proposal?.feasible ? proposal.profile : undefined;
   const scrape = report.scrape;
-  const scrapePoints = scrape.positionsChecked > 0 && scrape.minClearanceIn < profile.designVehicle.clearanceIn
-    ? [{ stationFt: scrape.atStationFt, label: scrape.passes ? `${scrape.minClearanceIn.toFixed(1)} in clear` : 'Scrapes' }]
-    : [];
+  const scrapePoints =
+    scrape.positionsChecked > 0 && scrape.minClearanceIn < profile.designVehicle.clearanceIn
+      ? [
+          {
+            stationFt: scrape.atStationFt,
+            label: scrape.passes ? `${scrape.minClearanceIn.toFixed(1)} in clear` : 'Scrapes',
+          },
+        ]
+      : [];
   return {
     ground,
     design,
@@ -57,7 +71,12 @@ export function chartInputFor(inputs: ChartSource, results: ChartResults, profil
  * The field sheet's chart, drawn by the same function: what the crew builds (the checked profile) over the ground
  * as surveyed. A proposal the office did not apply is not drawn, since nobody builds it.
  */
-export function buildChartInputFor(inputs: ChartSource, results: ChartResults, profile: RuleProfile, groundAsSurveyed: readonly ChartPoint[] | null): ProfileChartInput {
+export function buildChartInputFor(
+  inputs: ChartSource,
+  results: ChartResults,
+  profile: RuleProfile,
+  groundAsSurveyed: readonly ChartPoint[] | null,
+): ProfileChartInput {
   const chart = chartInputFor(inputs, results, profile);
   const built = results.report.profile.points;
   if (!groundAsSurveyed) return { ...chart, ground: built, design: undefined, checked: 'ground' };

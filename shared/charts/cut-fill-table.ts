@@ -31,12 +31,16 @@ export interface HaulEstimate extends HaulChoice {
  * The haul that goes with a proposal, for the cut/fill table beside the chart (screen and report alike). Cut and
  * fill are not netted: material from the cut is rarely fit to place as fill without sorting, so both are shown.
  */
-const loadsFor = (looseCuYd: number, truckCuYd: number) => unlessRefused(() => truckLoads({ looseCuYd, truckCuYd }).loads);
+const loadsFor = (looseCuYd: number, truckCuYd: number) =>
+  unlessRefused(() => truckLoads({ looseCuYd, truckCuYd }).loads);
 
 export function haulEstimate(proposal: ProposedProfile, choice: HaulChoice = defaultHaul): HaulEstimate {
   const factors = soilFactors[choice.soil];
   const cutLooseCuYd = proposal.cutCuYd * factors.bankToLoose;
-  const fillBank = compactedToBank({ compactedCuYd: proposal.fillCuYd, shrinkageFactor: factors.bankToCompacted }).bankCuYd;
+  const fillBank = compactedToBank({
+    compactedCuYd: proposal.fillCuYd,
+    shrinkageFactor: factors.bankToCompacted,
+  }).bankCuYd;
   const fillLooseCuYd = fillBank * factors.bankToLoose;
   return {
     ...choice,

@@ -19,9 +19,20 @@ export interface ProfileChartInput {
   fontFamily?: string;
 }
 
-export const chartColors = { ground: '#7a5c3e', design: '#1d4a38', fail: '#9c4a2f', cut: '#f2b33d', fill: '#3f7a5e', landing: '#f1f6f2', grid: '#d6d3cd', limit: '#b7791f', text: '#1c1f1d' };
+export const chartColors = {
+  ground: '#7a5c3e',
+  design: '#1d4a38',
+  fail: '#9c4a2f',
+  cut: '#f2b33d',
+  fill: '#3f7a5e',
+  landing: '#f1f6f2',
+  grid: '#d6d3cd',
+  limit: '#b7791f',
+  text: '#1c1f1d',
+};
 
-const esc = (text: string) => text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+const esc = (text: string) =>
+  text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 const n = (v: number) => (Math.round(v * 10) / 10).toString();
 
 /**
@@ -44,7 +55,8 @@ export function profileChartSvg(input: ProfileChartInput): string {
   const maxE = rawMaxE + spanE * 0.18;
   const x = (s: number) => pad.left + ((s - minS) / Math.max(maxS - minS, 1e-6)) * (width - pad.left - pad.right);
   const y = (e: number) => pad.top + ((maxE - e) / (maxE - minE)) * (height - pad.top - pad.bottom);
-  const path = (pts: readonly ChartPoint[]) => pts.map((p, i) => `${i ? 'L' : 'M'}${n(x(p.stationFt))} ${n(y(p.elevationFt))}`).join(' ');
+  const path = (pts: readonly ChartPoint[]) =>
+    pts.map((p, i) => `${i ? 'L' : 'M'}${n(x(p.stationFt))} ${n(y(p.elevationFt))}`).join(' ');
   const text = (tx: number, ty: number, body: string, extra = '', fill = chartColors.text) =>
     `<text x="${n(tx)}" y="${n(ty)}" font-family="${esc(font)}" font-size="10" fill="${fill}" ${extra}>${esc(body)}</text>`;
   const parts: string[] = [
@@ -52,17 +64,23 @@ export function profileChartSvg(input: ProfileChartInput): string {
   ];
 
   const landingEnd = input.roadEdgeStationFt + input.landing.lengthFt;
-  parts.push(`<rect x="${n(x(input.roadEdgeStationFt))}" y="${pad.top}" width="${n(Math.max(0, x(Math.min(landingEnd, maxS)) - x(input.roadEdgeStationFt)))}" height="${height - pad.top - pad.bottom}" fill="${chartColors.landing}"/>`);
+  parts.push(
+    `<rect x="${n(x(input.roadEdgeStationFt))}" y="${pad.top}" width="${n(Math.max(0, x(Math.min(landingEnd, maxS)) - x(input.roadEdgeStationFt)))}" height="${height - pad.top - pad.bottom}" fill="${chartColors.landing}"/>`,
+  );
   parts.push(text(x(input.roadEdgeStationFt) + 4, pad.top + 12, `Landing ${input.landing.lengthFt} ft`));
 
   const sStep = niceStep(maxS - minS, 8);
   for (const s of ticks(minS, maxS + 1e-9, sStep)) {
-    parts.push(`<line x1="${n(x(s))}" y1="${pad.top}" x2="${n(x(s))}" y2="${height - pad.bottom}" stroke="${chartColors.grid}" stroke-width="0.5"/>`);
+    parts.push(
+      `<line x1="${n(x(s))}" y1="${pad.top}" x2="${n(x(s))}" y2="${height - pad.bottom}" stroke="${chartColors.grid}" stroke-width="0.5"/>`,
+    );
     parts.push(text(x(s), height - pad.bottom + 14, formatStation(s), 'text-anchor="middle"'));
   }
   const eStep = niceStep(maxE - minE, 5);
   for (const e of ticks(minE, maxE, eStep)) {
-    parts.push(`<line x1="${pad.left}" y1="${n(y(e))}" x2="${width - pad.right}" y2="${n(y(e))}" stroke="${chartColors.grid}" stroke-width="0.5"/>`);
+    parts.push(
+      `<line x1="${pad.left}" y1="${n(y(e))}" x2="${width - pad.right}" y2="${n(y(e))}" stroke="${chartColors.grid}" stroke-width="0.5"/>`,
+    );
     parts.push(text(pad.left - 6, y(e) + 3, n(e), 'text-anchor="end"'));
   }
   parts.push(text(pad.left, height - 8, 'Station (ft from the road edge)'));
@@ -70,7 +88,9 @@ export function profileChartSvg(input: ProfileChartInput): string {
 
   if (input.design) {
     for (const band of cutFillBands(input.ground, input.design)) {
-      parts.push(`<path d="${path(band.outline)} Z" fill="${band.kind === 'cut' ? chartColors.cut : chartColors.fill}" fill-opacity="0.35" stroke="none"/>`);
+      parts.push(
+        `<path d="${path(band.outline)} Z" fill="${band.kind === 'cut' ? chartColors.cut : chartColors.fill}" fill-opacity="0.35" stroke="none"/>`,
+      );
     }
   }
 
@@ -81,11 +101,16 @@ export function profileChartSvg(input: ProfileChartInput): string {
     const atEnd = start.elevationFt + (g / 100) * (end - start.stationFt);
     const tail = g >= 0 ? input.maxGradePercent : -input.maxGradePercent;
     const far = atEnd + (tail / 100) * (maxS - end);
-    parts.push(`<path d="M${n(x(start.stationFt))} ${n(y(start.elevationFt))} L${n(x(end))} ${n(y(atEnd))} L${n(x(maxS))} ${n(y(far))}" fill="none" stroke="${chartColors.limit}" stroke-width="1" stroke-dasharray="2 3" clip-path="url(#plot-area)"/>`);
+    parts.push(
+      `<path d="M${n(x(start.stationFt))} ${n(y(start.elevationFt))} L${n(x(end))} ${n(y(atEnd))} L${n(x(maxS))} ${n(y(far))}" fill="none" stroke="${chartColors.limit}" stroke-width="1" stroke-dasharray="2 3" clip-path="url(#plot-area)"/>`,
+    );
   }
 
-  parts.push(`<path d="${path(input.ground)}" fill="none" stroke="${chartColors.ground}" stroke-width="1.5" ${input.design ? 'stroke-dasharray="5 3"' : ''}/>`);
-  if (input.design) parts.push(`<path d="${path(input.design)}" fill="none" stroke="${chartColors.design}" stroke-width="2"/>`);
+  parts.push(
+    `<path d="${path(input.ground)}" fill="none" stroke="${chartColors.ground}" stroke-width="1.5" ${input.design ? 'stroke-dasharray="5 3"' : ''}/>`,
+  );
+  if (input.design)
+    parts.push(`<path d="${path(input.design)}" fill="none" stroke="${chartColors.design}" stroke-width="2"/>`);
 
   const failing = new Set(input.failingStationsFt.map((s) => Math.round(s * 1000)));
   main.forEach((a, i) => {
@@ -93,18 +118,31 @@ export function profileChartSvg(input: ProfileChartInput): string {
     if (!b) return;
     const grade = ((b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt)) * 100;
     const fails = failing.has(Math.round(a.stationFt * 1000));
-    if (fails) parts.push(`<path d="${path([a, b])}" fill="none" stroke="${chartColors.fail}" stroke-width="4" data-failing="${esc(formatStation(a.stationFt))}"/>`);
+    if (fails)
+      parts.push(
+        `<path d="${path([a, b])}" fill="none" stroke="${chartColors.fail}" stroke-width="4" data-failing="${esc(formatStation(a.stationFt))}"/>`,
+      );
     if (x(b.stationFt) - x(a.stationFt) > 26) {
       const mx = (x(a.stationFt) + x(b.stationFt)) / 2;
       const my = (y(a.elevationFt) + y(b.elevationFt)) / 2 - 7;
-      parts.push(text(mx, my, `${grade.toFixed(1)}%`, `text-anchor="middle" font-weight="${fails ? 'bold' : 'normal'}"`, fails ? chartColors.fail : chartColors.text));
+      parts.push(
+        text(
+          mx,
+          my,
+          `${grade.toFixed(1)}%`,
+          `text-anchor="middle" font-weight="${fails ? 'bold' : 'normal'}"`,
+          fails ? chartColors.fail : chartColors.text,
+        ),
+      );
     }
   });
 
   for (const p of input.scrapePoints) {
     const px = x(p.stationFt);
     const py = y(lineAt(main, p.stationFt));
-    parts.push(`<path d="M${n(px)} ${n(py + 3)} L${n(px - 6)} ${n(py + 14)} L${n(px + 6)} ${n(py + 14)} Z" fill="${chartColors.fail}"/>`);
+    parts.push(
+      `<path d="M${n(px)} ${n(py + 3)} L${n(px - 6)} ${n(py + 14)} L${n(px + 6)} ${n(py + 14)} Z" fill="${chartColors.fail}"/>`,
+    );
     parts.push(text(px, py + 26, p.label, 'text-anchor="middle"'));
   }
 
@@ -116,5 +154,10 @@ function legend(x0: number, y0: number, withDesign: boolean, text: (x: number, y
   const items: [string, string][] = [[chartColors.ground, 'Ground']];
   if (withDesign) items.push([chartColors.design, 'Design'], [chartColors.cut, 'Cut'], [chartColors.fill, 'Fill']);
   items.push([chartColors.limit, 'Limits']);
-  return items.map(([color, label], i) => `<rect x="${x0 + i * 52}" y="${y0}" width="10" height="10" fill="${color}"/>${text(x0 + i * 52 + 13, y0 + 9, label)}`).join('');
+  return items
+    .map(
+      ([color, label], i) =>
+        `<rect x="${x0 + i * 52}" y="${y0}" width="10" height="10" fill="${color}"/>${text(x0 + i * 52 + 13, y0 + 9, label)}`,
+    )
+    .join('');
 }

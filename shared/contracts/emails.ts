@@ -15,7 +15,10 @@ export const listEmailsQuerySchema = z.object({
   cursor: z.string().max(200).optional(),
   limit: z.coerce.number('must be a number').int('must be a whole number').min(1).max(200).default(50),
 });
-export interface EmailLogFilter { status?: EmailStatus; search?: string }
+export interface EmailLogFilter {
+  status?: EmailStatus;
+  search?: string;
+}
 
 export interface EmailView<When extends Moment = string> {
   id: string;
@@ -34,5 +37,12 @@ export interface EmailView<When extends Moment = string> {
   nextAttemptAt: When;
 }
 
-export interface EmailDetailView<When extends Moment = string> extends EmailView<When> { textBody: string; htmlBody: string }
-export interface EmailLogPage<When extends Moment = string> { emails: EmailView<When>[]; nextCursor: string | null; totals: Record<EmailStatus, number> }
+export interface EmailDetailView<When extends Moment = string> extends EmailView<When> {
+  textBody: string;
+  htmlBody: string;
+}
+export interface EmailLogPage<When extends Moment = string> {
+  emails: EmailView<When>[];
+  nextCursor: string | null;
+  totals: Record<EmailStatus, number>;
+}

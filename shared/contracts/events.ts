@@ -14,4 +14,6 @@ export interface EventView<When extends Moment = string> {
   internal?: boolean;
 }
 
-export interface EventsAnswer<When extends Moment = string> { events: EventView<When>[] }
+export interface EventsAnswer<When extends Moment = string> {
+  events: EventView<When>[];
+}

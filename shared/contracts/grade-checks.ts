@@ -1,6 +1,11 @@
 import { z } from 'zod';
 import {
-  checkEntranceInputSchema, laserSetupInputSchema, proposeProfileInputSchema, type EntranceReport, type laserSetup, type ProposedProfile,
+  checkEntranceInputSchema,
+  laserSetupInputSchema,
+  proposeProfileInputSchema,
+  type EntranceReport,
+  type laserSetup,
+  type ProposedProfile,
 } from '../engine';
 import { defaultHaul } from '../charts/cut-fill-table';
 import type { RequestStatus } from '../workflow/statuses';
@@ -20,7 +25,9 @@ export const roadPartSchema = z.object({
  */
 export const designPartSchema = proposeProfileInputSchema.extend({
   applied: z.boolean().default(false),
-  haul: z.object({ soil: z.enum(['loam', 'clay', 'sand']), truckCuYd: z.number().positive().max(40) }).default(defaultHaul),
+  haul: z
+    .object({ soil: z.enum(['loam', 'clay', 'sand']), truckCuYd: z.number().positive().max(40) })
+    .default(defaultHaul),
 });
 
 /** Exactly what checkEntrance takes, plus the road, the laser setup input and the design part. */
@@ -42,8 +49,11 @@ function shotCount(profile: Profile): number {
 }
 
 function spanFt(profile: Profile): number {
-  if (!Array.isArray(profile) && profile.kind === 'segment-grades') return profile.segments.reduce((sum, seg) => sum + seg.lengthFt, 0);
-  const stations = (Array.isArray(profile) ? profile : profile.kind === 'elevations' ? profile.points : profile.readings).map((p) => p.stationFt);
+  if (!Array.isArray(profile) && profile.kind === 'segment-grades')
+    return profile.segments.reduce((sum, seg) => sum + seg.lengthFt, 0);
+  const stations = (
+    Array.isArray(profile) ? profile : profile.kind === 'elevations' ? profile.points : profile.readings
+  ).map((p) => p.stationFt);
   return Math.max(...stations) - Math.min(...stations);
 }
 
@@ -54,11 +64,20 @@ function spanFt(profile: Profile): number {
 export const gradeCheckInputsSchema = storedGradeCheckInputsSchema.superRefine((inputs, ctx) => {
   // The engine accepts survey-sized and far larger profiles; a saved check is run inside a web request, so it is
   // held to what a driveway survey needs and the least-earth solve stays well under a second.
-  for (const [path, profile] of [[['profile'], inputs.profile], [['design', 'existing'], inputs.design?.existing]] as const) {
-    if (profile && shotCount(profile) > MAX_SHOTS) ctx.addIssue({ code: 'custom', path: [...path], message: `a grade check takes at most ${MAX_SHOTS} shots` });
+  for (const [path, profile] of [
+    [['profile'], inputs.profile],
+    [['design', 'existing'], inputs.design?.existing],
+  ] as const) {
+    if (profile && shotCount(profile) > MAX_SHOTS)
+      ctx.addIssue({ code: 'custom', path: [...path], message: `a grade check takes at most ${MAX_SHOTS} shots` });
   }
   const steps = spanFt(inputs.profile) / inputs.scrapeStepFt;
-  if (steps > MAX_SCRAPE_STEPS) ctx.addIssue({ code: 'custom', path: ['scrapeStepFt'], message: `too fine for a profile this long: use at least ${Math.ceil((spanFt(inputs.profile) / MAX_SCRAPE_STEPS) * 100) / 100} ft` });
+  if (steps > MAX_SCRAPE_STEPS)
+    ctx.addIssue({
+      code: 'custom',
+      path: ['scrapeStepFt'],
+      message: `too fine for a profile this long: use at least ${Math.ceil((spanFt(inputs.profile) / MAX_SCRAPE_STEPS) * 100) / 100} ft`,
+    });
 });
 /** What the form builds and sends (defaults not yet filled). */
 export type GradeCheckInputsInput = z.input<typeof gradeCheckInputsSchema>;
@@ -130,6 +149,14 @@ export interface GradeCheckRequestHeader {
   application: { site?: { postedSpeedMph?: number | null } };
 }
 
-export interface GradeCheckListView { request: GradeCheckRequestHeader; checks: GradeCheckView[] }
-export interface GradeCheckSavedView { check: GradeCheckView }
-export interface GradeCheckAttachedView { check: GradeCheckView; documentId: string }
+export interface GradeCheckListView {
+  request: GradeCheckRequestHeader;
+  checks: GradeCheckView[];
+}
+export interface GradeCheckSavedView {
+  check: GradeCheckView;
+}
+export interface GradeCheckAttachedView {
+  check: GradeCheckView;
+  documentId: string;
+}

@@ -7,7 +7,11 @@ export type MessageVisibility = (typeof messageVisibilities)[number];
 
 /** POST /api/requests/:id/messages. Only the office may choose; without a choice its notes stay internal. */
 export const postMessageInputSchema = z.strictObject({
-  body: z.string({ error: 'Write a message.' }).trim().min(1, 'Write a message.').max(4000, 'Keep a message under 4,000 characters.'),
+  body: z
+    .string({ error: 'Write a message.' })
+    .trim()
+    .min(1, 'Write a message.')
+    .max(4000, 'Keep a message under 4,000 characters.'),
   visibility: z.enum(messageVisibilities, { error: 'Choose internal or shared.' }).optional(),
 });
 export type PostMessageInput = z.input<typeof postMessageInputSchema>;
@@ -24,5 +28,9 @@ export interface MessageView<When extends Moment = string> {
   internal?: boolean;
 }
 
-export interface MessagesAnswer<When extends Moment = string> { messages: MessageView<When>[] }
-export interface PostMessageAnswer<When extends Moment = string> { message: MessageView<When> }
+export interface MessagesAnswer<When extends Moment = string> {
+  messages: MessageView<When>[];
+}
+export interface PostMessageAnswer<When extends Moment = string> {
+  message: MessageView<When>;
+}

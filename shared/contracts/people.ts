@@ -10,10 +10,14 @@ export const listPeopleQuerySchema = z.object({
 export type PeopleFilter = z.input<typeof listPeopleQuerySchema>;
 
 /** PATCH /api/users/:id: a new role, or a stop (or restart) of the account. */
-export const updatePersonInputSchema = z.strictObject({
-  role: roleSchema.optional(),
-  disabled: z.boolean().optional(),
-}).refine((change) => change.role !== undefined || change.disabled !== undefined, { message: 'say what to change: role or disabled' });
+export const updatePersonInputSchema = z
+  .strictObject({
+    role: roleSchema.optional(),
+    disabled: z.boolean().optional(),
+  })
+  .refine((change) => change.role !== undefined || change.disabled !== undefined, {
+    message: 'say what to change: role or disabled',
+  });
 export type UpdatePersonInput = z.input<typeof updatePersonInputSchema>;
 
 /** POST /api/users: someone the admin lets in before their first sign-in. */

@@ -9,18 +9,35 @@ export const photosEditable = (status: RequestStatus) => photoEditableStatuses.i
 
 /** POST /api/requests/:id/photos: the file about to be uploaded. */
 export const photoUploadInputSchema = z.strictObject({
-  fileName: z.string({ error: 'This is required.' }).trim().min(1, 'The file needs a name.').max(200, 'Keep file names under 200 characters.'),
+  fileName: z
+    .string({ error: 'This is required.' })
+    .trim()
+    .min(1, 'The file needs a name.')
+    .max(200, 'Keep file names under 200 characters.'),
   contentType: z.enum(photoContentTypes, { error: 'Photos must be JPEG, PNG, WebP or HEIC images.' }),
-  sizeBytes: z.number({ error: 'Must be the file size in bytes.' }).int('Must be a whole number of bytes.')
-    .min(1, 'The file is empty.').max(maxPhotoBytes, 'Photos may be at most 15 MB each.'),
+  sizeBytes: z
+    .number({ error: 'Must be the file size in bytes.' })
+    .int('Must be a whole number of bytes.')
+    .min(1, 'The file is empty.')
+    .max(maxPhotoBytes, 'Photos may be at most 15 MB each.'),
 });
 export type PhotoUploadInput = z.input<typeof photoUploadInputSchema>;
 
 /** POST /api/requests/:id/photos/:photoId/confirm, once the bytes are in storage. */
 export const photoConfirmInputSchema = z.strictObject({
   caption: photoCaptionSchema.optional(),
-  gpsLat: z.number({ error: 'Must be a number.' }).min(-90, 'Latitude is between -90 and 90.').max(90, 'Latitude is between -90 and 90.').nullable().optional(),
-  gpsLng: z.number({ error: 'Must be a number.' }).min(-180, 'Longitude is between -180 and 180.').max(180, 'Longitude is between -180 and 180.').nullable().optional(),
+  gpsLat: z
+    .number({ error: 'Must be a number.' })
+    .min(-90, 'Latitude is between -90 and 90.')
+    .max(90, 'Latitude is between -90 and 90.')
+    .nullable()
+    .optional(),
+  gpsLng: z
+    .number({ error: 'Must be a number.' })
+    .min(-180, 'Longitude is between -180 and 180.')
+    .max(180, 'Longitude is between -180 and 180.')
+    .nullable()
+    .optional(),
 });
 export type PhotoConfirmInput = z.input<typeof photoConfirmInputSchema>;
 
@@ -43,8 +60,13 @@ export interface PhotoView<When extends Moment = string> {
   urlExpiresInSeconds?: number;
 }
 
-export interface PhotosAnswer<When extends Moment = string> { photos: (PhotoView<When> & { url: string })[] }
-export interface PhotoLinkAnswer { url: string; expiresInSeconds: number }
+export interface PhotosAnswer<When extends Moment = string> {
+  photos: (PhotoView<When> & { url: string })[];
+}
+export interface PhotoLinkAnswer {
+  url: string;
+  expiresInSeconds: number;
+}
 export interface UploadTicket<When extends Moment = string> {
   photo: PhotoView<When>;
   upload: { method: 'PUT'; url: string; headers: Record<string, string>; expiresInSeconds: number };

@@ -10,14 +10,24 @@ export const answerEditableStatuses: readonly RequestStatus[] = ['draft', 'needs
 /** PATCH /api/requests/:id/draft: one or both wizard steps, named by the version the owner last read. */
 export const saveDraftInputSchema = z.strictObject({
   expectedVersion: z.number({ error: 'Must be the version number you last read.' }).int().min(1),
-  wizardStep: z.number({ error: 'Must be a step number.' }).int().min(0, 'Steps are 0 to 3.').max(3, 'Steps are 0 to 3.').optional(),
+  wizardStep: z
+    .number({ error: 'Must be a step number.' })
+    .int()
+    .min(0, 'Steps are 0 to 3.')
+    .max(3, 'Steps are 0 to 3.')
+    .optional(),
   site: siteStepShape.partial().optional(),
   entrance: entranceStepShape.partial().optional(),
 });
 export type SaveDraftInput = z.input<typeof saveDraftInputSchema>;
 
 /** An action its reader may take now, from shared/workflow's table. */
-export interface RequestActionView { action: string; label: string; needs: readonly TransitionNeed[]; to: RequestStatus }
+export interface RequestActionView {
+  action: string;
+  label: string;
+  needs: readonly TransitionNeed[];
+  to: RequestStatus;
+}
 
 /**
  * GET /api/requests/:id as every reader gets it. Everything the applicant gave goes to everyone who may see the
@@ -57,9 +67,19 @@ export interface OfficeRequestView<When extends Moment = string> extends Request
 }
 
 /** A document on the request (grade-check reports and the like), as listed beside it. */
-export interface RequestDocumentView { id: string; kind: string; title: string; contentType: string; sizeBytes: number; createdAt: string }
+export interface RequestDocumentView {
+  id: string;
+  kind: string;
+  title: string;
+  contentType: string;
+  sizeBytes: number;
+  createdAt: string;
+}
 
-export interface RequestAnswer<View extends RequestView = RequestView> { request: View; documents: RequestDocumentView[] }
+export interface RequestAnswer<View extends RequestView = RequestView> {
+  request: View;
+  documents: RequestDocumentView[];
+}
 
 /** One row of GET /api/requests/mine. */
 export interface MyRequestRow<When extends Moment = string> {

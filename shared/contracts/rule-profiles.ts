@@ -9,7 +9,9 @@ export const createJurisdictionInputSchema = z.strictObject({ name: text(120), a
 export type CreateJurisdictionInput = z.input<typeof createJurisdictionInputSchema>;
 
 /** POST /api/jurisdictions/:id/versions: a new draft, copied from a version when one is named. */
-export const createVersionInputSchema = z.strictObject({ fromVersionId: z.uuid('must be a valid version id').optional() });
+export const createVersionInputSchema = z.strictObject({
+  fromVersionId: z.uuid('must be a valid version id').optional(),
+});
 export type CreateVersionInput = z.input<typeof createVersionInputSchema>;
 
 /** PUT /api/rule-profile-versions/:id: the draft's limits and what changed. */
@@ -28,7 +30,9 @@ export interface VersionSummary<When extends Moment = string> {
   createdAt: When;
 }
 
-export interface ProfileVersion<When extends Moment = string> extends VersionSummary<When> { profile: RuleProfile }
+export interface ProfileVersion<When extends Moment = string> extends VersionSummary<When> {
+  profile: RuleProfile;
+}
 
 export interface JurisdictionSummary<When extends Moment = string> {
   id: string;

@@ -23,18 +23,29 @@ export const scheduleJobInputSchema = z.strictObject({
 export type ScheduleJobInput = z.infer<typeof scheduleJobInputSchema>;
 
 /** One finished-grade shot: a grade from the digital level, or an elevation. Never both. */
-export const asBuiltReadingSchema = z.strictObject({
-  stationFt: finite('station in feet from the road edge').min(-100, 'must be at most 100 ft behind the road edge').max(5000, 'must be within 5000 ft'),
-  gradePercent: finite('grade in percent').min(-100, 'must be between -100 and 100').max(100, 'must be between -100 and 100').optional(),
-  elevationFt: finite('elevation in feet').min(-2000, 'must be between -2000 and 30000').max(30000, 'must be between -2000 and 30000').optional(),
-}).refine((r) => (r.gradePercent === undefined) !== (r.elevationFt === undefined), {
-  message: 'give either a grade or an elevation for this station',
-  path: ['gradePercent'],
-});
+export const asBuiltReadingSchema = z
+  .strictObject({
+    stationFt: finite('station in feet from the road edge')
+      .min(-100, 'must be at most 100 ft behind the road edge')
+      .max(5000, 'must be within 5000 ft'),
+    gradePercent: finite('grade in percent')
+      .min(-100, 'must be between -100 and 100')
+      .max(100, 'must be between -100 and 100')
+      .optional(),
+    elevationFt: finite('elevation in feet')
+      .min(-2000, 'must be between -2000 and 30000')
+      .max(30000, 'must be between -2000 and 30000')
+      .optional(),
+  })
+  .refine((r) => (r.gradePercent === undefined) !== (r.elevationFt === undefined), {
+    message: 'give either a grade or an elevation for this station',
+    path: ['gradePercent'],
+  });
 export type AsBuiltReadingInput = z.infer<typeof asBuiltReadingSchema>;
 
 export const saveAsBuiltInputSchema = z.strictObject({
-  readings: z.array(asBuiltReadingSchema, { error: 'must be a list of readings' })
+  readings: z
+    .array(asBuiltReadingSchema, { error: 'must be a list of readings' })
     .min(1, 'enter at least one reading')
     .max(500, 'at most 500 readings in one set'),
   note: z.string().trim().max(4000, 'must be at most 4000 characters').optional(),

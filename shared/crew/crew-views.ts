@@ -1,12 +1,31 @@
-import type { ApronSummary, AsBuiltReadingResult, AsBuiltStatus, CutFillAtStation, LaserWarp, PlaneSetting, ProfilePoint, RuleProfile, StakeResult } from '../engine';
+import type {
+  ApronSummary,
+  AsBuiltReadingResult,
+  AsBuiltStatus,
+  CutFillAtStation,
+  LaserWarp,
+  PlaneSetting,
+  ProfilePoint,
+  RuleProfile,
+  StakeResult,
+} from '../engine';
 import type { ProfileChartInput } from '../charts/profile-chart';
 import type { RequestStatus } from '../workflow/statuses';
 import type { AsBuiltReadingInput } from './crew-inputs';
 
 /** The yard the crews drive from, set by the owner; distances on the board are measured from it. */
-export interface Yard { label: string; lat: number; lng: number }
+export interface Yard {
+  label: string;
+  lat: number;
+  lng: number;
+}
 
-export interface PermitView { reference: string | null; conditions: string | null; decidedOn: string | null; expiresOn: string | null }
+export interface PermitView {
+  reference: string | null;
+  conditions: string | null;
+  decidedOn: string | null;
+  expiresOn: string | null;
+}
 
 export interface EarthworkEstimate {
   cutCuYd: number;
@@ -18,7 +37,11 @@ export interface EarthworkEstimate {
   basis: string;
 }
 
-export interface Wanted { timing: string; label: string; wantedBy: string | null }
+export interface Wanted {
+  timing: string;
+  label: string;
+  wantedBy: string | null;
+}
 
 export interface BoardJob {
   requestId: string;
@@ -35,7 +58,11 @@ export interface BoardJob {
   distanceMiles: number | null;
 }
 
-export interface BoardView { sort: 'date' | 'distance'; yard: Yard | null; jobs: BoardJob[] }
+export interface BoardView {
+  sort: 'date' | 'distance';
+  yard: Yard | null;
+  jobs: BoardJob[];
+}
 
 export interface MyJob {
   requestId: string;
@@ -78,17 +105,46 @@ export interface LaserSheet {
 }
 
 export interface FieldSheetView {
-  job: { requestId: string; reference: string; status: RequestStatus; version: number; siteAddress: string; roadName: string; applicantName: string; crewId: string | null; crewName: string | null; scheduledFor: string | null };
-  access: { parcelNumber: string; roadOwner: string; postedSpeedMph: number | null; whereText: string; notes: string; lat: number | null; lng: number | null };
+  job: {
+    requestId: string;
+    reference: string;
+    status: RequestStatus;
+    version: number;
+    siteAddress: string;
+    roadName: string;
+    applicantName: string;
+    crewId: string | null;
+    crewName: string | null;
+    scheduledFor: string | null;
+  };
+  access: {
+    parcelNumber: string;
+    roadOwner: string;
+    postedSpeedMph: number | null;
+    whereText: string;
+    notes: string;
+    lat: number | null;
+    lng: number | null;
+  };
   permit: PermitView & { authority: string | null; jurisdictionName: string | null };
   check: { number: number; summary: string; passed: boolean; ruleProfileLabel: string; engineVersion: string } | null;
-  rules: { landingLengthFt: number; landingMinPercent: number; landingMaxPercent: number; maxGradePercent: number } | null;
+  rules: {
+    landingLengthFt: number;
+    landingMinPercent: number;
+    landingMaxPercent: number;
+    maxGradePercent: number;
+  } | null;
   laser: LaserSheet | null;
   culvert: CulvertSheet | null;
   /** The warped apron's edges and the warp stakes; null when the check did not take the apron. */
   apron: ApronSummary | null;
   /** `chart`: what is built over the ground as surveyed, drawn by shared/charts as on the check screen and in the report. */
-  design: { points: ProfilePoint[]; existing: ProfilePoint[] | null; cutFill: CutFillAtStation[]; chart: ProfileChartInput } | null;
+  design: {
+    points: ProfilePoint[];
+    existing: ProfilePoint[] | null;
+    cutFill: CutFillAtStation[];
+    chart: ProfileChartInput;
+  } | null;
   earthwork: EarthworkEstimate | null;
   cautions: string[];
 }

@@ -58,9 +58,13 @@ const EDGE_RULES = ['landing.max-grade', 'landing.min-grade', 'grade.max', 'grad
 const SIDES = { left: 'Left edge of the entrance', right: 'Right edge of the entrance' } as const;
 
 /** The warp's length: the check's own, else the rule profile's, else the landing length. The laser setup uses it too. */
-export function apronWarpLength(warpLengthFt: number | undefined, rules: RuleProfile): Pick<ApronSummary, 'warpLengthFt' | 'warpLengthFrom'> {
+export function apronWarpLength(
+  warpLengthFt: number | undefined,
+  rules: RuleProfile,
+): Pick<ApronSummary, 'warpLengthFt' | 'warpLengthFrom'> {
   if (warpLengthFt !== undefined) return { warpLengthFt, warpLengthFrom: 'input' };
-  if (rules.geometry.warpLengthFt !== undefined) return { warpLengthFt: rules.geometry.warpLengthFt, warpLengthFrom: 'rule profile' };
+  if (rules.geometry.warpLengthFt !== undefined)
+    return { warpLengthFt: rules.geometry.warpLengthFt, warpLengthFrom: 'rule profile' };
   return { warpLengthFt: rules.landing.lengthFt, warpLengthFrom: 'landing length' };
 }
 
@@ -70,7 +74,12 @@ export function apronWarpLength(warpLengthFt: number | undefined, rules: RulePro
  * the driveway's laser setup takes over where the warp ends (see laser.ts).
  */
 function crossSlopeAt(a: Apron, warp: Warp, distanceFt: number): number {
-  const f = warp.lengthFt <= 0 ? (distanceFt > warp.startFt ? 1 : 0) : Math.min(1, Math.max(0, (distanceFt - warp.startFt) / warp.lengthFt));
+  const f =
+    warp.lengthFt <= 0
+      ? distanceFt > warp.startFt
+        ? 1
+        : 0
+      : Math.min(1, Math.max(0, (distanceFt - warp.startFt) / warp.lengthFt));
   return a.roadGradePercent + (a.drivewayCrossSlopePercent - a.roadGradePercent) * f;
 }
 
@@ -85,7 +94,10 @@ interface Warp {
  * the cross slope is linear within the warp, so edge = centre + slope x offset is linear too.
  */
 function edgeStations(ctx: Context, warp: Warp): number[] {
-  const stations = [edgePoint(ctx.points, ctx.roadEdgeFt).stationFt, ...pastEdge(ctx.points, ctx.roadEdgeFt).map((p) => p.stationFt)];
+  const stations = [
+    edgePoint(ctx.points, ctx.roadEdgeFt).stationFt,
+    ...pastEdge(ctx.points, ctx.roadEdgeFt).map((p) => p.stationFt),
+  ];
   // The warp's start and end add vertices unless a shot already stands there (or they lie past the survey).
   const last = stations[stations.length - 1];
   for (const at of [ctx.roadEdgeFt + warp.startFt, ctx.roadEdgeFt + warp.startFt + warp.lengthFt]) {
@@ -106,8 +118,13 @@ function stakeTable(ctx: Context, a: Apron, warp: Warp, halfWidthFt: number): Wa
     const centreElevationFt = elevationAt(ctx.points, stationFt);
     const rise = (crossSlopePercent / 100) * halfWidthFt;
     return {
-      stationFt, crossSlopePercent, centreElevationFt, leftOffsetFt: -halfWidthFt, rightOffsetFt: halfWidthFt,
-      leftElevationFt: centreElevationFt - rise, rightElevationFt: centreElevationFt + rise,
+      stationFt,
+      crossSlopePercent,
+      centreElevationFt,
+      leftOffsetFt: -halfWidthFt,
+      rightOffsetFt: halfWidthFt,
+      leftElevationFt: centreElevationFt - rise,
+      rightElevationFt: centreElevationFt + rise,
     };
   });
 }
@@ -116,9 +133,15 @@ function edgeFindings(side: keyof typeof SIDES, edge: ProfilePoint[], ctx: Conte
   const graded = withRoadSide(edge, ctx.roadEdgeFt, ctx.roadSide, ctx.rules.designVehicle);
   // No wheel runs along an edge, so its scrape is not reported: one step the length of the edge keeps it to one position.
   const oneStepFt = graded[graded.length - 1].stationFt - graded[0].stationFt + 1;
-  const found = checkProfileRules(graded, ctx.rules, ctx.roadEdgeFt, oneStepFt).findings.filter((f) => EDGE_RULES.includes(f.ruleId));
+  const found = checkProfileRules(graded, ctx.rules, ctx.roadEdgeFt, oneStepFt).findings.filter((f) =>
+    EDGE_RULES.includes(f.ruleId),
+  );
   if (ctx.roadSide) found.push(roadEdgeFinding(edge, ctx.roadEdgeFt, ctx.roadSide, ctx.rules));
-  return found.map((f) => ({ ...f, ruleId: `apron.${side}.${f.ruleId}`, label: `${SIDES[side]}: ${f.label[0].toLowerCase()}${f.label.slice(1)}` }));
+  return found.map((f) => ({
+    ...f,
+    ruleId: `apron.${side}.${f.ruleId}`,
+    label: `${SIDES[side]}: ${f.label[0].toLowerCase()}${f.label.slice(1)}`,
+  }));
 }
 
 /** Both edges of the entrance through the warp, checked like the centreline, and the warp stakes the crew sets. */
@@ -126,22 +149,38 @@ export function checkApron(a: Apron | undefined, ctx: Context): { findings: Find
   const base = { ruleId: 'apron.edges', label: 'Edges of the entrance through the warp', unit: '%' };
   if (!a) return { findings: [notChecked(base, 'no entrance width and cross slopes in the input')] };
   const widthFt = a.entranceWidthFt ?? ctx.geometryWidthFt;
-  if (widthFt === undefined) throw new EngineInputError('apron.entranceWidthFt', 'give the entrance width (here or under geometry) to place its edges');
+  if (widthFt === undefined)
+    throw new EngineInputError(
+      'apron.entranceWidthFt',
+      'give the entrance width (here or under geometry) to place its edges',
+    );
   const halfWidthFt = widthFt / 2;
   const length = apronWarpLength(a.warpLengthFt, ctx.rules);
   const last = ctx.points[ctx.points.length - 1].stationFt;
-  const warp: Warp = { startFt: Math.max(0, Math.min(ctx.rules.landing.lengthFt, last - ctx.roadEdgeFt)), lengthFt: length.warpLengthFt };
+  const warp: Warp = {
+    startFt: Math.max(0, Math.min(ctx.rules.landing.lengthFt, last - ctx.roadEdgeFt)),
+    lengthFt: length.warpLengthFt,
+  };
   const stations = edgeStations(ctx, warp);
   if (stations.length < 2) return { findings: [notChecked(base, 'the survey ends at the road edge')] };
-  const edgeAt = (sign: number) => stations.map((stationFt) => ({
-    stationFt, elevationFt: elevationAt(ctx.points, stationFt) + sign * (crossSlopeAt(a, warp, stationFt - ctx.roadEdgeFt) / 100) * halfWidthFt,
-  }));
+  const edgeAt = (sign: number) =>
+    stations.map((stationFt) => ({
+      stationFt,
+      elevationFt:
+        elevationAt(ctx.points, stationFt) +
+        sign * (crossSlopeAt(a, warp, stationFt - ctx.roadEdgeFt) / 100) * halfWidthFt,
+    }));
   const edges = { left: edgeAt(-1), right: edgeAt(1) };
   return {
     findings: [...edgeFindings('left', edges.left, ctx), ...edgeFindings('right', edges.right, ctx)],
     apron: {
-      halfWidthFt, ...length, warpStartStationFt: ctx.roadEdgeFt + warp.startFt, roadGradePercent: a.roadGradePercent,
-      drivewayCrossSlopePercent: a.drivewayCrossSlopePercent, edges, stakes: stakeTable(ctx, a, warp, halfWidthFt),
+      halfWidthFt,
+      ...length,
+      warpStartStationFt: ctx.roadEdgeFt + warp.startFt,
+      roadGradePercent: a.roadGradePercent,
+      drivewayCrossSlopePercent: a.drivewayCrossSlopePercent,
+      edges,
+      stakes: stakeTable(ctx, a, warp, halfWidthFt),
     },
   };
 }

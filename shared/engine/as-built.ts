@@ -21,7 +21,10 @@ export const classifyAsBuiltReadingInputSchema = z.object({
  * for the inspector to judge); beyond limit + tolerance fails. Values are snapped to 1e-9 first so that
  * floating noise never moves a reading across a boundary.
  */
-export function classifyAsBuiltReading(input: z.input<typeof classifyAsBuiltReadingInputSchema>): { status: AsBuiltStatus; margin: number } {
+export function classifyAsBuiltReading(input: z.input<typeof classifyAsBuiltReadingInputSchema>): {
+  status: AsBuiltStatus;
+  margin: number;
+} {
   const p = parseInput(classifyAsBuiltReadingInputSchema, input);
   const over = p.kind === 'max' ? snap(p.measured - p.limit) : snap(p.limit - p.measured);
   const tolerance = snap(p.tolerance);
@@ -53,7 +56,8 @@ export interface AsBuiltReadingResult {
   margin: number;
 }
 
-const worst = (a: AsBuiltStatus, b: AsBuiltStatus): AsBuiltStatus => (a === 'fail' || b === 'fail' ? 'fail' : a === 'advisory' || b === 'advisory' ? 'advisory' : 'pass');
+const worst = (a: AsBuiltStatus, b: AsBuiltStatus): AsBuiltStatus =>
+  a === 'fail' || b === 'fail' ? 'fail' : a === 'advisory' || b === 'advisory' ? 'advisory' : 'pass';
 
 interface GradeAt {
   stationFt: number;
@@ -71,7 +75,13 @@ export function checkAsBuilt(input: CheckAsBuiltInput) {
   const tol = rules.asBuilt;
   const landingEnd = p.roadEdgeStationFt + rules.landing.lengthFt;
   const results: AsBuiltReadingResult[] = [];
-  const classify = (stationFt: number, ruleId: string, limit: number, kind: 'max' | 'min', measured: number): AsBuiltReadingResult => {
+  const classify = (
+    stationFt: number,
+    ruleId: string,
+    limit: number,
+    kind: 'max' | 'min',
+    measured: number,
+  ): AsBuiltReadingResult => {
     const c = classifyAsBuiltReading({ measured, limit, tolerance: tol.gradeTolerancePercent, kind });
     return { stationFt, ruleId, measured, limit, unit: '%', ...c };
   };
@@ -97,7 +107,10 @@ export function checkAsBuilt(input: CheckAsBuiltInput) {
   for (let i = 0; i < shots.length - 1; i++) {
     const a = shots[i];
     const b = shots[i + 1];
-    grades.push({ stationFt: a.stationFt, grade: ((b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt)) * 100 });
+    grades.push({
+      stationFt: a.stationFt,
+      grade: ((b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt)) * 100,
+    });
   }
   grades.sort((a, b) => a.stationFt - b.stationFt);
   grades.forEach(gradeResult);
@@ -106,7 +119,15 @@ export function checkAsBuilt(input: CheckAsBuiltInput) {
   for (let i = 1; i < shots.length - 1; i++) {
     const before = (shots[i].elevationFt - shots[i - 1].elevationFt) / (shots[i].stationFt - shots[i - 1].stationFt);
     const after = (shots[i + 1].elevationFt - shots[i].elevationFt) / (shots[i + 1].stationFt - shots[i].stationFt);
-    results.push(classify(shots[i].stationFt, 'grade.max-change', rules.maxGradeChangePercent, 'max', Math.abs(after - before) * 100));
+    results.push(
+      classify(
+        shots[i].stationFt,
+        'grade.max-change',
+        rules.maxGradeChangePercent,
+        'max',
+        Math.abs(after - before) * 100,
+      ),
+    );
   }
   if (p.design) {
     const design = normalizeParsedProfile(p.design, 'design');
@@ -114,9 +135,23 @@ export function checkAsBuilt(input: CheckAsBuiltInput) {
       const off = Math.abs(s.elevationFt - elevationAt(design, s.stationFt));
       // The elevation tolerance is itself the limit: there is no further allowance beyond it.
       const c = classifyAsBuiltReading({ measured: off, limit: tol.elevationToleranceFt, tolerance: 0, kind: 'max' });
-      results.push({ stationFt: s.stationFt, ruleId: 'as-built.elevation', measured: off, limit: tol.elevationToleranceFt, unit: 'ft', ...c });
+      results.push({
+        stationFt: s.stationFt,
+        ruleId: 'as-built.elevation',
+        measured: off,
+        limit: tol.elevationToleranceFt,
+        unit: 'ft',
+        ...c,
+      });
     }
   }
   const overall = results.reduce<AsBuiltStatus>((acc, r) => worst(acc, r.status), 'pass');
-  return { engineVersion: ENGINE_VERSION, ruleProfileId: rules.id, ruleProfileVersion: rules.version, readings: results, status: overall, passes: overall !== 'fail' };
+  return {
+    engineVersion: ENGINE_VERSION,
+    ruleProfileId: rules.id,
+    ruleProfileVersion: rules.version,
+    readings: results,
+    status: overall,
+    passes: overall !== 'fail',
+  };
 }

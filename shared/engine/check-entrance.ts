@@ -7,7 +7,14 @@ import type { Finding } from './findings';
 import { bounded, stationFt } from './numbers';
 import { roadEdgeFinding, roadSideInputSchema, withRoadSide } from './road-edge';
 import { checkProfileRules } from './profile-checks';
-import { elevationAt, normalizeParsedProfile, profileInputSchema, segmentGrades, type ProfilePoint, type ProfileSegment } from './profile';
+import {
+  elevationAt,
+  normalizeParsedProfile,
+  profileInputSchema,
+  segmentGrades,
+  type ProfilePoint,
+  type ProfileSegment,
+} from './profile';
 import { designVehicleSchema, type RuleProfile, type RuleProfileInput, ruleProfileSchema } from './rule-profile';
 import type { ScrapeResult } from './scrape';
 import { checkGeometry, checkSight, geometryInputSchema, sightInputSchema, type SightSummary } from './site-checks';
@@ -63,22 +70,47 @@ export function checkEntrance(input: CheckEntranceInput, ruleProfile: RuleProfil
   const roadEdge = p.roadEdgeStationFt ?? points[0].stationFt;
   const lastStation = points[points.length - 1].stationFt;
   if (!stationBefore(roadEdge, lastStation)) {
-    throw new EngineInputError('roadEdgeStationFt', `the road edge (station ${formatStation(roadEdge)}) is at or past the end of the survey (station ${formatStation(lastStation)}): nothing of the entrance was surveyed`);
+    throw new EngineInputError(
+      'roadEdgeStationFt',
+      `the road edge (station ${formatStation(roadEdge)}) is at or past the end of the survey (station ${formatStation(lastStation)}): nothing of the entrance was surveyed`,
+    );
   }
 
   // Road-side segments end at the road edge, so only the scrape sees them; the landing and grade rules start at the edge.
-  const graded = checkProfileRules(withRoadSide(points, roadEdge, p.roadSide, rules.designVehicle), rules, roadEdge, p.scrapeStepFt, points);
+  const graded = checkProfileRules(
+    withRoadSide(points, roadEdge, p.roadSide, rules.designVehicle),
+    rules,
+    roadEdge,
+    p.scrapeStepFt,
+    points,
+  );
   const profile = { ...graded, segments: p.roadSide ? segmentGrades(points) : graded.segments };
   const landingEnd = Math.min(roadEdge + rules.landing.lengthFt, points[points.length - 1].stationFt);
   // A car leaving climbs toward the road when the landing falls away from it.
-  const approachPercent = landingEnd > roadEdge ? -((elevationAt(points, landingEnd) - elevationAt(points, roadEdge)) / (landingEnd - roadEdge)) * 100 : 0;
+  const approachPercent =
+    landingEnd > roadEdge
+      ? -((elevationAt(points, landingEnd) - elevationAt(points, roadEdge)) / (landingEnd - roadEdge)) * 100
+      : 0;
   const culvert = checkCulvert(p.culvert, rules);
   const sight = checkSight(p.sight, rules, approachPercent);
   const geometry = checkGeometry(p.geometry, rules);
-  const apron = checkApron(p.apron, { points, roadEdgeFt: roadEdge, rules, roadSide: p.roadSide, geometryWidthFt: p.geometry?.widthFt });
+  const apron = checkApron(p.apron, {
+    points,
+    roadEdgeFt: roadEdge,
+    rules,
+    roadSide: p.roadSide,
+    geometryWidthFt: p.geometry?.widthFt,
+  });
 
   const stamp = { ruleProfileId: rules.id, ruleProfileVersion: rules.version };
-  const findings = [...profile.findings, roadEdgeFinding(points, roadEdge, p.roadSide, rules), ...culvert.findings, ...sight.findings, ...geometry, ...apron.findings].map((f) => ({ ...f, ...stamp }));
+  const findings = [
+    ...profile.findings,
+    roadEdgeFinding(points, roadEdge, p.roadSide, rules),
+    ...culvert.findings,
+    ...sight.findings,
+    ...geometry,
+    ...apron.findings,
+  ].map((f) => ({ ...f, ...stamp }));
   const summary = summarise(findings, profileLabel(rules));
   return {
     engineVersion: ENGINE_VERSION,

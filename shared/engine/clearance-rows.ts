@@ -31,10 +31,14 @@ function at(x: readonly number[], s: number): [number, number][] | null {
     else hi = mid;
   }
   const t = Math.min(1, Math.max(0, (s - x[lo]) / (x[hi] - x[lo])));
-  return [[lo, 1 - t], [hi, t]];
+  return [
+    [lo, 1 - t],
+    [hi, t],
+  ];
 }
 
-const scaled = (terms: [number, number][] | null, k: number): [number, number][] => (terms ?? []).map(([i, w]) => [i, w * k]);
+const scaled = (terms: [number, number][] | null, k: number): [number, number][] =>
+  (terms ?? []).map(([i, w]) => [i, w * k]);
 
 /**
  * The clearance at each vertex, linear in the design elevations (small-angle geometry, horizontal distances),
@@ -61,7 +65,8 @@ export function clearanceRows(design: readonly number[], budget: ClearanceBudget
       else terms.push([i - fixed, k]);
     }
     // A row on the road side alone is nothing the design can change.
-    if (terms.length > 0) rows.push({ terms, upper: row.upper - fixedFt, vertex: Math.max(0, row.vertex - fixed), fixedFt });
+    if (terms.length > 0)
+      rows.push({ terms, upper: row.upper - fixedFt, vertex: Math.max(0, row.vertex - fixed), fixedFt });
   }
   return rows;
 }
@@ -77,7 +82,13 @@ function rowsOver(x: readonly number[], budget: ClearanceBudget, fixed: number):
     const here: [number, number][] = [[i, 1]];
     const left = at(x, x[i] - w / 2);
     const right = at(x, x[i] + w / 2);
-    if (left && right) rows.push({ terms: [...here, ...scaled(left, -0.5), ...scaled(right, -0.5)], upper: limit, vertex: i, fixedFt: 0 });
+    if (left && right)
+      rows.push({
+        terms: [...here, ...scaled(left, -0.5), ...scaled(right, -0.5)],
+        upper: limit,
+        vertex: i,
+        fixedFt: 0,
+      });
     if (overhang <= 0) continue;
     for (const side of [1, -1]) {
       // Wheel at x_i, the other wheel W behind it, the overhang's end L beyond: z(end) - z_i - (L/W)(z_i - z(other)) <= c.

@@ -38,12 +38,14 @@ function halfSection(depthFt: number, groundSlope: number, t: SectionTemplate, f
   let outerFill = 0;
   if (edgeHeight >= 0) {
     const denom = 1 - t.cutSlopeHPerV * groundSlope;
-    if (denom <= 0) throw new EngineInputError(field, 'the ground rises as steeply as the cut slope and never meets it');
+    if (denom <= 0)
+      throw new EngineInputError(field, 'the ground rises as steeply as the cut slope and never meets it');
     catchX = (t.cutSlopeHPerV * depthFt + w) / denom;
     outerCut = ((catchX - w) * edgeHeight) / 2;
   } else {
     const denom = 1 + t.fillSlopeHPerV * groundSlope;
-    if (denom <= 0) throw new EngineInputError(field, 'the ground falls as steeply as the fill slope and never meets it');
+    if (denom <= 0)
+      throw new EngineInputError(field, 'the ground falls as steeply as the fill slope and never meets it');
     catchX = (w - t.fillSlopeHPerV * depthFt) / denom;
     outerFill = ((catchX - w) * -edgeHeight) / 2;
   }
@@ -54,7 +56,12 @@ export function crossSectionAreas(depthFt: number, template: SectionTemplate, fi
   const g = template.groundCrossSlopePercent / 100;
   const right = halfSection(depthFt, g, template, field);
   const left = halfSection(depthFt, -g, template, field);
-  return { cutSqFt: right.cut + left.cut, fillSqFt: right.fill + left.fill, leftCatchFt: left.catchFt, rightCatchFt: right.catchFt };
+  return {
+    cutSqFt: right.cut + left.cut,
+    fillSqFt: right.fill + left.fill,
+    leftCatchFt: left.catchFt,
+    rightCatchFt: right.catchFt,
+  };
 }
 
 export const earthworkFromProfilesInputSchema = z.object({
@@ -110,7 +117,14 @@ export function earthworkFromProfiles(input: EarthworkFromProfilesInput): {
     const existingFt = elevationAt(existing, s);
     const designFt = elevationAt(design, s);
     const areas = crossSectionAreas(existingFt - designFt, p.template, 'template.groundCrossSlopePercent');
-    return { stationFt: s, existingFt, designFt, cutFillFt: existingFt - designFt, cutSqFt: areas.cutSqFt, fillSqFt: areas.fillSqFt };
+    return {
+      stationFt: s,
+      existingFt,
+      designFt,
+      cutFillFt: existingFt - designFt,
+      cutSqFt: areas.cutSqFt,
+      fillSqFt: areas.fillSqFt,
+    };
   };
   const sections = stations.map(sectionAt);
   const forVolume = sections.map((sec, i) => {

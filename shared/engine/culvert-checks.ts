@@ -49,7 +49,8 @@ type Culvert = z.output<typeof culvertInputSchema>;
 const MAX_SLOPE_FT_PER_FT = 0.5;
 
 function requiredLengthFt(c: Culvert, rules: RuleProfile): number | undefined {
-  if (c.topWidthFt === undefined || c.sideSlopeHPerV === undefined || c.surfaceElevationFt === undefined) return undefined;
+  if (c.topWidthFt === undefined || c.sideSlopeHPerV === undefined || c.surfaceElevationFt === undefined)
+    return undefined;
   // Each side-slope run falls from the surface to the ditch flow line at that end of the pipe.
   const fallIn = Math.max(0, c.surfaceElevationFt - c.inletInvertFt);
   const fallOut = Math.max(0, c.surfaceElevationFt - c.outletInvertFt);
@@ -69,15 +70,22 @@ const IDS = {
 function sizeFindings(c: Culvert, rules: RuleProfile, summary: CulvertSummary): Finding[] {
   const findings: Finding[] = [];
   const minDiameter = rules.culvert.minDiameterIn;
-  findings.push(minDiameter === undefined ? notChecked(IDS.diameter, 'no minimum diameter in this rule profile') : atLeast(IDS.diameter, c.diameterIn, minDiameter));
+  findings.push(
+    minDiameter === undefined
+      ? notChecked(IDS.diameter, 'no minimum diameter in this rule profile')
+      : atLeast(IDS.diameter, c.diameterIn, minDiameter),
+  );
 
   const required = requiredLengthFt(c, rules);
   summary.requiredLengthFt = required;
-  if (required === undefined) findings.push(notChecked(IDS.length, 'needs top width, side slope and surface elevation'));
-  else if (c.lengthFt === undefined) findings.push(advisory(IDS.length, null, required, `order a culvert at least ${required} ft long`));
+  if (required === undefined)
+    findings.push(notChecked(IDS.length, 'needs top width, side slope and surface elevation'));
+  else if (c.lengthFt === undefined)
+    findings.push(advisory(IDS.length, null, required, `order a culvert at least ${required} ft long`));
   else findings.push(atLeast(IDS.length, c.lengthFt, required));
 
-  if (c.surfaceElevationFt === undefined) findings.push(notChecked(IDS.cover, 'needs the surface elevation over the pipe'));
+  if (c.surfaceElevationFt === undefined)
+    findings.push(notChecked(IDS.cover, 'needs the surface elevation over the pipe'));
   else {
     // Under one surface elevation the higher end of the pipe has the least cover. The invert is the inside
     // bottom, so the top of the pipe is one inside diameter and one wall above it (the lower wall is below it).
@@ -85,7 +93,11 @@ function sizeFindings(c: Culvert, rules: RuleProfile, summary: CulvertSummary): 
     const coverIn = (c.surfaceElevationFt - crownFt) * 12;
     summary.coverIn = coverIn;
     const minCover = rules.culvert.minCoverIn;
-    findings.push(minCover === undefined ? advisory(IDS.cover, coverIn, null, 'no minimum cover in this rule profile') : atLeast(IDS.cover, coverIn, minCover));
+    findings.push(
+      minCover === undefined
+        ? advisory(IDS.cover, coverIn, null, 'no minimum cover in this rule profile')
+        : atLeast(IDS.cover, coverIn, minCover),
+    );
   }
   return findings;
 }
@@ -95,36 +107,63 @@ function slopeFinding(c: Culvert, summary: CulvertSummary): Finding {
   if (lengthFt === undefined) return notChecked(IDS.slope, 'needs the culvert length');
   const slope = (c.inletInvertFt - c.outletInvertFt) / lengthFt;
   if (slope > MAX_SLOPE_FT_PER_FT) {
-    throw new EngineInputError('culvert.outletInvertFt', `the inverts give a slope of ${slope.toFixed(3)} ft/ft, steeper than a culvert is laid`);
+    throw new EngineInputError(
+      'culvert.outletInvertFt',
+      `the inverts give a slope of ${slope.toFixed(3)} ft/ft, steeper than a culvert is laid`,
+    );
   }
   summary.slopeFtPerFt = slope;
   // A pipe that is flat or falls toward its inlet will not drain the ditch, so zero fails here too.
-  if (slope <= 0) return { ...IDS.slope, measured: slope, limit: 0, margin: slope, limitKind: 'at-least', status: 'fail', note: 'the outlet is not below the inlet' };
+  if (slope <= 0)
+    return {
+      ...IDS.slope,
+      measured: slope,
+      limit: 0,
+      margin: slope,
+      limitKind: 'at-least',
+      status: 'fail',
+      note: 'the outlet is not below the inlet',
+    };
   return atLeast(IDS.slope, slope, 0);
 }
 
 function flowFindings(c: Culvert, rules: RuleProfile, summary: CulvertSummary): Finding[] {
-  const flow = c.designFlowCfs ?? (c.drainage ? within('culvert.drainage', () => rationalFlow(c.drainage!).flowCfs) : undefined);
+  const flow =
+    c.designFlowCfs ?? (c.drainage ? within('culvert.drainage', () => rationalFlow(c.drainage!).flowCfs) : undefined);
   summary.designFlowCfs = flow;
   const slope = summary.slopeFtPerFt;
   if (flow === undefined || flow <= 0 || slope === undefined || slope <= 0) {
     const why = flow === undefined || flow <= 0 ? 'no design flow in the input' : 'needs a positive culvert slope';
     return [notChecked(IDS.capacity, why), notChecked(IDS.headwater, why)];
   }
-  const capacity = within('culvert', () => pipeFullFlow({ diameterIn: c.diameterIn, manningN: c.manningN, slopeFtPerFt: slope }).flowCfs);
+  const capacity = within(
+    'culvert',
+    () => pipeFullFlow({ diameterIn: c.diameterIn, manningN: c.manningN, slopeFtPerFt: slope }).flowCfs,
+  );
   summary.capacityCfs = capacity;
   const hw = controllingHeadwater(c, flow, slope, c.lengthFt ?? summary.requiredLengthFt);
-  Object.assign(summary, { headwaterFt: hw.headwaterFt, hwOverD: hw.hwOverD, control: hw.control, inletHeadwaterFt: hw.inletHeadwaterFt, outletHeadwaterFt: hw.outletHeadwaterFt });
+  Object.assign(summary, {
+    headwaterFt: hw.headwaterFt,
+    hwOverD: hw.hwOverD,
+    control: hw.control,
+    inletHeadwaterFt: hw.inletHeadwaterFt,
+    outletHeadwaterFt: hw.outletHeadwaterFt,
+  });
   const limit = rules.culvert.maxHeadwaterToDiameter;
   const note = hw.note;
   return [
     atLeast(IDS.capacity, capacity, flow),
-    limit === undefined ? advisory(IDS.headwater, hw.hwOverD, null, `no headwater limit in this rule profile; ${note}`) : atMost({ ...IDS.headwater, note }, hw.hwOverD, limit),
+    limit === undefined
+      ? advisory(IDS.headwater, hw.hwOverD, null, `no headwater limit in this rule profile; ${note}`)
+      : atMost({ ...IDS.headwater, note }, hw.hwOverD, limit),
   ];
 }
 
 /** Size, length, cover, slope, capacity and headwater of the entrance culvert; all not-checked without one. */
-export function checkCulvert(c: Culvert | undefined, rules: RuleProfile): { findings: Finding[]; culvert?: CulvertSummary } {
+export function checkCulvert(
+  c: Culvert | undefined,
+  rules: RuleProfile,
+): { findings: Finding[]; culvert?: CulvertSummary } {
   if (!c) return { findings: Object.values(IDS).map((b) => notChecked(b, 'no culvert in the input')) };
   const summary: CulvertSummary = {};
   const findings = [...sizeFindings(c, rules, summary), slopeFinding(c, summary), ...flowFindings(c, rules, summary)];

@@ -17,7 +17,13 @@ export function earthMoved(ground: readonly ProfilePoint[], design: readonly Pro
 }
 
 /** Lowers the clearance share of every window that could sit under the vehicle where it scraped. */
-export function tighten(share: Float64Array, vertices: readonly ProfilePoint[], stationFt: number, v: DesignVehicle, local: boolean): void {
+export function tighten(
+  share: Float64Array,
+  vertices: readonly ProfilePoint[],
+  stationFt: number,
+  v: DesignVehicle,
+  local: boolean,
+): void {
   const reach = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
   let any = false;
   for (let i = 0; i < vertices.length; i++) {

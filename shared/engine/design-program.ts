@@ -30,7 +30,17 @@ export class DesignProgram {
   constructor(highs: Highs, spec: ProgramSpec) {
     const share = new Float64Array(spec.vertices.length).fill(1);
     const budget = { vehicle: spec.rules.designVehicle, share, before: spec.before };
-    this.built = buildLeastEarthModel(spec.ground, spec.vertices, spec.ranges, spec.rules, spec.roadEdgeFt, spec.targetEndFt, budget, 'relaxed', spec.margin);
+    this.built = buildLeastEarthModel(
+      spec.ground,
+      spec.vertices,
+      spec.ranges,
+      spec.rules,
+      spec.roadEdgeFt,
+      spec.targetEndFt,
+      budget,
+      'relaxed',
+      spec.margin,
+    );
     this.open = openLinear(highs, this.built.model);
   }
 

@@ -6,14 +6,17 @@ import type { RuleProfileInput } from './rule-profile';
  * What a design worker (a server thread or a browser Web Worker) sends back. A refused input crosses the thread
  * boundary as plain data, because an error's class does not survive the copy, and becomes EngineInputError again.
  */
-export type DesignReply = { ok: ProposedProfile } | { refused: { field: string; message: string; issues: EngineIssue[] } };
+export type DesignReply =
+  { ok: ProposedProfile } | { refused: { field: string; message: string; issues: EngineIssue[] } };
 
 export async function designReply(input: ProposeProfileInput, rules: RuleProfileInput): Promise<DesignReply> {
   try {
     return { ok: await proposeProfile(input, rules) };
   } catch (error) {
     if (!(error instanceof EngineInputError)) throw error;
-    return { refused: { field: error.field, message: error.issues[0]?.message ?? error.message, issues: error.issues } };
+    return {
+      refused: { field: error.field, message: error.issues[0]?.message ?? error.message, issues: error.issues },
+    };
   }
 }
 

@@ -5,7 +5,12 @@ import { firstGradeRange, roadEdgeFinding, roadSideWords, type RoadSide, withRoa
 import type { RuleProfile } from './rule-profile';
 
 /** The profile rules as checkEntrance applies them to a design: with the road side's break and scrape when it is given. */
-export function checkDesign(design: readonly ProfilePoint[], rules: RuleProfile, road: RoadSide | undefined, stepFt: number): ProfileCheck {
+export function checkDesign(
+  design: readonly ProfilePoint[],
+  rules: RuleProfile,
+  road: RoadSide | undefined,
+  stepFt: number,
+): ProfileCheck {
   const edge = design[0].stationFt;
   const check = checkProfileRules(withRoadSide(design, edge, road, rules.designVehicle), rules, edge, stepFt, design);
   if (!road) return check;

@@ -5,7 +5,14 @@ import { solveLinear, type SolveOutcome } from './design-solver';
 import { transitionStations, withStations } from './design-stations';
 import { designVertices, type FineStretch } from './design-vertices';
 import { crestAllowed, explainInfeasible } from './infeasible-reason';
-import { buildLeastEarthModel, type DesignModel, type Directions, GRADE_MARGIN, segmentRanges, type SegmentRanges } from './least-earth-model';
+import {
+  buildLeastEarthModel,
+  type DesignModel,
+  type Directions,
+  GRADE_MARGIN,
+  segmentRanges,
+  type SegmentRanges,
+} from './least-earth-model';
 import type { Finding } from './findings';
 import type { ProfileCheck } from './profile-checks';
 import type { ProfilePoint } from './profile';
@@ -42,10 +49,14 @@ const LOCAL_ATTEMPTS = 3;
 // Transition stations may double a long survey's stations at most.
 const MAX_DESIGN_STATIONS = 4_000;
 
-const scrapeReason = (v: DesignVehicle) => `no profile keeps a ${v.name.toLowerCase()} from scraping while meeting the other limits`;
+const scrapeReason = (v: DesignVehicle) =>
+  `no profile keeps a ${v.name.toLowerCase()} from scraping while meeting the other limits`;
 
 function bendReason(rules: RuleProfile): string {
-  const drain = rules.minDrainageGradePercent === undefined ? '' : ` while keeping the ${rules.minDrainageGradePercent}% drainage grade`;
+  const drain =
+    rules.minDrainageGradePercent === undefined
+      ? ''
+      : ` while keeping the ${rules.minDrainageGradePercent}% drainage grade`;
   return `the ${rules.maxGradeChangePercent}% grade-change limit cannot bend the profile enough to reach the end elevation${drain} without a low point that holds water`;
 }
 
@@ -70,7 +81,13 @@ interface Layout {
   program?: DesignProgram;
 }
 
-function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Float64Array | undefined, directions: Directions): Attempt {
+function solveOnce(
+  job: Job,
+  layout: Layout,
+  ranges: SegmentRanges[],
+  share: Float64Array | undefined,
+  directions: Directions,
+): Attempt {
   const { ground, vertices, program } = layout;
   let built: DesignModel;
   let out: SolveOutcome;
@@ -79,7 +96,17 @@ function solveOnce(job: Job, layout: Layout, ranges: SegmentRanges[], share: Flo
     out = program.solve(share, directions);
   } else {
     const budget = share ? { vehicle: job.rules.designVehicle, share, before: job.before } : undefined;
-    built = buildLeastEarthModel(ground, vertices, ranges, job.rules, job.roadEdgeFt, job.targetEndFt, budget, directions, job.margin);
+    built = buildLeastEarthModel(
+      ground,
+      vertices,
+      ranges,
+      job.rules,
+      job.roadEdgeFt,
+      job.targetEndFt,
+      budget,
+      directions,
+      job.margin,
+    );
     out = solveLinear(job.highs, built.model);
   }
   if (out.status === 'infeasible' || out.status === 'failed') return out;
@@ -111,9 +138,15 @@ const EARTH_TOLERANCE_FT = 0.005;
  * The crest position (segments rising before it) that the design's own grades fit, nearest `near`: every
  * segment before it within its rising range and every one after within its falling range; none if no position fits.
  */
-function crestOf(design: readonly ProfilePoint[], vertices: readonly number[], ranges: readonly SegmentRanges[], near: number): number | undefined {
+function crestOf(
+  design: readonly ProfilePoint[],
+  vertices: readonly number[],
+  ranges: readonly SegmentRanges[],
+  near: number,
+): number | undefined {
   const m = ranges.length;
-  const within = (g: number, r: { lo: number; hi: number } | null) => r !== null && g >= r.lo - DIRECTION_SLACK && g <= r.hi + DIRECTION_SLACK;
+  const within = (g: number, r: { lo: number; hi: number } | null) =>
+    r !== null && g >= r.lo - DIRECTION_SLACK && g <= r.hi + DIRECTION_SLACK;
   const grade = (j: number) => {
     const [a, b] = [design[vertices[j]], design[vertices[j + 1]]];
     return (b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt);
@@ -131,7 +164,13 @@ function crestOf(design: readonly ProfilePoint[], vertices: readonly number[], r
  * programmes. Only when none of them is feasible does the mixed-integer search (bounded by a node limit) decide,
  * so "impossible" is said only when the relaxation or the full search proves it.
  */
-function chooseCrest(job: Job, layout: Layout, ranges: SegmentRanges[], share: Float64Array | undefined, allowed: (k: number) => boolean): { out: Attempt; k?: number } {
+function chooseCrest(
+  job: Job,
+  layout: Layout,
+  ranges: SegmentRanges[],
+  share: Float64Array | undefined,
+  allowed: (k: number) => boolean,
+): { out: Attempt; k?: number } {
   const { ground } = layout;
   const relaxed = solveOnce(job, layout, ranges, share, 'relaxed');
   if (relaxed.status !== 'solved') return { out: relaxed };
@@ -162,11 +201,21 @@ function designOn(job: Job, bare: Layout): DesignFound {
   const { ground } = bare;
   const corners = bare.vertices.map((i) => ground[i]);
   const ranges = withRoadEdge(segmentRanges(corners, job.rules), job.road, job.rules);
-  if (job.road && ranges.length > 0 && !ranges[0].rise && !ranges[0].fall) return { ground, reason: roadEdgeReason(job.rules, job.road) };
+  if (job.road && ranges.length > 0 && !ranges[0].rise && !ranges[0].fall)
+    return { ground, reason: roadEdgeReason(job.rules, job.road) };
   const reason = explainInfeasible(corners, ranges, job.rules, job.roadEdgeFt, job.targetEndFt);
   if (reason) return { ground, reason };
   const { rules, roadEdgeFt, targetEndFt, margin, before } = job;
-  const program = new DesignProgram(job.highs, { ground, vertices: bare.vertices, ranges, rules, roadEdgeFt, targetEndFt, margin, before });
+  const program = new DesignProgram(job.highs, {
+    ground,
+    vertices: bare.vertices,
+    ranges,
+    rules,
+    roadEdgeFt,
+    targetEndFt,
+    margin,
+    before,
+  });
   try {
     return designWith(job, { ...bare, program }, corners, ranges);
   } finally {
@@ -179,7 +228,10 @@ function designWith(job: Job, layout: Layout, corners: ProfilePoint[], ranges: S
   const allowed = crestAllowed(corners, ranges, job.roadEdgeFt, job.targetEndFt);
   const share = new Float64Array(corners.length).fill(1);
   // A known crest is tried as it is; only if it cannot be met is the relaxation solved to choose again.
-  let k = layout.crestFt === undefined ? undefined : corners.slice(1).filter((c) => c.stationFt <= layout.crestFt! + STATION_TOLERANCE_FT).length;
+  let k =
+    layout.crestFt === undefined
+      ? undefined
+      : corners.slice(1).filter((c) => c.stationFt <= layout.crestFt! + STATION_TOLERANCE_FT).length;
   for (let attempt = 0; attempt < MAX_TIGHTENING; attempt++) {
     let out = k === undefined ? undefined : solveOnce(job, layout, ranges, share, k);
     if (!out || out.status === 'infeasible') {
@@ -187,8 +239,13 @@ function designWith(job: Job, layout: Layout, corners: ProfilePoint[], ranges: S
       out = pick.out;
       k = pick.k;
     }
-    if (out.status === 'failed') return { ground, reason: `no design was found within the solver's search limit (${out.detail}); the limits may still allow one` };
-    if (job.unchecked) return out.status === 'solved' ? { ground, design: out.design } : { ground, reason: 'not solved' };
+    if (out.status === 'failed')
+      return {
+        ground,
+        reason: `no design was found within the solver's search limit (${out.detail}); the limits may still allow one`,
+      };
+    if (job.unchecked)
+      return out.status === 'solved' ? { ground, design: out.design } : { ground, reason: 'not solved' };
     if (out.status === 'infeasible') {
       // The clearance limits are linear estimates; without them the programme says whether the rest can be met.
       const free = chooseCrest(job, layout, ranges, undefined, allowed).out;
@@ -199,7 +256,10 @@ function designWith(job: Job, layout: Layout, corners: ProfilePoint[], ranges: S
     const { check, failing } = out.verdict();
     if (failing.length === 0) return { ground, design: out.design };
     if (failing.some((f) => f.ruleId !== 'scrape.clearance')) {
-      return { ground, reason: `the solver's profile still breaks ${failing.map((f) => f.label.toLowerCase()).join(', ')}` };
+      return {
+        ground,
+        reason: `the solver's profile still breaks ${failing.map((f) => f.label.toLowerCase()).join(', ')}`,
+      };
     }
     tighten(share, corners, check.scrape.atStationFt, job.rules.designVehicle, attempt < LOCAL_ATTEMPTS);
   }
@@ -212,7 +272,8 @@ const passes = (design: readonly ProfilePoint[], job: Job) =>
 /** Ground that already meets every limit from the given road edge to the given end is the least-earth design. */
 function alreadyComplies(survey: readonly ProfilePoint[], job: Job): boolean {
   const last = survey[survey.length - 1].elevationFt;
-  if (survey[0].elevationFt !== job.roadEdgeFt || (job.targetEndFt !== undefined && last !== job.targetEndFt)) return false;
+  if (survey[0].elevationFt !== job.roadEdgeFt || (job.targetEndFt !== undefined && last !== job.targetEndFt))
+    return false;
   if (!drainsEverywhere(survey)) return false;
   return passes(survey, job);
 }
@@ -226,7 +287,9 @@ export function searchDesign(
   scrapeStepFt: number,
   road?: RoadSide,
 ): DesignFound {
-  const before = road ? roadSidePoints({ stationFt: survey[0].stationFt, elevationFt: roadEdgeFt }, road, rules.designVehicle) : undefined;
+  const before = road
+    ? roadSidePoints({ stationFt: survey[0].stationFt, elevationFt: roadEdgeFt }, road, rules.designVehicle)
+    : undefined;
   const job: Job = { highs, rules, roadEdgeFt, targetEndFt, scrapeStepFt, margin: GRADE_MARGIN, road, before };
   // Checked as surveyed: a landing station added to straight ground could make a rule apply that did not before.
   if (alreadyComplies(survey, job)) return { ground: [...survey], design: survey.map((p) => ({ ...p })) };
@@ -235,7 +298,9 @@ export function searchDesign(
   const ground = withStations(survey, [landingEnd]);
   const surveyed = new Set(survey.map((p) => p.stationFt));
   // Added stations (the landing's end, a curve's) are always vertices; so is a shot within tolerance of the landing's end.
-  const keep = new Set(ground.map((p) => p.stationFt).filter((s) => !surveyed.has(s) || Math.abs(s - landingEnd) < STATION_TOLERANCE_FT));
+  const keep = new Set(
+    ground.map((p) => p.stationFt).filter((s) => !surveyed.has(s) || Math.abs(s - landingEnd) < STATION_TOLERANCE_FT),
+  );
   const coarse: Layout = { ground, vertices: designVertices(ground, keep) };
   const curves = (found: DesignFound, base: Layout) => curved(job, found, base, keep, surveyed);
   // The curves are placed from the first solution before its exact check. A curved design that moves less earth
@@ -262,20 +327,36 @@ export function searchDesign(
  * holding one sharp break to the single-break limit: the design on stations added around the breaks that use
  * more than half of what one break may take, when it moves less earth than `first`.
  */
-function curved(job: Job, first: DesignFound, base: Layout, keep: ReadonlySet<number>, surveyed: ReadonlySet<number>): DesignFound | undefined {
+function curved(
+  job: Job,
+  first: DesignFound,
+  base: Layout,
+  keep: ReadonlySet<number>,
+  surveyed: ReadonlySet<number>,
+): DesignFound | undefined {
   const v = job.rules.designVehicle;
   const { ground } = base;
   const breaks = clearanceBreaks(first.design!, v);
   if (breaks.length === 0) return undefined;
   const radius = v.wheelbaseFt + Math.max(v.frontOverhangFt, v.rearOverhangFt);
   const step = v.wheelbaseFt / 8;
-  const dense = withStations(ground, transitionStations(ground, breaks, radius, step, MAX_DESIGN_STATIONS - ground.length), step / 2);
+  const dense = withStations(
+    ground,
+    transitionStations(ground, breaks, radius, step, MAX_DESIGN_STATIONS - ground.length),
+    step / 2,
+  );
   const fine: FineStretch[] = breaks.map((b) => ({ fromFt: b - radius, toFt: b + radius, stepFt: step }));
   const denseKeep = new Set([...keep, ...dense.map((p) => p.stationFt).filter((s) => !surveyed.has(s))]);
-  const layout: Layout = { ground: dense, vertices: designVertices(dense, denseKeep, fine), crestFt: crestStation(first.design!) };
+  const layout: Layout = {
+    ground: dense,
+    vertices: designVertices(dense, denseKeep, fine),
+    crestFt: crestStation(first.design!),
+  };
   if (dense.length === ground.length && layout.vertices.length === base.vertices.length) return undefined;
   const second = designOn(job, layout);
-  return second.design && earthMoved(dense, second.design) < earthMoved(first.ground, first.design!) - 1e-9 ? second : undefined;
+  return second.design && earthMoved(dense, second.design) < earthMoved(first.ground, first.design!) - 1e-9
+    ? second
+    : undefined;
 }
 
 /** Only a design sitting exactly on a limit needs the margin gone; the exact check still has the last word. */

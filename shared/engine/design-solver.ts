@@ -84,7 +84,15 @@ export function openLinear(highs: Highs, m: LinearModel): OpenLinear {
   model.options.set(
     hasBinary
       ? { output_flag: false, mip_rel_gap: MIP_GAP, mip_max_nodes: MIP_NODE_LIMIT }
-      : { output_flag: false, simplex_scale_strategy: 0, presolve: 'off', solver: 'simplex', simplex_strategy: 1, simplex_dual_edge_weight_strategy: 1, primal_feasibility_tolerance: 1e-9 },
+      : {
+          output_flag: false,
+          simplex_scale_strategy: 0,
+          presolve: 'off',
+          solver: 'simplex',
+          simplex_strategy: 1,
+          simplex_dual_edge_weight_strategy: 1,
+          primal_feasibility_tolerance: 1e-9,
+        },
   );
   const range = (from: number, count: number) => ({ kind: 'range' as const, from, to: from + count - 1 });
   return {

@@ -11,12 +11,22 @@ function near(points: readonly ProfilePoint[], s: number, gap: number): boolean 
  * Adds ground points at the given stations, ground read on the straight lines between shots, skipping any
  * within `gap` of a station already there (a surveyed shot is never replaced).
  */
-export function withStations(ground: readonly ProfilePoint[], stations: readonly number[], gap = STATION_TOLERANCE_FT): ProfilePoint[] {
+export function withStations(
+  ground: readonly ProfilePoint[],
+  stations: readonly number[],
+  gap = STATION_TOLERANCE_FT,
+): ProfilePoint[] {
   const first = ground[0].stationFt;
   const last = ground[ground.length - 1].stationFt;
   const added: ProfilePoint[] = [];
   for (const s of [...stations].sort((a, b) => a - b)) {
-    if (s <= first || s >= last || near(ground, s, gap) || (added.length > 0 && s - added[added.length - 1].stationFt < gap)) continue;
+    if (
+      s <= first ||
+      s >= last ||
+      near(ground, s, gap) ||
+      (added.length > 0 && s - added[added.length - 1].stationFt < gap)
+    )
+      continue;
     added.push({ stationFt: s, elevationFt: elevationAt(ground, s) });
   }
   if (added.length === 0) return [...ground];
@@ -27,7 +37,13 @@ export function withStations(ground: readonly ProfilePoint[], stations: readonly
  * Stations every `stepFt` for `radiusFt` either side of each break, so the design can bend there through a
  * short vertical curve instead of one sharp break. Never more than `room` new stations.
  */
-export function transitionStations(points: readonly ProfilePoint[], breaks: readonly number[], radiusFt: number, stepFt: number, room: number): number[] {
+export function transitionStations(
+  points: readonly ProfilePoint[],
+  breaks: readonly number[],
+  radiusFt: number,
+  stepFt: number,
+  room: number,
+): number[] {
   const out: number[] = [];
   for (const b of breaks) {
     const from = b - radiusFt;

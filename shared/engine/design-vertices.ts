@@ -22,10 +22,15 @@ export interface FineStretch {
  * landing's end, added transition stations) and, between them, the next station at least the allowed spacing
  * past the last vertex.
  */
-export function designVertices(points: readonly ProfilePoint[], keep: ReadonlySet<number>, fine: readonly FineStretch[] = []): number[] {
+export function designVertices(
+  points: readonly ProfilePoint[],
+  keep: ReadonlySet<number>,
+  fine: readonly FineStretch[] = [],
+): number[] {
   const spacingAt = (s: number) => {
     let step = MIN_VERTEX_SPACING_FT;
-    for (const f of fine) if (s >= f.fromFt - STATION_TOLERANCE_FT && s <= f.toFt + STATION_TOLERANCE_FT) step = Math.min(step, f.stepFt);
+    for (const f of fine)
+      if (s >= f.fromFt - STATION_TOLERANCE_FT && s <= f.toFt + STATION_TOLERANCE_FT) step = Math.min(step, f.stepFt);
     return step;
   };
   const out = [0];

@@ -65,7 +65,8 @@ export function earthworkVolume(input: EarthworkVolumeInput): {
       throw new EngineInputError(`sections.${i + 1}.stationFt`, 'sections must be in increasing station order');
     }
     const field = `sections.${i}`;
-    const cutCuYd = segmentVolumeCuFt(lengthFt, a.cutSqFt, b.cutSqFt, a.midCutSqFt, p, `${field}.midCutSqFt`) / CU_FT_PER_CU_YD;
+    const cutCuYd =
+      segmentVolumeCuFt(lengthFt, a.cutSqFt, b.cutSqFt, a.midCutSqFt, p, `${field}.midCutSqFt`) / CU_FT_PER_CU_YD;
     const fillCuYd =
       segmentVolumeCuFt(lengthFt, a.fillSqFt, b.fillSqFt, a.midFillSqFt, p, `${field}.midFillSqFt`) / CU_FT_PER_CU_YD;
     cut += cutCuYd;

@@ -91,11 +91,22 @@ export {
 } from './scrape';
 export { type Finding, type FindingStatus } from './findings';
 export { culvertInputSchema, type CulvertInput, type CulvertSummary } from './culvert-checks';
-export { sightInputSchema, geometryInputSchema, type SightInput, type GeometryInput, type SightSummary } from './site-checks';
+export {
+  sightInputSchema,
+  geometryInputSchema,
+  type SightInput,
+  type GeometryInput,
+  type SightSummary,
+} from './site-checks';
 export { type CheckSummary } from './summary';
 export { roadSideInputSchema, type RoadSideInput } from './road-edge';
 export { apronInputSchema, apronWarpLength, type ApronInput, type ApronSummary, type WarpStake } from './apron-edges';
-export { checkEntrance, checkEntranceInputSchema, type CheckEntranceInput, type EntranceReport } from './check-entrance';
+export {
+  checkEntrance,
+  checkEntranceInputSchema,
+  type CheckEntranceInput,
+  type EntranceReport,
+} from './check-entrance';
 export {
   proposeProfile,
   proposeProfileInputSchema,
@@ -103,7 +114,15 @@ export {
   type ProposedProfile,
   type CutFillAtStation,
 } from './propose-profile';
-export { laserSetup, laserSetupInputSchema, laserStepAtChangeFt, type LaserSetupInput, type LaserWarp, type PlaneSetting, type StakeResult } from './laser';
+export {
+  laserSetup,
+  laserSetupInputSchema,
+  laserStepAtChangeFt,
+  type LaserSetupInput,
+  type LaserWarp,
+  type PlaneSetting,
+  type StakeResult,
+} from './laser';
 export {
   classifyAsBuiltReading,
   classifyAsBuiltReadingInputSchema,
@@ -115,4 +134,12 @@ export {
 } from './as-built';
 export { gradePercentToDegrees, breakOverAngleDeg, breakOverAngleInputSchema } from './angles';
 export { SAFETY_CAUTIONS } from './cautions';
-export { STATION_TOLERANCE_FT, SURVEY_ELEVATION_PRECISION_FT, sameStation, stationBefore, stationAtOrAfter, stationAfter, tooCloseToSurvey } from './station-tolerance';
+export {
+  STATION_TOLERANCE_FT,
+  SURVEY_ELEVATION_PRECISION_FT,
+  sameStation,
+  stationBefore,
+  stationAtOrAfter,
+  stationAfter,
+  tooCloseToSurvey,
+} from './station-tolerance';

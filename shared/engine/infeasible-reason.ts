@@ -51,7 +51,11 @@ export function crestAllowed(
   targetEndFt: number | undefined,
 ): (k: number) => boolean {
   const need = targetEndFt === undefined ? undefined : targetEndFt - roadEdgeFt;
-  const ok = new Set(reachByCrest(points, ranges).filter((r) => need === undefined || (need >= r.lo - TOL && need <= r.hi + TOL)).map((r) => r.k));
+  const ok = new Set(
+    reachByCrest(points, ranges)
+      .filter((r) => need === undefined || (need >= r.lo - TOL && need <= r.hi + TOL))
+      .map((r) => r.k),
+  );
   return (k) => ok.has(k);
 }
 
@@ -82,8 +86,10 @@ export function explainInfeasible(
     rules.landing.lengthFt > 0
       ? `with the landing held to ${rules.landing.minGradePercent}% to ${rules.landing.maxGradePercent}% for ${rules.landing.lengthFt} ft, `
       : '';
-  if (need > most) return `the ${rules.maxGradePercent}% limit cannot climb ${ft(need)} in ${ft(length)} (${landing}it climbs at most ${ft(most)})`;
-  if (need < least) return `the ${rules.maxGradePercent}% limit cannot drop ${ft(-need)} in ${ft(length)} (${landing}it drops at most ${ft(-least)})`;
+  if (need > most)
+    return `the ${rules.maxGradePercent}% limit cannot climb ${ft(need)} in ${ft(length)} (${landing}it climbs at most ${ft(most)})`;
+  if (need < least)
+    return `the ${rules.maxGradePercent}% limit cannot drop ${ft(-need)} in ${ft(length)} (${landing}it drops at most ${ft(-least)})`;
   // Between the extremes but in a gap: the drainage minimum forbids the nearly level runs that would end there.
   const below = Math.max(...reach.filter((r) => r.hi < need).map((r) => r.hi));
   const above = Math.min(...reach.filter((r) => r.lo > need).map((r) => r.lo));

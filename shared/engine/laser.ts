@@ -24,7 +24,14 @@ export const laserSetupInputSchema = z.object({
   // Rod reading at which the receiver shows on-grade: the beam's height above design grade.
   receiverOffsetFt: bounded(0, 50),
   stakes: z
-    .array(z.object({ label: z.string().max(40), offsetFt: offsetFt(), distanceFt: bounded(-100, 5_000), rodReadingFt: bounded(-50, 100) }))
+    .array(
+      z.object({
+        label: z.string().max(40),
+        offsetFt: offsetFt(),
+        distanceFt: bounded(-100, 5_000),
+        rodReadingFt: bounded(-50, 100),
+      }),
+    )
     .max(500)
     .default([]),
 });
@@ -53,7 +60,13 @@ export interface StakeResult {
 const words = (percent: number, rising: string, falling: string) =>
   percent === 0 ? 'level' : `${Math.abs(percent)}% ${percent > 0 ? rising : falling}`;
 
-function plane(gx: number, gy: number, bearing: number, originDistanceFt: number, originElevationFt: number): PlaneSetting {
+function plane(
+  gx: number,
+  gy: number,
+  bearing: number,
+  originDistanceFt: number,
+  originElevationFt: number,
+): PlaneSetting {
   const steepestPercent = Math.hypot(gx, gy);
   // Steepest rise, clockwise from the heading into the property (right of it is clockwise seen from above).
   const relative = steepestPercent === 0 ? 0 : (Math.atan2(gx, gy) * 180) / Math.PI;
@@ -61,7 +74,15 @@ function plane(gx: number, gy: number, bearing: number, originDistanceFt: number
   const description =
     `Along the road: ${words(gx, 'rising to the right', 'falling to the right')} (facing into the property). ` +
     `Along the driveway: ${words(gy, 'rising away from the road', 'falling away from the road')}.`;
-  return { alongRoadPercent: gx, alongDrivewayPercent: gy, steepestPercent, steepestBearingDeg, description, originDistanceFt, originElevationFt };
+  return {
+    alongRoadPercent: gx,
+    alongDrivewayPercent: gy,
+    steepestPercent,
+    steepestBearingDeg,
+    description,
+    originDistanceFt,
+    originElevationFt,
+  };
 }
 
 /** Between the setups: the cross slope turns linearly from the first plane's to the second's, so it meets both. */
@@ -77,7 +98,9 @@ export interface LaserWarp {
 }
 
 const elevationOn = (s: PlaneSetting, offset: number, distance: number) =>
-  s.originElevationFt + (s.alongRoadPercent / 100) * offset + (s.alongDrivewayPercent / 100) * (distance - s.originDistanceFt);
+  s.originElevationFt +
+  (s.alongRoadPercent / 100) * offset +
+  (s.alongDrivewayPercent / 100) * (distance - s.originDistanceFt);
 
 function elevationOnWarp(w: LaserWarp, offset: number, distance: number): number {
   const f = (distance - w.fromDistanceFt) / (w.toDistanceFt - w.fromDistanceFt);
@@ -91,12 +114,19 @@ function warpOf(p: z.output<typeof laserSetupInputSchema>, landingEndElevation: 
   const cross = p.drivewayCrossSlopePercent;
   if (cross === undefined || Math.abs(cross - p.roadGradePercent) < 1e-9) return null;
   if (p.warpLengthFt === undefined) {
-    throw new EngineInputError('warpLengthFt', `the driveway cross slope (${cross}%) differs from the road grade (${p.roadGradePercent}%), so the two setups meet only through a warp: give its length`);
+    throw new EngineInputError(
+      'warpLengthFt',
+      `the driveway cross slope (${cross}%) differs from the road grade (${p.roadGradePercent}%), so the two setups meet only through a warp: give its length`,
+    );
   }
   const to = p.landingLengthFt + p.warpLengthFt;
   return {
-    fromDistanceFt: p.landingLengthFt, toDistanceFt: to, fromCrossSlopePercent: p.roadGradePercent, toCrossSlopePercent: cross,
-    startElevationFt: landingEndElevation, alongDrivewayPercent: p.drivewayGradePercent,
+    fromDistanceFt: p.landingLengthFt,
+    toDistanceFt: to,
+    fromCrossSlopePercent: p.roadGradePercent,
+    toCrossSlopePercent: cross,
+    startElevationFt: landingEndElevation,
+    alongDrivewayPercent: p.drivewayGradePercent,
     description: `Warp from ${formatStation(p.landingLengthFt)} to ${formatStation(to)}, set from stakes: the cross slope turns from ${slopeWords(p.roadGradePercent)} to ${slopeWords(cross)}.`,
   };
 }
@@ -112,12 +142,23 @@ export function laserSetup(input: LaserSetupInput) {
   const landingEndElevation = p.originElevationFt + (p.landingGradePercent / 100) * p.landingLengthFt;
   const warp = warpOf(p, landingEndElevation);
   const secondSetup = warp
-    ? plane(warp.toCrossSlopePercent, p.drivewayGradePercent, p.drivewayBearingDeg, warp.toDistanceFt, elevationOnWarp(warp, 0, warp.toDistanceFt))
+    ? plane(
+        warp.toCrossSlopePercent,
+        p.drivewayGradePercent,
+        p.drivewayBearingDeg,
+        warp.toDistanceFt,
+        elevationOnWarp(warp, 0, warp.toDistanceFt),
+      )
     : plane(p.roadGradePercent, p.drivewayGradePercent, p.drivewayBearingDeg, p.landingLengthFt, landingEndElevation);
   const stakes: StakeResult[] = p.stakes.map((s) => {
-    const setup = s.distanceFt <= p.landingLengthFt ? 'first' : warp && s.distanceFt < warp.toDistanceFt ? 'warp' : 'second';
-    const designElevationFt = setup === 'first' ? elevationOn(first, s.offsetFt, s.distanceFt)
-      : setup === 'warp' ? elevationOnWarp(warp!, s.offsetFt, s.distanceFt) : elevationOn(secondSetup, s.offsetFt, s.distanceFt);
+    const setup =
+      s.distanceFt <= p.landingLengthFt ? 'first' : warp && s.distanceFt < warp.toDistanceFt ? 'warp' : 'second';
+    const designElevationFt =
+      setup === 'first'
+        ? elevationOn(first, s.offsetFt, s.distanceFt)
+        : setup === 'warp'
+          ? elevationOnWarp(warp!, s.offsetFt, s.distanceFt)
+          : elevationOn(secondSetup, s.offsetFt, s.distanceFt);
     // The beam rides receiverOffset above grade, so a shorter reading means the ground stands above grade.
     const cutFillFt = Math.round((p.receiverOffsetFt - s.rodReadingFt) * 1e9) / 1e9;
     const amount = Math.abs(cutFillFt).toFixed(2);
@@ -132,14 +173,23 @@ export function laserSetup(input: LaserSetupInput) {
  * `halfWidthFt` either side: zero when they meet. A result saved before the setups were made to meet can carry a
  * step, and a reader uses this to tell.
  */
-export function laserStepAtChangeFt(r: PlaneSetting & { secondSetup: PlaneSetting; warp?: LaserWarp | null }, halfWidthFt: number): number {
+export function laserStepAtChangeFt(
+  r: PlaneSetting & { secondSetup: PlaneSetting; warp?: LaserWarp | null },
+  halfWidthFt: number,
+): number {
   const second = r.secondSetup;
   const handOver = r.warp ? r.warp.fromDistanceFt : second.originDistanceFt;
   let step = 0;
   for (const offset of [-halfWidthFt, 0, halfWidthFt]) {
     const next = r.warp ? elevationOnWarp(r.warp, offset, handOver) : elevationOn(second, offset, handOver);
     step = Math.max(step, Math.abs(next - elevationOn(r, offset, handOver)));
-    if (r.warp) step = Math.max(step, Math.abs(elevationOn(second, offset, r.warp.toDistanceFt) - elevationOnWarp(r.warp, offset, r.warp.toDistanceFt)));
+    if (r.warp)
+      step = Math.max(
+        step,
+        Math.abs(
+          elevationOn(second, offset, r.warp.toDistanceFt) - elevationOnWarp(r.warp, offset, r.warp.toDistanceFt),
+        ),
+      );
   }
   return step;
 }

@@ -104,10 +104,20 @@ export function buildLeastEarthModel(
   }
   for (let i = 0; i < n; i++) {
     const e = points[i].elevationFt;
-    cost[U(i)] = cost[Q(i)] = (i > 0 ? points[i].stationFt - points[i - 1].stationFt : 0) / 2 + (i < n - 1 ? points[i + 1].stationFt - points[i].stationFt : 0) / 2;
+    cost[U(i)] = cost[Q(i)] =
+      (i > 0 ? points[i].stationFt - points[i - 1].stationFt : 0) / 2 +
+      (i < n - 1 ? points[i + 1].stationFt - points[i].stationFt : 0) / 2;
     colLower[U(i)] = colLower[Q(i)] = 0;
     const j = seg[i];
-    const at: [number, number][] = t[i] === 0 ? [[Z(j), 1]] : t[i] === 1 ? [[Z(j + 1), 1]] : [[Z(j), 1 - t[i]], [Z(j + 1), t[i]]];
+    const at: [number, number][] =
+      t[i] === 0
+        ? [[Z(j), 1]]
+        : t[i] === 1
+          ? [[Z(j + 1), 1]]
+          : [
+              [Z(j), 1 - t[i]],
+              [Z(j + 1), t[i]],
+            ];
     rows.add([...at, [U(i), -1], [Q(i), 1]], e, e);
   }
   colLower[Z(0)] = colUpper[Z(0)] = roadEdgeFt;
@@ -123,30 +133,77 @@ export function buildLeastEarthModel(
     if (typeof directions === 'number') colLower[R(j)] = colUpper[R(j)] = j < directions ? 1 : 0;
     const L = len[j];
     // z_{j+1} - z_j between L*fall and L*rise as r_j goes 0 -> 1.
-    rows.add([[Z(j + 1), 1], [Z(j), -1], [R(j), -L * (up.lo - down.lo)]], L * (down.lo + SHRINK), Infinity);
-    rows.add([[Z(j + 1), 1], [Z(j), -1], [R(j), -L * (up.hi - down.hi)]], -Infinity, L * (down.hi - SHRINK));
-    if (j > 0) rows.add([[R(j), 1], [R(j - 1), -1]], -Infinity, 0);
+    rows.add(
+      [
+        [Z(j + 1), 1],
+        [Z(j), -1],
+        [R(j), -L * (up.lo - down.lo)],
+      ],
+      L * (down.lo + SHRINK),
+      Infinity,
+    );
+    rows.add(
+      [
+        [Z(j + 1), 1],
+        [Z(j), -1],
+        [R(j), -L * (up.hi - down.hi)],
+      ],
+      -Infinity,
+      L * (down.hi - SHRINK),
+    );
+    if (j > 0)
+      rows.add(
+        [
+          [R(j), 1],
+          [R(j - 1), -1],
+        ],
+        -Infinity,
+        0,
+      );
   }
 
-  const grade = (j: number): [number, number][] => [[Z(j + 1), 1 / len[j]], [Z(j), -1 / len[j]]];
+  const grade = (j: number): [number, number][] => [
+    [Z(j + 1), 1 / len[j]],
+    [Z(j), -1 / len[j]],
+  ];
   const maxChange = rules.maxGradeChangePercent / 100 - SHRINK;
-  for (let v = 1; v < m - 1; v++) rows.add([...grade(v), ...grade(v - 1).map(([c, k]): [number, number] => [c, -k])], -maxChange, maxChange);
+  for (let v = 1; v < m - 1; v++)
+    rows.add([...grade(v), ...grade(v - 1).map(([c, k]): [number, number] => [c, -k])], -maxChange, maxChange);
 
   const firstClearance = rows.count;
   const clearance = budget ? clearanceRows(x, budget) : [];
-  for (const row of clearance) rows.add(row.terms.map(([j, k]): [number, number] => [Z(j), k]), -Infinity, row.upper);
+  for (const row of clearance)
+    rows.add(
+      row.terms.map(([j, k]): [number, number] => [Z(j), k]),
+      -Infinity,
+      row.upper,
+    );
 
   const read = (solution: Float64Array): ProfilePoint[] =>
     points.map((p, i) => {
       const j = seg[i];
-      const z = t[i] === 0 ? solution[Z(j)] : t[i] === 1 ? solution[Z(j + 1)] : (1 - t[i]) * solution[Z(j)] + t[i] * solution[Z(j + 1)];
+      const z =
+        t[i] === 0
+          ? solution[Z(j)]
+          : t[i] === 1
+            ? solution[Z(j + 1)]
+            : (1 - t[i]) * solution[Z(j)] + t[i] * solution[Z(j + 1)];
       return { stationFt: p.stationFt, elevationFt: z };
     });
   return {
     model: { cost, colLower, colUpper, binary, rows },
     read,
     rising: (solution) => solution.slice(R(0), R(0) + m - 1),
-    directionCols: { first: R(0), lower: colLower.slice(R(0), R(0) + m - 1), upper: colUpper.slice(R(0), R(0) + m - 1) },
-    clearance: { first: firstClearance, vertex: Int32Array.from(clearance, (r) => r.vertex), clearanceFt: rules.designVehicle.clearanceIn / 12, fixedFt: Float64Array.from(clearance, (r) => r.fixedFt) },
+    directionCols: {
+      first: R(0),
+      lower: colLower.slice(R(0), R(0) + m - 1),
+      upper: colUpper.slice(R(0), R(0) + m - 1),
+    },
+    clearance: {
+      first: firstClearance,
+      vertex: Int32Array.from(clearance, (r) => r.vertex),
+      clearanceFt: rules.designVehicle.clearanceIn / 12,
+      fixedFt: Float64Array.from(clearance, (r) => r.fixedFt),
+    },
   };
 }

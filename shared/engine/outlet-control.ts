@@ -60,9 +60,16 @@ export function outletControlHeadwater(input: OutletControlHeadwaterInput): Outl
   const freeOutlet = (dc + d) / 2;
   const outletControlDepthFt = Math.max(p.tailwaterDepthFt, freeOutlet);
   const headwaterFt = outletControlDepthFt + headLossFt - p.slopeFtPerFt * p.lengthFt;
-  if (!Number.isFinite(headwaterFt)) throw new EngineInputError('flowCfs', 'outlet-control headwater cannot be computed for this flow and pipe');
+  if (!Number.isFinite(headwaterFt))
+    throw new EngineInputError('flowCfs', 'outlet-control headwater cannot be computed for this flow and pipe');
   return {
-    headwaterFt, hwOverD: headwaterFt / d, headLossFt, velocityFtPerS, entranceLossCoefficient: ke, criticalDepthFt: dc,
-    outletControlDepthFt, tailwaterGoverns: p.tailwaterDepthFt > freeOutlet,
+    headwaterFt,
+    hwOverD: headwaterFt / d,
+    headLossFt,
+    velocityFtPerS,
+    entranceLossCoefficient: ke,
+    criticalDepthFt: dc,
+    outletControlDepthFt,
+    tailwaterGoverns: p.tailwaterDepthFt > freeOutlet,
   };
 }

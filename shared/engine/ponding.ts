@@ -36,14 +36,19 @@ export function lowPoints(points: readonly ProfilePoint[], roadEdgeStationFt: nu
 const RULE = { ruleId: 'drainage.low-point', label: 'Low point that holds water', unit: 'in' };
 
 /** A fail where the rule profile sets a drainage minimum; said as an item to look at where it sets none. */
-export function pondingFinding(points: readonly ProfilePoint[], roadEdgeStationFt: number, minDrainageGradePercent: number | undefined): Finding {
+export function pondingFinding(
+  points: readonly ProfilePoint[],
+  roadEdgeStationFt: number,
+  minDrainageGradePercent: number | undefined,
+): Finding {
   const lows = lowPoints(points, roadEdgeStationFt);
   if (lows.length === 0) return atMost(RULE, 0, 0);
   const deepest = lows.reduce((a, b) => (b.depthFt > a.depthFt ? b : a));
   const depthIn = deepest.depthFt * 12;
   const where = deepest.stationFt <= roadEdgeStationFt ? 'against the road edge' : 'on the driveway';
   const others = lows.length > 1 ? ` (${lows.length} low points in all; this is the deepest)` : '';
-  const note = `the profile falls to station ${formatStation(deepest.stationFt)} and rises again: it holds water ${where}, ` +
+  const note =
+    `the profile falls to station ${formatStation(deepest.stationFt)} and rises again: it holds water ${where}, ` +
     `up to ${depthIn.toFixed(1)} in deep${others}`;
   const base = { ...RULE, stationFt: deepest.stationFt, note };
   return minDrainageGradePercent === undefined ? advisory(base, depthIn, null, note) : atMost(base, depthIn, 0);

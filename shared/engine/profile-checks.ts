@@ -18,7 +18,12 @@ interface Extreme {
   stationFt: number;
 }
 
-function extreme<T>(items: readonly T[], value: (t: T) => number, station: (t: T) => number, larger: boolean): Extreme | null {
+function extreme<T>(
+  items: readonly T[],
+  value: (t: T) => number,
+  station: (t: T) => number,
+  larger: boolean,
+): Extreme | null {
   let best: Extreme | null = null;
   for (const item of items) {
     const v = value(item);
@@ -42,7 +47,10 @@ const RULE = {
 
 function landingFindings(landing: ProfileSegment[], rules: RuleProfile, surveyedFt: number): Finding[] {
   if (landing.length === 0 || rules.landing.lengthFt === 0) {
-    return [notChecked(RULE.landingMax, 'no landing in this profile'), notChecked(RULE.landingMin, 'no landing in this profile')];
+    return [
+      notChecked(RULE.landingMax, 'no landing in this profile'),
+      notChecked(RULE.landingMin, 'no landing in this profile'),
+    ];
   }
   const hi = extreme(landing, grade, fromStation, true)!;
   const lo = extreme(landing, grade, fromStation, false)!;
@@ -66,11 +74,20 @@ function gradeFindings(entrance: ProfileSegment[], beyond: ProfileSegment[], rul
       : notChecked(RULE.max, 'the profile ends within the landing'),
   );
   const flattest = extreme(beyond, steepness, fromStation, false);
-  if (rules.minDrainageGradePercent === undefined) findings.push(notChecked(RULE.drainage, 'this rule profile sets no minimum grade'));
+  if (rules.minDrainageGradePercent === undefined)
+    findings.push(notChecked(RULE.drainage, 'this rule profile sets no minimum grade'));
   else if (!flattest) findings.push(notChecked(RULE.drainage, 'the profile ends within the landing'));
-  else findings.push(atLeast({ ...RULE.drainage, stationFt: flattest.stationFt }, flattest.value, rules.minDrainageGradePercent));
+  else
+    findings.push(
+      atLeast({ ...RULE.drainage, stationFt: flattest.stationFt }, flattest.value, rules.minDrainageGradePercent),
+    );
 
-  const sharpest = extreme(gradeBreaks(entrance), (b) => Math.abs(b.changePercent), (b) => b.stationFt, true);
+  const sharpest = extreme(
+    gradeBreaks(entrance),
+    (b) => Math.abs(b.changePercent),
+    (b) => b.stationFt,
+    true,
+  );
   findings.push(
     sharpest
       ? atMost({ ...RULE.change, stationFt: sharpest.stationFt }, sharpest.value, rules.maxGradeChangePercent)
@@ -87,11 +104,21 @@ function scrapeFindings(scrape: ScrapeResult, rules: RuleProfile): Finding[] {
   const findings = [atLeast({ ...base, stationFt: scrape.atStationFt, note }, scrape.minClearanceIn, 0)];
   const partial = scrape.partialCoverage;
   if (partial) {
-    const why = `the survey ends ${roundTo(partial.surveyedPastFt, 2)} ft past the grade break at station ${formatStation(partial.breakStationFt)}; ` +
+    const why =
+      `the survey ends ${roundTo(partial.surveyedPastFt, 2)} ft past the grade break at station ${formatStation(partial.breakStationFt)}; ` +
       `a ${vehicle} needs ${roundTo(partial.neededFt, 2)} ft to cross it fully, so the clearance there was checked only in part: survey further in`;
-    const coverage = { ruleId: 'scrape.coverage', label: 'Scrape check past the last grade break', unit: 'ft', stationFt: partial.breakStationFt };
+    const coverage = {
+      ruleId: 'scrape.coverage',
+      label: 'Scrape check past the last grade break',
+      unit: 'ft',
+      stationFt: partial.breakStationFt,
+    };
     // The distance past the break is a minimum, so what is missing shows as negative room to spare.
-    findings.push({ ...advisory(coverage, partial.surveyedPastFt, partial.neededFt, why), limitKind: 'at-least', margin: snap(partial.surveyedPastFt - partial.neededFt) });
+    findings.push({
+      ...advisory(coverage, partial.surveyedPastFt, partial.neededFt, why),
+      limitKind: 'at-least',
+      margin: snap(partial.surveyedPastFt - partial.neededFt),
+    });
   }
   return findings;
 }
@@ -125,4 +152,3 @@ export function checkProfileRules(
   ];
   return { segments, findings, scrape };
 }
-

@@ -20,13 +20,19 @@ export const profileInputSchema = z.union([
   z.object({
     kind: z.literal('rod-readings'),
     instrumentHeightFt: elevationFt(),
-    readings: z.array(z.object({ stationFt: stationFt(), rodFt: bounded(-100, 100) })).min(2).max(MAX_POINTS),
+    readings: z
+      .array(z.object({ stationFt: stationFt(), rodFt: bounded(-100, 100) }))
+      .min(2)
+      .max(MAX_POINTS),
   }),
   z.object({
     kind: z.literal('segment-grades'),
     startStationFt: stationFt().default(0),
     startElevationFt: elevationFt(),
-    segments: z.array(z.object({ lengthFt: positive(5_000), gradePercent: gradePercent() })).min(1).max(MAX_POINTS),
+    segments: z
+      .array(z.object({ lengthFt: positive(5_000), gradePercent: gradePercent() }))
+      .min(1)
+      .max(MAX_POINTS),
   }),
 ]);
 export type ProfileInput = z.input<typeof profileInputSchema>;
@@ -42,7 +48,9 @@ interface Shot extends ProfilePoint {
  * would be noise divided by almost nothing.
  */
 function sortAndMerge(points: readonly ProfilePoint[], field: string): ProfilePoint[] {
-  const sorted: Shot[] = points.map((p, index) => ({ stationFt: p.stationFt, elevationFt: p.elevationFt, index })).sort((a, b) => a.stationFt - b.stationFt);
+  const sorted: Shot[] = points
+    .map((p, index) => ({ stationFt: p.stationFt, elevationFt: p.elevationFt, index }))
+    .sort((a, b) => a.stationFt - b.stationFt);
   const merged: (ProfilePoint & { first: Shot })[] = [];
   for (const shot of sorted) {
     const last = merged[merged.length - 1];
@@ -50,10 +58,11 @@ function sortAndMerge(points: readonly ProfilePoint[], field: string): ProfilePo
       if (Math.abs(shot.elevationFt - last.elevationFt) > SURVEY_ELEVATION_PRECISION_FT + 1e-9) {
         const [a, b] = last.first.index < shot.index ? [last.first, shot] : [shot, last.first];
         const elevations = `(${a.elevationFt} and ${b.elevationFt} ft)`;
-        const message = a.stationFt === b.stationFt
-          ? `station ${formatStation(b.stationFt)} appears twice with different elevations ${elevations}`
-          : `station ${formatStation(b.stationFt, 5)} is closer than ${STATION_TOLERANCE_FT} ft to station ` +
-            `${formatStation(a.stationFt, 5)} but the elevations differ ${elevations}; correct one or remove the repeat`;
+        const message =
+          a.stationFt === b.stationFt
+            ? `station ${formatStation(b.stationFt)} appears twice with different elevations ${elevations}`
+            : `station ${formatStation(b.stationFt, 5)} is closer than ${STATION_TOLERANCE_FT} ft to station ` +
+              `${formatStation(a.stationFt, 5)} but the elevations differ ${elevations}; correct one or remove the repeat`;
         throw new EngineInputError(`${field}.${b.index}.stationFt`, message);
       }
       last.stationFt = (last.stationFt + shot.stationFt) / 2;
@@ -83,7 +92,10 @@ function fromParsed(parsed: z.output<typeof profileInputSchema>, field: string):
       let elevation = parsed.startElevationFt;
       for (const [i, segment] of parsed.segments.entries()) {
         if (segment.lengthFt < STATION_TOLERANCE_FT) {
-          throw new EngineInputError(`${field}.segments.${i}.lengthFt`, `a segment shorter than the survey's ${STATION_TOLERANCE_FT} ft precision cannot give a grade`);
+          throw new EngineInputError(
+            `${field}.segments.${i}.lengthFt`,
+            `a segment shorter than the survey's ${STATION_TOLERANCE_FT} ft precision cannot give a grade`,
+          );
         }
         station += segment.lengthFt;
         elevation += (segment.gradePercent / 100) * segment.lengthFt;

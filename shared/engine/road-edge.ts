@@ -26,14 +26,20 @@ export type RoadSide = z.output<typeof roadSideInputSchema>;
 const RULE = { ruleId: 'grade.road-edge-change', label: 'Grade change at the road edge', unit: '%' };
 
 /** The grade just before the road edge, along the stations (into the property): a surface falling to the edge is negative. */
-const approachGradePercent = (r: RoadSide) => -(r.shoulderWidthFt > 0 ? r.shoulderSlopePercent! : r.roadCrossSlopePercent);
+const approachGradePercent = (r: RoadSide) =>
+  -(r.shoulderWidthFt > 0 ? r.shoulderSlopePercent! : r.roadCrossSlopePercent);
 
 /**
  * The profile with the road side put in front of the road edge: the shoulder, then the lane for a whole car length,
  * so the design vehicle starts fully on the road and drives over both breaks. Shots surveyed on the road before the
  * edge give way to the stated slopes, which are what the road authority measures.
  */
-export function withRoadSide(points: readonly ProfilePoint[], roadEdgeFt: number, road: RoadSide | undefined, vehicle: DesignVehicle): readonly ProfilePoint[] {
+export function withRoadSide(
+  points: readonly ProfilePoint[],
+  roadEdgeFt: number,
+  road: RoadSide | undefined,
+  vehicle: DesignVehicle,
+): readonly ProfilePoint[] {
   if (!road) return points;
   const edge = edgePoint(points, roadEdgeFt);
   return [...roadSidePoints(edge, road, vehicle), edge, ...pastEdge(points, roadEdgeFt)];
@@ -45,10 +51,16 @@ export function roadSidePoints(edge: ProfilePoint, road: RoadSide, vehicle: Desi
   const front: ProfilePoint[] = [];
   let at = edge;
   if (road.shoulderWidthFt > 0) {
-    at = { stationFt: at.stationFt - road.shoulderWidthFt, elevationFt: at.elevationFt + (road.shoulderSlopePercent! / 100) * road.shoulderWidthFt };
+    at = {
+      stationFt: at.stationFt - road.shoulderWidthFt,
+      elevationFt: at.elevationFt + (road.shoulderSlopePercent! / 100) * road.shoulderWidthFt,
+    };
     front.unshift(at);
   }
-  front.unshift({ stationFt: at.stationFt - laneRunFt, elevationFt: at.elevationFt + (road.roadCrossSlopePercent / 100) * laneRunFt });
+  front.unshift({
+    stationFt: at.stationFt - laneRunFt,
+    elevationFt: at.elevationFt + (road.roadCrossSlopePercent / 100) * laneRunFt,
+  });
   return front;
 }
 
@@ -60,7 +72,9 @@ export function firstGradeRange(road: RoadSide, rules: RuleProfile): { lo: numbe
 
 /** The road side in words, as the road-edge finding and the proposal's reasons say it. */
 export const roadSideWords = (road: RoadSide) =>
-  road.shoulderWidthFt > 0 ? slopeWords(road.shoulderSlopePercent!, 'shoulder') : slopeWords(road.roadCrossSlopePercent, 'road');
+  road.shoulderWidthFt > 0
+    ? slopeWords(road.shoulderSlopePercent!, 'shoulder')
+    : slopeWords(road.roadCrossSlopePercent, 'road');
 
 /** The road edge as a profile point: a shot a floating-point hair from the edge station is the edge, not a new segment. */
 export function edgePoint(points: readonly ProfilePoint[], roadEdgeFt: number): ProfilePoint {
@@ -69,13 +83,21 @@ export function edgePoint(points: readonly ProfilePoint[], roadEdgeFt: number): 
 }
 
 /** Shots beyond the road edge, leaving out one that is the edge itself. */
-export const pastEdge = (points: readonly ProfilePoint[], roadEdgeFt: number) => points.filter((p) => stationAfter(p.stationFt, roadEdgeFt));
+export const pastEdge = (points: readonly ProfilePoint[], roadEdgeFt: number) =>
+  points.filter((p) => stationAfter(p.stationFt, roadEdgeFt));
 
 const slopeWords = (percent: number, what: string) =>
-  percent === 0 ? `the ${what} is level` : `the ${what} ${percent > 0 ? 'falls' : 'rises'} ${Math.abs(percent)}% toward the road edge`;
+  percent === 0
+    ? `the ${what} is level`
+    : `the ${what} ${percent > 0 ? 'falls' : 'rises'} ${Math.abs(percent)}% toward the road edge`;
 
 /** The break between the road side and the first landing grade, against the rule profile's grade-change limit. */
-export function roadEdgeFinding(points: readonly ProfilePoint[], roadEdgeFt: number, road: RoadSide | undefined, rules: RuleProfile): Finding {
+export function roadEdgeFinding(
+  points: readonly ProfilePoint[],
+  roadEdgeFt: number,
+  road: RoadSide | undefined,
+  rules: RuleProfile,
+): Finding {
   if (!road) return notChecked(RULE, 'no road cross slope in the input');
   const [first] = pastEdge(points, roadEdgeFt);
   if (!first) return notChecked(RULE, 'the survey ends at the road edge');

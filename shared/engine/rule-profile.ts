@@ -122,7 +122,7 @@ export const commonRuralTemplate: RuleProfile = {
     maxGradePercent: COMMON_PRACTICE,
     maxGradeChangePercent: '17 - 4: lets the landing break straight into the maximum grade; the scrape check governs',
     'culvert.lengthIncrementFt': `${COMMON_PRACTICE}: pipe is sold in 2 ft steps`,
-    'asBuilt.gradeTolerancePercent': 'none assumed; enter the road authority\'s tolerance',
+    'asBuilt.gradeTolerancePercent': "none assumed; enter the road authority's tolerance",
     designVehicle: 'Passenger car: wheelbase and overhangs from memory; 5 in clearance after Eck and Kang, TRR 1356',
   },
 };

@@ -88,7 +88,13 @@ export function bodyAt(g: Ground, v: DesignVehicle, rx: number, c: Cursor = newC
  * piecewise-linear ground, so only those are measured. Writes into `out` and returns it; null when the front
  * wheel would be past the survey's end.
  */
-export function clearanceAt(g: Ground, v: DesignVehicle, rx: number, out?: Position, c: Cursor = newCursor()): Position | null {
+export function clearanceAt(
+  g: Ground,
+  v: DesignVehicle,
+  rx: number,
+  out?: Position,
+  c: Cursor = newCursor(),
+): Position | null {
   if (!bodyAt(g, v, rx, c)) return null;
   const { xs, ys } = g;
   const n = xs.length;
@@ -178,9 +184,17 @@ function searchBetween(g: Ground, v: DesignVehicle, lo: number, hi: number): Pos
   let fd = value(d);
   for (let k = 0; k < SEARCH_ROUNDS && b - a > 1e-6; k++) {
     if (fc <= fd) {
-      b = d; d = c; fd = fc; c = b - GOLDEN * (b - a); fc = value(c);
+      b = d;
+      d = c;
+      fd = fc;
+      c = b - GOLDEN * (b - a);
+      fc = value(c);
     } else {
-      a = c; c = d; fc = fd; d = a + GOLDEN * (b - a); fd = value(d);
+      a = c;
+      c = d;
+      fc = fd;
+      d = a + GOLDEN * (b - a);
+      fd = value(d);
     }
   }
   return clearanceAt(g, v, fc <= fd ? c : d);
@@ -227,7 +241,7 @@ export function drive(g: Ground, v: DesignVehicle, stepFt: number, events: Float
   let c2 = Infinity;
   let e = 0;
   while (e < events.length && events[e] < start) e++;
-  for (let k = 0; ; ) {
+  for (let k = 0; ;) {
     const gridX = start + k * step;
     const fromGrid = gridX < end && !(e < events.length && events[e] < gridX);
     const x = fromGrid ? gridX : e < events.length && events[e] < end ? events[e] : NaN;

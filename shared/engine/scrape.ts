@@ -39,15 +39,23 @@ function coverageAtEnd(points: readonly ProfilePoint[], v: DesignVehicle): Scrap
   const end = points[points.length - 1].stationFt;
   for (let i = points.length - 2; i >= 1; i--) {
     const [a, b, c] = [points[i - 1], points[i], points[i + 1]];
-    const change = (c.elevationFt - b.elevationFt) / (c.stationFt - b.stationFt) - (b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt);
+    const change =
+      (c.elevationFt - b.elevationFt) / (c.stationFt - b.stationFt) -
+      (b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt);
     if (Math.abs(snap(change)) === 0) continue;
     const surveyedPastFt = end - b.stationFt;
-    return surveyedPastFt < neededFt - STATION_TOLERANCE_FT / 2 ? { breakStationFt: b.stationFt, surveyedPastFt, neededFt } : undefined;
+    return surveyedPastFt < neededFt - STATION_TOLERANCE_FT / 2
+      ? { breakStationFt: b.stationFt, surveyedPastFt, neededFt }
+      : undefined;
   }
   return undefined;
 }
 
-export function scrapeCheckPoints(points: readonly ProfilePoint[], vehicle: DesignVehicle, stepFt: number): ScrapeResult {
+export function scrapeCheckPoints(
+  points: readonly ProfilePoint[],
+  vehicle: DesignVehicle,
+  stepFt: number,
+): ScrapeResult {
   const n = points.length;
   const xs = new Float64Array(n);
   const ys = new Float64Array(n);

@@ -22,10 +22,12 @@ export type StoppingSightDistanceInput = z.input<typeof stoppingSightDistanceInp
  * come out the same either way.
  */
 export function stoppingSightDistance(input: StoppingSightDistanceInput): { computedFt: number; designFt: number } {
-  const { speedMph: v, gradePercent, reactionTimeS: t, decelFtPerS2: a } = parseInput(
-    stoppingSightDistanceInputSchema,
-    input,
-  );
+  const {
+    speedMph: v,
+    gradePercent,
+    reactionTimeS: t,
+    decelFtPerS2: a,
+  } = parseInput(stoppingSightDistanceInputSchema, input);
   const g = gradePercent / 100;
   const brakingDivisor = 30 * (a / GRAVITY_FT_PER_S2 + g);
   if (brakingDivisor <= 0) {

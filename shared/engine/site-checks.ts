@@ -45,13 +45,22 @@ function required(s: z.output<typeof sightInputSchema>, rules: RuleProfile, spee
       right: s.movements === 'all' ? stoppingSightDistance({ speedMph, gradePercent: -g }).designFt : null,
     };
   }
-  const common = { speedMph, vehicle: rules.sight.vehicle, approachGradePercent: approach, gradeReading: rules.sight.gradeReading };
+  const common = {
+    speedMph,
+    vehicle: rules.sight.vehicle,
+    approachGradePercent: approach,
+    gradeReading: rules.sight.gradeReading,
+  };
   const leftTurn = intersectionSightDistance({ ...common, turn: 'left', extraLanes: s.extraLanes }).designFt;
   const rightTurn = intersectionSightDistance({ ...common, turn: 'right' }).designFt;
   return s.movements === 'all' ? { left: leftTurn, right: leftTurn } : { left: rightTurn, right: null };
 }
 
-export function checkSight(s: z.output<typeof sightInputSchema> | undefined, rules: RuleProfile, landingApproachPercent: number): { findings: Finding[]; sight?: SightSummary } {
+export function checkSight(
+  s: z.output<typeof sightInputSchema> | undefined,
+  rules: RuleProfile,
+  landingApproachPercent: number,
+): { findings: Finding[]; sight?: SightSummary } {
   const left = { ruleId: 'sight.left', label: 'Sight distance looking left', unit: 'ft' };
   const right = { ruleId: 'sight.right', label: 'Sight distance looking right', unit: 'ft' };
   const speedMph = s?.speedMph ?? rules.sight.designSpeedMph;
@@ -68,17 +77,50 @@ export function checkSight(s: z.output<typeof sightInputSchema> | undefined, rul
         ? notChecked(right, 'not measured')
         : atLeast(right, s.measuredRightFt, req.right),
   ];
-  return { findings, sight: { basis: rules.sight.basis, speedMph, requiredLeftFt: req.left, requiredRightFt: req.right } };
+  return {
+    findings,
+    sight: { basis: rules.sight.basis, speedMph, requiredLeftFt: req.left, requiredRightFt: req.right },
+  };
 }
 
 export function checkGeometry(g: z.output<typeof geometryInputSchema> | undefined, rules: RuleProfile): Finding[] {
   const r = rules.geometry;
   const rows: { ruleId: string; label: string; value?: number; limit?: number; kind: 'min' | 'max' }[] = [
-    { ruleId: 'geometry.min-width', label: 'Entrance width (narrowest allowed)', value: g?.widthFt, limit: r.minWidthFt, kind: 'min' },
-    { ruleId: 'geometry.max-width', label: 'Entrance width (widest allowed)', value: g?.widthFt, limit: r.maxWidthFt, kind: 'max' },
-    { ruleId: 'geometry.flare-radius', label: 'Flare or return radius', value: g?.flareRadiusFt, limit: r.minFlareRadiusFt, kind: 'min' },
-    { ruleId: 'geometry.intersection-distance', label: 'Distance to the nearest intersection', value: g?.distanceToIntersectionFt, limit: r.minDistanceToIntersectionFt, kind: 'min' },
-    { ruleId: 'geometry.property-line-distance', label: 'Distance to the property line', value: g?.distanceToPropertyLineFt, limit: r.minDistanceToPropertyLineFt, kind: 'min' },
+    {
+      ruleId: 'geometry.min-width',
+      label: 'Entrance width (narrowest allowed)',
+      value: g?.widthFt,
+      limit: r.minWidthFt,
+      kind: 'min',
+    },
+    {
+      ruleId: 'geometry.max-width',
+      label: 'Entrance width (widest allowed)',
+      value: g?.widthFt,
+      limit: r.maxWidthFt,
+      kind: 'max',
+    },
+    {
+      ruleId: 'geometry.flare-radius',
+      label: 'Flare or return radius',
+      value: g?.flareRadiusFt,
+      limit: r.minFlareRadiusFt,
+      kind: 'min',
+    },
+    {
+      ruleId: 'geometry.intersection-distance',
+      label: 'Distance to the nearest intersection',
+      value: g?.distanceToIntersectionFt,
+      limit: r.minDistanceToIntersectionFt,
+      kind: 'min',
+    },
+    {
+      ruleId: 'geometry.property-line-distance',
+      label: 'Distance to the property line',
+      value: g?.distanceToPropertyLineFt,
+      limit: r.minDistanceToPropertyLineFt,
+      kind: 'min',
+    },
   ];
   return rows.map(({ value, limit, kind, ...b }) => {
     const fb = { ...b, unit: 'ft' };

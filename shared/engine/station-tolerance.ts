@@ -26,4 +26,5 @@ export const stationAtOrAfter = (station: number, boundary: number): boolean => 
 export const stationAfter = (station: number, boundary: number): boolean => station > boundary + HALF_TOLERANCE_FT;
 
 /** Two shots closer than the tolerance cannot both be surveyed places: they are merged or refused. */
-export const tooCloseToSurvey = (a: number, b: number): boolean => Math.abs(a - b) < STATION_TOLERANCE_FT - FLOAT_SLACK_FT;
+export const tooCloseToSurvey = (a: number, b: number): boolean =>
+  Math.abs(a - b) < STATION_TOLERANCE_FT - FLOAT_SLACK_FT;

@@ -18,7 +18,10 @@ function failureWords(f: Finding): string {
     return `a car would scrape${where} (it is ${number(-f.measured, f.unit)} short of clearing)`;
   }
   if (f.ruleId === 'drainage.low-point') return `water would stand${where} (${number(f.measured, f.unit)} deep)`;
-  const bound = f.limitKind === 'at-least' ? `at least ${number(f.limit, f.unit)} is needed` : `at most ${number(f.limit, f.unit)} is allowed`;
+  const bound =
+    f.limitKind === 'at-least'
+      ? `at least ${number(f.limit, f.unit)} is needed`
+      : `at most ${number(f.limit, f.unit)} is allowed`;
   return `${f.label.toLowerCase()} is ${number(f.measured, f.unit)}${where} where ${bound}`;
 }
 
@@ -35,9 +38,14 @@ export function summarise(findings: readonly Finding[], profileName: string): Ch
   else if (fail === 0) parts.push(`This entrance meets all ${checked} rules of ${profileName} that could be checked.`);
   else {
     const failed = findings.filter((f) => f.status === 'fail');
-    parts.push(`This entrance does not yet meet ${fail} of the ${checked} rules of ${profileName} that were checked: ${failed.map(failureWords).join('; ')}.`);
+    parts.push(
+      `This entrance does not yet meet ${fail} of the ${checked} rules of ${profileName} that were checked: ${failed.map(failureWords).join('; ')}.`,
+    );
   }
   if (adv > 0) parts.push(`${adv} ${adv === 1 ? 'item needs' : 'items need'} a closer look.`);
-  if (notChecked > 0) parts.push(`${notChecked} ${notChecked === 1 ? 'rule was' : 'rules were'} not checked because the measurements or limits were not given.`);
+  if (notChecked > 0)
+    parts.push(
+      `${notChecked} ${notChecked === 1 ? 'rule was' : 'rules were'} not checked because the measurements or limits were not given.`,
+    );
   return { pass, fail, advisory: adv, notChecked, text: parts.join(' ') };
 }

@@ -1,5 +1,10 @@
 import {
-  checkEntrance, EngineInputError, laserSetup, type ProposedProfile, type ProposeProfileInput, type RuleProfile,
+  checkEntrance,
+  EngineInputError,
+  laserSetup,
+  type ProposedProfile,
+  type ProposeProfileInput,
+  type RuleProfile,
 } from '../engine';
 import type { GradeCheckInputs, GradeCheckResults } from '../contracts/grade-checks';
 
@@ -24,7 +29,9 @@ export function fieldsOf(error: unknown, part: string, given?: object): FieldErr
   for (const issue of error.issues) {
     const typed = !given || issue.field.split('.')[0] in given;
     const key = typed ? [part, issue.field].filter(Boolean).join('.') : part;
-    fields[key] ??= typed ? issue.message : `no design profile can be made from these values (${issue.field}: ${issue.message})`;
+    fields[key] ??= typed
+      ? issue.message
+      : `no design profile can be made from these values (${issue.field}: ${issue.message})`;
   }
   return fields;
 }
@@ -49,14 +56,19 @@ export function checkWithoutProposal(inputs: GradeCheckInputs, rules: RuleProfil
   if (laser) results.laser = attempt('laser', () => laserSetup(laser));
   if (!design) return { results };
   const { applied, haul: _haul, ...designPart } = design;
-  if (applied) results.surveyed = attempt('design.existing', () => checkEntrance({ ...check, profile: design.existing }, rules));
+  if (applied)
+    results.surveyed = attempt('design.existing', () => checkEntrance({ ...check, profile: design.existing }, rules));
   // The proposal is held to the road-edge break and scrape the check itself applies with the road side typed.
   const designRequest = { ...designPart, roadSide: designPart.roadSide ?? check.roadSide };
   return { results, designRequest };
 }
 
 /** The proposal for a design request, its complaint said about the design's fields. */
-export async function proposalFor(designRequest: ProposeProfileInput, rules: RuleProfile, propose: Propose): Promise<ProposedProfile> {
+export async function proposalFor(
+  designRequest: ProposeProfileInput,
+  rules: RuleProfile,
+  propose: Propose,
+): Promise<ProposedProfile> {
   try {
     return await propose(designRequest, rules);
   } catch (error) {
@@ -70,7 +82,11 @@ export async function proposalFor(designRequest: ProposeProfileInput, rules: Rul
  * run this; the server stores exactly what it returns. Deterministic for the same inputs and profile. Throws
  * GradeCheckFieldsError for inputs the engine refuses.
  */
-export async function runGradeCheck(inputs: GradeCheckInputs, rules: RuleProfile, propose: Propose): Promise<GradeCheckResults> {
+export async function runGradeCheck(
+  inputs: GradeCheckInputs,
+  rules: RuleProfile,
+  propose: Propose,
+): Promise<GradeCheckResults> {
   const { results, designRequest } = checkWithoutProposal(inputs, rules);
   if (!designRequest) return results;
   return { ...results, proposal: await proposalFor(designRequest, rules, propose) };

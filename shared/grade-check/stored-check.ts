@@ -1,6 +1,10 @@
 import { z } from 'zod';
 import {
-  GRADE_CHECK_FORMAT_VERSION, storedGradeCheckInputsSchema, type GradeCheckInputs, type GradeCheckRecord, type GradeCheckResults,
+  GRADE_CHECK_FORMAT_VERSION,
+  storedGradeCheckInputsSchema,
+  type GradeCheckInputs,
+  type GradeCheckRecord,
+  type GradeCheckResults,
 } from '../contracts/grade-checks';
 
 /**
@@ -20,11 +24,13 @@ export interface StoredGradeCheckColumns {
 
 const pointSchema = z.object({ stationFt: z.number(), elevationFt: z.number() });
 // The record's results are the engine's own output; only what every reader leans on is checked here.
-const reportSchema = z.object({
-  passes: z.boolean(),
-  profile: z.object({ points: z.array(pointSchema).min(2) }).loose(),
-  findings: z.array(z.object({ ruleId: z.string(), status: z.string() }).loose()),
-}).loose();
+const reportSchema = z
+  .object({
+    passes: z.boolean(),
+    profile: z.object({ points: z.array(pointSchema).min(2) }).loose(),
+    findings: z.array(z.object({ ruleId: z.string(), status: z.string() }).loose()),
+  })
+  .loose();
 const resultsSchema = z.object({ report: reportSchema }).loose();
 
 export class StoredGradeCheckError extends Error {
@@ -54,8 +60,10 @@ function upgradeInputsFrom1(raw: unknown): GradeCheckInputs {
 /** A saved check read as the current format, whatever format it was saved in. Throws StoredGradeCheckError. */
 export function readGradeCheckRecord(stored: StoredGradeCheckColumns): GradeCheckRecord {
   const { formatVersion } = stored;
-  if (formatVersion > GRADE_CHECK_FORMAT_VERSION) throw new StoredGradeCheckError(`format ${formatVersion} is newer than this program reads`);
-  if (!resultsSchema.safeParse(stored.results).success) throw new StoredGradeCheckError('no engine report in its results');
+  if (formatVersion > GRADE_CHECK_FORMAT_VERSION)
+    throw new StoredGradeCheckError(`format ${formatVersion} is newer than this program reads`);
+  if (!resultsSchema.safeParse(stored.results).success)
+    throw new StoredGradeCheckError('no engine report in its results');
   const inputs = formatVersion < 2 ? upgradeInputsFrom1(stored.inputs) : parseInputs(stored.inputs);
   // The parse above only vouches for the shape; the record's own results are handed on untouched.
   return { formatVersion: GRADE_CHECK_FORMAT_VERSION, inputs, results: stored.results as GradeCheckResults };

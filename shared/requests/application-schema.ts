@@ -1,6 +1,12 @@
 import { z } from 'zod';
 import {
-  drainageKinds, entranceUses, entranceWorks, positionKinds, roadOwners, timings, vehicleKinds,
+  drainageKinds,
+  entranceUses,
+  entranceWorks,
+  positionKinds,
+  roadOwners,
+  timings,
+  vehicleKinds,
 } from './choices';
 
 /**
@@ -11,7 +17,11 @@ import {
 const required = (what: string) => (iss: { input: unknown }) => (iss.input === undefined ? 'This is required.' : what);
 // Optional answers default to empty, so an older draft that never saw a field still completes.
 const text = (max: number, tooLong: string) =>
-  z.string({ error: required('Must be text.') }).trim().max(max, tooLong).default('');
+  z
+    .string({ error: required('Must be text.') })
+    .trim()
+    .max(max, tooLong)
+    .default('');
 const optionalNumber = (min: number, max: number, outOfRange: string) =>
   z.number({ error: 'Must be a number.' }).min(min, outOfRange).max(max, outOfRange).nullable().default(null);
 
@@ -20,9 +30,13 @@ export const siteStepShape = z.object({
   parcelNumber: text(40, 'A parcel number is at most 40 characters.'),
   roadName: text(120, 'Keep the road name under 120 characters.'),
   roadOwner: z.enum(roadOwners, { error: 'Choose who owns the road, or “Not sure”.' }),
-  postedSpeedMph: z.number({ error: 'Must be a number.' }).int('Use a whole number of mph.')
-    .min(5, 'Posted speeds are between 5 and 75 mph.').max(75, 'Posted speeds are between 5 and 75 mph.')
-    .nullable().default(null),
+  postedSpeedMph: z
+    .number({ error: 'Must be a number.' })
+    .int('Use a whole number of mph.')
+    .min(5, 'Posted speeds are between 5 and 75 mph.')
+    .max(75, 'Posted speeds are between 5 and 75 mph.')
+    .nullable()
+    .default(null),
   positionKind: z.enum(positionKinds, { error: 'Choose how to say where the entrance goes.' }),
   landmark: text(120, 'Keep the landmark under 120 characters.'),
   distanceFromLandmarkFt: optionalNumber(0, 26400, 'Give a distance between 0 and 26,400 ft (5 miles).'),
@@ -33,33 +47,52 @@ export const siteStepShape = z.object({
 export const entranceStepShape = z.object({
   work: z.enum(entranceWorks, { error: 'Choose a new entrance or widening an existing one.' }),
   use: z.enum(entranceUses, { error: 'Choose what the entrance will serve.' }),
-  vehicles: z.array(z.enum(vehicleKinds, { error: 'Choose from the listed vehicles.' }), { error: required('Choose the vehicles.') })
+  vehicles: z
+    .array(z.enum(vehicleKinds, { error: 'Choose from the listed vehicles.' }), {
+      error: required('Choose the vehicles.'),
+    })
     .max(vehicleKinds.length, 'Choose each vehicle once.')
     .refine((v) => new Set(v).size === v.length, 'Choose each vehicle once.'),
   drivewayLengthFt: optionalNumber(1, 5280, 'Give a length between 1 and 5,280 ft.'),
-  riseToHouseFt: optionalNumber(-300, 300, 'Give a rise between -300 and 300 ft (negative if the house sits below the road).'),
+  riseToHouseFt: optionalNumber(
+    -300,
+    300,
+    'Give a rise between -300 and 300 ft (negative if the house sits below the road).',
+  ),
   existingDrainage: z.enum(drainageKinds, { error: 'Say whether there is a ditch or culvert, or “Not sure”.' }),
   timing: z.enum(timings, { error: 'Choose when you would like the work done.' }),
   notes: text(2000, 'Keep notes under 2,000 characters.'),
 });
 
 const filled = (min: number, max: number, missing: string, tooLong: string) =>
-  z.string({ error: required('Must be text.') }).trim().min(min, missing).max(max, tooLong);
+  z
+    .string({ error: required('Must be text.') })
+    .trim()
+    .min(min, missing)
+    .max(max, tooLong);
 
 // Conditional answers: they only run once the step's types are right, which is when the form can show them.
-export const siteStepSchema = siteStepShape.extend({
-  address: filled(5, 200, 'Enter the street address of the property.', 'Keep the address under 200 characters.'),
-  roadName: filled(2, 120, 'Enter the name of the road the entrance joins.', 'Keep the road name under 120 characters.'),
-}).superRefine((v, ctx) => {
-  const need = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
-  if (v.positionKind === 'landmark') {
-    if (v.landmark.length < 2) need('landmark', 'Name a landmark, e.g. a mailbox, a crossroad or a barn.');
-    if (v.distanceFromLandmarkFt === null) need('distanceFromLandmarkFt', 'Give the distance from the landmark in feet.');
-  } else {
-    if (v.siteLat === null) need('siteLat', 'Enter the latitude, or use a photo’s position.');
-    if (v.siteLng === null) need('siteLng', 'Enter the longitude, or use a photo’s position.');
-  }
-});
+export const siteStepSchema = siteStepShape
+  .extend({
+    address: filled(5, 200, 'Enter the street address of the property.', 'Keep the address under 200 characters.'),
+    roadName: filled(
+      2,
+      120,
+      'Enter the name of the road the entrance joins.',
+      'Keep the road name under 120 characters.',
+    ),
+  })
+  .superRefine((v, ctx) => {
+    const need = (path: string, message: string) => ctx.addIssue({ code: 'custom', path: [path], message });
+    if (v.positionKind === 'landmark') {
+      if (v.landmark.length < 2) need('landmark', 'Name a landmark, e.g. a mailbox, a crossroad or a barn.');
+      if (v.distanceFromLandmarkFt === null)
+        need('distanceFromLandmarkFt', 'Give the distance from the landmark in feet.');
+    } else {
+      if (v.siteLat === null) need('siteLat', 'Enter the latitude, or use a photo’s position.');
+      if (v.siteLng === null) need('siteLng', 'Enter the longitude, or use a photo’s position.');
+    }
+  });
 
 export const entranceStepSchema = entranceStepShape.extend({
   vehicles: entranceStepShape.shape.vehicles.refine((v) => v.length > 0, 'Tick at least one kind of vehicle.'),
@@ -72,10 +105,13 @@ export const applicationDraftSchema = z.object({
 });
 
 /** A complete application, as it must be before it goes to the office. */
-export const submittedApplicationSchema = z.object({
-  site: siteStepSchema,
-  entrance: entranceStepSchema,
-}, { error: 'Fill in both steps of the form.' });
+export const submittedApplicationSchema = z.object(
+  {
+    site: siteStepSchema,
+    entrance: entranceStepSchema,
+  },
+  { error: 'Fill in both steps of the form.' },
+);
 
 export type SiteStep = z.infer<typeof siteStepShape>;
 export type EntranceStep = z.infer<typeof entranceStepShape>;

@@ -3,7 +3,10 @@ import { z } from 'zod';
 /** What the storage accepts for site photos; the browser checks first, the server decides. */
 export const photoContentTypes = ['image/jpeg', 'image/png', 'image/webp', 'image/heic'] as const;
 export const photoExtensions: Record<(typeof photoContentTypes)[number], string> = {
-  'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp', 'image/heic': 'heic',
+  'image/jpeg': 'jpg',
+  'image/png': 'png',
+  'image/webp': 'webp',
+  'image/heic': 'heic',
 };
 export const maxPhotoBytes = 15 * 1024 * 1024;
 export const maxPhotosPerRequest = 20;
@@ -18,4 +21,7 @@ export const captionSuggestions = [
   'The existing culvert',
 ];
 
-export const photoCaptionSchema = z.string({ error: 'Must be text.' }).trim().max(200, 'Keep captions under 200 characters.');
+export const photoCaptionSchema = z
+  .string({ error: 'Must be text.' })
+  .trim()
+  .max(200, 'Keep captions under 200 characters.');

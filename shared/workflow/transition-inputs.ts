@@ -15,7 +15,8 @@ export const fieldText = z.registry<FieldText>();
 export const expectedVersionSchema = z.number({ error: 'must be the version number you loaded' }).int().min(1);
 
 const text = (max: number) => z.string().trim().max(max, `must be at most ${max} characters`);
-const said = (max: number, missing: string) => z.string({ error: missing }).trim().min(1, missing).max(max, `must be at most ${max} characters`);
+const said = (max: number, missing: string) =>
+  z.string({ error: missing }).trim().min(1, missing).max(max, `must be at most ${max} characters`);
 const dayMs = 86_400_000;
 
 const note = (label: string, hint = 'Shown in the history and the e-mail.') =>
@@ -24,17 +25,27 @@ const plainNote = note('Note (optional)');
 const visitAt = momentInput('must be a date and time, e.g. 2026-05-04T09:30:00Z')
   .refine((at) => new Date(at).getTime() >= Date.now() - dayMs, 'must not be in the past')
   .refine((at) => new Date(at).getTime() <= Date.now() + 400 * dayMs, 'must be within the next 13 months');
-const permitReference = (required: boolean) => (required
-  ? said(80, 'enter the road authority’s application number')
-  : text(80).optional()
-).register(fieldText, { label: 'Permit reference', hint: 'The road authority’s application or permit number.', control: 'text', prefill: 'permitReference' });
-const decidedOn = () => z.string({ error: 'enter the date the road authority decided' }).pipe(dayInput('must be a date, e.g. 2026-05-04'))
-  .register(fieldText, { label: 'Decided on', control: 'date' });
+const permitReference = (required: boolean) =>
+  (required ? said(80, 'enter the road authority’s application number') : text(80).optional()).register(fieldText, {
+    label: 'Permit reference',
+    hint: 'The road authority’s application or permit number.',
+    control: 'text',
+    prefill: 'permitReference',
+  });
+const decidedOn = () =>
+  z
+    .string({ error: 'enter the date the road authority decided' })
+    .pipe(dayInput('must be a date, e.g. 2026-05-04'))
+    .register(fieldText, { label: 'Decided on', control: 'date' });
 
 // Every change may carry a note; an action that asks for it in its own words replaces this one, in the type too.
-const input = <A extends TransitionAction, S extends z.ZodRawShape>(action: A, shape: S) => z.strictObject({
-  action: z.literal(action), expectedVersion: expectedVersionSchema, ...({ note: plainNote } as Omit<{ note: typeof plainNote }, keyof S>), ...shape,
-});
+const input = <A extends TransitionAction, S extends z.ZodRawShape>(action: A, shape: S) =>
+  z.strictObject({
+    action: z.literal(action),
+    expectedVersion: expectedVersionSchema,
+    ...({ note: plainNote } as Omit<{ note: typeof plainNote }, keyof S>),
+    ...shape,
+  });
 
 /**
  * What each status change takes from the person making it. The server parses these; the office's form draws its
@@ -43,14 +54,22 @@ const input = <A extends TransitionAction, S extends z.ZodRawShape>(action: A, s
 export const transitionInputs = {
   submit: input('submit', {}),
   'ask-details': input('ask-details', {
-    note: said(4000, 'write the questions for the property owner')
-      .register(fieldText, { label: 'Questions for the property owner', hint: 'Ask plainly; they answer from their request page.', control: 'textarea' }),
+    note: said(4000, 'write the questions for the property owner').register(fieldText, {
+      label: 'Questions for the property owner',
+      hint: 'Ask plainly; they answer from their request page.',
+      control: 'textarea',
+    }),
   }),
   answer: input('answer', {
-    answer: said(8000, 'write your answer to the office').register(fieldText, { label: 'Your answer', control: 'textarea' }),
+    answer: said(8000, 'write your answer to the office').register(fieldText, {
+      label: 'Your answer',
+      control: 'textarea',
+    }),
   }),
   'book-visit': input('book-visit', {
-    visitAt: z.string({ error: 'pick the date and time of the site visit' }).pipe(visitAt)
+    visitAt: z
+      .string({ error: 'pick the date and time of the site visit' })
+      .pipe(visitAt)
       .register(fieldText, { label: 'Date and time of the site visit', control: 'datetime' }),
   }),
   'mark-checked': input('mark-checked', {}),
@@ -59,35 +78,61 @@ export const transitionInputs = {
     permitReference: permitReference(false),
     permitDecidedOn: decidedOn(),
     permitConditions: text(4000).optional().register(fieldText, {
-      label: 'Conditions (optional)', hint: 'E.g. traffic control, working hours, inspection before paving.', control: 'textarea', prefill: 'permitConditions',
+      label: 'Conditions (optional)',
+      hint: 'E.g. traffic control, working hours, inspection before paving.',
+      control: 'textarea',
+      prefill: 'permitConditions',
     }),
-    permitExpiresOn: dayInput('must be a date, e.g. 2027-05-04').optional().register(fieldText, { label: 'Permit expires on (optional)', control: 'date' }),
-  }).refine((b) => !b.permitExpiresOn || b.permitExpiresOn > b.permitDecidedOn, { message: 'must be after the decision date', path: ['permitExpiresOn'] }),
+    permitExpiresOn: dayInput('must be a date, e.g. 2027-05-04')
+      .optional()
+      .register(fieldText, { label: 'Permit expires on (optional)', control: 'date' }),
+  }).refine((b) => !b.permitExpiresOn || b.permitExpiresOn > b.permitDecidedOn, {
+    message: 'must be after the decision date',
+    path: ['permitExpiresOn'],
+  }),
   'record-refused': input('record-refused', {
     permitReference: permitReference(false),
     permitDecidedOn: decidedOn(),
-    note: said(4000, 'give the reason, in words the property owner will read')
-      .register(fieldText, { label: 'Reason', hint: 'The property owner reads this in the e-mail and on their request page.', control: 'textarea' }),
+    note: said(4000, 'give the reason, in words the property owner will read').register(fieldText, {
+      label: 'Reason',
+      hint: 'The property owner reads this in the e-mail and on their request page.',
+      control: 'textarea',
+    }),
   }),
-  release: input('release', { note: note('Note for the crew (optional)', 'Crew leads read this; the property owner does not.') }),
+  release: input('release', {
+    note: note('Note for the crew (optional)', 'Crew leads read this; the property owner does not.'),
+  }),
   'accept-job': input('accept-job', {}),
   'hand-back': input('hand-back', {
-    note: said(2000, 'say why the job goes back on the board')
-      .register(fieldText, { label: 'Why does it go back on the board?', hint: 'The office reads this.', control: 'textarea' }),
+    note: said(2000, 'say why the job goes back on the board').register(fieldText, {
+      label: 'Why does it go back on the board?',
+      hint: 'The office reads this.',
+      control: 'textarea',
+    }),
   }),
   'start-work': input('start-work', {}),
   'mark-built': input('mark-built', {
     note: note('Why the readings fail', 'Needed when the last saved set fails; the office reads it before closing.'),
   }),
   'send-back': input('send-back', {
-    note: said(4000, 'say what needs doing').register(fieldText, { label: 'What needs doing', hint: 'The crew reads this.', control: 'textarea' }),
+    note: said(4000, 'say what needs doing').register(fieldText, {
+      label: 'What needs doing',
+      hint: 'The crew reads this.',
+      control: 'textarea',
+    }),
   }),
   close: input('close', {
-    note: note('Closing note', 'Needed when the crew’s last as-built readings fail: say why the request closes anyway.'),
+    note: note(
+      'Closing note',
+      'Needed when the crew’s last as-built readings fail: say why the request closes anyway.',
+    ),
   }),
   decline: input('decline', {
-    note: said(4000, 'give the reason, in words the property owner will read')
-      .register(fieldText, { label: 'Reason', hint: 'The property owner reads this in the e-mail and on their request page.', control: 'textarea' }),
+    note: said(4000, 'give the reason, in words the property owner will read').register(fieldText, {
+      label: 'Reason',
+      hint: 'The property owner reads this in the e-mail and on their request page.',
+      control: 'textarea',
+    }),
   }),
   withdraw: input('withdraw', {}),
 } satisfies { [A in TransitionAction]: z.ZodType<{ action: A }> };
@@ -96,11 +141,19 @@ type Inputs = typeof transitionInputs;
 export type TransitionBody = z.infer<Inputs[TransitionAction]>;
 export type TransitionBodyOf<A extends TransitionAction> = z.infer<Inputs[A]>;
 
-export const transitionInputSchema = z.discriminatedUnion('action', Object.values(transitionInputs) as unknown as [Inputs['submit'], ...Inputs[TransitionAction][]], {
-  error: (issue) => (issue.code === 'invalid_union' ? `must be one of: ${transitionActions.join(', ')}` : undefined),
-});
+export const transitionInputSchema = z.discriminatedUnion(
+  'action',
+  Object.values(transitionInputs) as unknown as [Inputs['submit'], ...Inputs[TransitionAction][]],
+  {
+    error: (issue) => (issue.code === 'invalid_union' ? `must be one of: ${transitionActions.join(', ')}` : undefined),
+  },
+);
 
-export interface FormField { name: string; required: boolean; text: FieldText }
+export interface FormField {
+  name: string;
+  required: boolean;
+  text: FieldText;
+}
 
 /** The fields the person fills in for one action, in order, each with its label; action and version are the form's own. */
 export function formFieldsOf(action: TransitionAction): FormField[] {

@@ -14,7 +14,10 @@ export const paths = {
   office: {
     queue: { path: '/office/queue', getHref: (search = '') => `/office/queue${search}` },
     request: sharedPaths.officeRequest,
-    gradeCheck: { path: '/office/requests/:id/grade-check', getHref: (id: string) => `/office/requests/${id}/grade-check` },
+    gradeCheck: {
+      path: '/office/requests/:id/grade-check',
+      getHref: (id: string) => `/office/requests/${id}/grade-check`,
+    },
     ruleProfiles: { path: '/office/rule-profiles', getHref: () => '/office/rule-profiles' },
     ruleProfile: { path: '/office/rule-profiles/:id', getHref: (id: string) => `/office/rule-profiles/${id}` },
     emails: { path: '/office/emails', getHref: () => '/office/emails' },
@@ -27,7 +30,6 @@ export const paths = {
     asBuilt: { path: '/crew/jobs/:id/as-built', getHref: (id: string) => `/crew/jobs/${id}/as-built` },
   },
 } as const;
-
 
 export function roleHome(role: Role): string {
   if (role === 'applicant') return paths.applicant.requests.getHref();

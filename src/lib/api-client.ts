@@ -32,7 +32,10 @@ async function request<T>(method: string, path: string, body?: unknown, query?: 
   const response = await fetch(withQuery(path, query), {
     method,
     credentials: 'same-origin',
-    headers: body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+    headers:
+      body === undefined
+        ? { Accept: 'application/json' }
+        : { Accept: 'application/json', 'Content-Type': 'application/json' },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
   if (response.status === 204) return undefined as T;
@@ -40,7 +43,12 @@ async function request<T>(method: string, path: string, body?: unknown, query?: 
   const data: unknown = text ? safeJson(text) : undefined;
   if (!response.ok) {
     const err = (data as ApiErrorBody | undefined)?.error;
-    throw new ApiError(response.status, err?.code ?? 'http_error', err?.message ?? `The server answered ${response.status}.`, err?.fields);
+    throw new ApiError(
+      response.status,
+      err?.code ?? 'http_error',
+      err?.message ?? `The server answered ${response.status}.`,
+      err?.fields,
+    );
   }
   return data as T;
 }

@@ -53,4 +53,8 @@ export const emailKeys = {
 };
 
 /** What a status change on one request can alter: the request, its history and (for an answer) its messages. */
-export const statusChangeKeys = (requestId: string) => [requestKeys.one(requestId), eventKeys.ofRequest(requestId), messageKeys.ofRequest(requestId)];
+export const statusChangeKeys = (requestId: string) => [
+  requestKeys.one(requestId),
+  eventKeys.ofRequest(requestId),
+  messageKeys.ofRequest(requestId),
+];

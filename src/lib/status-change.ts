@@ -15,7 +15,11 @@ export function useRunTransition(id: string) {
   return useMutation({
     mutationFn: (body: TransitionBody) => runTransition(id, body),
     // A 409 means someone else moved the request: refresh either way so every screen shows where it stands.
-    onSettled: () => Promise.all([...statusChangeKeys(id), requestKeys.mine(), queueKeys.all]
-      .map((queryKey) => queryClient.invalidateQueries({ queryKey }))),
+    onSettled: () =>
+      Promise.all(
+        [...statusChangeKeys(id), requestKeys.mine(), queueKeys.all].map((queryKey) =>
+          queryClient.invalidateQueries({ queryKey }),
+        ),
+      ),
   });
 }

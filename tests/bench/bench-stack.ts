@@ -20,7 +20,9 @@ export async function prepareBenchStack(identities: { email: string; name: strin
   const port = await freePort();
   const origin = `http://127.0.0.1:${port}`;
   const standIns = await startStandIns({
-    dataDir: path.join(dir, 'fakes'), bucket: 'bench', allowedOrigins: [origin],
+    dataDir: path.join(dir, 'fakes'),
+    bucket: 'bench',
+    allowedOrigins: [origin],
     oauth: { ...devOAuthClient, redirectUris: [`${origin}/auth/google/callback`], identities },
   });
   const databaseUrl = pg.url('bench');
@@ -30,8 +32,18 @@ export async function prepareBenchStack(identities: { email: string; name: strin
 
   /** Forks `module` (beside this file) as the app and waits for its first message, which says it is listening. */
   const startServer = async (module: string, execArgv: string[] = []) => {
-    const env = { ...process.env, ...relaxedRateLimits, ...standInEnv(standIns, { appOrigin: origin, port, databaseUrl }), NODE_ENV: 'production', LOG_LEVEL: 'silent', RUN_WORKERS: 'false' };
-    const child = fork(fileURLToPath(new URL(module, import.meta.url)), { env, execArgv: ['--import', 'tsx', ...execArgv] });
+    const env = {
+      ...process.env,
+      ...relaxedRateLimits,
+      ...standInEnv(standIns, { appOrigin: origin, port, databaseUrl }),
+      NODE_ENV: 'production',
+      LOG_LEVEL: 'silent',
+      RUN_WORKERS: 'false',
+    };
+    const child = fork(fileURLToPath(new URL(module, import.meta.url)), {
+      env,
+      execArgv: ['--import', 'tsx', ...execArgv],
+    });
     server = child;
     await new Promise<void>((resolve, reject) => {
       child.once('message', () => resolve());

@@ -25,7 +25,9 @@ async function main() {
     const server = await stack.startServer('design-bench-server.ts');
     const health = `${stack.origin}/api/health`;
     const idle = await healthWhile(health, new Promise((r) => setTimeout(r, 3_000)));
-    const proposals = new Promise<{ proposals: number; ms: number; feasible: boolean }>((resolve) => server.once('message', (m) => resolve(m as never)));
+    const proposals = new Promise<{ proposals: number; ms: number; feasible: boolean }>((resolve) =>
+      server.once('message', (m) => resolve(m as never)),
+    );
     server.send('propose');
     const busy = await healthWhile(health, proposals);
     const done = await proposals;

@@ -21,7 +21,11 @@ const cpuMs = () => {
 };
 
 /** Wall-clock median and p95, and the median CPU time, which other work on a shared machine disturbs far less. */
-async function time(fn: () => unknown, runs: number, warmup: number): Promise<{ medianMs: number; p95Ms: number; cpuMedianMs: number }> {
+async function time(
+  fn: () => unknown,
+  runs: number,
+  warmup: number,
+): Promise<{ medianMs: number; p95Ms: number; cpuMedianMs: number }> {
   for (let i = 0; i < warmup; i++) await fn();
   const samples: number[] = [];
   const cpu: number[] = [];
@@ -55,7 +59,10 @@ const grounds: [string, number, RuleProfile][] = [
 const WARMUP = { 200: 10, 2000: 3 } as const;
 
 async function main() {
-  for (const [stations, spacing, target, runs] of [[200, 2, 20, 9], [2000, 1, 100, 3]] as const) {
+  for (const [stations, spacing, target, runs] of [
+    [200, 2, 20, 9],
+    [2000, 1, 100, 3],
+  ] as const) {
     for (const [name, climb, rules] of grounds) {
       const ground = rollingGround(stations, spacing, climb);
       const started = performance.now();
@@ -63,7 +70,11 @@ async function main() {
       const firstMs = performance.now() - started;
       if (!first.feasible) throw new Error(`benchmark ground "${name}" should be feasible: ${first.reason}`);
       const check = await time(() => checkEntrance({ profile: ground, scrapeStepFt: 0.1 }, rules), 21, 10);
-      const propose = await time(() => proposeProfile({ existing: ground, roadEdgeElevationFt: 100 }, rules), runs, WARMUP[stations]);
+      const propose = await time(
+        () => proposeProfile({ existing: ground, roadEdgeElevationFt: 100 }, rules),
+        runs,
+        WARMUP[stations],
+      );
       const ratio = propose.medianMs / check.medianMs;
       const cpuRatio = propose.cpuMedianMs / check.cpuMedianMs;
       console.log(

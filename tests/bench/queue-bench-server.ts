@@ -10,11 +10,17 @@ const env = parseEnv(process.env);
 const ctx = createContext(env);
 const app = createApp(ctx);
 // The floor: the same middleware, session and sign-in as the queue, then one trivial query. Mounted only here.
-app.get('/bench/floor', handle({}, async () => (await ctx.pool.query('select 1 as one')).rows[0]));
+app.get(
+  '/bench/floor',
+  handle({}, async () => (await ctx.pool.query('select 1 as one')).rows[0]),
+);
 // The same floor behind the API's rate-limit ceiling (its own counters, mounted so that their "/api" matches
 // here): the difference between the two floors is what the per-request counter write costs.
 app.use('/bench/limited', rateLimitRouter(ctx));
-app.get('/bench/limited/api/floor', handle({}, async () => (await ctx.pool.query('select 1 as one')).rows[0]));
+app.get(
+  '/bench/limited/api/floor',
+  handle({}, async () => (await ctx.pool.query('select 1 as one')).rows[0]),
+);
 
 const server: Server = app.listen(env.PORT, '127.0.0.1', () => process.send?.('ready'));
 // CPU time spent by this process, asked for around each measurement: unlike latency it hardly moves with other load.

@@ -12,8 +12,12 @@ async function main() {
   const { db, pool } = createDb(stack.databaseUrl, { max: 1 });
   try {
     await seedQueue(pool);
-    const [place] = (await pool.query("select id from jurisdictions where name = 'Fenwick County'")).rows as { id: string }[];
-    const [user] = (await pool.query("select id, email, name, role from users where email = 'bench.staff@gradepass.test'")).rows;
+    const [place] = (await pool.query("select id from jurisdictions where name = 'Fenwick County'")).rows as {
+      id: string;
+    }[];
+    const [user] = (
+      await pool.query("select id, email, name, role from users where email = 'bench.staff@gradepass.test'")
+    ).rows;
     const views: [string, Record<string, string>][] = [
       ['waiting on us, by time in status', { waiting: 'true', sort: 'waiting' }],
       ['everything, oldest wait first', { sort: 'waiting' }],
@@ -25,19 +29,27 @@ async function main() {
     // Every statement the queue sends passes through here; EXPLAIN ANALYZE the last one sent for each view.
     const sent: { text: string; values: unknown[] }[] = [];
     const query = pool.query.bind(pool) as (...args: unknown[]) => Promise<unknown>;
-    (pool as unknown as { query: unknown }).query = (config: { text?: string; values?: unknown[] } | string, values?: unknown[]) => {
-      if (typeof config === 'object' && config.text?.includes('"requests"')) sent.push({ text: config.text, values: values ?? config.values ?? [] });
+    (pool as unknown as { query: unknown }).query = (
+      config: { text?: string; values?: unknown[] } | string,
+      values?: unknown[],
+    ) => {
+      if (typeof config === 'object' && config.text?.includes('"requests"'))
+        sent.push({ text: config.text, values: values ?? config.values ?? [] });
       return query(config, values);
     };
     for (const [label, params] of views) {
       await listQueue(db, user, queueQuerySchema.parse({ ...params, limit: '50' }));
       const last = sent.at(-1)!;
       const values = fillPlaceholders(last.values, {});
-      const plan = (await query(`explain (analyze, buffers) ${last.text}`, values)) as { rows: { 'QUERY PLAN': string }[] };
+      const plan = (await query(`explain (analyze, buffers) ${last.text}`, values)) as {
+        rows: { 'QUERY PLAN': string }[];
+      };
       console.log(`\n=== ${label} ===\n${plan.rows.map((r) => r['QUERY PLAN']).join('\n')}`);
       // A named statement may settle on PostgreSQL's generic plan after five runs: show that plan too.
       await query('set plan_cache_mode = force_generic_plan');
-      const generic = (await query(`explain (analyze, buffers) ${last.text}`, values)) as { rows: { 'QUERY PLAN': string }[] };
+      const generic = (await query(`explain (analyze, buffers) ${last.text}`, values)) as {
+        rows: { 'QUERY PLAN': string }[];
+      };
       await query('reset plan_cache_mode');
       console.log(`--- the same, generic plan ---\n${generic.rows.map((r) => r['QUERY PLAN']).join('\n')}`);
     }

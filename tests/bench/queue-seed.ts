@@ -47,6 +47,8 @@ export async function seedQueue(pool: pg.Pool, count = 50_000) {
   // The steady state of a live database: statistics current and the visibility map set, as autovacuum leaves
   // them. Measured straight after a bulk load, autovacuum would otherwise start in the middle of a measurement.
   await pool.query('vacuum analyze');
-  const { rows } = await pool.query('select (select count(*) from requests)::int as requests, (select count(*) from request_events)::int as events');
+  const { rows } = await pool.query(
+    'select (select count(*) from requests)::int as requests, (select count(*) from request_events)::int as events',
+  );
   return rows[0] as { requests: number; events: number };
 }

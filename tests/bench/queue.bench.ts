@@ -16,7 +16,9 @@ async function measure(url: string, cookie: string) {
   const times: number[] = [];
   let errors = 0;
   await new Promise<void>((resolve, reject) => {
-    const run = autocannon({ url, connections, duration: seconds, headers: { cookie } }, (error) => (error ? reject(error) : resolve()));
+    const run = autocannon({ url, connections, duration: seconds, headers: { cookie } }, (error) =>
+      error ? reject(error) : resolve(),
+    );
     run.on('response', (_client: unknown, status: number, _bytes: number, ms: number) => {
       if (status !== 200) errors++;
       times.push(ms);
@@ -34,49 +36,86 @@ async function main() {
   try {
     const started = Date.now();
     const seeded = await seedQueue(pool);
-    console.log(`seeded ${seeded.requests} requests and ${seeded.events} events in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+    console.log(
+      `seeded ${seeded.requests} requests and ${seeded.events} events in ${((Date.now() - started) / 1000).toFixed(1)} s`,
+    );
 
-    const server = await stack.startServer('queue-bench-server.ts', process.env.BENCH_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`] : []);
+    const server = await stack.startServer(
+      'queue-bench-server.ts',
+      process.env.BENCH_PROFILE ? ['--cpu-prof', `--cpu-prof-dir=${process.env.BENCH_PROFILE}`] : [],
+    );
     const cookie = await signInCookie(origin, 'bench.staff@gradepass.test');
 
-    const [place] = (await pool.query("select id from jurisdictions where name = 'Fenwick County'")).rows as { id: string }[];
+    const [place] = (await pool.query("select id from jurisdictions where name = 'Fenwick County'")).rows as {
+      id: string;
+    }[];
     const targets: [string, string][] = [
       ['floor (session + select 1)', '/bench/floor'],
       ['floor + the API rate-limit count', '/bench/limited/api/floor'],
       ['queue: waiting on us, by time in status', '/api/queue?waiting=true&sort=waiting&limit=50'],
       // The screen's default view: everything, longest wait first, ended requests after the open ones.
       ['queue: everything, longest wait first', '/api/queue?sort=waiting&limit=50'],
-      ['queue: submitted in one authority, by applicant', `/api/queue?status=submitted&jurisdiction=${place.id}&sort=applicant&limit=50`],
+      [
+        'queue: submitted in one authority, by applicant',
+        `/api/queue?status=submitted&jurisdiction=${place.id}&sort=applicant&limit=50`,
+      ],
       ['queue: search "quarry ridge", newest first', '/api/queue?q=quarry%20ridge&sort=created&dir=desc&limit=50'],
       ['queue: everything, by road, page 3', ''],
     ];
     // A deeper page costs what the first does: follow the cursor twice to get there.
     let cursor = '';
     for (let i = 0; i < 2; i++) {
-      const page = await (await fetch(`${origin}/api/queue?sort=road&limit=50${cursor ? `&cursor=${cursor}` : ''}`, { headers: { cookie } })).json() as { nextCursor: string };
+      const page = (await (
+        await fetch(`${origin}/api/queue?sort=road&limit=50${cursor ? `&cursor=${cursor}` : ''}`, {
+          headers: { cookie },
+        })
+      ).json()) as { nextCursor: string };
       cursor = page.nextCursor;
     }
     targets[targets.length - 1][1] = `/api/queue?sort=road&limit=50&cursor=${cursor}`;
     for (const [, target] of targets) await measureWarm(origin + target, cookie);
     const results = [];
-    const cpu = async () => new Promise<number>((resolve) => {
-      server.once('message', (m: { cpuMicros: NodeJS.CpuUsage }) => resolve(m.cpuMicros.user + m.cpuMicros.system));
-      server.send('cpu');
-    });
+    const cpu = async () =>
+      new Promise<number>((resolve) => {
+        server.once('message', (m: { cpuMicros: NodeJS.CpuUsage }) => resolve(m.cpuMicros.user + m.cpuMicros.system));
+        server.send('cpu');
+      });
     for (const [label, target] of targets) {
       const before = await cpu();
       const result = await measure(origin + target, cookie);
-      const cpuMs = (await cpu() - before) / 1000 / (result.rps * seconds);
+      const cpuMs = ((await cpu()) - before) / 1000 / (result.rps * seconds);
       results.push({ label, ...result, cpuMs });
     }
     const floor = results[0];
-    console.log(`\n${connections} connections, ${seconds} s each; the app in its own process (on ${os.cpus().length} cores shared with PostgreSQL and the load generator)`);
-    console.log('endpoint'.padEnd(52), 'p50 ms'.padStart(8), 'p95 ms'.padStart(8), 'req/s'.padStart(8), 'p95/floor'.padStart(10), 'app CPU ms/req'.padStart(15), 'non-200'.padStart(8));
+    console.log(
+      `\n${connections} connections, ${seconds} s each; the app in its own process (on ${os.cpus().length} cores shared with PostgreSQL and the load generator)`,
+    );
+    console.log(
+      'endpoint'.padEnd(52),
+      'p50 ms'.padStart(8),
+      'p95 ms'.padStart(8),
+      'req/s'.padStart(8),
+      'p95/floor'.padStart(10),
+      'app CPU ms/req'.padStart(15),
+      'non-200'.padStart(8),
+    );
     for (const r of results) {
-      console.log(r.label.padEnd(52), r.p50.toFixed(1).padStart(8), r.p95.toFixed(1).padStart(8), r.rps.toFixed(0).padStart(8),
-        (r.p95 / floor.p95).toFixed(2).padStart(10), r.cpuMs.toFixed(2).padStart(15), String(r.errors).padStart(8));
+      console.log(
+        r.label.padEnd(52),
+        r.p50.toFixed(1).padStart(8),
+        r.p95.toFixed(1).padStart(8),
+        r.rps.toFixed(0).padStart(8),
+        (r.p95 / floor.p95).toFixed(2).padStart(10),
+        r.cpuMs.toFixed(2).padStart(15),
+        String(r.errors).padStart(8),
+      );
     }
-    console.log(`load average while measuring (other work on this machine shows here): ${os.loadavg().map((l) => l.toFixed(2)).join(' ')}`);
+    console.log(
+      `load average while measuring (other work on this machine shows here): ${os
+        .loadavg()
+        .map((l) => l.toFixed(2))
+        .join(' ')}`,
+    );
     // Each queue view against the target, compared at the precision printed (0.1 ms, 0.01x): not one headline view.
     console.log(`\ntarget for every queue view: p95 <= ${targetP95} ms and p95 <= ${targetRatio}x the floor's`);
     let failing = 0;
@@ -85,7 +124,9 @@ async function main() {
       const ratio = Number((r.p95 / floor.p95).toFixed(2));
       const pass = p95 <= targetP95 && ratio <= targetRatio;
       if (!pass) failing++;
-      console.log(`${pass ? 'PASS' : 'FAIL'}  ${r.label.padEnd(52)} p95 ${p95.toFixed(1)} ms, ${ratio.toFixed(2)}x the floor`);
+      console.log(
+        `${pass ? 'PASS' : 'FAIL'}  ${r.label.padEnd(52)} p95 ${p95.toFixed(1)} ms, ${ratio.toFixed(2)}x the floor`,
+      );
     }
     console.log(failing ? `${failing} queue view(s) miss the target` : 'every queue view meets the target');
   } finally {
@@ -95,7 +136,9 @@ async function main() {
 }
 
 async function measureWarm(url: string, cookie: string) {
-  await new Promise<void>((resolve, reject) => autocannon({ url, connections, duration: 2, headers: { cookie } }, (e) => (e ? reject(e) : resolve())));
+  await new Promise<void>((resolve, reject) =>
+    autocannon({ url, connections, duration: 2, headers: { cookie } }, (e) => (e ? reject(e) : resolve())),
+  );
 }
 
 main().catch((error: unknown) => {

@@ -1,6 +1,10 @@
 /** The OAuth round trip with plain fetch, as a browser would make it, returning the session cookie at the end. */
 export async function signInCookie(origin: string, email: string): Promise<string> {
-  const cookieOf = (res: Response) => res.headers.getSetCookie().map((c) => c.split(';')[0]).join('; ');
+  const cookieOf = (res: Response) =>
+    res.headers
+      .getSetCookie()
+      .map((c) => c.split(';')[0])
+      .join('; ');
   const start = await fetch(`${origin}/auth/google`, { redirect: 'manual' });
   const first = cookieOf(start);
   const authorize = new URL(start.headers.get('location') ?? '');

@@ -4,15 +4,18 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, signInAs } from '../setup/browser';
 
 let session: Awaited<ReturnType<typeof launchBrowser>>;
-beforeAll(async () => { session = await launchBrowser(); });
+beforeAll(async () => {
+  session = await launchBrowser();
+});
 afterAll(() => session?.close());
 
-const focusedText = (page: Page) => page.evaluate(() => {
-  const el = document.activeElement as HTMLElement | null;
-  if (!el) return '';
-  const label = el.id ? document.querySelector(`label[for="${CSS.escape(el.id)}"]`)?.textContent : null;
-  return (label ?? el.closest('label')?.textContent ?? el.textContent ?? '').trim();
-});
+const focusedText = (page: Page) =>
+  page.evaluate(() => {
+    const el = document.activeElement as HTMLElement | null;
+    if (!el) return '';
+    const label = el.id ? document.querySelector(`label[for="${CSS.escape(el.id)}"]`)?.textContent : null;
+    return (label ?? el.closest('label')?.textContent ?? el.textContent ?? '').trim();
+  });
 
 /** Moves focus the way a keyboard user does, one Tab at a time, until it reaches the named control. */
 async function tabTo(page: Page, name: string | RegExp) {
@@ -78,7 +81,9 @@ describe('the wizard by keyboard alone, and a draft that survives leaving', () =
       await page.getByRole('heading', { name: /Step 2 of 4/ }).waitFor();
       return page.getByLabel(/Anything else the office should know/).inputValue();
     };
-    await expect.poll(notesAfterReload, { timeout: 10_000, interval: 500 }).toBe('The gate post on the left will move.');
+    await expect
+      .poll(notesAfterReload, { timeout: 10_000, interval: 500 })
+      .toBe('The gate post on the left will move.');
     await context.close();
   });
 });

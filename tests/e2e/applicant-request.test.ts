@@ -5,13 +5,15 @@ import { solidPng } from '../factories/photo-images';
 import { appUrl, caughtMail, launchBrowser, saveScreenshot, signInAs, siteJpeg } from '../setup/browser';
 
 let session: Awaited<ReturnType<typeof launchBrowser>>;
-beforeAll(async () => { session = await launchBrowser(); });
+beforeAll(async () => {
+  session = await launchBrowser();
+});
 afterAll(() => session?.close());
 
-const isFocused = (page: Page, label: string) => page.getByLabel(label, { exact: true }).evaluate((el) => el === document.activeElement);
+const isFocused = (page: Page, label: string) =>
+  page.getByLabel(label, { exact: true }).evaluate((el) => el === document.activeElement);
 
 const sitePhoto = (page: Page) => siteJpeg(page, 44.26012, -72.57541);
-
 
 async function mailFor(address: string) {
   return (await caughtMail()).filter((m) => m.to.some((to) => to.toLowerCase().includes(address)));
@@ -44,7 +46,9 @@ describe('a new property owner asks for an entrance', () => {
     await page.getByLabel('Distance from the landmark, ft').press('Enter');
 
     await page.getByRole('heading', { name: /Step 2 of 4/ }).waitFor();
-    expect(await page.getByRole('heading', { name: /Step 2 of 4/ }).evaluate((el) => el === document.activeElement)).toBe(true);
+    expect(
+      await page.getByRole('heading', { name: /Step 2 of 4/ }).evaluate((el) => el === document.activeElement),
+    ).toBe(true);
     await page.getByLabel('A new entrance').check();
     await page.getByLabel('A home').check();
     await page.getByLabel('Cars and pickups').check();
@@ -53,10 +57,13 @@ describe('a new property owner asks for an entrance', () => {
     await page.getByRole('button', { name: 'Save and continue' }).click();
 
     await page.getByRole('heading', { name: /Step 3 of 4/ }).waitFor();
-    await page.locator('.uppy-Dashboard-input').first().setInputFiles([
-      { name: 'road-left.jpg', mimeType: 'image/jpeg', buffer: await sitePhoto(page) },
-      { name: 'ditch.png', mimeType: 'image/png', buffer: solidPng(40, 30, [120, 96, 60]) },
-    ]);
+    await page
+      .locator('.uppy-Dashboard-input')
+      .first()
+      .setInputFiles([
+        { name: 'road-left.jpg', mimeType: 'image/jpeg', buffer: await sitePhoto(page) },
+        { name: 'ditch.png', mimeType: 'image/png', buffer: solidPng(40, 30, [120, 96, 60]) },
+      ]);
     await page.getByText('2 photos').waitFor({ timeout: 30_000 });
     await page.getByRole('button', { name: 'Use this position' }).click();
     await page.getByText('The site position is now set from your photo.').waitFor();
@@ -71,16 +78,25 @@ describe('a new property owner asks for an entrance', () => {
     await page.getByRole('button', { name: 'Send to the office' }).click();
 
     await page.waitForURL(/\/my\/requests\/[0-9a-f-]+$/);
-    const reference = (await page.getByText(/Reference GP-\d{4}-\d{5}/).first().textContent())!.match(/GP-\d{4}-\d{5}/)![0];
+    const reference = (await page
+      .getByText(/Reference GP-\d{4}-\d{5}/)
+      .first()
+      .textContent())!.match(/GP-\d{4}-\d{5}/)![0];
     await page.getByText('Sent to the office').first().waitFor();
     const timeline = page.getByRole('list', { name: 'Timeline' });
     await timeline.getByText('Sent to the office').waitFor();
     const photos = page.getByRole('list', { name: 'Site photos' }).getByRole('img');
     await expect.poll(() => photos.count()).toBe(2);
-    await expect.poll(() => photos.evaluateAll((imgs) => imgs.every((img) => (img as HTMLImageElement).naturalWidth > 0))).toBe(true);
+    await expect
+      .poll(() => photos.evaluateAll((imgs) => imgs.every((img) => (img as HTMLImageElement).naturalWidth > 0)))
+      .toBe(true);
     await page.getByRole('img', { name: 'The ditch where the entrance goes' }).waitFor();
     const requestId = new URL(page.url()).pathname.split('/').pop();
-    const listed = (await (await page.request.get(appUrl(`/api/requests/${requestId}/photos`))).json()).photos as { fileName: string; url: string; gpsLat: number | null }[];
+    const listed = (await (await page.request.get(appUrl(`/api/requests/${requestId}/photos`))).json()).photos as {
+      fileName: string;
+      url: string;
+      gpsLat: number | null;
+    }[];
     const jpeg = listed.find((p) => p.fileName === 'road-left.jpg')!;
     const storedJpeg = Buffer.from(await (await fetch(jpeg.url)).arrayBuffer());
     expect(storedJpeg.subarray(0, 2).toString('hex')).toBe('ffd8');
@@ -93,7 +109,9 @@ describe('a new property owner asks for an entrance', () => {
     await row.getByText('Sent to the office').waitFor();
     await row.getByText('Nothing for now').waitFor();
 
-    await expect.poll(async () => (await mailFor(email)).map((m) => m.subject).join(' | '), { timeout: 30_000, interval: 500 }).toContain(reference);
+    await expect
+      .poll(async () => (await mailFor(email)).map((m) => m.subject).join(' | '), { timeout: 30_000, interval: 500 })
+      .toContain(reference);
     await saveScreenshot(page, 'applicant-my-requests');
     expect(pageErrors).toEqual([]);
     await context.close();

@@ -19,14 +19,27 @@ beforeAll(async () => {
   db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
   const owner = await ensurePerson(db.db, demoPeople.filter((p) => p.role === 'applicant')[1]);
   const [town] = await db.db.select().from(jurisdictions).where(eq(jurisdictions.slug, 'town-of-elderbrook'));
-  request = await createRequestRow(db.db, { applicantId: owner.id, status: 'visit_booked', jurisdictionId: town.id, visitAt: new Date() });
+  request = await createRequestRow(db.db, {
+    applicantId: owner.id,
+    status: 'visit_booked',
+    jurisdictionId: town.id,
+    visitAt: new Date(),
+  });
 });
 afterAll(async () => {
   await db?.pool.end();
   await session?.close();
 });
 
-const centreline = ['Station\tElevation', '0+00\t100.00', '0+10\t100.55', '0+20\t101.10', '0+40\t103.50', '0+60\t105.90', '0+80\t108.30'].join('\n');
+const centreline = [
+  'Station\tElevation',
+  '0+00\t100.00',
+  '0+10\t100.55',
+  '0+20\t101.10',
+  '0+40\t103.50',
+  '0+60\t105.90',
+  '0+80\t108.30',
+].join('\n');
 
 describe('the road edge, outlet control and the warped apron on screen', () => {
   it('the office enters them, sees the findings, the headwater and the warp stakes live; the crew reads them on the field sheet', async () => {
@@ -38,14 +51,20 @@ describe('the road edge, outlet control and the warped apron on screen', () => {
     await page.getByLabel('Pasted centreline').fill(centreline);
     await page.getByRole('button', { name: 'Use the pasted rows' }).click();
     await page.getByTestId('live-verdict').waitFor();
-    expect(await page.locator('tr[data-rule="grade.road-edge-change"]').getAttribute('data-status')).toBe('not-checked');
+    expect(await page.locator('tr[data-rule="grade.road-edge-change"]').getAttribute('data-status')).toBe(
+      'not-checked',
+    );
 
     await page.getByLabel('Road cross slope (%)').fill('2');
     await page.getByLabel('Shoulder width (ft)').fill('3');
     await page.getByText('Shoulder slope (%): give the shoulder slope for a shoulder this wide').waitFor();
     await page.getByLabel('Shoulder slope (%)').fill('4');
-    await expect.poll(() => page.locator('tr[data-rule="grade.road-edge-change"]').getAttribute('data-status')).toBe('pass');
-    expect(await page.locator('tr[data-rule="grade.road-edge-change"]').textContent()).toContain('Grade change at the road edge');
+    await expect
+      .poll(() => page.locator('tr[data-rule="grade.road-edge-change"]').getAttribute('data-status'))
+      .toBe('pass');
+    expect(await page.locator('tr[data-rule="grade.road-edge-change"]').textContent()).toContain(
+      'Grade change at the road edge',
+    );
 
     await page.getByLabel('There is a ditch: the entrance needs a culvert').check();
     await page.getByLabel('Flowline (invert) at the inlet (ft)').fill('98');
@@ -54,7 +73,9 @@ describe('the road edge, outlet control and the warped apron on screen', () => {
     await page.getByLabel('Pipe length (ft)').fill('30');
     await page.getByLabel('Design flow (cfs)').fill('4');
     await page.getByLabel('Tailwater depth in the outlet ditch (ft)').fill('0.5');
-    await expect.poll(() => page.getByTestId('culvert-headwater').textContent()).toMatch(/(inlet|outlet) control governs \(inlet control [\d.]+ ft, outlet control [\d.]+ ft\)/);
+    await expect
+      .poll(() => page.getByTestId('culvert-headwater').textContent())
+      .toMatch(/(inlet|outlet) control governs \(inlet control [\d.]+ ft, outlet control [\d.]+ ft\)/);
 
     await page.getByLabel('Check both edges of the entrance and give the crew warp stakes').check();
     await page.getByLabel('Warp length (ft)').fill('20');
@@ -63,7 +84,9 @@ describe('the road edge, outlet control and the warped apron on screen', () => {
     await stakes.waitFor();
     // Stakes every 10 ft through the 15 ft landing and the 20 ft warp after it: 0+00 to 0+30, then 0+35.
     await expect.poll(() => stakes.locator('tbody tr').count()).toBe(5);
-    expect(await page.locator('tr[data-rule="apron.left.landing.max-grade"]').textContent()).toContain('Left edge of the entrance: landing grade (rising)');
+    expect(await page.locator('tr[data-rule="apron.left.landing.max-grade"]').textContent()).toContain(
+      'Left edge of the entrance: landing grade (rising)',
+    );
     await saveScreenshot(page, 'grade-check-edges-live');
 
     await page.getByRole('button', { name: 'Save this check' }).click();
@@ -74,11 +97,19 @@ describe('the road edge, outlet control and the warped apron on screen', () => {
     await page.getByRole('button', { name: 'Attach it anyway' }).click();
     await page.getByRole('list', { name: 'Saved checks' }).getByText('Attached').waitFor();
     const [saved] = await db.db.select().from(gradeChecks).where(eq(gradeChecks.requestId, request.id));
-    expect((saved.inputs as { roadSide?: unknown }).roadSide).toEqual({ roadCrossSlopePercent: 2, shoulderWidthFt: 3, shoulderSlopePercent: 4 });
+    expect((saved.inputs as { roadSide?: unknown }).roadSide).toEqual({
+      roadCrossSlopePercent: 2,
+      shoulderWidthFt: 3,
+      shoulderSlopePercent: 4,
+    });
     await context.close();
 
     await db.db.update(requests).set({ status: 'released' }).where(eq(requests.id, request.id));
-    const phone = await session.browser.newContext({ viewport: { width: 412, height: 915 }, isMobile: true, hasTouch: true });
+    const phone = await session.browser.newContext({
+      viewport: { width: 412, height: 915 },
+      isMobile: true,
+      hasTouch: true,
+    });
     const crewPage = await phone.newPage();
     await signInAs(crewPage, crewLead.email);
     await crewPage.goto(appUrl(`/crew/jobs/${request.id}/field-sheet`));

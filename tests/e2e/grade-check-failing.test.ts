@@ -19,14 +19,27 @@ beforeAll(async () => {
   db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
   const owner = await ensurePerson(db.db, ownerPerson);
   const [marrow] = await db.db.select().from(jurisdictions).where(eq(jurisdictions.slug, 'marrow-county'));
-  request = await createRequestRow(db.db, { applicantId: owner.id, status: 'visit_booked', jurisdictionId: marrow.id, visitAt: new Date() });
+  request = await createRequestRow(db.db, {
+    applicantId: owner.id,
+    status: 'visit_booked',
+    jurisdictionId: marrow.id,
+    visitAt: new Date(),
+  });
 });
 afterAll(async () => {
   await db?.pool.end();
   await session?.close();
 });
 
-const centreline = ['Station\tElevation', '0+00\t100.00', '0+10\t100.55', '0+20\t101.10', '0+40\t103.50', '0+60\t105.90', '0+80\t108.30'].join('\n');
+const centreline = [
+  'Station\tElevation',
+  '0+00\t100.00',
+  '0+10\t100.55',
+  '0+20\t101.10',
+  '0+40\t103.50',
+  '0+60\t105.90',
+  '0+80\t108.30',
+].join('\n');
 
 describe('a grade check that fails the rules', () => {
   it('is attached only after the office says yes, reads plainly as failing to the owner, and can be withdrawn', async () => {

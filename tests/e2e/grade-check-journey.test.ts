@@ -20,7 +20,13 @@ beforeAll(async () => {
   db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
   const owner = await ensurePerson(db.db, applicant);
   const [marrow] = await db.db.select().from(jurisdictions).where(eq(jurisdictions.slug, 'marrow-county'));
-  request = await createRequestRow(db.db, { applicantId: owner.id, applicantName: applicant.name, status: 'visit_booked', jurisdictionId: marrow.id, visitAt: new Date() });
+  request = await createRequestRow(db.db, {
+    applicantId: owner.id,
+    applicantName: applicant.name,
+    status: 'visit_booked',
+    jurisdictionId: marrow.id,
+    visitAt: new Date(),
+  });
 });
 afterAll(async () => {
   await db?.pool.end();
@@ -29,7 +35,15 @@ afterAll(async () => {
 
 const shot = (page: Page, name: string) => saveScreenshot(page, `grade-check-${name}`);
 
-const centreline = ['Station\tElevation', '0+00\t100.00', '0+10\t100.55', '0+20\t101.10', '0+40\t103.50', '0+60\t105.90', '0+80\t108.30'].join('\n');
+const centreline = [
+  'Station\tElevation',
+  '0+00\t100.00',
+  '0+10\t100.55',
+  '0+20\t101.10',
+  '0+40\t103.50',
+  '0+60\t105.90',
+  '0+80\t108.30',
+].join('\n');
 const verdict = (page: Page) => page.getByTestId('live-verdict');
 
 describe('from visit booked to checked', () => {

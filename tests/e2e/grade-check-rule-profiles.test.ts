@@ -32,7 +32,9 @@ describe('rule profile versions', () => {
     const landing = page.getByLabel('Landing: steepest rise away from the road (%)');
     expect(await landing.inputValue()).toBe('4');
     await landing.fill('5');
-    await page.getByLabel('Source for landing: steepest rise away from the road').fill('Road Commission resolution 14, item 3');
+    await page
+      .getByLabel('Source for landing: steepest rise away from the road')
+      .fill('Road Commission resolution 14, item 3');
     await page.getByLabel('Maximum driveway grade beyond the landing (%)').fill('steep');
     await page.getByRole('button', { name: 'Save draft' }).click();
     await page.getByText('"steep" is not a number').waitFor();

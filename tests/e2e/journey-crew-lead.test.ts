@@ -19,12 +19,30 @@ let address: string;
 beforeAll(async () => {
   session = await launchBrowser();
   db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
-  const applicant = await ensurePerson(db.db, demoPeople.find((p) => p.role === 'applicant')!);
-  const staff = await ensurePerson(db.db, demoPeople.find((p) => p.role === 'staff')!);
-  const job = await createReleasedJob(db.db, { applicantId: applicant.id, staffId: staff.id, siteLat: 44.1, siteLng: -72.6 });
+  const applicant = await ensurePerson(
+    db.db,
+    demoPeople.find((p) => p.role === 'applicant')!,
+  );
+  const staff = await ensurePerson(
+    db.db,
+    demoPeople.find((p) => p.role === 'staff')!,
+  );
+  const job = await createReleasedJob(db.db, {
+    applicantId: applicant.id,
+    staffId: staff.id,
+    siteLat: 44.1,
+    siteLng: -72.6,
+  });
   jobId = job.id;
   address = job.siteAddress;
-  await db.db.insert(messages).values({ requestId: job.id, authorId: applicant.id, visibility: 'shared', body: 'The septic lid is left of the entrance; please keep off it.' });
+  await db.db
+    .insert(messages)
+    .values({
+      requestId: job.id,
+      authorId: applicant.id,
+      visibility: 'shared',
+      body: 'The septic lid is left of the entrance; please keep off it.',
+    });
   // The same yard the owner's test types in, so the distance on the board holds whichever test runs first.
   await saveYard(db.db, { label: 'Marrow Crossing yard', lat: 44, lng: -72.6 });
 });
@@ -47,7 +65,11 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     await page.getByLabel('Latitude').fill('44.0');
     await page.getByLabel('Longitude').fill('east');
     await page.getByRole('button', { name: 'Save the yard' }).click();
-    await page.getByText('longitude is between -180 and 180').or(page.getByText(/must be a number/)).first().waitFor();
+    await page
+      .getByText('longitude is between -180 and 180')
+      .or(page.getByText(/must be a number/))
+      .first()
+      .waitFor();
     await page.getByLabel('Longitude').fill('-72.6');
     await page.getByRole('button', { name: 'Save the yard' }).click();
     await page.getByText('Yard saved').waitFor();
@@ -57,11 +79,19 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
   });
 
   it('works through the board, my jobs, the field sheet and the as-built screen', async () => {
-    const context = await session.browser.newContext({ viewport: { width: 412, height: 915 }, isMobile: true, hasTouch: true });
+    const context = await session.browser.newContext({
+      viewport: { width: 412, height: 915 },
+      isMobile: true,
+      hasTouch: true,
+    });
     const page = await context.newPage();
     await signInAs(page, crewLead.email);
     await page.goto(appUrl('/crew/board'));
-    const card = page.getByRole('article').filter({ hasText: address }).filter({ has: page.getByText(/HT-ACC-/) }).last();
+    const card = page
+      .getByRole('article')
+      .filter({ hasText: address })
+      .filter({ has: page.getByText(/HT-ACC-/) })
+      .last();
     await card.waitFor();
     await page.getByRole('button', { name: 'Nearest the yard first' }).click();
     await card.getByText('6.9 miles in a straight line').waitFor();
@@ -73,7 +103,10 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     const date = new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
     await mine.getByLabel('Work day').fill(date);
     await mine.getByRole('button', { name: 'Plan this day' }).click();
-    await page.getByText(/The homeowner has been e-mailed/).first().waitFor();
+    await page
+      .getByText(/The homeowner has been e-mailed/)
+      .first()
+      .waitFor();
     await shot(page, 'my-jobs-planned');
     await page.getByRole('region', { name: 'Planned' }).getByRole('button', { name: 'Start work' }).first().click();
     await page.getByRole('region', { name: 'Under way' }).waitFor();
@@ -83,13 +116,26 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     expect(await page.getByText('rising away from the road').count()).toBeGreaterThan(0);
     expect(await page.getByText(/buried utilities/).isVisible()).toBe(true);
     // The crew holding the job reads the owner's messages under the sheet and answers them.
-    const talk = page.locator('section', { has: page.getByRole('heading', { name: 'Messages with the property owner and the office' }) });
+    const talk = page.locator('section', {
+      has: page.getByRole('heading', { name: 'Messages with the property owner and the office' }),
+    });
     await talk.getByText('The septic lid is left of the entrance; please keep off it.').waitFor();
-    await talk.getByLabel('Write to the property owner and the office').fill('Noted: we will stake the lid before the machine arrives.');
+    await talk
+      .getByLabel('Write to the property owner and the office')
+      .fill('Noted: we will stake the lid before the machine arrives.');
     await talk.getByRole('button', { name: 'Send message' }).click();
     await talk.getByText('Noted: we will stake the lid before the machine arrives.').waitFor();
-    await expect.poll(async () => (await db.db.select({ to: emails.toAddress }).from(emails)
-      .where(and(eq(emails.requestId, jobId), eq(emails.template, 'message.shared')))).length).toBe(2);
+    await expect
+      .poll(
+        async () =>
+          (
+            await db.db
+              .select({ to: emails.toAddress })
+              .from(emails)
+              .where(and(eq(emails.requestId, jobId), eq(emails.template, 'message.shared')))
+          ).length,
+      )
+      .toBe(2);
     await shot(page, 'field-sheet-phone');
     await page.setViewportSize({ width: 1280, height: 900 });
     await shot(page, 'field-sheet');

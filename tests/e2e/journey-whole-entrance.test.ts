@@ -6,7 +6,15 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { StoredMessage } from '../../fakes';
 import { demoPeople } from '../../server/dev/seed/demo-people';
 import { solidPng } from '../factories/photo-images';
-import { appUrl, caughtMail, launchBrowser, saveScreenshot, screenshotPath, signInAs, siteJpeg } from '../setup/browser';
+import {
+  appUrl,
+  caughtMail,
+  launchBrowser,
+  saveScreenshot,
+  screenshotPath,
+  signInAs,
+  siteJpeg,
+} from '../setup/browser';
 
 /**
  * One driveway entrance from the first form to the closed request, through the real screens of all three roles,
@@ -38,12 +46,16 @@ async function as(browser: Browser, email: string, name?: string, viewport = { w
 }
 
 async function inbox(address: string): Promise<StoredMessage[]> {
-  return (await caughtMail()).filter((m) => m.to.some((to) => to.toLowerCase() === address.toLowerCase()))
+  return (await caughtMail())
+    .filter((m) => m.to.some((to) => to.toLowerCase() === address.toLowerCase()))
     .sort((a, b) => a.receivedAt.localeCompare(b.receivedAt) || a.id.localeCompare(b.id));
 }
 
 /** Waits until the homeowner has received `count` e-mails, so each step's e-mail is known to arrive in its turn. */
-const received = (count: number) => expect.poll(async () => (await inbox(owner.email)).length, { timeout: 30_000, interval: 300 }).toBeGreaterThanOrEqual(count);
+const received = (count: number) =>
+  expect
+    .poll(async () => (await inbox(owner.email)).length, { timeout: 30_000, interval: 300 })
+    .toBeGreaterThanOrEqual(count);
 
 const sitePhoto = (page: Page) => siteJpeg(page, 44.1802, -72.6411);
 
@@ -51,13 +63,21 @@ const sitePhoto = (page: Page) => siteJpeg(page, 44.1802, -72.6411);
  * An office action from the workspace's "Next step" panel, filled by `fill` and sent with its own button; done
  * when the request's status badge shows the new status in plain words.
  */
-async function officeAction(page: Page, label: string, to: string, fill?: (form: ReturnType<Page['getByRole']>) => Promise<void>) {
+async function officeAction(
+  page: Page,
+  label: string,
+  to: string,
+  fill?: (form: ReturnType<Page['getByRole']>) => Promise<void>,
+) {
   await page.getByRole('button', { name: label, exact: true }).click();
   const form = page.getByRole('form', { name: label });
   if (fill) await fill(form);
   await form.getByRole('button', { name: label }).click();
   try {
-    await page.locator('section', { has: page.getByRole('heading', { name: 'At a glance' }) }).getByText(to, { exact: true }).waitFor();
+    await page
+      .locator('section', { has: page.getByRole('heading', { name: 'At a glance' }) })
+      .getByText(to, { exact: true })
+      .waitFor();
   } catch (error) {
     await page.screenshot({ path: screenshotPath(`journey-failed-${label.replaceAll(' ', '-')}`), fullPage: true });
     throw error;
@@ -90,14 +110,19 @@ describe('the whole journey of one entrance', () => {
     await page.getByLabel('Cars and pickups').check();
     await page.getByLabel('An open ditch, no pipe').check();
     await page.getByLabel('When would you like the work done?').selectOption('within_3_months');
-    await page.getByLabel('Anything else the office should know? (optional)').fill('Power line crosses 30 ft in; the gate sticks.');
+    await page
+      .getByLabel('Anything else the office should know? (optional)')
+      .fill('Power line crosses 30 ft in; the gate sticks.');
     await shot(page, 'applicant-wizard-entrance');
     await page.getByRole('button', { name: 'Save and continue' }).click();
     await page.getByRole('heading', { name: /Step 3 of 4/ }).waitFor();
-    await page.locator('.uppy-Dashboard-input').first().setInputFiles([
-      { name: 'from-the-road.jpg', mimeType: 'image/jpeg', buffer: await sitePhoto(page) },
-      { name: 'ditch-line.png', mimeType: 'image/png', buffer: solidPng(48, 32, [110, 90, 58]) },
-    ]);
+    await page
+      .locator('.uppy-Dashboard-input')
+      .first()
+      .setInputFiles([
+        { name: 'from-the-road.jpg', mimeType: 'image/jpeg', buffer: await sitePhoto(page) },
+        { name: 'ditch-line.png', mimeType: 'image/png', buffer: solidPng(48, 32, [110, 90, 58]) },
+      ]);
     await page.getByText('2 photos').waitFor({ timeout: 30_000 });
     await page.getByRole('button', { name: 'Use this position' }).click();
     await page.getByText('The site position is now set from your photo.').waitFor();
@@ -108,7 +133,10 @@ describe('the whole journey of one entrance', () => {
     await page.getByRole('button', { name: 'Send to the office' }).click();
     await page.waitForURL(/\/my\/requests\/[0-9a-f-]{36}$/);
     const requestId = new URL(page.url()).pathname.split('/').pop()!;
-    const reference = (await page.getByText(/Reference GP-\d{4}-\d{5}/).first().textContent())!.match(/GP-\d{4}-\d{5}/)![0];
+    const reference = (await page
+      .getByText(/Reference GP-\d{4}-\d{5}/)
+      .first()
+      .textContent())!.match(/GP-\d{4}-\d{5}/)![0];
     await shot(page, 'applicant-request-sent');
     await received(1);
 
@@ -121,7 +149,9 @@ describe('the whole journey of one entrance', () => {
     await page.getByRole('link', { name: reference }).click();
     await page.getByRole('heading', { name: reference }).waitFor();
     await shot(page, 'office-workspace-submitted');
-    await officeAction(page, 'Book the site visit', 'Site visit booked', (form) => form.getByLabel('Date and time of the site visit').fill(`${isoDay(2)}T09:30`));
+    await officeAction(page, 'Book the site visit', 'Site visit booked', (form) =>
+      form.getByLabel('Date and time of the site visit').fill(`${isoDay(2)}T09:30`),
+    );
     await received(2);
 
     await page.getByRole('link', { name: 'Survey and grade check' }).click();
@@ -129,7 +159,19 @@ describe('the whole journey of one entrance', () => {
     const marrow = (await page.locator('option', { hasText: 'Marrow County' }).first().textContent())!;
     await page.getByLabel("Road authority's rule profile").selectOption({ label: marrow });
     await page.getByText('Paste from a spreadsheet').click();
-    await page.getByLabel('Pasted centreline').fill(['Station\tElevation', '0+00\t100.00', '0+10\t100.55', '0+20\t101.10', '0+40\t103.50', '0+60\t105.90', '0+80\t108.30'].join('\n'));
+    await page
+      .getByLabel('Pasted centreline')
+      .fill(
+        [
+          'Station\tElevation',
+          '0+00\t100.00',
+          '0+10\t100.55',
+          '0+20\t101.10',
+          '0+40\t103.50',
+          '0+60\t105.90',
+          '0+80\t108.30',
+        ].join('\n'),
+      );
     await page.getByRole('button', { name: 'Use the pasted rows' }).click();
     await page.getByLabel('Road grade at the entrance (%)').fill('1.5');
     await page.getByLabel('Sight distance measured left (ft)').fill('650');
@@ -155,11 +197,15 @@ describe('the whole journey of one entrance', () => {
     // A fresh load: the workspace's cached copy of the request does not yet know the check screen marked it checked.
     await page.goto(appUrl(`/office/requests/${requestId}`));
     await page.getByRole('heading', { name: reference }).waitFor();
-    await officeAction(page, 'Record permit filed', 'Permit filed', (form) => form.getByLabel('Permit reference').fill('MC-DA-2026-0412'));
+    await officeAction(page, 'Record permit filed', 'Permit filed', (form) =>
+      form.getByLabel('Permit reference').fill('MC-DA-2026-0412'),
+    );
     await received(4);
     await officeAction(page, 'Record permit granted', 'Permit granted', async (form) => {
       await form.getByLabel('Decided on').fill(isoDay(0));
-      await form.getByLabel('Conditions (optional)').fill('Cones and a flagger on Sawmill Flats Road; county inspection of the culvert before backfill.');
+      await form
+        .getByLabel('Conditions (optional)')
+        .fill('Cones and a flagger on Sawmill Flats Road; county inspection of the culvert before backfill.');
       await form.getByLabel('Permit expires on (optional)').fill(isoDay(180));
     });
     await received(5);
@@ -192,7 +238,12 @@ describe('the whole journey of one entrance', () => {
     await page.getByRole('article').filter({ hasText: reference }).getByRole('button', { name: 'Start work' }).click();
     await page.getByRole('region', { name: 'Under way' }).getByText(reference).waitFor();
     await received(9);
-    await page.getByRole('region', { name: 'Under way' }).getByRole('article').filter({ hasText: reference }).getByRole('link', { name: 'Enter as-built readings' }).click();
+    await page
+      .getByRole('region', { name: 'Under way' })
+      .getByRole('article')
+      .filter({ hasText: reference })
+      .getByRole('link', { name: 'Enter as-built readings' })
+      .click();
     await page.getByLabel('Station 1', { exact: true }).fill('0+05');
     await page.getByLabel('Grade %').first().fill('3.1');
     await page.getByRole('button', { name: 'Add a reading' }).click();
@@ -227,7 +278,13 @@ describe('the whole journey of one entrance', () => {
     await timeline.getByText(/Work planned for/).waitFor();
     await timeline.getByText('Finished').waitFor();
     const photos = page.getByRole('img', { name: /from-the-road|ditch-line/ });
-    await expect.poll(() => photos.evaluateAll((imgs) => imgs.length === 2 && imgs.every((img) => (img as HTMLImageElement).naturalWidth > 0))).toBe(true);
+    await expect
+      .poll(() =>
+        photos.evaluateAll(
+          (imgs) => imgs.length === 2 && imgs.every((img) => (img as HTMLImageElement).naturalWidth > 0),
+        ),
+      )
+      .toBe(true);
     await shot(page, 'applicant-finished');
 
     const subjects = (await inbox(owner.email)).map((m) => m.subject);

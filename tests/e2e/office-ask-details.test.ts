@@ -19,7 +19,11 @@ beforeAll(async () => {
   session = await launchBrowser();
   seeded = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
   const [applicant] = await seeded.db.select().from(users).where(eq(users.email, owner.email));
-  request = await createRequestRow(seeded.db, { applicantId: applicant.id, applicantName: owner.name, siteAddress: '7 Wren Hollow Road, Fenwick Falls' });
+  request = await createRequestRow(seeded.db, {
+    applicantId: applicant.id,
+    applicantName: owner.name,
+    siteAddress: '7 Wren Hollow Road, Fenwick Falls',
+  });
 });
 afterAll(async () => {
   await session?.close();
@@ -49,7 +53,10 @@ describe('the office asks for details and the owner answers', () => {
     await office.getByRole('heading', { name: request.reference }).waitFor();
     await office.getByRole('button', { name: 'Ask for details' }).click();
     await office.getByLabel('Questions for the property owner').fill(question);
-    await office.getByRole('form', { name: 'Ask for details' }).getByRole('button', { name: 'Ask for details' }).click();
+    await office
+      .getByRole('form', { name: 'Ask for details' })
+      .getByRole('button', { name: 'Ask for details' })
+      .click();
     await office.getByText('More details needed').first().waitFor();
     await shot(office, 'office-workspace-asked');
 
@@ -64,7 +71,12 @@ describe('the office asks for details and the owner answers', () => {
     await home.goto(href!);
     await home.getByLabel('Your answer').fill('It is 15 in, and the ditch is about 2 ft deep.');
     await home.getByRole('button', { name: 'Send my answer' }).click();
-    await expect.poll(async () => (await seeded.db.select({ s: requests.status }).from(requests).where(eq(requests.id, request.id)))[0].s).toBe('submitted');
+    await expect
+      .poll(
+        async () =>
+          (await seeded.db.select({ s: requests.status }).from(requests).where(eq(requests.id, request.id)))[0].s,
+      )
+      .toBe('submitted');
 
     await office.goto(appUrl('/office/queue?status=submitted'));
     await office.getByRole('link', { name: request.reference }).waitFor();
@@ -77,7 +89,10 @@ describe('the office asks for details and the owner answers', () => {
     const row = office.getByRole('row').filter({ hasText: owner.email }).filter({ hasText: request.reference });
     await row.first().waitFor();
     expect(await row.first().textContent()).toContain('Sent');
-    await row.first().getByRole('button', { name: /More details needed/ }).click();
+    await row
+      .first()
+      .getByRole('button', { name: /More details needed/ })
+      .click();
     await office.getByText(question).first().waitFor();
     await shot(office, 'office-email-log');
   });
@@ -91,7 +106,9 @@ describe('the office asks for details and the owner answers', () => {
     expect(await phone.getByRole('table').count()).toBe(0);
     await phone.getByRole('link', { name: request.reference }).click();
     await phone.getByRole('heading', { name: request.reference }).waitFor();
-    const overflow = await phone.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
+    const overflow = await phone.evaluate(
+      () => document.documentElement.scrollWidth - document.documentElement.clientWidth,
+    );
     expect(overflow).toBeLessThanOrEqual(0);
     await shot(phone, 'office-workspace-phone');
   });

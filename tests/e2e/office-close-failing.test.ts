@@ -17,16 +17,29 @@ const staff = demoPeople.filter((p) => p.role === 'staff')[0];
 beforeAll(async () => {
   session = await launchBrowser();
   db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
-  const applicant = await ensurePerson(db.db, demoPeople.find((p) => p.role === 'applicant')!);
+  const applicant = await ensurePerson(
+    db.db,
+    demoPeople.find((p) => p.role === 'applicant')!,
+  );
   const office = await ensurePerson(db.db, staff);
-  const crew = await ensurePerson(db.db, demoPeople.find((p) => p.role === 'crew')!);
+  const crew = await ensurePerson(
+    db.db,
+    demoPeople.find((p) => p.role === 'crew')!,
+  );
   const job = await createReleasedJob(db.db, { applicantId: applicant.id, staffId: office.id });
   jobId = job.id;
   await db.db.update(requests).set({ status: 'built', crewId: crew.id }).where(eq(requests.id, job.id));
-  await db.db.update(jobs).set({ crewId: crew.id, acceptedAt: new Date(), startedAt: new Date(), builtAt: new Date() }).where(eq(jobs.requestId, job.id));
+  await db.db
+    .update(jobs)
+    .set({ crewId: crew.id, acceptedAt: new Date(), startedAt: new Date(), builtAt: new Date() })
+    .where(eq(jobs.requestId, job.id));
   await createAsBuiltSet(db.db, {
-    requestId: job.id, gradeCheckId: job.gradeCheckId, crewId: crew.id, passed: false,
-    readings: [{ stationFt: 5, gradePercent: 6.5 }], note: 'Ledge rock under the landing; the township inspector saw it.',
+    requestId: job.id,
+    gradeCheckId: job.gradeCheckId,
+    crewId: crew.id,
+    passed: false,
+    readings: [{ stationFt: 5, gradePercent: 6.5 }],
+    note: 'Ledge rock under the landing; the township inspector saw it.',
   });
 });
 afterAll(async () => {
@@ -48,7 +61,10 @@ describe('closing a job built over failing readings', () => {
     await saveScreenshot(page, 'office-close-failing-warning');
     await note.fill('The township accepted the landing as built on site.');
     await form.getByRole('button', { name: 'Close the request' }).click();
-    await page.locator('section', { has: page.getByRole('heading', { name: 'At a glance' }) }).getByText('Finished', { exact: true }).waitFor();
+    await page
+      .locator('section', { has: page.getByRole('heading', { name: 'At a glance' }) })
+      .getByText('Finished', { exact: true })
+      .waitFor();
     await context.close();
   });
 });

@@ -6,7 +6,9 @@ import { completeApplication } from '../factories/request-rows';
 import { appUrl, launchBrowser, saveScreenshot, signInAs } from '../setup/browser';
 
 let session: Awaited<ReturnType<typeof launchBrowser>>;
-beforeAll(async () => { session = await launchBrowser(); });
+beforeAll(async () => {
+  session = await launchBrowser();
+});
 afterAll(() => session?.close());
 
 describe('a HEIC photo in a browser that cannot draw it', () => {
@@ -17,12 +19,36 @@ describe('a HEIC photo in a browser that cannot draw it', () => {
     // The wizard's own API calls, then a real presigned upload of a HEIC file (a made-up site position).
     const created = (await (await owner.request.post(appUrl('/api/requests'), { data: {} })).json()).request;
     const { site, entrance } = completeApplication();
-    const draft = (await (await owner.request.patch(appUrl(`/api/requests/${created.id}/draft`), { data: { expectedVersion: 1, wizardStep: 3, site, entrance } })).json()).request;
+    const draft = (
+      await (
+        await owner.request.patch(appUrl(`/api/requests/${created.id}/draft`), {
+          data: { expectedVersion: 1, wizardStep: 3, site, entrance },
+        })
+      ).json()
+    ).request;
     const heic = heicWithPosition(43.9, -72.3).file;
-    const ticket = await (await owner.request.post(appUrl(`/api/requests/${draft.id}/photos`), { data: { fileName: 'entrance.heic', contentType: 'image/heic', sizeBytes: heic.length } })).json();
-    expect((await fetch(ticket.upload.url, { method: 'PUT', headers: ticket.upload.headers, body: heic })).status).toBe(200);
-    expect((await owner.request.post(appUrl(`/api/requests/${draft.id}/photos/${ticket.photo.id}/confirm`), { data: { gpsLat: null, gpsLng: null } })).status()).toBe(200);
-    expect((await owner.request.post(appUrl(`/api/requests/${draft.id}/transitions`), { data: { action: 'submit', expectedVersion: draft.version } })).status()).toBe(200);
+    const ticket = await (
+      await owner.request.post(appUrl(`/api/requests/${draft.id}/photos`), {
+        data: { fileName: 'entrance.heic', contentType: 'image/heic', sizeBytes: heic.length },
+      })
+    ).json();
+    expect((await fetch(ticket.upload.url, { method: 'PUT', headers: ticket.upload.headers, body: heic })).status).toBe(
+      200,
+    );
+    expect(
+      (
+        await owner.request.post(appUrl(`/api/requests/${draft.id}/photos/${ticket.photo.id}/confirm`), {
+          data: { gpsLat: null, gpsLng: null },
+        })
+      ).status(),
+    ).toBe(200);
+    expect(
+      (
+        await owner.request.post(appUrl(`/api/requests/${draft.id}/transitions`), {
+          data: { action: 'submit', expectedVersion: draft.version },
+        })
+      ).status(),
+    ).toBe(200);
 
     await owner.goto(appUrl(`/my/requests/${draft.id}`));
     await owner.getByText('This browser cannot show HEIC photos.').waitFor();
@@ -37,7 +63,9 @@ describe('a HEIC photo in a browser that cannot draw it', () => {
     await grid.click();
     const viewer = staff.getByRole('dialog', { name: 'Photo viewer' });
     await viewer.getByText('This browser cannot show HEIC photos.').waitFor();
-    expect(await viewer.getByRole('link', { name: 'Open entrance.heic' }).getAttribute('href')).toContain('X-Amz-Signature');
+    expect(await viewer.getByRole('link', { name: 'Open entrance.heic' }).getAttribute('href')).toContain(
+      'X-Amz-Signature',
+    );
     await saveScreenshot(staff, 'office-heic-viewer');
     await ownerContext.close();
     await staffContext.close();

@@ -15,11 +15,18 @@ beforeAll(async () => {
   session = await launchBrowser();
   seeded = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
   // Two messages that gave up during a long mail outage, as the worker leaves them.
-  await seeded.db.insert(emails).values([1, 2].map((i) => ({
-    toAddress: 'ellen.marsh@example.test', template: 'status-change', subject: `Outage check ${tag} ${i}`,
-    textBody: 'Your request moved on.', htmlBody: '<p>Your request moved on.</p>', status: 'dead' as const,
-    attempts: 40, lastError: 'ECONNREFUSED: connect ECONNREFUSED 127.0.0.1:25',
-  })));
+  await seeded.db.insert(emails).values(
+    [1, 2].map((i) => ({
+      toAddress: 'ellen.marsh@example.test',
+      template: 'status-change',
+      subject: `Outage check ${tag} ${i}`,
+      textBody: 'Your request moved on.',
+      htmlBody: '<p>Your request moved on.</p>',
+      status: 'dead' as const,
+      attempts: 40,
+      lastError: 'ECONNREFUSED: connect ECONNREFUSED 127.0.0.1:25',
+    })),
+  );
 });
 afterAll(async () => {
   await session?.close();

@@ -50,7 +50,9 @@ describe('the admin adds a person', () => {
     await page.getByRole('textbox', { name: 'Name', exact: true }).fill('Someone Else');
     await email.fill(owner.email);
     await page.getByRole('button', { name: 'Add person' }).click();
-    await expect.poll(() => page.getByRole('alert').first().textContent()).toContain(`E-mail: ${owner.email} already belongs to ${owner.name}`);
+    await expect
+      .poll(() => page.getByRole('alert').first().textContent())
+      .toContain(`E-mail: ${owner.email} already belongs to ${owner.name}`);
     expect(await email.getAttribute('aria-invalid')).toBe('true');
     await saveScreenshot(page, 'users-duplicate-email');
     await context.close();

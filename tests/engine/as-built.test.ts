@@ -26,7 +26,9 @@ describe('as-built reading classification', () => {
   });
 
   it('refuses a negative tolerance with the typed error', () => {
-    expect(() => classifyAsBuiltReading({ measured: 1, limit: 1, tolerance: -1, kind: 'max' })).toThrow(EngineInputError);
+    expect(() => classifyAsBuiltReading({ measured: 1, limit: 1, tolerance: -1, kind: 'max' })).toThrow(
+      EngineInputError,
+    );
   });
 });
 
@@ -59,8 +61,16 @@ describe('as-built check along the centreline', () => {
   it('turns elevation shots into grades and holds them to the design elevation tolerance', () => {
     const r = checkAsBuilt({
       ruleProfile: rules,
-      readings: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 100.8 }, { stationFt: 40, elevationFt: 104.2 }],
-      design: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 100.8 }, { stationFt: 40, elevationFt: 104.1 }],
+      readings: [
+        { stationFt: 0, elevationFt: 100 },
+        { stationFt: 20, elevationFt: 100.8 },
+        { stationFt: 40, elevationFt: 104.2 },
+      ],
+      design: [
+        { stationFt: 0, elevationFt: 100 },
+        { stationFt: 20, elevationFt: 100.8 },
+        { stationFt: 40, elevationFt: 104.1 },
+      ],
     });
     const grades = r.readings.filter((x) => x.ruleId.startsWith('landing.') || x.ruleId === 'grade.max');
     expect(grades.map((x) => x.status)).toEqual(['pass', 'pass']);
@@ -72,8 +82,17 @@ describe('as-built check along the centreline', () => {
 
   it('holds grades beyond the landing to the drainage minimum (common practice (no source) for the 1% value)', () => {
     const drained = ruleProfile({ minDrainageGradePercent: 1 });
-    const r = checkAsBuilt({ ruleProfile: drained, readings: [{ stationFt: 30, gradePercent: 0.5 }, { stationFt: 50, gradePercent: -1.2 }] });
-    expect(r.readings.filter((x) => x.ruleId === 'grade.min-drainage').map((x) => [x.stationFt, x.status])).toEqual([[30, 'fail'], [50, 'pass']]);
+    const r = checkAsBuilt({
+      ruleProfile: drained,
+      readings: [
+        { stationFt: 30, gradePercent: 0.5 },
+        { stationFt: 50, gradePercent: -1.2 },
+      ],
+    });
+    expect(r.readings.filter((x) => x.ruleId === 'grade.min-drainage').map((x) => [x.stationFt, x.status])).toEqual([
+      [30, 'fail'],
+      [50, 'pass'],
+    ]);
     expect(r.passes).toBe(false);
   });
 
@@ -81,12 +100,19 @@ describe('as-built check along the centreline', () => {
     // The template's 13% break limit (17 - 4), with no tolerance.
     const r = checkAsBuilt({
       ruleProfile: commonRuralTemplate,
-      readings: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 99.2 }, { stationFt: 40, elevationFt: 101.2 }, { stationFt: 60, elevationFt: 104.5 }],
+      readings: [
+        { stationFt: 0, elevationFt: 100 },
+        { stationFt: 20, elevationFt: 99.2 },
+        { stationFt: 40, elevationFt: 101.2 },
+        { stationFt: 60, elevationFt: 104.5 },
+      ],
     });
     // -4% then 10% is a 14% break at 0+20; 10% then 16.5% is 6.5% at 0+40.
     const changes = r.readings.filter((x) => x.ruleId === 'grade.max-change');
-    expect(changes.map((x) => [x.stationFt, x.status])).toEqual([[20, 'fail'], [40, 'pass']]);
+    expect(changes.map((x) => [x.stationFt, x.status])).toEqual([
+      [20, 'fail'],
+      [40, 'pass'],
+    ]);
     expect(changes[0].measured).toBeCloseTo(14, 9);
   });
 });
-

@@ -1,12 +1,21 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, commonRuralTemplate, scrapeCheck, STATION_TOLERANCE_FT, type RuleProfile } from '@shared/engine';
+import {
+  checkEntrance,
+  commonRuralTemplate,
+  scrapeCheck,
+  STATION_TOLERANCE_FT,
+  type RuleProfile,
+} from '@shared/engine';
 
 // Properties of the check itself, not against a published value: geometry and the survey's 0.01 ft precision
 // (docs/sources.md, "Survey precision": common practice (no source)).
 
 /** Runs typed to the hundredth, as a surveyor would: lengths 1..30 ft, grades -15..15 %. */
-const typedRuns = fc.array(fc.tuple(fc.integer({ min: 100, max: 3000 }), fc.integer({ min: -1500, max: 1500 })), { minLength: 2, maxLength: 10 });
+const typedRuns = fc.array(fc.tuple(fc.integer({ min: 100, max: 3000 }), fc.integer({ min: -1500, max: 1500 })), {
+  minLength: 2,
+  maxLength: 10,
+});
 
 const profileOf = (runs: [number, number][], shiftFt = 0) => {
   const points = [{ stationFt: shiftFt, elevationFt: 100 }];
@@ -28,7 +37,12 @@ const vehicleArb = fc.record({
 });
 
 const rulesArb: fc.Arbitrary<RuleProfile> = fc
-  .record({ lengthFt: fc.integer({ min: 0, max: 30 }), landingMax: fc.integer({ min: 2, max: 10 }), maxGrade: fc.integer({ min: 8, max: 20 }), drain: fc.option(fc.constantFrom(0.5, 1, 2), { nil: undefined }) })
+  .record({
+    lengthFt: fc.integer({ min: 0, max: 30 }),
+    landingMax: fc.integer({ min: 2, max: 10 }),
+    maxGrade: fc.integer({ min: 8, max: 20 }),
+    drain: fc.option(fc.constantFrom(0.5, 1, 2), { nil: undefined }),
+  })
   .map((r) => ({
     ...commonRuralTemplate,
     landing: { lengthFt: r.lengthFt, minGradePercent: -r.landingMax, maxGradePercent: r.landingMax },
@@ -56,11 +70,19 @@ describe('check properties (fast-check)', () => {
   it('moving every shot by less than half the station tolerance never flips a result', () => {
     const half = STATION_TOLERANCE_FT / 2;
     fc.assert(
-      fc.property(typedRuns, rulesArb, fc.double({ min: -half * 0.98, max: half * 0.98, noNaN: true }), (runs, rules, shift) => {
-        const statuses = (shiftFt: number) =>
-          checkEntrance({ profile: profileOf(runs, shiftFt), roadEdgeStationFt: 0, scrapeStepFt: 0.5 }, rules).findings.map((f) => `${f.ruleId}:${f.status}`);
-        expect(statuses(shift)).toEqual(statuses(0));
-      }),
+      fc.property(
+        typedRuns,
+        rulesArb,
+        fc.double({ min: -half * 0.98, max: half * 0.98, noNaN: true }),
+        (runs, rules, shift) => {
+          const statuses = (shiftFt: number) =>
+            checkEntrance(
+              { profile: profileOf(runs, shiftFt), roadEdgeStationFt: 0, scrapeStepFt: 0.5 },
+              rules,
+            ).findings.map((f) => `${f.ruleId}:${f.status}`);
+          expect(statuses(shift)).toEqual(statuses(0));
+        },
+      ),
       { numRuns: 150 },
     );
   });

@@ -45,7 +45,8 @@ export async function independentOptimum(c: OptimumCase, clearanceShare = 0.97):
     rows.push(`z${i + 1} - z${i} <= ${hi * h}`, `z${i + 1} - z${i} >= 0`);
   }
   const change = (c.maxChangePercent / 100) * h;
-  for (let i = 1; i + 1 < n; i++) rows.push(`z${i + 1} - 2 z${i} + z${i - 1} <= ${change}`, `z${i + 1} - 2 z${i} + z${i - 1} >= ${-change}`);
+  for (let i = 1; i + 1 < n; i++)
+    rows.push(`z${i + 1} - 2 z${i} + z${i - 1} <= ${change}`, `z${i + 1} - 2 z${i} + z${i - 1} >= ${-change}`);
   // Ground point v above the line through the wheels at r and r + wb: z_v - z_r - (z_f - z_r)(v - r)/wb <= clearance.
   for (let r = 0; r + wb < n; r++) {
     const f = r + wb;

@@ -4,7 +4,12 @@ import { crossSectionAreas, EngineInputError, earthworkFromProfiles } from '@sha
 
 /** Shoelace area of a polygon: an oracle independent of the engine's piecewise integration. */
 const shoelace = (pts: [number, number][]) =>
-  Math.abs(pts.reduce((s, [x, y], i) => { const [x2, y2] = pts[(i + 1) % pts.length]; return s + x * y2 - x2 * y; }, 0)) / 2;
+  Math.abs(
+    pts.reduce((s, [x, y], i) => {
+      const [x2, y2] = pts[(i + 1) % pts.length];
+      return s + x * y2 - x2 * y;
+    }, 0),
+  ) / 2;
 
 describe('cross-section areas from top width and side slopes (trapezoid geometry)', () => {
   it('level ground in cut: b d + s d^2', () => {
@@ -14,7 +19,12 @@ describe('cross-section areas from top width and side slopes (trapezoid geometry
   });
 
   it('level ground in fill: b h + s h^2 with the fill slope', () => {
-    const r = crossSectionAreas(-1.5, { topWidthFt: 12, cutSlopeHPerV: 2, fillSlopeHPerV: 3, groundCrossSlopePercent: 0 });
+    const r = crossSectionAreas(-1.5, {
+      topWidthFt: 12,
+      cutSlopeHPerV: 2,
+      fillSlopeHPerV: 3,
+      groundCrossSlopePercent: 0,
+    });
     expect(r.fillSqFt).toBeCloseTo(12 * 1.5 + 3 * 1.5 ** 2, 9);
     expect(r.cutSqFt).toBe(0);
   });
@@ -25,19 +35,31 @@ describe('cross-section areas from top width and side slopes (trapezoid geometry
     const g = 0.1;
     const xr = r.rightCatchFt;
     const xl = -r.leftCatchFt;
-    const polygon: [number, number][] = [[-6, 0], [6, 0], [xr, 2 + g * xr], [xl, 2 + g * xl]];
+    const polygon: [number, number][] = [
+      [-6, 0],
+      [6, 0],
+      [xr, 2 + g * xr],
+      [xl, 2 + g * xl],
+    ];
     expect(r.cutSqFt).toBeCloseTo(shoelace(polygon), 9);
     expect(2 + g * xr).toBeCloseTo((xr - 6) / 2, 9);
   });
 
   it('a mixed section (cut on the high side, fill on the low side) has both areas', () => {
-    const r = crossSectionAreas(0, { topWidthFt: 12, cutSlopeHPerV: 2, fillSlopeHPerV: 2, groundCrossSlopePercent: 20 });
+    const r = crossSectionAreas(0, {
+      topWidthFt: 12,
+      cutSlopeHPerV: 2,
+      fillSlopeHPerV: 2,
+      groundCrossSlopePercent: 20,
+    });
     expect(r.cutSqFt).toBeGreaterThan(0);
     expect(r.fillSqFt).toBeCloseTo(r.cutSqFt, 9);
   });
 
   it('ground steeper than the side slope is refused with the typed error', () => {
-    expect(() => crossSectionAreas(1, { topWidthFt: 12, cutSlopeHPerV: 2, fillSlopeHPerV: 2, groundCrossSlopePercent: 60 })).toThrow(EngineInputError);
+    expect(() =>
+      crossSectionAreas(1, { topWidthFt: 12, cutSlopeHPerV: 2, fillSlopeHPerV: 2, groundCrossSlopePercent: 60 }),
+    ).toThrow(EngineInputError);
   });
 });
 
@@ -47,8 +69,14 @@ describe('earthwork from existing and design profiles', () => {
 
   it('splits the segment where cut turns to fill, so neither volume is averaged across the change', () => {
     const r = earthworkFromProfiles({
-      existing: [{ stationFt: 0, elevationFt: 101 }, { stationFt: 40, elevationFt: 99 }],
-      design: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 40, elevationFt: 100 }],
+      existing: [
+        { stationFt: 0, elevationFt: 101 },
+        { stationFt: 40, elevationFt: 99 },
+      ],
+      design: [
+        { stationFt: 0, elevationFt: 100 },
+        { stationFt: 40, elevationFt: 100 },
+      ],
       template,
     });
     expect(r.sections.map((s) => s.stationFt)).toEqual([0, 20, 40]);
@@ -59,8 +87,14 @@ describe('earthwork from existing and design profiles', () => {
 
   it('prismoidal over a uniform cut depth equals the average end area (both exact for a prism)', () => {
     const input = {
-      existing: [{ stationFt: 0, elevationFt: 102 }, { stationFt: 50, elevationFt: 107 }],
-      design: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 50, elevationFt: 105 }],
+      existing: [
+        { stationFt: 0, elevationFt: 102 },
+        { stationFt: 50, elevationFt: 107 },
+      ],
+      design: [
+        { stationFt: 0, elevationFt: 100 },
+        { stationFt: 50, elevationFt: 105 },
+      ],
       template,
     };
     const a = earthworkFromProfiles(input);

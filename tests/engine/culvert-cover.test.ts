@@ -7,8 +7,28 @@ import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 describe('cover over the culvert counts one wall thickness above the inside diameter', () => {
   const rules = ruleProfile({ culvert: { minCoverIn: 12, lengthIncrementFt: 2 } });
   const cover = (wallThicknessIn: number, surfaceElevationFt: number) => {
-    const culvert = { diameterIn: 18, manningN: 0.012, inletInvertFt: 95.5, outletInvertFt: 95.2, surfaceElevationFt, wallThicknessIn, lengthFt: 30 };
-    return findingOf(checkEntrance({ profile: profileFromRuns([[20, 2], [40, 6]]), culvert }, rules).findings, 'culvert.min-cover');
+    const culvert = {
+      diameterIn: 18,
+      manningN: 0.012,
+      inletInvertFt: 95.5,
+      outletInvertFt: 95.2,
+      surfaceElevationFt,
+      wallThicknessIn,
+      lengthFt: 30,
+    };
+    return findingOf(
+      checkEntrance(
+        {
+          profile: profileFromRuns([
+            [20, 2],
+            [40, 6],
+          ]),
+          culvert,
+        },
+        rules,
+      ).findings,
+      'culvert.min-cover',
+    );
   };
 
   it('an 18 in pipe with a 2 in wall, invert 95.5, under a 98.0 surface has 10 in of cover', () => {

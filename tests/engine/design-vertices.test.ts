@@ -3,7 +3,8 @@ import { designVertices, MIN_VERTEX_SPACING_FT } from '@shared/engine/design-ver
 import { proposeProfile } from '@shared/engine';
 import { ruleProfile } from './fixtures';
 
-const shots = (count: number, spacingFt: number) => Array.from({ length: count }, (_, i) => ({ stationFt: i * spacingFt, elevationFt: 100 }));
+const shots = (count: number, spacingFt: number) =>
+  Array.from({ length: count }, (_, i) => ({ stationFt: i * spacingFt, elevationFt: 100 }));
 const stationsOf = (points: { stationFt: number }[], idx: number[]) => idx.map((i) => points[i].stationFt);
 
 // The minimum spacing between grade breaks is common practice (no source); see design-vertices.ts.
@@ -28,18 +29,27 @@ describe('where a design may break', () => {
   it('proposes a design on a dense survey that breaks no closer than the minimum spacing', async () => {
     // A vehicle with 36 in of clearance never needs a vertical curve, so no stretch allows closer breaks.
     const base = ruleProfile({ minDrainageGradePercent: 1 });
-    const rules = ruleProfile({ minDrainageGradePercent: 1, designVehicle: { ...base.designVehicle, clearanceIn: 36 } });
-    const existing = Array.from({ length: 120 }, (_, i) => ({ stationFt: i, elevationFt: 100 + 1.5 * Math.sin(i / 9) + 0.4 * Math.sin(i / 2.3) }));
+    const rules = ruleProfile({
+      minDrainageGradePercent: 1,
+      designVehicle: { ...base.designVehicle, clearanceIn: 36 },
+    });
+    const existing = Array.from({ length: 120 }, (_, i) => ({
+      stationFt: i,
+      elevationFt: 100 + 1.5 * Math.sin(i / 9) + 0.4 * Math.sin(i / 2.3),
+    }));
     const r = await proposeProfile({ existing, roadEdgeElevationFt: 100 }, rules);
     expect(r.feasible).toBe(true);
     const breaks: number[] = [];
     for (let i = 1; i < r.profile.length - 1; i++) {
       const [a, b, c] = [r.profile[i - 1], r.profile[i], r.profile[i + 1]];
-      const change = (c.elevationFt - b.elevationFt) / (c.stationFt - b.stationFt) - (b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt);
+      const change =
+        (c.elevationFt - b.elevationFt) / (c.stationFt - b.stationFt) -
+        (b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt);
       // A break is a grade change above a thousandth of a percent; straight runs read as zero to rounding.
       if (Math.abs(change) > 1e-5) breaks.push(b.stationFt);
     }
     expect(breaks.length).toBeGreaterThan(0);
-    for (let k = 1; k < breaks.length; k++) expect(breaks[k] - breaks[k - 1]).toBeGreaterThanOrEqual(MIN_VERTEX_SPACING_FT - 0.01);
+    for (let k = 1; k < breaks.length; k++)
+      expect(breaks[k] - breaks[k - 1]).toBeGreaterThanOrEqual(MIN_VERTEX_SPACING_FT - 0.01);
   });
 });

@@ -14,7 +14,12 @@ import {
 // (Wikibooks, Fundamentals of Transportation / Earthwork) worked by hand.
 describe('earthwork volumes (Wikibooks, Fundamentals of Transportation / Earthwork)', () => {
   it('average end area: V = L (A1 + A2) / 2, divided by 27 for cubic yards', () => {
-    const r = earthworkVolume({ sections: [{ stationFt: 0, cutSqFt: 54, fillSqFt: 0 }, { stationFt: 100, cutSqFt: 108, fillSqFt: 0 }] });
+    const r = earthworkVolume({
+      sections: [
+        { stationFt: 0, cutSqFt: 54, fillSqFt: 0 },
+        { stationFt: 100, cutSqFt: 108, fillSqFt: 0 },
+      ],
+    });
     expect(r.cutCuYd).toBeCloseTo((100 * (54 + 108)) / 2 / 27, 9);
     expect(r.fillCuYd).toBe(0);
   });
@@ -22,45 +27,75 @@ describe('earthwork volumes (Wikibooks, Fundamentals of Transportation / Earthwo
   it('prismoidal: V = L (A1 + 4 Am + A2) / 6', () => {
     const r = earthworkVolume({
       method: 'prismoidal',
-      sections: [{ stationFt: 0, cutSqFt: 54, fillSqFt: 0, midCutSqFt: 81 }, { stationFt: 100, cutSqFt: 108, fillSqFt: 0 }],
+      sections: [
+        { stationFt: 0, cutSqFt: 54, fillSqFt: 0, midCutSqFt: 81 },
+        { stationFt: 100, cutSqFt: 108, fillSqFt: 0 },
+      ],
     });
     expect(r.cutCuYd).toBeCloseTo((100 * (54 + 4 * 81 + 108)) / 6 / 27, 9);
   });
 
   it('pyramid where one end is zero: V = L A / 3', () => {
-    const r = earthworkVolume({ endMethod: 'pyramid', sections: [{ stationFt: 0, cutSqFt: 0, fillSqFt: 81 }, { stationFt: 50, cutSqFt: 27, fillSqFt: 0 }] });
+    const r = earthworkVolume({
+      endMethod: 'pyramid',
+      sections: [
+        { stationFt: 0, cutSqFt: 0, fillSqFt: 81 },
+        { stationFt: 50, cutSqFt: 27, fillSqFt: 0 },
+      ],
+    });
     expect(r.cutCuYd).toBeCloseTo((50 * 27) / 3 / 27, 9);
     expect(r.fillCuYd).toBeCloseTo((50 * 81) / 3 / 27, 9);
   });
 
   it('prismoidal without a mid-section is refused, naming the section', () => {
-    const run = () => earthworkVolume({ method: 'prismoidal', sections: [{ stationFt: 0, cutSqFt: 5, fillSqFt: 0 }, { stationFt: 10, cutSqFt: 5, fillSqFt: 0 }] });
+    const run = () =>
+      earthworkVolume({
+        method: 'prismoidal',
+        sections: [
+          { stationFt: 0, cutSqFt: 5, fillSqFt: 0 },
+          { stationFt: 10, cutSqFt: 5, fillSqFt: 0 },
+        ],
+      });
     expect(run).toThrow(EngineInputError);
     expect(run).toThrow(/sections\.0\.midCutSqFt/);
   });
 
   it('sections out of station order are refused', () => {
-    expect(() => earthworkVolume({ sections: [{ stationFt: 10, cutSqFt: 1, fillSqFt: 0 }, { stationFt: 0, cutSqFt: 1, fillSqFt: 0 }] })).toThrow(EngineInputError);
+    expect(() =>
+      earthworkVolume({
+        sections: [
+          { stationFt: 10, cutSqFt: 1, fillSqFt: 0 },
+          { stationFt: 0, cutSqFt: 1, fillSqFt: 0 },
+        ],
+      }),
+    ).toThrow(EngineInputError);
   });
 
   it('volumes are non-negative and add up over segments (property)', () => {
-    const section = fc.record({ cutSqFt: fc.double({ min: 0, max: 500, noNaN: true }), fillSqFt: fc.double({ min: 0, max: 500, noNaN: true }) });
+    const section = fc.record({
+      cutSqFt: fc.double({ min: 0, max: 500, noNaN: true }),
+      fillSqFt: fc.double({ min: 0, max: 500, noNaN: true }),
+    });
     fc.assert(
-      fc.property(fc.array(fc.tuple(fc.double({ min: 0.5, max: 50, noNaN: true }), section), { minLength: 3, maxLength: 30 }), fc.constantFrom('average', 'pyramid' as const), (rows, endMethod) => {
-        let station = 0;
-        const sections = rows.map(([gap, s]) => ({ stationFt: (station += gap), ...s }));
-        const whole = earthworkVolume({ sections, endMethod });
-        const cut = Math.floor(sections.length / 2);
-        const left = earthworkVolume({ sections: sections.slice(0, cut + 1), endMethod });
-        const right = earthworkVolume({ sections: sections.slice(cut), endMethod });
-        expect(whole.cutCuYd).toBeGreaterThanOrEqual(0);
-        expect(whole.fillCuYd).toBeGreaterThanOrEqual(0);
-        for (const s of whole.bySegment) expect(Math.min(s.cutCuYd, s.fillCuYd)).toBeGreaterThanOrEqual(0);
-        const sum = whole.bySegment.reduce((a, s) => a + s.cutCuYd, 0);
-        expect(whole.cutCuYd).toBeCloseTo(sum, 6);
-        expect(whole.cutCuYd).toBeCloseTo(left.cutCuYd + right.cutCuYd, 6);
-        expect(whole.fillCuYd).toBeCloseTo(left.fillCuYd + right.fillCuYd, 6);
-      }),
+      fc.property(
+        fc.array(fc.tuple(fc.double({ min: 0.5, max: 50, noNaN: true }), section), { minLength: 3, maxLength: 30 }),
+        fc.constantFrom('average', 'pyramid' as const),
+        (rows, endMethod) => {
+          let station = 0;
+          const sections = rows.map(([gap, s]) => ({ stationFt: (station += gap), ...s }));
+          const whole = earthworkVolume({ sections, endMethod });
+          const cut = Math.floor(sections.length / 2);
+          const left = earthworkVolume({ sections: sections.slice(0, cut + 1), endMethod });
+          const right = earthworkVolume({ sections: sections.slice(cut), endMethod });
+          expect(whole.cutCuYd).toBeGreaterThanOrEqual(0);
+          expect(whole.fillCuYd).toBeGreaterThanOrEqual(0);
+          for (const s of whole.bySegment) expect(Math.min(s.cutCuYd, s.fillCuYd)).toBeGreaterThanOrEqual(0);
+          const sum = whole.bySegment.reduce((a, s) => a + s.cutCuYd, 0);
+          expect(whole.cutCuYd).toBeCloseTo(sum, 6);
+          expect(whole.cutCuYd).toBeCloseTo(left.cutCuYd + right.cutCuYd, 6);
+          expect(whole.fillCuYd).toBeCloseTo(left.fillCuYd + right.fillCuYd, 6);
+        },
+      ),
     );
   });
 });

@@ -11,7 +11,10 @@ export function profileFromRuns(runs: [number, number][], start = 100): { statio
 }
 
 /** A rule profile built on the common rural template with overrides, as an admin would edit one. */
-export const ruleProfile = (overrides: Partial<RuleProfile> = {}): RuleProfile => ({ ...commonRuralTemplate, ...overrides });
+export const ruleProfile = (overrides: Partial<RuleProfile> = {}): RuleProfile => ({
+  ...commonRuralTemplate,
+  ...overrides,
+});
 
 export const findingOf = <T extends { ruleId: string }>(findings: T[], ruleId: string): T => {
   const f = findings.find((x) => x.ruleId === ruleId);

@@ -25,8 +25,13 @@ describe('dual-slope laser setup for the apron', () => {
 
   it('steepest rise points clockwise from the driveway heading by atan2(gx, gy)', () => {
     expect(laserSetup({ ...base, roadGradePercent: 2, landingGradePercent: 2 }).steepestBearingDeg).toBeCloseTo(45, 9);
-    expect(laserSetup({ ...base, roadGradePercent: 2, landingGradePercent: 2, drivewayBearingDeg: 350 }).steepestBearingDeg).toBeCloseTo(35, 9);
-    expect(laserSetup({ ...base, roadGradePercent: -2, landingGradePercent: 0 }).steepestBearingDeg).toBeCloseTo(270, 9);
+    expect(
+      laserSetup({ ...base, roadGradePercent: 2, landingGradePercent: 2, drivewayBearingDeg: 350 }).steepestBearingDeg,
+    ).toBeCloseTo(35, 9);
+    expect(laserSetup({ ...base, roadGradePercent: -2, landingGradePercent: 0 }).steepestBearingDeg).toBeCloseTo(
+      270,
+      9,
+    );
   });
 
   it('gives each stake its design elevation and cut or fill from the rod reading and receiver offset', () => {
@@ -52,13 +57,14 @@ describe('dual-slope laser setup for the apron', () => {
     expect(secondSetup.originElevationFt).toBeCloseTo(99.2, 9);
     expect(secondSetup.description).toContain('12% rising away from the road');
   });
-
 });
 
 // Plane geometry (exact): z = z0 + gx x + gy (y - y0). Values meet within a thousandth of a foot, a tenth of
 // the survey's 0.01 ft precision (docs/sources.md, "Survey precision": common practice (no source)).
 const at = (plane: PlaneSetting, offsetFt: number, distanceFt: number) =>
-  plane.originElevationFt + (plane.alongRoadPercent / 100) * offsetFt + (plane.alongDrivewayPercent / 100) * (distanceFt - plane.originDistanceFt);
+  plane.originElevationFt +
+  (plane.alongRoadPercent / 100) * offsetFt +
+  (plane.alongDrivewayPercent / 100) * (distanceFt - plane.originDistanceFt);
 
 describe('the two setups meet along the change line', () => {
   it('values of both planes along the change line agree at every offset', () => {
@@ -72,10 +78,13 @@ describe('the two setups meet along the change line', () => {
   });
 
   it('stakes either side of the change line at the driveway edge show no step', () => {
-    const r = laserSetup({ ...base, stakes: [
-      { label: 'L-in', offsetFt: -8, distanceFt: 20, rodReadingFt: 5 },
-      { label: 'L-out', offsetFt: -8, distanceFt: 20.01, rodReadingFt: 5 },
-    ] });
+    const r = laserSetup({
+      ...base,
+      stakes: [
+        { label: 'L-in', offsetFt: -8, distanceFt: 20, rodReadingFt: 5 },
+        { label: 'L-out', offsetFt: -8, distanceFt: 20.01, rodReadingFt: 5 },
+      ],
+    });
     const [inside, outside] = r.stakes;
     expect([inside.setup, outside.setup]).toEqual(['first', 'second']);
     // 0.01 ft further along at 12% rises 0.0012 ft; anything more is a step.
@@ -83,12 +92,22 @@ describe('the two setups meet along the change line', () => {
   });
 
   it('a driveway cross slope other than the road grade is reached through a warp, with stakes on it', () => {
-    const r = laserSetup({ ...base, drivewayCrossSlopePercent: 0, warpLengthFt: 10, stakes: [
-      { label: 'W0', offsetFt: 6, distanceFt: 20, rodReadingFt: 5 },
-      { label: 'W5', offsetFt: 6, distanceFt: 25, rodReadingFt: 5 },
-      { label: 'W10', offsetFt: 6, distanceFt: 30, rodReadingFt: 5 },
-    ] });
-    expect(r.warp).toMatchObject({ fromDistanceFt: 20, toDistanceFt: 30, fromCrossSlopePercent: 3, toCrossSlopePercent: 0 });
+    const r = laserSetup({
+      ...base,
+      drivewayCrossSlopePercent: 0,
+      warpLengthFt: 10,
+      stakes: [
+        { label: 'W0', offsetFt: 6, distanceFt: 20, rodReadingFt: 5 },
+        { label: 'W5', offsetFt: 6, distanceFt: 25, rodReadingFt: 5 },
+        { label: 'W10', offsetFt: 6, distanceFt: 30, rodReadingFt: 5 },
+      ],
+    });
+    expect(r.warp).toMatchObject({
+      fromDistanceFt: 20,
+      toDistanceFt: 30,
+      fromCrossSlopePercent: 3,
+      toCrossSlopePercent: 0,
+    });
     expect(r.secondSetup).toMatchObject({ alongRoadPercent: 0, originDistanceFt: 30 });
     expect(r.stakes.map((s) => s.setup)).toEqual(['first', 'warp', 'second']);
     // Cross slope halfway through the warp is 1.5%: 99.2 + 0.12 x 5 + 0.015 x 6.
@@ -103,4 +122,3 @@ describe('the two setups meet along the change line', () => {
     expect(() => laserSetup({ ...base, drivewayCrossSlopePercent: 0 })).toThrow(/^warpLengthFt: /);
   });
 });
-

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { checkEntrance, entranceLossCoefficients, EngineInputError, inletControlHeadwater, inletTypes, outletControlHeadwater } from '@shared/engine';
+import {
+  checkEntrance,
+  entranceLossCoefficients,
+  EngineInputError,
+  inletControlHeadwater,
+  inletTypes,
+  outletControlHeadwater,
+} from '@shared/engine';
 import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 
 // FHWA HDS-5, Hydraulic Design of Highway Culverts, 3rd ed. 2012, chapter 3 and Appendix C:
@@ -26,21 +33,42 @@ describe('outlet-control headwater (FHWA HDS-5 3rd ed. 2012, chapter 3, Table C.
   // dc 0.571 m, ho = TW = 1.5 m, H 1.232 m, HWo 2.522 m, and outlet control governs over inlet control's 1.723 m.
   // Within 0.005 m: the page works in SI with 2g and R^(4/3), the engine in US units with HDS-5's 29 and R^1.33.
   it('matches a published worked example in SI: 0.6 m concrete pipe, Q 0.9 m3/s, TW 1.5 m: H 1.232 m, HWo 2.522 m', () => {
-    const r = outletControlHeadwater({ inlet: 'concrete-square-headwall', diameterFt: 0.6 / M, flowCfs: 0.9 / M ** 3, manningN: 0.012, lengthFt: 25 / M, slopeFtPerFt: 0.0084, tailwaterDepthFt: 1.5 / M });
+    const r = outletControlHeadwater({
+      inlet: 'concrete-square-headwall',
+      diameterFt: 0.6 / M,
+      flowCfs: 0.9 / M ** 3,
+      manningN: 0.012,
+      lengthFt: 25 / M,
+      slopeFtPerFt: 0.0084,
+      tailwaterDepthFt: 1.5 / M,
+    });
     expect(r.entranceLossCoefficient).toBe(0.5);
     expect(Math.abs(r.velocityFtPerS * M - 3.183)).toBeLessThan(0.001);
     expect(Math.abs(r.criticalDepthFt * M - 0.571)).toBeLessThan(0.001);
     expect(r.tailwaterGoverns).toBe(true);
     expect(Math.abs(r.headLossFt * M - 1.232)).toBeLessThan(0.005);
     expect(Math.abs(r.headwaterFt * M - 2.522)).toBeLessThan(0.005);
-    const inlet = inletControlHeadwater({ inlet: 'concrete-square-headwall', diameterFt: 0.6 / M, flowCfs: 0.9 / M ** 3, slopeFtPerFt: 0.0084 });
+    const inlet = inletControlHeadwater({
+      inlet: 'concrete-square-headwall',
+      diameterFt: 0.6 / M,
+      flowCfs: 0.9 / M ** 3,
+      slopeFtPerFt: 0.0084,
+    });
     expect(Math.abs(inlet.headwaterFt * M - 1.723)).toBeLessThan(0.005);
     expect(r.headwaterFt).toBeGreaterThan(inlet.headwaterFt);
   });
 
   // Worked by hand from the HDS-5 equations (no published example found for these inputs).
   it('18 in corrugated metal projecting, Q 10 cfs, n 0.024, L 40 ft, S 0.01, TW 0.5 ft: HL 2.169, dc 1.219, ho 1.359, HWo 3.129 ft', () => {
-    const r = outletControlHeadwater({ inlet: 'cmp-projecting', diameterFt: 1.5, flowCfs: 10, manningN: 0.024, lengthFt: 40, slopeFtPerFt: 0.01, tailwaterDepthFt: 0.5 });
+    const r = outletControlHeadwater({
+      inlet: 'cmp-projecting',
+      diameterFt: 1.5,
+      flowCfs: 10,
+      manningN: 0.024,
+      lengthFt: 40,
+      slopeFtPerFt: 0.01,
+      tailwaterDepthFt: 0.5,
+    });
     expect(r.entranceLossCoefficient).toBe(0.9);
     expect(r.headLossFt).toBeCloseTo(2.169, 3);
     expect(r.criticalDepthFt).toBeCloseTo(1.219, 3);
@@ -51,7 +79,15 @@ describe('outlet-control headwater (FHWA HDS-5 3rd ed. 2012, chapter 3, Table C.
 
   // Worked by hand from the HDS-5 equations (no published example found for these inputs).
   it('a tailwater above (dc + D)/2 sets ho: TW 2.0 ft gives HWo 3.769 ft', () => {
-    const r = outletControlHeadwater({ inlet: 'cmp-projecting', diameterFt: 1.5, flowCfs: 10, manningN: 0.024, lengthFt: 40, slopeFtPerFt: 0.01, tailwaterDepthFt: 2 });
+    const r = outletControlHeadwater({
+      inlet: 'cmp-projecting',
+      diameterFt: 1.5,
+      flowCfs: 10,
+      manningN: 0.024,
+      lengthFt: 40,
+      slopeFtPerFt: 0.01,
+      tailwaterDepthFt: 2,
+    });
     expect(r.outletControlDepthFt).toBe(2);
     expect(r.headwaterFt).toBeCloseTo(3.769, 3);
     expect(r.tailwaterGoverns).toBe(true);
@@ -59,7 +95,15 @@ describe('outlet-control headwater (FHWA HDS-5 3rd ed. 2012, chapter 3, Table C.
 
   // Worked by hand from the HDS-5 equations (no published example found for these inputs).
   it('smooth concrete with a square-edged headwall (ke 0.5, n 0.013) loses less: HL 1.105, HWo 2.065 ft', () => {
-    const r = outletControlHeadwater({ inlet: 'concrete-square-headwall', diameterFt: 1.5, flowCfs: 10, manningN: 0.013, lengthFt: 40, slopeFtPerFt: 0.01, tailwaterDepthFt: 0.5 });
+    const r = outletControlHeadwater({
+      inlet: 'concrete-square-headwall',
+      diameterFt: 1.5,
+      flowCfs: 10,
+      manningN: 0.013,
+      lengthFt: 40,
+      slopeFtPerFt: 0.01,
+      tailwaterDepthFt: 0.5,
+    });
     expect(r.headLossFt).toBeCloseTo(1.105, 3);
     expect(r.headwaterFt).toBeCloseTo(2.065, 3);
   });
@@ -69,15 +113,43 @@ describe('outlet-control headwater (FHWA HDS-5 3rd ed. 2012, chapter 3, Table C.
   });
 
   it('refuses a flow it cannot carry and names the field', () => {
-    expect(() => outletControlHeadwater({ inlet: 'cmp-projecting', diameterFt: 1.5, flowCfs: 0, manningN: 0.024, lengthFt: 40, slopeFtPerFt: 0.01 })).toThrow(EngineInputError);
+    expect(() =>
+      outletControlHeadwater({
+        inlet: 'cmp-projecting',
+        diameterFt: 1.5,
+        flowCfs: 0,
+        manningN: 0.024,
+        lengthFt: 40,
+        slopeFtPerFt: 0.01,
+      }),
+    ).toThrow(EngineInputError);
   });
 });
 
 // Worked by hand from the HDS-5 equations (no published example found for these inputs).
 describe('the controlling headwater in the entrance check', () => {
   const rules = ruleProfile({ culvert: { lengthIncrementFt: 2, maxHeadwaterToDiameter: 2 } });
-  const culvert = (over: object) => ({ diameterIn: 18, inlet: 'cmp-projecting' as const, manningN: 0.024, inletInvertFt: 96.4, outletInvertFt: 96, lengthFt: 40, designFlowCfs: 10, ...over });
-  const run = (over: object) => checkEntrance({ profile: profileFromRuns([[20, 2], [30, 6]]), culvert: culvert(over) }, rules);
+  const culvert = (over: object) => ({
+    diameterIn: 18,
+    inlet: 'cmp-projecting' as const,
+    manningN: 0.024,
+    inletInvertFt: 96.4,
+    outletInvertFt: 96,
+    lengthFt: 40,
+    designFlowCfs: 10,
+    ...over,
+  });
+  const run = (over: object) =>
+    checkEntrance(
+      {
+        profile: profileFromRuns([
+          [20, 2],
+          [30, 6],
+        ]),
+        culvert: culvert(over),
+      },
+      rules,
+    );
 
   it('takes the larger of inlet and outlet control and says which controls (HDS-5 chapter 3)', () => {
     const r = run({ tailwaterDepthFt: 0.5 });

@@ -40,7 +40,8 @@ describe('rational method (FHWA HEC-22 Eq. 3-1, Table 3-1)', () => {
   });
 
   it('frequency factors 1.10 / 1.20 / 1.25 for 25, 50 and 100 years (HEC-22 Table 3-1)', () => {
-    const c = (years: number) => rationalFlow({ runoffC: 0.5, intensityInPerHr: 1, areaAcres: 1, returnPeriodYears: years }).adjustedC;
+    const c = (years: number) =>
+      rationalFlow({ runoffC: 0.5, intensityInPerHr: 1, areaAcres: 1, returnPeriodYears: years }).adjustedC;
     expect(c(10)).toBeCloseTo(0.5, 12);
     expect(c(25)).toBeCloseTo(0.55, 12);
     expect(c(50)).toBeCloseTo(0.6, 12);
@@ -51,7 +52,7 @@ describe('rational method (FHWA HEC-22 Eq. 3-1, Table 3-1)', () => {
     expect(rationalFlow({ runoffC: 0.9, intensityInPerHr: 2, areaAcres: 3, returnPeriodYears: 100 }).adjustedC).toBe(1);
   });
 
-  it('refuses areas over 200 acres, the method\'s range (HEC-22)', () => {
+  it("refuses areas over 200 acres, the method's range (HEC-22)", () => {
     expect(() => rationalFlow({ runoffC: 0.3, intensityInPerHr: 2, areaAcres: 250 })).toThrow(/areaAcres/);
   });
 });

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { EngineInputError, formatStation, gradeBreaks, normalizeProfile, parseStation, segmentGrades } from '@shared/engine';
+import {
+  EngineInputError,
+  formatStation,
+  gradeBreaks,
+  normalizeProfile,
+  parseStation,
+  segmentGrades,
+} from '@shared/engine';
 
 describe('station notation (trade practice: hundreds + feet)', () => {
   it.each([
@@ -28,26 +35,49 @@ describe('station notation (trade practice: hundreds + feet)', () => {
 
 describe('profile input forms', () => {
   it('rod readings become elevations as HI - rod', () => {
-    const points = normalizeProfile({ kind: 'rod-readings', instrumentHeightFt: 105.2, readings: [{ stationFt: 0, rodFt: 5.2 }, { stationFt: 20, rodFt: 4.4 }] });
+    const points = normalizeProfile({
+      kind: 'rod-readings',
+      instrumentHeightFt: 105.2,
+      readings: [
+        { stationFt: 0, rodFt: 5.2 },
+        { stationFt: 20, rodFt: 4.4 },
+      ],
+    });
     expect(points[0].elevationFt).toBeCloseTo(100, 9);
     expect(points[1].elevationFt).toBeCloseTo(100.8, 9);
   });
 
   it('segment grades from a digital level rebuild the elevations', () => {
-    const points = normalizeProfile({ kind: 'segment-grades', startElevationFt: 100, segments: [{ lengthFt: 20, gradePercent: 4 }, { lengthFt: 30, gradePercent: -10 }] });
+    const points = normalizeProfile({
+      kind: 'segment-grades',
+      startElevationFt: 100,
+      segments: [
+        { lengthFt: 20, gradePercent: 4 },
+        { lengthFt: 30, gradePercent: -10 },
+      ],
+    });
     expect(points.map((p) => p.stationFt)).toEqual([0, 20, 50]);
     expect(points[2].elevationFt).toBeCloseTo(100 + 0.8 - 3, 9);
     expect(segmentGrades(points).map((s) => s.gradePercent)).toEqual([expect.closeTo(4, 9), expect.closeTo(-10, 9)]);
   });
 
   it('sorts unsorted shots and merges an exact repeat', () => {
-    const points = normalizeProfile([{ stationFt: 40, elevationFt: 103 }, { stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 101 }, { stationFt: 20, elevationFt: 101 }]);
+    const points = normalizeProfile([
+      { stationFt: 40, elevationFt: 103 },
+      { stationFt: 0, elevationFt: 100 },
+      { stationFt: 20, elevationFt: 101 },
+      { stationFt: 20, elevationFt: 101 },
+    ]);
     expect(points.map((p) => p.stationFt)).toEqual([0, 20, 40]);
   });
 
   it('refuses the same station with two elevations, naming the field and the station', () => {
     try {
-      normalizeProfile([{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 101 }, { stationFt: 20, elevationFt: 101.5 }]);
+      normalizeProfile([
+        { stationFt: 0, elevationFt: 100 },
+        { stationFt: 20, elevationFt: 101 },
+        { stationFt: 20, elevationFt: 101.5 },
+      ]);
       expect.unreachable();
     } catch (e) {
       expect(e).toBeInstanceOf(EngineInputError);
@@ -57,7 +87,10 @@ describe('profile input forms', () => {
   });
 
   it('names the exact bad value in a long profile', () => {
-    const shots = [{ stationFt: 0, elevationFt: 100 }, { stationFt: 10, elevationFt: Number.NaN }];
+    const shots = [
+      { stationFt: 0, elevationFt: 100 },
+      { stationFt: 10, elevationFt: Number.NaN },
+    ];
     expect(() => normalizeProfile(shots)).toThrow(EngineInputError);
     try {
       normalizeProfile(shots);
@@ -67,7 +100,11 @@ describe('profile input forms', () => {
   });
 
   it('grade breaks are the algebraic difference, next minus previous', () => {
-    const points = normalizeProfile([{ stationFt: 0, elevationFt: 100 }, { stationFt: 20, elevationFt: 100.8 }, { stationFt: 40, elevationFt: 103.8 }]);
+    const points = normalizeProfile([
+      { stationFt: 0, elevationFt: 100 },
+      { stationFt: 20, elevationFt: 100.8 },
+      { stationFt: 40, elevationFt: 103.8 },
+    ]);
     const [b] = gradeBreaks(segmentGrades(points));
     expect(b.stationFt).toBe(20);
     expect(b.changePercent).toBeCloseTo(11, 9);

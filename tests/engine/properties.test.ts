@@ -1,10 +1,20 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import * as engine from '@shared/engine';
-import { checkEntrance, commonRuralTemplate, EngineInputError, passengerCarPreset, proposeProfile, type RuleProfile } from '@shared/engine';
+import {
+  checkEntrance,
+  commonRuralTemplate,
+  EngineInputError,
+  passengerCarPreset,
+  proposeProfile,
+  type RuleProfile,
+} from '@shared/engine';
 import { holdsWater } from './water';
 
-const runs = fc.array(fc.tuple(fc.double({ min: 1, max: 30, noNaN: true }), fc.double({ min: -15, max: 15, noNaN: true })), { minLength: 1, maxLength: 12 });
+const runs = fc.array(
+  fc.tuple(fc.double({ min: 1, max: 30, noNaN: true }), fc.double({ min: -15, max: 15, noNaN: true })),
+  { minLength: 1, maxLength: 12 },
+);
 
 const toProfile = (rs: [number, number][], scale = 1) => {
   const points = [{ stationFt: 0, elevationFt: 100 }];
@@ -36,12 +46,19 @@ const designRulesArb: fc.Arbitrary<RuleProfile> = fc
 
 // A road side in front of the road edge: a crown or a banked road, sometimes a shoulder (slopes + fall toward the edge).
 const roadSideArb = fc.option(
-  fc.record({
-    roadCrossSlopePercent: fc.double({ min: -6, max: 6, noNaN: true }),
-    shoulder: fc.option(fc.tuple(fc.double({ min: 1, max: 10, noNaN: true }), fc.double({ min: -10, max: 10, noNaN: true })), { nil: undefined }),
-  }).map(({ roadCrossSlopePercent, shoulder }) =>
-    shoulder ? { roadCrossSlopePercent, shoulderWidthFt: shoulder[0], shoulderSlopePercent: shoulder[1] } : { roadCrossSlopePercent },
-  ),
+  fc
+    .record({
+      roadCrossSlopePercent: fc.double({ min: -6, max: 6, noNaN: true }),
+      shoulder: fc.option(
+        fc.tuple(fc.double({ min: 1, max: 10, noNaN: true }), fc.double({ min: -10, max: 10, noNaN: true })),
+        { nil: undefined },
+      ),
+    })
+    .map(({ roadCrossSlopePercent, shoulder }) =>
+      shoulder
+        ? { roadCrossSlopePercent, shoulderWidthFt: shoulder[0], shoulderSlopePercent: shoulder[1] }
+        : { roadCrossSlopePercent },
+    ),
   { nil: undefined },
 );
 
@@ -77,7 +94,10 @@ describe('properties', () => {
   it('a proposed profile always passes the profile rules of checkEntrance, with the same road side', async () => {
     await fc.assert(
       fc.asyncProperty(
-        fc.array(fc.tuple(fc.double({ min: 2, max: 20, noNaN: true }), fc.double({ min: -25, max: 25, noNaN: true })), { minLength: 3, maxLength: 25 }),
+        fc.array(fc.tuple(fc.double({ min: 2, max: 20, noNaN: true }), fc.double({ min: -25, max: 25, noNaN: true })), {
+          minLength: 3,
+          maxLength: 25,
+        }),
         rulesArb,
         fc.double({ min: -1, max: 1, noNaN: true }),
         fc.option(fc.double({ min: -3, max: 3, noNaN: true }), { nil: undefined }),
@@ -86,12 +106,16 @@ describe('properties', () => {
           const existing = toProfile(rs);
           const end = existing[existing.length - 1].elevationFt;
           const targetEndElevationFt = endOffset === undefined ? undefined : end + endOffset;
-          const r = await proposeProfile({ existing, roadEdgeElevationFt: 100 + roadOffset, targetEndElevationFt, roadSide }, rules);
+          const r = await proposeProfile(
+            { existing, roadEdgeElevationFt: 100 + roadOffset, targetEndElevationFt, roadSide },
+            rules,
+          );
           if (!r.feasible) {
             expect(r.reason).toBeTruthy();
             return;
           }
-          if (targetEndElevationFt !== undefined) expect(r.profile[r.profile.length - 1].elevationFt).toBeCloseTo(targetEndElevationFt, 6);
+          if (targetEndElevationFt !== undefined)
+            expect(r.profile[r.profile.length - 1].elevationFt).toBeCloseTo(targetEndElevationFt, 6);
           const check = checkEntrance({ profile: r.profile, roadSide }, rules);
           const failed = check.findings.filter((f) => f.status === 'fail');
           expect(failed).toEqual([]);
@@ -107,7 +131,10 @@ describe('properties', () => {
   it('never proposes worse than the ground when the ground already complies and drains', async () => {
     await fc.assert(
       fc.asyncProperty(
-        fc.array(fc.tuple(fc.double({ min: 2, max: 20, noNaN: true }), fc.double({ min: 0.6, max: 2, noNaN: true })), { minLength: 2, maxLength: 15 }),
+        fc.array(fc.tuple(fc.double({ min: 2, max: 20, noNaN: true }), fc.double({ min: 0.6, max: 2, noNaN: true })), {
+          minLength: 2,
+          maxLength: 15,
+        }),
         designRulesArb,
         async (rs, rules) => {
           const existing = toProfile(rs);
@@ -156,7 +183,8 @@ describe('properties', () => {
   });
 
   it('inputs the schemas accept, even at their extremes, give finite answers or the typed error', () => {
-    const extreme = (min: number, max: number) => fc.oneof(fc.constantFrom(min, max, 0), fc.double({ min, max, noNaN: true }));
+    const extreme = (min: number, max: number) =>
+      fc.oneof(fc.constantFrom(min, max, 0), fc.double({ min, max, noNaN: true }));
     const culvert = fc.record({
       diameterIn: extreme(0.01, 120).filter((d) => d > 0),
       manningN: extreme(0.005, 0.1),
@@ -176,17 +204,34 @@ describe('properties', () => {
       extraLanes: fc.integer({ min: 0, max: 10 }),
       roadGradeFromLeftPercent: extreme(-15, 15),
     });
-    const points = fc.array(fc.record({ stationFt: extreme(-10000, 100000), elevationFt: extreme(-2000, 30000) }), { minLength: 2, maxLength: 8 });
-    const vehicle = fc.record({ wheelbaseFt: extreme(3, 60), frontOverhangFt: extreme(0, 20), rearOverhangFt: extreme(0, 20), clearanceIn: extreme(1, 36) });
+    const points = fc.array(fc.record({ stationFt: extreme(-10000, 100000), elevationFt: extreme(-2000, 30000) }), {
+      minLength: 2,
+      maxLength: 8,
+    });
+    const vehicle = fc.record({
+      wheelbaseFt: extreme(3, 60),
+      frontOverhangFt: extreme(0, 20),
+      rearOverhangFt: extreme(0, 20),
+      clearanceIn: extreme(1, 36),
+    });
     fc.assert(
-      fc.property(points, fc.option(culvert, { nil: undefined }), fc.option(sight, { nil: undefined }), vehicle, (profile, c, s, v) => {
-        try {
-          const report = checkEntrance({ profile, culvert: c, sight: s, vehicle: { name: 'Any', ...v }, scrapeStepFt: 5 }, commonRuralTemplate);
-          expect(allFinite(report)).toBe(true);
-        } catch (e) {
-          expect(e).toBeInstanceOf(EngineInputError);
-        }
-      }),
+      fc.property(
+        points,
+        fc.option(culvert, { nil: undefined }),
+        fc.option(sight, { nil: undefined }),
+        vehicle,
+        (profile, c, s, v) => {
+          try {
+            const report = checkEntrance(
+              { profile, culvert: c, sight: s, vehicle: { name: 'Any', ...v }, scrapeStepFt: 5 },
+              commonRuralTemplate,
+            );
+            expect(allFinite(report)).toBe(true);
+          } catch (e) {
+            expect(e).toBeInstanceOf(EngineInputError);
+          }
+        },
+      ),
       { numRuns: 300 },
     );
   });

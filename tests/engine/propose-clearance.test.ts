@@ -10,14 +10,34 @@ const vehicle = rules.designVehicle;
 
 describe('clearance per break, with transitions where they are cheaper', () => {
   const cases: [string, [number, number][]][] = [
-    ['a level landing breaking into a 17% climb', [[20, 0], [60, 17]]],
-    ['a landing rising into a 3.4% step and then 15.4%', [[20, 4], [10, 17], [50, 15.4]]],
+    [
+      'a level landing breaking into a 17% climb',
+      [
+        [20, 0],
+        [60, 17],
+      ],
+    ],
+    [
+      'a landing rising into a 3.4% step and then 15.4%',
+      [
+        [20, 4],
+        [10, 17],
+        [50, 15.4],
+      ],
+    ],
   ];
   for (const [name, runs] of cases) {
     it(`moves no more than 1.25 times the earth of an independent search, and clears: ${name}`, async () => {
       const ground = profileFromRuns(runs);
       const optimum = await independentOptimum({
-        ground, roadEdgeFt: 100, landingFt: 20, landingMaxPercent: 4, maxPercent: 17, maxChangePercent: 13, vehicle, stepFt: 0.5,
+        ground,
+        roadEdgeFt: 100,
+        landingFt: 20,
+        landingMaxPercent: 4,
+        maxPercent: 17,
+        maxChangePercent: 13,
+        vehicle,
+        stepFt: 0.5,
       });
       expect(scrapeCheck({ profile: optimum, vehicle }).passes).toBe(true);
       const r = await proposeProfile({ existing: ground, roadEdgeElevationFt: 100 }, rules);
@@ -29,7 +49,10 @@ describe('clearance per break, with transitions where they are cheaper', () => {
   }
 
   it('bends through extra stations (a short vertical curve) where one sharp break would need more earth', async () => {
-    const ground = profileFromRuns([[20, 0], [60, 17]]);
+    const ground = profileFromRuns([
+      [20, 0],
+      [60, 17],
+    ]);
     const r = await proposeProfile({ existing: ground, roadEdgeElevationFt: 100 }, rules);
     const surveyed = new Set(ground.map((p) => p.stationFt));
     const added = r.profile.filter((p) => !surveyed.has(p.stationFt));

@@ -5,11 +5,18 @@ import { findingOf, profileFromRuns, ruleProfile } from './fixtures';
 // Grade change = algebraic difference of the two grades (exact geometry). The 13% limit is the common rural
 // template's (17 - 4, common practice (no source)); the passenger car is the template's design vehicle
 // (Green Book P vehicle, US figures from memory; 5 in clearance after Eck and Kang, TRR 1356).
-const landingAt = (gradePercent: number) => profileFromRuns([[20, gradePercent], [30, gradePercent]]);
+const landingAt = (gradePercent: number) =>
+  profileFromRuns([
+    [20, gradePercent],
+    [30, gradePercent],
+  ]);
 
 describe('the break at the road edge', () => {
   it('a 2% crown falling to the edge and a landing rising 4% make a 6% sag at the road edge', () => {
-    const r = checkEntrance({ profile: landingAt(4), roadEdgeStationFt: 0, roadSide: { roadCrossSlopePercent: 2 } }, ruleProfile());
+    const r = checkEntrance(
+      { profile: landingAt(4), roadEdgeStationFt: 0, roadSide: { roadCrossSlopePercent: 2 } },
+      ruleProfile(),
+    );
     const f = findingOf(r.findings, 'grade.road-edge-change');
     expect(f.measured).toBeCloseTo(6, 9);
     expect(f.limit).toBe(13);
@@ -21,7 +28,10 @@ describe('the break at the road edge', () => {
     const rules = ruleProfile({ landing: { lengthFt: 20, minGradePercent: -12, maxGradePercent: 12 } });
     const without = checkEntrance({ profile: landingAt(11), roadEdgeStationFt: 0 }, rules);
     expect(without.findings.filter((f) => f.status === 'fail')).toEqual([]);
-    const r = checkEntrance({ profile: landingAt(11), roadEdgeStationFt: 0, roadSide: { roadCrossSlopePercent: 3 } }, rules);
+    const r = checkEntrance(
+      { profile: landingAt(11), roadEdgeStationFt: 0, roadSide: { roadCrossSlopePercent: 3 } },
+      rules,
+    );
     const f = findingOf(r.findings, 'grade.road-edge-change');
     expect(f.measured).toBeCloseTo(14, 9);
     expect(f.status).toBe('fail');
@@ -29,12 +39,20 @@ describe('the break at the road edge', () => {
   });
 
   it('with a shoulder, the break is between the shoulder and the landing, and a road banked away from the edge counts its sign', () => {
-    const r = checkEntrance({
-      profile: landingAt(-2), roadEdgeStationFt: 0, roadSide: { roadCrossSlopePercent: 2, shoulderWidthFt: 4, shoulderSlopePercent: 6 },
-    }, ruleProfile());
+    const r = checkEntrance(
+      {
+        profile: landingAt(-2),
+        roadEdgeStationFt: 0,
+        roadSide: { roadCrossSlopePercent: 2, shoulderWidthFt: 4, shoulderSlopePercent: 6 },
+      },
+      ruleProfile(),
+    );
     // Shoulder falling 6% toward the edge is a -6% grade into the property; the landing falls 2%: change 4%.
     expect(findingOf(r.findings, 'grade.road-edge-change').measured).toBeCloseTo(4, 9);
-    const banked = checkEntrance({ profile: landingAt(4), roadEdgeStationFt: 0, roadSide: { roadCrossSlopePercent: -2 } }, ruleProfile());
+    const banked = checkEntrance(
+      { profile: landingAt(4), roadEdgeStationFt: 0, roadSide: { roadCrossSlopePercent: -2 } },
+      ruleProfile(),
+    );
     expect(findingOf(banked.findings, 'grade.road-edge-change').measured).toBeCloseTo(2, 9);
   });
 
@@ -43,7 +61,10 @@ describe('the break at the road edge', () => {
     const rules = ruleProfile({ landing: { lengthFt: 20, minGradePercent: -12, maxGradePercent: 12 } });
     const flat = checkEntrance({ profile: landingAt(8), roadEdgeStationFt: 0 }, rules);
     expect(flat.scrape.passes).toBe(true);
-    const r = checkEntrance({ profile: landingAt(8), roadEdgeStationFt: 0, roadSide: { roadCrossSlopePercent: 4 } }, rules);
+    const r = checkEntrance(
+      { profile: landingAt(8), roadEdgeStationFt: 0, roadSide: { roadCrossSlopePercent: 4 } },
+      rules,
+    );
     expect(r.scrape.passes).toBe(false);
     expect(r.scrape.where).toBe('rear-overhang');
     expect(findingOf(r.findings, 'scrape.clearance').status).toBe('fail');
@@ -53,14 +74,24 @@ describe('the break at the road edge', () => {
 
   it('an older check with no road side still runs and says why the road-edge break was not checked', () => {
     const r = checkEntrance({ profile: landingAt(4), roadEdgeStationFt: 0 }, ruleProfile());
-    expect(findingOf(r.findings, 'grade.road-edge-change')).toMatchObject({ status: 'not-checked', note: 'no road cross slope in the input' });
+    expect(findingOf(r.findings, 'grade.road-edge-change')).toMatchObject({
+      status: 'not-checked',
+      note: 'no road cross slope in the input',
+    });
   });
 
   it('a shoulder width without its slope is refused, naming the field', () => {
-    expect(() => checkEntrance({ profile: landingAt(4), roadSide: { roadCrossSlopePercent: 2, shoulderWidthFt: 4 } }, ruleProfile()))
-      .toThrow(EngineInputError);
+    expect(() =>
+      checkEntrance(
+        { profile: landingAt(4), roadSide: { roadCrossSlopePercent: 2, shoulderWidthFt: 4 } },
+        ruleProfile(),
+      ),
+    ).toThrow(EngineInputError);
     try {
-      checkEntrance({ profile: landingAt(4), roadSide: { roadCrossSlopePercent: 2, shoulderWidthFt: 4 } }, ruleProfile());
+      checkEntrance(
+        { profile: landingAt(4), roadSide: { roadCrossSlopePercent: 2, shoulderWidthFt: 4 } },
+        ruleProfile(),
+      );
     } catch (e) {
       expect((e as EngineInputError).field).toBe('roadSide.shoulderSlopePercent');
     }
@@ -69,9 +100,16 @@ describe('the break at the road edge', () => {
 
 describe('a road edge a floating-point hair from a shot', () => {
   it('0.1 + 0.2 ft against a shot at 0.3 ft reads the real landing grade, on the centreline and on both edges', () => {
-    const profile = [{ stationFt: 0.3, elevationFt: 100 }, { stationFt: 20.3, elevationFt: 100.8 }, { stationFt: 50.3, elevationFt: 102.6 }];
+    const profile = [
+      { stationFt: 0.3, elevationFt: 100 },
+      { stationFt: 20.3, elevationFt: 100.8 },
+      { stationFt: 50.3, elevationFt: 102.6 },
+    ];
     const apron = { roadGradePercent: 0, entranceWidthFt: 12, warpLengthFt: 20 };
-    const r = checkEntrance({ profile, roadEdgeStationFt: 0.1 + 0.2, roadSide: { roadCrossSlopePercent: 2 }, apron }, ruleProfile());
+    const r = checkEntrance(
+      { profile, roadEdgeStationFt: 0.1 + 0.2, roadSide: { roadCrossSlopePercent: 2 }, apron },
+      ruleProfile(),
+    );
     expect(findingOf(r.findings, 'grade.road-edge-change').measured).toBeCloseTo(6, 6);
     expect(findingOf(r.findings, 'apron.left.grade.road-edge-change').measured).toBeCloseTo(6, 6);
     expect(findingOf(r.findings, 'apron.left.landing.max-grade').measured).toBeCloseTo(4, 6);
@@ -79,9 +117,16 @@ describe('a road edge a floating-point hair from a shot', () => {
   });
 
   it('and the other way round: a road edge at 0.3 ft against a shot summed to 0.1 + 0.2 ft', () => {
-    const profile = [{ stationFt: 0.1 + 0.2, elevationFt: 100 }, { stationFt: 20.3, elevationFt: 100.8 }, { stationFt: 50.3, elevationFt: 102.6 }];
+    const profile = [
+      { stationFt: 0.1 + 0.2, elevationFt: 100 },
+      { stationFt: 20.3, elevationFt: 100.8 },
+      { stationFt: 50.3, elevationFt: 102.6 },
+    ];
     const apron = { roadGradePercent: 0, entranceWidthFt: 12, warpLengthFt: 20 };
-    const r = checkEntrance({ profile, roadEdgeStationFt: 0.3, roadSide: { roadCrossSlopePercent: 2 }, apron }, ruleProfile());
+    const r = checkEntrance(
+      { profile, roadEdgeStationFt: 0.3, roadSide: { roadCrossSlopePercent: 2 }, apron },
+      ruleProfile(),
+    );
     expect(findingOf(r.findings, 'grade.road-edge-change').measured).toBeCloseTo(6, 6);
     expect(findingOf(r.findings, 'apron.right.grade.road-edge-change').measured).toBeCloseTo(6, 6);
     expect(findingOf(r.findings, 'apron.right.landing.min-grade').measured).toBeCloseTo(4, 6);

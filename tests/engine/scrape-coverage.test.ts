@@ -8,7 +8,15 @@ const vehicle = { name: 'Passenger car', wheelbaseFt: 11, frontOverhangFt: 3, re
 
 describe('a survey that ends before the car has crossed the last break says the scrape check was partial', () => {
   it('10 ft past a break is short of the 16 ft the car needs: an advisory finding at the break, not a silent pass', () => {
-    const r = checkEntrance({ profile: profileFromRuns([[20, 2], [10, 12]]) }, commonRuralTemplate);
+    const r = checkEntrance(
+      {
+        profile: profileFromRuns([
+          [20, 2],
+          [10, 12],
+        ]),
+      },
+      commonRuralTemplate,
+    );
     const coverage = r.findings.find((f) => f.ruleId === 'scrape.coverage');
     expect(coverage).toMatchObject({ status: 'advisory', stationFt: 20, unit: 'ft', limit: 16 });
     expect(coverage?.measured).toBeCloseTo(10, 9);
@@ -19,12 +27,26 @@ describe('a survey that ends before the car has crossed the last break says the 
   });
 
   it('a survey that runs the whole car length past its last break has no coverage finding', () => {
-    const r = checkEntrance({ profile: profileFromRuns([[20, 2], [16, 12]]) }, commonRuralTemplate);
+    const r = checkEntrance(
+      {
+        profile: profileFromRuns([
+          [20, 2],
+          [16, 12],
+        ]),
+      },
+      commonRuralTemplate,
+    );
     expect(r.findings.some((f) => f.ruleId === 'scrape.coverage')).toBe(false);
   });
 
   it('the scrape result itself names the break and the distances', () => {
-    const r = scrapeCheck({ profile: profileFromRuns([[20, 2], [10, 12]]), vehicle });
+    const r = scrapeCheck({
+      profile: profileFromRuns([
+        [20, 2],
+        [10, 12],
+      ]),
+      vehicle,
+    });
     expect(r.partialCoverage).toMatchObject({ breakStationFt: 20, neededFt: 16 });
     expect(r.partialCoverage?.surveyedPastFt).toBeCloseTo(10, 9);
   });

@@ -25,7 +25,10 @@ describe('scrape positions include every vertex event, so the step cannot hide a
     for (const breakFt of [40.3, 47.77, 55, 58.9, 61.25]) {
       const fine = scrapeCheck({ profile: crestAt(breakFt, 8), vehicle, stepFt: 0.01 }).minClearanceIn;
       for (const stepFt of [0.5, 2.5, 7, 10]) {
-        expect(Math.abs(scrapeCheck({ profile: crestAt(breakFt, 8), vehicle, stepFt }).minClearanceIn - fine), `${breakFt} at ${stepFt}`).toBeLessThan(0.01);
+        expect(
+          Math.abs(scrapeCheck({ profile: crestAt(breakFt, 8), vehicle, stepFt }).minClearanceIn - fine),
+          `${breakFt} at ${stepFt}`,
+        ).toBeLessThan(0.01);
       }
     }
   });
@@ -33,8 +36,11 @@ describe('scrape positions include every vertex event, so the step cannot hide a
   it('a short hump between two grid positions is still found under the front overhang', () => {
     // A 0.4 ft hump 1 ft long; a long nose meets it going in.
     const hump = [
-      { stationFt: 0, elevationFt: 100 }, { stationFt: 33.2, elevationFt: 100 }, { stationFt: 33.7, elevationFt: 100.4 },
-      { stationFt: 34.2, elevationFt: 100 }, { stationFt: 80, elevationFt: 100 },
+      { stationFt: 0, elevationFt: 100 },
+      { stationFt: 33.2, elevationFt: 100 },
+      { stationFt: 33.7, elevationFt: 100.4 },
+      { stationFt: 34.2, elevationFt: 100 },
+      { stationFt: 80, elevationFt: 100 },
     ];
     const fine = scrapeCheck({ profile: hump, vehicle, stepFt: 0.01 });
     const coarse = scrapeCheck({ profile: hump, vehicle, stepFt: 10 });

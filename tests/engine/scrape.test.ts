@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { breakOverAngleDeg, EngineInputError, gradePercentToDegrees, passengerCarPreset, scrapeCheck } from '@shared/engine';
+import {
+  breakOverAngleDeg,
+  EngineInputError,
+  gradePercentToDegrees,
+  passengerCarPreset,
+  scrapeCheck,
+} from '@shared/engine';
 
 const vehicle = { name: 'Test car', wheelbaseFt: 11, frontOverhangFt: 3, rearOverhangFt: 5, clearanceIn: 5 };
 
@@ -11,20 +17,30 @@ const singleBreak = (g1: number, g2: number) => [
 ];
 
 describe('percent grade to angle: atan(g/100) (docs/sources.md, "Grades and vehicles")', () => {
-  it.each([[5, 2.862], [8, 4.574], [10, 5.711], [12, 6.843], [15, 8.531], [20, 11.31]])('%i%% = %f deg', (g, deg) => {
+  it.each([
+    [5, 2.862],
+    [8, 4.574],
+    [10, 5.711],
+    [12, 6.843],
+    [15, 8.531],
+    [20, 11.31],
+  ])('%i%% = %f deg', (g, deg) => {
     expect(gradePercentToDegrees(g)).toBeCloseTo(deg, 3);
   });
 });
 
 describe('scrape check', () => {
-  it.each([2, 4, 6, 8, 10])('a single %i%% crest loses A*W/4 at mid-wheelbase (docs/sources.md, "Vertical transitions")', (a) => {
-    const r = scrapeCheck({ profile: singleBreak(a / 2, -a / 2), vehicle });
-    const lossIn = ((a / 100) * 11 * 12) / 4;
-    // The small-angle rule and the exact chord agree to well under a hundredth of an inch at these grades.
-    expect(r.minClearanceIn).toBeCloseTo(5 - lossIn, 1);
-    expect(r.where).toBe('between-axles');
-    expect(r.atStationFt).toBeCloseTo(50, 6);
-  });
+  it.each([2, 4, 6, 8, 10])(
+    'a single %i%% crest loses A*W/4 at mid-wheelbase (docs/sources.md, "Vertical transitions")',
+    (a) => {
+      const r = scrapeCheck({ profile: singleBreak(a / 2, -a / 2), vehicle });
+      const lossIn = ((a / 100) * 11 * 12) / 4;
+      // The small-angle rule and the exact chord agree to well under a hundredth of an inch at these grades.
+      expect(r.minClearanceIn).toBeCloseTo(5 - lossIn, 1);
+      expect(r.where).toBe('between-axles');
+      expect(r.atStationFt).toBeCloseTo(50, 6);
+    },
+  );
 
   it('a crest at the break-over angle 2 atan(2h/W) just touches (Eck and Kang, TRR 1356)', () => {
     const angle = breakOverAngleDeg({ clearanceIn: 5, wheelbaseFt: 11 });
@@ -34,7 +50,13 @@ describe('scrape check', () => {
   });
 
   it('a flat profile keeps the full clearance', () => {
-    const r = scrapeCheck({ profile: [{ stationFt: 0, elevationFt: 10 }, { stationFt: 60, elevationFt: 10 }], vehicle });
+    const r = scrapeCheck({
+      profile: [
+        { stationFt: 0, elevationFt: 10 },
+        { stationFt: 60, elevationFt: 10 },
+      ],
+      vehicle,
+    });
     expect(r.minClearanceIn).toBeCloseTo(5, 9);
     expect(r.passes).toBe(true);
   });
@@ -76,7 +98,13 @@ describe('scrape check', () => {
   });
 
   it('a profile shorter than the wheelbase checks no positions', () => {
-    const r = scrapeCheck({ profile: [{ stationFt: 0, elevationFt: 0 }, { stationFt: 8, elevationFt: 0 }], vehicle });
+    const r = scrapeCheck({
+      profile: [
+        { stationFt: 0, elevationFt: 0 },
+        { stationFt: 8, elevationFt: 0 },
+      ],
+      vehicle,
+    });
     expect(r.positionsChecked).toBe(0);
   });
 

@@ -4,14 +4,32 @@ import { EngineInputError, intersectionSightDistance, stoppingSightDistance } fr
 // AASHTO Green Book values as reproduced in the Highway Engineering Handbook Table 2.2 and the TxDOT
 // Roadway Design Manual 4.11.1 (docs/sources.md, "Sight distance").
 const SSD_LEVEL_FT: [number, number][] = [
-  [20, 115], [25, 155], [30, 200], [35, 250], [40, 305], [45, 360],
-  [50, 425], [55, 495], [60, 570], [65, 645], [70, 730],
+  [20, 115],
+  [25, 155],
+  [30, 200],
+  [35, 250],
+  [40, 305],
+  [45, 360],
+  [50, 425],
+  [55, 495],
+  [60, 570],
+  [65, 645],
+  [70, 730],
 ];
 
 // Highway Engineering Handbook Table 2.3A / TxDOT RDM 13.5.2: passenger car from a stop, left / right.
 const ISD_FT: [number, number, number][] = [
-  [20, 225, 195], [25, 280, 240], [30, 335, 290], [35, 390, 335], [40, 445, 385], [45, 500, 430],
-  [50, 555, 480], [55, 610, 530], [60, 665, 575], [65, 720, 625], [70, 775, 670],
+  [20, 225, 195],
+  [25, 280, 240],
+  [30, 335, 290],
+  [35, 390, 335],
+  [40, 445, 385],
+  [45, 500, 430],
+  [50, 555, 480],
+  [55, 610, 530],
+  [60, 665, 575],
+  [65, 720, 625],
+  [70, 775, 670],
 ];
 
 describe('stopping sight distance (AASHTO, Highway Engineering Handbook Table 2.2)', () => {
@@ -79,7 +97,9 @@ describe('intersection sight distance (AASHTO, Highway Engineering Handbook Tabl
 
   it('adds 0.5 s per extra lane for cars and 0.7 s for trucks (AASHTO)', () => {
     expect(intersectionSightDistance({ speedMph: 45, turn: 'left', extraLanes: 1 }).timeGapS).toBeCloseTo(8.0, 9);
-    expect(intersectionSightDistance({ speedMph: 45, turn: 'left', vehicle: 'combination', extraLanes: 2 }).timeGapS).toBeCloseTo(12.9, 9);
+    expect(
+      intersectionSightDistance({ speedMph: 45, turn: 'left', vehicle: 'combination', extraLanes: 2 }).timeGapS,
+    ).toBeCloseTo(12.9, 9);
   });
 
   it('approach grades of 3% or less need no adjustment (AASHTO)', () => {
@@ -87,12 +107,19 @@ describe('intersection sight distance (AASHTO, Highway Engineering Handbook Tabl
   });
 
   it('above 3%, +0.2 s per percent left and +0.1 s right, counted on the part above 3% by default (AASHTO)', () => {
-    expect(intersectionSightDistance({ speedMph: 55, turn: 'left', approachGradePercent: 5 }).timeGapS).toBeCloseTo(7.9, 9);
-    expect(intersectionSightDistance({ speedMph: 55, turn: 'right', approachGradePercent: 5 }).timeGapS).toBeCloseTo(6.7, 9);
+    expect(intersectionSightDistance({ speedMph: 55, turn: 'left', approachGradePercent: 5 }).timeGapS).toBeCloseTo(
+      7.9,
+      9,
+    );
+    expect(intersectionSightDistance({ speedMph: 55, turn: 'right', approachGradePercent: 5 }).timeGapS).toBeCloseTo(
+      6.7,
+      9,
+    );
   });
 
   it('the whole-grade reading, a rule-profile choice, counts every percent once past 3% (AASHTO, literal wording)', () => {
-    const whole = (turn: 'left' | 'right') => intersectionSightDistance({ speedMph: 55, turn, approachGradePercent: 5, gradeReading: 'whole-grade' }).timeGapS;
+    const whole = (turn: 'left' | 'right') =>
+      intersectionSightDistance({ speedMph: 55, turn, approachGradePercent: 5, gradeReading: 'whole-grade' }).timeGapS;
     expect(whole('left')).toBeCloseTo(8.5, 9);
     expect(whole('right')).toBeCloseTo(7.0, 9);
   });

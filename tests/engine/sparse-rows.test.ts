@@ -5,8 +5,24 @@ import { SparseRows } from '@shared/engine/sparse-rows';
 describe('sparse rows', () => {
   it('sums a column named twice in one row, drops a coefficient that sums to zero, and keeps rows apart', () => {
     const rows = new SparseRows();
-    rows.add([[3, 1], [1, 2], [3, 0.5]], 0, 4);
-    rows.add([[2, 1], [2, -1], [5, 7]], -Infinity, 1);
+    rows.add(
+      [
+        [3, 1],
+        [1, 2],
+        [3, 0.5],
+      ],
+      0,
+      4,
+    );
+    rows.add(
+      [
+        [2, 1],
+        [2, -1],
+        [5, 7],
+      ],
+      -Infinity,
+      1,
+    );
     rows.add([[1, 0]], 0, 0);
     expect(rows.count).toBe(3);
     expect(rows.starts).toEqual([0, 2, 3, 3]);

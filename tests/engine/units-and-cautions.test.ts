@@ -13,7 +13,15 @@ describe('metric display', () => {
 
 describe('cautions on the report (docs/sources.md, "Product rules": our own, no published source)', () => {
   it('every check report carries the utility, trench, traffic and review reminders', () => {
-    const r = checkEntrance({ profile: profileFromRuns([[20, 2], [30, 6]]) }, commonRuralTemplate);
+    const r = checkEntrance(
+      {
+        profile: profileFromRuns([
+          [20, 2],
+          [30, 6],
+        ]),
+      },
+      commonRuralTemplate,
+    );
     expect(r.cautions).toBe(SAFETY_CAUTIONS);
     const text = r.cautions.join(' ');
     for (const word of ['utilities', 'trench', 'traffic control', 'licensed engineer']) expect(text).toContain(word);

@@ -5,7 +5,12 @@ import { createTestApp, signIn, type TestApp } from '../setup/test-app';
 import { ensurePerson } from './people';
 
 export type Agent = Awaited<ReturnType<typeof signIn>>;
-export interface SignedIn { agent: Agent; id: string; email: string; role: Role }
+export interface SignedIn {
+  agent: Agent;
+  id: string;
+  email: string;
+  role: Role;
+}
 
 /**
  * Adds the demo people (only the people: the demo requests would skew counts) and signs in the first of each role,

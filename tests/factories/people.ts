@@ -7,11 +7,20 @@ import { users } from '../../server/db/schema';
 export type UserRow = typeof users.$inferSelect;
 
 /** A person with a unique e-mail; pass `email` to match an identity the OAuth stand-in knows. */
-export async function createPerson(db: DbOrTx, overrides: Partial<typeof users.$inferInsert> & { role?: Role } = {}): Promise<UserRow> {
+export async function createPerson(
+  db: DbOrTx,
+  overrides: Partial<typeof users.$inferInsert> & { role?: Role } = {},
+): Promise<UserRow> {
   const tag = randomUUID().slice(0, 8);
-  const [row] = await db.insert(users).values({
-    email: `person-${tag}@example.test`, name: `Person ${tag}`, role: 'applicant', ...overrides,
-  }).returning();
+  const [row] = await db
+    .insert(users)
+    .values({
+      email: `person-${tag}@example.test`,
+      name: `Person ${tag}`,
+      role: 'applicant',
+      ...overrides,
+    })
+    .returning();
   return row;
 }
 

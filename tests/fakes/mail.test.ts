@@ -9,10 +9,17 @@ import { startMailStandIn, type MailStandIn } from '../../fakes/mail/start-mail.
 let dir: string;
 let mail: MailStandIn;
 
-const transport = () => nodemailer.createTransport({ host: mail.smtpHost, port: mail.smtpPort, secure: false, connectionTimeout: 2000 });
+const transport = () =>
+  nodemailer.createTransport({ host: mail.smtpHost, port: mail.smtpPort, secure: false, connectionTimeout: 2000 });
 
 async function send(subject: string, extra: Partial<SendMailOptions> = {}) {
-  return transport().sendMail({ from: 'Gradepass <office@gradepass.test>', to: 'owner@example.test', subject, text: `Body of ${subject}`, ...extra });
+  return transport().sendMail({
+    from: 'Gradepass <office@gradepass.test>',
+    to: 'owner@example.test',
+    subject,
+    text: `Body of ${subject}`,
+    ...extra,
+  });
 }
 
 async function messages(): Promise<StoredMessage[]> {
@@ -51,9 +58,13 @@ describe('mail catcher', () => {
     const subject = `Slow ${crypto.randomUUID()}`;
     mail.setReplyDelay(1_500);
     let answered = false;
-    const sending = nodemailer.createTransport({ host: mail.smtpHost, port: mail.smtpPort, secure: false, connectionTimeout: 20_000 })
+    const sending = nodemailer
+      .createTransport({ host: mail.smtpHost, port: mail.smtpPort, secure: false, connectionTimeout: 20_000 })
       .sendMail({ from: 'office@gradepass.test', to: 'owner@example.test', subject, text: 'Slow.' })
-      .then((info) => { answered = true; return info; });
+      .then((info) => {
+        answered = true;
+        return info;
+      });
     try {
       for (let kept = false; !kept; kept = (await messages()).some((m) => m.subject === subject)) {
         await new Promise((resolve) => setTimeout(resolve, 100));
@@ -120,7 +131,9 @@ describe('mail catcher', () => {
     const restartedDir = await mkdtemp(join(tmpdir(), 'gradepass-mail-restart-'));
     try {
       const first = await startMailStandIn({ dir: restartedDir });
-      await nodemailer.createTransport({ host: first.smtpHost, port: first.smtpPort }).sendMail({ from: 'a@gradepass.test', to: 'b@example.test', subject, text: 'x' });
+      await nodemailer
+        .createTransport({ host: first.smtpHost, port: first.smtpPort })
+        .sendMail({ from: 'a@gradepass.test', to: 'b@example.test', subject, text: 'x' });
       await first.stop();
       const second = await startMailStandIn({ dir: restartedDir });
       const kept = (await (await fetch(`${second.webUrl}/api/messages`)).json()) as StoredMessage[];
@@ -135,7 +148,9 @@ describe('mail catcher', () => {
     const own = await mkdtemp(join(tmpdir(), 'gradepass-mail-clear-'));
     const catcher = await startMailStandIn({ dir: own });
     try {
-      await nodemailer.createTransport({ host: catcher.smtpHost, port: catcher.smtpPort }).sendMail({ from: 'a@gradepass.test', to: 'b@example.test', subject: 'gone soon', text: 'x' });
+      await nodemailer
+        .createTransport({ host: catcher.smtpHost, port: catcher.smtpPort })
+        .sendMail({ from: 'a@gradepass.test', to: 'b@example.test', subject: 'gone soon', text: 'x' });
       expect((await fetch(`${catcher.webUrl}/api/messages`, { method: 'DELETE' })).status).toBe(204);
       expect(await (await fetch(`${catcher.webUrl}/api/messages`)).json()).toEqual([]);
     } finally {

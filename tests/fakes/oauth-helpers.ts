@@ -1,6 +1,10 @@
 import { createHash, randomBytes } from 'node:crypto';
 
-export const client = { clientId: 'gradepass-test', clientSecret: 'test-secret', redirectUri: 'http://127.0.0.1:5170/auth/google/callback' };
+export const client = {
+  clientId: 'gradepass-test',
+  clientSecret: 'test-secret',
+  redirectUri: 'http://127.0.0.1:5170/auth/google/callback',
+};
 
 export const identities = [
   { email: 'avery.admin@gradepass.test', name: 'Avery Stone', role: 'admin' },

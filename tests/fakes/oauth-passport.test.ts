@@ -17,14 +17,25 @@ beforeAll(async () => {
   const web = express();
   const passport = new Passport();
   web.use(session({ secret: 'test-only', resave: false, saveUninitialized: false }));
-  web.get('/login', (req, res, next) => passport.authenticate('google', { scope: ['profile', 'email'], loginHint: String(req.query.hint) } as object)(req, res, next));
+  web.get('/login', (req, res, next) =>
+    passport.authenticate('google', { scope: ['profile', 'email'], loginHint: String(req.query.hint) } as object)(
+      req,
+      res,
+      next,
+    ),
+  );
   web.get('/auth/callback', passport.authenticate('google', { session: false }), (req, res) => {
     res.json(req.user);
   });
   app = createServer(web);
   await new Promise<void>((resolve) => app.listen(0, '127.0.0.1', resolve));
   appUrl = `http://127.0.0.1:${(app.address() as AddressInfo).port}`;
-  oauth = await startOAuthStandIn({ clientId: client.clientId, clientSecret: client.clientSecret, redirectUris: [`${appUrl}/auth/callback`], identities });
+  oauth = await startOAuthStandIn({
+    clientId: client.clientId,
+    clientSecret: client.clientSecret,
+    redirectUris: [`${appUrl}/auth/callback`],
+    identities,
+  });
   passport.use(
     new GoogleStrategy(
       {
@@ -37,7 +48,8 @@ beforeAll(async () => {
         state: true,
         pkce: true,
       },
-      (_accessToken: string, _refreshToken: string, profile: Profile, done: VerifyCallback) => done(null, profile as unknown as Express.User),
+      (_accessToken: string, _refreshToken: string, profile: Profile, done: VerifyCallback) =>
+        done(null, profile as unknown as Express.User),
     ),
   );
 });

@@ -6,7 +6,13 @@ import { authorizeQuery, client, identities, redeem } from './oauth-helpers.js';
 let oauth: OAuthStandIn;
 
 beforeAll(async () => {
-  oauth = await startOAuthStandIn({ port: 0, clientId: client.clientId, clientSecret: client.clientSecret, redirectUris: [client.redirectUri], identities });
+  oauth = await startOAuthStandIn({
+    port: 0,
+    clientId: client.clientId,
+    clientSecret: client.clientSecret,
+    redirectUris: [client.redirectUri],
+    identities,
+  });
 });
 
 afterAll(async () => {
@@ -30,7 +36,10 @@ function choose(query: string, fields: Record<string, string>) {
 }
 
 async function userinfoFor(code: string, verifier: string) {
-  const tokens = (await (await redeem(oauth.tokenUrl, code, verifier)).json()) as { access_token: string; id_token: string };
+  const tokens = (await (await redeem(oauth.tokenUrl, code, verifier)).json()) as {
+    access_token: string;
+    id_token: string;
+  };
   const response = await fetch(oauth.userinfoUrl, { headers: { authorization: `Bearer ${tokens.access_token}` } });
   expect(response.status).toBe(200);
   return { profile: (await response.json()) as Record<string, unknown>, tokens };
@@ -39,8 +48,16 @@ async function userinfoFor(code: string, verifier: string) {
 describe('OAuth stand-in', () => {
   it('publishes URLs that passport-google-oauth20 can use', async () => {
     expect(oauth.userinfoUrl.endsWith('/userinfo')).toBe(true);
-    const discovery = (await (await fetch(`${oauth.issuer}/.well-known/openid-configuration`)).json()) as Record<string, string>;
-    expect(discovery).toMatchObject({ issuer: oauth.issuer, authorization_endpoint: oauth.authorizationUrl, token_endpoint: oauth.tokenUrl, userinfo_endpoint: oauth.userinfoUrl });
+    const discovery = (await (await fetch(`${oauth.issuer}/.well-known/openid-configuration`)).json()) as Record<
+      string,
+      string
+    >;
+    expect(discovery).toMatchObject({
+      issuer: oauth.issuer,
+      authorization_endpoint: oauth.authorizationUrl,
+      token_endpoint: oauth.tokenUrl,
+      userinfo_endpoint: oauth.userinfoUrl,
+    });
   });
 
   it('shows a picker listing every demo identity and a field for a new e-mail', async () => {
@@ -52,7 +69,8 @@ describe('OAuth stand-in', () => {
       expect(html).toContain(`<button type="submit" name="email" value="${identity.email}">`);
       expect(html).toContain(identity.name);
     }
-    for (const label of ['Administrator', 'Office staff', 'Crew lead']) expect(html).toContain(`<span class="role">${label}</span>`);
+    for (const label of ['Administrator', 'Office staff', 'Crew lead'])
+      expect(html).toContain(`<span class="role">${label}</span>`);
     expect(html).toMatch(/<label for="new-email">E-mail<\/label>\s*<input id="new-email" name="email" type="email"/);
     expect(html).not.toMatch(/<(script|link)\b|src="http/);
   });
@@ -72,7 +90,12 @@ describe('OAuth stand-in', () => {
       picture: expect.stringMatching(new RegExp(`^${oauth.issuer}/avatars/\\d+\\.svg`)),
     });
     const idClaims = JSON.parse(Buffer.from(tokens.id_token.split('.')[1], 'base64url').toString());
-    expect(idClaims).toMatchObject({ iss: oauth.issuer, aud: client.clientId, email: identities[1].email, sub: profile.sub });
+    expect(idClaims).toMatchObject({
+      iss: oauth.issuer,
+      aud: client.clientId,
+      email: identities[1].email,
+      sub: profile.sub,
+    });
     const picture = await fetch(String(profile.picture));
     expect(picture.headers.get('content-type')).toContain('image/svg+xml');
   });
@@ -81,14 +104,23 @@ describe('OAuth stand-in', () => {
     const { query, verifier } = authorizeQuery();
     const { code } = codeFrom(await choose(query, { email: 'Pat.Newcomer@Example.test', name: 'Pat Q. Newcomer' }));
     const { profile } = await userinfoFor(code, verifier);
-    expect(profile).toMatchObject({ email: 'pat.newcomer@example.test', name: 'Pat Q. Newcomer', given_name: 'Pat', family_name: 'Q. Newcomer' });
+    expect(profile).toMatchObject({
+      email: 'pat.newcomer@example.test',
+      name: 'Pat Q. Newcomer',
+      given_name: 'Pat',
+      family_name: 'Q. Newcomer',
+    });
   });
 
   it('skips the page when login_hint names an e-mail', async () => {
     const { query, verifier } = authorizeQuery({ login_hint: 'river.applicant@example.test' });
     const response = await fetch(`${oauth.authorizationUrl}?${query}`, { redirect: 'manual' });
     const { profile } = await userinfoFor(codeFrom(response).code, verifier);
-    expect(profile).toMatchObject({ email: 'river.applicant@example.test', name: 'River Applicant', sub: subjectFor('river.applicant@example.test') });
+    expect(profile).toMatchObject({
+      email: 'river.applicant@example.test',
+      name: 'River Applicant',
+      sub: subjectFor('river.applicant@example.test'),
+    });
   });
 
   it('refuses a wrong code_verifier, a reused code and a wrong client secret', async () => {

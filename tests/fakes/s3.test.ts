@@ -33,8 +33,18 @@ function makeClient(secretAccessKey = s3.secretAccessKey) {
 
 const uniqueKey = (name: string) => `photos/${crypto.randomUUID()}/${name}`;
 
-function presignPut(key: string, contentType: string, contentLength: number, extra: { expiresIn?: number; signingDate?: Date } = {}) {
-  const command = new PutObjectCommand({ Bucket: s3.bucket, Key: key, ContentType: contentType, ContentLength: contentLength });
+function presignPut(
+  key: string,
+  contentType: string,
+  contentLength: number,
+  extra: { expiresIn?: number; signingDate?: Date } = {},
+) {
+  const command = new PutObjectCommand({
+    Bucket: s3.bucket,
+    Key: key,
+    ContentType: contentType,
+    ContentLength: contentLength,
+  });
   return getSignedUrl(client, command, { expiresIn: 300, signableHeaders: new Set(['content-type']), ...extra });
 }
 
@@ -44,7 +54,12 @@ async function errorCode(response: Response) {
 
 beforeAll(async () => {
   dir = await mkdtemp(join(tmpdir(), 'gradepass-s3-'));
-  s3 = await startS3StandIn({ dir, port: 0, bucket: 'test-photos', allowedOrigins: [pageOrigin, 'http://localhost:5170'] });
+  s3 = await startS3StandIn({
+    dir,
+    port: 0,
+    bucket: 'test-photos',
+    allowedOrigins: [pageOrigin, 'http://localhost:5170'],
+  });
   client = makeClient();
 });
 
@@ -57,16 +72,22 @@ afterAll(async () => {
 describe('S3 stand-in: SDK calls signed in headers', () => {
   it('puts, heads, gets, lists and deletes an object', async () => {
     const key = uniqueKey('report one.pdf');
-    await client.send(new PutObjectCommand({ Bucket: s3.bucket, Key: key, Body: 'grade check', ContentType: 'application/pdf' }));
+    await client.send(
+      new PutObjectCommand({ Bucket: s3.bucket, Key: key, Body: 'grade check', ContentType: 'application/pdf' }),
+    );
     const head = await client.send(new HeadObjectCommand({ Bucket: s3.bucket, Key: key }));
     expect(head.ContentLength).toBe(11);
     expect(head.ContentType).toBe('application/pdf');
     const got = await client.send(new GetObjectCommand({ Bucket: s3.bucket, Key: key }));
     expect(await got.Body?.transformToString()).toBe('grade check');
-    const listed = await client.send(new ListObjectsV2Command({ Bucket: s3.bucket, Prefix: key.split('/').slice(0, 2).join('/') }));
+    const listed = await client.send(
+      new ListObjectsV2Command({ Bucket: s3.bucket, Prefix: key.split('/').slice(0, 2).join('/') }),
+    );
     expect(listed.Contents?.map((item) => item.Key)).toEqual([key]);
     await client.send(new DeleteObjectCommand({ Bucket: s3.bucket, Key: key }));
-    await expect(client.send(new HeadObjectCommand({ Bucket: s3.bucket, Key: key }))).rejects.toMatchObject({ $metadata: { httpStatusCode: 404 } });
+    await expect(client.send(new HeadObjectCommand({ Bucket: s3.bucket, Key: key }))).rejects.toMatchObject({
+      $metadata: { httpStatusCode: 404 },
+    });
   });
 
   it('refuses a client holding the wrong secret', async () => {
@@ -80,12 +101,29 @@ describe('S3 stand-in: SDK calls signed in headers', () => {
   it('refuses a body that differs from the signed payload hash', async () => {
     const key = uniqueKey('swapped.txt');
     const url = new URL(`${s3.endpoint}/${s3.bucket}/${key}`);
-    const signer = new SignatureV4({ credentials: s3, region: s3.region, service: 's3', sha256: Sha256, uriEscapePath: false });
-    const signed = await signer.sign({ method: 'PUT', protocol: 'http:', hostname: url.hostname, port: Number(url.port), path: url.pathname, query: {}, headers: { host: url.host }, body: 'original' });
+    const signer = new SignatureV4({
+      credentials: s3,
+      region: s3.region,
+      service: 's3',
+      sha256: Sha256,
+      uriEscapePath: false,
+    });
+    const signed = await signer.sign({
+      method: 'PUT',
+      protocol: 'http:',
+      hostname: url.hostname,
+      port: Number(url.port),
+      path: url.pathname,
+      query: {},
+      headers: { host: url.host },
+      body: 'original',
+    });
     const response = await fetch(url, { method: 'PUT', headers: signed.headers, body: 'swapped!' });
     expect(response.status).toBe(400);
     expect(await errorCode(response)).toBe('XAmzContentSHA256Mismatch');
-    await expect(client.send(new HeadObjectCommand({ Bucket: s3.bucket, Key: key }))).rejects.toMatchObject({ $metadata: { httpStatusCode: 404 } });
+    await expect(client.send(new HeadObjectCommand({ Bucket: s3.bucket, Key: key }))).rejects.toMatchObject({
+      $metadata: { httpStatusCode: 404 },
+    });
   });
 
   it('refuses an unsigned request', async () => {
@@ -99,7 +137,11 @@ describe('S3 stand-in: presigned upload URLs', () => {
   it('accepts a PUT from plain fetch and stores the bytes', async () => {
     const key = uniqueKey('driveway.jpg');
     const body = new Uint8Array([0xff, 0xd8, 0xff, 0xe0, 1, 2, 3]);
-    const response = await fetch(await presignPut(key, 'image/jpeg', body.length), { method: 'PUT', body, headers: { 'content-type': 'image/jpeg' } });
+    const response = await fetch(await presignPut(key, 'image/jpeg', body.length), {
+      method: 'PUT',
+      body,
+      headers: { 'content-type': 'image/jpeg' },
+    });
     expect(response.status).toBe(200);
     expect(response.headers.get('etag')).toBeTruthy();
     const head = await client.send(new HeadObjectCommand({ Bucket: s3.bucket, Key: key }));
@@ -107,7 +149,10 @@ describe('S3 stand-in: presigned upload URLs', () => {
   });
 
   it('refuses an expired URL', async () => {
-    const url = await presignPut(uniqueKey('late.jpg'), 'image/jpeg', 3, { expiresIn: 60, signingDate: new Date(Date.now() - 120_000) });
+    const url = await presignPut(uniqueKey('late.jpg'), 'image/jpeg', 3, {
+      expiresIn: 60,
+      signingDate: new Date(Date.now() - 120_000),
+    });
     const response = await fetch(url, { method: 'PUT', body: 'abc', headers: { 'content-type': 'image/jpeg' } });
     expect(response.status).toBe(403);
     expect(await response.text()).toContain('Request has expired');
@@ -135,11 +180,29 @@ describe('S3 stand-in: presigned upload URLs', () => {
     const options = { dir: ownDir, bucket: 'restart-bucket', allowedOrigins: [] };
     let storage = await startS3StandIn(options);
     try {
-      const own = new S3Client({ endpoint: storage.endpoint, region: storage.region, forcePathStyle: true, credentials: storage, requestChecksumCalculation: 'WHEN_REQUIRED' });
-      const command = new PutObjectCommand({ Bucket: storage.bucket, Key: 'a.jpg', ContentType: 'image/jpeg', ContentLength: 3 });
-      const url = new URL(await getSignedUrl(own, command, { expiresIn: 300, signableHeaders: new Set(['content-type']) }));
+      const own = new S3Client({
+        endpoint: storage.endpoint,
+        region: storage.region,
+        forcePathStyle: true,
+        credentials: storage,
+        requestChecksumCalculation: 'WHEN_REQUIRED',
+      });
+      const command = new PutObjectCommand({
+        Bucket: storage.bucket,
+        Key: 'a.jpg',
+        ContentType: 'image/jpeg',
+        ContentLength: 3,
+      });
+      const url = new URL(
+        await getSignedUrl(own, command, { expiresIn: 300, signableHeaders: new Set(['content-type']) }),
+      );
       own.destroy();
-      const put = (endpoint: string) => fetch(`${endpoint}${url.pathname}${url.search}`, { method: 'PUT', body: 'abc', headers: { 'content-type': 'image/jpeg', host: url.host } });
+      const put = (endpoint: string) =>
+        fetch(`${endpoint}${url.pathname}${url.search}`, {
+          method: 'PUT',
+          body: 'abc',
+          headers: { 'content-type': 'image/jpeg', host: url.host },
+        });
       expect((await put(storage.endpoint)).status).toBe(200);
       await storage.stop();
       storage = await startS3StandIn({ ...options, port: Number(url.port) });
@@ -157,17 +220,28 @@ describe('S3 stand-in: presigned upload URLs', () => {
     const url = await presignPut(key, 'image/jpeg', 3);
     const response = await fetch(url, { method: 'PUT', body: 'abc', headers: { 'content-type': 'text/html' } });
     expect(response.status).toBe(403);
-    await expect(client.send(new HeadObjectCommand({ Bucket: s3.bucket, Key: key }))).rejects.toMatchObject({ $metadata: { httpStatusCode: 404 } });
+    await expect(client.send(new HeadObjectCommand({ Bucket: s3.bucket, Key: key }))).rejects.toMatchObject({
+      $metadata: { httpStatusCode: 404 },
+    });
   });
 
   it('refuses a body larger than the signed length', async () => {
     const url = await presignPut(uniqueKey('big.jpg'), 'image/jpeg', 4);
-    const response = await fetch(url, { method: 'PUT', body: 'far more than four bytes', headers: { 'content-type': 'image/jpeg' } });
+    const response = await fetch(url, {
+      method: 'PUT',
+      body: 'far more than four bytes',
+      headers: { 'content-type': 'image/jpeg' },
+    });
     expect(response.status).toBe(403);
   });
 
   it('refuses upload URLs that leave the content type unsigned', async () => {
-    const command = new PutObjectCommand({ Bucket: s3.bucket, Key: uniqueKey('loose.jpg'), ContentType: 'image/jpeg', ContentLength: 3 });
+    const command = new PutObjectCommand({
+      Bucket: s3.bucket,
+      Key: uniqueKey('loose.jpg'),
+      ContentType: 'image/jpeg',
+      ContentLength: 3,
+    });
     const url = await getSignedUrl(client, command, { expiresIn: 300 });
     const response = await fetch(url, { method: 'PUT', body: 'abc', headers: { 'content-type': 'image/jpeg' } });
     expect(response.status).toBe(403);
@@ -178,7 +252,9 @@ describe('S3 stand-in: presigned upload URLs', () => {
 describe('S3 stand-in: presigned download URLs', () => {
   it('serves a presigned GET and refuses a tampered one', async () => {
     const key = uniqueKey('site.png');
-    await client.send(new PutObjectCommand({ Bucket: s3.bucket, Key: key, Body: 'png bytes', ContentType: 'image/png' }));
+    await client.send(
+      new PutObjectCommand({ Bucket: s3.bucket, Key: key, Body: 'png bytes', ContentType: 'image/png' }),
+    );
     const url = await getSignedUrl(client, new GetObjectCommand({ Bucket: s3.bucket, Key: key }), { expiresIn: 60 });
     const ok = await fetch(url);
     expect(ok.status).toBe(200);
@@ -216,7 +292,11 @@ describe('S3 stand-in: CORS for the app page', () => {
 
   it('lets the page read the ETag of its upload', async () => {
     const url = await presignPut(uniqueKey('from-page.jpg'), 'image/jpeg', 3);
-    const response = await fetch(url, { method: 'PUT', body: 'abc', headers: { 'content-type': 'image/jpeg', origin: pageOrigin } });
+    const response = await fetch(url, {
+      method: 'PUT',
+      body: 'abc',
+      headers: { 'content-type': 'image/jpeg', origin: pageOrigin },
+    });
     expect(response.status).toBe(200);
     expect(response.headers.get('access-control-allow-origin')).toBe(pageOrigin);
     expect(response.headers.get('access-control-expose-headers')).toBe('ETag');

@@ -15,7 +15,12 @@ beforeAll(async () => {
     dataDir,
     bucket: 'gradepass-photos',
     allowedOrigins: ['http://127.0.0.1:5170'],
-    oauth: { clientId: 'c', clientSecret: 's', redirectUris: ['http://127.0.0.1:5170/cb'], identities: [{ email: 'a@gradepass.test', name: 'A Person' }] },
+    oauth: {
+      clientId: 'c',
+      clientSecret: 's',
+      redirectUris: ['http://127.0.0.1:5170/cb'],
+      identities: [{ email: 'a@gradepass.test', name: 'A Person' }],
+    },
   });
 });
 
@@ -35,10 +40,19 @@ const accepts = (port: number) =>
   });
 
 it('starts every service on loopback with the bucket ready and data under dataDir', async () => {
-  for (const url of [standIns.s3.endpoint, standIns.mail.webUrl, standIns.oauth.issuer]) expect(new URL(url).hostname).toBe('127.0.0.1');
+  for (const url of [standIns.s3.endpoint, standIns.mail.webUrl, standIns.oauth.issuer])
+    expect(new URL(url).hostname).toBe('127.0.0.1');
   expect(standIns.mail.smtpHost).toBe('127.0.0.1');
-  const client = new S3Client({ endpoint: standIns.s3.endpoint, region: standIns.s3.region, forcePathStyle: true, credentials: standIns.s3, requestChecksumCalculation: 'WHEN_REQUIRED' });
-  await expect(client.send(new ListObjectsV2Command({ Bucket: standIns.s3.bucket }))).resolves.toMatchObject({ $metadata: { httpStatusCode: 200 } });
+  const client = new S3Client({
+    endpoint: standIns.s3.endpoint,
+    region: standIns.s3.region,
+    forcePathStyle: true,
+    credentials: standIns.s3,
+    requestChecksumCalculation: 'WHEN_REQUIRED',
+  });
+  await expect(client.send(new ListObjectsV2Command({ Bucket: standIns.s3.bucket }))).resolves.toMatchObject({
+    $metadata: { httpStatusCode: 200 },
+  });
   client.destroy();
   expect((await readdir(dataDir)).sort()).toEqual(['mail', 's3']);
 });
@@ -50,7 +64,12 @@ it('stops everything and frees every port', async () => {
     allowedOrigins: [],
     oauth: { clientId: 'c', clientSecret: 's', redirectUris: [], identities: [] },
   });
-  const ports = [portOf(second.s3.endpoint), second.mail.smtpPort, portOf(second.mail.webUrl), portOf(second.oauth.issuer)];
+  const ports = [
+    portOf(second.s3.endpoint),
+    second.mail.smtpPort,
+    portOf(second.mail.webUrl),
+    portOf(second.oauth.issuer),
+  ];
   for (const port of ports) expect(await accepts(port)).toBe(true);
   await second.stop();
   for (const port of ports) expect(await accepts(port)).toBe(false);

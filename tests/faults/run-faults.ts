@@ -12,9 +12,18 @@ const freezeSeconds = n('FAULT_FREEZE_SECONDS', 15);
 const slowReplySeconds = n('FAULT_SLOW_REPLY_SECONDS', 6);
 const smtpDownSeconds = n('FAULT_SMTP_DOWN_SECONDS', 30);
 // A short lease and retry clock, so each fault takes seconds, not the minutes the defaults would.
-const clock = { EMAIL_LEASE_SECONDS: '5', EMAIL_RETRY_FIRST_DELAY_SECONDS: '0.5', EMAIL_RETRY_MAX_DELAY_SECONDS: '2', EMAIL_RETRY_HORIZON_SECONDS: '3600' };
+const clock = {
+  EMAIL_LEASE_SECONDS: '5',
+  EMAIL_RETRY_FIRST_DELAY_SECONDS: '0.5',
+  EMAIL_RETRY_MAX_DELAY_SECONDS: '2',
+  EMAIL_RETRY_HORIZON_SECONDS: '3600',
+};
 
-interface Row extends Tally { fault: string; died: number; note: string }
+interface Row extends Tally {
+  fault: string;
+  died: number;
+  note: string;
+}
 const rows: Row[] = [];
 
 /** Asks every live instance for the e-mail log over and over, keeping each answer's status and time. */
@@ -23,10 +32,14 @@ function probe(rig: Rig) {
   let going = true;
   const done = (async () => {
     while (going) {
-      await Promise.all(rig.instances.filter((i) => !i.killed).map(async (i) => {
-        const started = Date.now();
-        seen.push({ status: await answer(`${i.origin}/api/emails?limit=1`, i.cookie), ms: Date.now() - started });
-      }));
+      await Promise.all(
+        rig.instances
+          .filter((i) => !i.killed)
+          .map(async (i) => {
+            const started = Date.now();
+            seen.push({ status: await answer(`${i.origin}/api/emails?limit=1`, i.cookie), ms: Date.now() - started });
+          }),
+      );
       await sleep(100);
     }
   })();
@@ -39,23 +52,36 @@ function probe(rig: Rig) {
   };
 }
 
-async function fault(rig: Rig, name: string, run: () => Promise<{ ids: string[]; note?: string }>, timeoutMs = 180_000) {
+async function fault(
+  rig: Rig,
+  name: string,
+  run: () => Promise<{ ids: string[]; note?: string }>,
+  timeoutMs = 180_000,
+) {
   process.stdout.write(`- ${name}... `);
   const diedBefore = rig.died().length;
   const started = Date.now();
   const { ids, note = '' } = await run();
   const tally = await settle(rig.standIns.mail.webUrl, ids, timeoutMs, 3_000);
   rig.standIns.mail.setReplyDelay(0);
-  const row = { fault: name, ...tally, died: rig.died().length - diedBefore, note: `${note}${note ? '; ' : ''}all out ${((Date.now() - started) / 1000).toFixed(0)} s after the start` };
+  const row = {
+    fault: name,
+    ...tally,
+    died: rig.died().length - diedBefore,
+    note: `${note}${note ? '; ' : ''}all out ${((Date.now() - started) / 1000).toFixed(0)} s after the start`,
+  };
   rows.push(row);
   console.log(`tried ${row.tried}, lost ${row.lost}, doubled ${row.doubled}, died ${row.died}`);
 }
 
 async function main() {
-  console.log(`Starting PostgreSQL, the stand-ins and two app instances with workers on (lease ${clock.EMAIL_LEASE_SECONDS} s)...`);
+  console.log(
+    `Starting PostgreSQL, the stand-ins and two app instances with workers on (lease ${clock.EMAIL_LEASE_SECONDS} s)...`,
+  );
   const rig = await startRig({ instances: 2, env: clock });
   // Ctrl-C stops what the rig started (PostgreSQL, the stand-ins, the instances) before leaving.
-  for (const signal of ['SIGINT', 'SIGTERM'] as const) process.once(signal, () => void rig.stop().finally(() => process.exit(130)));
+  for (const signal of ['SIGINT', 'SIGTERM'] as const)
+    process.once(signal, () => void rig.stop().finally(() => process.exit(130)));
   try {
     await fault(rig, `PostgreSQL frozen (SIGSTOP) for ${freezeSeconds} s`, async () => {
       rig.standIns.mail.setReplyDelay(300);
@@ -63,8 +89,15 @@ async function main() {
       const report = probe(rig);
       await rig.freezePostgres(freezeSeconds * 1000);
       const thawed = Date.now();
-      await until('service to return', async () => (await answer(`${rig.instances[0].origin}/api/emails?limit=1`, rig.instances[0].cookie)) === 200, 180_000);
-      return { ids, note: `${await report()}; serving again ${((Date.now() - thawed) / 1000).toFixed(1)} s after the thaw` };
+      await until(
+        'service to return',
+        async () => (await answer(`${rig.instances[0].origin}/api/emails?limit=1`, rig.instances[0].cookie)) === 200,
+        180_000,
+      );
+      return {
+        ids,
+        note: `${await report()}; serving again ${((Date.now() - thawed) / 1000).toFixed(1)} s after the thaw`,
+      };
     });
 
     await fault(rig, 'PostgreSQL restarted (down 2 s) under two instances', async () => {
@@ -74,43 +107,76 @@ async function main() {
       await sleep(1_000);
       await rig.restartPostgres(2_000);
       const ids = await writing;
-      await until('service to return', async () => (await answer(`${rig.instances[0].origin}/api/emails?limit=1`, rig.instances[0].cookie)) === 200);
+      await until(
+        'service to return',
+        async () => (await answer(`${rig.instances[0].origin}/api/emails?limit=1`, rig.instances[0].cookie)) === 200,
+      );
       return { ids, note: await report() };
     });
 
-    await fault(rig, `SMTP slow (every reply held ${slowReplySeconds} s, lease ${clock.EMAIL_LEASE_SECONDS} s)`, async () => {
-      rig.standIns.mail.setReplyDelay(slowReplySeconds * 1000);
-      return { ids: await writeEmails(rig.db, count, 'slow') };
-    }, 600_000);
+    await fault(
+      rig,
+      `SMTP slow (every reply held ${slowReplySeconds} s, lease ${clock.EMAIL_LEASE_SECONDS} s)`,
+      async () => {
+        rig.standIns.mail.setReplyDelay(slowReplySeconds * 1000);
+        return { ids: await writeEmails(rig.db, count, 'slow') };
+      },
+      600_000,
+    );
 
     await fault(rig, `SMTP down ${smtpDownSeconds} s (past the old 7 tries)`, async () => {
       await rig.standIns.mail.stopSmtp();
       const ids = await writeEmails(rig.db, count, 'smtp down');
       await sleep(smtpDownSeconds * 1000);
-      const tries = await rig.db.select({ attempts: emails.attempts, status: emails.status }).from(emails).where(inArray(emails.id, ids));
+      const tries = await rig.db
+        .select({ attempts: emails.attempts, status: emails.status })
+        .from(emails)
+        .where(inArray(emails.id, ids));
       await rig.standIns.mail.startSmtp();
       const fewest = Math.min(...tries.map((r) => r.attempts));
-      return { ids, note: `each tried at least ${fewest} times while down, ${tries.filter((r) => r.status === 'dead').length} dead` };
+      return {
+        ids,
+        note: `each tried at least ${fewest} times while down, ${tries.filter((r) => r.status === 'dead').length} dead`,
+      };
     });
 
     await fault(rig, 'a worker killed (SIGKILL) mid-send', async () => {
       rig.standIns.mail.setReplyDelay(1_000);
       const ids = await writeEmails(rig.db, count, 'kill');
-      await until('messages with the mail server', async () =>
-        (await rig.db.select({ id: emails.id }).from(emails).where(eq(emails.status, 'sending'))).length >= 4);
+      await until(
+        'messages with the mail server',
+        async () =>
+          (await rig.db.select({ id: emails.id }).from(emails).where(eq(emails.status, 'sending'))).length >= 4,
+      );
       const victim = rig.instances[0];
       victim.killed = true;
       victim.child.kill('SIGKILL');
       const killedAt = Date.now();
-      await until('the victim\'s rows to be sent', async () =>
-        (await rig.db.select({ id: emails.id }).from(emails).where(inArray(emails.status, ['sending', 'queued', 'failed']))).length === 0, 120_000);
+      await until(
+        "the victim's rows to be sent",
+        async () =>
+          (
+            await rig.db
+              .select({ id: emails.id })
+              .from(emails)
+              .where(inArray(emails.status, ['sending', 'queued', 'failed']))
+          ).length === 0,
+        120_000,
+      );
       return { ids, note: `every row sent ${((Date.now() - killedAt) / 1000).toFixed(1)} s after the kill` };
     });
   } finally {
     await rig.stop();
   }
   console.log('\nfault'.padEnd(58), 'tried'.padStart(6), 'lost'.padStart(5), 'doubled'.padStart(8), 'died'.padStart(5));
-  for (const r of rows) console.log(r.fault.padEnd(57), String(r.tried).padStart(6), String(r.lost).padStart(5), String(r.doubled).padStart(8), String(r.died).padStart(5));
+  for (const r of rows)
+    console.log(
+      r.fault.padEnd(57),
+      String(r.tried).padStart(6),
+      String(r.lost).padStart(5),
+      String(r.doubled).padStart(8),
+      String(r.died).padStart(5),
+    );
   console.log('');
   for (const r of rows) console.log(`${r.fault}: ${r.note}`);
 }

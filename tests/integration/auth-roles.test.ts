@@ -82,7 +82,10 @@ describe('role guards', () => {
   it('refuses to add a person whose e-mail is already in use, naming the E-mail field, and leaves them as they were', async () => {
     const admin = await signIn(t.app, person('admin').email);
     const owner = person('applicant');
-    const res = await admin.post('/api/users').send({ email: owner.email.toUpperCase(), name: 'Someone Else', role: 'staff' }).expect(409);
+    const res = await admin
+      .post('/api/users')
+      .send({ email: owner.email.toUpperCase(), name: 'Someone Else', role: 'staff' })
+      .expect(409);
     expect(res.body.error.message).toMatch(/^E-mail: /);
     expect(res.body.error.fields).toHaveProperty('email');
     const listed = (await admin.get('/api/users').query({ search: owner.email }).expect(200)).body.users;
@@ -97,7 +100,11 @@ describe('role guards', () => {
     const me = (await admin.get('/api/me')).body.user;
     const bad = await admin.patch(`/api/users/${me.id}`).send({ role: 'boss' }).expect(400);
     expect(bad.body.error.fields).toHaveProperty('role');
-    const malformed = await admin.post('/api/users').set('Content-Type', 'application/json').send('{"email":').expect(400);
+    const malformed = await admin
+      .post('/api/users')
+      .set('Content-Type', 'application/json')
+      .send('{"email":')
+      .expect(400);
     expect(malformed.body.error.code).toBe('malformed_json');
     const form = await admin.post('/api/users').type('form').send('email=a@b.test').expect(415);
     expect(form.body.error.code).toBe('unsupported_media_type');

@@ -5,7 +5,10 @@ import { signIn, type TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-withCastApp((app, signedIn) => { t = app; cast = signedIn; });
+withCastApp((app, signedIn) => {
+  t = app;
+  cast = signedIn;
+});
 
 describe('taking a job through the generic status endpoint', () => {
   it('works like the crew endpoint: the loser of the race is told who has the job (409)', async () => {

@@ -21,7 +21,12 @@ afterAll(() => t.close());
 const released = () => createReleasedJob(t.ctx.db, { applicantId: cast.applicant.id, staffId: cast.staff.id });
 
 async function requestIn(status: RequestStatus, crewId: string | null = null) {
-  const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status, crewId, permitReference: 'HT-ACC-0001' });
+  const row = await createRequestRow(t.ctx.db, {
+    applicantId: cast.applicant.id,
+    status,
+    crewId,
+    permitReference: 'HT-ACC-0001',
+  });
   await createCrewCheck(t.ctx.db, row.id, cast.staff.id);
   return row;
 }
@@ -41,8 +46,11 @@ describe('an applicant cannot reach any crew API', () => {
     const job = await released();
     const gets = ['/api/crew/board', '/api/crew/my-jobs', '/api/crew/yard', ...reads(job.id)];
     for (const path of gets) expect((await cast.applicant.agent.get(path)).status, path).toBe(403);
-    for (const [path, body] of writes(job.id)) expect((await cast.applicant.agent.post(path).send(body)).status, path).toBe(403);
-    expect((await cast.applicant.agent.put('/api/crew/yard').send({ label: 'Yard', lat: 44, lng: -72 })).status).toBe(403);
+    for (const [path, body] of writes(job.id))
+      expect((await cast.applicant.agent.post(path).send(body)).status, path).toBe(403);
+    expect((await cast.applicant.agent.put('/api/crew/yard').send({ label: 'Yard', lat: 44, lng: -72 })).status).toBe(
+      403,
+    );
   });
 
   it('nobody signed in gets 401', async () => {
@@ -54,35 +62,51 @@ describe('an applicant cannot reach any crew API', () => {
 });
 
 describe('crew see released jobs and their own, nothing else', () => {
-  const hidden: RequestStatus[] = ['draft', 'submitted', 'visit_booked', 'checked', 'permit_filed', 'permit_granted', 'permit_refused', 'declined'];
+  const hidden: RequestStatus[] = [
+    'draft',
+    'submitted',
+    'visit_booked',
+    'checked',
+    'permit_filed',
+    'permit_granted',
+    'permit_refused',
+    'declined',
+  ];
 
   it.each(hidden)('a request that is %s is not on the board and its sheet is 404', async (status) => {
     const row = await requestIn(status);
     const board = await cast.crew.agent.get('/api/crew/board').expect(200);
     expect(board.body.jobs.map((j: { requestId: string }) => j.requestId)).not.toContain(row.id);
     for (const path of reads(row.id)) expect((await cast.crew.agent.get(path)).status, path).toBe(404);
-    expect((await cast.crew.agent.post(`/api/crew/jobs/${row.id}/accept`).send({ expectedVersion: row.version })).status).toBe(404);
+    expect(
+      (await cast.crew.agent.post(`/api/crew/jobs/${row.id}/accept`).send({ expectedVersion: row.version })).status,
+    ).toBe(404);
   });
 
-  it.each(['crew_assigned', 'under_construction', 'built'] as const)('another crew’s %s job is invisible: 404 everywhere', async (status) => {
-    const row = await requestIn(status, otherCrewId);
-    for (const path of reads(row.id)) expect((await cast.crew.agent.get(path)).status, path).toBe(404);
-    for (const [path, body] of writes(row.id)) {
-      const res = await cast.crew.agent.post(path).send(body);
-      // Taking it names who has it (the one thing the board promises); every other action cannot see it.
-      expect(res.status, path).toBe(path.endsWith('/accept') ? 409 : 404);
-    }
-    const mine = await cast.crew.agent.get('/api/crew/my-jobs').expect(200);
-    expect(mine.body.jobs.map((j: { requestId: string }) => j.requestId)).not.toContain(row.id);
-    const theirs = await otherCrew.get('/api/crew/my-jobs').expect(200);
-    expect(theirs.body.jobs.map((j: { requestId: string }) => j.requestId)).toContain(row.id);
-  });
+  it.each(['crew_assigned', 'under_construction', 'built'] as const)(
+    'another crew’s %s job is invisible: 404 everywhere',
+    async (status) => {
+      const row = await requestIn(status, otherCrewId);
+      for (const path of reads(row.id)) expect((await cast.crew.agent.get(path)).status, path).toBe(404);
+      for (const [path, body] of writes(row.id)) {
+        const res = await cast.crew.agent.post(path).send(body);
+        // Taking it names who has it (the one thing the board promises); every other action cannot see it.
+        expect(res.status, path).toBe(path.endsWith('/accept') ? 409 : 404);
+      }
+      const mine = await cast.crew.agent.get('/api/crew/my-jobs').expect(200);
+      expect(mine.body.jobs.map((j: { requestId: string }) => j.requestId)).not.toContain(row.id);
+      const theirs = await otherCrew.get('/api/crew/my-jobs').expect(200);
+      expect(theirs.body.jobs.map((j: { requestId: string }) => j.requestId)).toContain(row.id);
+    },
+  );
 
   it('the office may read the board and a sheet but cannot take a job', async () => {
     const job = await released();
     await cast.staff.agent.get('/api/crew/board').expect(200);
     await cast.staff.agent.get(`/api/crew/jobs/${job.id}/field-sheet`).expect(200);
-    expect((await cast.staff.agent.post(`/api/crew/jobs/${job.id}/accept`).send({ expectedVersion: job.version })).status).toBe(403);
+    expect(
+      (await cast.staff.agent.post(`/api/crew/jobs/${job.id}/accept`).send({ expectedVersion: job.version })).status,
+    ).toBe(403);
   });
 });
 
@@ -119,7 +143,10 @@ describe('bad input gets 400 naming the field', () => {
     for (const [action, body, field] of cases) {
       const res = await crew.post(`/api/crew/jobs/${job.id}/${action}`).send(body as object);
       expect(res.status, `${action} ${JSON.stringify(body)}`).toBe(400);
-      expect(Object.keys(res.body.error.fields ?? {}).some((k) => k === field || k.startsWith(field)), JSON.stringify(res.body)).toBe(true);
+      expect(
+        Object.keys(res.body.error.fields ?? {}).some((k) => k === field || k.startsWith(field)),
+        JSON.stringify(res.body),
+      ).toBe(true);
     }
   });
 });

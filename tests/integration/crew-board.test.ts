@@ -7,11 +7,20 @@ import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-withCastApp((app, signedIn) => { t = app; cast = signedIn; });
+withCastApp((app, signedIn) => {
+  t = app;
+  cast = signedIn;
+});
 
 const newJob = (o: Partial<Parameters<typeof createReleasedJob>[1]> = {}) =>
   createReleasedJob(t.ctx.db, { applicantId: cast.applicant.id, staffId: cast.staff.id, ...o });
-type BoardJob = { requestId: string; distanceMiles: number | null; wanted: { wantedBy: string | null }; earthwork: { truckLoads: number; cutCuYd: number } | null; permit: { conditions: string } };
+type BoardJob = {
+  requestId: string;
+  distanceMiles: number | null;
+  wanted: { wantedBy: string | null };
+  earthwork: { truckLoads: number; cutCuYd: number } | null;
+  permit: { conditions: string };
+};
 const ids = (list: BoardJob[], among: string[]) => list.map((j) => j.requestId).filter((id) => among.includes(id));
 
 describe('the board', () => {
@@ -60,18 +69,30 @@ describe('taking, planning and handing back', () => {
     expect(past.body.error.fields.date).toMatch(/today/);
 
     const date = new Date(Date.now() + 10 * 86_400_000).toISOString().slice(0, 10);
-    await crew.post(`/api/crew/jobs/${job.id}/schedule`).send({ date, note: 'Bringing the small excavator.' }).expect(200);
+    await crew
+      .post(`/api/crew/jobs/${job.id}/schedule`)
+      .send({ date, note: 'Bringing the small excavator.' })
+      .expect(200);
     const [row] = await t.ctx.db.select().from(jobs).where(eq(jobs.requestId, job.id));
     expect(row.scheduledFor).toBe(date);
-    const [event] = await t.ctx.db.select().from(requestEvents).where(and(eq(requestEvents.requestId, job.id), eq(requestEvents.kind, 'work-day-planned')));
-    const mail = await t.ctx.db.select().from(emails).where(and(eq(emails.requestId, job.id), eq(emails.template, 'crew.schedule')));
+    const [event] = await t.ctx.db
+      .select()
+      .from(requestEvents)
+      .where(and(eq(requestEvents.requestId, job.id), eq(requestEvents.kind, 'work-day-planned')));
+    const mail = await t.ctx.db
+      .select()
+      .from(emails)
+      .where(and(eq(emails.requestId, job.id), eq(emails.template, 'crew.schedule')));
     const toHomeowner = mail.find((m) => m.toAddress === cast.applicant.email);
     expect(toHomeowner?.eventId).toBe(event.id);
     expect(toHomeowner?.textBody).toContain('Bringing the small excavator.');
     expect(toHomeowner?.subject).toMatch(/work planned for/);
 
     const mine = await crew.get('/api/crew/my-jobs').expect(200);
-    expect(mine.body.jobs.find((j: { requestId: string }) => j.requestId === job.id)).toMatchObject({ status: 'crew_assigned', scheduledFor: date });
+    expect(mine.body.jobs.find((j: { requestId: string }) => j.requestId === job.id)).toMatchObject({
+      status: 'crew_assigned',
+      scheduledFor: date,
+    });
   });
 
   it('handing back before work starts puts the job back on the board for every crew', async () => {
@@ -82,7 +103,10 @@ describe('taking, planning and handing back', () => {
     expect(ids(off.body.jobs, [job.id])).toEqual([]);
     const noNote = await crew.post(`/api/crew/jobs/${job.id}/hand-back`).send({ expectedVersion: job.version + 1 });
     expect(noNote.body.error.fields).toHaveProperty('note');
-    await crew.post(`/api/crew/jobs/${job.id}/hand-back`).send({ expectedVersion: job.version + 1, note: 'Machine is in the shop this month.' }).expect(200);
+    await crew
+      .post(`/api/crew/jobs/${job.id}/hand-back`)
+      .send({ expectedVersion: job.version + 1, note: 'Machine is in the shop this month.' })
+      .expect(200);
     const [row] = await t.ctx.db.select().from(requests).where(eq(requests.id, job.id));
     expect(row).toMatchObject({ status: 'released', crewId: null });
     const on = await cast.crew.agent.get('/api/crew/board').expect(200);
@@ -93,8 +117,13 @@ describe('taking, planning and handing back', () => {
     const job = await newJob();
     const crew = cast.crew.agent;
     await crew.post(`/api/crew/jobs/${job.id}/accept`).send({ expectedVersion: job.version }).expect(200);
-    await crew.post(`/api/crew/jobs/${job.id}/start`).send({ expectedVersion: job.version + 1 }).expect(200);
-    const res = await crew.post(`/api/crew/jobs/${job.id}/hand-back`).send({ expectedVersion: job.version + 2, note: 'Too hard' });
+    await crew
+      .post(`/api/crew/jobs/${job.id}/start`)
+      .send({ expectedVersion: job.version + 1 })
+      .expect(200);
+    const res = await crew
+      .post(`/api/crew/jobs/${job.id}/hand-back`)
+      .send({ expectedVersion: job.version + 2, note: 'Too hard' });
     expect(res.status).toBe(409);
   });
 
@@ -109,8 +138,18 @@ describe('taking, planning and handing back', () => {
     expect(s.laser.second.alongRoadPercent).toBe(-1.2);
     expect(s.laser.warp).toBeNull();
     expect(s.laser.receiverOffsetFt).toBe(5);
-    expect(s.laser.stakes.map((k: { instruction: string }) => k.instruction)).toEqual(['cut 0.38 ft', 'fill 0.30 ft', 'cut 0.90 ft']);
-    expect(s.culvert).toMatchObject({ diameterIn: 18, lengthFt: 26, lengthIsMinimum: true, inletInvertFt: 97.4, outletInvertFt: 97.1 });
+    expect(s.laser.stakes.map((k: { instruction: string }) => k.instruction)).toEqual([
+      'cut 0.38 ft',
+      'fill 0.30 ft',
+      'cut 0.90 ft',
+    ]);
+    expect(s.culvert).toMatchObject({
+      diameterIn: 18,
+      lengthFt: 26,
+      lengthIsMinimum: true,
+      inletInvertFt: 97.4,
+      outletInvertFt: 97.1,
+    });
     expect(s.culvert.coverIn).toBeCloseTo(13.2, 5);
     expect(s.design.points).toHaveLength(5);
     expect(s.design.cutFill[1]).toMatchObject({ stationFt: 20 });

@@ -19,7 +19,10 @@ afterAll(() => t.close());
 
 describe('the demo job a fresh start puts on the board', () => {
   it('is there once, released, with a passing check and a field sheet to build from', async () => {
-    const rows = await t.ctx.db.select().from(requests).where(eq(requests.siteAddress, '57 Juniper Ridge Road, Marrow Crossing'));
+    const rows = await t.ctx.db
+      .select()
+      .from(requests)
+      .where(eq(requests.siteAddress, '57 Juniper Ridge Road, Marrow Crossing'));
     expect(rows).toHaveLength(1);
     const board = await cast.crew.agent.get('/api/crew/board').expect(200);
     const job = board.body.jobs.find((j: { requestId: string }) => j.requestId === rows[0].id);
@@ -32,12 +35,29 @@ describe('the demo job a fresh start puts on the board', () => {
   });
 
   it('can be taken, built and verified like any other', async () => {
-    const [row] = await t.ctx.db.select().from(requests).where(eq(requests.siteAddress, '57 Juniper Ridge Road, Marrow Crossing'));
+    const [row] = await t.ctx.db
+      .select()
+      .from(requests)
+      .where(eq(requests.siteAddress, '57 Juniper Ridge Road, Marrow Crossing'));
     const crew = cast.crew.agent;
     await crew.post(`/api/crew/jobs/${row.id}/accept`).send({ expectedVersion: row.version }).expect(200);
-    await crew.post(`/api/crew/jobs/${row.id}/start`).send({ expectedVersion: row.version + 1 }).expect(200);
-    const set = await crew.post(`/api/crew/jobs/${row.id}/as-built`).send({ readings: [{ stationFt: 5, gradePercent: 3.5 }, { stationFt: 50, gradePercent: 11 }] }).expect(201);
+    await crew
+      .post(`/api/crew/jobs/${row.id}/start`)
+      .send({ expectedVersion: row.version + 1 })
+      .expect(200);
+    const set = await crew
+      .post(`/api/crew/jobs/${row.id}/as-built`)
+      .send({
+        readings: [
+          { stationFt: 5, gradePercent: 3.5 },
+          { stationFt: 50, gradePercent: 11 },
+        ],
+      })
+      .expect(201);
     expect(set.body.set.passed).toBe(true);
-    await crew.post(`/api/crew/jobs/${row.id}/mark-built`).send({ expectedVersion: row.version + 2 }).expect(200);
+    await crew
+      .post(`/api/crew/jobs/${row.id}/mark-built`)
+      .send({ expectedVersion: row.version + 2 })
+      .expect(200);
   });
 });

@@ -29,15 +29,26 @@ describe('what the crew endpoints answer about a request', () => {
 
     const accepted = await crew.post(path('accept')).send({ expectedVersion: job.version }).expect(200);
     expectCrewView(accepted.body.request, 'crew_assigned');
-    const handedBack = await crew.post(path('hand-back')).send({ expectedVersion: accepted.body.request.version, note: 'Machine is down' }).expect(200);
+    const handedBack = await crew
+      .post(path('hand-back'))
+      .send({ expectedVersion: accepted.body.request.version, note: 'Machine is down' })
+      .expect(200);
     expectCrewView(handedBack.body.request, 'released');
-    const again = await crew.post(path('accept')).send({ expectedVersion: handedBack.body.request.version }).expect(200);
+    const again = await crew
+      .post(path('accept'))
+      .send({ expectedVersion: handedBack.body.request.version })
+      .expect(200);
     const started = await crew.post(path('start')).send({ expectedVersion: again.body.request.version }).expect(200);
     expectCrewView(started.body.request, 'under_construction');
 
-    await crew.post(path('as-built')).send({ readings: [{ stationFt: 5, gradePercent: 5.2 }] }).expect(201);
-    const built = await crew.post(path('mark-built'))
-      .send({ expectedVersion: started.body.request.version, note: 'Landing matched to the neighbour’s apron.' }).expect(200);
+    await crew
+      .post(path('as-built'))
+      .send({ readings: [{ stationFt: 5, gradePercent: 5.2 }] })
+      .expect(201);
+    const built = await crew
+      .post(path('mark-built'))
+      .send({ expectedVersion: started.body.request.version, note: 'Landing matched to the neighbour’s apron.' })
+      .expect(200);
     expectCrewView(built.body.request, 'built');
   });
 });

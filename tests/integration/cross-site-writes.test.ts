@@ -22,11 +22,14 @@ describe('changes sent from another site', () => {
       const draft = await applicant.post('/api/requests').set('Origin', origin).expect(403);
       expect(draft.body.error.message).toMatch(/another site/);
       await applicant.post('/auth/sign-out').set('Origin', origin).expect(403);
-      await applicant.patch('/api/requests/00000000-0000-4000-8000-000000000000/draft').set('Origin', origin)
-        .send({ expectedVersion: 1 }).expect(403);
+      await applicant
+        .patch('/api/requests/00000000-0000-4000-8000-000000000000/draft')
+        .set('Origin', origin)
+        .send({ expectedVersion: 1 })
+        .expect(403);
     }
     await applicant.get('/api/me').expect(200);
-    const { rows } = await t.ctx.pool.query('select count(*)::int as n from requests where application = \'{}\'::jsonb');
+    const { rows } = await t.ctx.pool.query("select count(*)::int as n from requests where application = '{}'::jsonb");
     expect(rows[0].n).toBe(0);
   });
 
@@ -38,7 +41,11 @@ describe('changes sent from another site', () => {
 
   it('are accepted from the app itself', async () => {
     const applicant = await signIn(t.app, person('applicant'));
-    await applicant.post('/api/requests').set('Origin', appOrigin.origin).set('Sec-Fetch-Site', 'same-origin').expect(201);
+    await applicant
+      .post('/api/requests')
+      .set('Origin', appOrigin.origin)
+      .set('Sec-Fetch-Site', 'same-origin')
+      .expect(201);
     await applicant.post('/auth/sign-out').set('Origin', appOrigin.origin).expect(204);
   });
 

@@ -10,19 +10,28 @@ async function terminateBackends(databaseUrl: string) {
   await admin.connect();
   const name = new URL(databaseUrl).pathname.slice(1);
   const { rowCount } = await admin.query(
-    'select pg_terminate_backend(pid) from pg_stat_activity where datname = $1 and pid <> pg_backend_pid()', [name]);
+    'select pg_terminate_backend(pid) from pg_stat_activity where datname = $1 and pid <> pg_backend_pid()',
+    [name],
+  );
   await admin.end();
   return rowCount ?? 0;
 }
 
 async function untilRemoved(pool: pg.Pool, count: number) {
   let removed = 0;
-  await new Promise<void>((resolve) => pool.on('remove', () => { removed += 1; if (removed >= count) resolve(); }));
+  await new Promise<void>((resolve) =>
+    pool.on('remove', () => {
+      removed += 1;
+      if (removed >= count) resolve();
+    }),
+  );
 }
 
 describe('a database connection ended by the server while idle', () => {
   let databaseUrl: string;
-  beforeAll(async () => { databaseUrl = await createTestDatabase(); });
+  beforeAll(async () => {
+    databaseUrl = await createTestDatabase();
+  });
   afterAll(() => dropTestDatabase(databaseUrl));
 
   it('is reported to the pool owner and replaced at the next query, not thrown', async () => {
@@ -37,7 +46,11 @@ describe('a database connection ended by the server while idle', () => {
 
     // 57P01 is PostgreSQL's admin_shutdown: "terminating connection due to administrator command".
     expect(onIdleError).toHaveBeenCalledTimes(3);
-    expect(onIdleError.mock.calls.map(([error]) => (error as { code?: string }).code)).toEqual(['57P01', '57P01', '57P01']);
+    expect(onIdleError.mock.calls.map(([error]) => (error as { code?: string }).code)).toEqual([
+      '57P01',
+      '57P01',
+      '57P01',
+    ]);
     const { rows } = await pool.query('select 1 as one');
     expect(rows).toEqual([{ one: 1 }]);
     await pool.end();
@@ -46,7 +59,9 @@ describe('a database connection ended by the server while idle', () => {
 
 describe('a database connection ended by the server while checked out', () => {
   let databaseUrl: string;
-  beforeAll(async () => { databaseUrl = await createTestDatabase(); });
+  beforeAll(async () => {
+    databaseUrl = await createTestDatabase();
+  });
   afterAll(() => dropTestDatabase(databaseUrl));
 
   it('is reported, not thrown, when it is inside a transaction waiting on something else', async () => {
@@ -67,7 +82,11 @@ describe('a database connection ended by the server while checked out', () => {
 
   it('is ended by PostgreSQL when a transaction sits idle past the timeout, and the pool carries on', async () => {
     const onError = vi.fn();
-    const { pool } = createDb(databaseUrl, { max: 2, onConnectionError: onError, timeouts: { connectMs: 2_000, statementMs: 2_000, idleInTransactionMs: 300 } });
+    const { pool } = createDb(databaseUrl, {
+      max: 2,
+      onConnectionError: onError,
+      timeouts: { connectMs: 2_000, statementMs: 2_000, idleInTransactionMs: 300 },
+    });
     const client = await pool.connect();
     await client.query('begin');
     await new Promise<void>((resolve) => client.once('error', () => resolve()));
@@ -81,7 +100,9 @@ describe('a database connection ended by the server while checked out', () => {
 
 describe('the app context', () => {
   let t: TestApp;
-  beforeAll(async () => { t = await createTestApp(); });
+  beforeAll(async () => {
+    t = await createTestApp();
+  });
   afterAll(() => t.close());
 
   it('logs a warning and keeps serving after its idle connections are ended by the server', async () => {

@@ -22,7 +22,14 @@ function probeAll() {
       await sleep(50);
     }
   })();
-  return { statuses, stop: async () => { going = false; await done; return statuses; } };
+  return {
+    statuses,
+    stop: async () => {
+      going = false;
+      await done;
+      return statuses;
+    },
+  };
 }
 
 describe('PostgreSQL going away under two running instances', () => {
@@ -34,7 +41,9 @@ describe('PostgreSQL going away under two running instances', () => {
     await sleep(700);
     await rig.restartPostgres(2_000);
     const ids = [...(await writing), ...(await writeEmails(rig.db, 5, 'after the restart'))];
-    await until('both instances to serve again', async () => (await Promise.all(rig.instances.map(emailLog))).every((s) => s === 200));
+    await until('both instances to serve again', async () =>
+      (await Promise.all(rig.instances.map(emailLog))).every((s) => s === 200),
+    );
     const statuses = await probes.stop();
     const tally = await settle(rig.standIns.mail.webUrl, ids, 60_000);
     rig.standIns.mail.setReplyDelay(0);
@@ -51,10 +60,17 @@ describe('PostgreSQL going away under two running instances', () => {
     await sleep(300);
     const during = await Promise.all(rig.instances.map(emailLog));
     await frozen;
-    await until('both instances to serve again', async () => (await Promise.all(rig.instances.map(emailLog))).every((s) => s === 200));
+    await until('both instances to serve again', async () =>
+      (await Promise.all(rig.instances.map(emailLog))).every((s) => s === 200),
+    );
 
     expect(during).toEqual([503, 503]);
     expect(rig.died()).toEqual([]);
-    expect(await settle(rig.standIns.mail.webUrl, ids, 60_000)).toEqual({ tried: 10, delivered: 10, lost: 0, doubled: 0 });
+    expect(await settle(rig.standIns.mail.webUrl, ids, 60_000)).toEqual({
+      tried: 10,
+      delivered: 10,
+      lost: 0,
+      doubled: 0,
+    });
   });
 });

@@ -27,7 +27,10 @@ describe('the demo reports', () => {
       const doc = docs.find((d) => d.gradeCheckId === check.id)!;
       expect(doc.sharedWithApplicant).toBe(true);
       expect(doc.createdAt).toEqual(check.attachedAt);
-      const [event] = await t.ctx.db.select().from(requestEvents).where(eq(requestEvents.requestId, check.requestId))
+      const [event] = await t.ctx.db
+        .select()
+        .from(requestEvents)
+        .where(eq(requestEvents.requestId, check.requestId))
         .then((rows) => rows.filter((e) => e.kind === 'grade-check-report'));
       expect(event.createdAt).toEqual(check.attachedAt);
     }
@@ -48,7 +51,12 @@ describe('the demo reports', () => {
     await seedDemoReports(t.ctx);
     const owner = await signIn(t.app, 'ellen.marsh@example.test');
     const mine = (await owner.get('/api/requests/mine').expect(200)).body.requests as { id: string }[];
-    const shown = await Promise.all(mine.map(async (r) => (await owner.get(`/api/requests/${r.id}/documents`).expect(200)).body.documents as { url: string }[]));
+    const shown = await Promise.all(
+      mine.map(
+        async (r) =>
+          (await owner.get(`/api/requests/${r.id}/documents`).expect(200)).body.documents as { url: string }[],
+      ),
+    );
     const reports = shown.flat();
     expect(reports.length).toBeGreaterThan(0);
     const res = await fetch(reports[0].url);

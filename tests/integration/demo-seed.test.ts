@@ -25,7 +25,9 @@ describe('the demo scenario', () => {
   });
 
   it('records every step as an event whose version matches', async () => {
-    const rows = await t.ctx.db.select({ id: requests.id, version: requests.version, status: requests.status }).from(requests);
+    const rows = await t.ctx.db
+      .select({ id: requests.id, version: requests.version, status: requests.status })
+      .from(requests);
     for (const row of rows) {
       const events = await t.ctx.db.select().from(requestEvents).where(eq(requestEvents.requestId, row.id));
       expect(events.length).toBe(row.version - 1);
@@ -34,20 +36,30 @@ describe('the demo scenario', () => {
   });
 
   it('stores grade checks that the server reproduces from their inputs and profile version', async () => {
-    const checks = await t.ctx.db.select({ check: gradeChecks, version: ruleProfileVersions }).from(gradeChecks)
+    const checks = await t.ctx.db
+      .select({ check: gradeChecks, version: ruleProfileVersions })
+      .from(gradeChecks)
       .innerJoin(ruleProfileVersions, eq(ruleProfileVersions.id, gradeChecks.ruleProfileVersionId));
     expect(checks.length).toBeGreaterThanOrEqual(7);
     for (const { check, version } of checks) {
       expect(check.attachedAt).not.toBeNull();
       const rules = ruleProfileSchema.parse(version.profile);
-      const stamped = { ...rules, id: version.id, version: version.version, jurisdictionName: (check.results as { report: { jurisdictionName: string } }).report.jurisdictionName };
+      const stamped = {
+        ...rules,
+        id: version.id,
+        version: version.version,
+        jurisdictionName: (check.results as { report: { jurisdictionName: string } }).report.jurisdictionName,
+      };
       const again = await runGradeCheck(check.inputs as Parameters<typeof runGradeCheck>[0], stamped);
       expect(JSON.parse(JSON.stringify(again))).toEqual(check.results);
     }
   });
 
   it('gives built and closed jobs a crew, a build date and a passing as-built set', async () => {
-    const done = await t.ctx.db.select({ r: requests, j: jobs }).from(requests).innerJoin(jobs, eq(jobs.requestId, requests.id))
+    const done = await t.ctx.db
+      .select({ r: requests, j: jobs })
+      .from(requests)
+      .innerJoin(jobs, eq(jobs.requestId, requests.id))
       .where(sql`${requests.status} in ('built', 'closed')`);
     expect(done.length).toBe(2);
     for (const { r, j } of done) {

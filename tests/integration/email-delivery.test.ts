@@ -19,13 +19,24 @@ let standIns: StandIns;
 let t: TestApp;
 let cast: Cast;
 let workers: Workers | null = null;
-const fast = { delivery: { leaseMs: 2_000, firstDelayMs: 300, maxDelayMs: 1_000, horizonMs: 60_000 }, sweepIntervalMs: 200, pollingIntervalSeconds: 0.5 };
+const fast = {
+  delivery: { leaseMs: 2_000, firstDelayMs: 300, maxDelayMs: 1_000, horizonMs: 60_000 },
+  sweepIntervalMs: 200,
+  pollingIntervalSeconds: 0.5,
+};
 
 beforeAll(async () => {
   dir = await mkdtemp(join(tmpdir(), 'gradepass-email-'));
   standIns = await startStandIns({
-    dataDir: dir, bucket: 'email-test', allowedOrigins: [],
-    oauth: { clientId: 'unused', clientSecret: 'unused-secret', redirectUris: ['http://127.0.0.1/unused'], identities: [] },
+    dataDir: dir,
+    bucket: 'email-test',
+    allowedOrigins: [],
+    oauth: {
+      clientId: 'unused',
+      clientSecret: 'unused-secret',
+      redirectUris: ['http://127.0.0.1/unused'],
+      identities: [],
+    },
   });
   t = await createTestApp({ SMTP_HOST: standIns.mail.smtpHost, SMTP_PORT: String(standIns.mail.smtpPort) });
   cast = await signInCast(t);
@@ -55,7 +66,12 @@ async function until<T>(what: string, probe: () => Promise<T | undefined | false
 async function threeTransitions() {
   const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id });
   const go = async (who: Cast[keyof Cast], body: Record<string, unknown>, version: number) =>
-    (await who.agent.post(`/api/requests/${row.id}/transitions`).send({ ...body, expectedVersion: version }).expect(200)).body.request.version as number;
+    (
+      await who.agent
+        .post(`/api/requests/${row.id}/transitions`)
+        .send({ ...body, expectedVersion: version })
+        .expect(200)
+    ).body.request.version as number;
   let v = await go(cast.staff, { action: 'ask-details', note: 'How deep is the ditch at the mailbox?' }, row.version);
   v = await go(cast.applicant, { action: 'answer', answer: 'About two feet.' }, v);
   await go(cast.staff, { action: 'book-visit', visitAt: new Date(Date.now() + 86_400_000).toISOString() }, v);
@@ -108,8 +124,10 @@ describe('e-mail delivery', () => {
     workers = await startWorkers(t.ctx, { email: { ...fast, delivery: { ...fast.delivery, horizonMs: 1_000 } } });
     await standIns.mail.stopSmtp();
     const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id });
-    await cast.staff.agent.post(`/api/requests/${row.id}/transitions`)
-      .send({ action: 'decline', note: 'The sight line to the east is far too short.', expectedVersion: row.version }).expect(200);
+    await cast.staff.agent
+      .post(`/api/requests/${row.id}/transitions`)
+      .send({ action: 'decline', note: 'The sight line to the east is far too short.', expectedVersion: row.version })
+      .expect(200);
     const [email] = await t.ctx.db.select().from(emails).where(eq(emails.requestId, row.id));
     const dead = await until('the message to give up', async () => {
       const [r] = await t.ctx.db.select().from(emails).where(eq(emails.id, email.id));
@@ -119,7 +137,9 @@ describe('e-mail delivery', () => {
     expect(dead.lastError).toMatch(/ECONNREFUSED|connect/i);
 
     const log = await cast.staff.agent.get('/api/emails?status=dead').expect(200);
-    expect(log.body.emails).toEqual(expect.arrayContaining([expect.objectContaining({ id: email.id, lastError: dead.lastError })]));
+    expect(log.body.emails).toEqual(
+      expect.arrayContaining([expect.objectContaining({ id: email.id, lastError: dead.lastError })]),
+    );
     await cast.applicant.agent.post(`/api/emails/${email.id}/retry`).expect(403);
 
     await standIns.mail.startSmtp();
@@ -127,7 +147,8 @@ describe('e-mail delivery', () => {
     expect(retried.body.email.status).toBe('queued');
     await cast.staff.agent.post(`/api/emails/${email.id}/retry`).expect(409);
     await until('the retried message to arrive', async () =>
-      (await caught()).some((m) => m.messageId === messageIdFor(email.id, t.ctx.env.MAIL_FROM)));
+      (await caught()).some((m) => m.messageId === messageIdFor(email.id, t.ctx.env.MAIL_FROM)),
+    );
     const [sent] = await t.ctx.db.select().from(emails).where(eq(emails.id, email.id));
     expect(sent).toMatchObject({ status: 'sent', attempts: dead.attempts + 1 });
   });
@@ -136,10 +157,18 @@ describe('e-mail delivery', () => {
     await workers?.stop();
     const second = createContext(parseEnv(t.env));
     const [one, two] = await Promise.all([startWorkers(t.ctx, { email: fast }), startWorkers(second, { email: fast })]);
-    workers = { stop: async () => { await Promise.all([one.stop(), two.stop()]); await closeContext(second); } };
+    workers = {
+      stop: async () => {
+        await Promise.all([one.stop(), two.stop()]);
+        await closeContext(second);
+      },
+    };
     const ids = [...(await threeTransitions()), ...(await threeTransitions()), ...(await threeTransitions())];
     const expected = ids.map((id) => messageIdFor(id, t.ctx.env.MAIL_FROM));
-    await until('all nine to arrive', async () => (await caught()).filter((m) => expected.includes(m.messageId)).length >= 9);
+    await until(
+      'all nine to arrive',
+      async () => (await caught()).filter((m) => expected.includes(m.messageId)).length >= 9,
+    );
     await new Promise((r) => setTimeout(r, 2000));
     const mine = (await caught()).filter((m) => expected.includes(m.messageId));
     expect(mine.map((m) => m.messageId).sort()).toEqual([...expected].sort());

@@ -13,11 +13,27 @@ beforeAll(async () => {
   const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id });
   reference = row.reference;
   const base = { requestId: row.id, template: 'transition.ask-details', textBody: 'text', htmlBody: '<p>html</p>' };
-  await t.ctx.db.insert(emails).values([
-    ...Array.from({ length: 7 }, (_, i) => ({ ...base, toAddress: `owner${i}@example.test`, subject: `${row.reference}: More details needed`, status: 'sent' as const, attempts: 1, createdAt: new Date(Date.UTC(2026, 3, 1, 9, i)) })),
-    { ...base, toAddress: 'bounce@example.test', subject: 'Gave up', status: 'dead', attempts: 6, lastError: 'ECONNREFUSED: connect ECONNREFUSED 127.0.0.1:25' },
-    { ...base, toAddress: 'later@example.test', subject: 'Waiting', status: 'queued' },
-  ]);
+  await t.ctx.db
+    .insert(emails)
+    .values([
+      ...Array.from({ length: 7 }, (_, i) => ({
+        ...base,
+        toAddress: `owner${i}@example.test`,
+        subject: `${row.reference}: More details needed`,
+        status: 'sent' as const,
+        attempts: 1,
+        createdAt: new Date(Date.UTC(2026, 3, 1, 9, i)),
+      })),
+      {
+        ...base,
+        toAddress: 'bounce@example.test',
+        subject: 'Gave up',
+        status: 'dead',
+        attempts: 6,
+        lastError: 'ECONNREFUSED: connect ECONNREFUSED 127.0.0.1:25',
+      },
+      { ...base, toAddress: 'later@example.test', subject: 'Waiting', status: 'queued' },
+    ]);
 });
 afterAll(() => t.close());
 
@@ -37,7 +53,9 @@ describe('the e-mail log', () => {
 
   it('filters by status and searches address, subject and reference', async () => {
     const dead = await cast.admin.agent.get('/api/emails?status=dead').expect(200);
-    expect(dead.body.emails).toEqual([expect.objectContaining({ toAddress: 'bounce@example.test', lastError: expect.stringContaining('ECONNREFUSED') })]);
+    expect(dead.body.emails).toEqual([
+      expect.objectContaining({ toAddress: 'bounce@example.test', lastError: expect.stringContaining('ECONNREFUSED') }),
+    ]);
     const byRef = await cast.staff.agent.get(`/api/emails?search=${reference}`).expect(200);
     expect(byRef.body.emails.length).toBe(9);
     const odd = await cast.staff.agent.get('/api/emails?search=%25_').expect(200);

@@ -20,8 +20,15 @@ let cast: Cast;
 beforeAll(async () => {
   dir = await mkdtemp(join(tmpdir(), 'gradepass-outage-'));
   standIns = await startStandIns({
-    dataDir: dir, bucket: 'outage', allowedOrigins: [],
-    oauth: { clientId: 'unused', clientSecret: 'unused-secret', redirectUris: ['http://127.0.0.1/unused'], identities: [] },
+    dataDir: dir,
+    bucket: 'outage',
+    allowedOrigins: [],
+    oauth: {
+      clientId: 'unused',
+      clientSecret: 'unused-secret',
+      redirectUris: ['http://127.0.0.1/unused'],
+      identities: [],
+    },
   });
   t = await createTestApp({ SMTP_HOST: standIns.mail.smtpHost, SMTP_PORT: String(standIns.mail.smtpPort) });
   cast = await signInCast(t);
@@ -74,14 +81,21 @@ describe('a mail server that is down for a long time', () => {
   });
 
   it('sends a failed message again at once when the office asks', async () => {
-    const workers = await startWorkers(t.ctx, { email: { delivery: { ...clock, firstDelayMs: 60_000, maxDelayMs: 60_000, horizonMs: 600_000 }, ...polling } });
+    const workers = await startWorkers(t.ctx, {
+      email: { delivery: { ...clock, firstDelayMs: 60_000, maxDelayMs: 60_000, horizonMs: 600_000 }, ...polling },
+    });
     try {
       await standIns.mail.stopSmtp();
       const [id] = await writeEmails(t.ctx.db, 1, 'send again');
       await until('the first failure', async () => (await rowsOf([id]))[0].status === 'failed');
       await standIns.mail.startSmtp();
       await cast.staff.agent.post(`/api/emails/${id}/retry`).expect(200);
-      expect(await settle(standIns.mail.webUrl, [id], 20_000, 500)).toEqual({ tried: 1, delivered: 1, lost: 0, doubled: 0 });
+      expect(await settle(standIns.mail.webUrl, [id], 20_000, 500)).toEqual({
+        tried: 1,
+        delivered: 1,
+        lost: 0,
+        doubled: 0,
+      });
     } finally {
       await workers.stop();
     }

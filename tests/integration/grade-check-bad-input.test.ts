@@ -17,10 +17,25 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const junk: unknown[] = [
-  null, 0, 'text', [], [1, 2], {}, { inputs: null }, { inputs: 'x' }, { inputs: [] }, { inputs: { profile: {} } },
-  { inputs: { profile: { kind: 'rod-readings', readings: [] } } }, { inputs: { profile: [{ stationFt: 1e308, elevationFt: -1e308 }] } },
-  { ruleProfileVersionId: 7, inputs: {} }, { profile: { landing: 'flat' } }, { profile: null }, { sharedWithApplicant: null },
-  { shareWithApplicant: 'yes' }, { fromVersionId: 'nope' }, { name: 12, authority: [] },
+  null,
+  0,
+  'text',
+  [],
+  [1, 2],
+  {},
+  { inputs: null },
+  { inputs: 'x' },
+  { inputs: [] },
+  { inputs: { profile: {} } },
+  { inputs: { profile: { kind: 'rod-readings', readings: [] } } },
+  { inputs: { profile: [{ stationFt: 1e308, elevationFt: -1e308 }] } },
+  { ruleProfileVersionId: 7, inputs: {} },
+  { profile: { landing: 'flat' } },
+  { profile: null },
+  { sharedWithApplicant: null },
+  { shareWithApplicant: 'yes' },
+  { fromVersionId: 'nope' },
+  { name: 12, authority: [] },
 ];
 
 function send(method: 'post' | 'put' | 'patch', url: string, body: unknown) {
@@ -33,8 +48,12 @@ describe('nothing a client sends gets a 500', () => {
   it('answers junk on every grade check, rule profile and document route below 500, naming the field on a 400', async () => {
     const j = (await cast.admin.agent.get('/api/jurisdictions').expect(200)).body.jurisdictions[0];
     const routes: ['post' | 'put' | 'patch', string][] = [
-      ['post', `/api/requests/${requestId}/grade-checks`], ['post', `/api/grade-checks/${requestId}/attach`], ['post', '/api/jurisdictions'],
-      ['post', `/api/jurisdictions/${j.id}/versions`], ['put', `/api/rule-profile-versions/${marrow}`], ['patch', `/api/documents/${requestId}`],
+      ['post', `/api/requests/${requestId}/grade-checks`],
+      ['post', `/api/grade-checks/${requestId}/attach`],
+      ['post', '/api/jurisdictions'],
+      ['post', `/api/jurisdictions/${j.id}/versions`],
+      ['put', `/api/rule-profile-versions/${marrow}`],
+      ['patch', `/api/documents/${requestId}`],
     ];
     for (const [method, url] of routes) {
       for (const body of junk) {
@@ -48,12 +67,19 @@ describe('nothing a client sends gets a 500', () => {
 
   it('holds a saved check to survey size so one request cannot tie up the server', async () => {
     const many = Array.from({ length: 501 }, (_, i) => ({ stationFt: i, elevationFt: 100 + i * 0.02 }));
-    const tooMany = await cast.staff.agent.post(`/api/requests/${requestId}/grade-checks`)
-      .send({ ruleProfileVersionId: marrow, inputs: surveyInputs({ profile: many }) }).expect(400);
+    const tooMany = await cast.staff.agent
+      .post(`/api/requests/${requestId}/grade-checks`)
+      .send({ ruleProfileVersionId: marrow, inputs: surveyInputs({ profile: many }) })
+      .expect(400);
     expect(tooMany.body.error.fields).toHaveProperty(['profile']);
-    const long = [{ stationFt: 0, elevationFt: 100 }, { stationFt: 90_000, elevationFt: 120 }];
-    const fine = await cast.staff.agent.post(`/api/requests/${requestId}/grade-checks`)
-      .send({ ruleProfileVersionId: marrow, inputs: surveyInputs({ profile: long, scrapeStepFt: 0.01 }) }).expect(400);
+    const long = [
+      { stationFt: 0, elevationFt: 100 },
+      { stationFt: 90_000, elevationFt: 120 },
+    ];
+    const fine = await cast.staff.agent
+      .post(`/api/requests/${requestId}/grade-checks`)
+      .send({ ruleProfileVersionId: marrow, inputs: surveyInputs({ profile: long, scrapeStepFt: 0.01 }) })
+      .expect(400);
     expect(fine.body.error.fields).toHaveProperty(['scrapeStepFt']);
   });
 });

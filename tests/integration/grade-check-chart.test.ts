@@ -6,7 +6,12 @@ import { checkEntrance, ruleProfileSchema } from '@shared/engine';
 import { demoJurisdictions } from '../../server/dev/seed/jurisdictions';
 import { groundPoints } from './grade-check-survey';
 
-const marrow = { ...ruleProfileSchema.parse(demoJurisdictions[0].profile), id: 'v1', version: 1, jurisdictionName: 'Marrow County' };
+const marrow = {
+  ...ruleProfileSchema.parse(demoJurisdictions[0].profile),
+  id: 'v1',
+  version: 1,
+  jurisdictionName: 'Marrow County',
+};
 const p = (stationFt: number, elevationFt: number) => ({ stationFt, elevationFt });
 
 describe('the profile chart', () => {
@@ -37,7 +42,11 @@ describe('the profile chart', () => {
   it('escapes what it prints', () => {
     const report = checkEntrance({ profile: groundPoints }, marrow);
     const input = chartInputFor({}, { report }, marrow);
-    const svg = profileChartSvg({ ...input, scrapePoints: [{ stationFt: 10, label: '<b>"x" & y</b>' }], fontFamily: 'A"B' });
+    const svg = profileChartSvg({
+      ...input,
+      scrapePoints: [{ stationFt: 10, label: '<b>"x" & y</b>' }],
+      fontFamily: 'A"B',
+    });
     expect(svg).toContain('&lt;b&gt;&quot;x&quot; &amp; y&lt;/b&gt;');
     expect(svg).not.toContain('<b>');
     expect(svg).toContain('font-family="A&quot;B"');

@@ -30,7 +30,10 @@ afterAll(async () => {
 const json = (v: unknown) => JSON.parse(JSON.stringify(v));
 const visitBooked = () => createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'visit_booked' });
 const save = (requestId: string, inputs: unknown) =>
-  cast.staff.agent.post(`/api/requests/${requestId}/grade-checks`).send({ ruleProfileVersionId: marrow, inputs }).expect(201);
+  cast.staff.agent
+    .post(`/api/requests/${requestId}/grade-checks`)
+    .send({ ruleProfileVersionId: marrow, inputs })
+    .expect(201);
 
 describe('one grade check, live and saved', () => {
   it('stores exactly what the shared runGradeCheck returns for the stored inputs, in the current format', async () => {
@@ -69,8 +72,10 @@ describe('one grade check, live and saved', () => {
     const { profile } = await loadPublishedProfile(t.ctx.db, marrow);
     const live = await runLiveCheckWithProposal(s, profile, proposeProfile);
     expect(Object.keys(live.errors)).toEqual(['culvert.diameterIn']);
-    const refused = await cast.staff.agent.post(`/api/requests/${(await visitBooked()).id}/grade-checks`)
-      .send({ ruleProfileVersionId: marrow, inputs: live.inputs }).expect(400);
+    const refused = await cast.staff.agent
+      .post(`/api/requests/${(await visitBooked()).id}/grade-checks`)
+      .send({ ruleProfileVersionId: marrow, inputs: live.inputs })
+      .expect(400);
     expect(Object.keys(refused.body.error.fields)).toEqual(Object.keys(live.errors));
   });
 });

@@ -30,7 +30,9 @@ const withEdges = () => {
 
 async function save(inputs: unknown) {
   const request = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'visit_booked' });
-  const res = await cast.staff.agent.post(`/api/requests/${request.id}/grade-checks`).send({ ruleProfileVersionId: elderbrook, inputs });
+  const res = await cast.staff.agent
+    .post(`/api/requests/${request.id}/grade-checks`)
+    .send({ ruleProfileVersionId: elderbrook, inputs });
   return { request, res };
 }
 
@@ -41,10 +43,19 @@ describe('road edge, outlet control and the warped apron in the saved check', ()
     const { check } = res.body;
     expect(check.inputs.roadSide).toEqual({ roadCrossSlopePercent: 2, shoulderWidthFt: 3, shoulderSlopePercent: 4 });
     const ids = check.results.report.findings.map((f: { ruleId: string }) => f.ruleId);
-    expect(ids).toEqual(expect.arrayContaining(['grade.road-edge-change', 'apron.left.landing.max-grade', 'apron.right.grade.max-change', 'apron.left.grade.road-edge-change']));
+    expect(ids).toEqual(
+      expect.arrayContaining([
+        'grade.road-edge-change',
+        'apron.left.landing.max-grade',
+        'apron.right.grade.max-change',
+        'apron.left.grade.road-edge-change',
+      ]),
+    );
     expect(check.results.report.culvert.control).toMatch(/^(inlet|outlet)$/);
     expect(check.results.report.culvert.outletHeadwaterFt).toBeGreaterThan(0);
-    expect(check.results.report.apron.stakes.map((s: { stationFt: number }) => s.stationFt)).toEqual([0, 10, 20, 30, 35]);
+    expect(check.results.report.apron.stakes.map((s: { stationFt: number }) => s.stationFt)).toEqual([
+      0, 10, 20, 30, 35,
+    ]);
     // The 15 ft landing keeps the road's grade across; the 20 ft warp after it ends at 0+35.
     expect(check.results.report.apron.warpStartStationFt).toBe(15);
   });
@@ -52,8 +63,12 @@ describe('road edge, outlet control and the warped apron in the saved check', ()
   it('an older check without the new inputs saves and re-runs, with the road-edge break and the edges not checked', async () => {
     const { res } = await save(surveyInputs());
     expect(res.status).toBe(201);
-    const byId = (id: string) => res.body.check.results.report.findings.find((f: { ruleId: string }) => f.ruleId === id);
-    expect(byId('grade.road-edge-change')).toMatchObject({ status: 'not-checked', note: 'no road cross slope in the input' });
+    const byId = (id: string) =>
+      res.body.check.results.report.findings.find((f: { ruleId: string }) => f.ruleId === id);
+    expect(byId('grade.road-edge-change')).toMatchObject({
+      status: 'not-checked',
+      note: 'no road cross slope in the input',
+    });
     expect(byId('apron.edges')).toMatchObject({ status: 'not-checked' });
   });
 
@@ -69,7 +84,10 @@ describe('road edge, outlet control and the warped apron in the saved check', ()
 
   it('the PDF report says which control sets the headwater and prints the warp stakes and the edge findings', async () => {
     const { request, res } = await save(withEdges());
-    const attached = await cast.staff.agent.post(`/api/grade-checks/${res.body.check.id}/attach`).send({ shareWithApplicant: false, confirmFailing: true }).expect(200);
+    const attached = await cast.staff.agent
+      .post(`/api/grade-checks/${res.body.check.id}/attach`)
+      .send({ shareWithApplicant: false, confirmFailing: true })
+      .expect(200);
     const list = await cast.staff.agent.get(`/api/requests/${request.id}/documents`).expect(200);
     const bytes = Buffer.from(await (await fetch(list.body.documents[0].url)).arrayBuffer());
     // Kept for review beside the other reports' renderings.
@@ -88,7 +106,10 @@ describe('road edge, outlet control and the warped apron in the saved check', ()
 
   it('the crew field sheet carries the warp stakes and the controlling headwater', async () => {
     const { request, res } = await save(withEdges());
-    await cast.staff.agent.post(`/api/grade-checks/${res.body.check.id}/attach`).send({ shareWithApplicant: false, confirmFailing: true }).expect(200);
+    await cast.staff.agent
+      .post(`/api/grade-checks/${res.body.check.id}/attach`)
+      .send({ shareWithApplicant: false, confirmFailing: true })
+      .expect(200);
     await t.ctx.db.update(requests).set({ status: 'released' }).where(eq(requests.id, request.id));
     const sheet = (await cast.staff.agent.get(`/api/crew/jobs/${request.id}/field-sheet`).expect(200)).body;
     expect(sheet.apron.stakes).toHaveLength(5);

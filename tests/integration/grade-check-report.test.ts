@@ -22,8 +22,14 @@ afterAll(() => t.close());
 
 async function savedAndAttached(share: boolean) {
   const request = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'visit_booked' });
-  const saved = await cast.staff.agent.post(`/api/requests/${request.id}/grade-checks`).send({ ruleProfileVersionId: marrow, inputs: surveyInputs() }).expect(201);
-  const attached = await cast.staff.agent.post(`/api/grade-checks/${saved.body.check.id}/attach`).send({ shareWithApplicant: share, confirmFailing: true }).expect(200);
+  const saved = await cast.staff.agent
+    .post(`/api/requests/${request.id}/grade-checks`)
+    .send({ ruleProfileVersionId: marrow, inputs: surveyInputs() })
+    .expect(201);
+  const attached = await cast.staff.agent
+    .post(`/api/grade-checks/${saved.body.check.id}/attach`)
+    .send({ shareWithApplicant: share, confirmFailing: true })
+    .expect(200);
   return { request, check: attached.body.check, documentId: attached.body.documentId as string };
 }
 
@@ -61,7 +67,18 @@ describe('the grade check report', () => {
       console.warn('pdftoppm is missing (Debian poppler-utils): the PNG of the first page was not made.');
       return;
     }
-    execFileSync('/usr/bin/pdftoppm', ['-png', '-r', '60', '-f', '1', '-l', '1', '-singlefile', pdfPath, path.join(dir, 'grade-check-report-page1')]);
+    execFileSync('/usr/bin/pdftoppm', [
+      '-png',
+      '-r',
+      '60',
+      '-f',
+      '1',
+      '-l',
+      '1',
+      '-singlefile',
+      pdfPath,
+      path.join(dir, 'grade-check-report-page1'),
+    ]);
     expect(existsSync(path.join(dir, 'grade-check-report-page1.png'))).toBe(true);
   });
 
@@ -81,15 +98,23 @@ describe('the grade check report', () => {
     expect((await fetch(url)).status).toBe(403);
     const events = await t.ctx.db.select().from(requestEvents).where(eq(requestEvents.requestId, request.id));
     expect(events.filter((e) => e.kind !== 'transition').map((e) => [e.kind, e.internal])).toEqual([
-      ['grade-check', true], ['grade-check-report', true], ['document', false],
+      ['grade-check', true],
+      ['grade-check-report', true],
+      ['document', false],
     ]);
   });
 
   it('attaches once, then lets the request be marked checked with the summary in the owner’s e-mail', async () => {
     const { request, check, documentId } = await savedAndAttached(true);
-    const again = await cast.staff.agent.post(`/api/grade-checks/${check.id}/attach`).send({ confirmFailing: true }).expect(200);
+    const again = await cast.staff.agent
+      .post(`/api/grade-checks/${check.id}/attach`)
+      .send({ confirmFailing: true })
+      .expect(200);
     expect(again.body.documentId).toBe(documentId);
-    await cast.staff.agent.post(`/api/requests/${request.id}/transitions`).send({ action: 'mark-checked', expectedVersion: request.version }).expect(200);
+    await cast.staff.agent
+      .post(`/api/requests/${request.id}/transitions`)
+      .send({ action: 'mark-checked', expectedVersion: request.version })
+      .expect(200);
     const sent = await t.ctx.db.select().from(emails).where(eq(emails.requestId, request.id));
     const toOwner = sent.find((e) => e.toAddress === cast.applicant.email);
     expect(toOwner?.textBody).toContain(check.summary);
@@ -97,7 +122,13 @@ describe('the grade check report', () => {
 
   it('refuses to mark a request checked without an attached check', async () => {
     const request = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'visit_booked' });
-    await cast.staff.agent.post(`/api/requests/${request.id}/grade-checks`).send({ ruleProfileVersionId: marrow, inputs: surveyInputs() }).expect(201);
-    await cast.staff.agent.post(`/api/requests/${request.id}/transitions`).send({ action: 'mark-checked', expectedVersion: request.version }).expect(409);
+    await cast.staff.agent
+      .post(`/api/requests/${request.id}/grade-checks`)
+      .send({ ruleProfileVersionId: marrow, inputs: surveyInputs() })
+      .expect(201);
+    await cast.staff.agent
+      .post(`/api/requests/${request.id}/transitions`)
+      .send({ action: 'mark-checked', expectedVersion: request.version })
+      .expect(409);
   });
 });

@@ -19,7 +19,8 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const visitBooked = () => createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'visit_booked' });
-const save = (requestId: string, body: unknown) => cast.staff.agent.post(`/api/requests/${requestId}/grade-checks`).send(body as object);
+const save = (requestId: string, body: unknown) =>
+  cast.staff.agent.post(`/api/requests/${requestId}/grade-checks`).send(body as object);
 
 describe('saving a grade check', () => {
   it('runs the engine on the server: the same survey fails in Marrow County and passes in Elderbrook', async () => {
@@ -29,7 +30,9 @@ describe('saving a grade check', () => {
     expect(county.body.check.number).toBe(1);
     expect(town.body.check.number).toBe(2);
     expect(county.body.check.passed).toBe(false);
-    const landing = county.body.check.results.report.findings.find((f: { ruleId: string }) => f.ruleId === 'landing.max-grade');
+    const landing = county.body.check.results.report.findings.find(
+      (f: { ruleId: string }) => f.ruleId === 'landing.max-grade',
+    );
     expect(landing).toMatchObject({ status: 'fail', limit: 4, stationFt: 0 });
     expect(landing.measured).toBeCloseTo(5.5, 9);
     expect(town.body.check.passed).toBe(true);
@@ -41,24 +44,47 @@ describe('saving a grade check', () => {
 
   it('refuses inputs that fail validation with 400 naming the field, and stores nothing', async () => {
     const request = await visitBooked();
-    const badPoint = surveyInputs({ profile: { kind: 'elevations', points: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 'ten', elevationFt: 101 }] } });
+    const badPoint = surveyInputs({
+      profile: {
+        kind: 'elevations',
+        points: [
+          { stationFt: 0, elevationFt: 100 },
+          { stationFt: 'ten', elevationFt: 101 },
+        ],
+      },
+    });
     const res = await save(request.id, { ruleProfileVersionId: marrow, inputs: badPoint }).expect(400);
     expect(res.body.error.fields).toHaveProperty(['profile.points.1.stationFt']);
 
-    const badCulvert = await save(request.id, { ruleProfileVersionId: marrow, inputs: surveyInputs({ culvert: { ...surveyInputs().culvert, diameterIn: -3 } }) }).expect(400);
+    const badCulvert = await save(request.id, {
+      ruleProfileVersionId: marrow,
+      inputs: surveyInputs({ culvert: { ...surveyInputs().culvert, diameterIn: -3 } }),
+    }).expect(400);
     expect(Object.keys(badCulvert.body.error.fields)).toEqual(['culvert.diameterIn']);
 
-    const badLaser = await save(request.id, { ruleProfileVersionId: marrow, inputs: surveyInputs({ laser: { originElevationFt: 100 } }) }).expect(400);
+    const badLaser = await save(request.id, {
+      ruleProfileVersionId: marrow,
+      inputs: surveyInputs({ laser: { originElevationFt: 100 } }),
+    }).expect(400);
     expect(Object.keys(badLaser.body.error.fields)).toContain('laser.roadGradePercent');
 
-    const twice = surveyInputs({ profile: [{ stationFt: 0, elevationFt: 100 }, { stationFt: 0, elevationFt: 101 }, { stationFt: 20, elevationFt: 101 }] });
+    const twice = surveyInputs({
+      profile: [
+        { stationFt: 0, elevationFt: 100 },
+        { stationFt: 0, elevationFt: 101 },
+        { stationFt: 20, elevationFt: 101 },
+      ],
+    });
     const conflict = await save(request.id, { ruleProfileVersionId: marrow, inputs: twice }).expect(400);
     // The repeated shot, the second one typed at 0+00, is the box named.
     expect(conflict.body.error.fields).toHaveProperty(['profile.1.stationFt']);
 
-    await save(request.id, { ruleProfileVersionId: '00000000-0000-4000-8000-000000000000', inputs: surveyInputs() }).expect(400)
+    await save(request.id, { ruleProfileVersionId: '00000000-0000-4000-8000-000000000000', inputs: surveyInputs() })
+      .expect(400)
       .then((r) => expect(r.body.error.fields).toHaveProperty(['ruleProfileVersionId']));
-    await save(request.id, { ruleProfileVersionId: marrow }).expect(400).then((r) => expect(r.body.error.fields).toHaveProperty(['inputs']));
+    await save(request.id, { ruleProfileVersionId: marrow })
+      .expect(400)
+      .then((r) => expect(r.body.error.fields).toHaveProperty(['inputs']));
     await save(request.id, ['not', 'an', 'object']).expect(400);
     expect(await t.ctx.db.select().from(gradeChecks).where(eq(gradeChecks.requestId, request.id))).toHaveLength(0);
   });
@@ -66,9 +92,16 @@ describe('saving a grade check', () => {
   it('never stores a result the client sends', async () => {
     const request = await visitBooked();
     const forged = { report: { passes: true, findings: [] } };
-    const res = await save(request.id, { ruleProfileVersionId: marrow, inputs: surveyInputs(), results: forged }).expect(400);
+    const res = await save(request.id, {
+      ruleProfileVersionId: marrow,
+      inputs: surveyInputs(),
+      results: forged,
+    }).expect(400);
     expect(res.body.error.fields).toHaveProperty(['results']);
-    const inInputs = await save(request.id, { ruleProfileVersionId: marrow, inputs: { ...surveyInputs(), results: forged, passed: true } }).expect(201);
+    const inInputs = await save(request.id, {
+      ruleProfileVersionId: marrow,
+      inputs: { ...surveyInputs(), results: forged, passed: true },
+    }).expect(201);
     const [row] = await t.ctx.db.select().from(gradeChecks).where(eq(gradeChecks.id, inInputs.body.check.id));
     expect(row.passed).toBe(false);
     expect(row.inputs).not.toHaveProperty('results');
@@ -77,7 +110,10 @@ describe('saving a grade check', () => {
 
   it('keeps checks to the office and to requests at the survey stage', async () => {
     const request = await visitBooked();
-    await cast.applicant.agent.post(`/api/requests/${request.id}/grade-checks`).send({ ruleProfileVersionId: marrow, inputs: surveyInputs() }).expect(403);
+    await cast.applicant.agent
+      .post(`/api/requests/${request.id}/grade-checks`)
+      .send({ ruleProfileVersionId: marrow, inputs: surveyInputs() })
+      .expect(403);
     await cast.otherApplicant.agent.get(`/api/requests/${request.id}/grade-checks`).expect(404);
     const submitted = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'submitted' });
     await save(submitted.id, { ruleProfileVersionId: marrow, inputs: surveyInputs() }).expect(409);

@@ -13,10 +13,25 @@ import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-withCastApp((app, signedIn) => { t = app; cast = signedIn; });
+withCastApp((app, signedIn) => {
+  t = app;
+  cast = signedIn;
+});
 
 // Every part of FieldSheetView; a key added on one side and not the other fails here.
-const sheetKeys: (keyof FieldSheetView)[] = ['job', 'access', 'permit', 'check', 'rules', 'laser', 'culvert', 'apron', 'design', 'earthwork', 'cautions'];
+const sheetKeys: (keyof FieldSheetView)[] = [
+  'job',
+  'access',
+  'permit',
+  'check',
+  'rules',
+  'laser',
+  'culvert',
+  'apron',
+  'design',
+  'earthwork',
+  'cautions',
+];
 
 describe('a check saved before the format version', () => {
   it('reads, upgraded, for the office and the crew alike', async () => {
@@ -31,7 +46,8 @@ describe('a check saved before the format version', () => {
     expect(office.body.check.inputs.design).toMatchObject({ applied: false, haul: defaultHaul });
     expect(office.body.check.results).toEqual(row.results);
 
-    const sheet = (await cast.crew.agent.get(`/api/crew/jobs/${job.id}/field-sheet`).expect(200)).body as FieldSheetView;
+    const sheet = (await cast.crew.agent.get(`/api/crew/jobs/${job.id}/field-sheet`).expect(200))
+      .body as FieldSheetView;
     expect(Object.keys(sheet).sort()).toEqual([...sheetKeys].sort());
     expect(sheet.check).toMatchObject({ number: row.number, summary: row.summary, passed: row.passed });
     expect(sheet.design?.points).toEqual(readGradeCheckRecord(row).results.report.profile.points);
@@ -43,11 +59,18 @@ describe('the field sheet', () => {
     const job = await createReleasedJob(t.ctx.db, { applicantId: cast.applicant.id, staffId: cast.staff.id });
     const [row] = await t.ctx.db.select().from(gradeChecks).where(eq(gradeChecks.id, job.gradeCheckId));
     const record = readGradeCheckRecord(row);
-    const sheet = (await cast.crew.agent.get(`/api/crew/jobs/${job.id}/field-sheet`).expect(200)).body as FieldSheetView;
+    const sheet = (await cast.crew.agent.get(`/api/crew/jobs/${job.id}/field-sheet`).expect(200))
+      .body as FieldSheetView;
     const ground = sheet.design!.existing!;
-    expect(sheet.design?.chart).toEqual(JSON.parse(JSON.stringify(buildChartInputFor(record.inputs, record.results, harlowRules, ground))));
+    expect(sheet.design?.chart).toEqual(
+      JSON.parse(JSON.stringify(buildChartInputFor(record.inputs, record.results, harlowRules, ground))),
+    );
     // What the crew builds is the design line, over the ground as surveyed; the proposal nobody applied is not drawn.
-    expect(sheet.design?.chart).toMatchObject({ ground, design: record.results.report.profile.points, checked: 'design' });
+    expect(sheet.design?.chart).toMatchObject({
+      ground,
+      design: record.results.report.profile.points,
+      checked: 'design',
+    });
     const svg = profileChartSvg(sheet.design!.chart);
     expect(svg).toMatch(/^<svg [^>]*role="img"/);
     expect(svg).toContain(`Landing ${harlowRules.landing.lengthFt} ft`);

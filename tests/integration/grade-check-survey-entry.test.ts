@@ -11,7 +11,12 @@ import { proposeProfile, ruleProfileSchema } from '@shared/engine';
 
 afterAll(() => closeDesignPool());
 
-const marrow = { ...ruleProfileSchema.parse(demoJurisdictions[0].profile), id: 'v1', version: 1, jurisdictionName: 'Marrow County' };
+const marrow = {
+  ...ruleProfileSchema.parse(demoJurisdictions[0].profile),
+  id: 'v1',
+  version: 1,
+  jurisdictionName: 'Marrow County',
+};
 
 function survey(rows: string, patch: (s: SurveyState) => void = () => undefined): SurveyState {
   const s = initialSurvey(45);
@@ -23,7 +28,11 @@ function survey(rows: string, patch: (s: SurveyState) => void = () => undefined)
 describe('survey entry in the browser', () => {
   it('reads pasted rows with a header, commas or tabs, and keeps bad cells to show their errors', () => {
     const rows = parsePastedCentreline('Station,Elevation\n0+00, 100.00\n\n0+10\t100.55\n0+2O,101.1\n');
-    expect(rows.map((r) => [r.station, r.value])).toEqual([['0+00', '100.00'], ['0+10', '100.55'], ['0+2O', '101.1']]);
+    expect(rows.map((r) => [r.station, r.value])).toEqual([
+      ['0+00', '100.00'],
+      ['0+10', '100.55'],
+      ['0+2O', '101.1'],
+    ]);
     const { inputs, errors } = buildInputs(survey('0+00,100\n0+1O,abc\n0+20,101.1'), marrow);
     expect(inputs).toBeUndefined();
     expect(errors['profile.points.1.stationFt']).toMatch(/not a station/);
@@ -35,7 +44,13 @@ describe('survey entry in the browser', () => {
     const s = survey('0+00\t4.00\n0+20\t2.90\n0+60\t-1.90', (st) => {
       st.centreline.mode = 'rod-readings';
       st.centreline.instrumentHeightFt = '104.00';
-      Object.assign(st.culvert, { present: true, inletDitchDepthFt: '2.0', outletDitchDepthFt: '2.3', surfaceElevationFt: '100.5', designFlowCfs: '4' });
+      Object.assign(st.culvert, {
+        present: true,
+        inletDitchDepthFt: '2.0',
+        outletDitchDepthFt: '2.3',
+        surfaceElevationFt: '100.5',
+        designFlowCfs: '4',
+      });
     });
     const live = runLiveCheck(s, marrow);
     expect(live.errors).toEqual({});
@@ -51,7 +66,11 @@ describe('survey entry in the browser', () => {
     });
     const live = await runLiveCheckWithProposal(s, marrow, proposeProfile);
     expect(live.results?.report.passes).toBe(false);
-    const applied = await runLiveCheckWithProposal({ ...s, design: { ...s.design, applied: live.results!.proposal!.profile } }, marrow, proposeProfile);
+    const applied = await runLiveCheckWithProposal(
+      { ...s, design: { ...s.design, applied: live.results!.proposal!.profile } },
+      marrow,
+      proposeProfile,
+    );
     expect(applied.results?.report.passes).toBe(true);
     // The server runs the proposal in its worker threads; the answer is the same.
     const server = await runGradeCheck(parseGradeCheckInputs(JSON.parse(JSON.stringify(applied.inputs))), marrow);
@@ -65,7 +84,15 @@ describe('survey entry in the browser', () => {
       st.road.gradePercent = '2.5';
       st.road.rises = 'left';
       st.laser.stakes = [{ key: 'a', label: 'CL 0+40', offsetFt: '0', distanceFt: '40', rodReadingFt: '5.5' }];
-      Object.assign(st.culvert, { present: true, inletInvertFt: '98', outletInvertFt: '97.7', flow: 'rational', areaAcres: '2', runoffC: '0.3', intensityInPerHr: '4' });
+      Object.assign(st.culvert, {
+        present: true,
+        inletInvertFt: '98',
+        outletInvertFt: '97.7',
+        flow: 'rational',
+        areaAcres: '2',
+        runoffC: '0.3',
+        intensityInPerHr: '4',
+      });
       st.design.proposed = true;
     });
     const first = await runLiveCheckWithProposal(s, marrow, proposeProfile);

@@ -22,15 +22,28 @@ export function surveyInputs(overrides: Record<string, unknown> = {}) {
     profile: { kind: 'elevations', points: groundPoints },
     roadEdgeStationFt: 0,
     culvert: {
-      diameterIn: 18, inlet: 'cmp-projecting', manningN: 0.024, inletInvertFt: 98, outletInvertFt: 97.7, surfaceElevationFt: 100.5,
-      lengthFt: 30, topWidthFt: 16, sideSlopeHPerV: 2, designFlowCfs: 4,
+      diameterIn: 18,
+      inlet: 'cmp-projecting',
+      manningN: 0.024,
+      inletInvertFt: 98,
+      outletInvertFt: 97.7,
+      surfaceElevationFt: 100.5,
+      lengthFt: 30,
+      topWidthFt: 16,
+      sideSlopeHPerV: 2,
+      designFlowCfs: 4,
     },
     sight: { speedMph: 45, measuredLeftFt: 650, measuredRightFt: 600 },
     geometry: { widthFt: 16, flareRadiusFt: 12, distanceToIntersectionFt: 300, distanceToPropertyLineFt: 20 },
     road: { gradePercent: 1.5, edgeElevationFt: 100 },
     laser: {
-      originElevationFt: 100, roadGradePercent: 1.5, landingGradePercent: 5.5, landingLengthFt: 20, drivewayGradePercent: 12,
-      receiverOffsetFt: 6, stakes: [{ label: 'CL 0+40', offsetFt: 0, distanceFt: 40, rodReadingFt: 5.4 }],
+      originElevationFt: 100,
+      roadGradePercent: 1.5,
+      landingGradePercent: 5.5,
+      landingLengthFt: 20,
+      drivewayGradePercent: 12,
+      receiverOffsetFt: 6,
+      stakes: [{ label: 'CL 0+40', offsetFt: 0, distanceFt: 40, rodReadingFt: 5.4 }],
     },
     design: { existing: { kind: 'elevations', points: groundPoints }, roadEdgeElevationFt: 100, applied: false },
     ...overrides,
@@ -40,7 +53,10 @@ export function surveyInputs(overrides: Record<string, unknown> = {}) {
 /** The demo authority's current version, seeding the two demo authorities first if this database has none. */
 export async function currentVersionId(db: DbOrTx, slug: 'marrow-county' | 'town-of-elderbrook') {
   await seedJurisdictions(db);
-  const [row] = await db.select({ id: jurisdictions.currentVersionId }).from(jurisdictions).where(eq(jurisdictions.slug, slug));
+  const [row] = await db
+    .select({ id: jurisdictions.currentVersionId })
+    .from(jurisdictions)
+    .where(eq(jurisdictions.slug, slug));
   if (!row?.id) throw new Error(`${slug} has no current version`);
   return row.id;
 }

@@ -16,7 +16,14 @@ const written: string[] = [];
 beforeAll(async () => {
   databaseUrl = await createTestDatabase();
   const base = createContext(parseEnv(testEnv(databaseUrl, { LOG_LEVEL: 'info' })));
-  ctx = { ...base, logger: createLogger('info', { write: (line: string) => { written.push(line); } }) };
+  ctx = {
+    ...base,
+    logger: createLogger('info', {
+      write: (line: string) => {
+        written.push(line);
+      },
+    }),
+  };
   await seedDemo(ctx.db);
 });
 afterAll(async () => {
@@ -51,7 +58,9 @@ describe('the request log after a sign-in', () => {
     }
     expect(log).not.toMatch(/set-cookie|"headers"/i);
 
-    const me = written.map((line) => JSON.parse(line) as Record<string, unknown>).find((l) => (l.req as { url?: string } | undefined)?.url === '/api/me');
+    const me = written
+      .map((line) => JSON.parse(line) as Record<string, unknown>)
+      .find((l) => (l.req as { url?: string } | undefined)?.url === '/api/me');
     expect(me).toBeDefined();
     expect(Object.keys(me!).sort()).toEqual(['hostname', 'level', 'msg', 'pid', 'req', 'res', 'responseTime', 'time']);
     expect(me!.res).toEqual({ statusCode: 200 });

@@ -20,10 +20,16 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const messageMail = (requestId: string) => t.ctx.db.select().from(emails)
-  .where(and(eq(emails.requestId, requestId), eq(emails.template, 'message.shared')));
+const messageMail = (requestId: string) =>
+  t.ctx.db
+    .select()
+    .from(emails)
+    .where(and(eq(emails.requestId, requestId), eq(emails.template, 'message.shared')));
 const post = (agent: Agent, requestId: string, body: string, visibility?: 'internal' | 'shared') =>
-  agent.post(`/api/requests/${requestId}/messages`).send({ body, ...(visibility ? { visibility } : {}) }).expect(201);
+  agent
+    .post(`/api/requests/${requestId}/messages`)
+    .send({ body, ...(visibility ? { visibility } : {}) })
+    .expect(201);
 
 describe('e-mail about new messages', () => {
   it('tells the property owner about a shared message and nobody about an internal note', async () => {
@@ -63,11 +69,16 @@ describe('e-mail about new messages', () => {
       const said = ['septic lid', 'flagger', 'Permit card'].find((words) => m.textBody.includes(words));
       return `${said} -> ${m.toAddress}${m.textBody.includes(`/crew/jobs/${sent.id}/`) ? ' (job link)' : ''}`;
     });
-    expect(heard.sort()).toEqual([
-      `Permit card -> ${crewEmail} (job link)`, `Permit card -> ${ownerEmail}`,
-      `flagger -> ${ownerEmail}`, `flagger -> ${t.env.OFFICE_EMAIL}`,
-      `septic lid -> ${crewEmail} (job link)`, `septic lid -> ${t.env.OFFICE_EMAIL}`,
-    ].sort());
+    expect(heard.sort()).toEqual(
+      [
+        `Permit card -> ${crewEmail} (job link)`,
+        `Permit card -> ${ownerEmail}`,
+        `flagger -> ${ownerEmail}`,
+        `flagger -> ${t.env.OFFICE_EMAIL}`,
+        `septic lid -> ${crewEmail} (job link)`,
+        `septic lid -> ${t.env.OFFICE_EMAIL}`,
+      ].sort(),
+    );
   });
 
   it('writes no e-mail when the message is refused', async () => {

@@ -10,10 +10,16 @@ const many = queueCountCap + 25;
 beforeAll(async () => {
   t = await createTestApp();
   cast = await signInCast(t);
-  await t.ctx.db.insert(requests).values(Array.from({ length: many }, (_, i) => ({
-    reference: `GP-2026-${String(i + 1).padStart(5, '0')}`, applicantId: cast.applicant.id, status: 'submitted' as const,
-    applicantName: 'Ada Quill', siteAddress: `${i} Heron Bend Lane`, roadName: 'Otter Brook Road',
-  })));
+  await t.ctx.db.insert(requests).values(
+    Array.from({ length: many }, (_, i) => ({
+      reference: `GP-2026-${String(i + 1).padStart(5, '0')}`,
+      applicantId: cast.applicant.id,
+      status: 'submitted' as const,
+      applicantName: 'Ada Quill',
+      siteAddress: `${i} Heron Bend Lane`,
+      roadName: 'Otter Brook Road',
+    })),
+  );
 });
 afterAll(() => t.close());
 

@@ -12,7 +12,16 @@ let cast: Cast;
 let fenwick: string;
 const made: { id: string; status: RequestStatus; name: string; road: string }[] = [];
 
-const statuses: RequestStatus[] = ['submitted', 'needs_details', 'visit_booked', 'checked', 'permit_filed', 'released', 'closed', 'draft'];
+const statuses: RequestStatus[] = [
+  'submitted',
+  'needs_details',
+  'visit_booked',
+  'checked',
+  'permit_filed',
+  'released',
+  'closed',
+  'draft',
+];
 const names = ['Ada Quill', 'Bram Osei', 'Cora Vance', 'Dmitri Hale', 'Esme Tolliver', 'Fen Ashgrove'];
 
 beforeAll(async () => {
@@ -24,8 +33,13 @@ beforeAll(async () => {
     const name = names[i % names.length];
     const road = i % 3 === 0 ? 'Quarry Ridge Road' : 'Tamsin Mill Lane';
     const row = await createRequestRow(t.ctx.db, {
-      applicantId: cast.applicant.id, status, applicantName: name, roadName: road, siteAddress: `${100 + i} ${road}`,
-      jurisdictionId: i % 2 === 0 ? fenwick : null, assigneeId: i % 4 === 0 ? cast.staff.id : null,
+      applicantId: cast.applicant.id,
+      status,
+      applicantName: name,
+      roadName: road,
+      siteAddress: `${100 + i} ${road}`,
+      jurisdictionId: i % 2 === 0 ? fenwick : null,
+      assigneeId: i % 4 === 0 ? cast.staff.id : null,
       statusChangedAt: new Date(Date.UTC(2026, 2, 1, 8, i)),
     });
     made.push({ id: row.id, status, name, road });
@@ -55,7 +69,10 @@ describe('the office queue', () => {
   });
 
   it('keeps finished requests after the open ones when the newest in status come first', async () => {
-    const rows = (await queue('sort=waiting&dir=desc&limit=100').expect(200)).body.requests as { status: RequestStatus; statusChangedAt: string }[];
+    const rows = (await queue('sort=waiting&dir=desc&limit=100').expect(200)).body.requests as {
+      status: RequestStatus;
+      statusChangedAt: string;
+    }[];
     const ended = rows.map((r) => terminalStatuses.includes(r.status));
     expect(ended).toEqual([...ended].sort((a, b) => Number(a) - Number(b)));
     const open = rows.filter((_, i) => !ended[i]).map((r) => r.statusChangedAt);
@@ -64,12 +81,18 @@ describe('the office queue', () => {
 
   it('filters by status, jurisdiction, assignee and "waiting on us"', async () => {
     const submitted = await queue('status=submitted,checked&limit=100').expect(200);
-    expect(submitted.body.requests.every((r: { status: string }) => ['submitted', 'checked'].includes(r.status))).toBe(true);
+    expect(submitted.body.requests.every((r: { status: string }) => ['submitted', 'checked'].includes(r.status))).toBe(
+      true,
+    );
     expect(submitted.body.total).toBe(made.filter((m) => m.status === 'submitted' || m.status === 'checked').length);
 
     const inFenwick = await queue(`jurisdiction=${fenwick}&limit=100`).expect(200);
     expect(inFenwick.body.requests.length).toBeGreaterThan(0);
-    expect(inFenwick.body.requests.every((r: { jurisdiction: { name: string } }) => r.jurisdiction?.name === 'Fenwick County')).toBe(true);
+    expect(
+      inFenwick.body.requests.every(
+        (r: { jurisdiction: { name: string } }) => r.jurisdiction?.name === 'Fenwick County',
+      ),
+    ).toBe(true);
 
     const mine = await queue('assignee=me&limit=100').expect(200);
     expect(mine.body.requests.length).toBeGreaterThan(0);
@@ -78,7 +101,9 @@ describe('the office queue', () => {
     expect(unassigned.body.requests.every((r: { assignee: unknown }) => r.assignee === null)).toBe(true);
 
     const waiting = await queue('waiting=true&limit=100').expect(200);
-    expect(new Set(waiting.body.requests.map((r: { status: string }) => r.status))).toEqual(new Set(['submitted', 'visit_booked', 'checked']));
+    expect(new Set(waiting.body.requests.map((r: { status: string }) => r.status))).toEqual(
+      new Set(['submitted', 'visit_booked', 'checked']),
+    );
   });
 
   it('searches reference, name, address and road as words or prefixes', async () => {
@@ -96,7 +121,12 @@ describe('the office queue', () => {
   });
 
   it('pages with a cursor through every row exactly once, in any sort', async () => {
-    for (const [sort, dir] of [['applicant', 'asc'], ['road', 'desc'], ['waiting', 'desc'], ['reference', 'asc']]) {
+    for (const [sort, dir] of [
+      ['applicant', 'asc'],
+      ['road', 'desc'],
+      ['waiting', 'desc'],
+      ['reference', 'asc'],
+    ]) {
       const seen: string[] = [];
       let cursor = '';
       for (let pageNo = 0; pageNo < 20; pageNo++) {
@@ -125,12 +155,22 @@ describe('assignment', () => {
   it('assigns to me and to a colleague as internal events the owner never sees', async () => {
     const target = made.find((m) => m.status === 'submitted')!;
     const options = await cast.staff.agent.get('/api/queue/options').expect(200);
-    expect(options.body.people.map((p: { id: string }) => p.id)).toEqual(expect.arrayContaining([cast.staff.id, cast.otherStaff.id, cast.admin.id]));
-    await cast.staff.agent.put(`/api/requests/${target.id}/assignee`).send({ assigneeId: cast.otherStaff.id }).expect(200);
-    const theirs = (await queue(`q=${encodeURIComponent(target.name)}&assignee=${cast.otherStaff.id}&limit=100`).expect(200)).body.requests;
+    expect(options.body.people.map((p: { id: string }) => p.id)).toEqual(
+      expect.arrayContaining([cast.staff.id, cast.otherStaff.id, cast.admin.id]),
+    );
+    await cast.staff.agent
+      .put(`/api/requests/${target.id}/assignee`)
+      .send({ assigneeId: cast.otherStaff.id })
+      .expect(200);
+    const theirs = (
+      await queue(`q=${encodeURIComponent(target.name)}&assignee=${cast.otherStaff.id}&limit=100`).expect(200)
+    ).body.requests;
     expect(theirs.map((r: { id: string }) => r.id)).toContain(target.id);
     // Giving it to the person who already has it writes nothing.
-    await cast.staff.agent.put(`/api/requests/${target.id}/assignee`).send({ assigneeId: cast.otherStaff.id }).expect(200);
+    await cast.staff.agent
+      .put(`/api/requests/${target.id}/assignee`)
+      .send({ assigneeId: cast.otherStaff.id })
+      .expect(200);
     await cast.staff.agent.put(`/api/requests/${target.id}/assignee`).send({ assigneeId: cast.staff.id }).expect(200);
     const mine = (await queue('assignee=me&limit=100').expect(200)).body.requests;
     expect(mine.map((r: { id: string }) => r.id)).toContain(target.id);
@@ -143,10 +183,16 @@ describe('assignment', () => {
 
   it('refuses people outside the office, other roles, and unknown requests', async () => {
     const target = made.find((m) => m.status === 'checked')!;
-    const crew = await cast.staff.agent.put(`/api/requests/${target.id}/assignee`).send({ assigneeId: cast.crew.id }).expect(400);
+    const crew = await cast.staff.agent
+      .put(`/api/requests/${target.id}/assignee`)
+      .send({ assigneeId: cast.crew.id })
+      .expect(400);
     expect(crew.body.error.fields).toHaveProperty('assigneeId');
     await cast.staff.agent.put(`/api/requests/${target.id}/assignee`).send({ assigneeId: 'me' }).expect(400);
     await cast.applicant.agent.put(`/api/requests/${target.id}/assignee`).send({ assigneeId: null }).expect(403);
-    await cast.staff.agent.put('/api/requests/00000000-0000-4000-8000-000000000000/assignee').send({ assigneeId: null }).expect(404);
+    await cast.staff.agent
+      .put('/api/requests/00000000-0000-4000-8000-000000000000/assignee')
+      .send({ assigneeId: null })
+      .expect(404);
   });
 });

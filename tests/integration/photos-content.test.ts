@@ -18,8 +18,15 @@ afterAll(() => t.close());
 
 /** Announces, uploads through the presigned URL and confirms one file, as the browser does. */
 async function upload(fileName: string, contentType: string, body: Buffer) {
-  const announced = await owner.post(`/api/requests/${requestId}/photos`).send({ fileName, contentType, sizeBytes: body.length }).expect(201);
-  const put = await fetch(announced.body.upload.url, { method: 'PUT', body: new Uint8Array(body), headers: { 'content-type': contentType } });
+  const announced = await owner
+    .post(`/api/requests/${requestId}/photos`)
+    .send({ fileName, contentType, sizeBytes: body.length })
+    .expect(201);
+  const put = await fetch(announced.body.upload.url, {
+    method: 'PUT',
+    body: new Uint8Array(body),
+    headers: { 'content-type': contentType },
+  });
   expect(put.status).toBe(200);
   const confirm = await owner.post(`/api/requests/${requestId}/photos/${announced.body.photo.id}/confirm`).send({});
   return { id: announced.body.photo.id as string, confirm };
@@ -27,11 +34,16 @@ async function upload(fileName: string, contentType: string, body: Buffer) {
 
 async function stored(id: string) {
   const [row] = await t.ctx.db.select().from(photos).where(eq(photos.id, id));
-  const head = await t.ctx.s3.send(new HeadObjectCommand({ Bucket: t.env.S3_BUCKET, Key: row.objectKey })).then(() => true, () => false);
+  const head = await t.ctx.s3.send(new HeadObjectCommand({ Bucket: t.env.S3_BUCKET, Key: row.objectKey })).then(
+    () => true,
+    () => false,
+  );
   return { status: row.status, inStorage: head };
 }
 
-const svg = Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" onload="alert(document.cookie)"><rect width="9" height="9"/></svg>');
+const svg = Buffer.from(
+  '<svg xmlns="http://www.w3.org/2000/svg" onload="alert(document.cookie)"><rect width="9" height="9"/></svg>',
+);
 const html = Buffer.from('<!doctype html><html><body><script>fetch("/api/me")</script></body></html>');
 
 describe('confirming an upload reads its first bytes', () => {
@@ -39,18 +51,24 @@ describe('confirming an upload reads its first bytes', () => {
     ['an SVG sent as a PNG', 'road.png', 'image/png', svg],
     ['a web page sent as a JPEG', 'ditch.jpg', 'image/jpeg', html],
     ['a PNG sent as a JPEG', 'culvert.jpg', 'image/jpeg', solidPng(8, 8, [10, 20, 30])],
-  ])('refuses %s, names the photo, deletes the object and never lists it', async (_what, fileName, contentType, body) => {
-    const { id, confirm } = await upload(fileName, contentType, body);
-    expect(confirm.status).toBe(400);
-    expect(confirm.body.error.message).toContain(`"${fileName}" is not a JPEG, PNG, WebP or HEIC photo`);
-    expect(confirm.body.error.fields).toHaveProperty('fileName');
-    expect(await stored(id)).toEqual({ status: 'removed', inStorage: false });
-    const list = await owner.get(`/api/requests/${requestId}/photos`).expect(200);
-    expect(list.body.photos.map((p: { id: string }) => p.id)).not.toContain(id);
-  });
+  ])(
+    'refuses %s, names the photo, deletes the object and never lists it',
+    async (_what, fileName, contentType, body) => {
+      const { id, confirm } = await upload(fileName, contentType, body);
+      expect(confirm.status).toBe(400);
+      expect(confirm.body.error.message).toContain(`"${fileName}" is not a JPEG, PNG, WebP or HEIC photo`);
+      expect(confirm.body.error.fields).toHaveProperty('fileName');
+      expect(await stored(id)).toEqual({ status: 'removed', inStorage: false });
+      const list = await owner.get(`/api/requests/${requestId}/photos`).expect(200);
+      expect(list.body.photos.map((p: { id: string }) => p.id)).not.toContain(id);
+    },
+  );
 
   it('accepts real PNG and HEIC photos', async () => {
-    for (const [name, type, body] of [['left.png', 'image/png', solidPng(8, 8, [90, 90, 90])], ['right.heic', 'image/heic', heicWithPosition(44, -72).file]] as const) {
+    for (const [name, type, body] of [
+      ['left.png', 'image/png', solidPng(8, 8, [90, 90, 90])],
+      ['right.heic', 'image/heic', heicWithPosition(44, -72).file],
+    ] as const) {
       const { id, confirm } = await upload(name, type, body);
       expect(confirm.status, JSON.stringify(confirm.body)).toBe(200);
       expect(await stored(id)).toEqual({ status: 'stored', inStorage: true });

@@ -17,7 +17,11 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-async function announce(agent: Agent = owner, id = requestId, file = { fileName: 'road-left.png', contentType: 'image/png', sizeBytes: png.length }) {
+async function announce(
+  agent: Agent = owner,
+  id = requestId,
+  file = { fileName: 'road-left.png', contentType: 'image/png', sizeBytes: png.length },
+) {
   const res = await agent.post(`/api/requests/${id}/photos`).send(file).expect(201);
   return res.body as { photo: { id: string }; upload: { url: string; method: 'PUT'; headers: Record<string, string> } };
 }
@@ -30,8 +34,10 @@ describe('photos go straight to storage and are listed once confirmed', () => {
     const { photo, upload } = await announce();
     expect(upload.url).toContain('X-Amz-Expires=300');
     expect((await put(upload.url, png)).status).toBe(200);
-    const confirmed = await owner.post(`/api/requests/${requestId}/photos/${photo.id}/confirm`)
-      .send({ caption: 'Looking along the road to the left', gpsLat: 44.1, gpsLng: -72.3 }).expect(200);
+    const confirmed = await owner
+      .post(`/api/requests/${requestId}/photos/${photo.id}/confirm`)
+      .send({ caption: 'Looking along the road to the left', gpsLat: 44.1, gpsLng: -72.3 })
+      .expect(200);
     expect(confirmed.body.photo).toMatchObject({ caption: 'Looking along the road to the left', gpsLat: 44.1 });
     const list = await owner.get(`/api/requests/${requestId}/photos`).expect(200);
     const listed = list.body.photos.find((p: { id: string }) => p.id === photo.id);
@@ -51,7 +57,14 @@ describe('photos go straight to storage and are listed once confirmed', () => {
   it('does not list a stored object that differs from what was announced', async () => {
     const { photo } = await announce();
     const [row] = await t.ctx.db.select().from(photos).where(eq(photos.id, photo.id));
-    await t.ctx.s3.send(new PutObjectCommand({ Bucket: t.env.S3_BUCKET, Key: row.objectKey, Body: Buffer.concat([png, png]), ContentType: 'image/png' }));
+    await t.ctx.s3.send(
+      new PutObjectCommand({
+        Bucket: t.env.S3_BUCKET,
+        Key: row.objectKey,
+        Body: Buffer.concat([png, png]),
+        ContentType: 'image/png',
+      }),
+    );
     await owner.post(`/api/requests/${requestId}/photos/${photo.id}/confirm`).send({}).expect(409);
   });
 
@@ -69,11 +82,21 @@ describe('photos go straight to storage and are listed once confirmed', () => {
   it('stops at 20 photos per request', async () => {
     const fresh = (await owner.post('/api/requests').send({}).expect(201)).body.request.id;
     const me = (await owner.get('/api/me')).body.user.id;
-    await t.ctx.db.insert(photos).values(Array.from({ length: 20 }, (_, i) => ({
-      requestId: fresh, uploaderId: me, objectKey: `requests/${fresh}/photos/seeded-${i}.png`, fileName: `${i}.png`,
-      contentType: 'image/png', sizeBytes: 10, status: 'stored' as const,
-    })));
-    const res = await owner.post(`/api/requests/${fresh}/photos`).send({ fileName: 'one-more.png', contentType: 'image/png', sizeBytes: 10 }).expect(400);
+    await t.ctx.db.insert(photos).values(
+      Array.from({ length: 20 }, (_, i) => ({
+        requestId: fresh,
+        uploaderId: me,
+        objectKey: `requests/${fresh}/photos/seeded-${i}.png`,
+        fileName: `${i}.png`,
+        contentType: 'image/png',
+        sizeBytes: 10,
+        status: 'stored' as const,
+      })),
+    );
+    const res = await owner
+      .post(`/api/requests/${fresh}/photos`)
+      .send({ fileName: 'one-more.png', contentType: 'image/png', sizeBytes: 10 })
+      .expect(400);
     expect(res.body.error.fields).toHaveProperty(['fileName']);
   });
 });
@@ -125,12 +148,18 @@ describe('only the owner touches the photos; only those who may see the request 
     const other = await newApplicant(t, 'neighbour');
     await other.get(`/api/requests/${sent.id}/photos`).expect(404);
     await other.get(`/api/requests/${sent.id}/photos/${photo.id}/url`).expect(404);
-    await other.post(`/api/requests/${sent.id}/photos`).send({ fileName: 'x.png', contentType: 'image/png', sizeBytes: 10 }).expect(404);
+    await other
+      .post(`/api/requests/${sent.id}/photos`)
+      .send({ fileName: 'x.png', contentType: 'image/png', sizeBytes: 10 })
+      .expect(404);
     await other.post(`/api/requests/${sent.id}/photos/${photo.id}/confirm`).send({}).expect(404);
     await other.delete(`/api/requests/${sent.id}/photos/${photo.id}`).expect(404);
     const staff = await signInDemo(t, 'priya.lindqvist@gradepass.test');
     const link = await staff.get(`/api/requests/${sent.id}/photos/${photo.id}/url`).expect(200);
     expect((await fetch(link.body.url)).status).toBe(200);
-    await staff.post(`/api/requests/${sent.id}/photos`).send({ fileName: 'x.png', contentType: 'image/png', sizeBytes: 10 }).expect(403);
+    await staff
+      .post(`/api/requests/${sent.id}/photos`)
+      .send({ fileName: 'x.png', contentType: 'image/png', sizeBytes: 10 })
+      .expect(403);
   });
 });

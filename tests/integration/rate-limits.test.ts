@@ -14,8 +14,12 @@ let secondCtx: AppContext;
 let second: TestApp['app'];
 beforeAll(async () => {
   t = await createTestApp({
-    RATE_LIMIT_API_PER_MINUTE: '12', RATE_LIMIT_MESSAGES_PER_HOUR: '4', RATE_LIMIT_DRAFTS_PER_HOUR: '3',
-    RATE_LIMIT_UPLOADS_PER_HOUR: '3', RATE_LIMIT_SIGN_INS_PER_HOUR: '3', RATE_LIMIT_ADDRESS_FACTOR: '2',
+    RATE_LIMIT_API_PER_MINUTE: '12',
+    RATE_LIMIT_MESSAGES_PER_HOUR: '4',
+    RATE_LIMIT_DRAFTS_PER_HOUR: '3',
+    RATE_LIMIT_UPLOADS_PER_HOUR: '3',
+    RATE_LIMIT_SIGN_INS_PER_HOUR: '3',
+    RATE_LIMIT_ADDRESS_FACTOR: '2',
   });
   secondCtx = createContext(parseEnv(t.env));
   second = createApp(secondCtx);
@@ -46,7 +50,8 @@ describe('rate limits hold across two instances sharing one database', () => {
   it('messages: the fifth in the hour is refused, whichever instance takes it', async () => {
     const { a, b, id } = await bothInstances(owner('writer'));
     const row = await createRequestRow(t.ctx.db, { applicantId: id, status: 'submitted' });
-    const post = (agent: typeof a, n: number) => agent.post(`/api/requests/${row.id}/messages`).send({ body: `Question ${n}` });
+    const post = (agent: typeof a, n: number) =>
+      agent.post(`/api/requests/${row.id}/messages`).send({ body: `Question ${n}` });
     for (let n = 1; n <= 4; n += 1) expect((await post(n % 2 ? a : b, n)).status).toBe(201);
     expectLimited(await post(a, 5), /Too many messages/);
     expectLimited(await post(b, 6), /Too many messages/);
@@ -62,8 +67,10 @@ describe('rate limits hold across two instances sharing one database', () => {
     const mine = await createRequestRow(t.ctx.db, { applicantId: first.id, status: 'submitted' });
     const theirs = await createRequestRow(t.ctx.db, { applicantId: otherId, status: 'submitted' });
     // 4 per person, 8 per address: 4 from the first person, then the second person's 5th is the address's 9th.
-    for (let n = 0; n < 4; n += 1) await first.a.post(`/api/requests/${mine.id}/messages`).send({ body: 'Hello' }).expect(201);
-    for (let n = 0; n < 4; n += 1) await other.post(`/api/requests/${theirs.id}/messages`).send({ body: 'Hello' }).expect(201);
+    for (let n = 0; n < 4; n += 1)
+      await first.a.post(`/api/requests/${mine.id}/messages`).send({ body: 'Hello' }).expect(201);
+    for (let n = 0; n < 4; n += 1)
+      await other.post(`/api/requests/${theirs.id}/messages`).send({ body: 'Hello' }).expect(201);
     const res = await other.post(`/api/requests/${theirs.id}/messages`).send({ body: 'Hello' });
     expectLimited(res, /Too many messages/);
   });
@@ -90,7 +97,10 @@ describe('rate limits hold across two instances sharing one database', () => {
     for (const agent of [a, b, a]) ids.push((await agent.post('/api/requests').send({}).expect(201)).body.request.id);
     expectLimited(await b.post('/api/requests').send({}), /Too many new requests/);
 
-    const announce = (agent: typeof a) => agent.post(`/api/requests/${ids[0]}/photos`).send({ fileName: 'ditch.jpg', contentType: 'image/jpeg', sizeBytes: 1000 });
+    const announce = (agent: typeof a) =>
+      agent
+        .post(`/api/requests/${ids[0]}/photos`)
+        .send({ fileName: 'ditch.jpg', contentType: 'image/jpeg', sizeBytes: 1000 });
     for (const agent of [a, b, a]) expect((await announce(agent)).status).toBe(201);
     expectLimited(await announce(b), /Too many photo uploads/);
   });

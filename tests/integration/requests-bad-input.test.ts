@@ -15,12 +15,20 @@ beforeAll(async () => {
 });
 afterAll(() => t.close());
 
-const currentVersion = async (id: string) => (await owner.get(`/api/requests/${id}`).expect(200)).body.request.version as number;
+const currentVersion = async (id: string) =>
+  (await owner.get(`/api/requests/${id}`).expect(200)).body.request.version as number;
 
 describe('every write names the bad field with a 400 and changes nothing', () => {
   it('rejects malformed JSON', async () => {
-    for (const [method, path] of [['patch', `/api/requests/${draftId}/draft`], ['post', `/api/requests/${sentId}/messages`], ['post', `/api/requests/${draftId}/photos`]] as const) {
-      const res = await owner[method](path).set('Content-Type', 'application/json').send('{"expectedVersion": 1,').expect(400);
+    for (const [method, path] of [
+      ['patch', `/api/requests/${draftId}/draft`],
+      ['post', `/api/requests/${sentId}/messages`],
+      ['post', `/api/requests/${draftId}/photos`],
+    ] as const) {
+      const res = await owner[method](path)
+        .set('Content-Type', 'application/json')
+        .send('{"expectedVersion": 1,')
+        .expect(400);
       expect(res.body.error.fields).toHaveProperty(['(body)']);
     }
   });
@@ -67,9 +75,17 @@ describe('every write names the bad field with a 400 and changes nothing', () =>
   it.each([
     ['a GIF', { fileName: 'a.gif', contentType: 'image/gif', sizeBytes: 100 }, 'contentType'],
     ['a 16 MB photo', { fileName: 'big.jpg', contentType: 'image/jpeg', sizeBytes: 16 * 1024 * 1024 }, 'sizeBytes'],
-    ['a size that is not a whole number', { fileName: 'a.jpg', contentType: 'image/jpeg', sizeBytes: 10.5 }, 'sizeBytes'],
+    [
+      'a size that is not a whole number',
+      { fileName: 'a.jpg', contentType: 'image/jpeg', sizeBytes: 10.5 },
+      'sizeBytes',
+    ],
     ['a missing file name', { contentType: 'image/jpeg', sizeBytes: 100 }, 'fileName'],
-    ['a file name that is too long', { fileName: `${'f'.repeat(200)}.jpg`, contentType: 'image/jpeg', sizeBytes: 100 }, 'fileName'],
+    [
+      'a file name that is too long',
+      { fileName: `${'f'.repeat(200)}.jpg`, contentType: 'image/jpeg', sizeBytes: 100 },
+      'fileName',
+    ],
     ['a size sent as text', { fileName: 'a.jpg', contentType: 'image/jpeg', sizeBytes: '100' }, 'sizeBytes'],
   ])('photo upload: %s', async (_what, body, field) => {
     const res = await owner.post(`/api/requests/${draftId}/photos`).send(body).expect(400);
@@ -77,25 +93,38 @@ describe('every write names the bad field with a 400 and changes nothing', () =>
   });
 
   it('photo confirm and caption: wrong types and over-long captions', async () => {
-    const ticket = await owner.post(`/api/requests/${draftId}/photos`).send({ fileName: 'a.png', contentType: 'image/png', sizeBytes: 10 }).expect(201);
+    const ticket = await owner
+      .post(`/api/requests/${draftId}/photos`)
+      .send({ fileName: 'a.png', contentType: 'image/png', sizeBytes: 10 })
+      .expect(201);
     const photo = `/api/requests/${draftId}/photos/${ticket.body.photo.id}`;
     const badGps = await owner.post(`${photo}/confirm`).send({ gpsLat: 'north' }).expect(400);
     expect(badGps.body.error.fields).toHaveProperty(['gpsLat']);
-    const longCaption = await owner.post(`${photo}/confirm`).send({ caption: 'c'.repeat(201) }).expect(400);
+    const longCaption = await owner
+      .post(`${photo}/confirm`)
+      .send({ caption: 'c'.repeat(201) })
+      .expect(400);
     expect(longCaption.body.error.fields).toHaveProperty(['caption']);
     const captionType = await owner.patch(photo).send({ caption: 12 }).expect(400);
     expect(captionType.body.error.fields).toHaveProperty(['caption']);
-    const badPhotoId = await owner.patch(`/api/requests/${draftId}/photos/not-a-photo`).send({ caption: 'x' }).expect(400);
+    const badPhotoId = await owner
+      .patch(`/api/requests/${draftId}/photos/not-a-photo`)
+      .send({ caption: 'x' })
+      .expect(400);
     expect(badPhotoId.body.error.fields).toHaveProperty(['photoId']);
   });
 
   it('never answers 500 to whatever JSON arrives at the draft, message and photo routes', async () => {
-    await fc.assert(fc.asyncProperty(fc.jsonValue(), fc.constantFrom('draft', 'messages', 'photos'), async (body, route) => {
-      const call = route === 'draft'
-        ? owner.patch(`/api/requests/${draftId}/draft`)
-        : owner.post(`/api/requests/${route === 'messages' ? sentId : draftId}/${route}`);
-      const res = await call.set('Content-Type', 'application/json').send(JSON.stringify(body));
-      expect(res.status, JSON.stringify(res.body)).toBeLessThan(500);
-    }), { numRuns: 60 });
+    await fc.assert(
+      fc.asyncProperty(fc.jsonValue(), fc.constantFrom('draft', 'messages', 'photos'), async (body, route) => {
+        const call =
+          route === 'draft'
+            ? owner.patch(`/api/requests/${draftId}/draft`)
+            : owner.post(`/api/requests/${route === 'messages' ? sentId : draftId}/${route}`);
+        const res = await call.set('Content-Type', 'application/json').send(JSON.stringify(body));
+        expect(res.status, JSON.stringify(res.body)).toBeLessThan(500);
+      }),
+      { numRuns: 60 },
+    );
   });
 });

@@ -20,8 +20,14 @@ const bodies = (list: { body: string }[]) => list.map((m) => m.body);
 
 describe('messages between the property owner and the office', () => {
   it('keeps the office’s internal notes away from the applicant', async () => {
-    await staff.post(`/api/requests/${requestId}/messages`).send({ body: 'Culvert looks undersized, check on site' }).expect(201);
-    await staff.post(`/api/requests/${requestId}/messages`).send({ body: 'We will visit on Tuesday morning.', visibility: 'shared' }).expect(201);
+    await staff
+      .post(`/api/requests/${requestId}/messages`)
+      .send({ body: 'Culvert looks undersized, check on site' })
+      .expect(201);
+    await staff
+      .post(`/api/requests/${requestId}/messages`)
+      .send({ body: 'We will visit on Tuesday morning.', visibility: 'shared' })
+      .expect(201);
     await owner.post(`/api/requests/${requestId}/messages`).send({ body: 'Tuesday suits me.' }).expect(201);
     const own = await owner.get(`/api/requests/${requestId}/messages`).expect(200);
     expect(bodies(own.body.messages)).toEqual(['We will visit on Tuesday morning.', 'Tuesday suits me.']);
@@ -36,10 +42,14 @@ describe('messages between the property owner and the office', () => {
 
   it('puts the answer to "more details needed" among the shared messages and back in the office’s queue', async () => {
     const sent = await submitted(owner);
-    const asked = await staff.post(`/api/requests/${sent.id}/transitions`)
-      .send({ action: 'ask-details', expectedVersion: sent.version, note: 'Which side of the mailbox?' }).expect(200);
-    const answered = await owner.post(`/api/requests/${sent.id}/transitions`)
-      .send({ action: 'answer', expectedVersion: asked.body.request.version, answer: 'North side, about 60 ft.' }).expect(200);
+    const asked = await staff
+      .post(`/api/requests/${sent.id}/transitions`)
+      .send({ action: 'ask-details', expectedVersion: sent.version, note: 'Which side of the mailbox?' })
+      .expect(200);
+    const answered = await owner
+      .post(`/api/requests/${sent.id}/transitions`)
+      .send({ action: 'answer', expectedVersion: asked.body.request.version, answer: 'North side, about 60 ft.' })
+      .expect(200);
     expect(answered.body.request.status).toBe('submitted');
     const own = await owner.get(`/api/requests/${sent.id}/messages`).expect(200);
     expect(bodies(own.body.messages)).toContain('North side, about 60 ft.');

@@ -16,7 +16,9 @@ const minuteMs = 60_000;
 const toleranceMs = minuteMs;
 
 async function sessionRows() {
-  const { rows } = await t.ctx.pool.query<{ sid: string; expire: Date; sess: { signedInAt?: number } }>('select sid, expire, sess from session');
+  const { rows } = await t.ctx.pool.query<{ sid: string; expire: Date; sess: { signedInAt?: number } }>(
+    'select sid, expire, sess from session',
+  );
   return rows;
 }
 
@@ -55,7 +57,9 @@ describe('sessions', () => {
     const agent = await signIn(t.app, staff);
     await agent.get('/api/me').expect(200);
     const fifteenDaysAgo = Date.now() - 15 * 86_400_000;
-    await t.ctx.pool.query(`update session set sess = jsonb_set(sess, '{signedInAt}', to_jsonb($1::bigint))`, [fifteenDaysAgo]);
+    await t.ctx.pool.query(`update session set sess = jsonb_set(sess, '{signedInAt}', to_jsonb($1::bigint))`, [
+      fifteenDaysAgo,
+    ]);
     const [old] = await sessionRows();
     await agent.get('/api/me').expect(401);
     const left = await sessionRows();
@@ -67,7 +71,12 @@ describe('sessions', () => {
 describe('API answers', () => {
   it('carry Cache-Control: no-store, signed in or not, found or not', async () => {
     const agent = await signIn(t.app, staff);
-    for (const res of [await agent.get('/api/me'), await request(t.app).get('/api/me'), await agent.get('/api/no-such-thing'), await agent.get('/api/queue')]) {
+    for (const res of [
+      await agent.get('/api/me'),
+      await request(t.app).get('/api/me'),
+      await agent.get('/api/no-such-thing'),
+      await agent.get('/api/queue'),
+    ]) {
       expect(res.headers['cache-control']).toBe('no-store');
     }
   });

@@ -12,7 +12,10 @@ import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-withCastApp((app, signedIn) => { t = app; cast = signedIn; });
+withCastApp((app, signedIn) => {
+  t = app;
+  cast = signedIn;
+});
 
 const crewStatuses: RequestStatus[] = ['crew_assigned', 'under_construction', 'built', 'closed'];
 
@@ -20,7 +23,9 @@ const crewStatuses: RequestStatus[] = ['crew_assigned', 'under_construction', 'b
 async function requestIn(status: RequestStatus) {
   const db = t.ctx.db;
   const row = await createRequestRow(db, {
-    applicantId: cast.applicant.id, status, permitReference: 'FC-ACC-2291',
+    applicantId: cast.applicant.id,
+    status,
+    permitReference: 'FC-ACC-2291',
     crewId: crewStatuses.includes(status) ? cast.crew.id : null,
   });
   const check = await createGradeCheck(db, { requestId: row.id, createdById: cast.staff.id });
@@ -42,41 +47,56 @@ function bodyFor(action: TransitionAction, version: number) {
   return body;
 }
 
-const people = (): Record<Role, SignedIn> => ({ applicant: cast.applicant, staff: cast.staff, crew: cast.crew, admin: cast.admin });
-const cases = transitions.flatMap((tr) => (['applicant', 'staff', 'crew', 'admin'] as const).map((role) => ({ tr, role })));
+const people = (): Record<Role, SignedIn> => ({
+  applicant: cast.applicant,
+  staff: cast.staff,
+  crew: cast.crew,
+  admin: cast.admin,
+});
+const cases = transitions.flatMap((tr) =>
+  (['applicant', 'staff', 'crew', 'admin'] as const).map((role) => ({ tr, role })),
+);
 
 describe('every transition in the table, for every role', () => {
-  it.each(cases.map(({ tr, role }) => [`${tr.action} from ${tr.from} as ${role}`, tr, role] as const))('%s', async (_name, tr: Transition, role: Role) => {
-    const row = await requestIn(tr.from);
-    const who = people()[role];
-    const res = await who.agent.post(`/api/requests/${row.id}/transitions`).send(bodyFor(tr.action, row.version));
-    const [after] = await t.ctx.db.select().from(requests).where(eq(requests.id, row.id));
-    if (tr.roles.includes(role)) {
-      expect(res.status, JSON.stringify(res.body)).toBe(200);
-      expect(res.body.request).toMatchObject({ status: tr.to, version: row.version + 1 });
-      expect(after.status).toBe(tr.to);
-      if (tr.action === 'accept-job') expect(after.crewId).toBe(who.id);
-    } else {
-      // Whoever may not even see the request gets 404; the rest get 409 naming where it stands.
-      const visible = canSee({ id: who.id, email: who.email, name: '', role }, row);
-      expect(res.status, JSON.stringify(res.body)).toBe(visible ? 409 : 404);
-      if (visible) expect(res.body.error.message).toContain(tr.from);
-      expect(after).toMatchObject({ status: tr.from, version: row.version });
-    }
-  });
+  it.each(cases.map(({ tr, role }) => [`${tr.action} from ${tr.from} as ${role}`, tr, role] as const))(
+    '%s',
+    async (_name, tr: Transition, role: Role) => {
+      const row = await requestIn(tr.from);
+      const who = people()[role];
+      const res = await who.agent.post(`/api/requests/${row.id}/transitions`).send(bodyFor(tr.action, row.version));
+      const [after] = await t.ctx.db.select().from(requests).where(eq(requests.id, row.id));
+      if (tr.roles.includes(role)) {
+        expect(res.status, JSON.stringify(res.body)).toBe(200);
+        expect(res.body.request).toMatchObject({ status: tr.to, version: row.version + 1 });
+        expect(after.status).toBe(tr.to);
+        if (tr.action === 'accept-job') expect(after.crewId).toBe(who.id);
+      } else {
+        // Whoever may not even see the request gets 404; the rest get 409 naming where it stands.
+        const visible = canSee({ id: who.id, email: who.email, name: '', role }, row);
+        expect(res.status, JSON.stringify(res.body)).toBe(visible ? 409 : 404);
+        if (visible) expect(res.body.error.message).toContain(tr.from);
+        expect(after).toMatchObject({ status: tr.from, version: row.version });
+      }
+    },
+  );
 });
 
 describe('actions that are not in the table', () => {
-  const pairs = requestStatuses.flatMap((from) => [...new Set(transitions.map((x) => x.action))]
-    .filter((action) => !transitions.some((x) => x.from === from && x.action === action))
-    .map((action) => [from, action] as const));
+  const pairs = requestStatuses.flatMap((from) =>
+    [...new Set(transitions.map((x) => x.action))]
+      .filter((action) => !transitions.some((x) => x.from === from && x.action === action))
+      .map((action) => [from, action] as const),
+  );
 
   it.each(pairs)('%s cannot %s, even for the owner (admin)', async (from, action) => {
     const row = await requestIn(from);
     const res = await cast.admin.agent.post(`/api/requests/${row.id}/transitions`).send(bodyFor(action, row.version));
     expect(res.status).toBe(409);
     expect(res.body.error.message).toContain(`(${from})`);
-    const [after] = await t.ctx.db.select({ status: requests.status, version: requests.version }).from(requests).where(eq(requests.id, row.id));
+    const [after] = await t.ctx.db
+      .select({ status: requests.status, version: requests.version })
+      .from(requests)
+      .where(eq(requests.id, row.id));
     expect(after).toEqual({ status: from, version: row.version });
   });
 });

@@ -9,7 +9,10 @@ import type { TestApp } from '../setup/test-app';
 
 let t: TestApp;
 let cast: Cast;
-withCastApp((app, signedIn) => { t = app; cast = signedIn; });
+withCastApp((app, signedIn) => {
+  t = app;
+  cast = signedIn;
+});
 
 const move = (who: Cast[keyof Cast], id: string, body: Record<string, unknown>) =>
   who.agent.post(`/api/requests/${id}/transitions`).send(body);
@@ -22,11 +25,16 @@ async function takenJob() {
 }
 
 async function saveReadings(id: string, gradePercent: number, note?: string) {
-  await cast.crew.agent.post(`/api/crew/jobs/${id}/as-built`).send({ readings: [{ stationFt: 5, gradePercent }], note }).expect(201);
+  await cast.crew.agent
+    .post(`/api/crew/jobs/${id}/as-built`)
+    .send({ readings: [{ stationFt: 5, gradePercent }], note })
+    .expect(201);
 }
 
-const myJob = async (id: string) => (await cast.crew.agent.get('/api/crew/my-jobs').expect(200)).body.jobs
-  .find((j: { requestId: string }) => j.requestId === id) as { startedAt: string | null; builtAt: string | null };
+const myJob = async (id: string) =>
+  (await cast.crew.agent.get('/api/crew/my-jobs').expect(200)).body.jobs.find(
+    (j: { requestId: string }) => j.requestId === id,
+  ) as { startedAt: string | null; builtAt: string | null };
 
 describe('the generic status endpoint does what the crew’s own endpoints do', () => {
   it('records when work started and when the job was built, as "my jobs" shows them', async () => {
@@ -47,12 +55,16 @@ describe('failing as-built readings stay on the record to the close', () => {
     await cast.crew.agent.post(`/api/crew/jobs/${id}/start`).send({ expectedVersion: version }).expect(200);
     await saveReadings(id, 6.5);
     for (const note of [undefined, '', '   ']) {
-      const bare = await cast.crew.agent.post(`/api/crew/jobs/${id}/mark-built`).send({ expectedVersion: version + 1, note });
+      const bare = await cast.crew.agent
+        .post(`/api/crew/jobs/${id}/mark-built`)
+        .send({ expectedVersion: version + 1, note });
       expect(bare.status, JSON.stringify(bare.body)).toBe(400);
       expect(bare.body.error.fields.note).toMatch(/Why the readings fail/);
     }
-    await cast.crew.agent.post(`/api/crew/jobs/${id}/mark-built`)
-      .send({ expectedVersion: version + 1, note: 'Ledge rock under the landing; the township inspector saw it.' }).expect(200);
+    await cast.crew.agent
+      .post(`/api/crew/jobs/${id}/mark-built`)
+      .send({ expectedVersion: version + 1, note: 'Ledge rock under the landing; the township inspector saw it.' })
+      .expect(200);
 
     for (const note of [undefined, '  ']) {
       const silent = await move(cast.staff, id, { action: 'close', expectedVersion: version + 2, note });
@@ -61,7 +73,11 @@ describe('failing as-built readings stay on the record to the close', () => {
     }
     const [still] = await t.ctx.db.select({ status: requests.status }).from(requests).where(eq(requests.id, id));
     expect(still.status).toBe('built');
-    const closed = await move(cast.staff, id, { action: 'close', expectedVersion: version + 2, note: 'Township accepted the landing as built.' });
+    const closed = await move(cast.staff, id, {
+      action: 'close',
+      expectedVersion: version + 2,
+      note: 'Township accepted the landing as built.',
+    });
     expect(closed.status, JSON.stringify(closed.body)).toBe(200);
   });
 
@@ -69,30 +85,48 @@ describe('failing as-built readings stay on the record to the close', () => {
     const { id, version } = await takenJob();
     await cast.crew.agent.post(`/api/crew/jobs/${id}/start`).send({ expectedVersion: version }).expect(200);
     await saveReadings(id, 3.5);
-    await cast.crew.agent.post(`/api/crew/jobs/${id}/mark-built`).send({ expectedVersion: version + 1 }).expect(200);
+    await cast.crew.agent
+      .post(`/api/crew/jobs/${id}/mark-built`)
+      .send({ expectedVersion: version + 1 })
+      .expect(200);
     await move(cast.staff, id, { action: 'close', expectedVersion: version + 2 }).expect(200);
   });
 });
 
 describe('the release note is for the crews', () => {
   it('reaches the crew leads but neither the owner’s e-mail nor the owner’s history', async () => {
-    const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'permit_granted', permitReference: 'HT-ACC-5120' });
+    const row = await createRequestRow(t.ctx.db, {
+      applicantId: cast.applicant.id,
+      status: 'permit_granted',
+      permitReference: 'HT-ACC-5120',
+    });
     await createGradeCheck(t.ctx.db, { requestId: row.id, createdById: cast.staff.id });
     const note = 'Gate code 4417; the neighbour’s dog is loose in the mornings.';
     await move(cast.staff, row.id, { action: 'release', expectedVersion: row.version, note }).expect(200);
 
-    const owner = await t.ctx.db.select().from(emails).where(and(eq(emails.requestId, row.id), eq(emails.toAddress, cast.applicant.email)));
+    const owner = await t.ctx.db
+      .select()
+      .from(emails)
+      .where(and(eq(emails.requestId, row.id), eq(emails.toAddress, cast.applicant.email)));
     expect(owner).toHaveLength(1);
     expect(owner[0].textBody).toContain('Ready for a crew');
     expect(owner[0].textBody).not.toContain('Gate code');
     expect(owner[0].htmlBody).not.toContain('Gate code');
-    const crew = await t.ctx.db.select().from(emails).where(and(eq(emails.requestId, row.id), eq(emails.toAddress, cast.crew.email)));
+    const crew = await t.ctx.db
+      .select()
+      .from(emails)
+      .where(and(eq(emails.requestId, row.id), eq(emails.toAddress, cast.crew.email)));
     expect(crew[0].textBody).toContain(note);
 
-    const ownerEvents = (await cast.applicant.agent.get(`/api/requests/${row.id}/events`).expect(200)).body.events as { note: string; toStatus: string | null }[];
+    const ownerEvents = (await cast.applicant.agent.get(`/api/requests/${row.id}/events`).expect(200)).body.events as {
+      note: string;
+      toStatus: string | null;
+    }[];
     expect(ownerEvents.some((e) => e.toStatus === 'released')).toBe(true);
     expect(JSON.stringify(ownerEvents)).not.toContain('Gate code');
-    const officeEvents = (await cast.staff.agent.get(`/api/requests/${row.id}/events`).expect(200)).body.events as { note: string }[];
+    const officeEvents = (await cast.staff.agent.get(`/api/requests/${row.id}/events`).expect(200)).body.events as {
+      note: string;
+    }[];
     expect(officeEvents.some((e) => e.note === note)).toBe(true);
   });
 });

@@ -27,16 +27,31 @@ afterAll(async () => {
 });
 
 async function uploaded(confirm: boolean, hoursAgo: number, put = true) {
-  const announced = await owner.post(`/api/requests/${requestId}/photos`).send({ fileName: 'yard.png', contentType: 'image/png', sizeBytes: png.length }).expect(201);
-  if (put) await fetch(announced.body.upload.url, { method: 'PUT', body: new Uint8Array(png), headers: { 'content-type': 'image/png' } });
+  const announced = await owner
+    .post(`/api/requests/${requestId}/photos`)
+    .send({ fileName: 'yard.png', contentType: 'image/png', sizeBytes: png.length })
+    .expect(201);
+  if (put)
+    await fetch(announced.body.upload.url, {
+      method: 'PUT',
+      body: new Uint8Array(png),
+      headers: { 'content-type': 'image/png' },
+    });
   const id = announced.body.photo.id as string;
   if (confirm) await owner.post(`/api/requests/${requestId}/photos/${id}/confirm`).send({}).expect(200);
-  await t.ctx.db.update(photos).set({ createdAt: sql`now() - make_interval(hours => ${hoursAgo})` }).where(eq(photos.id, id));
+  await t.ctx.db
+    .update(photos)
+    .set({ createdAt: sql`now() - make_interval(hours => ${hoursAgo})` })
+    .where(eq(photos.id, id));
   const [row] = await t.ctx.db.select().from(photos).where(eq(photos.id, id));
   return row;
 }
 
-const inStorage = (key: string) => t.ctx.s3.send(new HeadObjectCommand({ Bucket: t.env.S3_BUCKET, Key: key })).then(() => true, () => false);
+const inStorage = (key: string) =>
+  t.ctx.s3.send(new HeadObjectCommand({ Bucket: t.env.S3_BUCKET, Key: key })).then(
+    () => true,
+    () => false,
+  );
 const rowOf = async (id: string) => (await t.ctx.db.select().from(photos).where(eq(photos.id, id)))[0];
 
 describe('the clean-up of uploads that were never confirmed', () => {

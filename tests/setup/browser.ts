@@ -13,8 +13,13 @@ export async function launchBrowser(): Promise<{ browser: Browser; close(): Prom
     executablePath: chromiumPath,
     headless: true,
     args: [
-      '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking',
-      '--disable-component-update', '--disable-sync',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
     ],
   });
   return { browser, close: () => browser.close() };
@@ -61,10 +66,13 @@ export async function saveScreenshot(page: Page, name: string) {
 export async function siteJpeg(page: Page, lat: number, lng: number) {
   const dataUrl = await page.evaluate(() => {
     const canvas = document.createElement('canvas');
-    canvas.width = 64; canvas.height = 40;
+    canvas.width = 64;
+    canvas.height = 40;
     const g = canvas.getContext('2d')!;
-    g.fillStyle = '#7a9a6a'; g.fillRect(0, 0, 64, 40);
-    g.fillStyle = '#4b4b4b'; g.fillRect(0, 26, 64, 14);
+    g.fillStyle = '#7a9a6a';
+    g.fillRect(0, 0, 64, 40);
+    g.fillStyle = '#4b4b4b';
+    g.fillRect(0, 26, 64, 14);
     return canvas.toDataURL('image/jpeg', 0.9);
   });
   return withGpsExif(Buffer.from(dataUrl.split(',')[1], 'base64'), lat, lng);

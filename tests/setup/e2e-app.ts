@@ -18,7 +18,13 @@ export async function startE2eApp(stack: TestStack, databaseUrl: string) {
   const seed = createDb(databaseUrl, { max: 1 });
   await seedDemo(seed.db);
   await seed.pool.end();
-  const env = parseEnv({ ...stack.env, ...relaxedRateLimits, DATABASE_URL: databaseUrl, NODE_ENV: 'test', LOG_LEVEL: 'warn' });
+  const env = parseEnv({
+    ...stack.env,
+    ...relaxedRateLimits,
+    DATABASE_URL: databaseUrl,
+    NODE_ENV: 'test',
+    LOG_LEVEL: 'warn',
+  });
   const ctx = createContext(env);
   const workers = await startWorkers(ctx);
   const app = createApp(ctx, { clientDist: dist });

@@ -15,7 +15,13 @@ import { freePort } from './free-port';
 const serverEntry = fileURLToPath(new URL('../../server/index.ts', import.meta.url));
 const officeEmail = 'fault.office@gradepass.test';
 
-export interface Instance { origin: string; child: ChildProcess; log: string; cookie: string; killed: boolean }
+export interface Instance {
+  origin: string;
+  child: ChildProcess;
+  log: string;
+  cookie: string;
+  killed: boolean;
+}
 
 /**
  * A PostgreSQL, the stand-ins and app instances (each a process of its own running `server/index.ts` with workers
@@ -32,14 +38,23 @@ export async function startRig(options: { instances: number; env?: Record<string
   await ensureDatabase(pg.url('postgres'), 'gradepass');
   await applyMigrations(databaseUrl);
   // The rig's own pool writes mail and reads outcomes; it must ride out the faults it causes, like the app.
-  const { db, pool } = createDb(databaseUrl, { max: 2, timeouts: { connectMs: 1_000, statementMs: 2_000, idleInTransactionMs: 5_000 } });
+  const { db, pool } = createDb(databaseUrl, {
+    max: 2,
+    timeouts: { connectMs: 1_000, statementMs: 2_000, idleInTransactionMs: 5_000 },
+  });
   await ensurePerson(db, { email: officeEmail, name: 'Fault Office', role: 'staff' });
 
   const ports = await Promise.all(Array.from({ length: options.instances }, () => freePort()));
   const origins = ports.map((p) => `http://127.0.0.1:${p}`);
   const standIns: StandIns = await startStandIns({
-    dataDir: path.join(dir, 'fakes'), bucket: 'faults', allowedOrigins: origins,
-    oauth: { ...devOAuthClient, redirectUris: origins.map((o) => `${o}/auth/google/callback`), identities: [{ email: officeEmail, name: 'Fault Office' }] },
+    dataDir: path.join(dir, 'fakes'),
+    bucket: 'faults',
+    allowedOrigins: origins,
+    oauth: {
+      ...devOAuthClient,
+      redirectUris: origins.map((o) => `${o}/auth/google/callback`),
+      identities: [{ email: officeEmail, name: 'Fault Office' }],
+    },
   });
 
   const instances: Instance[] = [];
@@ -47,8 +62,12 @@ export async function startRig(options: { instances: number; env?: Record<string
     const origin = origins[index];
     const log = path.join(dir, `instance-${index}.log`);
     const env = {
-      ...process.env, ...standInEnv(standIns, { appOrigin: origin, port: ports[index], databaseUrl }),
-      NODE_ENV: 'production', LOG_LEVEL: 'warn', RUN_WORKERS: 'true', AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
+      ...process.env,
+      ...standInEnv(standIns, { appOrigin: origin, port: ports[index], databaseUrl }),
+      NODE_ENV: 'production',
+      LOG_LEVEL: 'warn',
+      RUN_WORKERS: 'true',
+      AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
       ...options.env,
     };
     const child = spawn(process.execPath, ['--import', 'tsx', serverEntry], { env, stdio: ['ignore', 'pipe', 'pipe'] });
@@ -64,13 +83,21 @@ export async function startRig(options: { instances: number; env?: Record<string
 
   const postgresPids = () => {
     const main = Number(readFileSync(path.join(pgDir, 'data', 'postmaster.pid'), 'utf8').split('\n')[0]);
-    const children = spawnSync('ps', ['-o', 'pid=', '--ppid', String(main)], { encoding: 'utf8' }).stdout
-      .split('\n').map((l) => Number(l.trim())).filter((n) => n > 0);
+    const children = spawnSync('ps', ['-o', 'pid=', '--ppid', String(main)], { encoding: 'utf8' })
+      .stdout.split('\n')
+      .map((l) => Number(l.trim()))
+      .filter((n) => n > 0);
     return [main, ...children];
   };
 
   return {
-    dir, databaseUrl, db, pool, standIns, instances, startInstance,
+    dir,
+    databaseUrl,
+    db,
+    pool,
+    standIns,
+    instances,
+    startInstance,
     /** Stops PostgreSQL (fast shutdown: every connection is ended with 57P01), waits, starts it again. */
     async restartPostgres(downMs: number) {
       pg.stop();
@@ -81,7 +108,11 @@ export async function startRig(options: { instances: number; env?: Record<string
     async freezePostgres(forMs: number) {
       const pids = postgresPids();
       for (const pid of pids) process.kill(pid, 'SIGSTOP');
-      try { await sleep(forMs); } finally { for (const pid of pids) process.kill(pid, 'SIGCONT'); }
+      try {
+        await sleep(forMs);
+      } finally {
+        for (const pid of pids) process.kill(pid, 'SIGCONT');
+      }
     },
     /** Instances that ended without being asked to. */
     died: () => instances.filter((i) => !i.killed && (i.child.exitCode !== null || i.child.signalCode !== null)),
@@ -114,7 +145,11 @@ export async function answer(url: string, cookie?: string): Promise<number> {
 
 export const sleep = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
 
-export async function until<T>(what: string, probe: () => Promise<T | undefined | false>, timeoutMs = 30_000): Promise<T> {
+export async function until<T>(
+  what: string,
+  probe: () => Promise<T | undefined | false>,
+  timeoutMs = 30_000,
+): Promise<T> {
   const end = Date.now() + timeoutMs;
   for (;;) {
     const value = await probe().catch(() => undefined);

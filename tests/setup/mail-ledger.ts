@@ -24,7 +24,15 @@ export async function writeEmails(db: Db, count: number, tag: string, gapMs = 0)
   for (let i = 0; i < count; i += 1) {
     for (;;) {
       try {
-        const [row] = await enqueueEmails(db, [{ to: `owner-${i}@example.test`, template: 'fault-check', subject: `${tag} ${i + 1}`, text: `Message ${i + 1} of ${count}.`, html: `<p>Message ${i + 1} of ${count}.</p>` }]);
+        const [row] = await enqueueEmails(db, [
+          {
+            to: `owner-${i}@example.test`,
+            template: 'fault-check',
+            subject: `${tag} ${i + 1}`,
+            text: `Message ${i + 1} of ${count}.`,
+            html: `<p>Message ${i + 1} of ${count}.</p>`,
+          },
+        ]);
         ids.push(row.id);
         break;
       } catch (error) {
@@ -37,7 +45,12 @@ export async function writeEmails(db: Db, count: number, tag: string, gapMs = 0)
   return ids;
 }
 
-export interface Tally { tried: number; delivered: number; lost: number; doubled: number }
+export interface Tally {
+  tried: number;
+  delivered: number;
+  lost: number;
+  doubled: number;
+}
 
 /** Waits until every row has reached the catcher (or the time is up), then a little longer for any late double. */
 export async function settle(mailWebUrl: string, ids: string[], timeoutMs: number, graceMs = 2_000): Promise<Tally> {

@@ -37,7 +37,15 @@ export async function dropTestDatabase(databaseUrl: string) {
 
 export function testEnv(databaseUrl: string, overrides: Record<string, string> = {}) {
   const stack = inject('stack');
-  return { ...stack.env, ...relaxedRateLimits, DATABASE_URL: databaseUrl, NODE_ENV: 'test', LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent', RUN_WORKERS: 'false', ...overrides };
+  return {
+    ...stack.env,
+    ...relaxedRateLimits,
+    DATABASE_URL: databaseUrl,
+    NODE_ENV: 'test',
+    LOG_LEVEL: process.env.TEST_LOG_LEVEL ?? 'silent',
+    RUN_WORKERS: 'false',
+    ...overrides,
+  };
 }
 
 export async function createTestApp(overrides: Record<string, string> = {}): Promise<TestApp> {
@@ -46,7 +54,10 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
   const ctx = createContext(parseEnv(env));
   const app = createApp(ctx);
   return {
-    ctx, app, databaseUrl, env,
+    ctx,
+    app,
+    databaseUrl,
+    env,
     close: async () => {
       await closeContext(ctx);
       await closeDesignPool();

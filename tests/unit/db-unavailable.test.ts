@@ -7,7 +7,10 @@ const wrapped = (cause: Error) => Object.assign(new Error('Failed query: select 
 
 describe('which errors mean the database is away (answered 503)', () => {
   it.each([
-    ['a restart or failover ending the connection (57P01)', pgError('57P01', 'terminating connection due to administrator command')],
+    [
+      'a restart or failover ending the connection (57P01)',
+      pgError('57P01', 'terminating connection due to administrator command'),
+    ],
     ['a server still starting (57P03)', pgError('57P03', 'the database system is starting up')],
     ['a refused connection', pgError('ECONNREFUSED', 'connect ECONNREFUSED 127.0.0.1:5432')],
     ['a dropped connection', new Error('Connection terminated unexpectedly')],

@@ -74,9 +74,11 @@ export function folderLoops(graph: Map<string, Map<string, string[]>>): string[]
 }
 
 function describeLoop(graph: Map<string, Map<string, string[]>>, loop: string[]): string {
-  const lines = loop.flatMap((from) => [...(graph.get(from) ?? [])]
-    .filter(([to]) => loop.includes(to))
-    .map(([to, files]) => `  ${from} -> ${to}: ${files.join('; ')}`));
+  const lines = loop.flatMap((from) =>
+    [...(graph.get(from) ?? [])]
+      .filter(([to]) => loop.includes(to))
+      .map(([to, files]) => `  ${from} -> ${to}: ${files.join('; ')}`),
+  );
   return `loop between ${loop.join(', ')}\n${lines.join('\n')}`;
 }
 

@@ -10,7 +10,10 @@ import { profileFromRuns } from '../engine/fixtures';
 describe('the design proposal inside a grade check', () => {
   it('meets the break at the road edge the check was given: road 3% down to the edge, ground rising 11%', async () => {
     const rules = { ...commonRuralTemplate, landing: { lengthFt: 20, minGradePercent: -12, maxGradePercent: 12 } };
-    const existing = profileFromRuns([[20, 11], [30, 11]]);
+    const existing = profileFromRuns([
+      [20, 11],
+      [30, 11],
+    ]);
     const inputs = gradeCheckInputsSchema.parse({
       profile: existing,
       roadSide: { roadCrossSlopePercent: 3 },

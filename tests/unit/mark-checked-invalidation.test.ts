@@ -17,10 +17,31 @@ afterEach(() => {
 
 describe('marking a request checked', () => {
   it('refreshes that request, its history, the queue and its checks, and leaves every other query alone', async () => {
-    vi.stubGlobal('fetch', vi.fn(() => Promise.resolve(new Response(JSON.stringify({ request: { id: requestId, status: 'checked', version: 4 } }), { status: 200, headers: { 'Content-Type': 'application/json' } }))));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(() =>
+        Promise.resolve(
+          new Response(JSON.stringify({ request: { id: requestId, status: 'checked', version: 4 } }), {
+            status: 200,
+            headers: { 'Content-Type': 'application/json' },
+          }),
+        ),
+      ),
+    );
     const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
-    const touched = [requestKeys.one(requestId), eventKeys.ofRequest(requestId), queueKeys.list({}), getGradeChecksQueryOptions(requestId).queryKey];
-    const untouched = [requestKeys.one(otherId), messageKeys.ofRequest(otherId), peopleKeys.list({}), emailKeys.list({}), ['me']];
+    const touched = [
+      requestKeys.one(requestId),
+      eventKeys.ofRequest(requestId),
+      queueKeys.list({}),
+      getGradeChecksQueryOptions(requestId).queryKey,
+    ];
+    const untouched = [
+      requestKeys.one(otherId),
+      messageKeys.ofRequest(otherId),
+      peopleKeys.list({}),
+      emailKeys.list({}),
+      ['me'],
+    ];
     for (const key of [...touched, ...untouched]) client.setQueryData(key, { cached: true });
     const wrapper = ({ children }: { children: ReactNode }) => h(QueryClientProvider, { client }, children);
     const { result } = renderHook(() => useMarkChecked(), { wrapper });

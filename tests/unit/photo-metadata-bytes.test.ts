@@ -36,7 +36,12 @@ describe('PNG photos lose their metadata chunks (PNG specification: ancillary ch
   });
 
   it('keeps the chunks that change how the picture looks', () => {
-    const srgb = Buffer.concat([Buffer.from([0, 0, 0, 1]), Buffer.from('sRGB', 'latin1'), Buffer.from([0]), Buffer.from([0xae, 0xce, 0x1c, 0xe9])]);
+    const srgb = Buffer.concat([
+      Buffer.from([0, 0, 0, 1]),
+      Buffer.from('sRGB', 'latin1'),
+      Buffer.from([0]),
+      Buffer.from([0xae, 0xce, 0x1c, 0xe9]),
+    ]);
     const withColour = Buffer.concat([tagged.subarray(0, 33), srgb, tagged.subarray(33)]);
     expect(pngChunks(pngWithoutMetadata(withColour)!).map((c) => c.type)).toEqual(['IHDR', 'sRGB', 'IDAT', 'IEND']);
   });

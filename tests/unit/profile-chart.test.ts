@@ -4,18 +4,33 @@ import { haulEstimate, loadsText } from '@shared/charts/cut-fill-table';
 import { profileChartSvg, type ProfileChartInput } from '@shared/charts/profile-chart';
 
 const chart = (ground: ProfileChartInput['ground'], roadEdgeStationFt = ground[0].stationFt): ProfileChartInput => ({
-  ground, roadEdgeStationFt, landing: { lengthFt: 20, minGradePercent: -4, maxGradePercent: 4 }, maxGradePercent: 15,
-  checked: 'ground', failingStationsFt: [], scrapePoints: [],
+  ground,
+  roadEdgeStationFt,
+  landing: { lengthFt: 20, minGradePercent: -4, maxGradePercent: 4 },
+  maxGradePercent: 15,
+  checked: 'ground',
+  failingStationsFt: [],
+  scrapePoints: [],
 });
 
 describe('the profile chart draws any profile the engine accepts, and finishes', () => {
   it('draws a profile only a hair long', () => {
-    const svg = profileChartSvg(chart([{ stationFt: 0, elevationFt: 100 }, { stationFt: 1e-300, elevationFt: 100 }]));
+    const svg = profileChartSvg(
+      chart([
+        { stationFt: 0, elevationFt: 100 },
+        { stationFt: 1e-300, elevationFt: 100 },
+      ]),
+    );
     expect(svg.startsWith('<svg')).toBe(true);
   });
 
   it('draws a short profile far along the road, where a step is lost in the rounding of the station', () => {
-    const svg = profileChartSvg(chart([{ stationFt: 100_000, elevationFt: 100 }, { stationFt: 100_000 + 1.5e-11, elevationFt: 100 }]));
+    const svg = profileChartSvg(
+      chart([
+        { stationFt: 100_000, elevationFt: 100 },
+        { stationFt: 100_000 + 1.5e-11, elevationFt: 100 },
+      ]),
+    );
     expect(svg.match(/<line /g)!.length).toBeLessThan(200);
   });
 
@@ -29,7 +44,10 @@ describe('the profile chart draws any profile the engine accepts, and finishes',
 });
 
 describe('the haul estimate beside the cut/fill table', () => {
-  const proposal = (cutCuYd: number, fillCuYd: number) => ({ feasible: true, profile: [], cutFillByStation: [], cutCuYd, fillCuYd }) as unknown as Parameters<typeof haulEstimate>[0];
+  const proposal = (cutCuYd: number, fillCuYd: number) =>
+    ({ feasible: true, profile: [], cutFillByStation: [], cutCuYd, fillCuYd }) as unknown as Parameters<
+      typeof haulEstimate
+    >[0];
 
   it('counts loads for a real job and says so in words', () => {
     const haul = haulEstimate(proposal(34, 0), { soil: 'loam', truckCuYd: 10 });

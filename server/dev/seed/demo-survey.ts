@@ -10,7 +10,8 @@ import { jurisdictions, ruleProfileVersions } from '../../db/schema';
 export function demoGround(landingRisePercent: number, drivewayRisePercent: number, lengthFt = 80): ProfilePoint[] {
   const points: ProfilePoint[] = [];
   for (let station = 0; station <= lengthFt; station += station < 20 ? 10 : 20) {
-    const rise = Math.min(station, 20) * landingRisePercent / 100 + Math.max(station - 20, 0) * drivewayRisePercent / 100;
+    const rise =
+      (Math.min(station, 20) * landingRisePercent) / 100 + (Math.max(station - 20, 0) * drivewayRisePercent) / 100;
     points.push({ stationFt: station, elevationFt: Math.round((100 + rise) * 100) / 100 });
   }
   return points;
@@ -22,7 +23,13 @@ const gradeBetween = (points: ProfilePoint[], from: number, to: number) => {
   return Math.round(((b.elevationFt - a.elevationFt) / (to - from)) * 10_000) / 100;
 };
 
-export interface DemoSite { ground: ProfilePoint[]; speedMph: number; sightLeftFt: number; sightRightFt: number; roadGradePercent: number }
+export interface DemoSite {
+  ground: ProfilePoint[];
+  speedMph: number;
+  sightLeftFt: number;
+  sightRightFt: number;
+  roadGradePercent: number;
+}
 
 /**
  * The inputs the office's check screen would save for a demo site: the least-earth design applied when the
@@ -32,30 +39,56 @@ export async function demoCheckInputs(rules: RuleProfile, site: DemoSite) {
   const proposal = await proposeProfile({ existing: site.ground, roadEdgeElevationFt: 100 }, rules);
   const design = proposal.feasible ? proposal.profile : site.ground;
   return {
-    profile: { kind: 'elevations', points: design }, roadEdgeStationFt: 0,
-    culvert: { diameterIn: 18, manningN: 0.024, inletInvertFt: 97.3, outletInvertFt: 97.0, surfaceElevationFt: 100, topWidthFt: 12, sideSlopeHPerV: 2, designFlowCfs: 6 },
+    profile: { kind: 'elevations', points: design },
+    roadEdgeStationFt: 0,
+    culvert: {
+      diameterIn: 18,
+      manningN: 0.024,
+      inletInvertFt: 97.3,
+      outletInvertFt: 97.0,
+      surfaceElevationFt: 100,
+      topWidthFt: 12,
+      sideSlopeHPerV: 2,
+      designFlowCfs: 6,
+    },
     sight: { speedMph: site.speedMph, measuredLeftFt: site.sightLeftFt, measuredRightFt: site.sightRightFt },
     geometry: { widthFt: 12 },
     road: { gradePercent: site.roadGradePercent, edgeElevationFt: 100 },
     laser: {
-      originElevationFt: 100, roadGradePercent: site.roadGradePercent, landingGradePercent: gradeBetween(design, 0, 20), landingLengthFt: 20,
-      drivewayGradePercent: gradeBetween(design, 20, 40), receiverOffsetFt: 6,
+      originElevationFt: 100,
+      roadGradePercent: site.roadGradePercent,
+      landingGradePercent: gradeBetween(design, 0, 20),
+      landingLengthFt: 20,
+      drivewayGradePercent: gradeBetween(design, 20, 40),
+      receiverOffsetFt: 6,
       stakes: [
         { label: 'Landing left', offsetFt: -6, distanceFt: 10, rodReadingFt: 5.55 },
         { label: 'Landing end', offsetFt: 0, distanceFt: 20, rodReadingFt: 5.9 },
       ],
     },
-    design: { existing: site.ground, roadEdgeElevationFt: 100, applied: proposal.feasible, haul: { soil: 'loam', truckCuYd: 10 } },
+    design: {
+      existing: site.ground,
+      roadEdgeElevationFt: 100,
+      applied: proposal.feasible,
+      haul: { soil: 'loam', truckCuYd: 10 },
+    },
   };
 }
 
 /** The current published rule profile of a demo jurisdiction, stamped the way saved checks name it. */
 export async function currentRules(tx: DbOrTx, slug: string) {
-  const [row] = await tx.select({ j: jurisdictions, v: ruleProfileVersions }).from(jurisdictions)
+  const [row] = await tx
+    .select({ j: jurisdictions, v: ruleProfileVersions })
+    .from(jurisdictions)
     .innerJoin(ruleProfileVersions, eq(ruleProfileVersions.id, jurisdictions.currentVersionId))
     .where(eq(jurisdictions.slug, slug));
   if (!row) return null;
-  const rules: RuleProfile = { ...ruleProfileSchema.parse(row.v.profile), id: row.v.id, version: row.v.version, jurisdictionName: row.j.name };
+  const rules: RuleProfile = {
+    ...ruleProfileSchema.parse(row.v.profile),
+    id: row.v.id,
+    version: row.v.version,
+    jurisdictionName: row.j.name,
+  };
   return { jurisdictionId: row.j.id, versionId: row.v.id, rules };
 }
 
@@ -66,5 +99,10 @@ export async function currentRules(tx: DbOrTx, slug: string) {
 export async function demoCheck(rules: RuleProfile, site: DemoSite) {
   const inputs = parseGradeCheckInputs(await demoCheckInputs(rules, site));
   const results = await runGradeCheck(inputs, rules, proposeProfile);
-  return { ...toStoredColumns(inputs, results), passed: results.report.passes, summary: plainSummary(inputs, results, rules), engineVersion: results.report.engineVersion };
+  return {
+    ...toStoredColumns(inputs, results),
+    passed: results.report.passes,
+    summary: plainSummary(inputs, results, rules),
+    engineVersion: results.report.engineVersion,
+  };
 }

@@ -10,7 +10,10 @@ import { seedJurisdictions } from './jurisdictions';
 export async function seedDemo(db: Db) {
   await db.transaction(async (tx) => {
     for (const person of demoPeople) {
-      const [found] = await tx.select({ id: users.id }).from(users).where(sql`lower(${users.email}) = ${person.email}`);
+      const [found] = await tx
+        .select({ id: users.id })
+        .from(users)
+        .where(sql`lower(${users.email}) = ${person.email}`);
       if (!found) await tx.insert(users).values(person);
     }
     await seedJurisdictions(tx);

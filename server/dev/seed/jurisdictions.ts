@@ -3,25 +3,42 @@ import { passengerCarPreset, ruleProfileSchema, type RuleProfileInput } from '@s
 import type { DbOrTx } from '../../db/client';
 import { jurisdictions, ruleProfileVersions } from '../../db/schema';
 
-interface DemoJurisdiction { slug: string; name: string; authority: string; profile: RuleProfileInput }
+interface DemoJurisdiction {
+  slug: string;
+  name: string;
+  authority: string;
+  profile: RuleProfileInput;
+}
 
 /**
  * Two invented road authorities whose rules differ where it matters: a landing surveyed at 5% passes the town's
  * 6% limit and fails the county's 4%. Every value carries the (invented) clause it comes from.
  */
 const marrow: DemoJurisdiction = {
-  slug: 'marrow-county', name: 'Marrow County', authority: 'Marrow County Highway Department',
+  slug: 'marrow-county',
+  name: 'Marrow County',
+  authority: 'Marrow County Highway Department',
   profile: {
-    name: 'Marrow County driveway access rules', units: 'us',
+    name: 'Marrow County driveway access rules',
+    units: 'us',
     landing: { lengthFt: 20, minGradePercent: -2, maxGradePercent: 4 },
-    maxGradePercent: 15, minDrainageGradePercent: 0.5, maxGradeChangePercent: 11,
+    maxGradePercent: 15,
+    minDrainageGradePercent: 0.5,
+    maxGradeChangePercent: 11,
     designVehicle: passengerCarPreset,
     culvert: { minDiameterIn: 15, minCoverIn: 12, minLengthFt: 24, lengthIncrementFt: 2, maxHeadwaterToDiameter: 1.5 },
     sight: { basis: 'intersection', designSpeedMph: 45, vehicle: 'passenger' },
-    geometry: { minWidthFt: 12, maxWidthFt: 24, minFlareRadiusFt: 10, minDistanceToIntersectionFt: 100, minDistanceToPropertyLineFt: 5 },
+    geometry: {
+      minWidthFt: 12,
+      maxWidthFt: 24,
+      minFlareRadiusFt: 10,
+      minDistanceToIntersectionFt: 100,
+      minDistanceToPropertyLineFt: 5,
+    },
     asBuilt: { gradeTolerancePercent: 0.5, elevationToleranceFt: 0.1 },
     sources: {
-      'landing.lengthFt': 'Marrow County Driveway Access Standards (2019), sec. 3.2: landing of 20 ft from the edge of pavement',
+      'landing.lengthFt':
+        'Marrow County Driveway Access Standards (2019), sec. 3.2: landing of 20 ft from the edge of pavement',
       'landing.minGradePercent': 'Access Standards sec. 3.2: the landing may fall toward the road no more than 2%',
       'landing.maxGradePercent': 'Access Standards sec. 3.2: the landing may rise no more than 4%',
       maxGradePercent: 'Access Standards sec. 3.4: 15% maximum driveway grade',
@@ -48,15 +65,25 @@ const marrow: DemoJurisdiction = {
 };
 
 const elderbrook: DemoJurisdiction = {
-  slug: 'town-of-elderbrook', name: 'Town of Elderbrook', authority: 'Elderbrook Public Works',
+  slug: 'town-of-elderbrook',
+  name: 'Town of Elderbrook',
+  authority: 'Elderbrook Public Works',
   profile: {
-    name: 'Elderbrook driveway permit rules', units: 'us',
+    name: 'Elderbrook driveway permit rules',
+    units: 'us',
     landing: { lengthFt: 15, minGradePercent: -6, maxGradePercent: 6 },
-    maxGradePercent: 18, maxGradeChangePercent: 14,
+    maxGradePercent: 18,
+    maxGradeChangePercent: 14,
     designVehicle: passengerCarPreset,
     culvert: { minDiameterIn: 12, minCoverIn: 9, lengthIncrementFt: 2, maxHeadwaterToDiameter: 2 },
     sight: { basis: 'stopping', designSpeedMph: 30, vehicle: 'passenger' },
-    geometry: { minWidthFt: 10, maxWidthFt: 30, minFlareRadiusFt: 5, minDistanceToIntersectionFt: 50, minDistanceToPropertyLineFt: 3 },
+    geometry: {
+      minWidthFt: 10,
+      maxWidthFt: 30,
+      minFlareRadiusFt: 5,
+      minDistanceToIntersectionFt: 50,
+      minDistanceToPropertyLineFt: 3,
+    },
     asBuilt: { gradeTolerancePercent: 1, elevationToleranceFt: 0.15 },
     sources: {
       'landing.lengthFt': 'Town Code ch. 212, sec. 7(b): 15 ft landing',
@@ -90,10 +117,21 @@ export async function seedJurisdictions(db: DbOrTx) {
   for (const j of demoJurisdictions) {
     const [found] = await db.select({ id: jurisdictions.id }).from(jurisdictions).where(eq(jurisdictions.slug, j.slug));
     if (found) continue;
-    const [row] = await db.insert(jurisdictions).values({ slug: j.slug, name: j.name, authority: j.authority }).returning();
-    const [version] = await db.insert(ruleProfileVersions).values({
-      jurisdictionId: row.id, version: 1, status: 'published', profile: {}, changeNote: 'First published rules (demo authority)', publishedAt: new Date(),
-    }).returning();
+    const [row] = await db
+      .insert(jurisdictions)
+      .values({ slug: j.slug, name: j.name, authority: j.authority })
+      .returning();
+    const [version] = await db
+      .insert(ruleProfileVersions)
+      .values({
+        jurisdictionId: row.id,
+        version: 1,
+        status: 'published',
+        profile: {},
+        changeNote: 'First published rules (demo authority)',
+        publishedAt: new Date(),
+      })
+      .returning();
     const profile = { ...ruleProfileSchema.parse(j.profile), id: version.id, version: 1, jurisdictionName: j.name };
     await db.update(ruleProfileVersions).set({ profile }).where(eq(ruleProfileVersions.id, version.id));
     await db.update(jurisdictions).set({ currentVersionId: version.id }).where(eq(jurisdictions.id, row.id));

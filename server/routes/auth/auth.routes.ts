@@ -10,7 +10,9 @@ export function authRouter(passport: PassportInstance) {
       if (error) {
         // A provider that fails mid-way is not the person's fault: tell them on the sign-in page, keep the detail in the log.
         req.log.warn({ err: error }, 'sign-in callback failed');
-        return res.redirect(`/sign-in?error=${encodeURIComponent('The sign-in provider did not confirm who you are. Please try again.')}`);
+        return res.redirect(
+          `/sign-in?error=${encodeURIComponent('The sign-in provider did not confirm who you are. Please try again.')}`,
+        );
       }
       if (!user) {
         const reason = info?.message ?? 'Sign-in was cancelled or did not finish.';

@@ -1,7 +1,13 @@
 import { Router } from 'express';
 import {
-  acceptJobInputSchema, boardQuerySchema, handBackInputSchema, markBuiltInputSchema, saveAsBuiltInputSchema, scheduleJobInputSchema,
-  startWorkInputSchema, yardInputSchema,
+  acceptJobInputSchema,
+  boardQuerySchema,
+  handBackInputSchema,
+  markBuiltInputSchema,
+  saveAsBuiltInputSchema,
+  scheduleJobInputSchema,
+  startWorkInputSchema,
+  yardInputSchema,
 } from '@shared/crew/crew-inputs';
 import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
@@ -26,36 +32,80 @@ export function crewRouter(ctx: AppContext) {
   const crewOnly = requireRole('crew');
   router.use('/api/crew', requireRole('crew', ...officeRoles));
 
-  router.get('/api/crew/board', handle({ query: boardQuerySchema }, async ({ query }) => listBoard(db, query.sort)));
-  router.get('/api/crew/yard', handle({}, async () => ({ yard: await loadYard(db) })));
-  router.put('/api/crew/yard', requireRole('admin'), handle({ body: yardInputSchema }, async ({ body }) => ({ yard: await saveYard(db, body) })));
-  router.get('/api/crew/my-jobs', crewOnly, handle({}, async ({ user }) => ({ jobs: await listMyJobs(db, user) })));
+  router.get(
+    '/api/crew/board',
+    handle({ query: boardQuerySchema }, async ({ query }) => listBoard(db, query.sort)),
+  );
+  router.get(
+    '/api/crew/yard',
+    handle({}, async () => ({ yard: await loadYard(db) })),
+  );
+  router.put(
+    '/api/crew/yard',
+    requireRole('admin'),
+    handle({ body: yardInputSchema }, async ({ body }) => ({ yard: await saveYard(db, body) })),
+  );
+  router.get(
+    '/api/crew/my-jobs',
+    crewOnly,
+    handle({}, async ({ user }) => ({ jobs: await listMyJobs(db, user) })),
+  );
 
   const job = '/api/crew/jobs/:id';
-  router.get(`${job}/field-sheet`, handle({ params: uuidParam }, async ({ params, user }) => fieldSheet(db, user, params.id)));
-  router.get(`${job}/as-built`, handle({ params: uuidParam }, async ({ params, user }) => asBuiltPage(db, user, params.id)));
+  router.get(
+    `${job}/field-sheet`,
+    handle({ params: uuidParam }, async ({ params, user }) => fieldSheet(db, user, params.id)),
+  );
+  router.get(
+    `${job}/as-built`,
+    handle({ params: uuidParam }, async ({ params, user }) => asBuiltPage(db, user, params.id)),
+  );
 
   // The crew's own addresses for their status changes: each names the action, then goes through the one door.
-  const move = (user: Parameters<typeof changeStatus>[1], id: string, body: TransitionBody) => changeStatus(ctx, user, id, body)
-    .then(({ request }) => ({ request: requestView(request, user) }));
-  router.post(`${job}/accept`, crewOnly, handle({ params: uuidParam, body: acceptJobInputSchema }, async ({ params, body, user }) => (
-    move(user, params.id, { action: 'accept-job', ...body })
-  )));
-  router.post(`${job}/hand-back`, crewOnly, handle({ params: uuidParam, body: handBackInputSchema }, async ({ params, body, user }) => (
-    move(user, params.id, { action: 'hand-back', ...body })
-  )));
-  router.post(`${job}/schedule`, crewOnly, handle({ params: uuidParam, body: scheduleJobInputSchema }, async ({ params, body, user }) => (
-    scheduleJob(ctx, user, params.id, body)
-  )));
-  router.post(`${job}/start`, crewOnly, handle({ params: uuidParam, body: startWorkInputSchema }, async ({ params, body, user }) => (
-    move(user, params.id, { action: 'start-work', ...body })
-  )));
-  router.post(`${job}/as-built`, crewOnly, handle({ params: uuidParam, body: saveAsBuiltInputSchema }, async ({ params, body, user, res }) => {
-    res.status(201);
-    return { set: await saveAsBuiltSet(db, user, params.id, body) };
-  }));
-  router.post(`${job}/mark-built`, crewOnly, handle({ params: uuidParam, body: markBuiltInputSchema }, async ({ params, body, user }) => (
-    move(user, params.id, { action: 'mark-built', ...body })
-  )));
+  const move = (user: Parameters<typeof changeStatus>[1], id: string, body: TransitionBody) =>
+    changeStatus(ctx, user, id, body).then(({ request }) => ({ request: requestView(request, user) }));
+  router.post(
+    `${job}/accept`,
+    crewOnly,
+    handle({ params: uuidParam, body: acceptJobInputSchema }, async ({ params, body, user }) =>
+      move(user, params.id, { action: 'accept-job', ...body }),
+    ),
+  );
+  router.post(
+    `${job}/hand-back`,
+    crewOnly,
+    handle({ params: uuidParam, body: handBackInputSchema }, async ({ params, body, user }) =>
+      move(user, params.id, { action: 'hand-back', ...body }),
+    ),
+  );
+  router.post(
+    `${job}/schedule`,
+    crewOnly,
+    handle({ params: uuidParam, body: scheduleJobInputSchema }, async ({ params, body, user }) =>
+      scheduleJob(ctx, user, params.id, body),
+    ),
+  );
+  router.post(
+    `${job}/start`,
+    crewOnly,
+    handle({ params: uuidParam, body: startWorkInputSchema }, async ({ params, body, user }) =>
+      move(user, params.id, { action: 'start-work', ...body }),
+    ),
+  );
+  router.post(
+    `${job}/as-built`,
+    crewOnly,
+    handle({ params: uuidParam, body: saveAsBuiltInputSchema }, async ({ params, body, user, res }) => {
+      res.status(201);
+      return { set: await saveAsBuiltSet(db, user, params.id, body) };
+    }),
+  );
+  router.post(
+    `${job}/mark-built`,
+    crewOnly,
+    handle({ params: uuidParam, body: markBuiltInputSchema }, async ({ params, body, user }) =>
+      move(user, params.id, { action: 'mark-built', ...body }),
+    ),
+  );
   return router;
 }

@@ -11,14 +11,24 @@ export const updateDocumentInputSchema = z.strictObject({ sharedWithApplicant: z
 
 export function documentsRouter(ctx: AppContext) {
   const router = Router();
-  router.get('/api/requests/:id/documents', handle({ params: uuidParam }, async ({ params, user }) => ({
-    documents: await listDocuments(ctx, user, params.id),
-  })));
-  router.get('/api/requests/:id/documents/:documentId/url', handle({ params: documentParams }, async ({ params, user }) => (
-    documentLink(ctx, user, params.id, params.documentId)
-  )));
-  router.patch('/api/documents/:id', requireRole(...officeRoles), handle({ params: uuidParam, body: updateDocumentInputSchema }, async ({ params, body, user }) => ({
-    document: await setShared(ctx.db, user, params.id, body.sharedWithApplicant),
-  })));
+  router.get(
+    '/api/requests/:id/documents',
+    handle({ params: uuidParam }, async ({ params, user }) => ({
+      documents: await listDocuments(ctx, user, params.id),
+    })),
+  );
+  router.get(
+    '/api/requests/:id/documents/:documentId/url',
+    handle({ params: documentParams }, async ({ params, user }) =>
+      documentLink(ctx, user, params.id, params.documentId),
+    ),
+  );
+  router.patch(
+    '/api/documents/:id',
+    requireRole(...officeRoles),
+    handle({ params: uuidParam, body: updateDocumentInputSchema }, async ({ params, body, user }) => ({
+      document: await setShared(ctx.db, user, params.id, body.sharedWithApplicant),
+    })),
+  );
   return router;
 }

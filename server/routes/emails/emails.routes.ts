@@ -18,9 +18,23 @@ const listEmailsQuery = listEmailsQuerySchema.extend({
 export function emailsRouter({ db }: AppContext) {
   const router = Router();
   router.use('/api/emails', requireRole(...officeRoles));
-  router.get('/api/emails', handle({ query: listEmailsQuery }, async ({ query }) => (await listEmails(db, query)) satisfies EmailLogPage<Date>));
-  router.get('/api/emails/:id', handle({ params: uuidParam }, async ({ params }) => ({ email: (await getEmail(db, params.id)) satisfies EmailDetailView<Date> })));
-  router.post('/api/emails/retry-dead', handle({}, async () => retryAllDead(db)));
-  router.post('/api/emails/:id/retry', handle({ params: uuidParam }, async ({ params }) => ({ email: await retryEmail(db, params.id) })));
+  router.get(
+    '/api/emails',
+    handle({ query: listEmailsQuery }, async ({ query }) => (await listEmails(db, query)) satisfies EmailLogPage<Date>),
+  );
+  router.get(
+    '/api/emails/:id',
+    handle({ params: uuidParam }, async ({ params }) => ({
+      email: (await getEmail(db, params.id)) satisfies EmailDetailView<Date>,
+    })),
+  );
+  router.post(
+    '/api/emails/retry-dead',
+    handle({}, async () => retryAllDead(db)),
+  );
+  router.post(
+    '/api/emails/:id/retry',
+    handle({ params: uuidParam }, async ({ params }) => ({ email: await retryEmail(db, params.id) })),
+  );
   return router;
 }

@@ -14,11 +14,23 @@ export const assignInputSchema = z.strictObject({
 export function queueRouter({ db }: AppContext) {
   const router = Router();
   const office = requireRole(...officeRoles);
-  router.get('/api/queue', office, handle({ query: queueQuerySchema }, async ({ query, user }) => listQueue(db, user, query)));
-  router.get('/api/queue/options', office, handle({}, async () => queueOptions(db)));
-  router.put('/api/requests/:id/assignee', office, handle({ params: uuidParam, body: assignInputSchema }, async ({ params, body, user }) => {
-    const row = await assignRequest(db, user, params.id, body.assigneeId);
-    return { request: { id: row.id, assigneeId: row.assigneeId, version: row.version } };
-  }));
+  router.get(
+    '/api/queue',
+    office,
+    handle({ query: queueQuerySchema }, async ({ query, user }) => listQueue(db, user, query)),
+  );
+  router.get(
+    '/api/queue/options',
+    office,
+    handle({}, async () => queueOptions(db)),
+  );
+  router.put(
+    '/api/requests/:id/assignee',
+    office,
+    handle({ params: uuidParam, body: assignInputSchema }, async ({ params, body, user }) => {
+      const row = await assignRequest(db, user, params.id, body.assigneeId);
+      return { request: { id: row.id, assigneeId: row.assigneeId, version: row.version } };
+    }),
+  );
   return router;
 }

@@ -13,31 +13,58 @@ import { listEvents } from '../../services/requests/timeline.service';
 export function requestsRouter({ db }: AppContext) {
   const router = Router();
 
-  router.post('/api/requests', requireRole('applicant'), handle({}, async ({ user, res }) => {
-    res.status(201);
-    return { request: requestView(await createDraft(db, user), user) };
-  }));
+  router.post(
+    '/api/requests',
+    requireRole('applicant'),
+    handle({}, async ({ user, res }) => {
+      res.status(201);
+      return { request: requestView(await createDraft(db, user), user) };
+    }),
+  );
 
-  router.get('/api/requests/mine', requireRole('applicant'), handle({}, async ({ user }) => ({
-    requests: (await listMine(db, user)).map((row) => ({
-      id: row.id, reference: row.reference, status: row.status, siteAddress: row.siteAddress, roadName: row.roadName,
-      statusChangedAt: row.statusChangedAt, updatedAt: row.updatedAt, expected: expectedOfApplicant(row.status),
-    } satisfies MyRequestRow<Date>)),
-  })));
+  router.get(
+    '/api/requests/mine',
+    requireRole('applicant'),
+    handle({}, async ({ user }) => ({
+      requests: (await listMine(db, user)).map(
+        (row) =>
+          ({
+            id: row.id,
+            reference: row.reference,
+            status: row.status,
+            siteAddress: row.siteAddress,
+            roadName: row.roadName,
+            statusChangedAt: row.statusChangedAt,
+            updatedAt: row.updatedAt,
+            expected: expectedOfApplicant(row.status),
+          }) satisfies MyRequestRow<Date>,
+      ),
+    })),
+  );
 
-  router.patch('/api/requests/:id/draft', requireRole('applicant'), handle({ params: uuidParam, body: saveDraftInputSchema }, async ({ params, body, user }) => ({
-    request: requestView(await saveDraft(db, user, params.id, body), user),
-  })));
+  router.patch(
+    '/api/requests/:id/draft',
+    requireRole('applicant'),
+    handle({ params: uuidParam, body: saveDraftInputSchema }, async ({ params, body, user }) => ({
+      request: requestView(await saveDraft(db, user, params.id, body), user),
+    })),
+  );
 
-  router.get('/api/requests/:id', handle({ params: uuidParam }, async ({ params, user }) => ({
-    request: requestView(await loadVisibleRequest(db, user, params.id), user),
-    documents: await listDocumentViews(db, user, params.id),
-  })));
+  router.get(
+    '/api/requests/:id',
+    handle({ params: uuidParam }, async ({ params, user }) => ({
+      request: requestView(await loadVisibleRequest(db, user, params.id), user),
+      documents: await listDocumentViews(db, user, params.id),
+    })),
+  );
 
-  router.get('/api/requests/:id/events', handle({ params: uuidParam }, async ({ params, user }) => {
-    await loadVisibleRequest(db, user, params.id);
-    return { events: await listEvents(db, user, params.id) } satisfies EventsAnswer<Date>;
-  }));
+  router.get(
+    '/api/requests/:id/events',
+    handle({ params: uuidParam }, async ({ params, user }) => {
+      await loadVisibleRequest(db, user, params.id);
+      return { events: await listEvents(db, user, params.id) } satisfies EventsAnswer<Date>;
+    }),
+  );
 
   return router;
 }

@@ -8,9 +8,12 @@ import { requestView } from '../../services/requests/request-view';
 export function transitionsRouter(ctx: AppContext) {
   const router = Router();
 
-  router.post('/api/requests/:id/transitions', handle({ params: uuidParam, body: transitionInputSchema }, async ({ params, body, user }) => {
-    const { request } = await changeStatus(ctx, user, params.id, body);
-    return { request: requestView(request, user) };
-  }));
+  router.post(
+    '/api/requests/:id/transitions',
+    handle({ params: uuidParam, body: transitionInputSchema }, async ({ params, body, user }) => {
+      const { request } = await changeStatus(ctx, user, params.id, body);
+      return { request: requestView(request, user) };
+    }),
+  );
   return router;
 }

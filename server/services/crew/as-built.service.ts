@@ -10,7 +10,6 @@ import { AppError, conflict } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
 import { ruleProfileLabel, loadJobCheck, type SavedCheck } from './saved-check';
 
-
 export async function requireJobCheck(db: DbOrTx, requestId: string): Promise<SavedCheck> {
   const check = await loadJobCheck(db, requestId);
   if (!check) throw conflict('This job has no saved grade check to build against; ask the office to attach one.');
@@ -20,10 +19,17 @@ export async function requireJobCheck(db: DbOrTx, requestId: string): Promise<Sa
 /** The engine on the server is the record: the same profile version the approved check used, the same design. */
 export function verifyReadings(check: SavedCheck, readings: SaveAsBuiltInput['readings']) {
   try {
-    const shots = readings.map((r) => (r.gradePercent !== undefined
-      ? { stationFt: r.stationFt, gradePercent: r.gradePercent }
-      : { stationFt: r.stationFt, elevationFt: r.elevationFt ?? Number.NaN }));
-    return checkAsBuilt({ readings: shots, ruleProfile: check.ruleProfile, design: check.designPoints, roadEdgeStationFt: check.roadEdgeStationFt });
+    const shots = readings.map((r) =>
+      r.gradePercent !== undefined
+        ? { stationFt: r.stationFt, gradePercent: r.gradePercent }
+        : { stationFt: r.stationFt, elevationFt: r.elevationFt ?? Number.NaN },
+    );
+    return checkAsBuilt({
+      readings: shots,
+      ruleProfile: check.ruleProfile,
+      design: check.designPoints,
+      roadEdgeStationFt: check.roadEdgeStationFt,
+    });
   } catch (error) {
     if (!(error instanceof EngineInputError)) throw error;
     const fields: Record<string, string> = {};
@@ -33,21 +39,41 @@ export function verifyReadings(check: SavedCheck, readings: SaveAsBuiltInput['re
       if (issue.field.startsWith('readings')) fields[issue.field] ??= issue.message;
       else fields.readings ??= 'these readings give a grade no entrance can have: check each station and elevation';
     }
-    throw new AppError(400, 'invalid_input', `The readings cannot be checked as entered: ${Object.keys(fields).join(', ')}.`, fields);
+    throw new AppError(
+      400,
+      'invalid_input',
+      `The readings cannot be checked as entered: ${Object.keys(fields).join(', ')}.`,
+      fields,
+    );
   }
 }
 
 export async function listSets(db: DbOrTx, requestId: string): Promise<AsBuiltSetView[]> {
-  const rows = await db.select({ set: asBuiltSets, crewName: users.name }).from(asBuiltSets)
+  const rows = await db
+    .select({ set: asBuiltSets, crewName: users.name })
+    .from(asBuiltSets)
     .innerJoin(users, eq(users.id, asBuiltSets.crewId))
-    .where(eq(asBuiltSets.requestId, requestId)).orderBy(desc(asBuiltSets.createdAt)).limit(50);
+    .where(eq(asBuiltSets.requestId, requestId))
+    .orderBy(desc(asBuiltSets.createdAt))
+    .limit(50);
   return rows.map(({ set, crewName }) => {
-    const stored = set.results as { readings?: AsBuiltReadingResult[]; status?: AsBuiltStatus } | AsBuiltReadingResult[];
-    const results = Array.isArray(stored) ? stored : stored.readings ?? [];
-    const status = Array.isArray(stored) ? (set.passed ? 'pass' : 'fail') : stored.status ?? (set.passed ? 'pass' : 'fail');
+    const stored = set.results as
+      { readings?: AsBuiltReadingResult[]; status?: AsBuiltStatus } | AsBuiltReadingResult[];
+    const results = Array.isArray(stored) ? stored : (stored.readings ?? []);
+    const status = Array.isArray(stored)
+      ? set.passed
+        ? 'pass'
+        : 'fail'
+      : (stored.status ?? (set.passed ? 'pass' : 'fail'));
     return {
-      id: set.id, readings: set.readings as AsBuiltSetView['readings'], results, status, passed: set.passed,
-      note: set.note, crewName, createdAt: set.createdAt.toISOString(),
+      id: set.id,
+      readings: set.readings as AsBuiltSetView['readings'],
+      results,
+      status,
+      passed: set.passed,
+      note: set.note,
+      crewName,
+      createdAt: set.createdAt.toISOString(),
     };
   });
 }
@@ -57,7 +83,13 @@ export async function asBuiltPage(db: Db, user: SessionUser, requestId: string):
   if (!crewStages.includes(row.status)) throw new AppError(404, 'not_found', 'Job was not found.');
   const check = await requireJobCheck(db, row.id);
   return {
-    job: { requestId: row.id, reference: row.reference, status: row.status, version: row.version, siteAddress: row.siteAddress },
+    job: {
+      requestId: row.id,
+      reference: row.reference,
+      status: row.status,
+      version: row.version,
+      siteAddress: row.siteAddress,
+    },
     ruleProfile: check.ruleProfile,
     ruleProfileLabel: ruleProfileLabel(check.ruleProfile),
     design: check.designPoints,
@@ -71,22 +103,35 @@ export async function saveAsBuiltSet(db: Db, crew: SessionUser, requestId: strin
   return db.transaction(async (tx) => {
     const row = await loadVisibleRequest(tx, crew, requestId, { forUpdate: true });
     if (row.status !== 'under_construction' || row.crewId !== crew.id) {
-      throw conflict(`As-built readings are taken while the job is being built; this one is "${statusText[row.status].label}" (${row.status}).`);
+      throw conflict(
+        `As-built readings are taken while the job is being built; this one is "${statusText[row.status].label}" (${row.status}).`,
+      );
     }
     const check = await requireJobCheck(tx, row.id);
     const verdict = verifyReadings(check, input.readings);
-    const [set] = await tx.insert(asBuiltSets).values({
-      requestId: row.id, gradeCheckId: check.id, crewId: crew.id, readings: input.readings,
-      results: { readings: verdict.readings, status: verdict.status, ruleProfileVersionId: check.ruleProfile.id },
-      passed: verdict.passes, note: input.note ?? '',
-    }).returning();
+    const [set] = await tx
+      .insert(asBuiltSets)
+      .values({
+        requestId: row.id,
+        gradeCheckId: check.id,
+        crewId: crew.id,
+        readings: input.readings,
+        results: { readings: verdict.readings, status: verdict.status, ruleProfileVersionId: check.ruleProfile.id },
+        passed: verdict.passes,
+        note: input.note ?? '',
+      })
+      .returning();
     const [view] = (await listSets(tx, row.id)).filter((s) => s.id === set.id);
     return view;
   });
 }
 
 export async function latestSet(db: DbOrTx, requestId: string) {
-  const [set] = await db.select().from(asBuiltSets).where(eq(asBuiltSets.requestId, requestId))
-    .orderBy(desc(asBuiltSets.createdAt)).limit(1);
+  const [set] = await db
+    .select()
+    .from(asBuiltSets)
+    .where(eq(asBuiltSets.requestId, requestId))
+    .orderBy(desc(asBuiltSets.createdAt))
+    .limit(1);
   return set ?? null;
 }

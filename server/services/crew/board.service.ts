@@ -7,8 +7,16 @@ import { distanceFromYard, earthworkEstimate, siteCoordinates, wantedFrom } from
 import { loadJobCheck } from './saved-check';
 import { loadYard } from './yard.service';
 
-export const permitOf = (r: { permitReference: string | null; permitConditions: string | null; permitDecidedOn: string | null; permitExpiresOn: string | null }) => ({
-  reference: r.permitReference, conditions: r.permitConditions, decidedOn: r.permitDecidedOn, expiresOn: r.permitExpiresOn,
+export const permitOf = (r: {
+  permitReference: string | null;
+  permitConditions: string | null;
+  permitDecidedOn: string | null;
+  permitExpiresOn: string | null;
+}) => ({
+  reference: r.permitReference,
+  conditions: r.permitConditions,
+  decidedOn: r.permitDecidedOn,
+  expiresOn: r.permitExpiresOn,
 });
 
 // Nothing wanted-by sorts after every date; ties go to the job that has waited longest on the board.
@@ -23,7 +31,8 @@ const byDistance = (a: BoardJob, b: BoardJob) =>
  */
 export async function listBoard(db: DbOrTx, sort: BoardSort): Promise<BoardView> {
   const yard = await loadYard(db);
-  const rows = await db.select({ request: requests, releasedAt: jobs.releasedAt, jurisdictionName: jurisdictions.name })
+  const rows = await db
+    .select({ request: requests, releasedAt: jobs.releasedAt, jurisdictionName: jurisdictions.name })
     .from(requests)
     .leftJoin(jobs, eq(jobs.requestId, requests.id))
     .leftJoin(jurisdictions, eq(jurisdictions.id, requests.jurisdictionId))

@@ -21,14 +21,22 @@ export const fieldCautions = [
   'The road authority’s inspection prevails: these figures support the crew, they do not replace the inspector, local codes or a licensed engineer.',
 ];
 
-
 function laserSheet(check: SavedCheck): LaserSheet | null {
   const { laser, laserInput } = check;
   if (!laser || !laserInput) return null;
   const { stakes, secondSetup, warp, ...first } = laser;
   return {
-    first, second: secondSetup, warp: warp ?? null, receiverOffsetFt: laserInput.receiverOffsetFt, landingLengthFt: laserInput.landingLengthFt,
-    stakes: stakes.map((s, i) => ({ ...s, offsetFt: laserInput.stakes[i]?.offsetFt ?? 0, distanceFt: laserInput.stakes[i]?.distanceFt ?? 0, rodReadingFt: laserInput.stakes[i]?.rodReadingFt ?? 0 })),
+    first,
+    second: secondSetup,
+    warp: warp ?? null,
+    receiverOffsetFt: laserInput.receiverOffsetFt,
+    landingLengthFt: laserInput.landingLengthFt,
+    stakes: stakes.map((s, i) => ({
+      ...s,
+      offsetFt: laserInput.stakes[i]?.offsetFt ?? 0,
+      distanceFt: laserInput.stakes[i]?.distanceFt ?? 0,
+      rodReadingFt: laserInput.stakes[i]?.rodReadingFt ?? 0,
+    })),
   };
 }
 
@@ -38,9 +46,14 @@ function culvertSheet(check: SavedCheck): CulvertSheet | null {
   const summary = check.culvertSummary ?? {};
   const lengthFt = c.lengthFt ?? summary.requiredLengthFt ?? null;
   return {
-    diameterIn: c.diameterIn, lengthFt, lengthIsMinimum: c.lengthFt === undefined && lengthFt !== null,
-    inletInvertFt: c.inletInvertFt, outletInvertFt: c.outletInvertFt, coverIn: summary.coverIn ?? null,
-    slopePercent: summary.slopeFtPerFt === undefined ? null : summary.slopeFtPerFt * 100, headwaterText: headwaterWords(summary),
+    diameterIn: c.diameterIn,
+    lengthFt,
+    lengthIsMinimum: c.lengthFt === undefined && lengthFt !== null,
+    inletInvertFt: c.inletInvertFt,
+    outletInvertFt: c.outletInvertFt,
+    coverIn: summary.coverIn ?? null,
+    slopePercent: summary.slopeFtPerFt === undefined ? null : summary.slopeFtPerFt * 100,
+    headwaterText: headwaterWords(summary),
   };
 }
 
@@ -49,10 +62,12 @@ function cutFill(check: SavedCheck): CutFillAtStation[] {
   const existing = check.existingPoints;
   if (!existing) return [];
   const [first, last] = [existing[0].stationFt, existing[existing.length - 1].stationFt];
-  return check.designPoints.filter((p) => p.stationFt >= first && p.stationFt <= last).map((p) => {
-    const existingFt = elevationAt(existing, p.stationFt);
-    return { stationFt: p.stationFt, existingFt, designFt: p.elevationFt, cutFillFt: existingFt - p.elevationFt };
-  });
+  return check.designPoints
+    .filter((p) => p.stationFt >= first && p.stationFt <= last)
+    .map((p) => {
+      const existingFt = elevationAt(existing, p.stationFt);
+      return { stationFt: p.stationFt, existingFt, designFt: p.elevationFt, cutFillFt: existingFt - p.elevationFt };
+    });
 }
 
 function whereText(site: Record<string, unknown> | undefined): string {
@@ -61,7 +76,8 @@ function whereText(site: Record<string, unknown> | undefined): string {
     const ft = typeof site.distanceFromLandmarkFt === 'number' ? `${site.distanceFromLandmarkFt} ft from ` : 'Near ';
     return `${ft}${site.landmark}`;
   }
-  if (typeof site.siteLat === 'number' && typeof site.siteLng === 'number') return `At ${site.siteLat.toFixed(5)}, ${site.siteLng.toFixed(5)}`;
+  if (typeof site.siteLat === 'number' && typeof site.siteLng === 'number')
+    return `At ${site.siteLat.toFixed(5)}, ${site.siteLng.toFixed(5)}`;
   return '';
 }
 
@@ -70,32 +86,73 @@ async function sheetFor(db: Db, row: RequestRow) {
   const [job] = await db.select({ scheduledFor: jobs.scheduledFor }).from(jobs).where(eq(jobs.requestId, row.id));
   const [crew] = row.crewId ? await db.select({ name: users.name }).from(users).where(eq(users.id, row.crewId)) : [];
   const [authority] = row.jurisdictionId
-    ? await db.select({ name: jurisdictions.name, authority: jurisdictions.authority }).from(jurisdictions).where(eq(jurisdictions.id, row.jurisdictionId))
+    ? await db
+        .select({ name: jurisdictions.name, authority: jurisdictions.authority })
+        .from(jurisdictions)
+        .where(eq(jurisdictions.id, row.jurisdictionId))
     : [];
   const app = (row.application ?? {}) as { site?: Record<string, unknown>; entrance?: Record<string, unknown> };
   const site = app.site ?? {};
-  const owner = typeof site.roadOwner === 'string' && site.roadOwner in roadOwnerText ? roadOwnerText[site.roadOwner as keyof typeof roadOwnerText] : '';
+  const owner =
+    typeof site.roadOwner === 'string' && site.roadOwner in roadOwnerText
+      ? roadOwnerText[site.roadOwner as keyof typeof roadOwnerText]
+      : '';
   const rules = check?.ruleProfile;
   return {
     job: {
-      requestId: row.id, reference: row.reference, status: row.status, version: row.version, siteAddress: row.siteAddress, roadName: row.roadName,
-      applicantName: row.applicantName, crewId: row.crewId, crewName: crew?.name ?? null, scheduledFor: job?.scheduledFor ?? null,
+      requestId: row.id,
+      reference: row.reference,
+      status: row.status,
+      version: row.version,
+      siteAddress: row.siteAddress,
+      roadName: row.roadName,
+      applicantName: row.applicantName,
+      crewId: row.crewId,
+      crewName: crew?.name ?? null,
+      scheduledFor: job?.scheduledFor ?? null,
     },
     access: {
-      parcelNumber: typeof site.parcelNumber === 'string' ? site.parcelNumber : '', roadOwner: owner,
-      postedSpeedMph: typeof site.postedSpeedMph === 'number' ? site.postedSpeedMph : null, whereText: whereText(site),
-      notes: typeof app.entrance?.notes === 'string' ? app.entrance.notes : '', lat: row.siteLat, lng: row.siteLng,
+      parcelNumber: typeof site.parcelNumber === 'string' ? site.parcelNumber : '',
+      roadOwner: owner,
+      postedSpeedMph: typeof site.postedSpeedMph === 'number' ? site.postedSpeedMph : null,
+      whereText: whereText(site),
+      notes: typeof app.entrance?.notes === 'string' ? app.entrance.notes : '',
+      lat: row.siteLat,
+      lng: row.siteLng,
     },
-    permit: { ...permitOf(row), authority: authority?.authority ?? null, jurisdictionName: authority?.name ?? rules?.jurisdictionName ?? null },
-    check: check ? { number: check.number, summary: check.summary, passed: check.passed, ruleProfileLabel: ruleProfileLabel(check.ruleProfile), engineVersion: check.engineVersion } : null,
-    rules: rules ? { landingLengthFt: rules.landing.lengthFt, landingMinPercent: rules.landing.minGradePercent, landingMaxPercent: rules.landing.maxGradePercent, maxGradePercent: rules.maxGradePercent } : null,
+    permit: {
+      ...permitOf(row),
+      authority: authority?.authority ?? null,
+      jurisdictionName: authority?.name ?? rules?.jurisdictionName ?? null,
+    },
+    check: check
+      ? {
+          number: check.number,
+          summary: check.summary,
+          passed: check.passed,
+          ruleProfileLabel: ruleProfileLabel(check.ruleProfile),
+          engineVersion: check.engineVersion,
+        }
+      : null,
+    rules: rules
+      ? {
+          landingLengthFt: rules.landing.lengthFt,
+          landingMinPercent: rules.landing.minGradePercent,
+          landingMaxPercent: rules.landing.maxGradePercent,
+          maxGradePercent: rules.maxGradePercent,
+        }
+      : null,
     laser: check ? laserSheet(check) : null,
     culvert: check ? culvertSheet(check) : null,
     apron: check?.apron ?? null,
-    design: check ? {
-      points: check.designPoints, existing: check.existingPoints, cutFill: cutFill(check),
-      chart: buildChartInputFor(check.record.inputs, check.record.results, check.ruleProfile, check.existingPoints),
-    } : null,
+    design: check
+      ? {
+          points: check.designPoints,
+          existing: check.existingPoints,
+          cutFill: cutFill(check),
+          chart: buildChartInputFor(check.record.inputs, check.record.results, check.ruleProfile, check.existingPoints),
+        }
+      : null,
     earthwork: earthworkEstimate(check),
     cautions: fieldCautions,
   } satisfies FieldSheetView;

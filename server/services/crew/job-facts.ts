@@ -1,5 +1,10 @@
 import {
-  bankToLoose, earthworkFromProfiles, soilFactors, truckLoads, unlessRefused, type ProfilePoint,
+  bankToLoose,
+  earthworkFromProfiles,
+  soilFactors,
+  truckLoads,
+  unlessRefused,
+  type ProfilePoint,
 } from '@shared/engine';
 import { timingText, timings } from '@shared/requests/choices';
 import type { EarthworkEstimate, Wanted, Yard } from '@shared/crew/crew-views';
@@ -13,7 +18,11 @@ function volumes(check: SavedCheck): { cutCuYd: number; fillCuYd: number } | nul
   if (design?.applied && proposal?.feasible) return { cutCuYd: proposal.cutCuYd, fillCuYd: proposal.fillCuYd };
   if (!design || !existingPoints) return null;
   try {
-    const { cutCuYd, fillCuYd } = earthworkFromProfiles({ existing: existingPoints, design: designPoints, template: design.template });
+    const { cutCuYd, fillCuYd } = earthworkFromProfiles({
+      existing: existingPoints,
+      design: designPoints,
+      template: design.template,
+    });
     return { cutCuYd, fillCuYd };
   } catch {
     return null;
@@ -47,7 +56,8 @@ export function earthworkEstimate(check: SavedCheck | null): EarthworkEstimate |
   });
 }
 
-const isTiming = (v: unknown): v is (typeof timings)[number] => typeof v === 'string' && (timings as readonly string[]).includes(v);
+const isTiming = (v: unknown): v is (typeof timings)[number] =>
+  typeof v === 'string' && (timings as readonly string[]).includes(v);
 
 const isoDay = (d: Date) => d.toISOString().slice(0, 10);
 
@@ -74,7 +84,9 @@ const rad = (deg: number) => (deg * Math.PI) / 180;
 
 /** Straight-line (great-circle) distance: enough to order jobs by how far the crew drives. */
 export function milesBetween(a: { lat: number; lng: number }, b: { lat: number; lng: number }): number {
-  const h = Math.sin(rad(b.lat - a.lat) / 2) ** 2 + Math.cos(rad(a.lat)) * Math.cos(rad(b.lat)) * Math.sin(rad(b.lng - a.lng) / 2) ** 2;
+  const h =
+    Math.sin(rad(b.lat - a.lat) / 2) ** 2 +
+    Math.cos(rad(a.lat)) * Math.cos(rad(b.lat)) * Math.sin(rad(b.lng - a.lng) / 2) ** 2;
   return 2 * EARTH_RADIUS_MILES * Math.asin(Math.min(1, Math.sqrt(h)));
 }
 
@@ -86,7 +98,10 @@ export function distanceFromYard(yard: Yard | null, lat: number | null, lng: num
 export type { ProfilePoint };
 
 /** Where the site is: the office's own pin first, else what the homeowner gave in the form. */
-export function siteCoordinates(r: { siteLat: number | null; siteLng: number | null; application: unknown }): { lat: number | null; lng: number | null } {
+export function siteCoordinates(r: { siteLat: number | null; siteLng: number | null; application: unknown }): {
+  lat: number | null;
+  lng: number | null;
+} {
   if (r.siteLat !== null && r.siteLng !== null) return { lat: r.siteLat, lng: r.siteLng };
   const site = (r.application as { site?: { siteLat?: unknown; siteLng?: unknown } } | null)?.site;
   const lat = typeof site?.siteLat === 'number' ? site.siteLat : null;

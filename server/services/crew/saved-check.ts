@@ -1,7 +1,14 @@
 import { and, desc, eq, isNotNull } from 'drizzle-orm';
 import {
-  laserSetup, laserStepAtChangeFt, normalizeProfile, ruleProfileSchema, SURVEY_ELEVATION_PRECISION_FT,
-  type EntranceReport, type LaserSetupInput, type ProfilePoint, type RuleProfile,
+  laserSetup,
+  laserStepAtChangeFt,
+  normalizeProfile,
+  ruleProfileSchema,
+  SURVEY_ELEVATION_PRECISION_FT,
+  type EntranceReport,
+  type LaserSetupInput,
+  type ProfilePoint,
+  type RuleProfile,
 } from '@shared/engine';
 import type { GradeCheckInputs, GradeCheckRecord, GradeCheckResults } from '@shared/contracts/grade-checks';
 import { readGradeCheckRecordOrNull } from '@shared/grade-check/stored-check';
@@ -41,7 +48,8 @@ function laserOf(input: LaserSetupInput | undefined, saved: GradeCheckResults['l
   if (!input) return null;
   // The stored result is the record; recompute only when it is missing, or when it was saved by an engine whose
   // second setup stepped away from the first at the change line (the crew must never be handed a step).
-  const usable = saved && typeof saved.alongRoadPercent === 'number' && saved.secondSetup && Array.isArray(saved.stakes);
+  const usable =
+    saved && typeof saved.alongRoadPercent === 'number' && saved.secondSetup && Array.isArray(saved.stakes);
   if (usable && laserStepAtChangeFt(saved, STEP_CHECK_HALF_WIDTH_FT) < SURVEY_ELEVATION_PRECISION_FT) return saved;
   try {
     return laserSetup(input);
@@ -65,7 +73,8 @@ export async function loadJobCheck(db: DbOrTx, requestId: string): Promise<Saved
   const where = job?.gradeCheckId
     ? eq(gradeChecks.id, job.gradeCheckId)
     : and(eq(gradeChecks.requestId, requestId), isNotNull(gradeChecks.attachedAt));
-  const [row] = await db.select({ check: gradeChecks, version: ruleProfileVersions, jurisdictionName: jurisdictions.name })
+  const [row] = await db
+    .select({ check: gradeChecks, version: ruleProfileVersions, jurisdictionName: jurisdictions.name })
     .from(gradeChecks)
     .innerJoin(ruleProfileVersions, eq(ruleProfileVersions.id, gradeChecks.ruleProfileVersionId))
     .innerJoin(jurisdictions, eq(jurisdictions.id, ruleProfileVersions.jurisdictionId))
@@ -84,7 +93,12 @@ export async function loadJobCheck(db: DbOrTx, requestId: string): Promise<Saved
     summary: row.check.summary,
     passed: row.check.passed,
     engineVersion: row.check.engineVersion,
-    ruleProfile: { ...rules.data, id: row.version.id, version: row.version.version, jurisdictionName: row.jurisdictionName },
+    ruleProfile: {
+      ...rules.data,
+      id: row.version.id,
+      version: row.version.version,
+      jurisdictionName: row.jurisdictionName,
+    },
     record,
     designPoints,
     roadEdgeStationFt: inputs.roadEdgeStationFt ?? designPoints[0].stationFt,

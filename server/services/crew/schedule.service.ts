@@ -14,10 +14,14 @@ const isoDay = (ms: number) => new Date(ms).toISOString().slice(0, 10);
 
 /** A day the crew can still work on under the permit; one day of slack covers a crew west of UTC at night. */
 function checkDate(date: string, permitExpiresOn: string | null, now: Date) {
-  if (date < isoDay(now.getTime() - DAY_MS)) throw badRequest('The work cannot be planned in the past.', { date: 'pick today or a later day' });
-  if (date > isoDay(now.getTime() + 400 * DAY_MS)) throw badRequest('Plan the work within the next 13 months.', { date: 'must be within the next 13 months' });
+  if (date < isoDay(now.getTime() - DAY_MS))
+    throw badRequest('The work cannot be planned in the past.', { date: 'pick today or a later day' });
+  if (date > isoDay(now.getTime() + 400 * DAY_MS))
+    throw badRequest('Plan the work within the next 13 months.', { date: 'must be within the next 13 months' });
   if (permitExpiresOn && date > permitExpiresOn) {
-    throw badRequest(`The permit expires on ${dayInWords(permitExpiresOn)}.`, { date: `must be on or before the permit's expiry, ${permitExpiresOn}` });
+    throw badRequest(`The permit expires on ${dayInWords(permitExpiresOn)}.`, {
+      date: `must be on or before the permit's expiry, ${permitExpiresOn}`,
+    });
   }
 }
 
@@ -25,11 +29,19 @@ function checkDate(date: string, permitExpiresOn: string | null, now: Date) {
  * Planning the day is not a status change, but it is written like one: the job row, an event for the timeline
  * and the homeowner's e-mail in one transaction, with the request row locked so it cannot move under us.
  */
-export async function scheduleJob(ctx: TransitionContext, crew: SessionUser, requestId: string, input: ScheduleJobInput, now = new Date()) {
+export async function scheduleJob(
+  ctx: TransitionContext,
+  crew: SessionUser,
+  requestId: string,
+  input: ScheduleJobInput,
+  now = new Date(),
+) {
   return ctx.db.transaction(async (tx) => {
     const row = await loadVisibleRequest(tx, crew, requestId, { forUpdate: true });
     if (row.status !== 'crew_assigned' || row.crewId !== crew.id) {
-      throw conflict(`This job is "${statusText[row.status].label}" (${row.status}); only a job you have taken and not yet started can be planned.`);
+      throw conflict(
+        `This job is "${statusText[row.status].label}" (${row.status}); only a job you have taken and not yet started can be planned.`,
+      );
     }
     checkDate(input.date, row.permitExpiresOn, now);
     const [job] = await tx.select({ scheduledFor: jobs.scheduledFor }).from(jobs).where(eq(jobs.requestId, row.id));
@@ -37,14 +49,33 @@ export async function scheduleJob(ctx: TransitionContext, crew: SessionUser, req
     await tx.update(jobs).set({ scheduledFor: input.date }).where(eq(jobs.requestId, row.id));
     await tx.update(requests).set({ updatedAt: now }).where(eq(requests.id, row.id));
     const note = input.note ?? '';
-    const [event] = await tx.insert(requestEvents).values({
-      requestId: row.id, actorId: crew.id, kind: 'work-day-planned', note: `Work planned for ${dayInWords(input.date)}.${note ? ` ${note}` : ''}`,
-    }).returning({ id: requestEvents.id });
-    const [applicant] = await tx.select({ email: users.email, name: users.name }).from(users).where(eq(users.id, row.applicantId));
+    const [event] = await tx
+      .insert(requestEvents)
+      .values({
+        requestId: row.id,
+        actorId: crew.id,
+        kind: 'work-day-planned',
+        note: `Work planned for ${dayInWords(input.date)}.${note ? ` ${note}` : ''}`,
+      })
+      .returning({ id: requestEvents.id });
+    const [applicant] = await tx
+      .select({ email: users.email, name: users.name })
+      .from(users)
+      .where(eq(users.id, row.applicantId));
     const emails = scheduleEmails({
-      request: row, applicant, crew, officeEmail: ctx.env.OFFICE_EMAIL, date: input.date, previousDate: previous, note, appOrigin: ctx.env.APP_ORIGIN,
+      request: row,
+      applicant,
+      crew,
+      officeEmail: ctx.env.OFFICE_EMAIL,
+      date: input.date,
+      previousDate: previous,
+      note,
+      appOrigin: ctx.env.APP_ORIGIN,
     });
-    await enqueueEmails(tx, emails.map((e) => ({ ...e, eventId: event.id })));
+    await enqueueEmails(
+      tx,
+      emails.map((e) => ({ ...e, eventId: event.id })),
+    );
     return { scheduledFor: input.date, previousDate: previous };
   });
 }

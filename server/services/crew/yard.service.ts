@@ -16,7 +16,9 @@ export async function loadYard(db: DbOrTx): Promise<Yard | null> {
 
 export async function saveYard(db: DbOrTx, input: YardInput): Promise<Yard> {
   const value = { label: input.label, lat: input.lat, lng: input.lng };
-  await db.insert(settings).values({ key: YARD_KEY, value })
+  await db
+    .insert(settings)
+    .values({ key: YARD_KEY, value })
     .onConflictDoUpdate({ target: settings.key, set: { value, updatedAt: new Date() } });
   return value;
 }

@@ -14,7 +14,10 @@ export const REPORT_KIND = 'grade-check-report';
 async function reportData(ctx: Pick<AppContext, 'db'>, user: SessionUser, checkId: string) {
   const check = await loadVisibleGradeCheck(ctx.db, user, checkId);
   const request = await loadVisibleRequest(ctx.db, user, check.requestId);
-  const [version] = await ctx.db.select().from(ruleProfileVersions).where(eq(ruleProfileVersions.id, check.ruleProfileVersionId));
+  const [version] = await ctx.db
+    .select()
+    .from(ruleProfileVersions)
+    .where(eq(ruleProfileVersions.id, check.ruleProfileVersionId));
   const [jurisdiction] = await ctx.db.select().from(jurisdictions).where(eq(jurisdictions.id, version.jurisdictionId));
   return { check, request, profile: version.profile as RuleProfile, version, jurisdiction };
 }
@@ -30,13 +33,22 @@ export async function reportFor(ctx: Pick<AppContext, 'db'>, user: SessionUser, 
  * fixed per check and the second call finds the first's document. A check that fails the rules is attached only
  * when the office confirms it, since the owner reads it as the office's finding.
  */
-export async function attachGradeCheck(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, checkId: string, share: boolean, confirmFailing = false) {
+export async function attachGradeCheck(
+  ctx: Pick<AppContext, 'db' | 's3' | 'env'>,
+  user: SessionUser,
+  checkId: string,
+  share: boolean,
+  confirmFailing = false,
+) {
   const data = await reportData(ctx, user, checkId);
   const { check, request } = data;
   if (!check.passed && !check.attachedAt && !confirmFailing) {
-    throw badRequest(`Check ${check.number} does not meet the road authority's rules: confirm with "Attach it anyway" to attach it.`, {
-      confirmFailing: `Attach it anyway: check ${check.number} does not meet the rules; confirm that the owner should read it`,
-    });
+    throw badRequest(
+      `Check ${check.number} does not meet the road authority's rules: confirm with "Attach it anyway" to attach it.`,
+      {
+        confirmFailing: `Attach it anyway: check ${check.number} does not meet the rules; confirm that the owner should read it`,
+      },
+    );
   }
   const objectKey = `reports/${request.id}/grade-check-${check.number}-${check.id}.pdf`;
   const [existing] = await ctx.db.select().from(documents).where(eq(documents.objectKey, objectKey));
@@ -46,16 +58,37 @@ export async function attachGradeCheck(ctx: Pick<AppContext, 'db' | 's3' | 'env'
   if (pdf) await storeReport(ctx, objectKey, pdf);
   return ctx.db.transaction(async (tx) => {
     const [document] = pdf
-      ? await tx.insert(documents).values({
-        requestId: request.id, gradeCheckId: check.id, kind: REPORT_KIND, title: `Grade check ${check.number} report`,
-        objectKey, contentType: 'application/pdf', sizeBytes: pdf.length, sharedWithApplicant: share, createdById: user.id,
-      }).onConflictDoNothing({ target: documents.objectKey }).returning()
-      : await tx.update(documents).set({ sharedWithApplicant: share }).where(eq(documents.objectKey, objectKey)).returning();
-    const [attached] = await tx.update(gradeChecks).set({ attachedAt: new Date() })
-      .where(and(eq(gradeChecks.id, check.id), isNull(gradeChecks.attachedAt))).returning();
+      ? await tx
+          .insert(documents)
+          .values({
+            requestId: request.id,
+            gradeCheckId: check.id,
+            kind: REPORT_KIND,
+            title: `Grade check ${check.number} report`,
+            objectKey,
+            contentType: 'application/pdf',
+            sizeBytes: pdf.length,
+            sharedWithApplicant: share,
+            createdById: user.id,
+          })
+          .onConflictDoNothing({ target: documents.objectKey })
+          .returning()
+      : await tx
+          .update(documents)
+          .set({ sharedWithApplicant: share })
+          .where(eq(documents.objectKey, objectKey))
+          .returning();
+    const [attached] = await tx
+      .update(gradeChecks)
+      .set({ attachedAt: new Date() })
+      .where(and(eq(gradeChecks.id, check.id), isNull(gradeChecks.attachedAt)))
+      .returning();
     if (document) {
       await tx.insert(requestEvents).values({
-        requestId: request.id, actorId: user.id, kind: 'grade-check-report', internal: !share,
+        requestId: request.id,
+        actorId: user.id,
+        kind: 'grade-check-report',
+        internal: !share,
         note: `Grade check ${check.number} report attached${share ? ' and shared with the property owner' : ''}.`,
       });
     }

@@ -12,9 +12,10 @@ type DocumentRow = typeof documents.$inferSelect;
 /** The property owner sees only what the office shared; the office and the crew on the job see everything. */
 async function visibleRows(db: Db, user: SessionUser, requestId: string) {
   const request = await loadVisibleRequest(db, user, requestId);
-  const where = user.role === 'applicant'
-    ? and(eq(documents.requestId, request.id), eq(documents.sharedWithApplicant, true))
-    : eq(documents.requestId, request.id);
+  const where =
+    user.role === 'applicant'
+      ? and(eq(documents.requestId, request.id), eq(documents.sharedWithApplicant, true))
+      : eq(documents.requestId, request.id);
   return db.select().from(documents).where(where).orderBy(desc(documents.createdAt));
 }
 
@@ -26,10 +27,17 @@ export async function listDocumentViews(db: Db, user: SessionUser, requestId: st
 export async function listDocuments(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, requestId: string) {
   const rows = await visibleRows(ctx.db, user, requestId);
   const expiresAt = new Date(Date.now() + DOWNLOAD_SECONDS * 1000).toISOString();
-  return Promise.all(rows.map(async (row) => ({ ...view(row, user), url: await downloadUrl(ctx, row), urlExpiresAt: expiresAt })));
+  return Promise.all(
+    rows.map(async (row) => ({ ...view(row, user), url: await downloadUrl(ctx, row), urlExpiresAt: expiresAt })),
+  );
 }
 
-export async function documentLink(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user: SessionUser, requestId: string, documentId: string) {
+export async function documentLink(
+  ctx: Pick<AppContext, 'db' | 's3' | 'env'>,
+  user: SessionUser,
+  requestId: string,
+  documentId: string,
+) {
   const row = (await visibleRows(ctx.db, user, requestId)).find((d) => d.id === documentId);
   if (!row) throw notFound('Document');
   return { url: await downloadUrl(ctx, row), expiresInSeconds: DOWNLOAD_SECONDS };
@@ -45,12 +53,21 @@ export async function setShared(db: Db, user: SessionUser, documentId: string, s
   if (!row) throw notFound('Document');
   await loadVisibleRequest(db, user, row.requestId);
   return db.transaction(async (tx) => {
-    const [saved] = await tx.update(documents).set({ sharedWithApplicant: shared }).where(eq(documents.id, documentId)).returning();
+    const [saved] = await tx
+      .update(documents)
+      .set({ sharedWithApplicant: shared })
+      .where(eq(documents.id, documentId))
+      .returning();
     if (row.sharedWithApplicant !== shared) {
       // Sharing is news to the owner; taking a document back is the office's business.
       await tx.insert(requestEvents).values({
-        requestId: row.requestId, actorId: user.id, kind: 'document', internal: !shared,
-        note: shared ? `${row.title} shared with the property owner.` : `${row.title} no longer shared with the property owner.`,
+        requestId: row.requestId,
+        actorId: user.id,
+        kind: 'document',
+        internal: !shared,
+        note: shared
+          ? `${row.title} shared with the property owner.`
+          : `${row.title} no longer shared with the property owner.`,
       });
     }
     return view(saved, user);

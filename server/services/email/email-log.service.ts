@@ -18,9 +18,18 @@ export interface EmailLogQuery {
 }
 
 const listColumns = {
-  id: emails.id, requestId: emails.requestId, reference: requests.reference, template: emails.template,
-  toAddress: emails.toAddress, subject: emails.subject, status: emails.status, attempts: emails.attempts,
-  lastError: emails.lastError, messageId: emails.messageId, createdAt: emails.createdAt, sentAt: emails.sentAt,
+  id: emails.id,
+  requestId: emails.requestId,
+  reference: requests.reference,
+  template: emails.template,
+  toAddress: emails.toAddress,
+  subject: emails.subject,
+  status: emails.status,
+  attempts: emails.attempts,
+  lastError: emails.lastError,
+  messageId: emails.messageId,
+  createdAt: emails.createdAt,
+  sentAt: emails.sentAt,
   nextAttemptAt: emails.nextAttemptAt,
 };
 
@@ -34,10 +43,18 @@ export async function listEmails(db: DbOrTx, query: EmailLogQuery) {
   }
   const where = filters.length ? and(...filters) : undefined;
   const page = query.cursor
-    ? and(where, sql`(${emails.createdAt}, ${emails.id}) < (${query.cursor.createdAt.toISOString()}::timestamptz, ${query.cursor.id}::uuid)`)
+    ? and(
+        where,
+        sql`(${emails.createdAt}, ${emails.id}) < (${query.cursor.createdAt.toISOString()}::timestamptz, ${query.cursor.id}::uuid)`,
+      )
     : where;
-  const rows = await db.select(listColumns).from(emails).leftJoin(requests, eq(requests.id, emails.requestId))
-    .where(page).orderBy(desc(emails.createdAt), desc(emails.id)).limit(query.limit + 1);
+  const rows = await db
+    .select(listColumns)
+    .from(emails)
+    .leftJoin(requests, eq(requests.id, emails.requestId))
+    .where(page)
+    .orderBy(desc(emails.createdAt), desc(emails.id))
+    .limit(query.limit + 1);
   const more = rows.length > query.limit;
   const items = more ? rows.slice(0, query.limit) : rows;
   const last = items.at(-1);
@@ -45,13 +62,19 @@ export async function listEmails(db: DbOrTx, query: EmailLogQuery) {
   return {
     emails: items,
     nextCursor: more && last ? encodeCursor(last.createdAt, last.id) : null,
-    totals: Object.fromEntries(emailStatuses.map((s) => [s, totals.find((t) => t.status === s)?.n ?? 0])) as Record<EmailStatus, number>,
+    totals: Object.fromEntries(emailStatuses.map((s) => [s, totals.find((t) => t.status === s)?.n ?? 0])) as Record<
+      EmailStatus,
+      number
+    >,
   };
 }
 
 export async function getEmail(db: DbOrTx, id: string) {
-  const [row] = await db.select({ ...listColumns, textBody: emails.textBody, htmlBody: emails.htmlBody })
-    .from(emails).leftJoin(requests, eq(requests.id, emails.requestId)).where(eq(emails.id, id));
+  const [row] = await db
+    .select({ ...listColumns, textBody: emails.textBody, htmlBody: emails.htmlBody })
+    .from(emails)
+    .leftJoin(requests, eq(requests.id, emails.requestId))
+    .where(eq(emails.id, id));
   if (!row) throw notFound('E-mail');
   return row;
 }
@@ -61,8 +84,11 @@ const sendAgain = { status: 'queued' as const, nextAttemptAt: sql`now()`, retryU
 
 /** Staff can send a failed or dead message again (once the cause is fixed) without waiting for the next try. */
 export async function retryEmail(db: DbOrTx, id: string) {
-  const [row] = await db.update(emails).set(sendAgain)
-    .where(and(eq(emails.id, id), inArray(emails.status, ['failed', 'dead']))).returning({ id: emails.id });
+  const [row] = await db
+    .update(emails)
+    .set(sendAgain)
+    .where(and(eq(emails.id, id), inArray(emails.status, ['failed', 'dead'])))
+    .returning({ id: emails.id });
   if (row) return getEmail(db, id);
   const current = await getEmail(db, id);
   throw conflict(`Only a message that failed or gave up can be sent again; this one is "${current.status}".`);

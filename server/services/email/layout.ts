@@ -2,7 +2,8 @@ const escapeMap: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt
 export const escapeHtml = (text: string) => text.replace(/[&<>"']/g, (c) => escapeMap[c]);
 
 /** The last line of every e-mail about a request: why the person receives it and where a reply goes. */
-export const requestFooter = 'You receive this because you are part of this driveway entrance request in Gradepass. Reply to reach the office.';
+export const requestFooter =
+  'You receive this because you are part of this driveway entrance request in Gradepass. Reply to reach the office.';
 
 export interface EmailContent {
   greeting: string;

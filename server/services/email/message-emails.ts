@@ -16,7 +16,12 @@ export interface MessageEmailInput {
   appOrigin: string;
 }
 
-const roleWords: Record<Role, string> = { applicant: 'the property owner', staff: 'the office', admin: 'the office', crew: 'the crew' };
+const roleWords: Record<Role, string> = {
+  applicant: 'the property owner',
+  staff: 'the office',
+  admin: 'the office',
+  crew: 'the crew',
+};
 
 /**
  * Who hears about a new message. Internal notes stay in the office, so they e-mail nobody. A shared message reaches
@@ -28,21 +33,50 @@ export function messageEmails(input: MessageEmailInput): OutgoingEmail[] {
   const { request, author } = input;
   const intro = `${author.name} (${roleWords[author.role]}) wrote about ${request.reference}, the driveway entrance at ${request.siteAddress}:`;
   const build = (to: string, greeting: string, href: string, subject: string): OutgoingEmail => {
-    const content: EmailContent = { greeting, paragraphs: [intro, `“${input.body}”`], link: { href, label: 'Read and answer in Gradepass' } };
-    return { to, template: 'message.shared', subject, requestId: request.id, text: renderText(content, requestFooter), html: renderHtml(content, requestFooter) };
+    const content: EmailContent = {
+      greeting,
+      paragraphs: [intro, `“${input.body}”`],
+      link: { href, label: 'Read and answer in Gradepass' },
+    };
+    return {
+      to,
+      template: 'message.shared',
+      subject,
+      requestId: request.id,
+      text: renderText(content, requestFooter),
+      html: renderHtml(content, requestFooter),
+    };
   };
   const out: OutgoingEmail[] = [];
   if (author.id !== input.applicant.id) {
-    out.push(build(input.applicant.email, `Hello ${input.applicant.name},`, input.appOrigin + sharedPaths.applicantRequest.getHref(request.id),
-      `${request.reference}: a message from ${roleWords[author.role]}`));
+    out.push(
+      build(
+        input.applicant.email,
+        `Hello ${input.applicant.name},`,
+        input.appOrigin + sharedPaths.applicantRequest.getHref(request.id),
+        `${request.reference}: a message from ${roleWords[author.role]}`,
+      ),
+    );
   }
   if (!isOfficeRole(author.role)) {
-    out.push(build(input.officeEmail, 'Hello office,', input.appOrigin + sharedPaths.officeRequest.getHref(request.id),
-      `[${request.reference}] Message from ${author.name}`));
+    out.push(
+      build(
+        input.officeEmail,
+        'Hello office,',
+        input.appOrigin + sharedPaths.officeRequest.getHref(request.id),
+        `[${request.reference}] Message from ${author.name}`,
+      ),
+    );
   }
   if (input.crew && author.id !== input.crew.id) {
-    out.push(build(input.crew.email, `Hello ${input.crew.name},`, input.appOrigin + sharedPaths.crewFieldSheet.getHref(request.id),
-      `[${request.reference}] Message from ${author.name}`));
+    out.push(
+      build(
+        input.crew.email,
+        `Hello ${input.crew.name},`,
+        input.appOrigin + sharedPaths.crewFieldSheet.getHref(request.id),
+        `[${request.reference}] Message from ${author.name}`,
+      ),
+    );
   }
   return out;
 }

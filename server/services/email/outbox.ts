@@ -17,8 +17,18 @@ export interface OutgoingEmail {
  */
 export async function enqueueEmails(tx: DbOrTx, messages: OutgoingEmail[]) {
   if (messages.length === 0) return [];
-  return tx.insert(emails).values(messages.map((m) => ({
-    toAddress: m.to, template: m.template, subject: m.subject, textBody: m.text, htmlBody: m.html,
-    requestId: m.requestId, eventId: m.eventId,
-  }))).returning({ id: emails.id });
+  return tx
+    .insert(emails)
+    .values(
+      messages.map((m) => ({
+        toAddress: m.to,
+        template: m.template,
+        subject: m.subject,
+        textBody: m.text,
+        htmlBody: m.html,
+        requestId: m.requestId,
+        eventId: m.eventId,
+      })),
+    )
+    .returning({ id: emails.id });
 }

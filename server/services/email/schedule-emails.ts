@@ -15,11 +15,14 @@ export interface ScheduleEmailInput {
   appOrigin: string;
 }
 
-
 /** "Tuesday 8 December 2026": the day as a person says it, fixed to the date itself rather than any time zone. */
 export function dayInWords(isoDate: string): string {
   return new Date(`${isoDate}T12:00:00Z`).toLocaleDateString('en-US', {
-    weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', timeZone: 'UTC',
+    weekday: 'long',
+    day: 'numeric',
+    month: 'long',
+    year: 'numeric',
+    timeZone: 'UTC',
   });
 }
 
@@ -43,11 +46,25 @@ export function scheduleEmails(input: ScheduleEmailInput): OutgoingEmail[] {
   const subject = `${input.request.reference}: work planned for ${day}`;
   const officeContent: EmailContent = {
     greeting: 'Hello office,',
-    paragraphs: [`${input.crew.name} planned ${input.request.reference} (${input.request.siteAddress}) for ${day}.`, ...(input.note ? [`Note: ${input.note}`] : [])],
-    link: { href: input.appOrigin + sharedPaths.officeRequest.getHref(input.request.id), label: 'Open it in Gradepass' },
+    paragraphs: [
+      `${input.crew.name} planned ${input.request.reference} (${input.request.siteAddress}) for ${day}.`,
+      ...(input.note ? [`Note: ${input.note}`] : []),
+    ],
+    link: {
+      href: input.appOrigin + sharedPaths.officeRequest.getHref(input.request.id),
+      label: 'Open it in Gradepass',
+    },
   };
   const build = (to: string, c: EmailContent, s: string): OutgoingEmail => ({
-    to, template: 'crew.schedule', subject: s, requestId: input.request.id, text: renderText(c, requestFooter), html: renderHtml(c, requestFooter),
+    to,
+    template: 'crew.schedule',
+    subject: s,
+    requestId: input.request.id,
+    text: renderText(c, requestFooter),
+    html: renderHtml(c, requestFooter),
   });
-  return [build(input.applicant.email, content, subject), build(input.officeEmail, officeContent, `[${input.request.reference}] Work planned for ${day}`)];
+  return [
+    build(input.applicant.email, content, subject),
+    build(input.officeEmail, officeContent, `[${input.request.reference}] Work planned for ${day}`),
+  ];
 }

@@ -4,7 +4,10 @@ import type { Transition } from '@shared/workflow/transitions';
 import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
 
-export interface Person { email: string; name: string }
+export interface Person {
+  email: string;
+  name: string;
+}
 
 /** Who a status change's e-mail can go to. */
 export type Audience = 'applicant' | 'office' | 'crew' | 'crewLeads';
@@ -29,8 +32,8 @@ export interface TransitionEmailInput {
   detail?: string;
 }
 
-
-const noteFor = (input: TransitionEmailInput, audience: Audience) => (!input.noteTo || input.noteTo.includes(audience) ? input.note : '');
+const noteFor = (input: TransitionEmailInput, audience: Audience) =>
+  !input.noteTo || input.noteTo.includes(audience) ? input.note : '';
 
 function applicantContent(input: TransitionEmailInput): EmailContent {
   const { transition, request, detail } = input;
@@ -65,23 +68,43 @@ export function emailsForTransition(input: TransitionEmailInput): OutgoingEmail[
   const { transition, request } = input;
   const label = statusText[transition.to].label;
   const build = (to: string, content: EmailContent, subject: string): OutgoingEmail => ({
-    to, template: `transition.${transition.action}`, subject, requestId: request.id,
-    text: renderText(content, requestFooter), html: renderHtml(content, requestFooter),
+    to,
+    template: `transition.${transition.action}`,
+    subject,
+    requestId: request.id,
+    text: renderText(content, requestFooter),
+    html: renderHtml(content, requestFooter),
   });
   const officeHref = input.appOrigin + sharedPaths.officeRequest.getHref(request.id);
   const crewHref = input.appOrigin + sharedPaths.crewBoard.getHref();
   const out: OutgoingEmail[] = [];
   for (const audience of input.audiences) {
     if (audience === 'applicant') {
-      const subject = input.ownerReceipt ? `We received your request ${request.reference}` : `${request.reference}: ${label}`;
+      const subject = input.ownerReceipt
+        ? `We received your request ${request.reference}`
+        : `${request.reference}: ${label}`;
       out.push(build(input.applicant.email, applicantContent(input), subject));
     } else if (audience === 'office') {
-      out.push(build(input.officeEmail, teamContent(input, 'office', 'office', officeHref), `[${request.reference}] ${label}`));
+      out.push(
+        build(input.officeEmail, teamContent(input, 'office', 'office', officeHref), `[${request.reference}] ${label}`),
+      );
     } else if (audience === 'crew' && input.crew) {
-      out.push(build(input.crew.email, teamContent(input, 'crew', input.crew.name, crewHref), `[${request.reference}] ${label}`));
+      out.push(
+        build(
+          input.crew.email,
+          teamContent(input, 'crew', input.crew.name, crewHref),
+          `[${request.reference}] ${label}`,
+        ),
+      );
     } else if (audience === 'crewLeads') {
       for (const lead of input.crewLeads ?? []) {
-        out.push(build(lead.email, teamContent(input, 'crewLeads', lead.name, crewHref), `New job on the board: ${request.reference}`));
+        out.push(
+          build(
+            lead.email,
+            teamContent(input, 'crewLeads', lead.name, crewHref),
+            `New job on the board: ${request.reference}`,
+          ),
+        );
       }
     }
   }

@@ -18,16 +18,23 @@ function steepest(segments: readonly ProfileSegment[]) {
 function designWords(segments: readonly ProfileSegment[], roadEdgeFt: number, landingFt: number) {
   const landing = segments.filter((s) => s.toStationFt > roadEdgeFt && s.fromStationFt < roadEdgeFt + landingFt);
   const beyond = segments.filter((s) => s.fromStationFt >= roadEdgeFt + landingFt);
-  const parts = [`a landing no steeper than ${pct(steepest(landing))} for the first ${landingFt} ft from the road edge`];
-  if (beyond.length > 0) parts.push(`then no more than ${pct(steepest(beyond))} up to the end of the survey at ${formatStation(beyond[beyond.length - 1].toStationFt)}`);
+  const parts = [
+    `a landing no steeper than ${pct(steepest(landing))} for the first ${landingFt} ft from the road edge`,
+  ];
+  if (beyond.length > 0)
+    parts.push(
+      `then no more than ${pct(steepest(beyond))} up to the end of the survey at ${formatStation(beyond[beyond.length - 1].toStationFt)}`,
+    );
   return parts.join(', ');
 }
 
 function failures(findings: readonly Finding[]) {
-  return findings.filter((f) => f.status === 'fail').map((f) => {
-    const at = f.stationFt === undefined ? '' : ` at station ${formatStation(f.stationFt)}`;
-    return `${f.label.toLowerCase()}${at}`;
-  });
+  return findings
+    .filter((f) => f.status === 'fail')
+    .map((f) => {
+      const at = f.stationFt === undefined ? '' : ` at station ${formatStation(f.stationFt)}`;
+      return `${f.label.toLowerCase()}${at}`;
+    });
 }
 
 /**
@@ -43,9 +50,13 @@ export function plainSummary(inputs: GradeCheckInputs, results: GradeCheckResult
   }
   const design = designWords(report.profile.segments, roadEdge, profile.landing.lengthFt);
   if (inputs.design?.applied && surveyed && !surveyed.passes) {
-    const earth = proposal?.feasible ? ` It moves about ${yd(proposal.cutCuYd)} of cut and ${yd(proposal.fillCuYd)} of fill.` : '';
+    const earth = proposal?.feasible
+      ? ` It moves about ${yd(proposal.cutCuYd)} of cut and ${yd(proposal.fillCuYd)} of fill.`
+      : '';
     const nearRoad = surveyed.findings.some((f) => f.status === 'fail' && f.ruleId.startsWith('landing.'));
-    const need = nearRoad ? 'needs a gentler slope near the road' : `needs regrading (${failures(surveyed.findings).join('; ')})`;
+    const need = nearRoad
+      ? 'needs a gentler slope near the road'
+      : `needs regrading (${failures(surveyed.findings).join('; ')})`;
     return `The ground as it is now ${need}: here is what we propose. ${design[0].toUpperCase()}${design.slice(1)}.${earth} The proposed entrance meets ${rules}.`;
   }
   return `Your entrance meets ${rules}: ${design}.`;

@@ -1,7 +1,12 @@
 import type { RuleProfile } from '@shared/engine';
 import { parseInput } from '@shared/engine/errors';
 import { gradeCheckInputsSchema, type GradeCheckInputs, type GradeCheckResults } from '@shared/contracts/grade-checks';
-import { fieldsOf, GradeCheckFieldsError, runGradeCheck as runCheck, type Propose } from '@shared/grade-check/run-check';
+import {
+  fieldsOf,
+  GradeCheckFieldsError,
+  runGradeCheck as runCheck,
+  type Propose,
+} from '@shared/grade-check/run-check';
 import { AppError } from '../../lib/errors';
 import { proposeOffThread } from '../design/design-pool';
 
@@ -24,7 +29,11 @@ export function parseGradeCheckInputs(raw: unknown): GradeCheckInputs {
  * The record of a check: the shared runGradeCheck on the server, from stored inputs and one rule profile version.
  * The design proposal runs in the design pool's worker threads unless the caller passes another runner.
  */
-export async function runGradeCheck(inputs: GradeCheckInputs, profile: RuleProfile, propose: Propose = proposeOffThread): Promise<GradeCheckResults> {
+export async function runGradeCheck(
+  inputs: GradeCheckInputs,
+  profile: RuleProfile,
+  propose: Propose = proposeOffThread,
+): Promise<GradeCheckResults> {
   try {
     return await runCheck(inputs, profile, propose);
   } catch (error) {

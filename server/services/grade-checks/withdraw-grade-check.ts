@@ -18,12 +18,22 @@ export async function withdrawGradeCheck(db: Db, user: SessionUser, checkId: str
     if (!gradeCheckOpenStatuses.includes(request.status)) {
       throw conflict('This check went to the crew with the job; it can no longer be withdrawn.');
     }
-    const [withdrawn] = await tx.update(gradeChecks).set({ attachedAt: null }).where(eq(gradeChecks.id, check.id)).returning();
+    const [withdrawn] = await tx
+      .update(gradeChecks)
+      .set({ attachedAt: null })
+      .where(eq(gradeChecks.id, check.id))
+      .returning();
     if (!check.attachedAt) return readGradeCheckRow(withdrawn);
-    const unshared = await tx.update(documents).set({ sharedWithApplicant: false })
-      .where(and(eq(documents.gradeCheckId, check.id), eq(documents.sharedWithApplicant, true))).returning({ id: documents.id });
+    const unshared = await tx
+      .update(documents)
+      .set({ sharedWithApplicant: false })
+      .where(and(eq(documents.gradeCheckId, check.id), eq(documents.sharedWithApplicant, true)))
+      .returning({ id: documents.id });
     await tx.insert(requestEvents).values({
-      requestId: request.id, actorId: user.id, kind: 'grade-check-withdrawn', internal: unshared.length === 0,
+      requestId: request.id,
+      actorId: user.id,
+      kind: 'grade-check-withdrawn',
+      internal: unshared.length === 0,
       note: `Grade check ${check.number} withdrawn by the office${unshared.length > 0 ? '; its report is no longer shared' : ''}.`,
     });
     return readGradeCheckRow(withdrawn);

@@ -28,6 +28,8 @@ export function photoTypeOf(bytes: Uint8Array): PhotoType | null {
 
 /** The object's first bytes, read with a ranged GET so a 15 MB photo costs the same as a tiny one. */
 export async function readLeadingBytes(store: Storage, key: string): Promise<Uint8Array> {
-  const object = await store.s3.send(new GetObjectCommand({ Bucket: store.env.S3_BUCKET, Key: key, Range: `bytes=0-${leadingBytes - 1}` }));
+  const object = await store.s3.send(
+    new GetObjectCommand({ Bucket: store.env.S3_BUCKET, Key: key, Range: `bytes=0-${leadingBytes - 1}` }),
+  );
   return object.Body ? object.Body.transformToByteArray() : new Uint8Array();
 }

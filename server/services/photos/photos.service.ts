@@ -24,43 +24,82 @@ export const viewSeconds = 300;
 export async function loadOwnEditable(tx: DbOrTx, user: SessionUser, requestId: string) {
   const row = await loadVisibleRequest(tx, user, requestId, { forUpdate: true });
   if (row.applicantId !== user.id) throw notFound('Request');
-  if (!photosEditable(row.status)) throw conflict('Photos can no longer be changed on this request. Send the office a message instead.');
+  if (!photosEditable(row.status))
+    throw conflict('Photos can no longer be changed on this request. Send the office a message instead.');
   return row;
 }
 
-export async function presignUpload(ctx: PhotoContext, user: SessionUser, requestId: string,
-  file: { fileName: string; contentType: (typeof photoContentTypes)[number]; sizeBytes: number }) {
+export async function presignUpload(
+  ctx: PhotoContext,
+  user: SessionUser,
+  requestId: string,
+  file: { fileName: string; contentType: (typeof photoContentTypes)[number]; sizeBytes: number },
+) {
   return ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
     // An upload that never got confirmed stops counting once its URL has expired.
     const recent = new Date(Date.now() - uploadSeconds * 1000);
-    const counted = await tx.select({ id: photos.id }).from(photos).where(and(eq(photos.requestId, requestId),
-      or(eq(photos.status, 'stored'), and(eq(photos.status, 'pending'), gt(photos.createdAt, recent)))));
+    const counted = await tx
+      .select({ id: photos.id })
+      .from(photos)
+      .where(
+        and(
+          eq(photos.requestId, requestId),
+          or(eq(photos.status, 'stored'), and(eq(photos.status, 'pending'), gt(photos.createdAt, recent))),
+        ),
+      );
     if (counted.length >= maxPhotosPerRequest) {
-      throw badRequest(`A request can have at most ${maxPhotosPerRequest} photos. Remove one to add another.`, { fileName: `at most ${maxPhotosPerRequest} photos per request` });
+      throw badRequest(`A request can have at most ${maxPhotosPerRequest} photos. Remove one to add another.`, {
+        fileName: `at most ${maxPhotosPerRequest} photos per request`,
+      });
     }
     const id = randomUUID();
     const objectKey = `requests/${requestId}/photos/${id}.${photoExtensions[file.contentType]}`;
-    const [photo] = await tx.insert(photos).values({ id, requestId, uploaderId: user.id, objectKey, ...file }).returning();
-    const command = new PutObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: objectKey, ContentType: file.contentType, ContentLength: file.sizeBytes });
+    const [photo] = await tx
+      .insert(photos)
+      .values({ id, requestId, uploaderId: user.id, objectKey, ...file })
+      .returning();
+    const command = new PutObjectCommand({
+      Bucket: ctx.env.S3_BUCKET,
+      Key: objectKey,
+      ContentType: file.contentType,
+      ContentLength: file.sizeBytes,
+    });
     // Signing type and length means storage refuses any other file under this URL.
-    const url = await getSignedUrl(ctx.s3, command, { expiresIn: uploadSeconds, signableHeaders: new Set(['content-type']) });
-    return { photo, upload: { method: 'PUT' as const, url, headers: { 'content-type': file.contentType }, expiresInSeconds: uploadSeconds } };
+    const url = await getSignedUrl(ctx.s3, command, {
+      expiresIn: uploadSeconds,
+      signableHeaders: new Set(['content-type']),
+    });
+    return {
+      photo,
+      upload: {
+        method: 'PUT' as const,
+        url,
+        headers: { 'content-type': file.contentType },
+        expiresInSeconds: uploadSeconds,
+      },
+    };
   });
 }
 
 async function loadPhoto(tx: DbOrTx, requestId: string, photoId: string) {
-  const [photo] = await tx.select().from(photos).where(and(eq(photos.id, photoId), eq(photos.requestId, requestId))).for('update');
+  const [photo] = await tx
+    .select()
+    .from(photos)
+    .where(and(eq(photos.id, photoId), eq(photos.requestId, requestId)))
+    .for('update');
   if (!photo || photo.status === 'removed') throw notFound('Photo');
   return photo;
 }
 
 /** The stored object must be exactly the announced file, and a photo by its own first bytes, whatever it was called. */
 async function checkStoredFile(ctx: PhotoContext, photo: PhotoRow) {
-  const head = await ctx.s3.send(new HeadObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: photo.objectKey })).catch((error: { name?: string }) => {
-    if (error.name === 'NotFound' || error.name === 'NoSuchKey') return null;
-    throw error;
-  });
+  const head = await ctx.s3
+    .send(new HeadObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: photo.objectKey }))
+    .catch((error: { name?: string }) => {
+      if (error.name === 'NotFound' || error.name === 'NoSuchKey') return null;
+      throw error;
+    });
   if (!head) throw conflict('The photo has not reached storage. Upload it again.');
   if (head.ContentLength !== photo.sizeBytes || head.ContentType !== photo.contentType) {
     throw conflict('The stored file is not the one that was announced. Upload it again.');
@@ -69,17 +108,25 @@ async function checkStoredFile(ctx: PhotoContext, photo: PhotoRow) {
   // Not a photo (an SVG or a web page sent as an image, say): it must never be listed or served.
   await ctx.db.update(photos).set({ status: 'removed' }).where(eq(photos.id, photo.id));
   await ctx.s3.send(new DeleteObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: photo.objectKey }));
-  throw badRequest(`"${photo.fileName}" is not a JPEG, PNG, WebP or HEIC photo, so it was not added. Choose a photo file instead.`, {
-    fileName: 'is not a JPEG, PNG, WebP or HEIC photo',
-  });
+  throw badRequest(
+    `"${photo.fileName}" is not a JPEG, PNG, WebP or HEIC photo, so it was not added. Choose a photo file instead.`,
+    {
+      fileName: 'is not a JPEG, PNG, WebP or HEIC photo',
+    },
+  );
 }
 
 /**
  * Lists a photo only once storage holds the file that was announced. Storage is read between two short
  * transactions, so no row lock is held while waiting on the network.
  */
-export async function confirmUpload(ctx: PhotoContext, user: SessionUser, requestId: string, photoId: string,
-  extra: { caption?: string; gpsLat?: number | null; gpsLng?: number | null }) {
+export async function confirmUpload(
+  ctx: PhotoContext,
+  user: SessionUser,
+  requestId: string,
+  photoId: string,
+  extra: { caption?: string; gpsLat?: number | null; gpsLng?: number | null },
+) {
   const announced = await ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
     return loadPhoto(tx, requestId, photoId);
@@ -88,10 +135,17 @@ export async function confirmUpload(ctx: PhotoContext, user: SessionUser, reques
   return ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
     const photo = await loadPhoto(tx, requestId, photoId);
-    const [stored] = await tx.update(photos).set({
-      status: 'stored', storedAt: photo.storedAt ?? new Date(),
-      caption: extra.caption ?? photo.caption, gpsLat: extra.gpsLat ?? photo.gpsLat, gpsLng: extra.gpsLng ?? photo.gpsLng,
-    }).where(eq(photos.id, photo.id)).returning();
+    const [stored] = await tx
+      .update(photos)
+      .set({
+        status: 'stored',
+        storedAt: photo.storedAt ?? new Date(),
+        caption: extra.caption ?? photo.caption,
+        gpsLat: extra.gpsLat ?? photo.gpsLat,
+        gpsLng: extra.gpsLng ?? photo.gpsLng,
+      })
+      .where(eq(photos.id, photo.id))
+      .returning();
     return stored;
   });
 }
@@ -116,7 +170,10 @@ export async function removePhoto(ctx: PhotoContext, user: SessionUser, requestI
 }
 
 export async function listStored(db: DbOrTx, requestId: string) {
-  return db.select().from(photos).where(and(eq(photos.requestId, requestId), inArray(photos.status, ['stored'])))
+  return db
+    .select()
+    .from(photos)
+    .where(and(eq(photos.requestId, requestId), inArray(photos.status, ['stored'])))
     .orderBy(asc(photos.createdAt));
 }
 
@@ -128,10 +185,14 @@ const headerSafeName = (name: string) => name.replace(/[^\w.-]+/g, '-').slice(0,
  * disposition, whatever the object's own metadata says, so the file is only ever shown as the image it is.
  */
 export function viewUrl(store: Storage, photo: PhotoRow) {
-  return getSignedUrl(store.s3, new GetObjectCommand({
-    Bucket: store.env.S3_BUCKET,
-    Key: photo.objectKey,
-    ResponseContentType: photo.contentType,
-    ResponseContentDisposition: `inline; filename="${headerSafeName(photo.fileName)}"`,
-  }), { expiresIn: viewSeconds });
+  return getSignedUrl(
+    store.s3,
+    new GetObjectCommand({
+      Bucket: store.env.S3_BUCKET,
+      Key: photo.objectKey,
+      ResponseContentType: photo.contentType,
+      ResponseContentDisposition: `inline; filename="${headerSafeName(photo.fileName)}"`,
+    }),
+    { expiresIn: viewSeconds },
+  );
 }

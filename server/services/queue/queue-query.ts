@@ -4,29 +4,47 @@ import { requestStatusSchema } from '@shared/workflow/statuses';
 export const queueSorts = ['waiting', 'reference', 'applicant', 'road', 'created'] as const;
 export type QueueSort = (typeof queueSorts)[number];
 
-const csv = <T extends z.ZodType>(item: T, what: string) => z.string().max(400).optional().transform((value, ctx) => {
-  if (!value) return undefined;
-  const parsed: z.infer<T>[] = [];
-  for (const part of value.split(',').map((p) => p.trim()).filter(Boolean)) {
-    const result = item.safeParse(part);
-    if (!result.success) ctx.addIssue({ code: 'custom', message: `"${part}" is not a known ${what}` });
-    else parsed.push(result.data);
-  }
-  return parsed.length ? parsed : undefined;
-});
+const csv = <T extends z.ZodType>(item: T, what: string) =>
+  z
+    .string()
+    .max(400)
+    .optional()
+    .transform((value, ctx) => {
+      if (!value) return undefined;
+      const parsed: z.infer<T>[] = [];
+      for (const part of value
+        .split(',')
+        .map((p) => p.trim())
+        .filter(Boolean)) {
+        const result = item.safeParse(part);
+        if (!result.success) ctx.addIssue({ code: 'custom', message: `"${part}" is not a known ${what}` });
+        else parsed.push(result.data);
+      }
+      return parsed.length ? parsed : undefined;
+    });
 
 export const queueQuerySchema = z.object({
   status: csv(requestStatusSchema, 'status'),
   /** A jurisdiction id, or "none" for requests not yet matched to one. */
   jurisdiction: z.union([z.uuid(), z.literal('none')], { error: 'must be a jurisdiction id or "none"' }).optional(),
   /** A person's id, "me", or "none" for unassigned requests. */
-  assignee: z.union([z.uuid(), z.literal('me'), z.literal('none')], { error: 'must be a person id, "me" or "none"' }).optional(),
-  waiting: z.enum(['true', 'false'], { error: 'must be true or false' }).optional().transform((v) => v === 'true'),
+  assignee: z
+    .union([z.uuid(), z.literal('me'), z.literal('none')], { error: 'must be a person id, "me" or "none"' })
+    .optional(),
+  waiting: z
+    .enum(['true', 'false'], { error: 'must be true or false' })
+    .optional()
+    .transform((v) => v === 'true'),
   q: z.string().trim().max(120, 'must be at most 120 characters').optional(),
   sort: z.enum(queueSorts, { error: `must be one of: ${queueSorts.join(', ')}` }).default('waiting'),
   dir: z.enum(['asc', 'desc'], { error: 'must be asc or desc' }).default('asc'),
   cursor: z.string().max(400).optional(),
-  limit: z.coerce.number('must be a number').int('must be a whole number').min(1, 'must be at least 1').max(100, 'must be at most 100').default(50),
+  limit: z.coerce
+    .number('must be a number')
+    .int('must be a whole number')
+    .min(1, 'must be at least 1')
+    .max(100, 'must be at most 100')
+    .default(50),
 });
 export type QueueQuery = z.infer<typeof queueQuerySchema>;
 
@@ -35,7 +53,11 @@ export type QueueQuery = z.infer<typeof queueQuerySchema>;
  * text can never be read as query syntax; digits also match the signed numbers the parser makes of "GP-2026-00042".
  */
 export function searchQuery(text: string): string | null {
-  const words = text.toLowerCase().split(/[^\p{L}\p{N}]+/u).filter(Boolean).slice(0, 8);
+  const words = text
+    .toLowerCase()
+    .split(/[^\p{L}\p{N}]+/u)
+    .filter(Boolean)
+    .slice(0, 8);
   if (words.length === 0) return null;
   return words.map((w) => (/^\d+$/.test(w) ? `('${w}':* | '-${w}':*)` : `'${w}':*`)).join(' & ');
 }
@@ -49,7 +71,11 @@ export function encodeQueueCursor(value: string, id: string, ended?: boolean) {
 const pgTimestamp = /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?[+-]\d{2}(:\d{2})?$/;
 
 /** A cursor this list gave out for the sort in use, or null: the value must read back in the sort column's type. */
-export function decodeQueueCursor(cursor: string, sortsBy: 'time' | 'text', withEnded = false): { value: string; id: string; ended?: boolean } | null {
+export function decodeQueueCursor(
+  cursor: string,
+  sortsBy: 'time' | 'text',
+  withEnded = false,
+): { value: string; id: string; ended?: boolean } | null {
   try {
     const parsed: unknown = JSON.parse(Buffer.from(cursor, 'base64url').toString());
     if (!Array.isArray(parsed) || parsed.length !== (withEnded ? 3 : 2)) return null;
@@ -57,7 +83,13 @@ export function decodeQueueCursor(cursor: string, sortsBy: 'time' | 'text', with
     if (typeof value !== 'string' || typeof id !== 'string' || !z.uuid().safeParse(id).success) return null;
     if (withEnded && typeof ended !== 'boolean') return null;
     if (value.includes('\u0000')) return null;
-    if (sortsBy === 'time' && !(pgTimestamp.test(value) && Number.isFinite(Date.parse(value.replace(' ', 'T').replace(/([+-]\d{2})$/, '$1:00'))))) return null;
+    if (
+      sortsBy === 'time' &&
+      !(
+        pgTimestamp.test(value) && Number.isFinite(Date.parse(value.replace(' ', 'T').replace(/([+-]\d{2})$/, '$1:00')))
+      )
+    )
+      return null;
     return { value, id, ...(withEnded ? { ended: ended as boolean } : {}) };
   } catch {
     return null;

@@ -95,16 +95,29 @@ function build(db: DbOrTx, shape: QueueShape, name: string) {
   // The total belongs to the view, not the page: counted up to a cap on the first page only, inside the same
   // statement (an uncorrelated subquery runs once), so a page costs one round trip. Past a few hundred the exact
   // number changes nothing for the office, and counting further is the costly part.
-  const capped = db.select({ one: sql`1` }).from(requests).where(and(...where)).limit(queueCountCap + 1);
+  const capped = db
+    .select({ one: sql`1` })
+    .from(requests)
+    .where(and(...where))
+    .limit(queueCountCap + 1);
   const total = shape.cursor ? sql<null>`null::int` : sql<number>`(select count(*)::int from (${capped}) as capped)`;
-  return db.select({
-    id: requests.id, reference: requests.reference, status: requests.status,
-    applicantName: requests.applicantName, roadName: requests.roadName, statusChangedAt: iso(requests.statusChangedAt),
-    jurisdictionId: jurisdictions.id, jurisdictionName: jurisdictions.name,
-    assigneeId: assignee.id, assigneeName: assignee.name,
-    sortKey: sql<string>`${sortColumns[shape.sort].column}::text`, ended: requests.ended,
-    total,
-  }).from(requests)
+  return db
+    .select({
+      id: requests.id,
+      reference: requests.reference,
+      status: requests.status,
+      applicantName: requests.applicantName,
+      roadName: requests.roadName,
+      statusChangedAt: iso(requests.statusChangedAt),
+      jurisdictionId: jurisdictions.id,
+      jurisdictionName: jurisdictions.name,
+      assigneeId: assignee.id,
+      assigneeName: assignee.name,
+      sortKey: sql<string>`${sortColumns[shape.sort].column}::text`,
+      ended: requests.ended,
+      total,
+    })
+    .from(requests)
     .leftJoin(jurisdictions, eq(jurisdictions.id, requests.jurisdictionId))
     .leftJoin(assignee, eq(assignee.id, requests.assigneeId))
     .where(and(...where, ...(shape.cursor ? [after] : [])))
@@ -124,7 +137,9 @@ const prepared = new WeakMap<DbOrTx, Map<string, QueueStatement>>();
 export function queueStatement(db: DbOrTx, shape: QueueShape): QueueStatement {
   let byShape = prepared.get(db);
   if (!byShape) prepared.set(db, (byShape = new Map()));
-  const name = `queue_${Object.values(shape).map((v) => (v === true ? 1 : v === false || v === null ? 0 : v)).join('_')}`;
+  const name = `queue_${Object.values(shape)
+    .map((v) => (v === true ? 1 : v === false || v === null ? 0 : v))
+    .join('_')}`;
   let statement = byShape.get(name);
   if (!statement) byShape.set(name, (statement = build(db, shape, name)));
   return statement;

@@ -4,7 +4,14 @@ import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx } from '../../db/client';
 import { badRequest } from '../../lib/errors';
 import { decodeQueueCursor, encodeQueueCursor, searchQuery, type QueueQuery } from './queue-query';
-import { queueCountCap, queueStatement, sortsByTime, sortsEndedLast, type QueueShape, type QueueValues } from './queue-statement';
+import {
+  queueCountCap,
+  queueStatement,
+  sortsByTime,
+  sortsEndedLast,
+  type QueueShape,
+  type QueueValues,
+} from './queue-statement';
 
 const waitingElsewhere: Partial<Record<RequestStatus, string>> = {
   draft: 'The property owner is still filling it in',
@@ -17,14 +24,23 @@ const waitingElsewhere: Partial<Record<RequestStatus, string>> = {
 
 /** What the office does next, from the same table the server enforces. */
 export function nextOfficeAction(status: RequestStatus): string {
-  const moves = allowedTransitions(status, 'staff').filter((t) => t.action !== 'decline').map((t) => t.label);
+  const moves = allowedTransitions(status, 'staff')
+    .filter((t) => t.action !== 'decline')
+    .map((t) => t.label);
   if (moves.length > 0) return moves.join(' or ');
   return waitingElsewhere[status] ?? 'Nothing: finished';
 }
 
-const rowWords = Object.fromEntries(requestStatuses.map((status) => [status, {
-  statusLabel: statusText[status].label, waitingOnUs: waitingOnOffice.includes(status), nextAction: nextOfficeAction(status),
-}])) as Record<RequestStatus, { statusLabel: string; waitingOnUs: boolean; nextAction: string }>;
+const rowWords = Object.fromEntries(
+  requestStatuses.map((status) => [
+    status,
+    {
+      statusLabel: statusText[status].label,
+      waitingOnUs: waitingOnOffice.includes(status),
+      nextAction: nextOfficeAction(status),
+    },
+  ]),
+) as Record<RequestStatus, { statusLabel: string; waitingOnUs: boolean; nextAction: string }>;
 
 /**
  * One page of the office queue in a single query (assignee and jurisdiction joined, not fetched per row), with
@@ -32,16 +48,32 @@ const rowWords = Object.fromEntries(requestStatuses.map((status) => [status, {
  */
 export async function listQueue(db: DbOrTx, user: SessionUser, query: QueueQuery) {
   const search = query.q ? searchQuery(query.q) : null;
-  const cursor = query.cursor ? decodeQueueCursor(query.cursor, sortsByTime(query.sort) ? 'time' : 'text', sortsEndedLast(query.sort)) : null;
-  if (query.cursor && !cursor) throw badRequest('The page position is not one this list gave out.', { cursor: 'start again from the first page' });
+  const cursor = query.cursor
+    ? decodeQueueCursor(query.cursor, sortsByTime(query.sort) ? 'time' : 'text', sortsEndedLast(query.sort))
+    : null;
+  if (query.cursor && !cursor)
+    throw badRequest('The page position is not one this list gave out.', { cursor: 'start again from the first page' });
   const one = (value: string | undefined) => (value === 'none' ? 'none' : value ? 'one' : null);
   const shape: QueueShape = {
-    statuses: !query.status ? null : query.status.length === 1 ? 'one' : 'many', waiting: query.waiting, jurisdiction: one(query.jurisdiction), assignee: one(query.assignee),
-    search: Boolean(search), cursor: Boolean(cursor), sort: query.sort, dir: query.dir,
+    statuses: !query.status ? null : query.status.length === 1 ? 'one' : 'many',
+    waiting: query.waiting,
+    jurisdiction: one(query.jurisdiction),
+    assignee: one(query.assignee),
+    search: Boolean(search),
+    cursor: Boolean(cursor),
+    sort: query.sort,
+    dir: query.dir,
   };
   const values: QueueValues = {
-    status: query.status?.[0], statuses: query.status, jurisdiction: query.jurisdiction, search: search ?? undefined, limit: query.limit + 1,
-    assignee: query.assignee === 'me' ? user.id : query.assignee, cursorValue: cursor?.value, cursorId: cursor?.id, cursorEnded: cursor?.ended,
+    status: query.status?.[0],
+    statuses: query.status,
+    jurisdiction: query.jurisdiction,
+    search: search ?? undefined,
+    limit: query.limit + 1,
+    assignee: query.assignee === 'me' ? user.id : query.assignee,
+    cursorValue: cursor?.value,
+    cursorId: cursor?.id,
+    cursorEnded: cursor?.ended,
   };
   const rows = await queueStatement(db, shape).execute({ ...values });
   // No row on a first page means nothing matched at all.
@@ -50,13 +82,27 @@ export async function listQueue(db: DbOrTx, user: SessionUser, query: QueueQuery
   const items = more ? rows.slice(0, query.limit) : rows;
   const last = items.at(-1);
   return {
-    requests: items.map(({ sortKey: _key, ended: _ended, total: _total, jurisdictionId, jurisdictionName, assigneeId, assigneeName, ...row }) => ({
-      ...row,
-      ...rowWords[row.status],
-      jurisdiction: jurisdictionId ? { id: jurisdictionId, name: jurisdictionName ?? '' } : null,
-      assignee: assigneeId ? { id: assigneeId, name: assigneeName ?? '' } : null,
-    })),
-    nextCursor: more && last ? encodeQueueCursor(last.sortKey, last.id, sortsEndedLast(query.sort) ? last.ended : undefined) : null,
+    requests: items.map(
+      ({
+        sortKey: _key,
+        ended: _ended,
+        total: _total,
+        jurisdictionId,
+        jurisdictionName,
+        assigneeId,
+        assigneeName,
+        ...row
+      }) => ({
+        ...row,
+        ...rowWords[row.status],
+        jurisdiction: jurisdictionId ? { id: jurisdictionId, name: jurisdictionName ?? '' } : null,
+        assignee: assigneeId ? { id: assigneeId, name: assigneeName ?? '' } : null,
+      }),
+    ),
+    nextCursor:
+      more && last
+        ? encodeQueueCursor(last.sortKey, last.id, sortsEndedLast(query.sort) ? last.ended : undefined)
+        : null,
     total: n === null ? null : Math.min(n, queueCountCap),
     totalIsCapped: n !== null && n > queueCountCap,
   };

@@ -7,7 +7,8 @@ import path from 'node:path';
  */
 const require = createRequire(import.meta.url);
 const filesDir = path.join(path.dirname(require.resolve('@fontsource/merriweather/package.json')), 'files');
-const file = (weight: number, style: 'normal' | 'italic') => path.join(filesDir, `merriweather-latin-${weight}-${style}.woff`);
+const file = (weight: number, style: 'normal' | 'italic') =>
+  path.join(filesDir, `merriweather-latin-${weight}-${style}.woff`);
 
 export const reportFonts = {
   body: { name: 'Merriweather', file: file(400, 'normal') },

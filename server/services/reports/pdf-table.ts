@@ -13,7 +13,12 @@ function ensureRoom(doc: PDFKit.PDFDocument, needed: number) {
 }
 
 /** A plain ruled table that breaks across pages and repeats its header; rows grow to fit wrapped text. */
-export function drawTable(doc: PDFKit.PDFDocument, columns: Column[], rows: string[][], opts: { highlight?: (row: number) => boolean } = {}) {
+export function drawTable(
+  doc: PDFKit.PDFDocument,
+  columns: Column[],
+  rows: string[][],
+  opts: { highlight?: (row: number) => boolean } = {},
+) {
   const left = doc.page.margins.left;
   const fontSize = 8;
   const header = () => {
@@ -34,7 +39,8 @@ export function drawTable(doc: PDFKit.PDFDocument, columns: Column[], rows: stri
   header();
   rows.forEach((cells, i) => {
     doc.font(reportFonts.body.name).fontSize(fontSize);
-    const height = Math.max(...cells.map((cell, j) => doc.heightOfString(cell, { width: columns[j].width - 2 * PAD }))) + 2 * PAD;
+    const height =
+      Math.max(...cells.map((cell, j) => doc.heightOfString(cell, { width: columns[j].width - 2 * PAD }))) + 2 * PAD;
     if (doc.y + height > doc.page.height - doc.page.margins.bottom) {
       doc.addPage();
       header();
@@ -49,7 +55,12 @@ export function drawTable(doc: PDFKit.PDFDocument, columns: Column[], rows: stri
       doc.text(cell, x + PAD, top + PAD, { width: columns[j].width - 2 * PAD, align: columns[j].align ?? 'left' });
       x += columns[j].width;
     });
-    doc.moveTo(left, top + height).lineTo(left + total, top + height).lineWidth(0.3).strokeColor('#d6d3cd').stroke();
+    doc
+      .moveTo(left, top + height)
+      .lineTo(left + total, top + height)
+      .lineWidth(0.3)
+      .strokeColor('#d6d3cd')
+      .stroke();
     doc.y = top + height;
   });
   doc.x = left;
@@ -65,7 +76,12 @@ export function heading(doc: PDFKit.PDFDocument, text: string) {
 }
 
 export function paragraph(doc: PDFKit.PDFDocument, text: string, opts: { italic?: boolean } = {}) {
-  doc.font(opts.italic ? reportFonts.italic.name : reportFonts.body.name).fontSize(9).fillColor('#1c1f1d')
-    .text(text, doc.page.margins.left, doc.y, { width: doc.page.width - doc.page.margins.left - doc.page.margins.right });
+  doc
+    .font(opts.italic ? reportFonts.italic.name : reportFonts.body.name)
+    .fontSize(9)
+    .fillColor('#1c1f1d')
+    .text(text, doc.page.margins.left, doc.y, {
+      width: doc.page.width - doc.page.margins.left - doc.page.margins.right,
+    });
   doc.moveDown(0.4);
 }

@@ -10,5 +10,13 @@ export function apronSection(doc: PDFKit.PDFDocument, check: GradeCheck) {
   if (!apron) return;
   heading(doc, 'Entrance edges and warp stakes');
   paragraph(doc, `${warpWords(apron)} The grade and break checks on both edges are in the findings above.`);
-  drawTable(doc, warpStakeColumns.map((title, i) => ({ title, width: widths[i], align: i === 0 || i === 2 || i === 5 ? undefined : 'right' as const })), warpStakeRows(apron));
+  drawTable(
+    doc,
+    warpStakeColumns.map((title, i) => ({
+      title,
+      width: widths[i],
+      align: i === 0 || i === 2 || i === 5 ? undefined : ('right' as const),
+    })),
+    warpStakeRows(apron),
+  );
 }

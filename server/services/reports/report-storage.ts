@@ -6,15 +6,24 @@ import type { AppContext } from '../../config/context';
 export const DOWNLOAD_SECONDS = 300;
 
 export async function storeReport(ctx: Pick<AppContext, 's3' | 'env'>, key: string, body: Buffer) {
-  await ctx.s3.send(new PutObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: key, Body: body, ContentType: 'application/pdf' }));
+  await ctx.s3.send(
+    new PutObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: key, Body: body, ContentType: 'application/pdf' }),
+  );
 }
 
-export function downloadUrl(ctx: Pick<AppContext, 's3' | 'env'>, doc: { objectKey: string; title: string; contentType: string }) {
+export function downloadUrl(
+  ctx: Pick<AppContext, 's3' | 'env'>,
+  doc: { objectKey: string; title: string; contentType: string },
+) {
   const fileName = `${doc.title.replace(/[^\w.-]+/g, '-')}.pdf`;
-  return getSignedUrl(ctx.s3, new GetObjectCommand({
-    Bucket: ctx.env.S3_BUCKET,
-    Key: doc.objectKey,
-    ResponseContentType: doc.contentType,
-    ResponseContentDisposition: `inline; filename="${fileName}"`,
-  }), { expiresIn: DOWNLOAD_SECONDS });
+  return getSignedUrl(
+    ctx.s3,
+    new GetObjectCommand({
+      Bucket: ctx.env.S3_BUCKET,
+      Key: doc.objectKey,
+      ResponseContentType: doc.contentType,
+      ResponseContentDisposition: `inline; filename="${fileName}"`,
+    }),
+    { expiresIn: DOWNLOAD_SECONDS },
+  );
 }

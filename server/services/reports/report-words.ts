@@ -1,4 +1,11 @@
-import { displayLength, displaySmallLength, type DisplayUnits, type Finding, type FindingStatus, type RuleProfile } from '@shared/engine';
+import {
+  displayLength,
+  displaySmallLength,
+  type DisplayUnits,
+  type Finding,
+  type FindingStatus,
+  type RuleProfile,
+} from '@shared/engine';
 
 /** Printed on every grade check report; the field sheet carries the same reminders. */
 export const reportCautions = [
@@ -40,7 +47,8 @@ export function profileValueRows(profile: RuleProfile): string[][] {
   const rows: string[][] = [];
   const walk = (value: unknown, pathParts: string[]) => {
     if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
-      for (const [key, inner] of Object.entries(value)) if (pathParts.length > 0 || !skipped.has(key)) walk(inner, [...pathParts, key]);
+      for (const [key, inner] of Object.entries(value))
+        if (pathParts.length > 0 || !skipped.has(key)) walk(inner, [...pathParts, key]);
       return;
     }
     const key = pathParts.join('.');

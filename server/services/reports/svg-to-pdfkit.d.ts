@@ -6,5 +6,11 @@ declare module 'svg-to-pdfkit' {
     assumePt?: boolean;
     fontCallback?: (family: string, bold: boolean, italic: boolean) => string;
   }
-  export default function SVGtoPDF(doc: PDFKit.PDFDocument, svg: string, x: number, y: number, options?: SvgToPdfOptions): void;
+  export default function SVGtoPDF(
+    doc: PDFKit.PDFDocument,
+    svg: string,
+    x: number,
+    y: number,
+    options?: SvgToPdfOptions,
+  ): void;
 }

@@ -7,7 +7,6 @@ import { notFound } from '../../lib/errors';
 
 export type RequestRow = typeof requests.$inferSelect;
 
-
 /**
  * Who may see a request: its applicant, the office, and crew once it is released (any crew while it waits on
  * the board, then only the crew that took it). Everyone else gets 404, so ids are never confirmed.
@@ -19,7 +18,12 @@ export function canSee(user: SessionUser, row: RequestRow): boolean {
   return row.status === 'released' ? row.crewId === null : row.crewId === user.id;
 }
 
-export async function loadVisibleRequest(db: DbOrTx, user: SessionUser, id: string, opts: { forUpdate?: boolean } = {}) {
+export async function loadVisibleRequest(
+  db: DbOrTx,
+  user: SessionUser,
+  id: string,
+  opts: { forUpdate?: boolean } = {},
+) {
   const query = db.select().from(requests).where(eq(requests.id, id));
   const [row] = opts.forUpdate ? await query.for('update') : await query;
   if (!row || !canSee(user, row)) throw notFound('Request');

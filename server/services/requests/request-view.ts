@@ -43,8 +43,19 @@ export function requestView(row: RequestRow, user: SessionUser): RequestView<Dat
     statusChangedAt: row.statusChangedAt,
     createdAt: row.createdAt,
     updatedAt: row.updatedAt,
-    actions: allowedTransitions(row.status, user.role).map(({ action, label, needs, to }) => ({ action, label, needs, to })),
+    actions: allowedTransitions(row.status, user.role).map(({ action, label, needs, to }) => ({
+      action,
+      label,
+      needs,
+      to,
+    })),
   };
   if (!isOffice(user)) return base;
-  return { ...base, applicantId: row.applicantId, assigneeId: row.assigneeId, crewId: row.crewId, jurisdictionId: row.jurisdictionId } satisfies OfficeRequestView<Date>;
+  return {
+    ...base,
+    applicantId: row.applicantId,
+    assigneeId: row.assigneeId,
+    crewId: row.crewId,
+    jurisdictionId: row.jurisdictionId,
+  } satisfies OfficeRequestView<Date>;
 }

@@ -8,13 +8,24 @@ import { isOffice } from './request-view';
 /** Internal events (assignments, the office's notes) exist for the office only. */
 export async function listEvents(db: DbOrTx, user: SessionUser, requestId: string) {
   const office = isOffice(user);
-  const where = office ? eq(requestEvents.requestId, requestId)
+  const where = office
+    ? eq(requestEvents.requestId, requestId)
     : and(eq(requestEvents.requestId, requestId), eq(requestEvents.internal, false));
-  const rows = await db.select({
-    id: requestEvents.id, kind: requestEvents.kind, fromStatus: requestEvents.fromStatus, toStatus: requestEvents.toStatus,
-    note: requestEvents.note, internal: requestEvents.internal, createdAt: requestEvents.createdAt,
-    actorName: users.name, actorRole: users.role,
-  }).from(requestEvents).leftJoin(users, eq(users.id, requestEvents.actorId)).where(where)
+  const rows = await db
+    .select({
+      id: requestEvents.id,
+      kind: requestEvents.kind,
+      fromStatus: requestEvents.fromStatus,
+      toStatus: requestEvents.toStatus,
+      note: requestEvents.note,
+      internal: requestEvents.internal,
+      createdAt: requestEvents.createdAt,
+      actorName: users.name,
+      actorRole: users.role,
+    })
+    .from(requestEvents)
+    .leftJoin(users, eq(users.id, requestEvents.actorId))
+    .where(where)
     .orderBy(asc(requestEvents.createdAt), asc(requestEvents.id));
   return rows.map(({ internal, ...event }): EventView<Date> => (office ? { ...event, internal } : event));
 }

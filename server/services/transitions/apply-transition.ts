@@ -21,50 +21,101 @@ export type TransitionContext = Pick<AppContext, 'db' | 'env'>;
  * status for this role and that the caller saw the latest version, run the action's own checks and writes, then
  * write the status with what the action returned, an event row and the e-mails the change triggers.
  */
-export async function applyTransition(ctx: TransitionContext, actor: SessionUser, requestId: string, body: TransitionBody) {
+export async function applyTransition(
+  ctx: TransitionContext,
+  actor: SessionUser,
+  requestId: string,
+  body: TransitionBody,
+) {
   return ctx.db.transaction(async (tx) => {
     const row = await loadVisibleRequest(tx, actor, requestId, { forUpdate: true });
     const transition = findTransition(row.status, body.action);
     if (!transition) {
-      throw conflict(`This request is "${statusText[row.status].label}" (${row.status}); "${body.action}" is not possible from there.`);
+      throw conflict(
+        `This request is "${statusText[row.status].label}" (${row.status}); "${body.action}" is not possible from there.`,
+      );
     }
     if (!transition.roles.includes(actor.role)) throw forbidden(`Your role cannot "${transition.label}".`);
     if (row.version !== body.expectedVersion) {
-      throw conflict(`Someone else changed this request (now version ${row.version}, you had ${body.expectedVersion}). Reload to see the latest.`);
+      throw conflict(
+        `Someone else changed this request (now version ${row.version}, you had ${body.expectedVersion}). Reload to see the latest.`,
+      );
     }
     const now = new Date();
     const def = actionDefs[body.action] as ActionDef<TransitionAction>;
-    const added: ActionResult = (await def.run?.({ tx, row, body: body as TransitionBodyOf<TransitionAction>, actor, now })) ?? {};
-    const [updated] = await tx.update(requests)
+    const added: ActionResult =
+      (await def.run?.({ tx, row, body: body as TransitionBodyOf<TransitionAction>, actor, now })) ?? {};
+    const [updated] = await tx
+      .update(requests)
       .set({ ...added.patch, status: transition.to, version: row.version + 1, statusChangedAt: now, updatedAt: now })
       .where(and(eq(requests.id, row.id), eq(requests.version, row.version)))
       .returning();
     const note = (added.note ?? body.note ?? '').trim();
     const ownerReadsNote = !def.emails.noteTo || def.emails.noteTo.includes('applicant');
-    const [event] = await tx.insert(requestEvents).values({
-      requestId: row.id, actorId: actor.id, kind: 'transition', fromStatus: row.status, toStatus: transition.to, note: ownerReadsNote ? note : '',
-    }).returning({ id: requestEvents.id });
+    const [event] = await tx
+      .insert(requestEvents)
+      .values({
+        requestId: row.id,
+        actorId: actor.id,
+        kind: 'transition',
+        fromStatus: row.status,
+        toStatus: transition.to,
+        note: ownerReadsNote ? note : '',
+      })
+      .returning({ id: requestEvents.id });
     // A note the owner may not read goes on the office's side of the history only.
     if (!ownerReadsNote && note) {
-      await tx.insert(requestEvents).values({ requestId: row.id, actorId: actor.id, kind: 'crew-note', note, internal: true });
+      await tx
+        .insert(requestEvents)
+        .values({ requestId: row.id, actorId: actor.id, kind: 'crew-note', note, internal: true });
     }
-    await enqueueEmails(tx, await transitionEmails(tx, ctx, { transition, def, row: updated, note, detail: added.emailDetail, eventId: event.id }));
+    await enqueueEmails(
+      tx,
+      await transitionEmails(tx, ctx, {
+        transition,
+        def,
+        row: updated,
+        note,
+        detail: added.emailDetail,
+        eventId: event.id,
+      }),
+    );
     return { request: updated, eventId: event.id, transition };
   });
 }
 
-interface Sent { transition: Transition; def: ActionDef<TransitionAction>; row: RequestRow; note: string; detail?: string; eventId: number }
+interface Sent {
+  transition: Transition;
+  def: ActionDef<TransitionAction>;
+  row: RequestRow;
+  note: string;
+  detail?: string;
+  eventId: number;
+}
 
 async function transitionEmails(tx: Tx, ctx: TransitionContext, { transition, def, row, note, detail, eventId }: Sent) {
   const person = { email: users.email, name: users.name };
   const [applicant] = await tx.select(person).from(users).where(eq(users.id, row.applicantId));
   const [crew] = row.crewId ? await tx.select(person).from(users).where(eq(users.id, row.crewId)) : [];
   const crewLeads = def.emails.to.includes('crewLeads')
-    ? await tx.select(person).from(users).where(and(eq(users.role, 'crew'), eq(users.disabled, false)))
+    ? await tx
+        .select(person)
+        .from(users)
+        .where(and(eq(users.role, 'crew'), eq(users.disabled, false)))
     : [];
   return emailsForTransition({
-    transition, audiences: def.emails.to, noteTo: def.emails.noteTo, ownerNoteLead: def.emails.ownerNoteLead,
-    ownerReceipt: def.emails.ownerReceipt, request: row, note, applicant,
-    officeEmail: ctx.env.OFFICE_EMAIL, crew, crewLeads, appOrigin: ctx.env.APP_ORIGIN, detail,
+    transition,
+    audiences: def.emails.to,
+    noteTo: def.emails.noteTo,
+    ownerNoteLead: def.emails.ownerNoteLead,
+    ownerReceipt: def.emails.ownerReceipt,
+    request: row,
+    note,
+    applicant,
+    officeEmail: ctx.env.OFFICE_EMAIL,
+    crew,
+    crewLeads,
+    appOrigin: ctx.env.APP_ORIGIN,
+    detail,
   }).map((email) => ({ ...email, eventId }));
 }

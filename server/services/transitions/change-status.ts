@@ -11,13 +11,20 @@ import { actionDefs } from './registry';
  * The one door every status change goes through, whichever endpoint it came in by. The body is already parsed
  * with the action's shared input schema.
  */
-export async function changeStatus(ctx: TransitionContext, actor: SessionUser, requestId: string, body: TransitionBody) {
+export async function changeStatus(
+  ctx: TransitionContext,
+  actor: SessionUser,
+  requestId: string,
+  body: TransitionBody,
+) {
   try {
     // Answer "not from here" with the current status for the wrong role too, not only the wrong status: the person
     // sees why the button they expected is not there. The locked re-check happens in applyTransition.
     const current = await loadVisibleRequest(ctx.db, actor, requestId);
     if (!allowedTransitions(current.status, actor.role).some((t) => t.action === body.action)) {
-      throw conflict(`This request is "${statusText[current.status].label}" (${current.status}); "${body.action}" is not possible from there for you.`);
+      throw conflict(
+        `This request is "${statusText[current.status].label}" (${current.status}); "${body.action}" is not possible from there for you.`,
+      );
     }
     return await applyTransition(ctx, actor, requestId, body);
   } catch (error) {

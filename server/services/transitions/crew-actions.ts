@@ -10,8 +10,11 @@ const takenStatuses = new Set(['crew_assigned', 'under_construction', 'built', '
 
 /** After a lost race the job is someone else's: say whose, so the crew lead can call them rather than guess. */
 async function whoHasIt(db: DbOrTx, requestId: string, me: SessionUser): Promise<AppError | null> {
-  const [row] = await db.select({ status: requests.status, crewId: requests.crewId, name: users.name })
-    .from(requests).leftJoin(users, eq(users.id, requests.crewId)).where(eq(requests.id, requestId));
+  const [row] = await db
+    .select({ status: requests.status, crewId: requests.crewId, name: users.name })
+    .from(requests)
+    .leftJoin(users, eq(users.id, requests.crewId))
+    .where(eq(requests.id, requestId));
   if (!row || !row.crewId || row.crewId === me.id || !takenStatuses.has(row.status)) return null;
   return new AppError(409, 'job_taken', `${row.name ?? 'Another crew lead'} has already taken this job.`);
 }
@@ -23,7 +26,9 @@ async function whoHasIt(db: DbOrTx, requestId: string, me: SessionUser): Promise
 export const acceptJob: ActionDef<'accept-job'> = {
   emails: { to: ['applicant', 'office'] },
   run: async ({ tx, row, actor, now }) => {
-    await tx.update(jobs).set({ crewId: actor.id, acceptedAt: now, scheduledFor: null, startedAt: null, builtAt: null })
+    await tx
+      .update(jobs)
+      .set({ crewId: actor.id, acceptedAt: now, scheduledFor: null, startedAt: null, builtAt: null })
       .where(eq(jobs.requestId, row.id));
     return { patch: { crewId: actor.id }, emailDetail: `Crew lead: ${actor.name}.` };
   },

@@ -7,7 +7,8 @@ import type { ActionDef, ActionStep } from './action-def';
 import { lastAsBuiltSet } from './as-built-state';
 
 async function attachedGradeCheck(tx: Tx, requestId: string) {
-  const [check] = await tx.select({ id: gradeChecks.id, summary: gradeChecks.summary, passed: gradeChecks.passed })
+  const [check] = await tx
+    .select({ id: gradeChecks.id, summary: gradeChecks.summary, passed: gradeChecks.passed })
     .from(gradeChecks)
     .where(and(eq(gradeChecks.requestId, requestId), isNotNull(gradeChecks.attachedAt)))
     .orderBy(desc(gradeChecks.attachedAt))
@@ -16,14 +17,25 @@ async function attachedGradeCheck(tx: Tx, requestId: string) {
 }
 
 /** A decision usually follows the filing, which gave the reference; then it is only checked against the row. */
-function permitDecision({ row, body }: ActionStep<'record-granted' | 'record-refused'>, extra: Partial<RequestRow> = {}) {
+function permitDecision(
+  { row, body }: ActionStep<'record-granted' | 'record-refused'>,
+  extra: Partial<RequestRow> = {},
+) {
   if (!body.permitReference && !row.permitReference) {
     throw badRequest('Enter the permit reference.', { permitReference: 'enter the road authority’s permit number' });
   }
-  return { patch: { permitDecidedOn: body.permitDecidedOn, ...(body.permitReference ? { permitReference: body.permitReference } : {}), ...extra } };
+  return {
+    patch: {
+      permitDecidedOn: body.permitDecidedOn,
+      ...(body.permitReference ? { permitReference: body.permitReference } : {}),
+      ...extra,
+    },
+  };
 }
 
-export const askDetails: ActionDef<'ask-details'> = { emails: { to: ['applicant'], ownerNoteLead: 'The office asks:' } };
+export const askDetails: ActionDef<'ask-details'> = {
+  emails: { to: ['applicant'], ownerNoteLead: 'The office asks:' },
+};
 
 export const bookVisit: ActionDef<'book-visit'> = {
   emails: { to: ['applicant'] },
@@ -46,21 +58,30 @@ export const filePermit: ActionDef<'file-permit'> = {
 
 export const recordGranted: ActionDef<'record-granted'> = {
   emails: { to: ['applicant'] },
-  run: async (step) => permitDecision(step, {
-    ...(step.body.permitConditions !== undefined ? { permitConditions: step.body.permitConditions } : {}),
-    ...(step.body.permitExpiresOn !== undefined ? { permitExpiresOn: step.body.permitExpiresOn } : {}),
-  }),
+  run: async (step) =>
+    permitDecision(step, {
+      ...(step.body.permitConditions !== undefined ? { permitConditions: step.body.permitConditions } : {}),
+      ...(step.body.permitExpiresOn !== undefined ? { permitExpiresOn: step.body.permitExpiresOn } : {}),
+    }),
 };
 
-export const recordRefused: ActionDef<'record-refused'> = { emails: { to: ['applicant'] }, run: async (step) => permitDecision(step) };
+export const recordRefused: ActionDef<'record-refused'> = {
+  emails: { to: ['applicant'] },
+  run: async (step) => permitDecision(step),
+};
 
 export const release: ActionDef<'release'> = {
   // The release note is written for the crews; the owner is told the job reached the board, not what the office told the crew.
   emails: { to: ['applicant', 'crewLeads'], noteTo: ['crewLeads'] },
   run: async ({ tx, row, now }) => {
     const check = await attachedGradeCheck(tx, row.id);
-    await tx.insert(jobs).values({ requestId: row.id, gradeCheckId: check?.id ?? null })
-      .onConflictDoUpdate({ target: jobs.requestId, set: { releasedAt: now, crewId: null, acceptedAt: null, gradeCheckId: check?.id ?? null } });
+    await tx
+      .insert(jobs)
+      .values({ requestId: row.id, gradeCheckId: check?.id ?? null })
+      .onConflictDoUpdate({
+        target: jobs.requestId,
+        set: { releasedAt: now, crewId: null, acceptedAt: null, gradeCheckId: check?.id ?? null },
+      });
   },
 };
 
@@ -72,9 +93,12 @@ export const close: ActionDef<'close'> = {
   run: async ({ tx, row, body }) => {
     const set = await lastAsBuiltSet(tx, row.id);
     if (set && !set.passed && !body.note) {
-      throw badRequest('The crew’s last as-built readings fail the rule profile: write a closing note saying why the request closes anyway.', {
-        note: 'Closing note: say why the request closes although the as-built readings fail',
-      });
+      throw badRequest(
+        'The crew’s last as-built readings fail the rule profile: write a closing note saying why the request closes anyway.',
+        {
+          note: 'Closing note: say why the request closes although the as-built readings fail',
+        },
+      );
     }
   },
 };

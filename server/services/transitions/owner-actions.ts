@@ -15,7 +15,9 @@ export const answer: ActionDef<'answer'> = {
   emails: { to: ['office'] },
   // The answer is a message in the thread as well as the note of the change, so the office reads it in either place.
   run: async ({ tx, row, body, actor }) => {
-    await tx.insert(messages).values({ requestId: row.id, authorId: actor.id, visibility: 'shared', body: body.answer });
+    await tx
+      .insert(messages)
+      .values({ requestId: row.id, authorId: actor.id, visibility: 'shared', body: body.answer });
     return { note: body.note || body.answer };
   },
 };

@@ -1,7 +1,16 @@
 import type { ActionDefs } from './action-def';
 import { acceptJob, handBack, markBuilt, startWork } from './crew-actions';
 import {
-  askDetails, bookVisit, close, decline, filePermit, markChecked, recordGranted, recordRefused, release, sendBack,
+  askDetails,
+  bookVisit,
+  close,
+  decline,
+  filePermit,
+  markChecked,
+  recordGranted,
+  recordRefused,
+  release,
+  sendBack,
 } from './office-actions';
 import { answer, submit, withdraw } from './owner-actions';
 

@@ -7,32 +7,48 @@ import type { SessionUser } from '../../lib/session-user';
 
 const publicColumns = { id: users.id, email: users.email, name: users.name, role: users.role };
 
-export interface ProviderProfile { sub: string; email: string; name: string }
+export interface ProviderProfile {
+  sub: string;
+  email: string;
+  name: string;
+}
 
 /** Sign-in: a known subject or e-mail keeps its role; an unknown e-mail becomes an applicant. */
 export async function signInWithProfile(db: DbOrTx, profile: ProviderProfile): Promise<SessionUser> {
   const email = profile.email.trim().toLowerCase();
-  const [existing] = await db.select().from(users)
-    .where(or(eq(users.googleSub, profile.sub), sql`lower(${users.email}) = ${email}`)).limit(1);
+  const [existing] = await db
+    .select()
+    .from(users)
+    .where(or(eq(users.googleSub, profile.sub), sql`lower(${users.email}) = ${email}`))
+    .limit(1);
   if (existing?.disabled) throw forbidden('This account has been turned off. Please contact the office.');
   if (existing) {
-    const [updated] = await db.update(users)
+    const [updated] = await db
+      .update(users)
       .set({ googleSub: profile.sub, name: existing.name || profile.name, lastSignInAt: new Date() })
-      .where(eq(users.id, existing.id)).returning(publicColumns);
+      .where(eq(users.id, existing.id))
+      .returning(publicColumns);
     return updated;
   }
-  const [created] = await db.insert(users)
+  const [created] = await db
+    .insert(users)
     .values({ email, name: profile.name || email, role: 'applicant', googleSub: profile.sub, lastSignInAt: new Date() })
     .onConflictDoNothing()
     .returning(publicColumns);
   if (created) return created;
   // Two first sign-ins at once: the other one created the row.
-  const [raced] = await db.select(publicColumns).from(users).where(sql`lower(${users.email}) = ${email}`);
+  const [raced] = await db
+    .select(publicColumns)
+    .from(users)
+    .where(sql`lower(${users.email}) = ${email}`);
   return raced;
 }
 
 export async function findSessionUser(db: DbOrTx, id: string): Promise<SessionUser | null> {
-  const [user] = await db.select(publicColumns).from(users).where(and(eq(users.id, id), eq(users.disabled, false)));
+  const [user] = await db
+    .select(publicColumns)
+    .from(users)
+    .where(and(eq(users.id, id), eq(users.disabled, false)));
   return user ?? null;
 }
 
@@ -40,15 +56,32 @@ export async function listUsers(db: DbOrTx, opts: { search?: string; role?: Role
   const filters = [];
   if (opts.role) filters.push(eq(users.role, opts.role));
   if (opts.search) filters.push(or(ilike(users.email, `%${opts.search}%`), ilike(users.name, `%${opts.search}%`)));
-  return db.select({ ...publicColumns, disabled: users.disabled, createdAt: users.createdAt, lastSignInAt: users.lastSignInAt })
-    .from(users).where(filters.length ? and(...filters) : undefined).orderBy(asc(users.name)).limit(500);
+  return db
+    .select({
+      ...publicColumns,
+      disabled: users.disabled,
+      createdAt: users.createdAt,
+      lastSignInAt: users.lastSignInAt,
+    })
+    .from(users)
+    .where(filters.length ? and(...filters) : undefined)
+    .orderBy(asc(users.name))
+    .limit(500);
 }
 
-export async function setUserAccess(db: DbOrTx, actor: SessionUser, id: string, change: { role?: Role; disabled?: boolean }) {
-  if (id === actor.id && (change.role !== undefined && change.role !== 'admin' || change.disabled)) {
+export async function setUserAccess(
+  db: DbOrTx,
+  actor: SessionUser,
+  id: string,
+  change: { role?: Role; disabled?: boolean },
+) {
+  if (id === actor.id && ((change.role !== undefined && change.role !== 'admin') || change.disabled)) {
     throw forbidden('You cannot remove your own admin access.');
   }
-  const [updated] = await db.update(users).set(change).where(eq(users.id, id))
+  const [updated] = await db
+    .update(users)
+    .set(change)
+    .where(eq(users.id, id))
     .returning({ ...publicColumns, disabled: users.disabled });
   if (!updated) throw notFound('User');
   return updated;
@@ -60,12 +93,19 @@ export async function setUserAccess(db: DbOrTx, actor: SessionUser, id: string, 
  */
 export async function inviteUser(db: DbOrTx, input: { email: string; name: string; role: Role }) {
   const email = input.email.trim().toLowerCase();
-  const [existing] = await db.select({ name: users.name, role: users.role }).from(users).where(sql`lower(${users.email}) = ${email}`);
+  const [existing] = await db
+    .select({ name: users.name, role: users.role })
+    .from(users)
+    .where(sql`lower(${users.email}) = ${email}`);
   if (existing) {
     const who = `${existing.name} (${roleLabels[existing.role]})`;
-    throw conflict(`E-mail: ${email} already belongs to ${who}. Change their role in the list of people instead.`,
-      { email: `already belongs to ${who}` });
+    throw conflict(`E-mail: ${email} already belongs to ${who}. Change their role in the list of people instead.`, {
+      email: `already belongs to ${who}`,
+    });
   }
-  const [row] = await db.insert(users).values({ ...input, email }).returning({ ...publicColumns, disabled: users.disabled });
+  const [row] = await db
+    .insert(users)
+    .values({ ...input, email })
+    .returning({ ...publicColumns, disabled: users.disabled });
   return row;
 }

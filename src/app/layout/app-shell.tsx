@@ -33,25 +33,50 @@ export function AppShell() {
   const links = me ? navByRole[me.role] : [];
   return (
     <div className="flex min-h-screen flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2">Skip to content</a>
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2"
+      >
+        Skip to content
+      </a>
       <header className="no-print border-b-4 border-tape bg-pine-800 text-white">
         <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
           <Logo />
           <nav aria-label="Main" className="flex flex-1 flex-wrap gap-1">
             {links.map((link) => (
-              <NavLink key={link.to} to={link.to} end={false}
-                className={({ isActive }) => `rounded px-3 py-1.5 text-sm font-semibold ${isActive ? 'bg-pine-900 text-tape' : 'text-pine-100 hover:bg-pine-700'}`}>
+              <NavLink
+                key={link.to}
+                to={link.to}
+                end={false}
+                className={({ isActive }) =>
+                  `rounded px-3 py-1.5 text-sm font-semibold ${isActive ? 'bg-pine-900 text-tape' : 'text-pine-100 hover:bg-pine-700'}`
+                }
+              >
                 {link.label}
               </NavLink>
             ))}
           </nav>
           {me ? (
             <div className="flex items-center gap-3 text-sm">
-              <span><span className="font-semibold">{me.name}</span> <span className="text-pine-200">· {roleLabels[me.role]}</span></span>
-              <button type="button" onClick={() => signOut.mutate()} className="rounded border border-pine-500 px-3 py-1 hover:bg-pine-700">Sign out</button>
+              <span>
+                <span className="font-semibold">{me.name}</span>{' '}
+                <span className="text-pine-200">· {roleLabels[me.role]}</span>
+              </span>
+              <button
+                type="button"
+                onClick={() => signOut.mutate()}
+                className="rounded border border-pine-500 px-3 py-1 hover:bg-pine-700"
+              >
+                Sign out
+              </button>
             </div>
           ) : (
-            <NavLink to={paths.signIn.getHref()} className="rounded bg-tape px-3 py-1.5 text-sm font-semibold text-pine-900">Sign in</NavLink>
+            <NavLink
+              to={paths.signIn.getHref()}
+              className="rounded bg-tape px-3 py-1.5 text-sm font-semibold text-pine-900"
+            >
+              Sign in
+            </NavLink>
           )}
         </div>
       </header>
@@ -59,7 +84,8 @@ export function AppShell() {
         <Outlet />
       </main>
       <footer className="no-print border-t border-stone-200 py-4 text-center text-xs text-stone-500">
-        Gradepass supports, and never replaces, the road authority’s review, local codes and a licensed engineer where one is required.
+        Gradepass supports, and never replaces, the road authority’s review, local codes and a licensed engineer where
+        one is required.
       </footer>
     </div>
   );

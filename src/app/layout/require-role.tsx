@@ -12,7 +12,11 @@ export function RequireRole({ roles, children }: { roles: readonly Role[]; child
   if (isPending) return <Loading />;
   if (!me) return <Navigate to={`${paths.signIn.getHref()}?next=${encodeURIComponent(location.pathname)}`} replace />;
   if (!roles.includes(me.role)) {
-    return <Notice tone="warn" title="This page is not for your role">Use the menu above to find your own pages.</Notice>;
+    return (
+      <Notice tone="warn" title="This page is not for your role">
+        Use the menu above to find your own pages.
+      </Notice>
+    );
   }
   return <>{children}</>;
 }

@@ -6,7 +6,9 @@ export function Component() {
       <p className="font-mono text-sm text-stone-500">404</p>
       <h1 className="mt-2 text-3xl font-bold text-pine-900">Nothing is staked out here</h1>
       <p className="mt-3 text-stone-700">The page you asked for does not exist, or you do not have access to it.</p>
-      <Link to="/" className="mt-6 inline-block font-semibold text-pine-700 underline">Back to the start page</Link>
+      <Link to="/" className="mt-6 inline-block font-semibold text-pine-700 underline">
+        Back to the start page
+      </Link>
     </div>
   );
 }

@@ -19,9 +19,18 @@ export function Component() {
           Use your Google account. If this is your first time, we create your account as a property owner; the office
           gives staff and crew their access.
         </p>
-        {error && <div className="mb-4"><Notice tone="error" title="Sign-in did not finish">{error}</Notice></div>}
+        {error && (
+          <div className="mb-4">
+            <Notice tone="error" title="Sign-in did not finish">
+              {error}
+            </Notice>
+          </div>
+        )}
         {/* A full page load, not a fetch: the sign-in provider takes over the window. */}
-        <a href="/auth/google" className="block w-full rounded-md bg-pine-700 px-4 py-3 text-center font-semibold text-white hover:bg-pine-800">
+        <a
+          href="/auth/google"
+          className="block w-full rounded-md bg-pine-700 px-4 py-3 text-center font-semibold text-white hover:bg-pine-800"
+        >
           Sign in with Google
         </a>
       </Panel>

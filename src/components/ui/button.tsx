@@ -9,7 +9,12 @@ const variants: Record<Variant, string> = {
   quiet: 'text-pine-700 underline-offset-2 hover:underline disabled:text-stone-400',
 };
 
-export function Button({ variant = 'primary', className = '', type = 'button', ...props }: ComponentProps<'button'> & { variant?: Variant }) {
+export function Button({
+  variant = 'primary',
+  className = '',
+  type = 'button',
+  ...props
+}: ComponentProps<'button'> & { variant?: Variant }) {
   return (
     <button
       type={type}

@@ -7,7 +7,15 @@ const tones = {
   error: 'border-clay/40 bg-red-50 text-red-900',
 };
 
-export function Notice({ tone = 'info', children, title }: { tone?: keyof typeof tones; title?: ReactNode; children?: ReactNode }) {
+export function Notice({
+  tone = 'info',
+  children,
+  title,
+}: {
+  tone?: keyof typeof tones;
+  title?: ReactNode;
+  children?: ReactNode;
+}) {
   return (
     <div role={tone === 'error' ? 'alert' : 'status'} className={`rounded-md border px-4 py-3 text-sm ${tones[tone]}`}>
       {title && <p className="font-semibold">{title}</p>}
@@ -24,7 +32,11 @@ export function ErrorNotice({ error }: { error: unknown }) {
     <Notice tone="error" title={message}>
       {fields.length > 0 && (
         <ul className="mt-1 list-disc pl-5">
-          {fields.map(([field, text]) => <li key={field}><span className="font-mono">{field}</span>: {text}</li>)}
+          {fields.map(([field, text]) => (
+            <li key={field}>
+              <span className="font-mono">{field}</span>: {text}
+            </li>
+          ))}
         </ul>
       )}
     </Notice>
@@ -32,5 +44,9 @@ export function ErrorNotice({ error }: { error: unknown }) {
 }
 
 export function Loading({ label = 'Loading…' }: { label?: string }) {
-  return <p role="status" className="py-6 text-stone-500">{label}</p>;
+  return (
+    <p role="status" className="py-6 text-stone-500">
+      {label}
+    </p>
+  );
 }

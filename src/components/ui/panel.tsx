@@ -1,6 +1,16 @@
 import type { ReactNode } from 'react';
 
-export function Panel({ title, actions, children, className = '' }: { title?: ReactNode; actions?: ReactNode; children: ReactNode; className?: string }) {
+export function Panel({
+  title,
+  actions,
+  children,
+  className = '',
+}: {
+  title?: ReactNode;
+  actions?: ReactNode;
+  children: ReactNode;
+  className?: string;
+}) {
   return (
     <section className={`rounded-lg border border-stone-200 bg-white p-5 shadow-sm ${className}`}>
       {(title || actions) && (

@@ -8,5 +8,10 @@ import { profileChartSvg, type ProfileChartInput } from '@shared/charts/profile-
  */
 export function ProfileChart({ chart, className = '' }: { chart: ProfileChartInput; className?: string }) {
   const svg = useMemo(() => profileChartSvg({ ...chart, fontFamily: 'ui-sans-serif, system-ui, sans-serif' }), [chart]);
-  return <div className={`w-full overflow-hidden bg-white [&>svg]:h-auto [&>svg]:w-full ${className}`} dangerouslySetInnerHTML={{ __html: svg }} />;
+  return (
+    <div
+      className={`w-full overflow-hidden bg-white [&>svg]:h-auto [&>svg]:w-full ${className}`}
+      dangerouslySetInnerHTML={{ __html: svg }}
+    />
+  );
 }

@@ -8,5 +8,9 @@ export function StatusBadge({ status }: { status: RequestStatus }) {
       : waitingOnOffice.includes(status)
         ? 'bg-pine-50 text-pine-800 border-pine-200'
         : 'bg-sky-50 text-sky-900 border-sky-200';
-  return <span className={`inline-block whitespace-nowrap rounded-full border px-2.5 py-0.5 text-xs font-semibold ${tone}`}>{statusText[status].label}</span>;
+  return (
+    <span className={`inline-block whitespace-nowrap rounded-full border px-2.5 py-0.5 text-xs font-semibold ${tone}`}>
+      {statusText[status].label}
+    </span>
+  );
 }

@@ -9,7 +9,11 @@ import { RequestWizard, type PhotoSlotProps } from '@/features/requests/componen
 
 // The wizard's photos: added on their step, shown read-only on the summary.
 function WizardPhotos({ requestId, readOnly, onUsePosition }: PhotoSlotProps) {
-  return readOnly ? <PhotoGallery requestId={requestId} /> : <PhotoStep requestId={requestId} onUsePosition={onUsePosition} />;
+  return readOnly ? (
+    <PhotoGallery requestId={requestId} />
+  ) : (
+    <PhotoStep requestId={requestId} onUsePosition={onUsePosition} />
+  );
 }
 
 export function Component() {
@@ -18,10 +22,16 @@ export function Component() {
   const reference = useRequest(id).data?.request.reference;
   return (
     <RequireRole roles={['applicant']}>
-      <PageHeader title="Your driveway entrance request" lead={reference ? `Reference ${reference}. Saved as you go.` : undefined} />
-      <RequestWizard requestId={id} requestHref={paths.applicant.request.getHref(id)}
+      <PageHeader
+        title="Your driveway entrance request"
+        lead={reference ? `Reference ${reference}. Saved as you go.` : undefined}
+      />
+      <RequestWizard
+        requestId={id}
+        requestHref={paths.applicant.request.getHref(id)}
         onSent={(requestId) => navigate(paths.applicant.request.getHref(requestId))}
-        Photos={WizardPhotos} />
+        Photos={WizardPhotos}
+      />
     </RequireRole>
   );
 }

@@ -10,9 +10,21 @@ const hrefFor = (id: string, status: string) =>
 export function Component() {
   return (
     <RequireRole roles={['applicant']}>
-      <PageHeader title="My requests" lead="Every driveway entrance you have asked for, where it stands, and whether anything is waiting on you."
-        actions={<Link to={paths.applicant.newRequest.getHref()} className="rounded-md bg-pine-700 px-4 py-2 text-sm font-semibold text-white hover:bg-pine-800">Start a new request</Link>} />
-      <Panel><MyRequestsTable hrefFor={hrefFor} /></Panel>
+      <PageHeader
+        title="My requests"
+        lead="Every driveway entrance you have asked for, where it stands, and whether anything is waiting on you."
+        actions={
+          <Link
+            to={paths.applicant.newRequest.getHref()}
+            className="rounded-md bg-pine-700 px-4 py-2 text-sm font-semibold text-white hover:bg-pine-800"
+          >
+            Start a new request
+          </Link>
+        }
+      />
+      <Panel>
+        <MyRequestsTable hrefFor={hrefFor} />
+      </Panel>
     </RequireRole>
   );
 }

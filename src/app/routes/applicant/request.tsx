@@ -23,18 +23,35 @@ function RequestPage({ id }: { id: string }) {
   const { request, documents } = data;
   return (
     <>
-      <PageHeader title={request.siteAddress || 'Driveway entrance request'} lead={`Reference ${request.reference}${request.roadName ? ` · on ${request.roadName}` : ''}`} />
+      <PageHeader
+        title={request.siteAddress || 'Driveway entrance request'}
+        lead={`Reference ${request.reference}${request.roadName ? ` · on ${request.roadName}` : ''}`}
+      />
       <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
         <div className="space-y-6">
-          <Panel title="Where it stands"><RequestStatus request={request} editHref={paths.applicant.editRequest.getHref(id)} question={question} /></Panel>
-          <Panel title="Messages with the office"><MessageThread requestId={id} canWrite={request.status !== 'draft'} /></Panel>
-          <Panel title="Photos">{photosEditable(request.status) ? <PhotoStep requestId={id} /> : <PhotoGallery requestId={id} />}</Panel>
-          <Panel title="Your answers"><ApplicationSummary application={request.application} /></Panel>
+          <Panel title="Where it stands">
+            <RequestStatus request={request} editHref={paths.applicant.editRequest.getHref(id)} question={question} />
+          </Panel>
+          <Panel title="Messages with the office">
+            <MessageThread requestId={id} canWrite={request.status !== 'draft'} />
+          </Panel>
+          <Panel title="Photos">
+            {photosEditable(request.status) ? <PhotoStep requestId={id} /> : <PhotoGallery requestId={id} />}
+          </Panel>
+          <Panel title="Your answers">
+            <ApplicationSummary application={request.application} />
+          </Panel>
         </div>
         <div className="space-y-6">
-          <Panel title="Timeline"><EventList requestId={id} /></Panel>
-          <Panel title="Grade check"><CheckSummary requestId={id} /></Panel>
-          <Panel title="Documents"><RequestDocuments requestId={id} documents={documents} /></Panel>
+          <Panel title="Timeline">
+            <EventList requestId={id} />
+          </Panel>
+          <Panel title="Grade check">
+            <CheckSummary requestId={id} />
+          </Panel>
+          <Panel title="Documents">
+            <RequestDocuments requestId={id} documents={documents} />
+          </Panel>
         </div>
       </div>
     </>
@@ -43,5 +60,9 @@ function RequestPage({ id }: { id: string }) {
 
 export function Component() {
   const { id = '' } = useParams();
-  return <RequireRole roles={['applicant']}><RequestPage id={id} /></RequireRole>;
+  return (
+    <RequireRole roles={['applicant']}>
+      <RequestPage id={id} />
+    </RequireRole>
+  );
 }

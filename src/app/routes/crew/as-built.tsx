@@ -11,8 +11,15 @@ export function Component() {
   return (
     <RequireRole roles={crewScreenRoles}>
       <p className="mb-3 flex flex-wrap gap-4">
-        <Link to={crew ? paths.crew.myJobs.getHref() : paths.office.request.getHref(id)} className="font-semibold text-pine-800 underline">{crew ? '← My jobs' : '← The request'}</Link>
-        <Link to={paths.crew.fieldSheet.getHref(id)} className="font-semibold text-pine-800 underline">Field sheet</Link>
+        <Link
+          to={crew ? paths.crew.myJobs.getHref() : paths.office.request.getHref(id)}
+          className="font-semibold text-pine-800 underline"
+        >
+          {crew ? '← My jobs' : '← The request'}
+        </Link>
+        <Link to={paths.crew.fieldSheet.getHref(id)} className="font-semibold text-pine-800 underline">
+          Field sheet
+        </Link>
       </p>
       <AsBuiltPage id={id} canEnter={crew} />
     </RequireRole>

@@ -9,9 +9,16 @@ export function Component() {
   const me = useMe().data;
   return (
     <RequireRole roles={crewScreenRoles}>
-      <PageHeader title="Released jobs" lead="Permit granted, grade check attached, waiting for a crew. The first crew lead to take a job gets it." />
+      <PageHeader
+        title="Released jobs"
+        lead="Permit granted, grade check attached, waiting for a crew. The first crew lead to take a job gets it."
+      />
       <div className="space-y-6">
-        {me?.role === 'admin' && <Panel title="Where the crews start from"><YardForm /></Panel>}
+        {me?.role === 'admin' && (
+          <Panel title="Where the crews start from">
+            <YardForm />
+          </Panel>
+        )}
         <BoardList canTake={me?.role === 'crew'} />
       </div>
     </RequireRole>

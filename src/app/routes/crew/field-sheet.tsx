@@ -17,7 +17,14 @@ export function Component() {
   const holdsJob = crew && sheet.data?.job.crewId === me?.id;
   return (
     <RequireRole roles={crewScreenRoles}>
-      <p className="no-print mb-3"><Link to={crew ? paths.crew.myJobs.getHref() : paths.crew.board.getHref()} className="font-semibold text-pine-800 underline">{crew ? '← My jobs' : '← Released jobs'}</Link></p>
+      <p className="no-print mb-3">
+        <Link
+          to={crew ? paths.crew.myJobs.getHref() : paths.crew.board.getHref()}
+          className="font-semibold text-pine-800 underline"
+        >
+          {crew ? '← My jobs' : '← Released jobs'}
+        </Link>
+      </p>
       <FieldSheet id={id} />
       {holdsJob && (
         <Panel title="Messages with the property owner and the office" className="no-print mt-6">

@@ -5,7 +5,10 @@ import { MyJobsList } from '@/features/crew/components/my-jobs-list';
 export function Component() {
   return (
     <RequireRole roles={['crew']}>
-      <PageHeader title="My jobs" lead="From taken to built. Plan the day (the homeowner is e-mailed), print the field sheet, then enter the finished grades." />
+      <PageHeader
+        title="My jobs"
+        lead="From taken to built. Plan the day (the homeowner is e-mailed), print the field sheet, then enter the finished grades."
+      />
       <MyJobsList />
     </RequireRole>
   );

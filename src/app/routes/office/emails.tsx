@@ -6,7 +6,10 @@ import { EmailLog } from '@/features/emails/components/email-log';
 export function Component() {
   return (
     <RequireRole roles={officeRoles}>
-      <PageHeader title="E-mail log" lead="Every status e-mail: waiting, sent, failed and retried, with the error when delivery went wrong." />
+      <PageHeader
+        title="E-mail log"
+        lead="Every status e-mail: waiting, sent, failed and retried, with the error when delivery went wrong."
+      />
       <EmailLog />
     </RequireRole>
   );

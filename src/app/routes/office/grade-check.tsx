@@ -26,15 +26,33 @@ function GradeCheckPage({ id }: { id: string }) {
   return (
     <>
       <PageHeader
-        title={<>Survey and grade check <span className="font-mono text-xl">{request.reference}</span></>}
+        title={
+          <>
+            Survey and grade check <span className="font-mono text-xl">{request.reference}</span>
+          </>
+        }
         lead={`${request.applicantName} · ${request.siteAddress}${request.roadName ? ` on ${request.roadName}` : ''}`}
-        actions={<><StatusBadge status={request.status} /><Link to={paths.office.request.getHref(request.id)} className="text-sm font-semibold text-pine-700 hover:underline">← Back to the request</Link></>}
+        actions={
+          <>
+            <StatusBadge status={request.status} />
+            <Link
+              to={paths.office.request.getHref(request.id)}
+              className="text-sm font-semibold text-pine-700 hover:underline"
+            >
+              ← Back to the request
+            </Link>
+          </>
+        }
       />
       <div className="space-y-6">
         <Workspace request={request} checks={checks} />
         <div className="grid gap-6 lg:grid-cols-2">
-          <Panel title="Saved checks"><SavedChecks request={request} checks={checks} /></Panel>
-          <Panel title="Documents"><DocumentsList requestId={request.id} canShare /></Panel>
+          <Panel title="Saved checks">
+            <SavedChecks request={request} checks={checks} />
+          </Panel>
+          <Panel title="Documents">
+            <DocumentsList requestId={request.id} canShare />
+          </Panel>
         </div>
       </div>
     </>
@@ -43,5 +61,9 @@ function GradeCheckPage({ id }: { id: string }) {
 
 export function Component() {
   const { id = '' } = useParams();
-  return <RequireRole roles={officeRoles}><GradeCheckPage key={id} id={id} /></RequireRole>;
+  return (
+    <RequireRole roles={officeRoles}>
+      <GradeCheckPage key={id} id={id} />
+    </RequireRole>
+  );
 }

@@ -8,7 +8,10 @@ export function Component() {
   const me = useMe().data;
   return (
     <RequireRole roles={officeRoles}>
-      <PageHeader title="Queue" lead="Every request sent to the office, oldest wait first. Filter, search, take one and move it on." />
+      <PageHeader
+        title="Queue"
+        lead="Every request sent to the office, oldest wait first. Filter, search, take one and move it on."
+      />
       {me && <OfficeQueue meId={me.id} />}
     </RequireRole>
   );

@@ -19,28 +19,45 @@ function OfficeRequestPage({ id }: { id: string }) {
   const built = ['under_construction', 'built', 'closed'].includes(query.data?.request.status ?? '');
   const latest = useAsBuilt(id, built).data?.sets[0];
   // Closing over failing readings is allowed, but the office sees them first and writes down why.
-  const cautions = latest && !latest.passed
-    ? { close: `The crew’s last as-built readings fail the rule profile${latest.note ? ` (crew’s note: “${latest.note}”)` : ''}. Closing anyway needs a note saying why.` }
-    : undefined;
+  const cautions =
+    latest && !latest.passed
+      ? {
+          close: `The crew’s last as-built readings fail the rule profile${latest.note ? ` (crew’s note: “${latest.note}”)` : ''}. Closing anyway needs a note saying why.`,
+        }
+      : undefined;
   if (query.isPending) return <Loading label="Loading the request…" />;
   if (query.error) return <ErrorNotice error={query.error} />;
   const { request } = query.data;
   return (
     <>
       {me && (
-        <RequestWorkspace key={id} request={request} me={me} cautions={cautions} sections={{
-          application: () => <ApplicationSummary application={request.application} />,
-          photos: () => <PhotoGallery requestId={id} emptyText="The property owner has not added photos." />,
-          messages: () => <MessageThread requestId={id} office />,
-          history: () => <EventList requestId={id} office label="History" />,
-        }} />
+        <RequestWorkspace
+          key={id}
+          request={request}
+          me={me}
+          cautions={cautions}
+          sections={{
+            application: () => <ApplicationSummary application={request.application} />,
+            photos: () => <PhotoGallery requestId={id} emptyText="The property owner has not added photos." />,
+            messages: () => <MessageThread requestId={id} office />,
+            history: () => <EventList requestId={id} office label="History" />,
+          }}
+        />
       )}
-      {built && <div className="mt-6"><AsBuiltReview requestId={id} /></div>}
+      {built && (
+        <div className="mt-6">
+          <AsBuiltReview requestId={id} />
+        </div>
+      )}
     </>
   );
 }
 
 export function Component() {
   const { id = '' } = useParams();
-  return <RequireRole roles={officeRoles}><OfficeRequestPage id={id} /></RequireRole>;
+  return (
+    <RequireRole roles={officeRoles}>
+      <OfficeRequestPage id={id} />
+    </RequireRole>
+  );
 }

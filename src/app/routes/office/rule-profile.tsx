@@ -18,23 +18,51 @@ function RuleProfilePage({ id }: { id: string }) {
   if (isPending) return <Loading />;
   if (error) return <ErrorNotice error={error} />;
   const j = data.jurisdiction;
-  const selected = j.versions.find((v) => v.id === params.get('version')) ?? j.versions.find((v) => v.status === 'draft') ?? j.versions[0];
+  const selected =
+    j.versions.find((v) => v.id === params.get('version')) ??
+    j.versions.find((v) => v.status === 'draft') ??
+    j.versions[0];
   const canEdit = me?.role === 'admin';
   return (
     <>
-      <PageHeader title={j.name} lead={j.authority}
-        actions={<Link to={paths.office.ruleProfiles.getHref()} className="text-sm font-semibold text-pine-700 hover:underline">← All rule profiles</Link>} />
+      <PageHeader
+        title={j.name}
+        lead={j.authority}
+        actions={
+          <Link
+            to={paths.office.ruleProfiles.getHref()}
+            className="text-sm font-semibold text-pine-700 hover:underline"
+          >
+            ← All rule profiles
+          </Link>
+        }
+      />
       <div className="grid gap-6 lg:grid-cols-[18rem_1fr]">
         <Panel title="Versions">
-          <VersionsList jurisdiction={j} selectedId={selected?.id ?? ''} canEdit={canEdit} onSelect={(version) => setParams({ version }, { replace: true })} />
+          <VersionsList
+            jurisdiction={j}
+            selectedId={selected?.id ?? ''}
+            canEdit={canEdit}
+            onSelect={(version) => setParams({ version }, { replace: true })}
+          />
         </Panel>
         <div className="space-y-6">
           {selected && (
-            <Panel title={`Version ${selected.version} · ${selected.status === 'draft' ? 'draft' : 'published, read only'}`}>
-              {selected.status === 'draft' && canEdit ? <ProfileForm key={selected.id} version={selected} /> : <ProfileView profile={selected.profile} />}
+            <Panel
+              title={`Version ${selected.version} · ${selected.status === 'draft' ? 'draft' : 'published, read only'}`}
+            >
+              {selected.status === 'draft' && canEdit ? (
+                <ProfileForm key={selected.id} version={selected} />
+              ) : (
+                <ProfileView profile={selected.profile} />
+              )}
             </Panel>
           )}
-          {j.versions.length > 1 && <Panel title="What changed between versions"><VersionCompare versions={j.versions} /></Panel>}
+          {j.versions.length > 1 && (
+            <Panel title="What changed between versions">
+              <VersionCompare versions={j.versions} />
+            </Panel>
+          )}
         </div>
       </div>
     </>
@@ -43,5 +71,9 @@ function RuleProfilePage({ id }: { id: string }) {
 
 export function Component() {
   const { id = '' } = useParams();
-  return <RequireRole roles={officeRoles}><RuleProfilePage key={id} id={id} /></RequireRole>;
+  return (
+    <RequireRole roles={officeRoles}>
+      <RuleProfilePage key={id} id={id} />
+    </RequireRole>
+  );
 }

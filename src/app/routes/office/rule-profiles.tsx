@@ -9,10 +9,19 @@ export function Component() {
   const me = useMe().data;
   return (
     <RequireRole roles={officeRoles}>
-      <PageHeader title="Rule profiles" lead="Each road authority's limits, with where every value comes from. Checks always name the version they used." />
+      <PageHeader
+        title="Rule profiles"
+        lead="Each road authority's limits, with where every value comes from. Checks always name the version they used."
+      />
       <div className="space-y-6">
-        <Panel title="Road authorities"><JurisdictionsList /></Panel>
-        {me?.role === 'admin' && <Panel title="Add a road authority"><NewJurisdictionForm /></Panel>}
+        <Panel title="Road authorities">
+          <JurisdictionsList />
+        </Panel>
+        {me?.role === 'admin' && (
+          <Panel title="Add a road authority">
+            <NewJurisdictionForm />
+          </Panel>
+        )}
       </div>
     </RequireRole>
   );

@@ -6,10 +6,17 @@ import { UsersTable } from '@/features/people/components/users-table';
 export function Component() {
   return (
     <RequireRole roles={['admin']}>
-      <PageHeader title="Users and roles" lead="Everyone who signs in starts as a property owner. Give office staff, crew leads and admins their access here." />
+      <PageHeader
+        title="Users and roles"
+        lead="Everyone who signs in starts as a property owner. Give office staff, crew leads and admins their access here."
+      />
       <div className="space-y-6">
-        <Panel title="Add a person"><InviteUserForm /></Panel>
-        <Panel title="People"><UsersTable /></Panel>
+        <Panel title="Add a person">
+          <InviteUserForm />
+        </Panel>
+        <Panel title="People">
+          <UsersTable />
+        </Panel>
       </div>
     </RequireRole>
   );

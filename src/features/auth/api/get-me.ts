@@ -2,7 +2,12 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Role } from '@shared/workflow/statuses';
 import { api, ApiError } from '@/lib/api-client';
 
-export interface Me { id: string; email: string; name: string; role: Role }
+export interface Me {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+}
 
 /** The signed-in person, or null when nobody is signed in (a 401 is an answer here, not an error). */
 export async function getMe(): Promise<Me | null> {

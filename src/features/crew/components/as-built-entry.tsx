@@ -21,48 +21,93 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
   const [rows, setRows] = useState<ReadingRow[]>(() => [emptyRow()]);
   const [note, setNote] = useState('');
   const save = useSaveAsBuilt();
-  const basis = useMemo(() => ({ ruleProfile: page.ruleProfile, design: page.design, roadEdgeStationFt: page.roadEdgeStationFt }), [page]);
+  const basis = useMemo(
+    () => ({ ruleProfile: page.ruleProfile, design: page.design, roadEdgeStationFt: page.roadEdgeStationFt }),
+    [page],
+  );
   const checks = useMemo(() => checkRows(rows, basis), [rows, basis]);
   const whole = useMemo(() => checkWholeSet(checks, basis), [checks, basis]);
   const fields = save.error instanceof ApiError ? save.error.fields : {};
   const rules = page.ruleProfile;
   const open = canEnter && page.job.status === 'under_construction';
 
-  const change = (key: number, c: Partial<ReadingRow>) => setRows((list) => list.map((r) => (r.key === key ? { ...r, ...c } : r)));
-  const remove = (key: number) => setRows((list) => (list.length === 1 ? [emptyRow()] : list.filter((r) => r.key !== key)));
+  const change = (key: number, c: Partial<ReadingRow>) =>
+    setRows((list) => list.map((r) => (r.key === key ? { ...r, ...c } : r)));
+  const remove = (key: number) =>
+    setRows((list) => (list.length === 1 ? [emptyRow()] : list.filter((r) => r.key !== key)));
   const submit = (event: FormEvent) => {
     event.preventDefault();
     const readings = checks.flatMap((c) => (c.reading ? [c.reading] : []));
-    save.mutate({ id: page.job.requestId, readings, note: note || undefined }, { onSuccess: () => { setRows([emptyRow()]); setNote(''); } });
+    save.mutate(
+      { id: page.job.requestId, readings, note: note || undefined },
+      {
+        onSuccess: () => {
+          setRows([emptyRow()]);
+          setNote('');
+        },
+      },
+    );
   };
 
   return (
     <div className="space-y-6 text-lg">
       <Notice title={`Checked against ${page.ruleProfileLabel}`}>
-        Landing (first {rules.landing.lengthFt} ft): {pct(rules.landing.minGradePercent, 1)} to {pct(rules.landing.maxGradePercent, 1)}; beyond it at most {pct(rules.maxGradePercent, 1)}.
-        As-built tolerance {pct(rules.asBuilt.gradeTolerancePercent, 1)} on grade{page.design ? `, ${rules.asBuilt.elevationToleranceFt.toFixed(2)} ft off the design elevation` : ''}.
+        Landing (first {rules.landing.lengthFt} ft): {pct(rules.landing.minGradePercent, 1)} to{' '}
+        {pct(rules.landing.maxGradePercent, 1)}; beyond it at most {pct(rules.maxGradePercent, 1)}. As-built tolerance{' '}
+        {pct(rules.asBuilt.gradeTolerancePercent, 1)} on grade
+        {page.design ? `, ${rules.asBuilt.elevationToleranceFt.toFixed(2)} ft off the design elevation` : ''}.
       </Notice>
       {open ? (
         <Panel title="Enter readings along the centreline">
           <form onSubmit={submit} noValidate className="space-y-4">
             <ReadingsTable rows={rows} checks={checks} serverFields={fields} onChange={change} onRemove={remove} />
             <div className="flex flex-wrap gap-3">
-              <Button variant="secondary" onClick={() => setRows((list) => [...list, emptyRow(list[list.length - 1]?.kind)])} className="min-h-12 px-5 text-base">Add a reading</Button>
+              <Button
+                variant="secondary"
+                onClick={() => setRows((list) => [...list, emptyRow(list[list.length - 1]?.kind)])}
+                className="min-h-12 px-5 text-base"
+              >
+                Add a reading
+              </Button>
             </div>
-            {whole && <p aria-live="polite" className="flex flex-wrap items-center gap-2 font-semibold">Whole set so far: <StatusWords status={whole.status} /></p>}
+            {whole && (
+              <p aria-live="polite" className="flex flex-wrap items-center gap-2 font-semibold">
+                Whole set so far: <StatusWords status={whole.status} />
+              </p>
+            )}
             <Field label="Note for the office (optional)" error={fields.note}>
-              {({ id, describedBy, invalid }) => <TextArea id={id} aria-describedby={describedBy} aria-invalid={invalid} value={note} onChange={(e) => setNote(e.target.value)} />}
+              {({ id, describedBy, invalid }) => (
+                <TextArea
+                  id={id}
+                  aria-describedby={describedBy}
+                  aria-invalid={invalid}
+                  value={note}
+                  onChange={(e) => setNote(e.target.value)}
+                />
+              )}
             </Field>
             {save.error && <ErrorNotice error={save.error} />}
             {save.isSuccess && <Notice title="Set saved">The server checked it: see the latest set below.</Notice>}
-            <Button type="submit" disabled={save.isPending || !whole} className="min-h-12 px-6 text-base">Save this set</Button>
+            <Button type="submit" disabled={save.isPending || !whole} className="min-h-12 px-6 text-base">
+              Save this set
+            </Button>
           </form>
         </Panel>
       ) : (
-        <Notice title="Readings are closed">{canEnter ? 'Readings are entered while the job is being built; this one is not under way.' : 'The crew lead who has the job enters the readings.'}</Notice>
+        <Notice title="Readings are closed">
+          {canEnter
+            ? 'Readings are entered while the job is being built; this one is not under way.'
+            : 'The crew lead who has the job enters the readings.'}
+        </Notice>
       )}
-      <Panel title="Saved sets"><SavedSets sets={page.sets} /></Panel>
-      {canEnter && <Panel title="Finish the job"><MarkBuiltPanel page={page} /></Panel>}
+      <Panel title="Saved sets">
+        <SavedSets sets={page.sets} />
+      </Panel>
+      {canEnter && (
+        <Panel title="Finish the job">
+          <MarkBuiltPanel page={page} />
+        </Panel>
+      )}
     </div>
   );
 }

@@ -9,10 +9,17 @@ export function AsBuiltReview({ requestId }: { requestId: string }) {
   const page = useAsBuilt(requestId);
   if (!page.data) return null;
   return (
-    <Panel title="As-built grades from the crew" actions={
-      <Link to={paths.crew.asBuilt.getHref(requestId)} className="text-sm font-semibold text-pine-700 underline">All readings</Link>
-    }>
-      <p className="mb-3 text-sm text-stone-600">Checked by the engine against {page.data.ruleProfileLabel}, the version the approved grade check used.</p>
+    <Panel
+      title="As-built grades from the crew"
+      actions={
+        <Link to={paths.crew.asBuilt.getHref(requestId)} className="text-sm font-semibold text-pine-700 underline">
+          All readings
+        </Link>
+      }
+    >
+      <p className="mb-3 text-sm text-stone-600">
+        Checked by the engine against {page.data.ruleProfileLabel}, the version the approved grade check used.
+      </p>
       <SavedSets sets={page.data.sets.slice(0, 1)} />
     </Panel>
   );

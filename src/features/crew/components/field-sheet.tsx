@@ -32,52 +32,112 @@ export function FieldSheet({ id }: { id: string }) {
       <header className="flex flex-wrap items-start justify-between gap-3">
         <div>
           <h1 className="text-3xl font-bold print:text-[14pt]">Field sheet · {s.job.reference}</h1>
-          <p className="text-xl font-semibold print:text-[10pt]">{s.job.siteAddress} · {s.job.roadName}</p>
-          <p>Homeowner {s.job.applicantName} · crew {s.job.crewName ?? 'not taken yet'} · work day {day(s.job.scheduledFor)}</p>
+          <p className="text-xl font-semibold print:text-[10pt]">
+            {s.job.siteAddress} · {s.job.roadName}
+          </p>
+          <p>
+            Homeowner {s.job.applicantName} · crew {s.job.crewName ?? 'not taken yet'} · work day{' '}
+            {day(s.job.scheduledFor)}
+          </p>
         </div>
-        <button type="button" onClick={() => window.print()} className="no-print min-h-12 rounded-md bg-pine-800 px-5 font-semibold text-white">Print this sheet</button>
+        <button
+          type="button"
+          onClick={() => window.print()}
+          className="no-print min-h-12 rounded-md bg-pine-800 px-5 font-semibold text-white"
+        >
+          Print this sheet
+        </button>
       </header>
 
       <section aria-label="Cautions" className="rounded border-4 border-tape p-3 print:border-2 print:p-1">
         <h2 className="text-xl font-bold print:text-[10pt]">Before and while you dig</h2>
         <ul className="list-disc space-y-1 pl-6 print:space-y-0">
-          {s.cautions.map((c) => <li key={c}>{c}</li>)}
+          {s.cautions.map((c) => (
+            <li key={c}>{c}</li>
+          ))}
         </ul>
       </section>
 
       <div className="grid gap-4 md:grid-cols-2 print:grid-cols-2 print:gap-2">
         <Section title="Site and access">
-          <p>{s.access.whereText || 'No landmark given.'}{s.access.parcelNumber ? ` · parcel ${s.access.parcelNumber}` : ''}</p>
-          <p>Road owner: {s.access.roadOwner || 'not given'}{s.access.postedSpeedMph ? ` · posted ${s.access.postedSpeedMph} mph` : ''}</p>
-          {s.access.notes && <p><strong>Notes:</strong> {s.access.notes}</p>}
+          <p>
+            {s.access.whereText || 'No landmark given.'}
+            {s.access.parcelNumber ? ` · parcel ${s.access.parcelNumber}` : ''}
+          </p>
+          <p>
+            Road owner: {s.access.roadOwner || 'not given'}
+            {s.access.postedSpeedMph ? ` · posted ${s.access.postedSpeedMph} mph` : ''}
+          </p>
+          {s.access.notes && (
+            <p>
+              <strong>Notes:</strong> {s.access.notes}
+            </p>
+          )}
         </Section>
         <Section title="Permit">
-          <p><strong>{s.permit.reference ?? 'No reference recorded'}</strong>{s.permit.authority ? ` · ${s.permit.authority}` : ''}</p>
+          <p>
+            <strong>{s.permit.reference ?? 'No reference recorded'}</strong>
+            {s.permit.authority ? ` · ${s.permit.authority}` : ''}
+          </p>
           <p>Expires {day(s.permit.expiresOn)}</p>
-          {s.permit.conditions && <p><strong>Conditions:</strong> {s.permit.conditions}</p>}
+          {s.permit.conditions && (
+            <p>
+              <strong>Conditions:</strong> {s.permit.conditions}
+            </p>
+          )}
         </Section>
       </div>
 
       <Section title="Grade check">
-        {s.check ? <p>Check {s.check.number} against {s.check.ruleProfileLabel}: {s.check.summary}</p> : <p>No saved grade check.</p>}
-        {s.rules && <p>Landing {station(0)} to {station(s.rules.landingLengthFt)}: {pct(s.rules.landingMinPercent, 1)} to {pct(s.rules.landingMaxPercent, 1)}. Beyond it at most {pct(s.rules.maxGradePercent, 1)}.</p>}
+        {s.check ? (
+          <p>
+            Check {s.check.number} against {s.check.ruleProfileLabel}: {s.check.summary}
+          </p>
+        ) : (
+          <p>No saved grade check.</p>
+        )}
+        {s.rules && (
+          <p>
+            Landing {station(0)} to {station(s.rules.landingLengthFt)}: {pct(s.rules.landingMinPercent, 1)} to{' '}
+            {pct(s.rules.landingMaxPercent, 1)}. Beyond it at most {pct(s.rules.maxGradePercent, 1)}.
+          </p>
+        )}
       </Section>
 
-      <Section title="Laser">{s.laser ? <SheetLaser laser={s.laser} /> : <p>No laser setup in the saved check.</p>}</Section>
+      <Section title="Laser">
+        {s.laser ? <SheetLaser laser={s.laser} /> : <p>No laser setup in the saved check.</p>}
+      </Section>
 
-      {s.apron && <Section title="Warp stakes at the entrance edges"><SheetWarp apron={s.apron} /></Section>}
+      {s.apron && (
+        <Section title="Warp stakes at the entrance edges">
+          <SheetWarp apron={s.apron} />
+        </Section>
+      )}
 
       <div className="grid gap-4 md:grid-cols-[2fr_1fr] print:grid-cols-[2fr_1fr] print:gap-2">
         <Section title="Design profile">
-          {s.design ? <ProfileChart chart={s.design.chart} className="print:[&>svg]:h-[1.6in] print:[&>svg]:w-auto" /> : <p>No profile in the saved check.</p>}
+          {s.design ? (
+            <ProfileChart chart={s.design.chart} className="print:[&>svg]:h-[1.6in] print:[&>svg]:w-auto" />
+          ) : (
+            <p>No profile in the saved check.</p>
+          )}
           {s.design && s.design.cutFill.length > 0 && (
             <table className="mt-1 w-full border-collapse text-left">
               <caption className="text-left font-bold">Cut and fill on the centreline</caption>
-              <thead><tr className="border-b-2 border-stone-800"><th className="pr-2">Station</th><th className="pr-2">Ground</th><th className="pr-2">Design</th><th>Cut / fill</th></tr></thead>
+              <thead>
+                <tr className="border-b-2 border-stone-800">
+                  <th className="pr-2">Station</th>
+                  <th className="pr-2">Ground</th>
+                  <th className="pr-2">Design</th>
+                  <th>Cut / fill</th>
+                </tr>
+              </thead>
               <tbody>
                 {s.design.cutFill.map((c) => (
                   <tr key={c.stationFt} className="border-b border-stone-400">
-                    <td className="pr-2">{station(c.stationFt)}</td><td className="pr-2">{ft(c.existingFt)}</td><td className="pr-2">{ft(c.designFt)}</td>
+                    <td className="pr-2">{station(c.stationFt)}</td>
+                    <td className="pr-2">{ft(c.existingFt)}</td>
+                    <td className="pr-2">{ft(c.designFt)}</td>
                     <td className="font-bold">{cutFillWords(c.cutFillFt)}</td>
                   </tr>
                 ))}
@@ -86,9 +146,10 @@ export function FieldSheet({ id }: { id: string }) {
           )}
           <EarthworkLine earthwork={s.earthwork} />
         </Section>
-        <Section title="Culvert"><SheetCulvert culvert={s.culvert} /></Section>
+        <Section title="Culvert">
+          <SheetCulvert culvert={s.culvert} />
+        </Section>
       </div>
-
     </article>
   );
 }

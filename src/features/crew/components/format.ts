@@ -9,7 +9,13 @@ export const station = (v: number) => formatStation(v);
 export function day(iso: string | null | undefined): string {
   if (!iso) return '—';
   const d = iso.length === 10 ? new Date(`${iso}T12:00:00Z`) : new Date(iso);
-  return d.toLocaleDateString('en-US', { weekday: 'short', day: 'numeric', month: 'short', year: 'numeric', timeZone: iso.length === 10 ? 'UTC' : undefined });
+  return d.toLocaleDateString('en-US', {
+    weekday: 'short',
+    day: 'numeric',
+    month: 'short',
+    year: 'numeric',
+    timeZone: iso.length === 10 ? 'UTC' : undefined,
+  });
 }
 
 export function cutFillWords(cutFillFt: number): string {

@@ -15,7 +15,12 @@ export function HandBackForm({ job }: { job: MyJob }) {
   const [open, setOpen] = useState(false);
   const [note, setNote] = useState('');
   const fields = handBack.error instanceof ApiError ? handBack.error.fields : {};
-  if (!open) return <Button variant="secondary" onClick={() => setOpen(true)} className="min-h-11">Hand the job back…</Button>;
+  if (!open)
+    return (
+      <Button variant="secondary" onClick={() => setOpen(true)} className="min-h-11">
+        Hand the job back…
+      </Button>
+    );
   const submit = (event: FormEvent) => {
     event.preventDefault();
     handBack.mutate({ id: job.requestId, expectedVersion: job.version, note });
@@ -23,12 +28,24 @@ export function HandBackForm({ job }: { job: MyJob }) {
   return (
     <form onSubmit={submit} noValidate className="w-full space-y-3 rounded-md border-2 border-clay/40 p-3">
       <Field label={noteField.text.label} hint={noteField.text.hint} error={fields.note}>
-        {({ id, describedBy, invalid }) => <TextArea id={id} aria-describedby={describedBy} aria-invalid={invalid} value={note} onChange={(e) => setNote(e.target.value)} />}
+        {({ id, describedBy, invalid }) => (
+          <TextArea
+            id={id}
+            aria-describedby={describedBy}
+            aria-invalid={invalid}
+            value={note}
+            onChange={(e) => setNote(e.target.value)}
+          />
+        )}
       </Field>
       {handBack.error && <ErrorNotice error={handBack.error} />}
       <div className="flex flex-wrap gap-2">
-        <Button type="submit" variant="danger" disabled={handBack.isPending} className="min-h-11">Hand it back</Button>
-        <Button variant="secondary" onClick={() => setOpen(false)} className="min-h-11">Keep the job</Button>
+        <Button type="submit" variant="danger" disabled={handBack.isPending} className="min-h-11">
+          Hand it back
+        </Button>
+        <Button variant="secondary" onClick={() => setOpen(false)} className="min-h-11">
+          Keep the job
+        </Button>
       </div>
     </form>
   );

@@ -23,8 +23,12 @@ export function MyJobsList() {
         if (list.length === 0) return null;
         return (
           <section key={title} aria-label={title} className="space-y-3">
-            <h2 className="text-xl font-bold text-pine-900">{title} <span className="text-base font-normal text-stone-600">({list.length})</span></h2>
-            {list.map((job) => <MyJobCard key={job.requestId} job={job} />)}
+            <h2 className="text-xl font-bold text-pine-900">
+              {title} <span className="text-base font-normal text-stone-600">({list.length})</span>
+            </h2>
+            {list.map((job) => (
+              <MyJobCard key={job.requestId} job={job} />
+            ))}
           </section>
         );
       })}

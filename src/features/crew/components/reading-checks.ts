@@ -1,7 +1,19 @@
-import { checkAsBuilt, parseStation, type AsBuiltReadingResult, type AsBuiltStatus, type ProfilePoint, type RuleProfile } from '@shared/engine';
+import {
+  checkAsBuilt,
+  parseStation,
+  type AsBuiltReadingResult,
+  type AsBuiltStatus,
+  type ProfilePoint,
+  type RuleProfile,
+} from '@shared/engine';
 import type { AsBuiltReadingInput } from '@shared/crew/crew-inputs';
 
-export interface ReadingRow { key: number; station: string; kind: 'grade' | 'elevation'; value: string }
+export interface ReadingRow {
+  key: number;
+  station: string;
+  kind: 'grade' | 'elevation';
+  value: string;
+}
 
 export interface RowCheck {
   reading: AsBuiltReadingInput | null;
@@ -10,7 +22,11 @@ export interface RowCheck {
   results: AsBuiltReadingResult[];
 }
 
-export interface CheckBasis { ruleProfile: RuleProfile; design: ProfilePoint[] | null; roadEdgeStationFt: number }
+export interface CheckBasis {
+  ruleProfile: RuleProfile;
+  design: ProfilePoint[] | null;
+  roadEdgeStationFt: number;
+}
 
 function toReading(row: ReadingRow): { reading: AsBuiltReadingInput | null; error: string | null } {
   if (row.station.trim() === '' && row.value.trim() === '') return { reading: null, error: null };
@@ -21,15 +37,30 @@ function toReading(row: ReadingRow): { reading: AsBuiltReadingInput | null; erro
     return { reading: null, error: 'Station: e.g. 0+20 or 20' };
   }
   const value = Number(row.value);
-  if (row.value.trim() === '' || !Number.isFinite(value)) return { reading: null, error: row.kind === 'grade' ? 'Grade: a number in %' : 'Elevation: a number in ft' };
-  return { reading: row.kind === 'grade' ? { stationFt, gradePercent: value } : { stationFt, elevationFt: value }, error: null };
+  if (row.value.trim() === '' || !Number.isFinite(value))
+    return { reading: null, error: row.kind === 'grade' ? 'Grade: a number in %' : 'Elevation: a number in ft' };
+  return {
+    reading: row.kind === 'grade' ? { stationFt, gradePercent: value } : { stationFt, elevationFt: value },
+    error: null,
+  };
 }
 
 const worst = (list: AsBuiltReadingResult[]): AsBuiltStatus | null =>
-  list.length === 0 ? null : list.some((r) => r.status === 'fail') ? 'fail' : list.some((r) => r.status === 'advisory') ? 'advisory' : 'pass';
+  list.length === 0
+    ? null
+    : list.some((r) => r.status === 'fail')
+      ? 'fail'
+      : list.some((r) => r.status === 'advisory')
+        ? 'advisory'
+        : 'pass';
 
 const run = (basis: CheckBasis, readings: AsBuiltReadingInput[]) =>
-  checkAsBuilt({ readings: readings as never, ruleProfile: basis.ruleProfile, design: basis.design ?? undefined, roadEdgeStationFt: basis.roadEdgeStationFt });
+  checkAsBuilt({
+    readings: readings as never,
+    ruleProfile: basis.ruleProfile,
+    design: basis.design ?? undefined,
+    roadEdgeStationFt: basis.roadEdgeStationFt,
+  });
 
 /**
  * Each reading checked the moment it is typed, by the same engine the server uses on save. A grade stands on
@@ -37,7 +68,9 @@ const run = (basis: CheckBasis, readings: AsBuiltReadingInput[]) =>
  */
 export function checkRows(rows: ReadingRow[], basis: CheckBasis): RowCheck[] {
   const parsed = rows.map(toReading);
-  const elevations = parsed.map((p, i) => ({ p, i })).filter(({ p }) => p.reading && p.reading.elevationFt !== undefined)
+  const elevations = parsed
+    .map((p, i) => ({ p, i }))
+    .filter(({ p }) => p.reading && p.reading.elevationFt !== undefined)
     .sort((a, b) => a.p.reading!.stationFt - b.p.reading!.stationFt);
   return parsed.map(({ reading, error }, i) => {
     if (!reading) return { reading, error, status: null, results: [] };
@@ -49,10 +82,17 @@ export function checkRows(rows: ReadingRow[], basis: CheckBasis): RowCheck[] {
       const at = elevations.findIndex((e) => e.i === i);
       const previous = at > 0 ? elevations[at - 1].p.reading! : null;
       const shots = previous && previous.stationFt !== reading.stationFt ? [previous, reading] : [reading];
-      const results = run(basis, shots).readings.filter((r) => (r.ruleId === 'as-built.elevation' ? r.stationFt === reading.stationFt : shots.length === 2));
+      const results = run(basis, shots).readings.filter((r) =>
+        r.ruleId === 'as-built.elevation' ? r.stationFt === reading.stationFt : shots.length === 2,
+      );
       return { reading, error, status: worst(results), results };
     } catch (e) {
-      return { reading: null, error: e instanceof Error ? e.message : 'Cannot check this reading', status: null, results: [] };
+      return {
+        reading: null,
+        error: e instanceof Error ? e.message : 'Cannot check this reading',
+        status: null,
+        results: [],
+      };
     }
   });
 }

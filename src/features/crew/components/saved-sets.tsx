@@ -10,13 +10,18 @@ export function SavedSets({ sets }: { sets: AsBuiltSetView[] }) {
       {sets.map((set, n) => (
         <li key={set.id} className="rounded-lg border-2 border-stone-300 bg-white p-3">
           <p className="flex flex-wrap items-center gap-2 font-semibold">
-            <StatusWords status={set.status} /> {n === 0 ? 'Latest set' : 'Earlier set'} · {set.readings.length} readings · {set.crewName} · {day(set.createdAt)}
+            <StatusWords status={set.status} /> {n === 0 ? 'Latest set' : 'Earlier set'} · {set.readings.length}{' '}
+            readings · {set.crewName} · {day(set.createdAt)}
           </p>
           {set.note && <p className="mt-1">Note: {set.note}</p>}
           <ul className="mt-2 space-y-0.5 text-base">
-            {set.results.filter((r) => r.status !== 'pass').map((r) => (
-              <li key={`${r.ruleId}-${r.stationFt}`}>{station(r.stationFt)}: <StatusWords status={r.status} /> {resultWords(r)}</li>
-            ))}
+            {set.results
+              .filter((r) => r.status !== 'pass')
+              .map((r) => (
+                <li key={`${r.ruleId}-${r.stationFt}`}>
+                  {station(r.stationFt)}: <StatusWords status={r.status} /> {resultWords(r)}
+                </li>
+              ))}
             {set.results.every((r) => r.status === 'pass') && <li>Every reading is inside the limits.</li>}
           </ul>
         </li>

@@ -8,12 +8,25 @@ const axis = (percent: number, rising: string, falling: string) =>
 function Setup({ title, plane, span }: { title: string; plane: PlaneSetting; span: string }) {
   return (
     <div className="rounded border-2 border-stone-800 p-3 print:p-1.5">
-      <h3 className="font-bold">{title} <span className="font-normal">({span})</span></h3>
+      <h3 className="font-bold">
+        {title} <span className="font-normal">({span})</span>
+      </h3>
       <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5">
-        <dt className="font-semibold">Along the road</dt><dd>{axis(plane.alongRoadPercent, 'rising to the right', 'falling to the right')} <span className="text-sm print:text-[7pt]">(facing into the property)</span></dd>
-        <dt className="font-semibold">Along the driveway</dt><dd>{axis(plane.alongDrivewayPercent, 'rising away from the road', 'falling away from the road')}</dd>
-        <dt className="font-semibold">Steepest</dt><dd>{pct(plane.steepestPercent)}, bearing {Math.round(plane.steepestBearingDeg)}°</dd>
-        <dt className="font-semibold">Start</dt><dd>station {station(plane.originDistanceFt)}, design elevation {ft(plane.originElevationFt)}</dd>
+        <dt className="font-semibold">Along the road</dt>
+        <dd>
+          {axis(plane.alongRoadPercent, 'rising to the right', 'falling to the right')}{' '}
+          <span className="text-sm print:text-[7pt]">(facing into the property)</span>
+        </dd>
+        <dt className="font-semibold">Along the driveway</dt>
+        <dd>{axis(plane.alongDrivewayPercent, 'rising away from the road', 'falling away from the road')}</dd>
+        <dt className="font-semibold">Steepest</dt>
+        <dd>
+          {pct(plane.steepestPercent)}, bearing {Math.round(plane.steepestBearingDeg)}°
+        </dd>
+        <dt className="font-semibold">Start</dt>
+        <dd>
+          station {station(plane.originDistanceFt)}, design elevation {ft(plane.originElevationFt)}
+        </dd>
       </dl>
     </div>
   );
@@ -25,32 +38,56 @@ export function SheetLaser({ laser }: { laser: LaserSheet }) {
     <div className="space-y-3 print:space-y-1.5">
       <div className="grid gap-3 sm:grid-cols-2 print:grid-cols-2 print:gap-1.5">
         <Setup title="Setup 1: landing" plane={laser.first} span={`road edge to ${station(laser.landingLengthFt)}`} />
-        <Setup title="Setup 2: driveway" plane={laser.second} span={`from ${station(laser.second.originDistanceFt)} on`} />
+        <Setup
+          title="Setup 2: driveway"
+          plane={laser.second}
+          span={`from ${station(laser.second.originDistanceFt)} on`}
+        />
       </div>
-      {laser.warp && <p><strong>Warp:</strong> {laser.warp.description} No laser plane carries it: build it to the stakes.</p>}
-      <p><strong>Receiver offset:</strong> on grade reads <strong>{ft(laser.receiverOffsetFt)}</strong> on the rod. A shorter reading means cut, a longer one fill.</p>
+      {laser.warp && (
+        <p>
+          <strong>Warp:</strong> {laser.warp.description} No laser plane carries it: build it to the stakes.
+        </p>
+      )}
+      <p>
+        <strong>Receiver offset:</strong> on grade reads <strong>{ft(laser.receiverOffsetFt)}</strong> on the rod. A
+        shorter reading means cut, a longer one fill.
+      </p>
       {laser.stakes.length > 0 && (
         // On a phone the seven columns scroll sideways rather than crushing the numbers.
-        <div className="overflow-x-auto print:overflow-visible"><table className="w-full min-w-[34rem] border-collapse text-left print:min-w-0">
-          <caption className="text-left font-bold">Stakes</caption>
-          <thead><tr className="border-b-2 border-stone-800">
-            <th className="py-1 pr-2">Stake</th><th className="pr-2">Station</th><th className="pr-2">Offset</th><th className="pr-2">Setup</th>
-            <th className="pr-2">Rod</th><th className="pr-2">Design elev.</th><th>Cut / fill</th>
-          </tr></thead>
-          <tbody>
-            {laser.stakes.map((s) => (
-              <tr key={`${s.label}-${s.distanceFt}-${s.offsetFt}`} className="border-b border-stone-400">
-                <td className="py-1 pr-2 font-semibold">{s.label}</td>
-                <td className="pr-2">{station(s.distanceFt)}</td>
-                <td className="pr-2">{s.offsetFt === 0 ? 'centreline' : `${Math.abs(s.offsetFt)} ft ${s.offsetFt < 0 ? 'left' : 'right'}`}</td>
-                <td className="pr-2">{s.setup === 'first' ? '1' : s.setup === 'warp' ? 'warp' : '2'}</td>
-                <td className="pr-2">{ft(s.rodReadingFt)}</td>
-                <td className="pr-2">{ft(s.designElevationFt)}</td>
-                <td className="font-bold">{s.instruction}</td>
+        <div className="overflow-x-auto print:overflow-visible">
+          <table className="w-full min-w-[34rem] border-collapse text-left print:min-w-0">
+            <caption className="text-left font-bold">Stakes</caption>
+            <thead>
+              <tr className="border-b-2 border-stone-800">
+                <th className="py-1 pr-2">Stake</th>
+                <th className="pr-2">Station</th>
+                <th className="pr-2">Offset</th>
+                <th className="pr-2">Setup</th>
+                <th className="pr-2">Rod</th>
+                <th className="pr-2">Design elev.</th>
+                <th>Cut / fill</th>
               </tr>
-            ))}
-          </tbody>
-        </table></div>
+            </thead>
+            <tbody>
+              {laser.stakes.map((s) => (
+                <tr key={`${s.label}-${s.distanceFt}-${s.offsetFt}`} className="border-b border-stone-400">
+                  <td className="py-1 pr-2 font-semibold">{s.label}</td>
+                  <td className="pr-2">{station(s.distanceFt)}</td>
+                  <td className="pr-2">
+                    {s.offsetFt === 0
+                      ? 'centreline'
+                      : `${Math.abs(s.offsetFt)} ft ${s.offsetFt < 0 ? 'left' : 'right'}`}
+                  </td>
+                  <td className="pr-2">{s.setup === 'first' ? '1' : s.setup === 'warp' ? 'warp' : '2'}</td>
+                  <td className="pr-2">{ft(s.rodReadingFt)}</td>
+                  <td className="pr-2">{ft(s.designElevationFt)}</td>
+                  <td className="font-bold">{s.instruction}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       )}
     </div>
   );

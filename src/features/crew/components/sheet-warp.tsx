@@ -8,10 +8,24 @@ export function SheetWarp({ apron }: { apron: ApronSummary | null }) {
     <div className="space-y-1">
       <p>{warpWords(apron)}</p>
       <table className="w-full border-collapse text-left" aria-label="Warp stakes">
-        <thead><tr className="border-b-2 border-stone-800">{warpStakeColumns.map((c) => <th key={c} className="pr-2">{c}</th>)}</tr></thead>
+        <thead>
+          <tr className="border-b-2 border-stone-800">
+            {warpStakeColumns.map((c) => (
+              <th key={c} className="pr-2">
+                {c}
+              </th>
+            ))}
+          </tr>
+        </thead>
         <tbody>
           {warpStakeRows(apron).map((row) => (
-            <tr key={row[0]} className="border-b border-stone-400">{row.map((cell, i) => <td key={warpStakeColumns[i]} className={`pr-2 ${i === 3 || i === 6 ? 'font-bold' : ''}`}>{cell}</td>)}</tr>
+            <tr key={row[0]} className="border-b border-stone-400">
+              {row.map((cell, i) => (
+                <td key={warpStakeColumns[i]} className={`pr-2 ${i === 3 || i === 6 ? 'font-bold' : ''}`}>
+                  {cell}
+                </td>
+              ))}
+            </tr>
           ))}
         </tbody>
       </table>

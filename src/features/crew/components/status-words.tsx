@@ -26,6 +26,11 @@ export function resultWords(r: AsBuiltReadingResult): string {
   const what = ruleWords[r.ruleId] ?? r.ruleId;
   const unit = r.unit === '%' ? '%' : ` ${r.unit}`;
   // A grade runs from its station; a change between two grades happens at one.
-  const from = r.ruleId === 'as-built.elevation' ? '' : r.ruleId === 'grade.max-change' ? ` at ${station(r.stationFt)}` : ` from ${station(r.stationFt)}`;
+  const from =
+    r.ruleId === 'as-built.elevation'
+      ? ''
+      : r.ruleId === 'grade.max-change'
+        ? ` at ${station(r.stationFt)}`
+        : ` from ${station(r.stationFt)}`;
   return `${what}${from}: ${r.measured.toFixed(2)}${unit} (limit ${r.limit.toFixed(2)}${unit})`;
 }

@@ -27,13 +27,51 @@ export function YardForm() {
   };
   return (
     <form onSubmit={submit} noValidate className="grid gap-3 sm:grid-cols-4 sm:items-end">
-      <Field label="Yard name" error={fields.label}>{({ id, describedBy, invalid }) => <TextInput id={id} aria-describedby={describedBy} aria-invalid={invalid} value={form.label} onChange={(e) => setForm({ ...form, label: e.target.value })} />}</Field>
-      <Field label="Latitude" hint="e.g. 44.0312" error={fields.lat}>{({ id, describedBy, invalid }) => <TextInput id={id} inputMode="decimal" aria-describedby={describedBy} aria-invalid={invalid} value={form.lat} onChange={(e) => setForm({ ...form, lat: e.target.value })} />}</Field>
-      <Field label="Longitude" hint="e.g. -72.6021" error={fields.lng}>{({ id, describedBy, invalid }) => <TextInput id={id} inputMode="decimal" aria-describedby={describedBy} aria-invalid={invalid} value={form.lng} onChange={(e) => setForm({ ...form, lng: e.target.value })} />}</Field>
-      <Button type="submit" disabled={save.isPending}>Save the yard</Button>
+      <Field label="Yard name" error={fields.label}>
+        {({ id, describedBy, invalid }) => (
+          <TextInput
+            id={id}
+            aria-describedby={describedBy}
+            aria-invalid={invalid}
+            value={form.label}
+            onChange={(e) => setForm({ ...form, label: e.target.value })}
+          />
+        )}
+      </Field>
+      <Field label="Latitude" hint="e.g. 44.0312" error={fields.lat}>
+        {({ id, describedBy, invalid }) => (
+          <TextInput
+            id={id}
+            inputMode="decimal"
+            aria-describedby={describedBy}
+            aria-invalid={invalid}
+            value={form.lat}
+            onChange={(e) => setForm({ ...form, lat: e.target.value })}
+          />
+        )}
+      </Field>
+      <Field label="Longitude" hint="e.g. -72.6021" error={fields.lng}>
+        {({ id, describedBy, invalid }) => (
+          <TextInput
+            id={id}
+            inputMode="decimal"
+            aria-describedby={describedBy}
+            aria-invalid={invalid}
+            value={form.lng}
+            onChange={(e) => setForm({ ...form, lng: e.target.value })}
+          />
+        )}
+      </Field>
+      <Button type="submit" disabled={save.isPending}>
+        Save the yard
+      </Button>
       <div className="sm:col-span-4">
-        {save.isSuccess && <Notice title="Yard saved">Distances on the board are now measured from {save.data.yard.label}.</Notice>}
-        {save.error && !(save.error instanceof ApiError && Object.keys(fields).length > 0) && <ErrorNotice error={save.error} />}
+        {save.isSuccess && (
+          <Notice title="Yard saved">Distances on the board are now measured from {save.data.yard.label}.</Notice>
+        )}
+        {save.error && !(save.error instanceof ApiError && Object.keys(fields).length > 0) && (
+          <ErrorNotice error={save.error} />
+        )}
       </div>
     </form>
   );

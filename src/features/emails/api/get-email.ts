@@ -7,6 +7,7 @@ export type { EmailDetailView as EmailDetail } from '@shared/contracts/emails';
 
 export const getEmail = (id: string) => api.get<{ email: EmailDetailView }>(`/api/emails/${id}`);
 
-export const getEmailQueryOptions = (id: string) => queryOptions({ queryKey: emailKeys.one(id), queryFn: () => getEmail(id) });
+export const getEmailQueryOptions = (id: string) =>
+  queryOptions({ queryKey: emailKeys.one(id), queryFn: () => getEmail(id) });
 
 export const useEmail = (id: string) => useQuery(getEmailQueryOptions(id));

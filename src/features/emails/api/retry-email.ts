@@ -9,9 +9,10 @@ export function useRetryEmail() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: retryEmail,
-    onSettled: (_data, _error, id) => Promise.all([
-      queryClient.invalidateQueries({ queryKey: emailKeys.lists() }),
-      queryClient.invalidateQueries({ queryKey: emailKeys.one(id) }),
-    ]),
+    onSettled: (_data, _error, id) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: emailKeys.lists() }),
+        queryClient.invalidateQueries({ queryKey: emailKeys.one(id) }),
+      ]),
   });
 }

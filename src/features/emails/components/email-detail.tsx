@@ -16,11 +16,16 @@ export function EmailDetailPanel({ id }: { id: string }) {
       <div className="flex flex-wrap items-center gap-3">
         <EmailStatusBadge email={e} />
         {(e.status === 'dead' || e.status === 'failed') && (
-          <Button onClick={() => retry.mutate(e.id)} disabled={retry.isPending}>{retry.isPending ? 'Queuing…' : 'Send again'}</Button>
+          <Button onClick={() => retry.mutate(e.id)} disabled={retry.isPending}>
+            {retry.isPending ? 'Queuing…' : 'Send again'}
+          </Button>
         )}
       </div>
       {e.status === 'failed' && (
-        <p className="text-stone-700">Tried {e.attempts} {e.attempts === 1 ? 'time' : 'times'} so far; the next try is due {new Date(e.nextAttemptAt).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'medium' })}.</p>
+        <p className="text-stone-700">
+          Tried {e.attempts} {e.attempts === 1 ? 'time' : 'times'} so far; the next try is due{' '}
+          {new Date(e.nextAttemptAt).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'medium' })}.
+        </p>
       )}
       {retry.error && <ErrorNotice error={retry.error} />}
       {e.lastError && (
@@ -29,8 +34,12 @@ export function EmailDetailPanel({ id }: { id: string }) {
           <pre className="whitespace-pre-wrap rounded bg-red-50 p-2 font-mono text-xs text-red-900">{e.lastError}</pre>
         </div>
       )}
-      <p className="text-xs text-stone-500">Message-ID {e.messageId ?? '(given when sent)'} · template {e.template}</p>
-      <pre className="max-h-96 overflow-auto whitespace-pre-wrap rounded border border-stone-200 bg-paper p-3 font-sans">{e.textBody}</pre>
+      <p className="text-xs text-stone-500">
+        Message-ID {e.messageId ?? '(given when sent)'} · template {e.template}
+      </p>
+      <pre className="max-h-96 overflow-auto whitespace-pre-wrap rounded border border-stone-200 bg-paper p-3 font-sans">
+        {e.textBody}
+      </pre>
     </div>
   );
 }

@@ -20,7 +20,11 @@ const tones: Record<EmailStatus, string> = {
 export function EmailStatusBadge({ email }: { email: Pick<EmailRow, 'status' | 'attempts'> }) {
   return (
     <span className="inline-flex flex-wrap items-center gap-1">
-      <span className={`whitespace-nowrap rounded-full border px-2 py-0.5 text-xs font-semibold ${tones[email.status]}`}>{emailStatusText[email.status]}</span>
+      <span
+        className={`whitespace-nowrap rounded-full border px-2 py-0.5 text-xs font-semibold ${tones[email.status]}`}
+      >
+        {emailStatusText[email.status]}
+      </span>
       {email.attempts > 1 && <span className="text-xs text-stone-500">retried, {email.attempts} attempts</span>}
     </span>
   );

@@ -12,9 +12,10 @@ export function useAttachGradeCheck(requestId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: attachGradeCheck,
-    onSuccess: () => Promise.all([
-      queryClient.invalidateQueries({ queryKey: getGradeChecksQueryOptions(requestId).queryKey }),
-      queryClient.invalidateQueries({ queryKey: getDocumentsQueryOptions(requestId).queryKey }),
-    ]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: getGradeChecksQueryOptions(requestId).queryKey }),
+        queryClient.invalidateQueries({ queryKey: getDocumentsQueryOptions(requestId).queryKey }),
+      ]),
   });
 }

@@ -15,10 +15,16 @@ export interface RequestDocument {
   urlExpiresAt: string;
 }
 
-export const getDocuments = (requestId: string) => api.get<{ documents: RequestDocument[] }>(`/api/requests/${requestId}/documents`);
+export const getDocuments = (requestId: string) =>
+  api.get<{ documents: RequestDocument[] }>(`/api/requests/${requestId}/documents`);
 
 // Download links expire after a few minutes; refetching a little sooner keeps the ones on screen usable.
 export const getDocumentsQueryOptions = (requestId: string) =>
-  queryOptions({ queryKey: ['documents', requestId], queryFn: () => getDocuments(requestId), staleTime: 60_000, refetchInterval: 240_000 });
+  queryOptions({
+    queryKey: ['documents', requestId],
+    queryFn: () => getDocuments(requestId),
+    staleTime: 60_000,
+    refetchInterval: 240_000,
+  });
 
 export const useDocuments = (requestId: string) => useQuery(getDocumentsQueryOptions(requestId));

@@ -5,7 +5,10 @@ import { getGradeChecksQueryOptions } from './get-grade-checks';
 
 /** The status change lives in the office workflow; this screen only offers the one step that follows a check. */
 export const markChecked = ({ requestId, expectedVersion }: { requestId: string; expectedVersion: number }) =>
-  api.post<{ request: { id: string; status: string; version: number } }>(`/api/requests/${requestId}/transitions`, { action: 'mark-checked', expectedVersion });
+  api.post<{ request: { id: string; status: string; version: number } }>(`/api/requests/${requestId}/transitions`, {
+    action: 'mark-checked',
+    expectedVersion,
+  });
 
 export function useMarkChecked() {
   const queryClient = useQueryClient();
@@ -13,9 +16,11 @@ export function useMarkChecked() {
     mutationFn: markChecked,
     // A status change shows on every screen that holds the request: the request and its history, the queue, and
     // the check screen's own header.
-    onSuccess: (_answer, { requestId }) => Promise.all(
-      [...statusChangeKeys(requestId), queueKeys.all, getGradeChecksQueryOptions(requestId).queryKey]
-        .map((queryKey) => queryClient.invalidateQueries({ queryKey })),
-    ),
+    onSuccess: (_answer, { requestId }) =>
+      Promise.all(
+        [...statusChangeKeys(requestId), queueKeys.all, getGradeChecksQueryOptions(requestId).queryKey].map(
+          (queryKey) => queryClient.invalidateQueries({ queryKey }),
+        ),
+      ),
   });
 }

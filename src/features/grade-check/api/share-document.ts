@@ -2,8 +2,16 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { getDocumentsQueryOptions } from './get-documents';
 
-export const shareDocument = ({ documentId, sharedWithApplicant }: { documentId: string; sharedWithApplicant: boolean }) =>
-  api.patch<{ document: { id: string; sharedWithApplicant: boolean } }>(`/api/documents/${documentId}`, { sharedWithApplicant });
+export const shareDocument = ({
+  documentId,
+  sharedWithApplicant,
+}: {
+  documentId: string;
+  sharedWithApplicant: boolean;
+}) =>
+  api.patch<{ document: { id: string; sharedWithApplicant: boolean } }>(`/api/documents/${documentId}`, {
+    sharedWithApplicant,
+  });
 
 export function useShareDocument(requestId: string) {
   const queryClient = useQueryClient();

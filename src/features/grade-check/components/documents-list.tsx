@@ -14,18 +14,31 @@ export function DocumentsList({ requestId, canShare }: { requestId: string; canS
       {data.documents.map((doc) => (
         <li key={doc.id} className="flex flex-wrap items-center justify-between gap-3 py-2">
           <div>
-            <a className="font-semibold text-pine-700 underline" href={doc.url} target="_blank" rel="noreferrer">{doc.title}</a>
-            <span className="ml-2 text-xs text-stone-500">PDF · {Math.max(1, Math.round(doc.sizeBytes / 1024))} KB · {new Date(doc.createdAt).toLocaleDateString()}</span>
+            <a className="font-semibold text-pine-700 underline" href={doc.url} target="_blank" rel="noreferrer">
+              {doc.title}
+            </a>
+            <span className="ml-2 text-xs text-stone-500">
+              PDF · {Math.max(1, Math.round(doc.sizeBytes / 1024))} KB · {new Date(doc.createdAt).toLocaleDateString()}
+            </span>
           </div>
           {canShare && (
             <label className="flex items-center gap-2 text-sm">
-              <input type="checkbox" checked={doc.sharedWithApplicant} disabled={share.isPending} onChange={(e) => share.mutate({ documentId: doc.id, sharedWithApplicant: e.target.checked })} />
+              <input
+                type="checkbox"
+                checked={doc.sharedWithApplicant}
+                disabled={share.isPending}
+                onChange={(e) => share.mutate({ documentId: doc.id, sharedWithApplicant: e.target.checked })}
+              />
               Share with the property owner
             </label>
           )}
         </li>
       ))}
-      {share.error && <li><ErrorNotice error={share.error} /></li>}
+      {share.error && (
+        <li>
+          <ErrorNotice error={share.error} />
+        </li>
+      )}
     </ul>
   );
 }

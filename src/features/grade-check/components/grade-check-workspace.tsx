@@ -29,19 +29,34 @@ export interface ChosenRuleProfile {
 }
 
 /** Survey entry on the left, the live check on the right; saving asks the server to run and keep the check. */
-export function GradeCheckWorkspace({ request, checks, ruleProfile }: { request: GradeCheckRequestHeader; checks: GradeCheckView[]; ruleProfile: ChosenRuleProfile }) {
+export function GradeCheckWorkspace({
+  request,
+  checks,
+  ruleProfile,
+}: {
+  request: GradeCheckRequestHeader;
+  checks: GradeCheckView[];
+  ruleProfile: ChosenRuleProfile;
+}) {
   const [survey, setSurvey] = useState<SurveyState>(() => initialSurvey(request.application.site?.postedSpeedMph));
   const { rules, versionId } = ruleProfile;
   const live = useLiveCheck(survey, rules);
   const save = useSaveGradeCheck(request.id);
 
-  const update = <K extends keyof SurveyState>(part: K) => (patch: Partial<SurveyState[K]>) =>
-    setSurvey((s) => ({
-      ...s,
-      [part]: { ...s[part], ...patch },
-      // A design applied to other ground no longer fits once the ground changes.
-      design: part === 'centreline' ? { ...s.design, applied: null } : part === 'design' ? { ...s.design, ...patch } : s.design,
-    }));
+  const update =
+    <K extends keyof SurveyState>(part: K) =>
+    (patch: Partial<SurveyState[K]>) =>
+      setSurvey((s) => ({
+        ...s,
+        [part]: { ...s[part], ...patch },
+        // A design applied to other ground no longer fits once the ground changes.
+        design:
+          part === 'centreline'
+            ? { ...s.design, applied: null }
+            : part === 'design'
+              ? { ...s.design, ...patch }
+              : s.design,
+      }));
   // The server's 400 names the inputs' boxes by the same paths the live check does.
   const serverFields = save.error instanceof ApiError ? save.error.fields : {};
   const errors = { ...serverFields, ...live.errors };
@@ -54,32 +69,77 @@ export function GradeCheckWorkspace({ request, checks, ruleProfile }: { request:
           {checks.length > 0 && (
             <div className="mt-4 flex flex-wrap gap-2">
               <span className="self-center text-sm text-stone-600">Survey again from</span>
-              {checks.map((c) => <Button key={c.id} variant="secondary" onClick={() => { setSurvey(surveyFromInputs(c.inputs)); save.reset(); }}>check {c.number}</Button>)}
+              {checks.map((c) => (
+                <Button
+                  key={c.id}
+                  variant="secondary"
+                  onClick={() => {
+                    setSurvey(surveyFromInputs(c.inputs));
+                    save.reset();
+                  }}
+                >
+                  check {c.number}
+                </Button>
+              ))}
             </div>
           )}
         </Panel>
-        <Panel title="The road"><RoadFields road={survey.road} errors={errors} onChange={update('road')} /></Panel>
-        <Panel title="The centreline"><CentrelineTable centreline={survey.centreline} errors={errors} onChange={update('centreline')} /></Panel>
-        <Panel title="Culvert"><CulvertFields culvert={survey.culvert} errors={errors} onChange={update('culvert')} /></Panel>
-        <Panel title="Geometry"><GeometryFields geometry={survey.geometry} errors={errors} onChange={update('geometry')} /></Panel>
-        <Panel title="Entrance edges"><ApronFields apron={survey.apron} errors={errors} onChange={update('apron')} /></Panel>
-        <Panel title="Laser and stakes"><StakesEditor laser={survey.laser} errors={errors} onChange={update('laser')} /></Panel>
+        <Panel title="The road">
+          <RoadFields road={survey.road} errors={errors} onChange={update('road')} />
+        </Panel>
+        <Panel title="The centreline">
+          <CentrelineTable centreline={survey.centreline} errors={errors} onChange={update('centreline')} />
+        </Panel>
+        <Panel title="Culvert">
+          <CulvertFields culvert={survey.culvert} errors={errors} onChange={update('culvert')} />
+        </Panel>
+        <Panel title="Geometry">
+          <GeometryFields geometry={survey.geometry} errors={errors} onChange={update('geometry')} />
+        </Panel>
+        <Panel title="Entrance edges">
+          <ApronFields apron={survey.apron} errors={errors} onChange={update('apron')} />
+        </Panel>
+        <Panel title="Laser and stakes">
+          <StakesEditor laser={survey.laser} errors={errors} onChange={update('laser')} />
+        </Panel>
       </div>
       <div className="space-y-6">
-        <Panel title="Live check" actions={
-          <Button disabled={!live.ready || !versionId || save.isPending}
-            onClick={() => live.inputs && versionId && save.mutate({ requestId: request.id, ruleProfileVersionId: versionId, inputs: live.inputs })}>
-            {save.isPending ? 'Saving…' : 'Save this check'}
-          </Button>
-        }>
-          {save.isSuccess && <p role="status" className="mb-3 text-sm font-semibold text-pine-800">Saved as check {save.data.check.number}.</p>}
+        <Panel
+          title="Live check"
+          actions={
+            <Button
+              disabled={!live.ready || !versionId || save.isPending}
+              onClick={() =>
+                live.inputs &&
+                versionId &&
+                save.mutate({ requestId: request.id, ruleProfileVersionId: versionId, inputs: live.inputs })
+              }
+            >
+              {save.isPending ? 'Saving…' : 'Save this check'}
+            </Button>
+          }
+        >
+          {save.isSuccess && (
+            <p role="status" className="mb-3 text-sm font-semibold text-pine-800">
+              Saved as check {save.data.check.number}.
+            </p>
+          )}
           <ErrorNotice error={save.error} />
-          {!rules ? <p className="text-sm text-stone-500">{ruleProfile.loadingRules ? 'Loading the rule profile…' : 'Choose the rule profile to check against.'}</p> : <LiveResult live={live} rules={rules} />}
+          {!rules ? (
+            <p className="text-sm text-stone-500">
+              {ruleProfile.loadingRules ? 'Loading the rule profile…' : 'Choose the rule profile to check against.'}
+            </p>
+          ) : (
+            <LiveResult live={live} rules={rules} />
+          )}
         </Panel>
         {rules && (
           <Panel title="Compliant profile">
             <ProposalPanel
-              proposal={live.results?.proposal} designing={live.designing} requested={survey.design.proposed} applied={Boolean(survey.design.applied)}
+              proposal={live.results?.proposal}
+              designing={live.designing}
+              requested={survey.design.proposed}
+              applied={Boolean(survey.design.applied)}
               haul={{ soil: survey.design.soil, truckCuYd: Number(survey.design.truckCuYd) || 10 }}
               onSuggest={() => update('design')({ proposed: true })}
               onApply={(p) => update('design')({ applied: p.profile })}
@@ -87,8 +147,16 @@ export function GradeCheckWorkspace({ request, checks, ruleProfile }: { request:
             />
           </Panel>
         )}
-        {rules && <Panel title="Warp stakes for the entrance edges"><ApronPanel apron={live.results?.report.apron} /></Panel>}
-        {rules && <Panel title="Laser settings for the crew"><LaserPanel laser={live.results?.laser} /></Panel>}
+        {rules && (
+          <Panel title="Warp stakes for the entrance edges">
+            <ApronPanel apron={live.results?.report.apron} />
+          </Panel>
+        )}
+        {rules && (
+          <Panel title="Laser settings for the crew">
+            <LaserPanel laser={live.results?.laser} />
+          </Panel>
+        )}
       </div>
     </div>
   );

@@ -14,18 +14,40 @@ export function NumberBox({ label, value, onChange, error, hint, placeholder }: 
   return (
     <Field label={label} hint={hint} error={error}>
       {({ id, describedBy, invalid }) => (
-        <TextInput id={id} inputMode="decimal" value={value} placeholder={placeholder} aria-describedby={describedBy} aria-invalid={invalid} onChange={(e) => onChange(e.target.value)} />
+        <TextInput
+          id={id}
+          inputMode="decimal"
+          value={value}
+          placeholder={placeholder}
+          aria-describedby={describedBy}
+          aria-invalid={invalid}
+          onChange={(e) => onChange(e.target.value)}
+        />
       )}
     </Field>
   );
 }
 
-export function ChoiceBox<T extends string>({ label, value, options, onChange }: { label: string; value: T; options: readonly (readonly [T, string])[]; onChange: (value: T) => void }) {
+export function ChoiceBox<T extends string>({
+  label,
+  value,
+  options,
+  onChange,
+}: {
+  label: string;
+  value: T;
+  options: readonly (readonly [T, string])[];
+  onChange: (value: T) => void;
+}) {
   return (
     <Field label={label}>
       {({ id }) => (
         <SelectInput id={id} value={value} onChange={(e) => onChange(e.target.value as T)}>
-          {options.map(([v, text]) => <option key={v} value={v}>{text}</option>)}
+          {options.map(([v, text]) => (
+            <option key={v} value={v}>
+              {text}
+            </option>
+          ))}
         </SelectInput>
       )}
     </Field>

@@ -17,7 +17,10 @@ export function showValue(value: number | null, unit: string, units: DisplayUnit
 }
 
 export const statusLabel: Record<FindingStatus, string> = {
-  pass: 'Pass', fail: 'Fail', advisory: 'Look closer', 'not-checked': 'Not checked',
+  pass: 'Pass',
+  fail: 'Fail',
+  advisory: 'Look closer',
+  'not-checked': 'Not checked',
 };
 
 export const statusTone: Record<FindingStatus, string> = {

@@ -1,12 +1,27 @@
-import { apronWarpLength, elevationAt, normalizeProfile, type LaserSetupInput, type ProfileInput, type RuleProfile } from '@shared/engine';
+import {
+  apronWarpLength,
+  elevationAt,
+  normalizeProfile,
+  type LaserSetupInput,
+  type ProfileInput,
+  type RuleProfile,
+} from '@shared/engine';
 
 /**
  * The laser plane follows the profile being built: its origin at the road edge, the landing axis at the landing's
  * overall grade, the second setup at the driveway's overall grade from the landing's end to the last station.
  */
 export function laserFromProfile(
-  profile: ProfileInput, roadEdgeStationFt: number, rules: RuleProfile,
-  crew: { roadGradePercent: number; receiverOffsetFt: number; stakes: LaserSetupInput['stakes']; drivewayCrossSlopePercent?: number; warpLengthFt?: number },
+  profile: ProfileInput,
+  roadEdgeStationFt: number,
+  rules: RuleProfile,
+  crew: {
+    roadGradePercent: number;
+    receiverOffsetFt: number;
+    stakes: LaserSetupInput['stakes'];
+    drivewayCrossSlopePercent?: number;
+    warpLengthFt?: number;
+  },
 ): LaserSetupInput | undefined {
   let points;
   try {
@@ -20,15 +35,26 @@ export function laserFromProfile(
   const origin = elevationAt(points, roadEdgeStationFt);
   const atLandingEnd = elevationAt(points, landingEnd);
   const round = (v: number) => Math.round(v * 100) / 100;
-  const landingGradePercent = landingEnd > roadEdgeStationFt ? round(((atLandingEnd - origin) / (landingEnd - roadEdgeStationFt)) * 100) : 0;
-  const drivewayGradePercent = last > landingEnd ? round(((points[points.length - 1].elevationFt - atLandingEnd) / (last - landingEnd)) * 100) : landingGradePercent;
+  const landingGradePercent =
+    landingEnd > roadEdgeStationFt ? round(((atLandingEnd - origin) / (landingEnd - roadEdgeStationFt)) * 100) : 0;
+  const drivewayGradePercent =
+    last > landingEnd
+      ? round(((points[points.length - 1].elevationFt - atLandingEnd) / (last - landingEnd)) * 100)
+      : landingGradePercent;
   return {
-    originElevationFt: round(origin), roadGradePercent: crew.roadGradePercent, landingGradePercent,
-    landingLengthFt: landingEnd - roadEdgeStationFt, drivewayGradePercent, receiverOffsetFt: crew.receiverOffsetFt, stakes: crew.stakes,
+    originElevationFt: round(origin),
+    roadGradePercent: crew.roadGradePercent,
+    landingGradePercent,
+    landingLengthFt: landingEnd - roadEdgeStationFt,
+    drivewayGradePercent,
+    receiverOffsetFt: crew.receiverOffsetFt,
+    stakes: crew.stakes,
     // With a warped apron the driveway setup takes the cross slope the warp ends on, over the apron's own warp.
-    ...(crew.drivewayCrossSlopePercent === undefined ? {} : {
-      drivewayCrossSlopePercent: crew.drivewayCrossSlopePercent,
-      warpLengthFt: apronWarpLength(crew.warpLengthFt, rules).warpLengthFt,
-    }),
+    ...(crew.drivewayCrossSlopePercent === undefined
+      ? {}
+      : {
+          drivewayCrossSlopePercent: crew.drivewayCrossSlopePercent,
+          warpLengthFt: apronWarpLength(crew.warpLengthFt, rules).warpLengthFt,
+        }),
   };
 }

@@ -33,4 +33,5 @@ export function readStation(text: string, field: string, errors: FieldErrors): n
 }
 
 /** An error as the box shows it, led by the box's own label so it reads on its own (and when read out). */
-export const withLabel = (label: string, error: string | undefined): string | undefined => (error ? `${label}: ${error}` : undefined);
+export const withLabel = (label: string, error: string | undefined): string | undefined =>
+  error ? `${label}: ${error}` : undefined;

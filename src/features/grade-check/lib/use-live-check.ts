@@ -1,8 +1,19 @@
 import { useEffect, useMemo, useState } from 'react';
 import { EngineInputError, type RuleProfile } from '@shared/engine';
 import { parseInput } from '@shared/engine/errors';
-import { gradeCheckInputsSchema, type GradeCheckInputs, type GradeCheckInputsInput, type GradeCheckResults } from '@shared/contracts/grade-checks';
-import { checkWithoutProposal, fieldsOf, GradeCheckFieldsError, runGradeCheck, type Propose } from '@shared/grade-check/run-check';
+import {
+  gradeCheckInputsSchema,
+  type GradeCheckInputs,
+  type GradeCheckInputsInput,
+  type GradeCheckResults,
+} from '@shared/contracts/grade-checks';
+import {
+  checkWithoutProposal,
+  fieldsOf,
+  GradeCheckFieldsError,
+  runGradeCheck,
+  type Propose,
+} from '@shared/grade-check/run-check';
 import { buildInputs } from './build-inputs';
 import { proposeInWorker } from './propose-in-worker';
 import type { FieldErrors } from './read-number';
@@ -30,7 +41,10 @@ function refusedFields(error: unknown): FieldErrors {
  * The survey as typed, parsed by the contract's schema and checked by the shared grade check at once; a requested
  * design proposal comes back as `proposalWanted` (the parsed inputs) for runGradeCheck to finish on a worker.
  */
-export function runLiveCheck(state: SurveyState, rules: RuleProfile | undefined): LiveCheck & { proposalWanted?: GradeCheckInputs } {
+export function runLiveCheck(
+  state: SurveyState,
+  rules: RuleProfile | undefined,
+): LiveCheck & { proposalWanted?: GradeCheckInputs } {
   const { inputs, errors: typed } = buildInputs(state, rules);
   if (!inputs || !rules) return { inputs, errors: typed, ready: false };
   const { parsed, errors: refused } = parseForLive(inputs);
@@ -82,7 +96,11 @@ function withAnswer(live: LiveCheck, answer: Answer): LiveCheck {
 }
 
 /** The whole live check with its proposal, for callers that can wait (tests, and the worker-backed hook). */
-export async function runLiveCheckWithProposal(state: SurveyState, rules: RuleProfile | undefined, propose: Propose): Promise<LiveCheck> {
+export async function runLiveCheckWithProposal(
+  state: SurveyState,
+  rules: RuleProfile | undefined,
+  propose: Propose,
+): Promise<LiveCheck> {
   const { proposalWanted, ...live } = runLiveCheck(state, rules);
   if (!proposalWanted || !rules) return live;
   return withAnswer(live, await answerFor(proposalWanted, rules, propose));

@@ -10,10 +10,11 @@ export function useAssignRequest() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ id, assigneeId }: { id: string; assigneeId: string | null }) => assignRequest(id, assigneeId),
-    onSuccess: (_data, { id }) => Promise.all([
-      queryClient.invalidateQueries({ queryKey: allQueuesKey() }),
-      queryClient.invalidateQueries({ queryKey: requestKeys.one(id) }),
-      queryClient.invalidateQueries({ queryKey: eventKeys.ofRequest(id) }),
-    ]),
+    onSuccess: (_data, { id }) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: allQueuesKey() }),
+        queryClient.invalidateQueries({ queryKey: requestKeys.one(id) }),
+        queryClient.invalidateQueries({ queryKey: eventKeys.ofRequest(id) }),
+      ]),
   });
 }

@@ -4,20 +4,28 @@ import { queueKeys } from '@/lib/query-keys';
 import type { QueueFilters, QueuePage } from './types';
 
 export const defaultQueueFilters: QueueFilters = {
-  status: [], jurisdiction: '', assignee: '', waiting: false, q: '', sort: 'waiting', dir: 'asc', cursor: '',
+  status: [],
+  jurisdiction: '',
+  assignee: '',
+  waiting: false,
+  q: '',
+  sort: 'waiting',
+  dir: 'asc',
+  cursor: '',
 };
 
-export const getQueue = (filters: QueueFilters) => api.get<QueuePage>('/api/queue', {
-  status: filters.status.join(','),
-  jurisdiction: filters.jurisdiction,
-  assignee: filters.assignee,
-  waiting: filters.waiting ? 'true' : undefined,
-  q: filters.q,
-  sort: filters.sort,
-  dir: filters.dir,
-  cursor: filters.cursor,
-  limit: 50,
-});
+export const getQueue = (filters: QueueFilters) =>
+  api.get<QueuePage>('/api/queue', {
+    status: filters.status.join(','),
+    jurisdiction: filters.jurisdiction,
+    assignee: filters.assignee,
+    waiting: filters.waiting ? 'true' : undefined,
+    q: filters.q,
+    sort: filters.sort,
+    dir: filters.dir,
+    cursor: filters.cursor,
+    limit: 50,
+  });
 
 export const getQueueQueryOptions = (filters: QueueFilters = defaultQueueFilters) =>
   queryOptions({ queryKey: queueKeys.list(filters), queryFn: () => getQueue(filters), staleTime: 10_000 });
@@ -26,4 +34,5 @@ export const getQueueQueryOptions = (filters: QueueFilters = defaultQueueFilters
 export const allQueuesKey = () => queueKeys.all;
 
 /** The previous page stays on screen while the next one loads, so the table does not jump. */
-export const useQueue = (filters: QueueFilters) => useQuery({ ...getQueueQueryOptions(filters), placeholderData: keepPreviousData });
+export const useQueue = (filters: QueueFilters) =>
+  useQuery({ ...getQueueQueryOptions(filters), placeholderData: keepPreviousData });

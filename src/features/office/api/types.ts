@@ -30,7 +30,19 @@ export interface QueueRow {
 }
 
 /** `total` is counted on the first page only (later pages leave it null) and only up to a cap (`totalIsCapped`). */
-export interface QueuePage { requests: QueueRow[]; nextCursor: string | null; total: number | null; totalIsCapped: boolean }
+export interface QueuePage {
+  requests: QueueRow[];
+  nextCursor: string | null;
+  total: number | null;
+  totalIsCapped: boolean;
+}
 
-export interface OfficePerson { id: string; name: string; role: Role }
-export interface QueueOptions { jurisdictions: { id: string; name: string }[]; people: OfficePerson[] }
+export interface OfficePerson {
+  id: string;
+  name: string;
+  role: Role;
+}
+export interface QueueOptions {
+  jurisdictions: { id: string; name: string }[];
+  people: OfficePerson[];
+}

@@ -24,7 +24,7 @@ interface ActionFormProps {
 }
 
 function startValues(fields: FormField[], request: OfficeRequest) {
-  return Object.fromEntries(fields.map((f) => [f.name, f.text.prefill ? request[f.text.prefill] ?? '' : '']));
+  return Object.fromEntries(fields.map((f) => [f.name, f.text.prefill ? (request[f.text.prefill] ?? '') : '']));
 }
 
 /** Asks for exactly what the chosen action takes: its fields, labels and rules come from the action's shared input. */
@@ -44,9 +44,17 @@ export function ActionForm({ transition, request, caution, pending, error, onSub
   };
 
   return (
-    <form onSubmit={submit} className="space-y-3 rounded-md border border-tape bg-amber-50/40 p-4" aria-label={transition.label}>
+    <form
+      onSubmit={submit}
+      className="space-y-3 rounded-md border border-tape bg-amber-50/40 p-4"
+      aria-label={transition.label}
+    >
       <p className="font-semibold text-pine-900">{transition.label}</p>
-      {caution && <Notice tone="warn" title="Before you go on">{caution}</Notice>}
+      {caution && (
+        <Notice tone="warn" title="Before you go on">
+          {caution}
+        </Notice>
+      )}
       {fields.map((field) => {
         const required = field.required || (Boolean(caution) && field.name === 'note');
         const props = {
@@ -56,15 +64,29 @@ export function ActionForm({ transition, request, caution, pending, error, onSub
         };
         return (
           <Field key={field.name} label={field.text.label} hint={field.text.hint} error={errors[field.name]}>
-            {({ id, describedBy, invalid }) => (field.text.control === 'textarea'
-              ? <TextArea id={id} {...props} aria-describedby={describedBy} aria-invalid={invalid} />
-              : <TextInput id={id} type={inputType[field.text.control]} {...props} aria-describedby={describedBy} aria-invalid={invalid} />)}
+            {({ id, describedBy, invalid }) =>
+              field.text.control === 'textarea' ? (
+                <TextArea id={id} {...props} aria-describedby={describedBy} aria-invalid={invalid} />
+              ) : (
+                <TextInput
+                  id={id}
+                  type={inputType[field.text.control]}
+                  {...props}
+                  aria-describedby={describedBy}
+                  aria-invalid={invalid}
+                />
+              )
+            }
           </Field>
         );
       })}
       <div className="flex gap-2">
-        <Button type="submit" disabled={pending}>{pending ? 'Saving…' : transition.label}</Button>
-        <Button variant="secondary" onClick={onCancel} disabled={pending}>Cancel</Button>
+        <Button type="submit" disabled={pending}>
+          {pending ? 'Saving…' : transition.label}
+        </Button>
+        <Button variant="secondary" onClick={onCancel} disabled={pending}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

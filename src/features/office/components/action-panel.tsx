@@ -12,7 +12,15 @@ import { ActionForm } from './action-form';
 export type Cautions = Partial<Record<TransitionAction, string>>;
 
 /** The moves open from the current status for this person, each opening a form for what it needs. */
-export function ActionPanel({ request, role, cautions = {} }: { request: OfficeRequest; role: Role; cautions?: Cautions }) {
+export function ActionPanel({
+  request,
+  role,
+  cautions = {},
+}: {
+  request: OfficeRequest;
+  role: Role;
+  cautions?: Cautions;
+}) {
   const moves = allowedTransitions(request.status, role);
   const [open, setOpen] = useState<Transition | null>(null);
   const [done, setDone] = useState('');
@@ -32,16 +40,31 @@ export function ActionPanel({ request, role, cautions = {} }: { request: OfficeR
           caution={cautions[open.action]}
           pending={run.isPending}
           error={run.error}
-          onCancel={() => { setOpen(null); run.reset(); }}
-          onSubmit={(input) => run.mutate(input, {
-            onSuccess: () => { setDone(`${open.label}: the request is now “${statusText[open.to].label}”.`); setOpen(null); },
-          })}
+          onCancel={() => {
+            setOpen(null);
+            run.reset();
+          }}
+          onSubmit={(input) =>
+            run.mutate(input, {
+              onSuccess: () => {
+                setDone(`${open.label}: the request is now “${statusText[open.to].label}”.`);
+                setOpen(null);
+              },
+            })
+          }
         />
       ) : (
         <div className="flex flex-wrap gap-2">
           {moves.map((move) => (
-            <Button key={move.action} variant={move.action === 'decline' ? 'danger' : 'primary'}
-              onClick={() => { setOpen(move); setDone(''); run.reset(); }}>
+            <Button
+              key={move.action}
+              variant={move.action === 'decline' ? 'danger' : 'primary'}
+              onClick={() => {
+                setOpen(move);
+                setDone('');
+                run.reset();
+              }}
+            >
               {move.label}
             </Button>
           ))}
@@ -49,7 +72,11 @@ export function ActionPanel({ request, role, cautions = {} }: { request: OfficeR
       )}
       {open?.needs.includes('gradeCheck') && (
         <Notice tone="warn" title="Needs an attached grade check">
-          Run the check and attach it on the <Link className="font-semibold underline" to={paths.office.gradeCheck.getHref(request.id)}>grade check</Link> screen first.
+          Run the check and attach it on the{' '}
+          <Link className="font-semibold underline" to={paths.office.gradeCheck.getHref(request.id)}>
+            grade check
+          </Link>{' '}
+          screen first.
         </Notice>
       )}
       {run.error && <ErrorNotice error={run.error} />}

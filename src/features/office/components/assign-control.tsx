@@ -1,7 +1,12 @@
 import { useQueueOptions } from '../api/get-queue-options';
 import { useAssignRequest } from '../api/assign-request';
 
-interface AssignControlProps { requestId: string; assigneeId: string | null; meId: string; label: string }
+interface AssignControlProps {
+  requestId: string;
+  assigneeId: string | null;
+  meId: string;
+  label: string;
+}
 
 /** Who in the office has this request: a quick "me" and a list of colleagues. */
 export function AssignControl({ requestId, assigneeId, meId, label }: AssignControlProps) {
@@ -17,15 +22,27 @@ export function AssignControl({ requestId, assigneeId, meId, label }: AssignCont
         onChange={(e) => assign.mutate({ id: requestId, assigneeId: e.target.value || null })}
       >
         <option value="">Nobody yet</option>
-        {people.map((p) => <option key={p.id} value={p.id}>{p.id === meId ? `${p.name} (me)` : p.name}</option>)}
+        {people.map((p) => (
+          <option key={p.id} value={p.id}>
+            {p.id === meId ? `${p.name} (me)` : p.name}
+          </option>
+        ))}
       </select>
       {assigneeId !== meId && (
-        <button type="button" className="whitespace-nowrap text-sm font-semibold text-pine-700 hover:underline disabled:text-stone-400"
-          disabled={assign.isPending} onClick={() => assign.mutate({ id: requestId, assigneeId: meId })}>
+        <button
+          type="button"
+          className="whitespace-nowrap text-sm font-semibold text-pine-700 hover:underline disabled:text-stone-400"
+          disabled={assign.isPending}
+          onClick={() => assign.mutate({ id: requestId, assigneeId: meId })}
+        >
           Take it
         </button>
       )}
-      {assign.error && <span role="alert" className="text-xs text-clay">{assign.error.message}</span>}
+      {assign.error && (
+        <span role="alert" className="text-xs text-clay">
+          {assign.error.message}
+        </span>
+      )}
     </div>
   );
 }

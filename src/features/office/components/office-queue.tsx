@@ -19,22 +19,41 @@ export function OfficeQueue({ meId }: { meId: string }) {
       {page && (
         <>
           <p className="text-sm text-stone-600" aria-live="polite">
-            {page.total === 0 ? 'No requests match.' : page.total === null ? `Page ${pageNumber}.` : `${page.totalIsCapped ? `More than ${page.total}` : page.total} matching, page ${pageNumber}.`}
+            {page.total === 0
+              ? 'No requests match.'
+              : page.total === null
+                ? `Page ${pageNumber}.`
+                : `${page.totalIsCapped ? `More than ${page.total}` : page.total} matching, page ${pageNumber}.`}
             {queue.isFetching && ' Updating…'}
           </p>
-          {page.requests.length > 0
-            ? (
-              <>
-                <div className="hidden md:block">
-                  <QueueTable rows={page.requests} filters={filters} meId={meId} onSort={(sort, dir) => update({ sort, dir })} />
-                </div>
-                <div className="md:hidden"><QueueCards rows={page.requests} meId={meId} /></div>
-              </>
-            )
-            : <Notice title="Nothing here">Try another status or clear the search.</Notice>}
+          {page.requests.length > 0 ? (
+            <>
+              <div className="hidden md:block">
+                <QueueTable
+                  rows={page.requests}
+                  filters={filters}
+                  meId={meId}
+                  onSort={(sort, dir) => update({ sort, dir })}
+                />
+              </div>
+              <div className="md:hidden">
+                <QueueCards rows={page.requests} meId={meId} />
+              </div>
+            </>
+          ) : (
+            <Notice title="Nothing here">Try another status or clear the search.</Notice>
+          )}
           <nav aria-label="Queue pages" className="flex items-center gap-3">
-            <Button variant="secondary" disabled={pageNumber === 1} onClick={previousPage}>Previous page</Button>
-            <Button variant="secondary" disabled={!page.nextCursor} onClick={() => page.nextCursor && nextPage(page.nextCursor)}>Next page</Button>
+            <Button variant="secondary" disabled={pageNumber === 1} onClick={previousPage}>
+              Previous page
+            </Button>
+            <Button
+              variant="secondary"
+              disabled={!page.nextCursor}
+              onClick={() => page.nextCursor && nextPage(page.nextCursor)}
+            >
+              Next page
+            </Button>
           </nav>
         </>
       )}

@@ -1,4 +1,10 @@
-import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table';
 import { useMemo } from 'react';
 import { Link } from 'react-router';
 import { StatusBadge } from '@/components/ui/status-badge';
@@ -10,7 +16,12 @@ import { timeInStatus } from './time-in-status';
 const column = createColumnHelper<QueueRow>();
 
 /** Table columns that the server can sort, by the sort name the API knows them by. */
-const sortable: Record<string, QueueSort> = { reference: 'reference', applicant: 'applicant', road: 'road', waiting: 'waiting' };
+const sortable: Record<string, QueueSort> = {
+  reference: 'reference',
+  applicant: 'applicant',
+  road: 'road',
+  waiting: 'waiting',
+};
 
 interface QueueTableProps {
   rows: QueueRow[];
@@ -21,40 +32,83 @@ interface QueueTableProps {
 
 /** Sorting and paging happen on the server; the table only shows the page and asks for another order. */
 export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
-  const columns = useMemo(() => [
-    column.accessor('reference', {
-      id: 'reference', header: 'Reference',
-      cell: (c) => <Link to={paths.office.request.getHref(c.row.original.id)} className="font-mono font-semibold text-pine-700 hover:underline">{c.getValue()}</Link>,
-    }),
-    column.accessor('applicantName', { id: 'applicant', header: 'Applicant', cell: (c) => c.getValue() || '—' }),
-    column.accessor('roadName', {
-      id: 'road', header: 'Road and authority',
-      cell: (c) => (
-        <div>
-          <div>{c.getValue() || '—'}</div>
-          <div className="text-xs text-stone-500">{c.row.original.jurisdiction?.name ?? 'Authority not matched yet'}</div>
-        </div>
-      ),
-    }),
-    column.accessor('status', { id: 'status', header: 'Status', enableSorting: false, cell: (c) => <StatusBadge status={c.getValue()} /> }),
-    column.accessor('statusChangedAt', {
-      id: 'waiting', header: 'Time in status',
-      cell: (c) => <time dateTime={c.getValue()} title={new Date(c.getValue()).toLocaleString()}>{timeInStatus(c.getValue())}</time>,
-    }),
-    column.display({
-      id: 'assignee', header: 'Assignee',
-      cell: (c) => <AssignControl requestId={c.row.original.id} assigneeId={c.row.original.assignee?.id ?? null} meId={meId} label={`Assignee for ${c.row.original.reference}`} />,
-    }),
-    column.accessor('nextAction', {
-      id: 'next', header: 'Next action', enableSorting: false,
-      cell: (c) => <span className={c.row.original.waitingOnUs ? 'font-semibold text-pine-900' : 'text-stone-500'}>{c.getValue()}</span>,
-    }),
-  ], [meId]);
+  const columns = useMemo(
+    () => [
+      column.accessor('reference', {
+        id: 'reference',
+        header: 'Reference',
+        cell: (c) => (
+          <Link
+            to={paths.office.request.getHref(c.row.original.id)}
+            className="font-mono font-semibold text-pine-700 hover:underline"
+          >
+            {c.getValue()}
+          </Link>
+        ),
+      }),
+      column.accessor('applicantName', { id: 'applicant', header: 'Applicant', cell: (c) => c.getValue() || '—' }),
+      column.accessor('roadName', {
+        id: 'road',
+        header: 'Road and authority',
+        cell: (c) => (
+          <div>
+            <div>{c.getValue() || '—'}</div>
+            <div className="text-xs text-stone-500">
+              {c.row.original.jurisdiction?.name ?? 'Authority not matched yet'}
+            </div>
+          </div>
+        ),
+      }),
+      column.accessor('status', {
+        id: 'status',
+        header: 'Status',
+        enableSorting: false,
+        cell: (c) => <StatusBadge status={c.getValue()} />,
+      }),
+      column.accessor('statusChangedAt', {
+        id: 'waiting',
+        header: 'Time in status',
+        cell: (c) => (
+          <time dateTime={c.getValue()} title={new Date(c.getValue()).toLocaleString()}>
+            {timeInStatus(c.getValue())}
+          </time>
+        ),
+      }),
+      column.display({
+        id: 'assignee',
+        header: 'Assignee',
+        cell: (c) => (
+          <AssignControl
+            requestId={c.row.original.id}
+            assigneeId={c.row.original.assignee?.id ?? null}
+            meId={meId}
+            label={`Assignee for ${c.row.original.reference}`}
+          />
+        ),
+      }),
+      column.accessor('nextAction', {
+        id: 'next',
+        header: 'Next action',
+        enableSorting: false,
+        cell: (c) => (
+          <span className={c.row.original.waitingOnUs ? 'font-semibold text-pine-900' : 'text-stone-500'}>
+            {c.getValue()}
+          </span>
+        ),
+      }),
+    ],
+    [meId],
+  );
 
   const sorting: SortingState = [{ id: filters.sort, desc: filters.dir === 'desc' }];
   const table = useReactTable({
-    data: rows, columns, getCoreRowModel: getCoreRowModel(), manualSorting: true, manualPagination: true,
-    state: { sorting }, getRowId: (row) => row.id,
+    data: rows,
+    columns,
+    getCoreRowModel: getCoreRowModel(),
+    manualSorting: true,
+    manualPagination: true,
+    state: { sorting },
+    getRowId: (row) => row.id,
   });
 
   return (
@@ -68,14 +122,24 @@ export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
                 const active = filters.sort === sortName;
                 const label = flexRender(header.column.columnDef.header, header.getContext());
                 return (
-                  <th key={header.id} scope="col" className="px-3 py-2"
-                    aria-sort={active ? (filters.dir === 'asc' ? 'ascending' : 'descending') : undefined}>
+                  <th
+                    key={header.id}
+                    scope="col"
+                    className="px-3 py-2"
+                    aria-sort={active ? (filters.dir === 'asc' ? 'ascending' : 'descending') : undefined}
+                  >
                     {sortName ? (
-                      <button type="button" className="inline-flex items-center gap-1 uppercase hover:underline"
-                        onClick={() => onSort(sortName, active && filters.dir === 'asc' ? 'desc' : 'asc')}>
-                        {label}<span aria-hidden="true">{active ? (filters.dir === 'asc' ? '▲' : '▼') : '↕'}</span>
+                      <button
+                        type="button"
+                        className="inline-flex items-center gap-1 uppercase hover:underline"
+                        onClick={() => onSort(sortName, active && filters.dir === 'asc' ? 'desc' : 'asc')}
+                      >
+                        {label}
+                        <span aria-hidden="true">{active ? (filters.dir === 'asc' ? '▲' : '▼') : '↕'}</span>
                       </button>
-                    ) : label}
+                    ) : (
+                      label
+                    )}
                   </th>
                 );
               })}
@@ -85,7 +149,11 @@ export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
         <tbody>
           {table.getRowModel().rows.map((row) => (
             <tr key={row.id} className="border-t border-stone-100 align-top hover:bg-paper">
-              {row.getVisibleCells().map((cell) => <td key={cell.id} className="px-3 py-2">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>)}
+              {row.getVisibleCells().map((cell) => (
+                <td key={cell.id} className="px-3 py-2">
+                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                </td>
+              ))}
             </tr>
           ))}
         </tbody>

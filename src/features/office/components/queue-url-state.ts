@@ -9,7 +9,9 @@ import { queueSorts, type QueueFilters, type QueueSort } from '../api/types';
  * cursors it came through ("pages"), which is what makes "Previous" work without offsets.
  */
 export function readQueueUrl(params: URLSearchParams): { filters: QueueFilters; trail: string[] } {
-  const status = (params.get('status') ?? '').split(',').filter((s): s is RequestStatus => (requestStatuses as readonly string[]).includes(s));
+  const status = (params.get('status') ?? '')
+    .split(',')
+    .filter((s): s is RequestStatus => (requestStatuses as readonly string[]).includes(s));
   const sort = params.get('sort');
   const trail = (params.get('pages') ?? '').split('.').filter(Boolean);
   return {
@@ -45,10 +47,19 @@ export function useQueueUrl() {
   const [params, setParams] = useSearchParams();
   const { filters, trail } = useMemo(() => readQueueUrl(params), [params]);
   /** Any change of filter or sort starts again from the first page. */
-  const update = useCallback((change: Partial<QueueFilters>) => {
-    setParams(writeQueueUrl({ ...filters, ...change, cursor: '' }, []), { replace: 'q' in change });
-  }, [filters, setParams]);
-  const nextPage = useCallback((cursor: string) => setParams(writeQueueUrl(filters, [...trail, cursor])), [filters, trail, setParams]);
-  const previousPage = useCallback(() => setParams(writeQueueUrl(filters, trail.slice(0, -1))), [filters, trail, setParams]);
+  const update = useCallback(
+    (change: Partial<QueueFilters>) => {
+      setParams(writeQueueUrl({ ...filters, ...change, cursor: '' }, []), { replace: 'q' in change });
+    },
+    [filters, setParams],
+  );
+  const nextPage = useCallback(
+    (cursor: string) => setParams(writeQueueUrl(filters, [...trail, cursor])),
+    [filters, trail, setParams],
+  );
+  const previousPage = useCallback(
+    () => setParams(writeQueueUrl(filters, trail.slice(0, -1))),
+    [filters, trail, setParams],
+  );
   return { filters, pageNumber: trail.length + 1, update, nextPage, previousPage };
 }

@@ -7,16 +7,28 @@ import { formatWhen, timeInStatus } from './time-in-status';
 /** The few facts the office checks first, above the full application. */
 export function RequestFacts({ request, meId }: { request: OfficeRequest; meId: string }) {
   const rows: [string, ReactNode][] = [
-    ['Status', <span key="s" className="flex flex-wrap items-center gap-2"><StatusBadge status={request.status} /><span className="text-stone-500">for {timeInStatus(request.statusChangedAt)}</span></span>],
+    [
+      'Status',
+      <span key="s" className="flex flex-wrap items-center gap-2">
+        <StatusBadge status={request.status} />
+        <span className="text-stone-500">for {timeInStatus(request.statusChangedAt)}</span>
+      </span>,
+    ],
     ['Applicant', request.applicantName || '—'],
     ['Site', request.siteAddress || '—'],
     ['Road', request.roadName || '—'],
     ['Sent to the office', formatWhen(request.submittedAt)],
     ['Site visit', formatWhen(request.visitAt)],
-    ['Permit', request.permitReference
-      ? `${request.permitReference}${request.permitDecidedOn ? `, decided ${request.permitDecidedOn}` : ''}${request.permitExpiresOn ? `, expires ${request.permitExpiresOn}` : ''}`
-      : '—'],
-    ['Assignee', <AssignControl key="a" requestId={request.id} assigneeId={request.assigneeId} meId={meId} label="Assignee" />],
+    [
+      'Permit',
+      request.permitReference
+        ? `${request.permitReference}${request.permitDecidedOn ? `, decided ${request.permitDecidedOn}` : ''}${request.permitExpiresOn ? `, expires ${request.permitExpiresOn}` : ''}`
+        : '—',
+    ],
+    [
+      'Assignee',
+      <AssignControl key="a" requestId={request.id} assigneeId={request.assigneeId} meId={meId} label="Assignee" />,
+    ],
   ];
   if (request.permitConditions) rows.splice(7, 0, ['Permit conditions', request.permitConditions]);
   return (

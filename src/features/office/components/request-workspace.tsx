@@ -34,23 +34,38 @@ export function RequestWorkspace({ request, me, sections, cautions }: WorkspaceP
       <PageHeader
         title={<span className="font-mono">{request.reference}</span>}
         lead={`${request.applicantName || 'Unnamed applicant'} · ${request.siteAddress || 'no address yet'}`}
-        actions={<Link to={paths.office.queue.getHref()} className="text-sm font-semibold text-pine-700 hover:underline">← Back to the queue</Link>}
+        actions={
+          <Link to={paths.office.queue.getHref()} className="text-sm font-semibold text-pine-700 hover:underline">
+            ← Back to the queue
+          </Link>
+        }
       />
       <div className="grid gap-6 lg:grid-cols-[1fr_22rem]">
         <div className="min-w-0 space-y-4">
           <nav aria-label="Request sections" className="flex flex-wrap gap-1 border-b border-stone-200">
             {tabs.map((t) => (
-              <button key={t.id} type="button" aria-current={tab === t.id ? 'page' : undefined}
+              <button
+                key={t.id}
+                type="button"
+                aria-current={tab === t.id ? 'page' : undefined}
                 onClick={() => setParams(t.id === 'overview' ? {} : { tab: t.id }, { replace: true })}
-                className={`-mb-px border-b-2 px-3 py-2 text-sm font-semibold ${tab === t.id ? 'border-tape-dark text-pine-900' : 'border-transparent text-stone-600 hover:text-pine-700'}`}>
+                className={`-mb-px border-b-2 px-3 py-2 text-sm font-semibold ${tab === t.id ? 'border-tape-dark text-pine-900' : 'border-transparent text-stone-600 hover:text-pine-700'}`}
+              >
                 {t.label}
               </button>
             ))}
-            <Link to={paths.office.gradeCheck.getHref(request.id)} className="px-3 py-2 text-sm font-semibold text-stone-600 hover:text-pine-700">Survey and grade check</Link>
+            <Link
+              to={paths.office.gradeCheck.getHref(request.id)}
+              className="px-3 py-2 text-sm font-semibold text-stone-600 hover:text-pine-700"
+            >
+              Survey and grade check
+            </Link>
           </nav>
           {tab === 'overview' && (
             <>
-              <Panel title="At a glance"><RequestFacts request={request} meId={me.id} /></Panel>
+              <Panel title="At a glance">
+                <RequestFacts request={request} meId={me.id} />
+              </Panel>
               <Panel title="What the owner told us">{sections.application()}</Panel>
             </>
           )}

@@ -10,10 +10,16 @@ export const inviteUser = (input: AddPersonInput) => api.post<{ user: PersonView
 
 export function useUpdateUser() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: updateUser, onSuccess: () => queryClient.invalidateQueries({ queryKey: peopleKeys.all }) });
+  return useMutation({
+    mutationFn: updateUser,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: peopleKeys.all }),
+  });
 }
 
 export function useInviteUser() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: inviteUser, onSuccess: () => queryClient.invalidateQueries({ queryKey: peopleKeys.all }) });
+  return useMutation({
+    mutationFn: inviteUser,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: peopleKeys.all }),
+  });
 }

@@ -13,20 +13,36 @@ export function UsersTable() {
   return (
     <div className="space-y-4">
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field label="Search by name or e-mail">{({ id }) => <TextInput id={id} value={search} onChange={(e) => setSearch(e.target.value)} />}</Field>
-        <Field label="Role">{({ id }) => (
-          <SelectInput id={id} value={role} onChange={(e) => setRole(e.target.value as Role | '')}>
-            <option value="">All roles</option>
-            {roles.map((r) => <option key={r} value={r}>{roleLabels[r]}</option>)}
-          </SelectInput>
-        )}</Field>
+        <Field label="Search by name or e-mail">
+          {({ id }) => <TextInput id={id} value={search} onChange={(e) => setSearch(e.target.value)} />}
+        </Field>
+        <Field label="Role">
+          {({ id }) => (
+            <SelectInput id={id} value={role} onChange={(e) => setRole(e.target.value as Role | '')}>
+              <option value="">All roles</option>
+              {roles.map((r) => (
+                <option key={r} value={r}>
+                  {roleLabels[r]}
+                </option>
+              ))}
+            </SelectInput>
+          )}
+        </Field>
       </div>
       <ErrorNotice error={users.error ?? update.error} />
-      {users.isPending ? <Loading /> : (
+      {users.isPending ? (
+        <Loading />
+      ) : (
         <div className="overflow-x-auto">
           <table className="w-full text-left text-sm">
             <thead className="border-b border-stone-300 text-stone-600">
-              <tr><th className="py-2 pr-3">Name</th><th className="pr-3">E-mail</th><th className="pr-3">Role</th><th className="pr-3">Access</th><th>Last sign-in</th></tr>
+              <tr>
+                <th className="py-2 pr-3">Name</th>
+                <th className="pr-3">E-mail</th>
+                <th className="pr-3">Role</th>
+                <th className="pr-3">Access</th>
+                <th>Last sign-in</th>
+              </tr>
             </thead>
             <tbody>
               {users.data?.users.map((user) => (
@@ -34,15 +50,29 @@ export function UsersTable() {
                   <td className="py-2 pr-3 font-semibold">{user.name}</td>
                   <td className="pr-3">{user.email}</td>
                   <td className="pr-3">
-                    <label className="sr-only" htmlFor={`role-${user.id}`}>Role for {user.name}</label>
-                    <select id={`role-${user.id}`} className="rounded border border-stone-300 px-2 py-1" value={user.role}
-                      onChange={(e) => update.mutate({ id: user.id, role: e.target.value as Role })}>
-                      {roles.map((r) => <option key={r} value={r}>{roleLabels[r]}</option>)}
+                    <label className="sr-only" htmlFor={`role-${user.id}`}>
+                      Role for {user.name}
+                    </label>
+                    <select
+                      id={`role-${user.id}`}
+                      className="rounded border border-stone-300 px-2 py-1"
+                      value={user.role}
+                      onChange={(e) => update.mutate({ id: user.id, role: e.target.value as Role })}
+                    >
+                      {roles.map((r) => (
+                        <option key={r} value={r}>
+                          {roleLabels[r]}
+                        </option>
+                      ))}
                     </select>
                   </td>
                   <td className="pr-3">
                     <label className="inline-flex items-center gap-2">
-                      <input type="checkbox" checked={!user.disabled} onChange={(e) => update.mutate({ id: user.id, disabled: !e.target.checked })} />
+                      <input
+                        type="checkbox"
+                        checked={!user.disabled}
+                        onChange={(e) => update.mutate({ id: user.id, disabled: !e.target.checked })}
+                      />
                       {user.disabled ? 'Turned off' : 'Can sign in'}
                     </label>
                   </td>

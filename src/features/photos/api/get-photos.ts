@@ -9,7 +9,12 @@ export const getPhotos = (requestId: string) => api.get<PhotosAnswer>(`/api/requ
 
 // The links inside expire after five minutes, so the list is refreshed well before that.
 export const getPhotosQueryOptions = (requestId: string) =>
-  queryOptions({ queryKey: photoKeys.ofRequest(requestId), queryFn: () => getPhotos(requestId), staleTime: 60_000, refetchInterval: 4 * 60_000 });
+  queryOptions({
+    queryKey: photoKeys.ofRequest(requestId),
+    queryFn: () => getPhotos(requestId),
+    staleTime: 60_000,
+    refetchInterval: 4 * 60_000,
+  });
 
 export const usePhotos = (requestId: string) => useQuery(getPhotosQueryOptions(requestId));
 

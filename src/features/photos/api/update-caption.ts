@@ -3,8 +3,15 @@ import type { PhotoView } from '@shared/contracts/photos';
 import { api } from '@/lib/api-client';
 import { photoKeys } from '@/lib/query-keys';
 
-export const updateCaption = ({ requestId, photoId, caption }: { requestId: string; photoId: string; caption: string }) =>
-  api.patch<{ photo: PhotoView }>(`/api/requests/${requestId}/photos/${photoId}`, { caption });
+export const updateCaption = ({
+  requestId,
+  photoId,
+  caption,
+}: {
+  requestId: string;
+  photoId: string;
+  caption: string;
+}) => api.patch<{ photo: PhotoView }>(`/api/requests/${requestId}/photos/${photoId}`, { caption });
 
 export function useUpdateCaption(requestId: string) {
   const queryClient = useQueryClient();

@@ -7,7 +7,22 @@
 
 // Ancillary PNG chunks that change how the picture looks; every other ancillary chunk (eXIf, tEXt, zTXt, iTXt
 // where XMP lives, tIME, private ones) is left out. Critical chunks (upper-case first letter) are always kept.
-const keptAncillary = new Set(['tRNS', 'gAMA', 'cHRM', 'sRGB', 'iCCP', 'sBIT', 'bKGD', 'pHYs', 'cICP', 'mDCV', 'cLLI', 'acTL', 'fcTL', 'fdAT']);
+const keptAncillary = new Set([
+  'tRNS',
+  'gAMA',
+  'cHRM',
+  'sRGB',
+  'iCCP',
+  'sBIT',
+  'bKGD',
+  'pHYs',
+  'cICP',
+  'mDCV',
+  'cLLI',
+  'acTL',
+  'fcTL',
+  'fdAT',
+]);
 const pngSignature = [0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a];
 
 const fourCc = (view: DataView, at: number) =>
@@ -30,11 +45,19 @@ export function pngWithoutMetadata(bytes: Uint8Array): Uint8Array<ArrayBuffer> |
   }
   if (!ended) return null;
   const out = new Uint8Array(kept.reduce((n, part) => n + part.length, 0));
-  kept.reduce((offset, part) => { out.set(part, offset); return offset + part.length; }, 0);
+  kept.reduce((offset, part) => {
+    out.set(part, offset);
+    return offset + part.length;
+  }, 0);
   return out;
 }
 
-interface Box { type: string; start: number; body: number; end: number }
+interface Box {
+  type: string;
+  start: number;
+  body: number;
+  end: number;
+}
 
 /** The boxes laid one after another between `from` and `to`. */
 function boxesIn(view: DataView, from: number, to: number): Box[] {
@@ -74,7 +97,10 @@ function metadataItemIds(view: DataView, iinf: Box): Set<number> {
     const id = infeVersion === 3 ? view.getUint32(at) : view.getUint16(at);
     at += (infeVersion === 3 ? 4 : 2) + 2;
     let itemType = 'mime';
-    if (infeVersion >= 2) { itemType = fourCc(view, at); at += 4; }
+    if (infeVersion >= 2) {
+      itemType = fourCc(view, at);
+      at += 4;
+    }
     const [, afterName] = cString(view, at, infe.end);
     const [contentType] = itemType === 'mime' ? cString(view, afterName, infe.end) : [''];
     if (itemType === 'Exif' || (itemType === 'mime' && contentType === 'application/rdf+xml')) ids.add(id);
@@ -105,7 +131,10 @@ function itemRanges(view: DataView, iloc: Box, ids: Set<number>, idat: Box | und
     const id = version < 2 ? view.getUint16(at) : view.getUint32(at);
     at += version < 2 ? 2 : 4;
     let method = 0;
-    if (version === 1 || version === 2) { method = view.getUint16(at) & 0xf; at += 2; }
+    if (version === 1 || version === 2) {
+      method = view.getUint16(at) & 0xf;
+      at += 2;
+    }
     const dataReference = view.getUint16(at);
     const baseOffset = readSized(view, at + 2, baseOffsetSize);
     at += 2 + baseOffsetSize;
@@ -117,7 +146,8 @@ function itemRanges(view: DataView, iloc: Box, ids: Set<number>, idat: Box | und
       const length = readSized(view, at + offsetSize, lengthSize);
       at += offsetSize + lengthSize;
       if (!ids.has(id)) continue;
-      if (dataReference !== 0 || length === 0 || method > 1 || (method === 1 && !idat)) throw new RangeError('item stored where it cannot be blanked');
+      if (dataReference !== 0 || length === 0 || method > 1 || (method === 1 && !idat))
+        throw new RangeError('item stored where it cannot be blanked');
       const from = (method === 1 ? idat!.body : 0) + baseOffset + offset;
       ranges.push([from, from + length]);
     }
@@ -141,7 +171,12 @@ export function heifWithoutMetadata(bytes: Uint8Array): Uint8Array<ArrayBuffer> 
     const iloc = inside.find((b) => b.type === 'iloc');
     if (!iinf || !iloc) return null;
     const ids = metadataItemIds(view, iinf);
-    const ranges = itemRanges(view, iloc, ids, inside.find((b) => b.type === 'idat'));
+    const ranges = itemRanges(
+      view,
+      iloc,
+      ids,
+      inside.find((b) => b.type === 'idat'),
+    );
     if (ranges.some(([, to]) => to > bytes.length)) return null;
     const out = new Uint8Array(bytes); // a copy, also when given a Node Buffer (whose slice is a view)
     for (const [from, to] of ranges) out.fill(0, from, to);

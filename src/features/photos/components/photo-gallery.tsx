@@ -23,10 +23,18 @@ export function PhotoGallery({ requestId, editable = false, emptyText = 'No phot
   if (data.photos.length === 0) return <p className="text-sm text-stone-500">{emptyText}</p>;
   return (
     <div>
-      <p className="mb-2 text-sm text-stone-600">{data.photos.length === 1 ? '1 photo' : `${data.photos.length} photos`}</p>
+      <p className="mb-2 text-sm text-stone-600">
+        {data.photos.length === 1 ? '1 photo' : `${data.photos.length} photos`}
+      </p>
       <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3" aria-label="Site photos">
         {data.photos.map((photo, i) => (
-          <PhotoCard key={photo.id} photo={photo} requestId={requestId} editable={editable} onOpen={() => setIndex(i)} />
+          <PhotoCard
+            key={photo.id}
+            photo={photo}
+            requestId={requestId}
+            editable={editable}
+            onOpen={() => setIndex(i)}
+          />
         ))}
       </ul>
       <PhotoViewer requestId={requestId} photos={data.photos} index={index} onIndex={setIndex} />

@@ -27,14 +27,40 @@ export function PhotoImage({ requestId, photo, className, fileLink, onUnshowable
     setRetried(false);
     setUnshowable(false);
   }
-  const giveUp = () => { setUnshowable(true); onUnshowable?.(); };
+  const giveUp = () => {
+    setUnshowable(true);
+    onUnshowable?.();
+  };
   const refresh = () => {
-    if (retried) { giveUp(); return; }
+    if (retried) {
+      giveUp();
+      return;
+    }
     setRetried(true);
     // A link signed in the same second is the same link, and would not load again: the file itself is the trouble.
-    getPhotoUrl(requestId, photo.id).then((r) => (r.url === src ? giveUp() : setSrc(r.url))).catch(() => setSrc(undefined));
+    getPhotoUrl(requestId, photo.id)
+      .then((r) => (r.url === src ? giveUp() : setSrc(r.url)))
+      .catch(() => setSrc(undefined));
   };
-  if (!src) return <span className={`${className} grid place-items-center bg-stone-100 text-xs text-stone-500`}>Photo unavailable</span>;
-  if (unshowable) return <UnshowablePhoto contentType={photo.contentType} className={className}>{fileLink?.(src)}</UnshowablePhoto>;
-  return <img src={src} alt={photo.caption || `Site photo ${photo.fileName}`} onError={refresh} className={className} loading="lazy" />;
+  if (!src)
+    return (
+      <span className={`${className} grid place-items-center bg-stone-100 text-xs text-stone-500`}>
+        Photo unavailable
+      </span>
+    );
+  if (unshowable)
+    return (
+      <UnshowablePhoto contentType={photo.contentType} className={className}>
+        {fileLink?.(src)}
+      </UnshowablePhoto>
+    );
+  return (
+    <img
+      src={src}
+      alt={photo.caption || `Site photo ${photo.fileName}`}
+      onError={refresh}
+      className={className}
+      loading="lazy"
+    />
+  );
 }

@@ -37,19 +37,32 @@ export function PhotoStep({ requestId, onUsePosition }: PhotoStepProps) {
       </p>
       {offer && onUsePosition && !used && (
         <Notice title="A photo knows where it was taken">
-          <p>{offer.lat.toFixed(5)}, {offer.lng.toFixed(5)}. Use this as the position of the entrance? Only the position is kept, nothing else from the photo.</p>
-          <Button variant="secondary" className="mt-2" onClick={() => void accept()}>Use this position</Button>
+          <p>
+            {offer.lat.toFixed(5)}, {offer.lng.toFixed(5)}. Use this as the position of the entrance? Only the position
+            is kept, nothing else from the photo.
+          </p>
+          <Button variant="secondary" className="mt-2" onClick={() => void accept()}>
+            Use this position
+          </Button>
         </Notice>
       )}
       {used && <Notice>The site position is now set from your photo. You can change it in step 1.</Notice>}
-      {problems.map((p) => <Notice key={p} tone="error">{p}</Notice>)}
+      {problems.map((p) => (
+        <Notice key={p} tone="error">
+          {p}
+        </Notice>
+      ))}
       {stored >= maxPhotosPerRequest ? (
         <Notice tone="warn">This request has the most photos it can take. Remove one to add another.</Notice>
       ) : (
         <Suspense fallback={<Loading label="Loading the uploader…" />}>
-          <PhotoUploader requestId={requestId} room={maxPhotosPerRequest - stored} onStored={() => void refresh()}
+          <PhotoUploader
+            requestId={requestId}
+            room={maxPhotosPerRequest - stored}
+            onStored={() => void refresh()}
             onPosition={(lat, lng) => setOffer((current) => current ?? { lat, lng })}
-            onProblem={(message) => setProblems((list) => [...list, message])} />
+            onProblem={(message) => setProblems((list) => [...list, message])}
+          />
         </Suspense>
       )}
       <PhotoGallery requestId={requestId} editable />

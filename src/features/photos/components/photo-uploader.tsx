@@ -27,7 +27,11 @@ const typeOf = (file: UppyFile<PhotoMeta, Record<string, never>>) =>
 function buildUppy(props: { current: UploaderProps }) {
   const uppy = new Uppy<PhotoMeta, Record<string, never>>({
     autoProceed: true,
-    restrictions: { maxFileSize: maxPhotoBytes, allowedFileTypes: [...photoContentTypes, '.heic', '.jpg', '.jpeg', '.png', '.webp'], maxNumberOfFiles: props.current.room },
+    restrictions: {
+      maxFileSize: maxPhotoBytes,
+      allowedFileTypes: [...photoContentTypes, '.heic', '.jpg', '.jpeg', '.png', '.webp'],
+      maxNumberOfFiles: props.current.room,
+    },
   });
   uppy.use(AwsS3, {
     shouldUseMultipart: false,
@@ -36,31 +40,40 @@ function buildUppy(props: { current: UploaderProps }) {
     signRequest: async (request) => {
       const file = uppy.getFile(request.key);
       if (request.method !== 'PUT' || !file) throw new Error('Only single photo uploads are supported.');
-      const ticket = await requestUpload(props.current.requestId, { fileName: file.name ?? 'photo', contentType: typeOf(file), sizeBytes: file.size ?? 0 });
+      const ticket = await requestUpload(props.current.requestId, {
+        fileName: file.name ?? 'photo',
+        contentType: typeOf(file),
+        sizeBytes: file.size ?? 0,
+      });
       uppy.setFileMeta(file.id, { photoId: ticket.photo.id });
       return { url: ticket.upload.url, headers: ticket.upload.headers };
     },
   });
   // Before each upload: note the position, then swap in a copy without the camera's metadata.
   uppy.addPreProcessor(async (fileIDs) => {
-    await Promise.all(fileIDs.map(async (id) => {
-      const file = uppy.getFile(id);
-      if (!file || file.meta.photoId) return;
-      const position = await readPosition(file.data as Blob);
-      if (position) {
-        uppy.setFileMeta(id, { gpsLat: position.latitude, gpsLng: position.longitude });
-        props.current.onPosition(position.latitude, position.longitude);
-      }
-      const clean = await withoutMetadata(file.data as Blob, typeOf(file));
-      if (clean) uppy.setFileState(id, { data: clean, size: clean.size });
-    }));
+    await Promise.all(
+      fileIDs.map(async (id) => {
+        const file = uppy.getFile(id);
+        if (!file || file.meta.photoId) return;
+        const position = await readPosition(file.data as Blob);
+        if (position) {
+          uppy.setFileMeta(id, { gpsLat: position.latitude, gpsLng: position.longitude });
+          props.current.onPosition(position.latitude, position.longitude);
+        }
+        const clean = await withoutMetadata(file.data as Blob, typeOf(file));
+        if (clean) uppy.setFileState(id, { data: clean, size: clean.size });
+      }),
+    );
   });
   uppy.on('upload-success', (file) => {
     const current = file && uppy.getFile(file.id);
     if (!current?.meta.photoId) return;
     const { photoId, gpsLat, gpsLng } = current.meta;
     confirmUpload(props.current.requestId, photoId, { gpsLat: gpsLat ?? null, gpsLng: gpsLng ?? null })
-      .then(() => { uppy.removeFile(current.id); props.current.onStored(); })
+      .then(() => {
+        uppy.removeFile(current.id);
+        props.current.onStored();
+      })
       .catch(() => props.current.onProblem(`“${current.name}” did not arrive complete. Remove it and add it again.`));
   });
   return uppy;
@@ -84,7 +97,12 @@ export default function PhotoUploader(props: UploaderProps) {
   }, [uppy, props.room]);
   if (!uppy) return null;
   return (
-    <Dashboard uppy={uppy} height={300} width="100%" proudlyDisplayPoweredByUppy={false}
-      note="JPEG, PNG, WebP or HEIC, up to 15 MB each." />
+    <Dashboard
+      uppy={uppy}
+      height={300}
+      width="100%"
+      proudlyDisplayPoweredByUppy={false}
+      note="JPEG, PNG, WebP or HEIC, up to 15 MB each."
+    />
   );
 }

@@ -6,12 +6,15 @@ import { getRequestQueryOptions } from './get-request';
 
 export type DraftChange = SaveDraftInput & { id: string };
 
-export const saveDraft = ({ id, ...change }: DraftChange) => api.patch<{ request: RequestView }>(`/api/requests/${id}/draft`, change);
+export const saveDraft = ({ id, ...change }: DraftChange) =>
+  api.patch<{ request: RequestView }>(`/api/requests/${id}/draft`, change);
 
 /** For the moment the page goes away: the browser finishes a keepalive request even after the tab closes. */
 export function saveDraftOnExit({ id, ...change }: DraftChange) {
   void fetch(`/api/requests/${id}/draft`, {
-    method: 'PATCH', keepalive: true, credentials: 'same-origin',
+    method: 'PATCH',
+    keepalive: true,
+    credentials: 'same-origin',
     headers: { 'Content-Type': 'application/json', Accept: 'application/json' },
     body: JSON.stringify(change),
   }).catch(() => undefined);

@@ -1,14 +1,22 @@
 import type { ApplicationDraft } from '@shared/requests/application-schema';
 import {
-  drainageKindText, entranceUseText, entranceWorkText, roadOwnerText, timingText, vehicleKindText,
+  drainageKindText,
+  entranceUseText,
+  entranceWorkText,
+  roadOwnerText,
+  timingText,
+  vehicleKindText,
 } from '@shared/requests/choices';
 
 const unknown = 'Not given';
-const withUnit = (value: number | null | undefined, unit: string) => (value === null || value === undefined ? unknown : `${value} ${unit}`);
+const withUnit = (value: number | null | undefined, unit: string) =>
+  value === null || value === undefined ? unknown : `${value} ${unit}`;
 
 function position(site: NonNullable<ApplicationDraft['site']>) {
   if (site.positionKind === 'coordinates') {
-    return site.siteLat != null && site.siteLng != null ? `${site.siteLat.toFixed(5)}, ${site.siteLng.toFixed(5)}` : unknown;
+    return site.siteLat != null && site.siteLng != null
+      ? `${site.siteLat.toFixed(5)}, ${site.siteLng.toFixed(5)}`
+      : unknown;
   }
   if (!site.landmark) return unknown;
   return `${withUnit(site.distanceFromLandmarkFt, 'ft')} from ${site.landmark}`;

@@ -18,16 +18,33 @@ export function ChoiceGroup({ legend, hint, error, type, options, labels, inputP
   return (
     <fieldset className="flex flex-col gap-1" aria-describedby={describedBy} aria-invalid={Boolean(error) || undefined}>
       <legend className="mb-1 text-sm font-semibold text-stone-800">{legend}</legend>
-      {hint && <p id={`${id}-hint`} className="text-xs text-stone-500">{hint}</p>}
+      {hint && (
+        <p id={`${id}-hint`} className="text-xs text-stone-500">
+          {hint}
+        </p>
+      )}
       <div className="flex flex-wrap gap-2">
         {options.map((option) => (
-          <label key={option} className="flex cursor-pointer items-center gap-2 rounded-md border border-stone-300 bg-white px-3 py-2 text-sm has-[:checked]:border-pine-500 has-[:checked]:bg-pine-50">
-            <input type={type} value={option} className="accent-pine-700" aria-invalid={Boolean(error) || undefined} {...inputProps} />
+          <label
+            key={option}
+            className="flex cursor-pointer items-center gap-2 rounded-md border border-stone-300 bg-white px-3 py-2 text-sm has-[:checked]:border-pine-500 has-[:checked]:bg-pine-50"
+          >
+            <input
+              type={type}
+              value={option}
+              className="accent-pine-700"
+              aria-invalid={Boolean(error) || undefined}
+              {...inputProps}
+            />
             {labels[option]}
           </label>
         ))}
       </div>
-      {error && <p id={`${id}-error`} className="text-sm font-medium text-clay">{error}</p>}
+      {error && (
+        <p id={`${id}-error`} className="text-sm font-medium text-clay">
+          {error}
+        </p>
+      )}
     </fieldset>
   );
 }

@@ -28,7 +28,10 @@ export function fieldsByStep(error: unknown): Record<'site' | 'entrance', Record
 }
 
 /** Shows the server's messages next to their fields and moves focus to the first one. */
-export function useServerFields<T extends FieldValues>(fields: Record<string, string> | undefined, setError: UseFormSetError<T>) {
+export function useServerFields<T extends FieldValues>(
+  fields: Record<string, string> | undefined,
+  setError: UseFormSetError<T>,
+) {
   useEffect(() => {
     Object.entries(fields ?? {}).forEach(([name, message], index) => {
       setError(name as Path<T>, { type: 'server', message }, { shouldFocus: index === 0 });
@@ -36,7 +39,10 @@ export function useServerFields<T extends FieldValues>(fields: Record<string, st
   }, [fields, setError]);
 }
 
-export interface StepSnapshot { values: object; dirty: boolean }
+export interface StepSnapshot {
+  values: object;
+  dirty: boolean;
+}
 
 export interface StepProps<T> {
   initial: Partial<T>;

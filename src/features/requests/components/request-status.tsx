@@ -26,10 +26,20 @@ export function RequestStatus({ request, editHref, question }: RequestStatusProp
         <p className="text-stone-700">{request.whatNext}</p>
       </div>
       {request.status === 'draft' && (
-        <Link to={editHref} className="inline-flex rounded-md bg-pine-700 px-4 py-2 text-sm font-semibold text-white hover:bg-pine-800">Continue the form</Link>
+        <Link
+          to={editHref}
+          className="inline-flex rounded-md bg-pine-700 px-4 py-2 text-sm font-semibold text-white hover:bg-pine-800"
+        >
+          Continue the form
+        </Link>
       )}
       {request.status === 'needs_details' && <AnswerForm request={request} editHref={editHref} question={question} />}
-      {can('withdraw') && <Withdraw onConfirm={() => transition.mutate({ action: 'withdraw', expectedVersion: request.version })} pending={transition.isPending} />}
+      {can('withdraw') && (
+        <Withdraw
+          onConfirm={() => transition.mutate({ action: 'withdraw', expectedVersion: request.version })}
+          pending={transition.isPending}
+        />
+      )}
       <ErrorNotice error={transition.error} />
     </div>
   );
@@ -48,12 +58,31 @@ function AnswerForm({ request, editHref, question }: RequestStatusProps) {
     <form onSubmit={send} noValidate className="space-y-2 rounded-md border-l-4 border-tape bg-amber-50 p-4">
       <p className="font-semibold text-amber-950">The office asks:</p>
       <p className="whitespace-pre-line">{question || 'See the latest message from the office.'}</p>
-      <label htmlFor={id} className="block text-sm font-semibold">Your answer</label>
-      <TextArea id={id} value={answer} onChange={(e) => setAnswer(e.target.value)} aria-invalid={Boolean(fieldError)}
-        aria-describedby={fieldError ? `${id}-error` : undefined} />
-      {fieldError && <p id={`${id}-error`} className="text-sm font-medium text-clay">{fieldError}</p>}
-      <p className="text-sm text-stone-600">If the question is about your answers, you can also <Link className="underline" to={editHref}>change the form</Link> first.</p>
-      <Button type="submit" disabled={transition.isPending}>{transition.isPending ? 'Sending…' : 'Send my answer'}</Button>
+      <label htmlFor={id} className="block text-sm font-semibold">
+        Your answer
+      </label>
+      <TextArea
+        id={id}
+        value={answer}
+        onChange={(e) => setAnswer(e.target.value)}
+        aria-invalid={Boolean(fieldError)}
+        aria-describedby={fieldError ? `${id}-error` : undefined}
+      />
+      {fieldError && (
+        <p id={`${id}-error`} className="text-sm font-medium text-clay">
+          {fieldError}
+        </p>
+      )}
+      <p className="text-sm text-stone-600">
+        If the question is about your answers, you can also{' '}
+        <Link className="underline" to={editHref}>
+          change the form
+        </Link>{' '}
+        first.
+      </p>
+      <Button type="submit" disabled={transition.isPending}>
+        {transition.isPending ? 'Sending…' : 'Send my answer'}
+      </Button>
       {transition.error && !fieldError ? <ErrorNotice error={transition.error} /> : null}
     </form>
   );
@@ -66,13 +95,22 @@ function Withdraw({ onConfirm, pending }: { onConfirm: () => void; pending: bool
   useEffect(() => {
     if (asking) confirm.current?.focus();
   }, [asking]);
-  if (!asking) return <Button variant="secondary" onClick={() => setAsking(true)}>Withdraw this request</Button>;
+  if (!asking)
+    return (
+      <Button variant="secondary" onClick={() => setAsking(true)}>
+        Withdraw this request
+      </Button>
+    );
   return (
     <Notice tone="warn" title="Withdraw this request?">
       <p>The office stops work on it. This cannot be undone; you would need to start a new request.</p>
       <div className="mt-2 flex gap-2">
-        <Button variant="danger" onClick={onConfirm} disabled={pending} ref={confirm}>Yes, withdraw</Button>
-        <Button variant="secondary" onClick={() => setAsking(false)}>Keep it</Button>
+        <Button variant="danger" onClick={onConfirm} disabled={pending} ref={confirm}>
+          Yes, withdraw
+        </Button>
+        <Button variant="secondary" onClick={() => setAsking(false)}>
+          Keep it
+        </Button>
       </div>
     </Notice>
   );

@@ -38,7 +38,15 @@ export function RequestWizard({ requestId, ...rest }: WizardProps) {
   if (error) return <ErrorNotice error={error} />;
   const { request } = data;
   if (request.status !== 'draft' && request.status !== 'needs_details') {
-    return <Notice title={`This request is “${request.statusLabel}”`}>Its answers can no longer be changed here. <Link className="underline" to={rest.requestHref}>Open the request</Link> to follow it or write to the office.</Notice>;
+    return (
+      <Notice title={`This request is “${request.statusLabel}”`}>
+        Its answers can no longer be changed here.{' '}
+        <Link className="underline" to={rest.requestHref}>
+          Open the request
+        </Link>{' '}
+        to follow it or write to the office.
+      </Notice>
+    );
   }
   return <WizardBody key={request.id} request={request} {...rest} />;
 }
@@ -66,7 +74,10 @@ function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> 
   const busy = save.isPending || transition.isPending;
 
   useEffect(() => {
-    if (firstRender.current) { firstRender.current = false; return; }
+    if (firstRender.current) {
+      firstRender.current = false;
+      return;
+    }
     // A step opened to show the server's objections puts focus on the first of them instead.
     if (!hasServerFields.current) heading.current?.focus();
   }, [step]);
@@ -77,9 +88,14 @@ function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> 
     const pending = () => {
       const snap = snapshot.current?.();
       const key = step === 0 ? 'site' : step === 1 ? 'entrance' : null;
-      return snap?.dirty && key ? { id: request.id, expectedVersion: version.current, [key]: answeredOnly(snap.values) } : null;
+      return snap?.dirty && key
+        ? { id: request.id, expectedVersion: version.current, [key]: answeredOnly(snap.values) }
+        : null;
     };
-    const onPageHide = () => { const change = pending(); if (change) saveDraftOnExit(change); };
+    const onPageHide = () => {
+      const change = pending();
+      if (change) saveDraftOnExit(change);
+    };
     window.addEventListener('pagehide', onPageHide);
     return () => {
       window.removeEventListener('pagehide', onPageHide);
@@ -88,7 +104,10 @@ function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> 
     };
   }, [step, request.id, saveQuietly]);
 
-  async function persist(change: { site?: SiteStep | Partial<SiteStep>; entrance?: EntranceStep | Partial<EntranceStep> }, nextStep: number) {
+  async function persist(
+    change: { site?: SiteStep | Partial<SiteStep>; entrance?: EntranceStep | Partial<EntranceStep> },
+    nextStep: number,
+  ) {
     setProblem(null);
     try {
       const saved = await saveKeepingScreen({ id: request.id, wizardStep: nextStep, ...change });
@@ -156,17 +175,42 @@ function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> 
         <h2 ref={heading} tabIndex={-1} className="mb-4 text-xl font-bold text-pine-900 outline-none">
           Step {step + 1} of 4: {wizardSteps[step]}
         </h2>
-        {problem !== null && <div className="mb-4"><ErrorNotice error={problem} /></div>}
+        {problem !== null && (
+          <div className="mb-4">
+            <ErrorNotice error={problem} />
+          </div>
+        )}
         {step === 0 && (
-          <SiteStepForm key={stepKey} initial={latest.application.site ?? {}} serverFields={serverFields?.site} saving={busy}
-            keepSnapshot={keepSnapshot} onNext={(site) => persist({ site }, 1)} />
+          <SiteStepForm
+            key={stepKey}
+            initial={latest.application.site ?? {}}
+            serverFields={serverFields?.site}
+            saving={busy}
+            keepSnapshot={keepSnapshot}
+            onNext={(site) => persist({ site }, 1)}
+          />
         )}
         {step === 1 && (
-          <EntranceStepForm key={stepKey} initial={latest.application.entrance ?? {}} serverFields={serverFields?.entrance} saving={busy}
-            keepSnapshot={keepSnapshot} onNext={(entrance) => persist({ entrance }, 2)} onBack={(entrance) => persist({ entrance: answeredOnly(entrance) }, 0)} />
+          <EntranceStepForm
+            key={stepKey}
+            initial={latest.application.entrance ?? {}}
+            serverFields={serverFields?.entrance}
+            saving={busy}
+            keepSnapshot={keepSnapshot}
+            onNext={(entrance) => persist({ entrance }, 2)}
+            onBack={(entrance) => persist({ entrance: answeredOnly(entrance) }, 0)}
+          />
         )}
         {step === 2 && (
-          <form noValidate onSubmit={(e) => { e.preventDefault(); void persist({}, 3); }} className="space-y-5" aria-label="Photos">
+          <form
+            noValidate
+            onSubmit={(e) => {
+              e.preventDefault();
+              void persist({}, 3);
+            }}
+            className="space-y-5"
+            aria-label="Photos"
+          >
             <Photos requestId={request.id} readOnly={false} onUsePosition={usePosition} />
             <StepButtons saving={busy} onBack={() => void persist({}, 1)} />
           </form>
@@ -175,12 +219,22 @@ function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> 
           <div className="space-y-6">
             <ApplicationSummary application={latest.application} />
             <Photos requestId={request.id} readOnly onUsePosition={usePosition} />
-            <p className="text-sm text-stone-600">{request.status === 'needs_details'
-              ? 'Your changes are saved. Answer the office’s question on the request page to send it back to them.'
-              : 'When you send it, the office gets your request and you get a receipt by e-mail. You can still withdraw it later.'}</p>
+            <p className="text-sm text-stone-600">
+              {request.status === 'needs_details'
+                ? 'Your changes are saved. Answer the office’s question on the request page to send it back to them.'
+                : 'When you send it, the office gets your request and you get a receipt by e-mail. You can still withdraw it later.'}
+            </p>
             <div className="flex flex-wrap gap-3 border-t border-stone-200 pt-4">
-              <Button variant="secondary" onClick={() => void persist({}, 2)} disabled={busy}>Back</Button>
-              <Button onClick={() => void send()} disabled={busy}>{transition.isPending ? 'Sending…' : request.status === 'needs_details' ? 'Done: back to the request' : 'Send to the office'}</Button>
+              <Button variant="secondary" onClick={() => void persist({}, 2)} disabled={busy}>
+                Back
+              </Button>
+              <Button onClick={() => void send()} disabled={busy}>
+                {transition.isPending
+                  ? 'Sending…'
+                  : request.status === 'needs_details'
+                    ? 'Done: back to the request'
+                    : 'Send to the office'}
+              </Button>
             </div>
           </div>
         )}

@@ -10,9 +10,10 @@ export function useCreateDraft(jurisdictionId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createDraft,
-    onSuccess: () => Promise.all([
-      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
-      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.list() }),
-    ]),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
+        queryClient.invalidateQueries({ queryKey: ruleProfileKeys.list() }),
+      ]),
   });
 }

@@ -8,5 +8,8 @@ export const createJurisdiction = (input: CreateJurisdictionInput) =>
 
 export function useCreateJurisdiction() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: createJurisdiction, onSuccess: () => queryClient.invalidateQueries({ queryKey: ruleProfileKeys.list() }) });
+  return useMutation({
+    mutationFn: createJurisdiction,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: ruleProfileKeys.list() }),
+  });
 }

@@ -5,7 +5,8 @@ import { ruleProfileKeys } from '@/lib/query-keys';
 
 export type { JurisdictionDetail, ProfileVersion } from '@shared/contracts/rule-profiles';
 
-export const getJurisdiction = (id: string) => api.get<{ jurisdiction: JurisdictionDetail }>(`/api/jurisdictions/${id}`);
+export const getJurisdiction = (id: string) =>
+  api.get<{ jurisdiction: JurisdictionDetail }>(`/api/jurisdictions/${id}`);
 
 export const getJurisdictionQueryOptions = (id: string) =>
   queryOptions({ queryKey: ruleProfileKeys.one(id), queryFn: () => getJurisdiction(id) });

@@ -7,6 +7,7 @@ export type { JurisdictionSummary, VersionSummary } from '@shared/contracts/rule
 
 export const getJurisdictions = () => api.get<{ jurisdictions: JurisdictionSummary[] }>('/api/jurisdictions');
 
-export const getJurisdictionsQueryOptions = () => queryOptions({ queryKey: ruleProfileKeys.list(), queryFn: getJurisdictions });
+export const getJurisdictionsQueryOptions = () =>
+  queryOptions({ queryKey: ruleProfileKeys.list(), queryFn: getJurisdictions });
 
 export const useJurisdictions = () => useQuery(getJurisdictionsQueryOptions());

@@ -3,16 +3,18 @@ import type { ProfileVersion } from '@shared/contracts/rule-profiles';
 import { api } from '@/lib/api-client';
 import { ruleProfileKeys } from '@/lib/query-keys';
 
-export const publishVersion = (versionId: string) => api.post<{ version: ProfileVersion }>(`/api/rule-profile-versions/${versionId}/publish`);
+export const publishVersion = (versionId: string) =>
+  api.post<{ version: ProfileVersion }>(`/api/rule-profile-versions/${versionId}/publish`);
 
 export function usePublishVersion(jurisdictionId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: publishVersion,
-    onSuccess: (_data, versionId) => Promise.all([
-      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
-      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.version(versionId) }),
-      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.list() }),
-    ]),
+    onSuccess: (_data, versionId) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
+        queryClient.invalidateQueries({ queryKey: ruleProfileKeys.version(versionId) }),
+        queryClient.invalidateQueries({ queryKey: ruleProfileKeys.list() }),
+      ]),
   });
 }

@@ -11,9 +11,10 @@ export function useUpdateDraft(jurisdictionId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: updateDraft,
-    onSuccess: (_data, { versionId }) => Promise.all([
-      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
-      queryClient.invalidateQueries({ queryKey: ruleProfileKeys.version(versionId) }),
-    ]),
+    onSuccess: (_data, { versionId }) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
+        queryClient.invalidateQueries({ queryKey: ruleProfileKeys.version(versionId) }),
+      ]),
   });
 }

@@ -10,16 +10,31 @@ export function JurisdictionsList() {
   if (data.jurisdictions.length === 0) return <p className="text-sm text-stone-500">No road authorities yet.</p>;
   return (
     <table className="w-full text-sm" aria-label="Road authorities">
-      <thead><tr className="border-b border-stone-300 text-left text-stone-600"><th className="py-1">Jurisdiction</th><th>Authority</th><th>Current version</th><th>Draft</th></tr></thead>
+      <thead>
+        <tr className="border-b border-stone-300 text-left text-stone-600">
+          <th className="py-1">Jurisdiction</th>
+          <th>Authority</th>
+          <th>Current version</th>
+          <th>Draft</th>
+        </tr>
+      </thead>
       <tbody>
         {data.jurisdictions.map((j) => {
           const current = j.versions.find((v) => v.id === j.currentVersionId);
           const draft = j.versions.find((v) => v.status === 'draft');
           return (
             <tr key={j.id} className="border-b border-stone-100">
-              <td className="py-2"><Link className="font-semibold text-pine-700 underline" to={paths.office.ruleProfile.getHref(j.id)}>{j.name}</Link></td>
+              <td className="py-2">
+                <Link className="font-semibold text-pine-700 underline" to={paths.office.ruleProfile.getHref(j.id)}>
+                  {j.name}
+                </Link>
+              </td>
               <td>{j.authority}</td>
-              <td>{current ? `Version ${current.version}, published ${new Date(current.publishedAt ?? current.createdAt).toLocaleDateString()}` : 'None published yet'}</td>
+              <td>
+                {current
+                  ? `Version ${current.version}, published ${new Date(current.publishedAt ?? current.createdAt).toLocaleDateString()}`
+                  : 'None published yet'}
+              </td>
               <td>{draft ? `Version ${draft.version}` : ''}</td>
             </tr>
           );

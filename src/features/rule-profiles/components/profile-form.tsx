@@ -36,7 +36,13 @@ export function ProfileForm({ version }: { version: ProfileVersion }) {
   };
 
   return (
-    <form className="space-y-6" onSubmit={(e) => { e.preventDefault(); void save().catch(() => undefined); }}>
+    <form
+      className="space-y-6"
+      onSubmit={(e) => {
+        e.preventDefault();
+        void save().catch(() => undefined);
+      }}
+    >
       {profileGroups.map((group) => (
         <fieldset key={group.title} className="space-y-3 rounded-md border border-stone-200 p-4">
           <legend className="px-1 font-serif text-lg font-bold text-pine-900">{group.title}</legend>
@@ -45,38 +51,95 @@ export function ProfileForm({ version }: { version: ProfileVersion }) {
             const showSource = group.fields.findIndex((g) => sourceKeyOf(g) === sourceKey) === i;
             return (
               <div key={f.path} className="grid gap-3 sm:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
-                <Field label={`${f.label}${f.unit ? ` (${f.unit})` : ''}${f.optional ? ' — optional' : ''}`} error={errorFor(f.path)}>
-                  {({ id, describedBy, invalid }) => f.choices ? (
-                    <SelectInput id={id} value={values[f.path]} onChange={(e) => edit(setValues, f.path)(e.target.value)}>
-                      {f.choices.map(([v, t]) => <option key={v} value={v}>{t}</option>)}
-                    </SelectInput>
-                  ) : (
-                    <TextInput id={id} value={values[f.path]} inputMode={f.text ? 'text' : 'decimal'} aria-describedby={describedBy} aria-invalid={invalid} onChange={(e) => edit(setValues, f.path)(e.target.value)} />
-                  )}
+                <Field
+                  label={`${f.label}${f.unit ? ` (${f.unit})` : ''}${f.optional ? ' — optional' : ''}`}
+                  error={errorFor(f.path)}
+                >
+                  {({ id, describedBy, invalid }) =>
+                    f.choices ? (
+                      <SelectInput
+                        id={id}
+                        value={values[f.path]}
+                        onChange={(e) => edit(setValues, f.path)(e.target.value)}
+                      >
+                        {f.choices.map(([v, t]) => (
+                          <option key={v} value={v}>
+                            {t}
+                          </option>
+                        ))}
+                      </SelectInput>
+                    ) : (
+                      <TextInput
+                        id={id}
+                        value={values[f.path]}
+                        inputMode={f.text ? 'text' : 'decimal'}
+                        aria-describedby={describedBy}
+                        aria-invalid={invalid}
+                        onChange={(e) => edit(setValues, f.path)(e.target.value)}
+                      />
+                    )
+                  }
                 </Field>
                 {showSource ? (
-                  <Field label={`Source for ${f.sourceKey ? 'the design vehicle' : f.label.toLowerCase()}`} error={serverErrors[`profile.sources.${sourceKey}`]}>
-                    {({ id }) => <TextInput id={id} value={sources[sourceKey] ?? ''} placeholder="Ordinance, standard or practice this comes from" onChange={(e) => edit(setSources, sourceKey)(e.target.value)} />}
+                  <Field
+                    label={`Source for ${f.sourceKey ? 'the design vehicle' : f.label.toLowerCase()}`}
+                    error={serverErrors[`profile.sources.${sourceKey}`]}
+                  >
+                    {({ id }) => (
+                      <TextInput
+                        id={id}
+                        value={sources[sourceKey] ?? ''}
+                        placeholder="Ordinance, standard or practice this comes from"
+                        onChange={(e) => edit(setSources, sourceKey)(e.target.value)}
+                      />
+                    )}
                   </Field>
-                ) : <div />}
+                ) : (
+                  <div />
+                )}
               </div>
             );
           })}
         </fieldset>
       ))}
       <Field label="What changed in this version">
-        {({ id }) => <TextInput id={id} value={changeNote} onChange={(e) => { setChangeNote(e.target.value); setDirty(true); }} />}
+        {({ id }) => (
+          <TextInput
+            id={id}
+            value={changeNote}
+            onChange={(e) => {
+              setChangeNote(e.target.value);
+              setDirty(true);
+            }}
+          />
+        )}
       </Field>
       <ErrorNotice error={update.error ?? publish.error} />
       <div className="flex flex-wrap gap-3">
-        <Button type="submit" disabled={update.isPending}>{update.isPending ? 'Saving…' : 'Save draft'}</Button>
-        <Button variant="secondary" disabled={publish.isPending || update.isPending}
-          onClick={() => void (dirty ? save() : Promise.resolve(true)).then((ok) => ok && publish.mutate(version.id)).catch(() => undefined)}>
+        <Button type="submit" disabled={update.isPending}>
+          {update.isPending ? 'Saving…' : 'Save draft'}
+        </Button>
+        <Button
+          variant="secondary"
+          disabled={publish.isPending || update.isPending}
+          onClick={() =>
+            void (dirty ? save() : Promise.resolve(true))
+              .then((ok) => ok && publish.mutate(version.id))
+              .catch(() => undefined)
+          }
+        >
           Publish version {version.version}
         </Button>
-        {update.isSuccess && !dirty && <span role="status" className="self-center text-sm text-pine-800">Draft saved.</span>}
+        {update.isSuccess && !dirty && (
+          <span role="status" className="self-center text-sm text-pine-800">
+            Draft saved.
+          </span>
+        )}
       </div>
-      <p className="text-sm text-stone-500">Publishing freezes this version and makes it the one new checks use. Checks already saved keep the version they were made with.</p>
+      <p className="text-sm text-stone-500">
+        Publishing freezes this version and makes it the one new checks use. Checks already saved keep the version they
+        were made with.
+      </p>
     </form>
   );
 }

@@ -14,7 +14,10 @@ export function ProfileView({ profile }: { profile: RuleProfile }) {
             {group.fields.map((f) => (
               <div key={f.path} className="grid gap-1 py-1 sm:grid-cols-[2fr_1fr_3fr]">
                 <dt className="text-stone-700">{f.label}</dt>
-                <dd className="font-mono">{shown(valueAt(profile, f.path))}{f.unit && valueAt(profile, f.path) !== undefined ? ` ${f.unit}` : ''}</dd>
+                <dd className="font-mono">
+                  {shown(valueAt(profile, f.path))}
+                  {f.unit && valueAt(profile, f.path) !== undefined ? ` ${f.unit}` : ''}
+                </dd>
                 <dd className="text-stone-500">{profile.sources[sourceKeyOf(f)] ?? ''}</dd>
               </div>
             ))}

@@ -21,8 +21,12 @@ export function useRuleProfileChoice(initialJurisdictionId: string | null): Rule
   const chosen = jurisdictions.data?.jurisdictions.find((j) => j.id === jurisdictionId);
   const versionId = chosen?.currentVersionId ?? null;
   const version = useProfileVersion(versionId ?? undefined);
-  const picker = jurisdictions.isPending ? <Loading />
-    : jurisdictions.error ? <ErrorNotice error={jurisdictions.error} />
-    : <RuleProfilePicker choices={jurisdictions.data.jurisdictions} value={jurisdictionId} onChange={setJurisdictionId} />;
+  const picker = jurisdictions.isPending ? (
+    <Loading />
+  ) : jurisdictions.error ? (
+    <ErrorNotice error={jurisdictions.error} />
+  ) : (
+    <RuleProfilePicker choices={jurisdictions.data.jurisdictions} value={jurisdictionId} onChange={setJurisdictionId} />
+  );
   return { picker, versionId, rules: version.data?.version.profile, loadingRules: version.isFetching };
 }

@@ -16,36 +16,74 @@ export function VersionCompare({ versions }: { versions: ProfileVersion[] }) {
     <Field label={label}>
       {({ id }) => (
         <SelectInput id={id} value={value} onChange={(e) => onChange(e.target.value)}>
-          {versions.map((v) => <option key={v.id} value={v.id}>Version {v.version} ({v.status})</option>)}
+          {versions.map((v) => (
+            <option key={v.id} value={v.id}>
+              Version {v.version} ({v.status})
+            </option>
+          ))}
         </SelectInput>
       )}
     </Field>
   );
-  const rows = left && right ? allFields.map((f) => {
-    const key = sourceKeyOf(f);
-    const a = { value: valueAt(left.profile, f.path), source: left.profile.sources[key] };
-    const b = { value: valueAt(right.profile, f.path), source: right.profile.sources[key] };
-    return { f, a, b, changed: text(a.value) !== text(b.value) || text(a.source) !== text(b.source) };
-  }) : [];
+  const rows =
+    left && right
+      ? allFields.map((f) => {
+          const key = sourceKeyOf(f);
+          const a = { value: valueAt(left.profile, f.path), source: left.profile.sources[key] };
+          const b = { value: valueAt(right.profile, f.path), source: right.profile.sources[key] };
+          return { f, a, b, changed: text(a.value) !== text(b.value) || text(a.source) !== text(b.source) };
+        })
+      : [];
   const changed = rows.filter((r) => r.changed).length;
   return (
     <div className="space-y-3">
-      <div className="grid gap-3 sm:grid-cols-2">{pick('From', leftId, setLeftId)}{pick('To', rightId, setRightId)}</div>
+      <div className="grid gap-3 sm:grid-cols-2">
+        {pick('From', leftId, setLeftId)}
+        {pick('To', rightId, setRightId)}
+      </div>
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <p className="text-sm text-stone-600">{changed === 0 ? 'No values or sources differ.' : `${changed} ${changed === 1 ? 'value differs' : 'values differ'}.`}</p>
-        <label className="flex items-center gap-2 text-sm"><input type="checkbox" checked={onlyChanges} onChange={(e) => setOnlyChanges(e.target.checked)} />Only what changed</label>
+        <p className="text-sm text-stone-600">
+          {changed === 0
+            ? 'No values or sources differ.'
+            : `${changed} ${changed === 1 ? 'value differs' : 'values differ'}.`}
+        </p>
+        <label className="flex items-center gap-2 text-sm">
+          <input type="checkbox" checked={onlyChanges} onChange={(e) => setOnlyChanges(e.target.checked)} />
+          Only what changed
+        </label>
       </div>
       <div className="overflow-x-auto">
         <table className="w-full text-sm" aria-label="Version differences">
-          <thead><tr className="border-b border-stone-300 text-left text-stone-600"><th>Value</th><th>Version {left?.version}</th><th>Version {right?.version}</th></tr></thead>
+          <thead>
+            <tr className="border-b border-stone-300 text-left text-stone-600">
+              <th>Value</th>
+              <th>Version {left?.version}</th>
+              <th>Version {right?.version}</th>
+            </tr>
+          </thead>
           <tbody>
-            {rows.filter((r) => r.changed || !onlyChanges).map(({ f, a, b, changed: isChanged }) => (
-              <tr key={f.path} data-changed={isChanged} className={`border-b border-stone-100 align-top ${isChanged ? 'bg-amber-50' : ''}`}>
-                <td className="py-1 pr-2">{f.label}{f.unit ? ` (${f.unit})` : ''}</td>
-                <td className="pr-2"><span className="font-mono">{text(a.value)}</span><span className="block text-xs text-stone-500">{a.source}</span></td>
-                <td><span className="font-mono">{text(b.value)}</span><span className="block text-xs text-stone-500">{b.source}</span></td>
-              </tr>
-            ))}
+            {rows
+              .filter((r) => r.changed || !onlyChanges)
+              .map(({ f, a, b, changed: isChanged }) => (
+                <tr
+                  key={f.path}
+                  data-changed={isChanged}
+                  className={`border-b border-stone-100 align-top ${isChanged ? 'bg-amber-50' : ''}`}
+                >
+                  <td className="py-1 pr-2">
+                    {f.label}
+                    {f.unit ? ` (${f.unit})` : ''}
+                  </td>
+                  <td className="pr-2">
+                    <span className="font-mono">{text(a.value)}</span>
+                    <span className="block text-xs text-stone-500">{a.source}</span>
+                  </td>
+                  <td>
+                    <span className="font-mono">{text(b.value)}</span>
+                    <span className="block text-xs text-stone-500">{b.source}</span>
+                  </td>
+                </tr>
+              ))}
           </tbody>
         </table>
       </div>

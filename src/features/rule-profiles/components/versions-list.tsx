@@ -19,19 +19,35 @@ export function VersionsList({ jurisdiction, selectedId, onSelect, canEdit }: Ve
       <ul className="divide-y divide-stone-100" aria-label="Versions">
         {jurisdiction.versions.map((v) => (
           <li key={v.id}>
-            <button type="button" onClick={() => onSelect(v.id)} aria-current={v.id === selectedId ? 'true' : undefined}
-              className={`w-full rounded px-2 py-2 text-left text-sm ${v.id === selectedId ? 'bg-pine-50' : 'hover:bg-stone-50'}`}>
+            <button
+              type="button"
+              onClick={() => onSelect(v.id)}
+              aria-current={v.id === selectedId ? 'true' : undefined}
+              className={`w-full rounded px-2 py-2 text-left text-sm ${v.id === selectedId ? 'bg-pine-50' : 'hover:bg-stone-50'}`}
+            >
               <span className="font-semibold">Version {v.version}</span>{' '}
-              <span className="text-stone-600">{v.status === 'draft' ? 'draft' : v.id === jurisdiction.currentVersionId ? 'current' : 'published'}</span>
-              {v.publishedAt && <span className="text-stone-500"> · {new Date(v.publishedAt).toLocaleDateString()}</span>}
+              <span className="text-stone-600">
+                {v.status === 'draft' ? 'draft' : v.id === jurisdiction.currentVersionId ? 'current' : 'published'}
+              </span>
+              {v.publishedAt && (
+                <span className="text-stone-500"> · {new Date(v.publishedAt).toLocaleDateString()}</span>
+              )}
               {v.changeNote && <span className="block text-xs text-stone-500">{v.changeNote}</span>}
             </button>
           </li>
         ))}
       </ul>
       {canEdit && !hasDraft && (
-        <Button variant="secondary" disabled={createDraft.isPending}
-          onClick={() => createDraft.mutate({ jurisdictionId: jurisdiction.id, fromVersionId: selectedId || undefined }, { onSuccess: (r) => onSelect(r.version.id) })}>
+        <Button
+          variant="secondary"
+          disabled={createDraft.isPending}
+          onClick={() =>
+            createDraft.mutate(
+              { jurisdictionId: jurisdiction.id, fromVersionId: selectedId || undefined },
+              { onSuccess: (r) => onSelect(r.version.id) },
+            )
+          }
+        >
           Start a new version from this one
         </Button>
       )}

@@ -30,7 +30,11 @@ function setAt(target: Record<string, unknown>, path: string, value: unknown) {
  * The form back into a profile. A box that is not a number is reported here; blank optional limits are dropped
  * (the rule is then "not checked"), and everything else is left to the server's schema to judge.
  */
-export function fromFormValues(base: RuleProfile, values: FormValues, sources: FormValues): { profile: Record<string, unknown>; errors: FormValues } {
+export function fromFormValues(
+  base: RuleProfile,
+  values: FormValues,
+  sources: FormValues,
+): { profile: Record<string, unknown>; errors: FormValues } {
   const profile: Record<string, unknown> = structuredClone(base) as unknown as Record<string, unknown>;
   const errors: FormValues = {};
   for (const f of allFields) {
