@@ -35,15 +35,13 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     const parserError = error as BodyParserError;
     if (parserError.type === 'entity.parse.failed') {
-      res
-        .status(400)
-        .json({
-          error: {
-            code: 'malformed_json',
-            message: 'The request body is not valid JSON.',
-            fields: { '(body)': 'not valid JSON' },
-          },
-        });
+      res.status(400).json({
+        error: {
+          code: 'malformed_json',
+          message: 'The request body is not valid JSON.',
+          fields: { '(body)': 'not valid JSON' },
+        },
+      });
       return;
     }
     if (parserError.type === 'entity.too.large') {
@@ -52,15 +50,13 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     // The router decodes path parameters; a broken %-escape in the address (such as "%E0%A4%A") cannot be decoded.
     if (error instanceof URIError && parserError.status === 400) {
-      res
-        .status(400)
-        .json({
-          error: {
-            code: 'bad_path',
-            message: 'The address holds a broken %-escape.',
-            fields: { '(path)': 'not a valid address' },
-          },
-        });
+      res.status(400).json({
+        error: {
+          code: 'bad_path',
+          message: 'The address holds a broken %-escape.',
+          fields: { '(path)': 'not a valid address' },
+        },
+      });
       return;
     }
     if (parserError.expose && parserError.status && parserError.status < 500) {
@@ -73,15 +69,13 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     const duplicate = uniqueViolation(error);
     if (duplicate) {
       const field = duplicate.constraint ? uniqueFields[duplicate.constraint] : undefined;
-      res
-        .status(409)
-        .json({
-          error: {
-            code: 'already_exists',
-            message: 'That already exists: it may have been added a moment ago. Reload to see it.',
-            ...(field ? { fields: { [field]: 'is already taken' } } : {}),
-          },
-        });
+      res.status(409).json({
+        error: {
+          code: 'already_exists',
+          message: 'That already exists: it may have been added a moment ago. Reload to see it.',
+          ...(field ? { fields: { [field]: 'is already taken' } } : {}),
+        },
+      });
       return;
     }
     // A restart, failover or frozen server: say so plainly and let the client retry, instead of a 500.
@@ -95,13 +89,11 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       return;
     }
     logger.error({ err: error, url: loggableUrl(req.originalUrl) }, 'unhandled error');
-    res
-      .status(500)
-      .json({
-        error: {
-          code: 'internal',
-          message: 'Something went wrong on our side. Nothing you sent was lost; please try again.',
-        },
-      });
+    res.status(500).json({
+      error: {
+        code: 'internal',
+        message: 'Something went wrong on our side. Nothing you sent was lost; please try again.',
+      },
+    });
   };
 }

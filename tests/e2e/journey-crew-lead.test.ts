@@ -35,14 +35,12 @@ beforeAll(async () => {
   });
   jobId = job.id;
   address = job.siteAddress;
-  await db.db
-    .insert(messages)
-    .values({
-      requestId: job.id,
-      authorId: applicant.id,
-      visibility: 'shared',
-      body: 'The septic lid is left of the entrance; please keep off it.',
-    });
+  await db.db.insert(messages).values({
+    requestId: job.id,
+    authorId: applicant.id,
+    visibility: 'shared',
+    body: 'The septic lid is left of the entrance; please keep off it.',
+  });
   // The same yard the owner's test types in, so the distance on the board holds whichever test runs first.
   await saveYard(db.db, { label: 'Marrow Crossing yard', lat: 44, lng: -72.6 });
 });

@@ -153,13 +153,11 @@ describe('marking built and the office’s review', () => {
     expect(built.body.request.status).toBe('built');
 
     const office = cast.staff.agent;
-    const back = await office
-      .post(`/api/requests/${id}/transitions`)
-      .send({
-        action: 'send-back',
-        expectedVersion: version + 1,
-        note: 'Regrade the landing to 4% and shoot it again.',
-      });
+    const back = await office.post(`/api/requests/${id}/transitions`).send({
+      action: 'send-back',
+      expectedVersion: version + 1,
+      note: 'Regrade the landing to 4% and shoot it again.',
+    });
     expect(back.status, JSON.stringify(back.body)).toBe(200);
     const mine = await crew.get('/api/crew/my-jobs').expect(200);
     expect(mine.body.jobs.find((j: { requestId: string }) => j.requestId === id).sentBackNote).toContain(

@@ -13,27 +13,25 @@ beforeAll(async () => {
   const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id });
   reference = row.reference;
   const base = { requestId: row.id, template: 'transition.ask-details', textBody: 'text', htmlBody: '<p>html</p>' };
-  await t.ctx.db
-    .insert(emails)
-    .values([
-      ...Array.from({ length: 7 }, (_, i) => ({
-        ...base,
-        toAddress: `owner${i}@example.test`,
-        subject: `${row.reference}: More details needed`,
-        status: 'sent' as const,
-        attempts: 1,
-        createdAt: new Date(Date.UTC(2026, 3, 1, 9, i)),
-      })),
-      {
-        ...base,
-        toAddress: 'bounce@example.test',
-        subject: 'Gave up',
-        status: 'dead',
-        attempts: 6,
-        lastError: 'ECONNREFUSED: connect ECONNREFUSED 127.0.0.1:25',
-      },
-      { ...base, toAddress: 'later@example.test', subject: 'Waiting', status: 'queued' },
-    ]);
+  await t.ctx.db.insert(emails).values([
+    ...Array.from({ length: 7 }, (_, i) => ({
+      ...base,
+      toAddress: `owner${i}@example.test`,
+      subject: `${row.reference}: More details needed`,
+      status: 'sent' as const,
+      attempts: 1,
+      createdAt: new Date(Date.UTC(2026, 3, 1, 9, i)),
+    })),
+    {
+      ...base,
+      toAddress: 'bounce@example.test',
+      subject: 'Gave up',
+      status: 'dead',
+      attempts: 6,
+      lastError: 'ECONNREFUSED: connect ECONNREFUSED 127.0.0.1:25',
+    },
+    { ...base, toAddress: 'later@example.test', subject: 'Waiting', status: 'queued' },
+  ]);
 });
 afterAll(() => t.close());
 

@@ -18,20 +18,16 @@ describe('two office people changing one request at once', () => {
     async () => {
       const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id });
       const [a, b] = await Promise.all([
-        cast.staff.agent
-          .post(`/api/requests/${row.id}/transitions`)
-          .send({
-            action: 'ask-details',
-            note: 'Which side of the mailbox should the entrance go?',
-            expectedVersion: row.version,
-          }),
-        cast.otherStaff.agent
-          .post(`/api/requests/${row.id}/transitions`)
-          .send({
-            action: 'book-visit',
-            visitAt: new Date(Date.now() + 2 * 86_400_000).toISOString(),
-            expectedVersion: row.version,
-          }),
+        cast.staff.agent.post(`/api/requests/${row.id}/transitions`).send({
+          action: 'ask-details',
+          note: 'Which side of the mailbox should the entrance go?',
+          expectedVersion: row.version,
+        }),
+        cast.otherStaff.agent.post(`/api/requests/${row.id}/transitions`).send({
+          action: 'book-visit',
+          visitAt: new Date(Date.now() + 2 * 86_400_000).toISOString(),
+          expectedVersion: row.version,
+        }),
       ]);
       expect([a.status, b.status].sort()).toEqual([200, 409]);
       const loser = a.status === 409 ? a : b;

@@ -115,15 +115,13 @@ async function seedOne(tx: Tx, people: People, demo: DemoRequest, now: number) {
   for (const message of demo.messages ?? []) {
     const author = people[message.from];
     if (author)
-      await tx
-        .insert(messages)
-        .values({
-          requestId: request.id,
-          authorId: author.id,
-          visibility: message.visibility,
-          body: message.body,
-          createdAt: day(demo.ageDays - 1),
-        });
+      await tx.insert(messages).values({
+        requestId: request.id,
+        authorId: author.id,
+        visibility: message.visibility,
+        body: message.body,
+        createdAt: day(demo.ageDays - 1),
+      });
   }
   if (!reached(path, 'checked') || !demo.site) return;
 
