@@ -3,7 +3,7 @@ import { Link, useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/get-me';
-import { AsBuiltPage } from '@/features/crew/components/as-built-page';
+import { AsBuiltPage } from '@/features/jobs/components/as-built-page';
 
 export function Component() {
   const { id = '' } = useParams();

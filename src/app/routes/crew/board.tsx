@@ -2,8 +2,8 @@ import { crewScreenRoles } from '@shared/workflow/roles';
 import { RequireRole } from '@/app/layout/require-role';
 import { PageHeader, Panel } from '@/components/ui/panel';
 import { useMe } from '@/features/auth/api/get-me';
-import { BoardList } from '@/features/crew/components/board-list';
-import { YardForm } from '@/features/crew/components/yard-form';
+import { BoardList } from '@/features/jobs/components/board-list';
+import { YardForm } from '@/features/jobs/components/yard-form';
 
 export function Component() {
   const me = useMe().data;

@@ -4,8 +4,8 @@ import { RequireRole } from '@/app/layout/require-role';
 import { Panel } from '@/components/ui/panel';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/get-me';
-import { useFieldSheet } from '@/features/crew/api/get-field-sheet';
-import { FieldSheet } from '@/features/crew/components/field-sheet';
+import { useFieldSheet } from '@/features/jobs/api/get-field-sheet';
+import { FieldSheet } from '@/features/jobs/components/field-sheet';
 import { MessageThread } from '@/features/messages/components/message-thread';
 
 export function Component() {

@@ -1,6 +1,6 @@
 import { RequireRole } from '@/app/layout/require-role';
 import { PageHeader } from '@/components/ui/panel';
-import { MyJobsList } from '@/features/crew/components/my-jobs-list';
+import { MyJobsList } from '@/features/jobs/components/my-jobs-list';
 
 export function Component() {
   return (
