@@ -14,6 +14,8 @@ export interface ProgramSpec {
   margin: number;
   /** The road side in front of the first station, fixed, for the clearance rows. */
   before?: readonly ProfilePoint[];
+  /** A design close to the answer (elevation at each vertex) and its crest, for the solver to start from. */
+  near?: { at: Float64Array; k: number };
 }
 
 /**
@@ -41,7 +43,7 @@ export class DesignProgram {
       'relaxed',
       spec.margin,
     );
-    this.open = openLinear(highs, this.built.model);
+    this.open = openLinear(highs, this.built.model, spec.near && this.built.startAt(spec.near.at, spec.near.k));
   }
 
   /** Directions relaxed or the first k rising; clearance rows scaled by share, or left out when none is given. */

@@ -15,7 +15,7 @@ import {
 } from './least-earth-model';
 import type { Finding } from './findings';
 import type { ProfileCheck } from './profile-checks';
-import type { ProfilePoint } from './profile';
+import { elevationAt, type ProfilePoint } from './profile';
 import { checkDesign, roadEdgeReason, withRoadEdge } from './design-road-side';
 import { roadSidePoints, type RoadSide } from './road-edge';
 import type { DesignVehicle, RuleProfile } from './rule-profile';
@@ -79,7 +79,13 @@ interface Layout {
   crestFt?: number;
   /** The linear programme on these stations, loaded once for every crest and share tried. */
   program?: DesignProgram;
+  /** An earlier design near the answer (on other stations): the solver starts from it. */
+  near?: readonly ProfilePoint[];
 }
+
+/** Segments rising before the crest at `crestFt`. */
+const risingBefore = (corners: readonly ProfilePoint[], crestFt: number) =>
+  corners.slice(1).filter((c) => c.stationFt <= crestFt + STATION_TOLERANCE_FT).length;
 
 function solveOnce(
   job: Job,
@@ -206,6 +212,13 @@ function designOn(job: Job, bare: Layout): DesignFound {
   const reason = explainInfeasible(corners, ranges, job.rules, job.roadEdgeFt, job.targetEndFt);
   if (reason) return { ground, reason };
   const { rules, roadEdgeFt, targetEndFt, margin, before } = job;
+  const near =
+    bare.near && bare.crestFt !== undefined
+      ? {
+          at: Float64Array.from(corners, (c) => elevationAt(bare.near!, c.stationFt)),
+          k: risingBefore(corners, bare.crestFt),
+        }
+      : undefined;
   const program = new DesignProgram(job.highs, {
     ground,
     vertices: bare.vertices,
@@ -215,6 +228,7 @@ function designOn(job: Job, bare: Layout): DesignFound {
     targetEndFt,
     margin,
     before,
+    near,
   });
   try {
     return designWith(job, { ...bare, program }, corners, ranges);
@@ -228,10 +242,7 @@ function designWith(job: Job, layout: Layout, corners: ProfilePoint[], ranges: S
   const allowed = crestAllowed(corners, ranges, job.roadEdgeFt, job.targetEndFt);
   const share = new Float64Array(corners.length).fill(1);
   // A known crest is tried as it is; only if it cannot be met is the relaxation solved to choose again.
-  let k =
-    layout.crestFt === undefined
-      ? undefined
-      : corners.slice(1).filter((c) => c.stationFt <= layout.crestFt! + STATION_TOLERANCE_FT).length;
+  let k = layout.crestFt === undefined ? undefined : risingBefore(corners, layout.crestFt);
   for (let attempt = 0; attempt < MAX_TIGHTENING; attempt++) {
     let out = k === undefined ? undefined : solveOnce(job, layout, ranges, share, k);
     if (!out || out.status === 'infeasible') {
@@ -351,6 +362,7 @@ function curved(
     ground: dense,
     vertices: designVertices(dense, denseKeep, fine),
     crestFt: crestStation(first.design!),
+    near: first.design,
   };
   if (dense.length === ground.length && layout.vertices.length === base.vertices.length) return undefined;
   const second = designOn(job, layout);

@@ -1,4 +1,4 @@
-import type { LinearModel } from './design-solver';
+import type { LinearModel, LinearStart } from './design-solver';
 import type { ProfilePoint } from './profile';
 import type { RuleProfile } from './rule-profile';
 import { SparseRows } from './sparse-rows';
@@ -18,6 +18,9 @@ export interface SegmentRanges {
  * on a limit is solved again with no margin (see design-search.ts).
  */
 export const GRADE_MARGIN = 1e-6;
+
+// HiGHS basis statuses.
+const [LOWER, BASIC, UPPER, ZERO] = [0, 1, 2, 3];
 
 /**
  * A segment "rises" when its grade is at least zero (or the drainage minimum) and "falls" when it is at most
@@ -58,6 +61,8 @@ export interface DesignModel {
   directionCols: { first: number; lower: Float64Array; upper: Float64Array };
   /** The clearance rows (from `first`): the vertex each belongs to, the clearance that share scales and each row's fixed part. */
   clearance: { first: number; vertex: Int32Array; clearanceFt: number; fixedFt: Float64Array };
+  /** A start at the design `at` (elevation per vertex) with the first k segments rising (see startAt). */
+  startAt(at: Float64Array, k: number): LinearStart;
 }
 
 /**
@@ -109,7 +114,7 @@ export function buildLeastEarthModel(
       (i < n - 1 ? points[i + 1].stationFt - points[i].stationFt : 0) / 2;
     colLower[U(i)] = colLower[Q(i)] = 0;
     const j = seg[i];
-    const at: [number, number][] =
+    const terms: [number, number][] =
       t[i] === 0
         ? [[Z(j), 1]]
         : t[i] === 1
@@ -118,7 +123,8 @@ export function buildLeastEarthModel(
               [Z(j), 1 - t[i]],
               [Z(j + 1), t[i]],
             ];
-    rows.add([...at, [U(i), -1], [Q(i), 1]], e, e);
+    terms.push([U(i), -1], [Q(i), 1]);
+    rows.add(terms, e, e);
   }
   colLower[Z(0)] = colUpper[Z(0)] = roadEdgeFt;
   if (targetEndFt !== undefined) colLower[Z(m - 1)] = colUpper[Z(m - 1)] = targetEndFt;
@@ -162,13 +168,20 @@ export function buildLeastEarthModel(
       );
   }
 
-  const grade = (j: number): [number, number][] => [
-    [Z(j + 1), 1 / len[j]],
-    [Z(j), -1 / len[j]],
-  ];
   const maxChange = rules.maxGradeChangePercent / 100 - SHRINK;
-  for (let v = 1; v < m - 1; v++)
-    rows.add([...grade(v), ...grade(v - 1).map(([c, k]): [number, number] => [c, -k])], -maxChange, maxChange);
+  // Grade after vertex v less grade before it.
+  for (let v = 1; v < m - 1; v++) {
+    const [after, before] = [1 / len[v], 1 / len[v - 1]];
+    rows.add(
+      [
+        [Z(v + 1), after],
+        [Z(v), -after - before],
+        [Z(v - 1), before],
+      ],
+      -maxChange,
+      maxChange,
+    );
+  }
 
   const firstClearance = rows.count;
   const clearance = budget ? clearanceRows(x, budget) : [];
@@ -190,7 +203,23 @@ export function buildLeastEarthModel(
             : (1 - t[i]) * solution[Z(j)] + t[i] * solution[Z(j + 1)];
       return { stationFt: p.stationFt, elevationFt: z };
     });
+  const startAt = (at: Float64Array, k: number): LinearStart => {
+    const origin = new Float64Array(cols);
+    origin.set(at, Z(0));
+    const colStatus = new Int32Array(cols);
+    for (let j = 0; j < m; j++) colStatus[Z(j)] = colLower[Z(j)] === colUpper[Z(j)] ? LOWER : ZERO;
+    for (let i = 0; i < n; i++) {
+      const j = seg[i];
+      const z = (1 - t[i]) * at[j] + (j + 1 < m ? t[i] * at[j + 1] : 0);
+      colStatus[z >= points[i].elevationFt ? U(i) : Q(i)] = BASIC;
+    }
+    for (let j = 0; j < m - 1; j++) colStatus[R(j)] = j < k ? UPPER : LOWER;
+    const rowStatus = new Int32Array(rows.count).fill(BASIC);
+    rowStatus.fill(LOWER, 0, n);
+    return { origin, basis: { colStatus, rowStatus } };
+  };
   return {
+    startAt,
     model: { cost, colLower, colUpper, binary, rows },
     read,
     rising: (solution) => solution.slice(R(0), R(0) + m - 1),
