@@ -1,7 +1,7 @@
-import connectPgSimple from 'connect-pg-simple';
 import type { RequestHandler } from 'express';
 import session from 'express-session';
 import type { AppContext } from '../config/context';
+import { SessionStore } from './session-store';
 
 export const sessionCookieName = 'gradepass.sid';
 
@@ -14,17 +14,19 @@ declare module 'express-session' {
 
 /**
  * Sessions in PostgreSQL, written only once someone has signed in. The cookie and the stored row both expire after
- * SESSION_IDLE_MINUTES without a request (rolling: every request moves the expiry on); `endOldSessions` adds the
+ * SESSION_IDLE_MINUTES without a request (rolling: every request moves the expiry on, and the row is written
+ * when it lags by a minute; see session-store.ts); `endOldSessions` adds the
  * absolute limit of SESSION_MAX_DAYS from sign-in.
  */
 export function sessionMiddleware(
   { env, pool, logger }: Pick<AppContext, 'env' | 'pool' | 'logger'>,
   secure: boolean,
 ): RequestHandler[] {
-  const PgStore = connectPgSimple(session);
   const maxAgeMs = env.SESSION_MAX_DAYS * 86_400_000;
-  const store = new PgStore({
+  const store = new SessionStore({
     pool,
+    // A minute, or a tenth of the idle time if that is shorter: how far the stored expiry may lag the cookie's.
+    slackMs: Math.min(60_000, env.SESSION_IDLE_MINUTES * 6_000),
     tableName: 'session',
     createTableIfMissing: false,
     // The store's own default logs with console.error; a database outage is already answered 503 by the app.

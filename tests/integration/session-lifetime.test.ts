@@ -52,6 +52,22 @@ describe('sessions', () => {
     await agent.get('/api/me').expect(401);
   });
 
+  it('are not rewritten by every request of a busy person: only once the stored expiry lags by a minute', async () => {
+    await t.ctx.pool.query('delete from session');
+    const agent = await signIn(t.app, staff);
+    // Moved on 20 s ago: close enough that the row need not be written again.
+    await t.ctx.pool.query(`update session set expire = now() + interval '30 minutes' - interval '20 seconds'`);
+    const [before] = await sessionRows();
+    for (let i = 0; i < 5; i += 1) await agent.get('/api/me').expect(200);
+    const [after] = await sessionRows();
+    expect(after.expire.getTime()).toBe(before.expire.getTime());
+    // Moved on 90 s ago: past the slack, so the next request writes it.
+    await t.ctx.pool.query(`update session set expire = now() + interval '30 minutes' - interval '90 seconds'`);
+    await agent.get('/api/me').expect(200);
+    const [rolled] = await sessionRows();
+    expect(Math.abs(rolled.expire.getTime() - (Date.now() + 30 * minuteMs))).toBeLessThan(5_000);
+  });
+
   it('end 14 days after sign-in however busy they were', async () => {
     await t.ctx.pool.query('delete from session');
     const agent = await signIn(t.app, staff);
