@@ -1,55 +1,22 @@
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { createDb } from '../../server/db/client';
-import { gradeChecks, jurisdictions, requests } from '../../server/db/schema';
+import { describe, expect, it } from 'vitest';
+import { gradeChecks, requests } from '../../server/db/schema';
 import { demoPeople } from '../../server/dev/seed/demo-people';
-import { ensurePerson } from '../factories/people';
-import { createRequestRow, type RequestRow } from '../factories/request-rows';
-import { appUrl, launchBrowser, saveScreenshot, signInAs } from '../setup/browser';
+import { appUrl, saveScreenshot, signInAs } from '../setup/browser';
+import { gradeCheckStage, pasteCentreline } from '../setup/grade-check-stage';
 
 /** A visit-booked request in the Town of Elderbrook, whose 6% landing takes the surveyed 5.5% landing. */
-let session: Awaited<ReturnType<typeof launchBrowser>>;
-let db: ReturnType<typeof createDb>;
-let request: RequestRow;
+const stage = gradeCheckStage('town-of-elderbrook');
 const staff = demoPeople.filter((p) => p.role === 'staff')[0];
 const crewLead = demoPeople.filter((p) => p.role === 'crew')[0];
 
-beforeAll(async () => {
-  session = await launchBrowser();
-  db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
-  const owner = await ensurePerson(db.db, demoPeople.filter((p) => p.role === 'applicant')[1]);
-  const [town] = await db.db.select().from(jurisdictions).where(eq(jurisdictions.slug, 'town-of-elderbrook'));
-  request = await createRequestRow(db.db, {
-    applicantId: owner.id,
-    status: 'visit_booked',
-    jurisdictionId: town.id,
-    visitAt: new Date(),
-  });
-});
-afterAll(async () => {
-  await db?.pool.end();
-  await session?.close();
-});
-
-const centreline = [
-  'Station\tElevation',
-  '0+00\t100.00',
-  '0+10\t100.55',
-  '0+20\t101.10',
-  '0+40\t103.50',
-  '0+60\t105.90',
-  '0+80\t108.30',
-].join('\n');
-
 describe('the road edge, outlet control and the warped apron on screen', () => {
   it('the office enters them, sees the findings, the headwater and the warp stakes live; the crew reads them on the field sheet', async () => {
-    const context = await session.browser.newContext({ viewport: { width: 1440, height: 1000 } });
+    const context = await stage.session.browser.newContext({ viewport: { width: 1440, height: 1000 } });
     const page = await context.newPage();
     await signInAs(page, staff.email);
-    await page.goto(appUrl(`/office/requests/${request.id}/grade-check`));
-    await page.getByText('Paste from a spreadsheet').click();
-    await page.getByLabel('Pasted centreline').fill(centreline);
-    await page.getByRole('button', { name: 'Use the pasted rows' }).click();
+    await page.goto(appUrl(`/office/requests/${stage.request.id}/grade-check`));
+    await pasteCentreline(page);
     await page.getByTestId('live-verdict').waitFor();
     expect(await page.locator('tr[data-rule="grade.road-edge-change"]').getAttribute('data-status')).toBe(
       'not-checked',
@@ -96,7 +63,7 @@ describe('the road edge, outlet control and the warped apron on screen', () => {
     await page.getByText('Check 1 does not meet the rules').waitFor();
     await page.getByRole('button', { name: 'Attach it anyway' }).click();
     await page.getByRole('list', { name: 'Saved checks' }).getByText('Attached').waitFor();
-    const [saved] = await db.db.select().from(gradeChecks).where(eq(gradeChecks.requestId, request.id));
+    const [saved] = await stage.db.db.select().from(gradeChecks).where(eq(gradeChecks.requestId, stage.request.id));
     expect((saved.inputs as { roadSide?: unknown }).roadSide).toEqual({
       roadCrossSlopePercent: 2,
       shoulderWidthFt: 3,
@@ -104,15 +71,15 @@ describe('the road edge, outlet control and the warped apron on screen', () => {
     });
     await context.close();
 
-    await db.db.update(requests).set({ status: 'released' }).where(eq(requests.id, request.id));
-    const phone = await session.browser.newContext({
+    await stage.db.db.update(requests).set({ status: 'released' }).where(eq(requests.id, stage.request.id));
+    const phone = await stage.session.browser.newContext({
       viewport: { width: 412, height: 915 },
       isMobile: true,
       hasTouch: true,
     });
     const crewPage = await phone.newPage();
     await signInAs(crewPage, crewLead.email);
-    await crewPage.goto(appUrl(`/crew/jobs/${request.id}/field-sheet`));
+    await crewPage.goto(appUrl(`/crew/jobs/${stage.request.id}/field-sheet`));
     await crewPage.getByRole('heading', { name: 'Warp stakes at the entrance edges' }).waitFor();
     expect(await crewPage.getByRole('table', { name: 'Warp stakes' }).locator('tbody tr').count()).toBe(5);
     await crewPage.getByText(/control governs/).waitFor();

@@ -1,25 +1,11 @@
 import { useState, type FormEvent } from 'react';
-import { statusText, type RequestStatus } from '@shared/workflow/statuses';
+import { requestStatuses, statusText, type RequestStatus } from '@shared/workflow/statuses';
 import { Button } from '@/components/ui/button';
 import { useQueueOptions } from '../api/get-queue-options';
 import type { QueueFilters, QueueSort } from '../api/types';
 
-const officeStatuses: RequestStatus[] = [
-  'submitted',
-  'needs_details',
-  'visit_booked',
-  'checked',
-  'permit_filed',
-  'permit_granted',
-  'permit_refused',
-  'released',
-  'crew_assigned',
-  'under_construction',
-  'built',
-  'closed',
-  'declined',
-  'withdrawn',
-];
+// Every status but a draft, which the office never sees.
+const officeStatuses = requestStatuses.filter((status) => status !== 'draft');
 
 // On a phone the table's sortable headers give way to cards, so the order is chosen here instead.
 const sortChoices: [string, string][] = [
