@@ -1,14 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
 import { queueKeys, statusChangeKeys } from '@/lib/query-keys';
+import { runTransition } from '@/lib/status-change';
 import { getGradeChecksQueryOptions } from './get-grade-checks';
 
 /** The status change lives in the office workflow; this screen only offers the one step that follows a check. */
 export const markChecked = ({ requestId, expectedVersion }: { requestId: string; expectedVersion: number }) =>
-  api.post<{ request: { id: string; status: string; version: number } }>(`/api/requests/${requestId}/transitions`, {
-    action: 'mark-checked',
-    expectedVersion,
-  });
+  runTransition(requestId, { action: 'mark-checked', expectedVersion });
 
 export function useMarkChecked() {
   const queryClient = useQueryClient();
