@@ -180,6 +180,24 @@ describe('the queue’s query string', () => {
   });
 });
 
+describe('a value of the wrong type', () => {
+  it('is named in plain words, not the validator’s', async () => {
+    const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'permit_filed' });
+    const granted = await cast.staff.agent.post(`/api/requests/${row.id}/transitions`).send({
+      action: 'record-granted',
+      expectedVersion: row.version,
+      permitDecidedOn: '2026-11-20',
+      permitConditions: 7,
+      note: ['a'],
+    });
+    expect(granted.status).toBe(400);
+    expect(granted.body.error.fields).toEqual({ permitConditions: 'must be text', note: 'must be text' });
+    const queue = await cast.staff.agent.get('/api/queue').query({ status: ['submitted', 'checked'] });
+    expect(queue.status).toBe(400);
+    expect(queue.body.error.fields).toEqual({ status: 'give each status once in one list, separated by commas' });
+  });
+});
+
 describe('a time-sorted page position PostgreSQL could not read as a time', () => {
   // JavaScript's date parser takes each of these; PostgreSQL refuses them when the cursor is cast in the query.
   it('is refused as a cursor from another list, not answered with a 500', async () => {

@@ -6,8 +6,8 @@ export type QueueSort = (typeof queueSorts)[number];
 
 const csv = <T extends z.ZodType>(item: T, what: string) =>
   z
-    .string()
-    .max(400)
+    .string({ error: `give each ${what} once in one list, separated by commas` })
+    .max(400, 'must be at most 400 characters')
     .optional()
     .transform((value, ctx) => {
       if (!value) return undefined;
