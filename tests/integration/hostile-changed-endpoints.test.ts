@@ -1,7 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import { gradeChecks } from '../../server/db/schema';
-import { requestStatuses } from '@shared/workflow/statuses';
+import { requestStatuses, statusText } from '@shared/workflow/statuses';
 import { transitionActions } from '@shared/workflow/transitions';
 import { createCrewCheck, createReleasedJob } from '../factories/crew-jobs';
 import { type Cast, withCastApp } from '../factories/office-cast';
@@ -124,6 +124,19 @@ describe('withdrawing a grade check, in every status and by every role', () => {
     }
     sane(await cast.staff.agent.post(`/api/grade-checks/${someId}/withdraw`), 'no such check');
     sane(await cast.staff.agent.post(`/api/grade-checks/x/withdraw`), 'bad id');
+  });
+
+  it('says why a check cannot be withdrawn in words true of the request', async () => {
+    for (const status of ['declined', 'withdrawn', 'submitted'] as const) {
+      const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status });
+      const { check } = await createCrewCheck(t.ctx.db, row.id, cast.staff.id);
+      const res = await cast.staff.agent.post(`/api/grade-checks/${check.id}/withdraw`).expect(409);
+      expect(res.body.error.message, status).not.toMatch(/went to the crew/);
+      expect(res.body.error.message).toContain(statusText[status].label);
+    }
+    const job = await createReleasedJob(t.ctx.db, { applicantId: cast.applicant.id, staffId: cast.staff.id });
+    const res = await cast.staff.agent.post(`/api/grade-checks/${job.gradeCheckId}/withdraw`).expect(409);
+    expect(res.body.error.message).toMatch(/went to the crew/);
   });
 
   it('attach refuses a confirmFailing that is not true or false, naming it', async () => {
