@@ -3,12 +3,28 @@ import { z } from 'zod';
 import type { SessionUser } from './session-user';
 import { AppError, unauthenticated } from './errors';
 
+// zod's stock words for a value of the wrong type ("Invalid input: expected string, received number") are a
+// programmer's; a field without its own message gets these plain ones, shown beside its label.
+const expectedWords: Record<string, string> = {
+  string: 'must be text',
+  number: 'must be a number',
+  int: 'must be a whole number',
+  boolean: 'must be true or false',
+  array: 'must be a list',
+  object: 'must be a group of fields',
+};
+
+function issueMessage(issue: z.core.$ZodIssue): string {
+  if (issue.code !== 'invalid_type' || !issue.message.startsWith('Invalid input')) return issue.message;
+  return expectedWords[issue.expected] ?? issue.message;
+}
+
 /** Turn zod issues into `{ "field.path": "message" }`, the shape every 400 carries. */
 export function zodFields(error: z.ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {
     const key = issue.path.length > 0 ? issue.path.join('.') : '(body)';
-    fields[key] ??= issue.message;
+    fields[key] ??= issueMessage(issue);
   }
   return fields;
 }

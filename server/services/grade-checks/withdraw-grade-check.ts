@@ -1,5 +1,5 @@
 import { and, eq } from 'drizzle-orm';
-import { gradeCheckOpenStatuses } from '@shared/workflow/statuses';
+import { crewStages, gradeCheckOpenStatuses, statusText } from '@shared/workflow/statuses';
 import type { SessionUser } from '../../lib/session-user';
 import type { Db } from '../../db/client';
 import { documents, gradeChecks, requestEvents } from '../../db/schema';
@@ -15,8 +15,14 @@ export async function withdrawGradeCheck(db: Db, user: SessionUser, checkId: str
   const check = await loadVisibleGradeCheck(db, user, checkId);
   return db.transaction(async (tx) => {
     const request = await loadVisibleRequest(tx, user, check.requestId, { forUpdate: true });
-    if (!gradeCheckOpenStatuses.includes(request.status)) {
+    if (crewStages.includes(request.status)) {
       throw conflict('This check went to the crew with the job; it can no longer be withdrawn.');
+    }
+    // A declined or withdrawn request keeps its record as it ended.
+    if (!gradeCheckOpenStatuses.includes(request.status)) {
+      throw conflict(
+        `This request is "${statusText[request.status].label}": a check can be withdrawn only from the site visit until the crew has the job.`,
+      );
     }
     const [withdrawn] = await tx
       .update(gradeChecks)

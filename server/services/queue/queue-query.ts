@@ -6,8 +6,8 @@ export type QueueSort = (typeof queueSorts)[number];
 
 const csv = <T extends z.ZodType>(item: T, what: string) =>
   z
-    .string()
-    .max(400)
+    .string({ error: `give each ${what} once in one list, separated by commas` })
+    .max(400, 'must be at most 400 characters')
     .optional()
     .transform((value, ctx) => {
       if (!value) return undefined;
@@ -68,7 +68,31 @@ export function encodeQueueCursor(value: string, id: string, ended?: boolean) {
 }
 
 // A time as PostgreSQL writes timestamptz as text, which is what a time-sorted page's cursor carries.
-const pgTimestamp = /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}(\.\d{1,6})?[+-]\d{2}(:\d{2})?$/;
+const pgTimestamp = /^(\d{4})-(\d{2})-(\d{2}) (\d{2}):(\d{2}):(\d{2})(\.\d{1,6})?[+-](\d{2})(?::(\d{2}))?$/;
+
+/**
+ * Whether PostgreSQL will read the text back as a time. JavaScript's parser is looser (it takes year 0, 30 February
+ * and offsets past 15 hours), and each of those makes the cast fail in the query instead of here.
+ */
+function readsAsPgTime(value: string): boolean {
+  const m = pgTimestamp.exec(value);
+  if (!m) return false;
+  const [year, month, day, hour, minute, second, offsetHours, offsetMinutes] = [1, 2, 3, 4, 5, 6, 8, 9].map((i) =>
+    Number(m[i] ?? 0),
+  );
+  const date = new Date(Date.UTC(2000, month - 1, day));
+  date.setUTCFullYear(year);
+  return (
+    year >= 1 &&
+    date.getUTCMonth() === month - 1 &&
+    date.getUTCDate() === day &&
+    hour <= 23 &&
+    minute <= 59 &&
+    second <= 59 &&
+    offsetHours <= 15 &&
+    offsetMinutes <= 59
+  );
+}
 
 /** A cursor this list gave out for the sort in use, or null: the value must read back in the sort column's type. */
 export function decodeQueueCursor(
@@ -83,13 +107,7 @@ export function decodeQueueCursor(
     if (typeof value !== 'string' || typeof id !== 'string' || !z.uuid().safeParse(id).success) return null;
     if (withEnded && typeof ended !== 'boolean') return null;
     if (value.includes('\u0000')) return null;
-    if (
-      sortsBy === 'time' &&
-      !(
-        pgTimestamp.test(value) && Number.isFinite(Date.parse(value.replace(' ', 'T').replace(/([+-]\d{2})$/, '$1:00')))
-      )
-    )
-      return null;
+    if (sortsBy === 'time' && !readsAsPgTime(value)) return null;
     return { value, id, ...(withEnded ? { ended: ended as boolean } : {}) };
   } catch {
     return null;
