@@ -1,4 +1,4 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, isNotNull } from 'drizzle-orm';
 import { crewStages, gradeCheckOpenStatuses, statusText } from '@shared/workflow/statuses';
 import type { SessionUser } from '../../lib/session-user';
 import type { Db } from '../../db/client';
@@ -24,12 +24,17 @@ export async function withdrawGradeCheck(db: Db, user: SessionUser, checkId: str
         `This request is "${statusText[request.status].label}": a check can be withdrawn only from the site visit until the crew has the job.`,
       );
     }
+    // Whether it is attached is read under the request's lock, not from before it: an attach that committed in
+    // between must be undone with its report unshared and its history entry, like any other.
     const [withdrawn] = await tx
       .update(gradeChecks)
       .set({ attachedAt: null })
-      .where(eq(gradeChecks.id, check.id))
+      .where(and(eq(gradeChecks.id, check.id), isNotNull(gradeChecks.attachedAt)))
       .returning();
-    if (!check.attachedAt) return readGradeCheckRow(withdrawn);
+    if (!withdrawn) {
+      const [unattached] = await tx.select().from(gradeChecks).where(eq(gradeChecks.id, check.id));
+      return readGradeCheckRow(unattached);
+    }
     const unshared = await tx
       .update(documents)
       .set({ sharedWithApplicant: false })
