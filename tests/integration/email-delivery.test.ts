@@ -1,9 +1,6 @@
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { eq, inArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startStandIns, type StandIns, type StoredMessage } from '../../fakes';
+import type { StandIns, StoredMessage } from '../../fakes';
 import { emails } from '../../server/db/schema';
 import { closeContext, createContext } from '../../server/context-factory';
 import { parseEnv } from '../../server/config/env';
@@ -11,10 +8,11 @@ import { startWorkers, type Workers } from '../../server/workers';
 import { messageIdFor } from '../../server/workers/email-delivery';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createRequestRow } from '../factories/request-rows';
+import { startOwnStandIns, type OwnStandIns } from '../setup/own-stand-ins';
 import { createTestApp, type TestApp } from '../setup/test-app';
 
 // This file brings its own mail catcher so it can take the SMTP side down and up without touching other tests.
-let dir: string;
+let own: OwnStandIns;
 let standIns: StandIns;
 let t: TestApp;
 let cast: Cast;
@@ -26,26 +24,15 @@ const fast = {
 };
 
 beforeAll(async () => {
-  dir = await mkdtemp(join(tmpdir(), 'gradepass-email-'));
-  standIns = await startStandIns({
-    dataDir: dir,
-    bucket: 'email-test',
-    allowedOrigins: [],
-    oauth: {
-      clientId: 'unused',
-      clientSecret: 'unused-secret',
-      redirectUris: ['http://127.0.0.1/unused'],
-      identities: [],
-    },
-  });
-  t = await createTestApp({ SMTP_HOST: standIns.mail.smtpHost, SMTP_PORT: String(standIns.mail.smtpPort) });
+  own = await startOwnStandIns('email');
+  standIns = own.standIns;
+  t = await createTestApp(own.smtpEnv);
   cast = await signInCast(t);
 });
 afterAll(async () => {
   await workers?.stop();
   await t?.close();
-  await standIns?.stop();
-  await rm(dir, { recursive: true, force: true });
+  await own?.stop();
 });
 
 async function caught(): Promise<StoredMessage[]> {

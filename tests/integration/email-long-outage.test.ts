@@ -1,42 +1,29 @@
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { inArray } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startStandIns, type StandIns } from '../../fakes';
+import type { StandIns } from '../../fakes';
 import { emails } from '../../server/db/schema';
 import { startWorkers } from '../../server/workers';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { until } from '../setup/fault-rig';
 import { settle, writeEmails } from '../setup/mail-ledger';
+import { startOwnStandIns, type OwnStandIns } from '../setup/own-stand-ins';
 import { createTestApp, type TestApp } from '../setup/test-app';
 
 // Its own mail catcher, taken down for longer than the retries used to last; the clock is short (tenths of a
 // second instead of minutes) so the test runs in seconds.
-let dir: string;
+let own: OwnStandIns;
 let standIns: StandIns;
 let t: TestApp;
 let cast: Cast;
 beforeAll(async () => {
-  dir = await mkdtemp(join(tmpdir(), 'gradepass-outage-'));
-  standIns = await startStandIns({
-    dataDir: dir,
-    bucket: 'outage',
-    allowedOrigins: [],
-    oauth: {
-      clientId: 'unused',
-      clientSecret: 'unused-secret',
-      redirectUris: ['http://127.0.0.1/unused'],
-      identities: [],
-    },
-  });
-  t = await createTestApp({ SMTP_HOST: standIns.mail.smtpHost, SMTP_PORT: String(standIns.mail.smtpPort) });
+  own = await startOwnStandIns('outage');
+  standIns = own.standIns;
+  t = await createTestApp(own.smtpEnv);
   cast = await signInCast(t);
 });
 afterAll(async () => {
   await t?.close();
-  await standIns?.stop();
-  await rm(dir, { recursive: true, force: true });
+  await own?.stop();
 });
 
 const rowsOf = (ids: string[]) => t.ctx.db.select().from(emails).where(inArray(emails.id, ids));

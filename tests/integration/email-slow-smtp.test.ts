@@ -1,9 +1,6 @@
-import { mkdtemp, rm } from 'node:fs/promises';
-import { tmpdir } from 'node:os';
-import { join } from 'node:path';
 import { eq, inArray, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startStandIns, type StandIns } from '../../fakes';
+import type { StandIns } from '../../fakes';
 import { closeContext, createContext } from '../../server/context-factory';
 import { emails } from '../../server/db/schema';
 import { parseEnv } from '../../server/config/env';
@@ -12,31 +9,21 @@ import { claimEmail, recordFailure, recordSent } from '../../server/workers/emai
 import { emailQueue, jobIdFor } from '../../server/workers/email-queue';
 import { sleep, until } from '../setup/fault-rig';
 import { settle, writeEmails } from '../setup/mail-ledger';
+import { startOwnStandIns, type OwnStandIns } from '../setup/own-stand-ins';
 import { createTestApp, type TestApp } from '../setup/test-app';
 
 // Its own mail catcher, so holding every reply does not slow other test files.
-let dir: string;
+let own: OwnStandIns;
 let standIns: StandIns;
 let t: TestApp;
 beforeAll(async () => {
-  dir = await mkdtemp(join(tmpdir(), 'gradepass-slow-smtp-'));
-  standIns = await startStandIns({
-    dataDir: dir,
-    bucket: 'slow-smtp',
-    allowedOrigins: [],
-    oauth: {
-      clientId: 'unused',
-      clientSecret: 'unused-secret',
-      redirectUris: ['http://127.0.0.1/unused'],
-      identities: [],
-    },
-  });
-  t = await createTestApp({ SMTP_HOST: standIns.mail.smtpHost, SMTP_PORT: String(standIns.mail.smtpPort) });
+  own = await startOwnStandIns('slow-smtp');
+  standIns = own.standIns;
+  t = await createTestApp(own.smtpEnv);
 });
 afterAll(async () => {
   await t?.close();
-  await standIns?.stop();
-  await rm(dir, { recursive: true, force: true });
+  await own?.stop();
 });
 
 describe('the outbox lease', () => {
