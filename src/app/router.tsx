@@ -1,6 +1,7 @@
 import { createBrowserRouter } from 'react-router';
 import { paths } from '@/config/paths';
 import { AppShell } from '@/app/layout/app-shell';
+import { Loading } from '@/components/ui/notice';
 import { RouteError } from './routes/route-error';
 
 const page = (load: () => Promise<{ Component: React.ComponentType }>) => ({ lazy: load });
@@ -11,6 +12,8 @@ export function createAppRouter() {
     {
       element: <AppShell />,
       errorElement: <RouteError />,
+      // Shown while the first screen's module loads, so the router has something to draw (and says nothing on the console).
+      hydrateFallbackElement: <Loading label="Opening Gradepass…" />,
       children: [
         { path: paths.home.path, ...page(() => import('./routes/landing')) },
         { path: paths.signIn.path, ...page(() => import('./routes/sign-in')) },

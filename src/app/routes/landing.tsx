@@ -57,7 +57,7 @@ export function Component() {
         <ol className="mt-4 grid gap-4 md:grid-cols-4">
           {steps.map((step, index) => (
             <li key={step.title} className="rounded-lg border border-stone-200 bg-white p-4">
-              <p className="font-mono text-sm font-bold text-tape-dark">Step {index + 1}</p>
+              <p className="font-mono text-sm font-bold text-clay">Step {index + 1}</p>
               <h3 className="mt-1 font-bold text-pine-900">{step.title}</h3>
               <p className="mt-2 text-sm text-stone-700">{step.text}</p>
             </li>

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Role } from '@shared/workflow/statuses';
-import { api, ApiError } from '@/lib/api-client';
+import { api } from '@/lib/api-client';
 
 export interface Me {
   id: string;
@@ -9,15 +9,10 @@ export interface Me {
   role: Role;
 }
 
-/** The signed-in person, or null when nobody is signed in (a 401 is an answer here, not an error). */
+/** The signed-in person, or null when nobody is signed in (the server answers `{ user: null }`, not a 401). */
 export async function getMe(): Promise<Me | null> {
-  try {
-    const { user } = await api.get<{ user: Me }>('/api/me');
-    return user;
-  } catch (error) {
-    if (error instanceof ApiError && error.status === 401) return null;
-    throw error;
-  }
+  const { user } = await api.get<{ user: Me | null }>('/api/me');
+  return user;
 }
 
 export const getMeQueryOptions = () => queryOptions({ queryKey: ['me'], queryFn: getMe, staleTime: 5 * 60_000 });

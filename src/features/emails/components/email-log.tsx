@@ -7,6 +7,7 @@ import { emailStatuses, useEmails, type EmailStatus } from '../api/get-emails';
 import { EmailDetailPanel } from './email-detail';
 import { EmailStatusBadge, emailStatusText } from './email-status';
 import { ResendDead } from './resend-dead';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 const when = (iso: string | null) =>
   iso ? new Date(iso).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' }) : '—';
@@ -61,7 +62,7 @@ export function EmailLog() {
       {log.isPending && <Loading label="Loading the e-mail log…" />}
       {log.data && rows.length === 0 && <Notice title="No e-mails here yet" />}
       {rows.length > 0 && (
-        <div className="overflow-x-auto rounded-lg border border-stone-200 bg-white">
+        <ScrollRegion label="E-mail log" className="rounded-lg border border-stone-200 bg-white">
           <table className="w-full min-w-[48rem] text-left text-sm">
             <thead className="bg-pine-50 text-xs uppercase tracking-wide text-pine-900">
               <tr>
@@ -120,7 +121,7 @@ export function EmailLog() {
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       )}
       {log.hasNextPage && (
         <Button variant="secondary" onClick={() => log.fetchNextPage()} disabled={log.isFetchingNextPage}>

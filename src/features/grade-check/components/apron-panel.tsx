@@ -1,5 +1,6 @@
 import { warpStakeColumns, warpStakeRows, warpWords } from '@shared/charts/check-words';
 import type { ApronSummary } from '@shared/engine';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 /** The warp in words and the stakes the crew sets along both edges; the edge findings are in the findings table. */
 export function ApronPanel({ apron }: { apron?: ApronSummary }) {
@@ -12,7 +13,7 @@ export function ApronPanel({ apron }: { apron?: ApronSummary }) {
   return (
     <div className="space-y-3 text-sm">
       <p>{warpWords(apron)}</p>
-      <div className="overflow-x-auto">
+      <ScrollRegion label="Warp stakes">
         <table className="w-full" aria-label="Warp stakes">
           <thead>
             <tr className="border-b border-stone-300 text-left text-stone-600">
@@ -35,7 +36,7 @@ export function ApronPanel({ apron }: { apron?: ApronSummary }) {
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
     </div>
   );
 }

@@ -1,12 +1,13 @@
 import { formatStation, type DisplayUnits, type Finding } from '@shared/engine';
 import { showValue, statusLabel, statusTone } from '../lib/format';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 /** Every rule the engine checked, failing ones first, with the measured value, the limit and the room to spare. */
 export function FindingsTable({ findings, units }: { findings: readonly Finding[]; units?: DisplayUnits }) {
   const order = { fail: 0, advisory: 1, pass: 2, 'not-checked': 3 };
   const sorted = [...findings].sort((a, b) => order[a.status] - order[b.status]);
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label="Findings">
       <table className="w-full text-sm" aria-label="Findings">
         <thead>
           <tr className="border-b border-stone-300 text-left text-stone-600">
@@ -47,6 +48,6 @@ export function FindingsTable({ findings, units }: { findings: readonly Finding[
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -62,7 +62,7 @@ export function GradeCheckWorkspace({
   const errors = { ...serverFields, ...live.errors };
 
   return (
-    <div className="grid gap-6 xl:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
+    <div className="grid grid-cols-[minmax(0,1fr)] gap-6 xl:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
       <div className="space-y-6">
         <Panel title="Rule profile">
           {ruleProfile.picker}

@@ -122,7 +122,7 @@ export function FieldSheet({ id }: { id: string }) {
             <p>No profile in the saved check.</p>
           )}
           {s.design && s.design.cutFill.length > 0 && (
-            <table className="mt-1 w-full border-collapse text-left">
+            <table className="stack-table mt-1 w-full border-collapse text-left">
               <caption className="text-left font-bold">Cut and fill on the centreline</caption>
               <thead>
                 <tr className="border-b-2 border-stone-800">
@@ -135,10 +135,18 @@ export function FieldSheet({ id }: { id: string }) {
               <tbody>
                 {s.design.cutFill.map((c) => (
                   <tr key={c.stationFt} className="border-b border-stone-400">
-                    <td className="pr-2">{station(c.stationFt)}</td>
-                    <td className="pr-2">{ft(c.existingFt)}</td>
-                    <td className="pr-2">{ft(c.designFt)}</td>
-                    <td className="font-bold">{cutFillWords(c.cutFillFt)}</td>
+                    <td data-label="Station" className="pr-2">
+                      {station(c.stationFt)}
+                    </td>
+                    <td data-label="Ground" className="pr-2">
+                      {ft(c.existingFt)}
+                    </td>
+                    <td data-label="Design" className="pr-2">
+                      {ft(c.designFt)}
+                    </td>
+                    <td data-label="Cut / fill" className="font-bold">
+                      {cutFillWords(c.cutFillFt)}
+                    </td>
                   </tr>
                 ))}
               </tbody>

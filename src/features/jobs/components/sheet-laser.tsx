@@ -54,9 +54,9 @@ export function SheetLaser({ laser }: { laser: LaserSheet }) {
         shorter reading means cut, a longer one fill.
       </p>
       {laser.stakes.length > 0 && (
-        // On a phone the seven columns scroll sideways rather than crushing the numbers.
-        <div className="overflow-x-auto print:overflow-visible">
-          <table className="w-full min-w-[34rem] border-collapse text-left print:min-w-0">
+        // On a phone each stake is a card of its own (`stack-table`): every column stays on screen.
+        <div>
+          <table className="stack-table w-full border-collapse text-left">
             <caption className="text-left font-bold">Stakes</caption>
             <thead>
               <tr className="border-b-2 border-stone-800">
@@ -72,17 +72,29 @@ export function SheetLaser({ laser }: { laser: LaserSheet }) {
             <tbody>
               {laser.stakes.map((s) => (
                 <tr key={`${s.label}-${s.distanceFt}-${s.offsetFt}`} className="border-b border-stone-400">
-                  <td className="py-1 pr-2 font-semibold">{s.label}</td>
-                  <td className="pr-2">{station(s.distanceFt)}</td>
-                  <td className="pr-2">
+                  <td data-label="Stake" className="py-1 pr-2 font-semibold">
+                    {s.label}
+                  </td>
+                  <td data-label="Station" className="pr-2">
+                    {station(s.distanceFt)}
+                  </td>
+                  <td data-label="Offset" className="pr-2">
                     {s.offsetFt === 0
                       ? 'centreline'
                       : `${Math.abs(s.offsetFt)} ft ${s.offsetFt < 0 ? 'left' : 'right'}`}
                   </td>
-                  <td className="pr-2">{s.setup === 'first' ? '1' : s.setup === 'warp' ? 'warp' : '2'}</td>
-                  <td className="pr-2">{ft(s.rodReadingFt)}</td>
-                  <td className="pr-2">{ft(s.designElevationFt)}</td>
-                  <td className="font-bold">{s.instruction}</td>
+                  <td data-label="Setup" className="pr-2">
+                    {s.setup === 'first' ? '1' : s.setup === 'warp' ? 'warp' : '2'}
+                  </td>
+                  <td data-label="Rod" className="pr-2">
+                    {ft(s.rodReadingFt)}
+                  </td>
+                  <td data-label="Design elev." className="pr-2">
+                    {ft(s.designElevationFt)}
+                  </td>
+                  <td data-label="Cut / fill" className="font-bold">
+                    {s.instruction}
+                  </td>
                 </tr>
               ))}
             </tbody>

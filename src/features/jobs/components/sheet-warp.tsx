@@ -7,7 +7,7 @@ export function SheetWarp({ apron }: { apron: ApronSummary | null }) {
   return (
     <div className="space-y-1">
       <p>{warpWords(apron)}</p>
-      <table className="w-full border-collapse text-left" aria-label="Warp stakes">
+      <table className="stack-table w-full border-collapse text-left" aria-label="Warp stakes">
         <thead>
           <tr className="border-b-2 border-stone-800">
             {warpStakeColumns.map((c) => (
@@ -21,7 +21,11 @@ export function SheetWarp({ apron }: { apron: ApronSummary | null }) {
           {warpStakeRows(apron).map((row) => (
             <tr key={row[0]} className="border-b border-stone-400">
               {row.map((cell, i) => (
-                <td key={warpStakeColumns[i]} className={`pr-2 ${i === 3 || i === 6 ? 'font-bold' : ''}`}>
+                <td
+                  key={warpStakeColumns[i]}
+                  data-label={warpStakeColumns[i]}
+                  className={`pr-2 ${i === 3 || i === 6 ? 'font-bold' : ''}`}
+                >
                   {cell}
                 </td>
               ))}

@@ -12,6 +12,7 @@ import { paths } from '@/config/paths';
 import type { QueueFilters, QueueRow, QueueSort } from '../api/types';
 import { AssignControl } from './assign-control';
 import { timeInStatus } from './time-in-status';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 const column = createColumnHelper<QueueRow>();
 
@@ -112,7 +113,7 @@ export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
   });
 
   return (
-    <div className="overflow-x-auto rounded-lg border border-stone-200 bg-white">
+    <ScrollRegion label="Queue" className="rounded-lg border border-stone-200 bg-white">
       <table className="w-full min-w-[56rem] text-left text-sm">
         <thead className="bg-pine-50 text-xs uppercase tracking-wide text-pine-900">
           {table.getHeaderGroups().map((group) => (
@@ -158,6 +159,6 @@ export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

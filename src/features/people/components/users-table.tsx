@@ -4,6 +4,7 @@ import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { Field, SelectInput, TextInput } from '@/components/ui/field';
 import { useUsers } from '../api/get-users';
 import { useUpdateUser } from '../api/update-user';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 export function UsersTable() {
   const [search, setSearch] = useState('');
@@ -33,7 +34,7 @@ export function UsersTable() {
       {users.isPending ? (
         <Loading />
       ) : (
-        <div className="overflow-x-auto">
+        <ScrollRegion label="People">
           <table className="w-full text-left text-sm">
             <thead className="border-b border-stone-300 text-stone-600">
               <tr>
@@ -81,7 +82,7 @@ export function UsersTable() {
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       )}
     </div>
   );

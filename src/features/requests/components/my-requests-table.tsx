@@ -14,8 +14,9 @@ export function MyRequestsTable({ hrefFor }: { hrefFor: (id: string, status: str
   if (data.requests.length === 0)
     return <p className="text-stone-600">You have no requests yet. Start one to ask for a driveway entrance.</p>;
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full border-collapse text-left text-sm">
+    <div>
+      {/* On a phone each request is a card of its own (`stack-table`), so no column is cut off. */}
+      <table className="stack-table w-full border-collapse text-left text-sm">
         <caption className="sr-only">Your driveway entrance requests</caption>
         <thead className="border-b-2 border-pine-200 text-xs uppercase tracking-wide text-stone-600">
           <tr>
@@ -39,20 +40,23 @@ export function MyRequestsTable({ hrefFor }: { hrefFor: (id: string, status: str
         <tbody>
           {data.requests.map((r) => (
             <tr key={r.id} className="border-b border-stone-200">
-              <td className="py-3 pr-4 font-mono">
+              <td data-label="Request" className="py-3 pr-4 font-mono">
                 <Link className="font-semibold text-pine-700 underline" to={hrefFor(r.id, r.status)}>
                   {r.reference}
                 </Link>
               </td>
-              <td className="py-3 pr-4">
+              <td data-label="Site" className="py-3 pr-4">
                 {r.siteAddress || <span className="text-stone-500">Not filled in yet</span>}
                 {r.roadName && <span className="block text-xs text-stone-500">on {r.roadName}</span>}
               </td>
-              <td className="py-3 pr-4">
+              <td data-label="Status" className="py-3 pr-4">
                 <StatusBadge status={r.status} />
               </td>
-              <td className="py-3 pr-4">{when(r.statusChangedAt)}</td>
+              <td data-label="Last change" className="py-3 pr-4">
+                {when(r.statusChangedAt)}
+              </td>
               <td
+                data-label="Your part"
                 className={`py-3 ${r.expected === 'Nothing for now' ? 'text-stone-500' : 'font-semibold text-amber-900'}`}
               >
                 {r.expected}

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Field, SelectInput } from '@/components/ui/field';
 import type { ProfileVersion } from '../api/get-jurisdiction';
 import { allFields, sourceKeyOf, valueAt } from '../lib/profile-fields';
+import { ScrollRegion } from '@/components/ui/scroll-region';
 
 const text = (v: unknown) => (v === undefined || v === null || v === '' ? '—' : String(v));
 
@@ -52,7 +53,7 @@ export function VersionCompare({ versions }: { versions: ProfileVersion[] }) {
           Only what changed
         </label>
       </div>
-      <div className="overflow-x-auto">
+      <ScrollRegion label="Version differences">
         <table className="w-full text-sm" aria-label="Version differences">
           <thead>
             <tr className="border-b border-stone-300 text-left text-stone-600">
@@ -86,7 +87,7 @@ export function VersionCompare({ versions }: { versions: ProfileVersion[] }) {
               ))}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
     </div>
   );
 }

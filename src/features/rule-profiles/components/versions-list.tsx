@@ -30,9 +30,9 @@ export function VersionsList({ jurisdiction, selectedId, onSelect, canEdit }: Ve
                 {v.status === 'draft' ? 'draft' : v.id === jurisdiction.currentVersionId ? 'current' : 'published'}
               </span>
               {v.publishedAt && (
-                <span className="text-stone-500"> · {new Date(v.publishedAt).toLocaleDateString()}</span>
+                <span className="text-stone-600"> · {new Date(v.publishedAt).toLocaleDateString()}</span>
               )}
-              {v.changeNote && <span className="block text-xs text-stone-500">{v.changeNote}</span>}
+              {v.changeNote && <span className="block text-xs text-stone-600">{v.changeNote}</span>}
             </button>
           </li>
         ))}
