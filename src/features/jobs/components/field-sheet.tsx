@@ -8,8 +8,9 @@ import { SheetCulvert } from './sheet-culvert';
 import { SheetLaser } from './sheet-laser';
 import { SheetWarp } from './sheet-warp';
 
-// One sheet of paper: narrow margins, and the sheet's own type sizes take over from the screen's large ones.
-const pageCss = '@page { size: letter portrait; margin: 0.35in; }';
+// One sheet of paper, Letter or A4 (whichever the printer holds: no size is forced), with narrow margins; the
+// sheet's own type sizes take over from the screen's large ones. tests/e2e/field-sheet-print.test.ts counts pages.
+const pageCss = '@page { margin: 0.35in; }';
 
 function Section({ title, children, className = '' }: { title: string; children: ReactNode; className?: string }) {
   return (
@@ -51,14 +52,14 @@ export function FieldSheet({ id }: { id: string }) {
 
       <section aria-label="Cautions" className="rounded border-4 border-tape p-3 print:border-2 print:p-1">
         <h2 className="text-xl font-bold print:text-[10pt]">Before and while you dig</h2>
-        <ul className="list-disc space-y-1 pl-6 print:space-y-0">
+        <ul className="list-disc space-y-1 pl-6 print:columns-2 print:gap-x-6 print:space-y-0">
           {s.cautions.map((c) => (
             <li key={c}>{c}</li>
           ))}
         </ul>
       </section>
 
-      <div className="grid gap-4 md:grid-cols-2 print:grid-cols-2 print:gap-2">
+      <div className="grid gap-4 md:grid-cols-2 lg:grid-cols-3 print:grid-cols-3 print:gap-2">
         <Section title="Site and access">
           <p>
             {s.access.whereText || 'No landmark given.'}
@@ -85,6 +86,9 @@ export function FieldSheet({ id }: { id: string }) {
               <strong>Conditions:</strong> {s.permit.conditions}
             </p>
           )}
+        </Section>
+        <Section title="Culvert">
+          <SheetCulvert culvert={s.culvert} />
         </Section>
       </div>
 
@@ -114,50 +118,50 @@ export function FieldSheet({ id }: { id: string }) {
         </Section>
       )}
 
-      <div className="grid gap-4 md:grid-cols-[2fr_1fr] print:grid-cols-[2fr_1fr] print:gap-2">
-        <Section title="Design profile">
+      <Section title="Design profile">
+        {/* On paper the chart sits beside the cut and fill, whose rows run in two columns. */}
+        <div className="grid gap-4 lg:grid-cols-[2fr_3fr] print:grid-cols-[1fr_2fr] print:gap-3">
           {s.design ? (
-            <ProfileChart chart={s.design.chart} className="print:[&>svg]:h-[1.6in] print:[&>svg]:w-auto" />
+            <ProfileChart chart={s.design.chart} className="print:[&>svg]:h-auto print:[&>svg]:w-full" />
           ) : (
             <p>No profile in the saved check.</p>
           )}
           {s.design && s.design.cutFill.length > 0 && (
-            <table className="stack-table mt-1 w-full border-collapse text-left">
-              <caption className="text-left font-bold">Cut and fill on the centreline</caption>
-              <thead>
-                <tr className="border-b-2 border-stone-800">
-                  <th className="pr-2">Station</th>
-                  <th className="pr-2">Ground</th>
-                  <th className="pr-2">Design</th>
-                  <th>Cut / fill</th>
-                </tr>
-              </thead>
-              <tbody>
-                {s.design.cutFill.map((c) => (
-                  <tr key={c.stationFt} className="border-b border-stone-400">
-                    <td data-label="Station" className="pr-2">
-                      {station(c.stationFt)}
-                    </td>
-                    <td data-label="Ground" className="pr-2">
-                      {ft(c.existingFt)}
-                    </td>
-                    <td data-label="Design" className="pr-2">
-                      {ft(c.designFt)}
-                    </td>
-                    <td data-label="Cut / fill" className="font-bold">
-                      {cutFillWords(c.cutFillFt)}
-                    </td>
+            <div className="print:columns-2 print:gap-x-3 print:whitespace-nowrap print:text-[7pt]">
+              <table className="stack-table mt-1 w-full border-collapse text-left">
+                <caption className="text-left font-bold">Cut and fill on the centreline</caption>
+                <thead>
+                  <tr className="border-b-2 border-stone-800">
+                    <th className="pr-2">Station</th>
+                    <th className="pr-2">Ground</th>
+                    <th className="pr-2">Design</th>
+                    <th>Cut / fill</th>
                   </tr>
-                ))}
-              </tbody>
-            </table>
+                </thead>
+                <tbody>
+                  {s.design.cutFill.map((c) => (
+                    <tr key={c.stationFt} className="border-b border-stone-400">
+                      <td data-label="Station" className="pr-2">
+                        {station(c.stationFt)}
+                      </td>
+                      <td data-label="Ground" className="pr-2">
+                        {ft(c.existingFt)}
+                      </td>
+                      <td data-label="Design" className="pr-2">
+                        {ft(c.designFt)}
+                      </td>
+                      <td data-label="Cut / fill" className="font-bold">
+                        {cutFillWords(c.cutFillFt)}
+                      </td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
           )}
-          <EarthworkLine earthwork={s.earthwork} />
-        </Section>
-        <Section title="Culvert">
-          <SheetCulvert culvert={s.culvert} />
-        </Section>
-      </div>
+        </div>
+        <EarthworkLine earthwork={s.earthwork} />
+      </Section>
     </article>
   );
 }
