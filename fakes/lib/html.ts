@@ -30,6 +30,11 @@ const styles = `
   iframe { width: 100%; min-height: 24rem; border: 1px solid var(--line); background: #fff; border-radius: 0.375rem; }
 `;
 
+// The app's own mark, inline: without an icon the browser asks for /favicon.ico and logs the stand-in's 404.
+const icon = `data:image/svg+xml,${encodeURIComponent(
+  '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 32 32"><rect width="32" height="32" rx="6" fill="#1d4a38"/><path d="M4 24 L12 22 L28 9" stroke="#f2b33d" stroke-width="3" fill="none" stroke-linecap="round"/></svg>',
+)}`;
+
 /** A complete page; `body` must already be escaped where it carries outside text. */
 export function page(title: string, body: string, extraCss = ''): string {
   return `<!doctype html>
@@ -38,6 +43,7 @@ export function page(title: string, body: string, extraCss = ''): string {
 <meta charset="utf-8">
 <meta name="viewport" content="width=device-width, initial-scale=1">
 <title>${escapeHtml(title)} · Gradepass</title>
+<link rel="icon" href="${icon}">
 <style>${styles}${extraCss}</style>
 </head>
 <body>

@@ -5,7 +5,7 @@ import type { MessageStore } from './message-store.js';
 
 // Nothing on these pages loads from elsewhere or runs script; the message HTML gets a stricter policy of its own.
 const pagePolicy =
-  "default-src 'none'; style-src 'unsafe-inline'; frame-src 'self'; form-action 'self'; base-uri 'none'";
+  "default-src 'none'; style-src 'unsafe-inline'; frame-src 'self'; img-src data:; form-action 'self'; base-uri 'none'";
 const messageHtmlPolicy = "sandbox; default-src 'none'; style-src 'unsafe-inline'; img-src data:";
 
 export function createMailWeb(store: MessageStore): Server {

@@ -14,7 +14,7 @@ export interface OAuthAppOptions {
 }
 
 const pagePolicy =
-  "default-src 'none'; style-src 'unsafe-inline'; img-src 'self'; base-uri 'none'; frame-ancestors 'none'";
+  "default-src 'none'; style-src 'unsafe-inline'; img-src 'self' data:; base-uri 'none'; frame-ancestors 'none'";
 
 /** The provider's public face: our picker at /authorize, our checks at /token, the rest handed to the mock. */
 export function createOAuthApp(options: OAuthAppOptions) {

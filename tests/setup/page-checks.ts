@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, BrowserContext, Locator, Page } from 'playwright-core';
 import { saveScreenshot } from './browser';
 
 /** The two sizes every screen is walked at: a laptop and a phone held upright. */
@@ -101,4 +101,13 @@ export async function screenProblems(page: Page, console: ReturnType<typeof watc
 export async function expectScreenClean(page: Page, console: ReturnType<typeof watchConsole>, name: string) {
   const problems = await screenProblems(page, console, name);
   if (problems.length > 0) throw new Error(`Screen "${name}" is not clean:\n${problems.join('\n')}`);
+}
+
+/** Presses Tab, as a keyboard user does, until the given control has focus (fails after `most` presses). */
+export async function tabUntilFocused(page: Page, control: Locator, most = 200) {
+  for (let i = 0; i < most; i += 1) {
+    await page.keyboard.press('Tab');
+    if (await control.evaluate((el) => el === document.activeElement).catch(() => false)) return;
+  }
+  throw new Error(`Tab never reached ${control.toString()}`);
 }

@@ -66,7 +66,7 @@ export function ProposalPanel({
               <td className="text-right">{ft(r.existingFt)}</td>
               <td className="text-right">{ft(r.designFt)}</td>
               <td
-                className={`text-right ${r.cutFillFt > 0 ? 'text-tape-dark' : r.cutFillFt < 0 ? 'text-pine-700' : ''}`}
+                className={`text-right ${r.cutFillFt > 0 ? 'text-amber-800' : r.cutFillFt < 0 ? 'text-pine-700' : ''}`}
               >
                 {ft(r.cutFillFt)}
               </td>

@@ -60,7 +60,14 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
       {open ? (
         <Panel title="Enter readings along the centreline">
           <form onSubmit={submit} noValidate className="space-y-4">
-            <ReadingsTable rows={rows} checks={checks} serverFields={fields} onChange={change} onRemove={remove} />
+            <ReadingsTable
+              rows={rows}
+              checks={checks}
+              basis={basis}
+              serverFields={fields}
+              onChange={change}
+              onRemove={remove}
+            />
             <div className="flex flex-wrap gap-3">
               <Button
                 variant="secondary"
@@ -101,7 +108,7 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
         </Notice>
       )}
       <Panel title="Saved sets">
-        <SavedSets sets={page.sets} />
+        <SavedSets sets={page.sets} basis={basis} />
       </Panel>
       {canEnter && (
         <Panel title="Finish the job">

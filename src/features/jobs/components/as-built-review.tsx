@@ -13,14 +13,21 @@ export function AsBuiltReview({ requestId }: { requestId: string }) {
       title="As-built grades from the crew"
       actions={
         <Link to={paths.crew.asBuilt.getHref(requestId)} className="text-sm font-semibold text-pine-700 underline">
-          All readings
+          Every set, on the crew's screen
         </Link>
       }
     >
       <p className="mb-3 text-sm text-stone-600">
         Checked by the engine against {page.data.ruleProfileLabel}, the version the approved grade check used.
       </p>
-      <SavedSets sets={page.data.sets.slice(0, 1)} />
+      <SavedSets
+        sets={page.data.sets.slice(0, 1)}
+        basis={{
+          ruleProfile: page.data.ruleProfile,
+          design: page.data.design,
+          roadEdgeStationFt: page.data.roadEdgeStationFt,
+        }}
+      />
     </Panel>
   );
 }

@@ -1,5 +1,6 @@
 import {
   checkAsBuilt,
+  elevationAt,
   parseStation,
   type AsBuiltReadingResult,
   type AsBuiltStatus,
@@ -7,6 +8,7 @@ import {
   type RuleProfile,
 } from '@shared/engine';
 import type { AsBuiltReadingInput } from '@shared/crew/crew-inputs';
+import { ft, pct } from './format';
 
 export interface ReadingRow {
   key: number;
@@ -105,4 +107,47 @@ export function checkWholeSet(checks: RowCheck[], basis: CheckBasis) {
   } catch {
     return null;
   }
+}
+
+/** The design at a station: its elevation and the grade of the design line it lies on (the next one at a break). */
+export interface DesignHere {
+  elevationFt: number;
+  gradePercent: number;
+}
+
+/** What the design says at a station, or null without a design or outside it. */
+export function designAt(design: readonly ProfilePoint[] | null, stationFt: number): DesignHere | null {
+  if (!design || design.length < 2 || !Number.isFinite(stationFt)) return null;
+  const first = design[0].stationFt;
+  const last = design[design.length - 1].stationFt;
+  if (stationFt < first - 1e-9 || stationFt > last + 1e-9) return null;
+  let i = design.findIndex((p, k) => k < design.length - 1 && stationFt < design[k + 1].stationFt - 1e-9);
+  if (i < 0) i = design.length - 2;
+  const a = design[i];
+  const b = design[i + 1];
+  return {
+    elevationFt: elevationAt(design, stationFt),
+    gradePercent: ((b.elevationFt - a.elevationFt) / (b.stationFt - a.stationFt)) * 100,
+  };
+}
+
+/** The grade the rule profile allows at a station: the landing's range near the road, the driveway's limit beyond. */
+export function allowedGradeAt(rules: RuleProfile, roadEdgeStationFt: number, stationFt: number) {
+  return stationFt - roadEdgeStationFt < rules.landing.lengthFt - 1e-9
+    ? {
+        minPercent: rules.landing.minGradePercent,
+        maxPercent: rules.landing.maxGradePercent,
+        where: 'landing' as const,
+      }
+    : { minPercent: null, maxPercent: rules.maxGradePercent, where: 'driveway' as const };
+}
+
+/** In words, what the station should be built to: the design's elevation and grade, else the grade allowed there. */
+export function designWords(basis: CheckBasis, stationFt: number): string {
+  const here = designAt(basis.design, stationFt);
+  if (here) return `Design here: ${ft(here.elevationFt)}, grade ${pct(here.gradePercent, 1)}`;
+  const allowed = allowedGradeAt(basis.ruleProfile, basis.roadEdgeStationFt, stationFt);
+  return allowed.minPercent === null
+    ? `No design here; the driveway allows at most ${pct(allowed.maxPercent, 1)}`
+    : `No design here; the landing allows ${pct(allowed.minPercent, 1)} to ${pct(allowed.maxPercent, 1)}`;
 }

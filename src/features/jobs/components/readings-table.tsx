@@ -1,9 +1,11 @@
-import type { ReadingRow, RowCheck } from './reading-checks';
+import { designWords, type CheckBasis, type ReadingRow, type RowCheck } from './reading-checks';
 import { StatusWords, resultWords } from './status-words';
 
 interface Props {
   rows: ReadingRow[];
   checks: RowCheck[];
+  /** The design and rules the readings are judged on: each row shows what its station should be built to. */
+  basis: CheckBasis;
   serverFields: Record<string, string>;
   onChange: (key: number, change: Partial<ReadingRow>) => void;
   onRemove: (key: number) => void;
@@ -13,7 +15,7 @@ const box =
   'w-full rounded-md border-2 border-stone-500 bg-white px-3 py-2 text-lg text-black aria-[invalid=true]:border-clay';
 
 /** One row per shot, laid out as a stack on a phone; the verdict sits beside the value as it is typed. */
-export function ReadingsTable({ rows, checks, serverFields, onChange, onRemove }: Props) {
+export function ReadingsTable({ rows, checks, basis, serverFields, onChange, onRemove }: Props) {
   return (
     <ol className="space-y-3">
       {rows.map((row, i) => {
@@ -65,6 +67,9 @@ export function ReadingsTable({ rows, checks, serverFields, onChange, onRemove }
                 Remove
               </button>
             </div>
+            {check?.reading && (
+              <p className="mt-2 text-base text-stone-800">{designWords(basis, check.reading.stationFt)}</p>
+            )}
             <div aria-live="polite" className="mt-2 flex flex-wrap items-center gap-2">
               {check?.status && <StatusWords status={check.status} />}
               {check?.results.map((r) => (

@@ -1,9 +1,73 @@
+import type { AsBuiltReadingInput } from '@shared/crew/crew-inputs';
 import type { AsBuiltSetView } from '@shared/crew/crew-views';
-import { day, station } from './format';
+import type { AsBuiltReadingResult } from '@shared/engine';
+import { day, ft, pct, station } from './format';
+import { designWords, type CheckBasis } from './reading-checks';
 import { StatusWords, resultWords } from './status-words';
 
+const measured = (r: AsBuiltReadingInput) =>
+  r.gradePercent !== undefined ? `grade ${pct(r.gradePercent)}` : `elevation ${ft(r.elevationFt ?? 0)}`;
+
+const worst = (list: AsBuiltReadingResult[]) =>
+  list.some((r) => r.status === 'fail') ? 'fail' : list.some((r) => r.status === 'advisory') ? 'advisory' : 'pass';
+
+/**
+ * Every reading of one set beside what the design asks there and the engine's verdict from that station on: the
+ * office reads the whole set, not only what went wrong. One card per reading on a phone.
+ */
+function EveryReading({ set, basis, caption }: { set: AsBuiltSetView; basis: CheckBasis; caption: string }) {
+  const readings = [...set.readings].sort((a, b) => a.stationFt - b.stationFt);
+  return (
+    <table className="stack-table mt-3 w-full border-collapse text-left text-base">
+      <caption className="text-left font-semibold">{caption}</caption>
+      <thead>
+        <tr className="border-b-2 border-stone-700">
+          <th scope="col" className="py-1 pr-3">
+            Station
+          </th>
+          <th scope="col" className="pr-3">
+            Measured
+          </th>
+          <th scope="col" className="pr-3">
+            The design there
+          </th>
+          <th scope="col">Verdict</th>
+        </tr>
+      </thead>
+      <tbody>
+        {readings.map((r, n) => {
+          const results = set.results.filter((x) => Math.abs(x.stationFt - r.stationFt) < 1e-6);
+          return (
+            <tr key={`${r.stationFt}-${n}`} className="border-b border-stone-300 align-top">
+              <td data-label="Station" className="py-1 pr-3 font-semibold">
+                {station(r.stationFt)}
+              </td>
+              <td data-label="Measured" className="pr-3">
+                {measured(r)}
+              </td>
+              <td data-label="The design there" className="pr-3">
+                {designWords(basis, r.stationFt).replace(/^Design here: /, '')}
+              </td>
+              <td data-label="Verdict">
+                {results.length === 0 ? (
+                  'judged with the shots beside it'
+                ) : (
+                  <span className="flex flex-wrap items-center gap-2">
+                    <StatusWords status={worst(results)} />
+                    <span>{results.map(resultWords).join('; ')}</span>
+                  </span>
+                )}
+              </td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </table>
+  );
+}
+
 /** Every set saved for this job, newest first, as the server's engine judged it: the record the office reviews. */
-export function SavedSets({ sets }: { sets: AsBuiltSetView[] }) {
+export function SavedSets({ sets, basis }: { sets: AsBuiltSetView[]; basis: CheckBasis }) {
   if (sets.length === 0) return <p>No readings saved yet.</p>;
   return (
     <ul className="space-y-3">
@@ -24,6 +88,11 @@ export function SavedSets({ sets }: { sets: AsBuiltSetView[] }) {
               ))}
             {set.results.every((r) => r.status === 'pass') && <li>Every reading is inside the limits.</li>}
           </ul>
+          <EveryReading
+            set={set}
+            basis={basis}
+            caption={`Every reading in the ${n === 0 ? 'latest' : 'earlier'} set, by station`}
+          />
         </li>
       ))}
     </ul>
