@@ -25,6 +25,7 @@ beforeAll(async () => {
   db = createDb(inject('stack').adminDatabaseUrl.replace(/\/postgres$/, '/gradepass_e2e'), { max: 2 });
   ids.ownerSubmitted = await requestAt('77 Pennywhistle Lane, Elderbrook');
   ids.underWay = await requestAt('3187 Stonecrop Pike, Marrow Crossing');
+  ids.built = await requestAt('400 Larkspur Ridge Road, Elderbrook');
   ids.county = (
     await db.db.select({ id: jurisdictions.id }).from(jurisdictions).where(eq(jurisdictions.slug, 'marrow-county'))
   )[0].id;
@@ -67,6 +68,7 @@ const walks: { role: string; email: string | null; screens: Screen[] }[] = [
       { name: 'queue', path: () => '/office/queue' },
       { name: 'request', path: () => `/office/requests/${ids.underWay}` },
       { name: 'grade-check', path: () => `/office/requests/${ids.underWay}/grade-check` },
+      { name: 'request-built', path: () => `/office/requests/${ids.built}` },
       { name: 'rule-profiles', path: () => '/office/rule-profiles' },
       { name: 'rule-profile', path: () => `/office/rule-profiles/${ids.county}` },
       { name: 'emails', path: () => '/office/emails' },
