@@ -1,3 +1,4 @@
+import { formatDay } from '@shared/format/dates';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useDocuments } from '../api/get-documents';
 import { useShareDocument } from '../api/share-document';
@@ -18,7 +19,7 @@ export function DocumentsList({ requestId, canShare }: { requestId: string; canS
               {doc.title}
             </a>
             <span className="ml-2 text-xs text-stone-500">
-              PDF · {Math.max(1, Math.round(doc.sizeBytes / 1024))} KB · {new Date(doc.createdAt).toLocaleDateString()}
+              PDF · {Math.max(1, Math.round(doc.sizeBytes / 1024))} KB · {formatDay(doc.createdAt)}
             </span>
           </div>
           {canShare && (

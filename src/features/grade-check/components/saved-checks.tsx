@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 import { useState } from 'react';
 import { gradeCheckOpenStatuses } from '@shared/workflow/statuses';
 import { Button } from '@/components/ui/button';
@@ -35,7 +36,7 @@ export function SavedChecks({ request, checks }: { request: GradeCheckRequestHea
             <div className="max-w-2xl">
               <p className="font-semibold">
                 Check {c.number} · {c.passed ? 'meets the rules' : 'does not meet the rules'} ·{' '}
-                {new Date(c.createdAt).toLocaleString()}
+                {formatMoment(c.createdAt)}
               </p>
               <p className="text-sm text-stone-600">{c.summary}</p>
             </div>

@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 import { useId, useState, type FormEvent } from 'react';
 import type { MessageView, MessageVisibility } from '@shared/contracts/messages';
 import { roleLabels } from '@shared/workflow/statuses';
@@ -8,7 +9,7 @@ import { ApiError } from '@/lib/api-client';
 import { useMessages } from '../api/get-messages';
 import { usePostMessage } from '../api/post-message';
 
-const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const stamp = (iso: string) => formatMoment(iso);
 
 interface MessageThreadProps {
   requestId: string;

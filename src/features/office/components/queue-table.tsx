@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 import {
   createColumnHelper,
   flexRender,
@@ -69,7 +70,7 @@ export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
         id: 'waiting',
         header: 'Time in status',
         cell: (c) => (
-          <time dateTime={c.getValue()} title={new Date(c.getValue()).toLocaleString()}>
+          <time dateTime={c.getValue()} title={formatMoment(c.getValue())}>
             {timeInStatus(c.getValue())}
           </time>
         ),

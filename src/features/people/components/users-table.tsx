@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 import { useState } from 'react';
 import { roleLabels, roles, type Role } from '@shared/workflow/statuses';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
@@ -76,7 +77,7 @@ export function UsersTable() {
                       {user.disabled ? 'Turned off' : 'Can sign in'}
                     </label>
                   </td>
-                  <td>{user.lastSignInAt ? new Date(user.lastSignInAt).toLocaleString() : 'Never'}</td>
+                  <td>{formatMoment(user.lastSignInAt, { missing: 'Never' })}</td>
                 </tr>
               ))}
             </tbody>

@@ -6,7 +6,7 @@ import { ApiError } from '@/lib/api-client';
 import type { ProfileVersion } from '../api/get-jurisdiction';
 import { usePublishVersion } from '../api/publish-version';
 import { useUpdateDraft } from '../api/update-draft';
-import { profileGroups, sourceKeyOf } from '../lib/profile-fields';
+import { profileGroups, sourceKeyOf } from '@shared/rule-profiles/profile-fields';
 import { fromFormValues, toFormValues } from '../lib/profile-values';
 
 /** A draft version's values, each with its source note; saving keeps it a draft, publishing freezes it. */
