@@ -74,3 +74,15 @@ describe('a 400 a person reads', () => {
     expect(bad.body.error.message).toBe('Work day: pick a day from the calendar.');
   });
 });
+
+describe('a refused status change', () => {
+  it('names the status and the action by their labels, never by their keys', async () => {
+    const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'permit_refused' });
+    const res = await cast.staff.agent
+      .post(`/api/requests/${row.id}/transitions`)
+      .send({ action: 'file-permit', permitReference: 'RA-1', expectedVersion: row.version })
+      .expect(409);
+    expect(res.body.error.message).toContain('"Permit refused"');
+    expect(res.body.error.message).not.toMatch(/permit_refused|file-permit/);
+  });
+});

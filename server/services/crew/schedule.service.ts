@@ -40,7 +40,7 @@ export async function scheduleJob(
     const row = await loadVisibleRequest(tx, crew, requestId, { forUpdate: true });
     if (row.status !== 'crew_assigned' || row.crewId !== crew.id) {
       throw conflict(
-        `This job is "${statusText[row.status].label}" (${row.status}); only a job you have taken and not yet started can be planned.`,
+        `This job is "${statusText[row.status].label}"; only a job you have taken and not yet started can be planned.`,
       );
     }
     checkDate(input.date, row.permitExpiresOn, now);
