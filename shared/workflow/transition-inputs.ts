@@ -57,8 +57,8 @@ const input = <A extends TransitionAction, S extends z.ZodRawShape>(action: A, s
 export const transitionInputs = {
   submit: input('submit', {}),
   'ask-details': input('ask-details', {
-    note: said(4000, 'write the questions for the property owner').register(fieldText, {
-      label: 'Questions for the property owner',
+    note: said(4000, 'write the questions for the homeowner').register(fieldText, {
+      label: 'Questions for the homeowner',
       hint: 'Ask plainly; they answer from their request page.',
       control: 'textarea',
     }),
@@ -96,14 +96,14 @@ export const transitionInputs = {
   'record-refused': input('record-refused', {
     permitReference: permitReference(false),
     permitDecidedOn: decidedOn(),
-    note: said(4000, 'give the reason, in words the property owner will read').register(fieldText, {
+    note: said(4000, 'give the reason, in words the homeowner will read').register(fieldText, {
       label: 'Reason',
-      hint: 'The property owner reads this in the e-mail and on their request page.',
+      hint: 'The homeowner reads this in the e-mail and on their request page.',
       control: 'textarea',
     }),
   }),
   release: input('release', {
-    note: note('Note for the crew (optional)', 'Crew leads read this; the property owner does not.'),
+    note: note('Note for the crew (optional)', 'Crew leads read this; the homeowner does not.'),
   }),
   'accept-job': input('accept-job', {}),
   'hand-back': input('hand-back', {
@@ -131,9 +131,9 @@ export const transitionInputs = {
     ),
   }),
   decline: input('decline', {
-    note: said(4000, 'give the reason, in words the property owner will read').register(fieldText, {
+    note: said(4000, 'give the reason, in words the homeowner will read').register(fieldText, {
       label: 'Reason',
-      hint: 'The property owner reads this in the e-mail and on their request page.',
+      hint: 'The homeowner reads this in the e-mail and on their request page.',
       control: 'textarea',
     }),
   }),

@@ -88,7 +88,7 @@ const isoDay = (offsetDays: number) => new Date(Date.now() + offsetDays * 86_400
 
 describe('the whole journey of one entrance', () => {
   it('applicant applies, office checks and releases, a crew builds and verifies, office closes; every e-mail arrives in order', async () => {
-    // The property owner applies, with photos.
+    // The homeowner applies, with photos.
     const applicant = await as(session.browser, owner.email, owner.name);
     let page = applicant.page;
     await page.waitForURL((u) => u.pathname === '/my/requests');

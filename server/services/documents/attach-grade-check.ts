@@ -89,7 +89,7 @@ export async function attachGradeCheck(
         actorId: user.id,
         kind: 'grade-check-report',
         internal: !share,
-        note: `Grade check ${check.number} report attached${share ? ' and shared with the property owner' : ''}.`,
+        note: `Grade check ${check.number} report attached${share ? ' and shared with the homeowner' : ''}.`,
       });
     }
     const [saved] = document ? [document] : await tx.select().from(documents).where(eq(documents.objectKey, objectKey));

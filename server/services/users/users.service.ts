@@ -13,6 +13,16 @@ export interface ProviderProfile {
   name: string;
 }
 
+/** A person whose sign-in an administrator turned off; the sign-in page tells them so in these words. */
+export class SignInTurnedOffError extends Error {
+  constructor(readonly companyName?: string) {
+    super(
+      `Your sign-in has been turned off by ${companyName ?? 'the company'}. If you think this is a mistake, ask the office to turn it back on.`,
+    );
+  }
+}
+const signInTurnedOff = () => new SignInTurnedOffError();
+
 /** Sign-in: a known subject or e-mail keeps its role; an unknown e-mail becomes an applicant. */
 export async function signInWithProfile(db: DbOrTx, profile: ProviderProfile): Promise<SessionUser> {
   const email = profile.email.trim().toLowerCase();
@@ -21,7 +31,7 @@ export async function signInWithProfile(db: DbOrTx, profile: ProviderProfile): P
     .from(users)
     .where(or(eq(users.googleSub, profile.sub), sql`lower(${users.email}) = ${email}`))
     .limit(1);
-  if (existing?.disabled) throw forbidden('This account has been turned off. Please contact the office.');
+  if (existing?.disabled) throw signInTurnedOff();
   if (existing) {
     const [updated] = await db
       .update(users)

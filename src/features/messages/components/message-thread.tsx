@@ -20,7 +20,7 @@ interface MessageThreadProps {
 }
 
 /**
- * The conversation on a request: the property owner with the office, and the crew lead once a crew holds the job.
+ * The conversation on a request: the homeowner with the office, and the crew lead once a crew holds the job.
  * Only the office's readers ever receive its internal notes.
  */
 export function MessageThread({
@@ -87,7 +87,7 @@ function WriteForm({ requestId, office, writeLabel }: { requestId: string; offic
   const inputId = useId();
   const post = usePostMessage(requestId);
   const [text, setText] = useState('');
-  // The office decides each time; its default keeps a slip of the hand from reaching the property owner.
+  // The office decides each time; its default keeps a slip of the hand from reaching the homeowner.
   const [visibility, setVisibility] = useState<MessageVisibility>('internal');
   const fieldError = post.error instanceof ApiError ? post.error.fields.body : undefined;
   const send = (event: FormEvent) => {
@@ -142,13 +142,13 @@ function WriteForm({ requestId, office, writeLabel }: { requestId: string; offic
                 onChange={() => setVisibility('shared')}
                 className="accent-pine-700"
               />
-              Shared with the property owner
+              Shared with the homeowner
             </label>
           </fieldset>
           <p className="text-xs text-stone-600">
             {visibility === 'internal'
               ? 'Only the office sees internal notes; nobody is e-mailed.'
-              : 'The property owner, and the crew lead once a crew holds the job, get an e-mail with this message.'}
+              : 'The homeowner, and the crew lead once a crew holds the job, get an e-mail with this message.'}
           </p>
         </>
       )}

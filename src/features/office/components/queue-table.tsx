@@ -47,7 +47,7 @@ export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
           </Link>
         ),
       }),
-      column.accessor('applicantName', { id: 'applicant', header: 'Applicant', cell: (c) => c.getValue() || '—' }),
+      column.accessor('applicantName', { id: 'applicant', header: 'Homeowner', cell: (c) => c.getValue() || '—' }),
       column.accessor('roadName', {
         id: 'road',
         header: 'Road and authority',
