@@ -65,9 +65,7 @@ export async function setShared(db: Db, user: SessionUser, documentId: string, s
         actorId: user.id,
         kind: 'document',
         internal: !shared,
-        note: shared
-          ? `${row.title} shared with the homeowner.`
-          : `${row.title} no longer shared with the homeowner.`,
+        note: shared ? `${row.title} shared with the homeowner.` : `${row.title} no longer shared with the homeowner.`,
       });
     }
     return view(saved, user);

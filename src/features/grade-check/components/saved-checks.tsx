@@ -67,8 +67,8 @@ export function SavedChecks({ request, checks }: { request: GradeCheckRequestHea
         <Notice tone="warn" title={`Check ${confirming.number} does not meet the rules`}>
           <p>
             Attached, it goes on the request as the office’s finding
-            {share ? ', and the homeowner reads it with its report' : ''}. Attach it only if that is what you mean
-            to tell them.
+            {share ? ', and the homeowner reads it with its report' : ''}. Attach it only if that is what you mean to
+            tell them.
           </p>
           <div className="mt-2 flex flex-wrap gap-2">
             <Button variant="danger" disabled={attach.isPending} onClick={() => attachNow(confirming, true)}>
