@@ -106,7 +106,10 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
       .first()
       .waitFor();
     await shot(page, 'my-jobs-planned');
+    // Starting work asks first; nothing moves until the crew lead says yes.
     await page.getByRole('region', { name: 'Planned' }).getByRole('button', { name: 'Start work' }).first().click();
+    await page.getByText(/The homeowner and the office are told the crew is building/).waitFor();
+    await page.getByRole('button', { name: 'Yes, start work' }).click();
     await page.getByRole('region', { name: 'Under way' }).waitFor();
 
     await page.goto(appUrl(`/crew/jobs/${jobId}/field-sheet`));

@@ -92,7 +92,13 @@ function WriteForm({ requestId, office, writeLabel }: { requestId: string; offic
   const fieldError = post.error instanceof ApiError ? post.error.fields.body : undefined;
   const send = (event: FormEvent) => {
     event.preventDefault();
-    post.mutate(office ? { body: text, visibility } : { body: text }, { onSuccess: () => setText('') });
+    // After each send the switch goes back to internal, so the next note cannot reach the homeowner by a slip.
+    post.mutate(office ? { body: text, visibility } : { body: text }, {
+      onSuccess: () => {
+        setText('');
+        setVisibility('internal');
+      },
+    });
   };
   const sendLabel = !office
     ? post.isPending
@@ -100,7 +106,7 @@ function WriteForm({ requestId, office, writeLabel }: { requestId: string; offic
       : 'Send message'
     : visibility === 'internal'
       ? 'Save internal note'
-      : 'Send to the owner';
+      : 'Send to the homeowner';
   return (
     <form onSubmit={send} noValidate className="space-y-2" aria-label="Write a message">
       <label htmlFor={inputId} className="block text-sm font-semibold text-stone-800">

@@ -5,6 +5,7 @@ import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { Field, SelectInput, TextInput } from '@/components/ui/field';
 import { useUsers } from '../api/get-users';
 import { useUpdateUser } from '../api/update-user';
+import { PersonName } from './person-name';
 
 export function UsersTable() {
   const [search, setSearch] = useState('');
@@ -48,7 +49,9 @@ export function UsersTable() {
             <tbody>
               {users.data?.users.map((user) => (
                 <tr key={user.id} className="border-b border-stone-100">
-                  <td className="py-2 pr-3 font-semibold">{user.name}</td>
+                  <td className="py-2 pr-3">
+                    <PersonName id={user.id} name={user.name} />
+                  </td>
                   <td className="pr-3">{user.email}</td>
                   <td className="pr-3">
                     <label className="sr-only" htmlFor={`role-${user.id}`}>

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { ConfirmButton } from '@/components/ui/confirm-button';
 import { Field, SelectInput, TextInput } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
@@ -119,17 +120,19 @@ export function ProfileForm({ version }: { version: ProfileVersion }) {
         <Button type="submit" disabled={update.isPending}>
           {update.isPending ? 'Saving…' : 'Save draft'}
         </Button>
-        <Button
+        <ConfirmButton
           variant="secondary"
           disabled={publish.isPending || update.isPending}
-          onClick={() =>
+          question={`Publish version ${version.version}? It is frozen once published, and every new grade check uses it.`}
+          confirmLabel={`Yes, publish version ${version.version}`}
+          onConfirm={() =>
             void (dirty ? save() : Promise.resolve(true))
               .then((ok) => ok && publish.mutate(version.id))
               .catch(() => undefined)
           }
         >
           Publish version {version.version}
-        </Button>
+        </ConfirmButton>
         {update.isSuccess && !dirty && (
           <span role="status" className="self-center text-sm text-pine-800">
             Draft saved.
