@@ -64,7 +64,7 @@ describe("the office's message switch", () => {
   it('names the audience on the button and returns to internal after a shared message', async () => {
     const page = await (await session.browser.newContext()).newPage();
     await signInAs(page, staff.email);
-    await page.goto(appUrl(`/office/requests/${request.id}`));
+    await page.goto(appUrl(`/office/requests/${request.id}?tab=messages`));
     const form = page.getByRole('form', { name: 'Write a message' });
     await form.waitFor();
     await form.getByRole('button', { name: 'Save internal note' }).waitFor();
