@@ -15,7 +15,7 @@ const extraStyles = `
 
 // Plain words for the app's roles; any other label is shown as given.
 const roleLabels: Record<string, string> = {
-  applicant: 'Applicant',
+  applicant: 'Homeowner',
   staff: 'Office staff',
   crew: 'Crew lead',
   admin: 'Administrator',

@@ -59,6 +59,8 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default('Gradepass <no-reply@gradepass.test>'),
   MAIL_REPLY_TO: z.string().optional(),
   OFFICE_EMAIL: z.email().default('office@gradepass.test'),
+  /** The contractor's name, as its reports and sign-in messages say it. */
+  COMPANY_NAME: z.string().trim().min(1).max(120).default('Tamarack Ridge Excavating'),
   /** Background work (e-mail delivery) runs in every instance unless turned off. */
   RUN_WORKERS: z
     .enum(['true', 'false'])

@@ -360,3 +360,23 @@ export const rateLimits = pgTable(
   },
   (t) => [index('rate_limits_expire_idx').on(t.expire)],
 );
+
+/**
+ * What administrators changed: a role, a name, a sign-in turned off or on, a person added, a rule profile version
+ * published, the crew yard moved. Written in the same transaction as the change; `summary` is the sentence the
+ * admin's log screen shows, written once when it happened (names as they were then).
+ */
+export const adminAuditEntries = pgTable(
+  'admin_audit_entries',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    actorId: uuid().references(() => users.id),
+    actorName: text().notNull(),
+    kind: text().notNull(),
+    summary: text().notNull(),
+    subjectId: uuid(),
+    detail: jsonb().notNull().default({}),
+    createdAt: createdAt(),
+  },
+  (t) => [index('admin_audit_entries_created_idx').on(t.createdAt)],
+);

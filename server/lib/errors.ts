@@ -5,6 +5,8 @@ export class AppError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    /** Each field's label on screen, when the thrower knows it better than the shared list does. */
+    readonly labels?: Record<string, string>,
   ) {
     super(message);
   }

@@ -2,40 +2,28 @@ import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { z } from 'zod';
 import type { SessionUser } from './session-user';
 import { AppError, unauthenticated } from './errors';
+import { plainIssueMessage } from '@shared/errors/issue-words';
+import { fieldLabelOf, fieldLabelsOf, fieldsSentence } from '@shared/contracts/field-labels';
 
-// zod's stock words for a value of the wrong type ("Invalid input: expected string, received number") are a
-// programmer's; a field without its own message gets these plain ones, shown beside its label.
-const expectedWords: Record<string, string> = {
-  string: 'must be text',
-  number: 'must be a number',
-  int: 'must be a whole number',
-  boolean: 'must be true or false',
-  array: 'must be a list',
-  object: 'must be a group of fields',
-};
-
-function issueMessage(issue: z.core.$ZodIssue): string {
-  if (issue.code !== 'invalid_type' || !issue.message.startsWith('Invalid input')) return issue.message;
-  return expectedWords[issue.expected] ?? issue.message;
-}
-
-/** Turn zod issues into `{ "field.path": "message" }`, the shape every 400 carries. */
+/** Turn zod issues into `{ "field.path": "message" }`, the shape every 400 carries, in plain words. */
 export function zodFields(error: z.ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {
     const key = issue.path.length > 0 ? issue.path.join('.') : '(body)';
-    fields[key] ??= issueMessage(issue);
+    fields[key] ??= plainIssueMessage(issue);
   }
   return fields;
 }
 
-export function parseOrThrow<T extends z.ZodType>(schema: T, value: unknown, what: string): z.infer<T> {
+/** A 400 naming each field by its label (from `schema` where it gives one) and saying what is allowed. */
+export function invalidInput(fields: Record<string, string>, schema?: z.ZodType): AppError {
+  const labels = fieldLabelsOf(fields, schema);
+  return new AppError(400, 'invalid_input', fieldsSentence(fields, labels), fields, labels);
+}
+
+export function parseOrThrow<T extends z.ZodType>(schema: T, value: unknown): z.infer<T> {
   const result = schema.safeParse(value);
-  if (!result.success) {
-    const fields = zodFields(result.error);
-    const names = Object.keys(fields).join(', ');
-    throw new AppError(400, 'invalid_input', `Some ${what} values are not valid: ${names}.`, fields);
-  }
+  if (!result.success) throw invalidInput(zodFields(result.error), schema);
   return result.data;
 }
 
@@ -102,11 +90,15 @@ export function handle<
       if (!req.user) throw unauthenticated();
       // Check all three parts before answering, so one 400 names every bad field at once.
       const fields: Record<string, string> = {};
+      const labels: Record<string, string> = {};
       const part = <T extends z.ZodType>(schema: T | undefined, value: unknown, prefix: string) => {
         if (!schema) return value;
         const result = schema.safeParse(value);
         if (result.success) return result.data;
-        for (const [key, message] of Object.entries(zodFields(result.error))) fields[prefix + key] ??= message;
+        for (const [key, message] of Object.entries(zodFields(result.error))) {
+          fields[prefix + key] ??= message;
+          labels[prefix + key] ??= fieldLabelOf(key, schema, value);
+        }
         return undefined;
       };
       Object.assign(fields, nulFields(req.query), nulFields(req.body));
@@ -114,12 +106,8 @@ export function handle<
       const query = part(contract.query, req.query, '') as z.infer<Q>;
       const body = part(contract.body, req.body ?? {}, '') as z.infer<B>;
       if (Object.keys(fields).length > 0) {
-        throw new AppError(
-          400,
-          'invalid_input',
-          `Some values are not valid: ${Object.keys(fields).join(', ')}.`,
-          fields,
-        );
+        const named = { ...fieldLabelsOf(fields), ...labels };
+        throw new AppError(400, 'invalid_input', fieldsSentence(fields, named), fields, named);
       }
       const result = await fn({ body, query, params, user: req.user as SessionUser, req, res });
       if (!res.headersSent) {

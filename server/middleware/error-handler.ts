@@ -1,3 +1,4 @@
+import { fieldLabelsOf } from '@shared/contracts/field-labels';
 import type { ErrorRequestHandler } from 'express';
 import { databaseUnavailable, isDatabaseUnavailable } from '../lib/db-unavailable';
 import { AppError } from '../lib/errors';
@@ -25,12 +26,16 @@ interface BodyParserError {
   expose?: boolean;
 }
 
-/** The one place errors become responses: `{ error: { code, message, fields? } }`. */
+/** The one place errors become responses: `{ error: { code, message, fields?, labels? } }`. */
 export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (error, req, res, _next) => {
     if (res.headersSent) return;
     if (error instanceof AppError) {
-      res.status(error.status).json({ error: { code: error.code, message: error.message, fields: error.fields } });
+      // Every field named in an error comes with its label, so the client writes "Permit expires on", not the key.
+      const labels = error.fields ? { ...fieldLabelsOf(error.fields), ...error.labels } : undefined;
+      res
+        .status(error.status)
+        .json({ error: { code: error.code, message: error.message, fields: error.fields, labels } });
       return;
     }
     const parserError = error as BodyParserError;

@@ -1,5 +1,6 @@
 import type { Express } from 'express';
 import type { AppContext } from '../config/context';
+import { auditRouter } from './audit/audit.routes';
 import { crewRouter } from './crew/crew.routes';
 import { documentsRouter } from './documents/documents.routes';
 import { emailsRouter } from './emails/emails.routes';
@@ -18,6 +19,7 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(healthRouter(ctx));
   app.use(crewRouter(ctx));
   app.use(usersRouter(ctx));
+  app.use(auditRouter(ctx));
   app.use(requestsRouter(ctx));
   app.use(photosRouter(ctx));
   app.use(messagesRouter(ctx));

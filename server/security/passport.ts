@@ -7,7 +7,7 @@ import {
 } from 'passport-google-oauth20';
 import type { AppContext } from '../config/context';
 import { OAuthStateCookieStore } from './oauth-state-cookie';
-import { findSessionUser, signInWithProfile } from '../services/users/users.service';
+import { findSessionUser, signInWithProfile, SignInTurnedOffError } from '../services/users/users.service';
 
 export const callbackPath = '/auth/google/callback';
 
@@ -42,7 +42,12 @@ export function configurePassport({ env, db }: Pick<AppContext, 'env' | 'db'>) {
       }
       signInWithProfile(db, { sub: profile.id, email, name: profile.displayName ?? email })
         .then((user) => done(null, user))
-        .catch((error: Error) => done(error));
+        .catch((error: Error) =>
+          // A turned-off person is told so plainly on the sign-in page, naming the company that did it.
+          error instanceof SignInTurnedOffError
+            ? done(null, false, { message: new SignInTurnedOffError(env.COMPANY_NAME).message })
+            : done(error),
+        );
     },
   );
   const instance = new passport.Passport();

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { fieldLabel } from '../errors/issue-words';
 import { dayInput } from '../workflow/dates';
 import { expectedVersionSchema, transitionInputs } from '../workflow/transition-inputs';
 
@@ -17,7 +18,7 @@ export const handBackInputSchema = transitionInputs['hand-back'].omit({ action: 
 export const startWorkInputSchema = transitionInputs['start-work'].omit({ action: true });
 
 export const scheduleJobInputSchema = z.strictObject({
-  date: dayInput('must be a date, e.g. 2026-12-08'),
+  date: dayInput('pick a day from the calendar').register(fieldLabel, { label: 'Work day' }),
   note: z.string().trim().max(1000, 'must be at most 1000 characters').optional(),
 });
 export type ScheduleJobInput = z.infer<typeof scheduleJobInputSchema>;

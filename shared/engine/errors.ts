@@ -1,4 +1,5 @@
 import type { z } from 'zod';
+import { plainIssueMessage } from '../errors/issue-words';
 
 export interface EngineIssue {
   field: string;
@@ -42,7 +43,7 @@ type Issue = z.core.$ZodIssue;
  */
 function specific(issue: Issue, prefix: readonly PropertyKey[]): { path: PropertyKey[]; message: string }[] {
   const path = [...prefix, ...issue.path];
-  if (issue.code !== 'invalid_union' || issue.errors.length === 0) return [{ path, message: issue.message }];
+  if (issue.code !== 'invalid_union' || issue.errors.length === 0) return [{ path, message: plainIssueMessage(issue) }];
   const depth = (branch: Issue[]) => Math.max(...branch.map((i) => i.path.length));
   const best = issue.errors.reduce((a, b) => (depth(b) > depth(a) ? b : a));
   return best.flatMap((i) => specific(i, path));

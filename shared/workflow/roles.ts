@@ -4,11 +4,15 @@ export const roles = ['applicant', 'staff', 'crew', 'admin'] as const;
 export const roleSchema = z.enum(roles);
 export type Role = z.infer<typeof roleSchema>;
 
+/**
+ * One word for each role on every screen, e-mail and document. The applicant is the homeowner who asks for the
+ * entrance; the administrator runs the company's Gradepass (people, rule profiles, the crew yard).
+ */
 export const roleLabels: Record<Role, string> = {
-  applicant: 'Property owner',
-  staff: 'Office',
+  applicant: 'Homeowner',
+  staff: 'Office staff',
   crew: 'Crew lead',
-  admin: 'Owner (admin)',
+  admin: 'Administrator',
 };
 
 /** Staff and the admin work as the office: they see every request, internal notes and every check. */

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { readLabelsFrom } from '../errors/issue-words';
 import { dayInput, momentInput } from './dates';
 import { transitionActions, type TransitionAction } from './transitions';
 
@@ -11,6 +12,8 @@ export interface FieldText {
   prefill?: 'permitReference' | 'permitConditions';
 }
 export const fieldText = z.registry<FieldText>();
+// Errors about these fields name them by the same labels (shared/errors/issue-words.ts).
+readLabelsFrom(fieldText);
 
 export const expectedVersionSchema = z.number({ error: 'must be the version number you loaded' }).int().min(1);
 
@@ -22,7 +25,7 @@ const dayMs = 86_400_000;
 const note = (label: string, hint = 'Shown in the history and the e-mail.') =>
   text(4000).optional().register(fieldText, { label, hint, control: 'textarea' });
 const plainNote = note('Note (optional)');
-const visitAt = momentInput('must be a date and time, e.g. 2026-05-04T09:30:00Z')
+const visitAt = momentInput('pick a date and a time')
   .refine((at) => new Date(at).getTime() >= Date.now() - dayMs, 'must not be in the past')
   .refine((at) => new Date(at).getTime() <= Date.now() + 400 * dayMs, 'must be within the next 13 months');
 const permitReference = (required: boolean) =>
@@ -35,7 +38,7 @@ const permitReference = (required: boolean) =>
 const decidedOn = () =>
   z
     .string({ error: 'enter the date the road authority decided' })
-    .pipe(dayInput('must be a date, e.g. 2026-05-04'))
+    .pipe(dayInput('pick a day from the calendar'))
     .register(fieldText, { label: 'Decided on', control: 'date' });
 
 // Every change may carry a note; an action that asks for it in its own words replaces this one, in the type too.
@@ -54,8 +57,8 @@ const input = <A extends TransitionAction, S extends z.ZodRawShape>(action: A, s
 export const transitionInputs = {
   submit: input('submit', {}),
   'ask-details': input('ask-details', {
-    note: said(4000, 'write the questions for the property owner').register(fieldText, {
-      label: 'Questions for the property owner',
+    note: said(4000, 'write the questions for the homeowner').register(fieldText, {
+      label: 'Questions for the homeowner',
       hint: 'Ask plainly; they answer from their request page.',
       control: 'textarea',
     }),
@@ -83,7 +86,7 @@ export const transitionInputs = {
       control: 'textarea',
       prefill: 'permitConditions',
     }),
-    permitExpiresOn: dayInput('must be a date, e.g. 2027-05-04')
+    permitExpiresOn: dayInput('pick a day from the calendar')
       .optional()
       .register(fieldText, { label: 'Permit expires on (optional)', control: 'date' }),
   }).refine((b) => !b.permitExpiresOn || b.permitExpiresOn > b.permitDecidedOn, {
@@ -93,14 +96,14 @@ export const transitionInputs = {
   'record-refused': input('record-refused', {
     permitReference: permitReference(false),
     permitDecidedOn: decidedOn(),
-    note: said(4000, 'give the reason, in words the property owner will read').register(fieldText, {
+    note: said(4000, 'give the reason, in words the homeowner will read').register(fieldText, {
       label: 'Reason',
-      hint: 'The property owner reads this in the e-mail and on their request page.',
+      hint: 'The homeowner reads this in the e-mail and on their request page.',
       control: 'textarea',
     }),
   }),
   release: input('release', {
-    note: note('Note for the crew (optional)', 'Crew leads read this; the property owner does not.'),
+    note: note('Note for the crew (optional)', 'Crew leads read this; the homeowner does not.'),
   }),
   'accept-job': input('accept-job', {}),
   'hand-back': input('hand-back', {
@@ -128,9 +131,9 @@ export const transitionInputs = {
     ),
   }),
   decline: input('decline', {
-    note: said(4000, 'give the reason, in words the property owner will read').register(fieldText, {
+    note: said(4000, 'give the reason, in words the homeowner will read').register(fieldText, {
       label: 'Reason',
-      hint: 'The property owner reads this in the e-mail and on their request page.',
+      hint: 'The homeowner reads this in the e-mail and on their request page.',
       control: 'textarea',
     }),
   }),

@@ -148,6 +148,11 @@ export const transitions: readonly Transition[] = [
   })),
 ];
 
+/** An action as its button says it ("Record the permit granted"), for messages that name it. */
+export function actionLabel(action: string): string {
+  return transitions.find((t) => t.action === action)?.label ?? 'That change';
+}
+
 export function findTransition(from: RequestStatus, action: string): Transition | undefined {
   return transitions.find((t) => t.from === from && t.action === action);
 }

@@ -28,6 +28,8 @@ export function createAppRouter() {
         { path: paths.office.ruleProfile.path, ...page(() => import('./routes/office/rule-profile')) },
         { path: paths.office.emails.path, ...page(() => import('./routes/office/emails')) },
         { path: paths.office.users.path, ...page(() => import('./routes/office/users')) },
+        { path: paths.office.audit.path, ...page(() => import('./routes/office/changes')) },
+        { path: paths.office.crewYard.path, ...page(() => import('./routes/office/crew-yard')) },
         { path: paths.crew.board.path, ...page(() => import('./routes/crew/board')) },
         { path: paths.crew.myJobs.path, ...page(() => import('./routes/crew/my-jobs')) },
         { path: paths.crew.fieldSheet.path, ...page(() => import('./routes/crew/field-sheet')) },

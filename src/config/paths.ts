@@ -22,6 +22,8 @@ export const paths = {
     ruleProfile: { path: '/office/rule-profiles/:id', getHref: (id: string) => `/office/rule-profiles/${id}` },
     emails: { path: '/office/emails', getHref: () => '/office/emails' },
     users: { path: '/office/users', getHref: () => '/office/users' },
+    audit: { path: '/office/changes', getHref: () => '/office/changes' },
+    crewYard: { path: '/office/crew-yard', getHref: () => '/office/crew-yard' },
   },
   crew: {
     board: sharedPaths.crewBoard,

@@ -1,6 +1,7 @@
+import { fieldLabelOf } from '@shared/contracts/field-labels';
 /** The error shape every API answer uses; the client turns it into a typed error and never acts on it itself. */
 export interface ApiErrorBody {
-  error: { code: string; message: string; fields?: Record<string, string> };
+  error: { code: string; message: string; fields?: Record<string, string>; labels?: Record<string, string> };
 }
 
 export class ApiError extends Error {
@@ -9,8 +10,15 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields: Record<string, string> = {},
+    /** Each field's label on screen, as the server named it. */
+    readonly labels: Record<string, string> = {},
   ) {
     super(message);
+  }
+
+  /** The label of a field the server named, for a message shown away from the field itself. */
+  labelOf(path: string): string {
+    return this.labels[path] ?? fieldLabelOf(path);
   }
 }
 
@@ -48,6 +56,7 @@ async function request<T>(method: string, path: string, body?: unknown, query?: 
       err?.code ?? 'http_error',
       err?.message ?? `The server answered ${response.status}.`,
       err?.fields,
+      err?.labels,
     );
   }
   return data as T;

@@ -1,4 +1,5 @@
 import type { EmailLogFilter } from '@shared/contracts/emails';
+import type { AuditFilter } from '@shared/contracts/audit';
 import type { PeopleFilter } from '@shared/contracts/people';
 
 /**
@@ -27,6 +28,12 @@ export const peopleKeys = {
   all: ['people'] as const,
   /** GET /api/users?search=&role= */
   list: (filter: PeopleFilter) => ['people', 'list', filter] as const,
+};
+
+export const auditKeys = {
+  all: ['audit'] as const,
+  /** GET /api/audit?kind= */
+  list: (filter: AuditFilter) => ['audit', 'list', filter] as const,
 };
 
 export const ruleProfileKeys = {

@@ -19,7 +19,7 @@ async function mailFor(address: string) {
   return (await caughtMail()).filter((m) => m.to.some((to) => to.toLowerCase().includes(address)));
 }
 
-describe('a new property owner asks for an entrance', () => {
+describe('a new homeowner asks for an entrance', () => {
   it('fills the wizard with two photos, sends it, follows it and gets a receipt', async () => {
     const email = `hollis.pembury-${randomUUID().slice(0, 6)}@example.test`;
     const context = await session.browser.newContext();

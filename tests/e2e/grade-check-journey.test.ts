@@ -92,7 +92,7 @@ describe('from visit booked to checked', () => {
     expect(await summary.textContent()).toMatch(/needs a gentler slope near the road: here is what we propose/);
     expect(await summary.textContent()).toContain("meets Marrow County's rules (version 1)");
     await page.getByText('Grade check 1 report', { exact: true }).waitFor();
-    await page.getByText('Grade check 1 report attached and shared with the property owner.').waitFor();
+    await page.getByText('Grade check 1 report attached and shared with the homeowner.').waitFor();
     await shot(page, 'owner-view');
     await context.close();
   });

@@ -42,7 +42,13 @@ describe('rule profile versions', () => {
     await page.getByRole('button', { name: 'Save draft' }).click();
     await page.getByText('Draft saved.').waitFor();
     await shot(page, 'draft');
+    // Publishing asks first: one press alone publishes nothing, Cancel steps back.
     await page.getByRole('button', { name: 'Publish version 1' }).click();
+    await page.getByText(/Publish version 1\? It is frozen once published/).waitFor();
+    await page.getByRole('button', { name: 'Cancel' }).click();
+    await page.getByRole('button', { name: 'Publish version 1' }).click();
+    expect(await page.getByText('Version 1 · published, read only').count()).toBe(0);
+    await page.getByRole('button', { name: 'Yes, publish version 1' }).click();
     await page.getByText('Version 1 · published, read only').waitFor();
 
     await page.getByRole('button', { name: 'Start a new version from this one' }).click();
@@ -50,6 +56,7 @@ describe('rule profile versions', () => {
     await page.getByLabel('Maximum driveway grade beyond the landing (%)').fill('14');
     await page.getByLabel('What changed in this version').fill('Steepest grade cut to 14%');
     await page.getByRole('button', { name: 'Publish version 2' }).click();
+    await page.getByRole('button', { name: 'Yes, publish version 2' }).click();
     await page.getByText('Version 2 · published, read only').waitFor();
     const compare = page.getByRole('table', { name: 'Version differences' });
     await compare.waitFor();

@@ -106,7 +106,10 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
       .first()
       .waitFor();
     await shot(page, 'my-jobs-planned');
+    // Starting work asks first; nothing moves until the crew lead says yes.
     await page.getByRole('region', { name: 'Planned' }).getByRole('button', { name: 'Start work' }).first().click();
+    await page.getByText(/The homeowner and the office are told the crew is building/).waitFor();
+    await page.getByRole('button', { name: 'Yes, start work' }).click();
     await page.getByRole('region', { name: 'Under way' }).waitFor();
 
     await page.goto(appUrl(`/crew/jobs/${jobId}/field-sheet`));
@@ -115,11 +118,11 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     expect(await page.getByText(/buried utilities/).isVisible()).toBe(true);
     // The crew holding the job reads the owner's messages under the sheet and answers them.
     const talk = page.locator('section', {
-      has: page.getByRole('heading', { name: 'Messages with the property owner and the office' }),
+      has: page.getByRole('heading', { name: 'Messages with the homeowner and the office' }),
     });
     await talk.getByText('The septic lid is left of the entrance; please keep off it.').waitFor();
     await talk
-      .getByLabel('Write to the property owner and the office')
+      .getByLabel('Write to the homeowner and the office')
       .fill('Noted: we will stake the lid before the machine arrives.');
     await talk.getByRole('button', { name: 'Send message' }).click();
     await talk.getByText('Noted: we will stake the lid before the machine arrives.').waitFor();

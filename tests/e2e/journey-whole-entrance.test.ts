@@ -88,7 +88,7 @@ const isoDay = (offsetDays: number) => new Date(Date.now() + offsetDays * 86_400
 
 describe('the whole journey of one entrance', () => {
   it('applicant applies, office checks and releases, a crew builds and verifies, office closes; every e-mail arrives in order', async () => {
-    // The property owner applies, with photos.
+    // The homeowner applies, with photos.
     const applicant = await as(session.browser, owner.email, owner.name);
     let page = applicant.page;
     await page.waitForURL((u) => u.pathname === '/my/requests');
@@ -235,7 +235,9 @@ describe('the whole journey of one entrance', () => {
     await page.getByRole('heading', { name: new RegExp(`Field sheet · ${reference}`) }).waitFor();
     await shot(page, 'crew-field-sheet');
     await page.goto(appUrl('/crew/my-jobs'));
-    await page.getByRole('article').filter({ hasText: reference }).getByRole('button', { name: 'Start work' }).click();
+    const jobCard = page.getByRole('article').filter({ hasText: reference });
+    await jobCard.getByRole('button', { name: 'Start work' }).click();
+    await jobCard.getByRole('button', { name: 'Yes, start work' }).click();
     await page.getByRole('region', { name: 'Under way' }).getByText(reference).waitFor();
     await received(9);
     await page

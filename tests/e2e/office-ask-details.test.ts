@@ -52,7 +52,7 @@ describe('the office asks for details and the owner answers', () => {
     await link.click();
     await office.getByRole('heading', { name: request.reference }).waitFor();
     await office.getByRole('button', { name: 'Ask for details' }).click();
-    await office.getByLabel('Questions for the property owner').fill(question);
+    await office.getByLabel('Questions for the homeowner').fill(question);
     await office
       .getByRole('form', { name: 'Ask for details' })
       .getByRole('button', { name: 'Ask for details' })

@@ -58,6 +58,17 @@ describe('the grade check report', () => {
     expect(text).toContain('traffic control');
     expect(text).toMatch(/road authority's decision prevails/);
     expect(text).toContain('Least-earth proposal');
+    // Plain words: the company and the checker by name, a calculation version, no internal keys or raw choices.
+    expect(text).toContain('Tamarack Ridge Excavating');
+    const checker = (await cast.staff.agent.get('/api/me').expect(200)).body.user.name as string;
+    expect(text).toContain(`by ${checker}`);
+    expect(text).toMatch(/Calculation version \d+\.\d+\.\d+/);
+    expect(text).not.toMatch(/Engine \d/);
+    expect(text).not.toMatch(/sight\.basis|asBuilt\.|landing\.|designVehicle\.|\bunits us\b/);
+    expect(text).toContain('Landing: steepest rise away from the road');
+    expect(text).toContain('US customary (ft, in)');
+    expect(text).not.toMatch(/\d{4}-\d{2}-\d{2}/);
+    expect(text).not.toMatch(/\ba (8|11|18)\d* in culvert/);
 
     const dir = path.join(inject('stack').artifactsDir, 'reports');
     mkdirSync(dir, { recursive: true });

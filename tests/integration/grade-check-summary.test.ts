@@ -30,7 +30,7 @@ async function summaryFor(ground: typeof steepBeyond, apply: boolean) {
   return { text: plainSummary(inputs, results, marrow), results };
 }
 
-describe('the words the property owner reads', async () => {
+describe('the words the homeowner reads', async () => {
   it('says what fails when the entrance as checked does not meet the rules', async () => {
     const { text } = await summaryFor(steepBeyond, false);
     expect(text).toBe(

@@ -76,7 +76,9 @@ describe('input PostgreSQL could not take answers 400 naming the field, never 50
 
   it('asks what to change when a change to a person names nothing', async () => {
     const res = await cast.admin.agent.patch(`/api/users/${cast.crew.id}`).send({}).expect(400);
-    expect(res.body.error.fields).toEqual({ '(body)': 'say what to change: role or disabled' });
+    expect(res.body.error.fields).toEqual({
+      '(body)': 'say what to change: the name, the role or whether they may sign in',
+    });
   });
 
   it('refuses a date in a year PostgreSQL cannot hold, or no permit would carry', async () => {
@@ -93,7 +95,7 @@ describe('input PostgreSQL could not take answers 400 naming the field, never 50
       .expect(400);
     expect(res.body.error.fields).toEqual({
       permitDecidedOn: 'must be in a year between 1900 and 2999',
-      permitExpiresOn: 'must be a date, e.g. 2027-05-04',
+      permitExpiresOn: 'pick a day from the calendar',
     });
     // Each action takes only its own fields, so the visit date is tried on the action that books the visit.
     const visit = await cast.staff.agent

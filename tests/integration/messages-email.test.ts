@@ -32,7 +32,7 @@ const post = (agent: Agent, requestId: string, body: string, visibility?: 'inter
     .expect(201);
 
 describe('e-mail about new messages', () => {
-  it('tells the property owner about a shared message and nobody about an internal note', async () => {
+  it('tells the homeowner about a shared message and nobody about an internal note', async () => {
     const sent = await submitted(owner);
     await post(staff, sent.id, 'Pins look disturbed; re-shoot the centreline.', 'internal');
     await post(staff, sent.id, 'Default visibility is internal too.');
@@ -48,7 +48,7 @@ describe('e-mail about new messages', () => {
     for (const text of [mail.textBody, mail.htmlBody]) expect(text).not.toContain('Pins look disturbed');
   });
 
-  it('tells the office inbox when the property owner writes, and not the owner', async () => {
+  it('tells the office inbox when the homeowner writes, and not the owner', async () => {
     const sent = await submitted(owner);
     await post(owner, sent.id, 'The flag is on the pin & the gate is open.');
     const mail = await messageMail(sent.id);

@@ -7,7 +7,7 @@ import { signIn, type TestApp } from '../setup/test-app';
 
 export type Agent = ReturnType<typeof request.agent>;
 
-/** A brand-new property owner, signed in through the OAuth round trip. */
+/** A brand-new homeowner, signed in through the OAuth round trip. */
 export const newApplicant = (t: TestApp, label = 'owner') =>
   signIn(t.app, `${label}-${randomUUID().slice(0, 8)}@example.test`);
 

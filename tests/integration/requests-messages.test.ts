@@ -18,7 +18,7 @@ afterAll(() => t.close());
 
 const bodies = (list: { body: string }[]) => list.map((m) => m.body);
 
-describe('messages between the property owner and the office', () => {
+describe('messages between the homeowner and the office', () => {
   it('keeps the office’s internal notes away from the applicant', async () => {
     await staff
       .post(`/api/requests/${requestId}/messages`)

@@ -31,7 +31,7 @@ describe('two office people changing one request at once', () => {
       ]);
       expect([a.status, b.status].sort()).toEqual([200, 409]);
       const loser = a.status === 409 ? a : b;
-      expect(loser.body.error.message).toMatch(/needs_details|visit_booked|version/);
+      expect(loser.body.error.message).toMatch(/"More details needed"|"Site visit booked"|version/);
 
       const [after] = await t.ctx.db.select().from(requests).where(eq(requests.id, row.id));
       expect(after.version).toBe(row.version + 1);
@@ -61,7 +61,8 @@ describe('two office people changing one request at once', () => {
       .send({ action: 'decline', note: 'Too close to the bend.', expectedVersion: row.version + 1 })
       .expect(409);
     expect(stale.body.error.message).toContain('version');
-    expect(stale.body.error.message).toContain('(submitted)');
+    expect(stale.body.error.message).toContain('"Sent to the office"');
+    expect(stale.body.error.message).not.toContain('submitted)');
     const [after] = await t.ctx.db.select().from(requests).where(eq(requests.id, row.id));
     expect(after).toMatchObject({ status: 'submitted', version: row.version + 2 });
     expect(await t.ctx.db.select().from(emails).where(eq(emails.requestId, row.id))).toHaveLength(2);

@@ -65,7 +65,7 @@ describe('two screens reading the same request’s messages', () => {
         h(
           'section',
           { 'aria-label': 'field sheet' },
-          h(MessageThread, { requestId, writeLabel: 'Write to the property owner and the office' }),
+          h(MessageThread, { requestId, writeLabel: 'Write to the homeowner and the office' }),
         ),
       ),
     );
@@ -74,7 +74,7 @@ describe('two screens reading the same request’s messages', () => {
     await waitFor(() => expect(within(office).getByText('No messages yet.')).toBeTruthy());
     await waitFor(() => expect(within(sheet).getByText('No messages yet.')).toBeTruthy());
 
-    fireEvent.change(within(sheet).getByLabelText('Write to the property owner and the office'), {
+    fireEvent.change(within(sheet).getByLabelText('Write to the homeowner and the office'), {
       target: { value: 'The culvert is in; backfill tomorrow.' },
     });
     fireEvent.click(within(sheet).getByRole('button', { name: 'Send message' }));

@@ -1,6 +1,6 @@
 import type { Role } from '@shared/workflow/statuses';
 
-/** The invented demo company and its customers. Anyone else who signs in becomes a property owner. */
+/** The invented demo company and its customers. Anyone else who signs in becomes a homeowner. */
 export const demoPeople: { email: string; name: string; role: Role }[] = [
   { email: 'dana.okafor@gradepass.test', name: 'Dana Okafor', role: 'admin' },
   { email: 'priya.lindqvist@gradepass.test', name: 'Priya Lindqvist', role: 'staff' },

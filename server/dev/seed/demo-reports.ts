@@ -5,7 +5,7 @@ import { documents, gradeChecks, requestEvents, users } from '../../db/schema';
 
 /**
  * The demo's attached grade checks get their PDF reports, made and stored exactly as attaching one in the app does,
- * and shared with the property owner. The seed writes rows only, so this runs once storage is up; a check that
+ * and shared with the homeowner. The seed writes rows only, so this runs once storage is up; a check that
  * already has its report is left alone. Each report is dated with its check's attachment, so timelines stay in order.
  */
 export async function seedDemoReports(ctx: Pick<AppContext, 'db' | 's3' | 'env'>) {

@@ -43,7 +43,7 @@ export function crewRouter(ctx: AppContext) {
   router.put(
     '/api/crew/yard',
     requireRole('admin'),
-    handle({ body: yardInputSchema }, async ({ body }) => ({ yard: await saveYard(db, body) })),
+    handle({ body: yardInputSchema }, async ({ body, user }) => ({ yard: await saveYard(db, body, user) })),
   );
   router.get(
     '/api/crew/my-jobs',

@@ -21,9 +21,9 @@ export function usersRouter({ db }: AppContext) {
   );
   router.post(
     '/api/users',
-    handle({ body: addPersonInputSchema }, async ({ body, res }) => {
+    handle({ body: addPersonInputSchema }, async ({ body, res, user }) => {
       res.status(201);
-      return { user: (await inviteUser(db, body)) satisfies PersonView<Date> };
+      return { user: (await inviteUser(db, user, body)) satisfies PersonView<Date> };
     }),
   );
   router.patch(

@@ -104,7 +104,7 @@ export async function saveAsBuiltSet(db: Db, crew: SessionUser, requestId: strin
     const row = await loadVisibleRequest(tx, crew, requestId, { forUpdate: true });
     if (row.status !== 'under_construction' || row.crewId !== crew.id) {
       throw conflict(
-        `As-built readings are taken while the job is being built; this one is "${statusText[row.status].label}" (${row.status}).`,
+        `As-built readings are taken while the job is being built; this one is "${statusText[row.status].label}".`,
       );
     }
     const check = await requireJobCheck(tx, row.id);

@@ -15,12 +15,12 @@ const isoDay = (ms: number) => new Date(ms).toISOString().slice(0, 10);
 /** A day the crew can still work on under the permit; one day of slack covers a crew west of UTC at night. */
 function checkDate(date: string, permitExpiresOn: string | null, now: Date) {
   if (date < isoDay(now.getTime() - DAY_MS))
-    throw badRequest('The work cannot be planned in the past.', { date: 'pick today or a later day' });
+    throw badRequest('The work cannot be planned in the past.', { date: 'must be today or a later day' });
   if (date > isoDay(now.getTime() + 400 * DAY_MS))
     throw badRequest('Plan the work within the next 13 months.', { date: 'must be within the next 13 months' });
   if (permitExpiresOn && date > permitExpiresOn) {
     throw badRequest(`The permit expires on ${dayInWords(permitExpiresOn)}.`, {
-      date: `must be on or before the permit's expiry, ${permitExpiresOn}`,
+      date: `must be on or before the permit's expiry, ${dayInWords(permitExpiresOn)}`,
     });
   }
 }
@@ -40,7 +40,7 @@ export async function scheduleJob(
     const row = await loadVisibleRequest(tx, crew, requestId, { forUpdate: true });
     if (row.status !== 'crew_assigned' || row.crewId !== crew.id) {
       throw conflict(
-        `This job is "${statusText[row.status].label}" (${row.status}); only a job you have taken and not yet started can be planned.`,
+        `This job is "${statusText[row.status].label}"; only a job you have taken and not yet started can be planned.`,
       );
     }
     checkDate(input.date, row.permitExpiresOn, now);

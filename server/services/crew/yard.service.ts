@@ -1,7 +1,9 @@
 import { eq } from 'drizzle-orm';
 import { yardInputSchema, type YardInput } from '@shared/crew/crew-inputs';
 import type { Yard } from '@shared/crew/crew-views';
-import type { DbOrTx } from '../../db/client';
+import type { Db, DbOrTx } from '../../db/client';
+import type { SessionUser } from '../../lib/session-user';
+import { recordAdminChange } from '../audit/audit.service';
 import { settings } from '../../db/schema';
 
 const YARD_KEY = 'yard';
@@ -14,11 +16,20 @@ export async function loadYard(db: DbOrTx): Promise<Yard | null> {
   return parsed.success ? parsed.data : null;
 }
 
-export async function saveYard(db: DbOrTx, input: YardInput): Promise<Yard> {
+/** Sets the yard; an administrator's change (`actor`) goes in the administrators' log with it. */
+export async function saveYard(db: Db, input: YardInput, actor?: SessionUser): Promise<Yard> {
   const value = { label: input.label, lat: input.lat, lng: input.lng };
-  await db
-    .insert(settings)
-    .values({ key: YARD_KEY, value })
-    .onConflictDoUpdate({ target: settings.key, set: { value, updatedAt: new Date() } });
+  await db.transaction(async (tx) => {
+    await tx
+      .insert(settings)
+      .values({ key: YARD_KEY, value })
+      .onConflictDoUpdate({ target: settings.key, set: { value, updatedAt: new Date() } });
+    if (actor)
+      await recordAdminChange(tx, actor, {
+        kind: 'yard-moved',
+        summary: `Set the crew yard to ${value.label} (${value.lat.toFixed(5)}, ${value.lng.toFixed(5)}).`,
+        detail: value,
+      });
+  });
   return value;
 }

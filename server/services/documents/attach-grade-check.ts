@@ -1,7 +1,7 @@
 import { and, eq, isNull } from 'drizzle-orm';
 import type { SessionUser } from '../../lib/session-user';
 import type { AppContext } from '../../config/context';
-import { documents, gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
+import { documents, gradeChecks, jurisdictions, requestEvents, ruleProfileVersions, users } from '../../db/schema';
 import { badRequest } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
 import { buildGradeCheckReport } from '../reports/grade-check-report';
@@ -11,7 +11,7 @@ import { loadVisibleGradeCheck } from '../grade-checks/grade-checks.service';
 
 export const REPORT_KIND = 'grade-check-report';
 
-async function reportData(ctx: Pick<AppContext, 'db'>, user: SessionUser, checkId: string) {
+async function reportData(ctx: Pick<AppContext, 'db' | 'env'>, user: SessionUser, checkId: string) {
   const check = await loadVisibleGradeCheck(ctx.db, user, checkId);
   const request = await loadVisibleRequest(ctx.db, user, check.requestId);
   const [version] = await ctx.db
@@ -19,11 +19,22 @@ async function reportData(ctx: Pick<AppContext, 'db'>, user: SessionUser, checkI
     .from(ruleProfileVersions)
     .where(eq(ruleProfileVersions.id, check.ruleProfileVersionId));
   const [jurisdiction] = await ctx.db.select().from(jurisdictions).where(eq(jurisdictions.id, version.jurisdictionId));
-  return { check, request, profile: version.profile as RuleProfile, version, jurisdiction };
+  const [checker] = check.createdById
+    ? await ctx.db.select({ name: users.name }).from(users).where(eq(users.id, check.createdById))
+    : [];
+  return {
+    check,
+    request,
+    profile: version.profile as RuleProfile,
+    version,
+    jurisdiction,
+    companyName: ctx.env.COMPANY_NAME,
+    checkedBy: checker?.name ?? null,
+  };
 }
 
 /** Builds the PDF for one check from the stored record alone. */
-export async function reportFor(ctx: Pick<AppContext, 'db'>, user: SessionUser, checkId: string) {
+export async function reportFor(ctx: Pick<AppContext, 'db' | 'env'>, user: SessionUser, checkId: string) {
   const data = await reportData(ctx, user, checkId);
   return { check: data.check, request: data.request, pdf: await buildGradeCheckReport(data) };
 }
@@ -89,7 +100,7 @@ export async function attachGradeCheck(
         actorId: user.id,
         kind: 'grade-check-report',
         internal: !share,
-        note: `Grade check ${check.number} report attached${share ? ' and shared with the property owner' : ''}.`,
+        note: `Grade check ${check.number} report attached${share ? ' and shared with the homeowner' : ''}.`,
       });
     }
     const [saved] = document ? [document] : await tx.select().from(documents).where(eq(documents.objectKey, objectKey));

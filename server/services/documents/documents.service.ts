@@ -9,7 +9,7 @@ import { DOWNLOAD_SECONDS, downloadUrl } from '../reports/report-storage';
 
 type DocumentRow = typeof documents.$inferSelect;
 
-/** The property owner sees only what the office shared; the office and the crew on the job see everything. */
+/** The homeowner sees only what the office shared; the office and the crew on the job see everything. */
 async function visibleRows(db: Db, user: SessionUser, requestId: string) {
   const request = await loadVisibleRequest(db, user, requestId);
   const where =
@@ -65,9 +65,7 @@ export async function setShared(db: Db, user: SessionUser, documentId: string, s
         actorId: user.id,
         kind: 'document',
         internal: !shared,
-        note: shared
-          ? `${row.title} shared with the property owner.`
-          : `${row.title} no longer shared with the property owner.`,
+        note: shared ? `${row.title} shared with the homeowner.` : `${row.title} no longer shared with the homeowner.`,
       });
     }
     return view(saved, user);

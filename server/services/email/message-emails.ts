@@ -17,7 +17,7 @@ export interface MessageEmailInput {
 }
 
 const roleWords: Record<Role, string> = {
-  applicant: 'the property owner',
+  applicant: 'the homeowner',
   staff: 'the office',
   admin: 'the office',
   crew: 'the crew',
@@ -25,7 +25,7 @@ const roleWords: Record<Role, string> = {
 
 /**
  * Who hears about a new message. Internal notes stay in the office, so they e-mail nobody. A shared message reaches
- * everyone on the request who did not write it: the property owner, the office inbox and the crew lead holding the
+ * everyone on the request who did not write it: the homeowner, the office inbox and the crew lead holding the
  * job (the crew sees shared messages only for jobs it holds).
  */
 export function messageEmails(input: MessageEmailInput): OutgoingEmail[] {

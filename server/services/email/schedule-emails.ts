@@ -1,3 +1,4 @@
+import { formatDay } from '@shared/format/dates';
 import { sharedPaths } from '@shared/paths';
 import { renderHtml, renderText, requestFooter, type EmailContent } from './layout';
 import type { OutgoingEmail } from './outbox';
@@ -15,16 +16,8 @@ export interface ScheduleEmailInput {
   appOrigin: string;
 }
 
-/** "Tuesday 8 December 2026": the day as a person says it, fixed to the date itself rather than any time zone. */
-export function dayInWords(isoDate: string): string {
-  return new Date(`${isoDate}T12:00:00Z`).toLocaleDateString('en-US', {
-    weekday: 'long',
-    day: 'numeric',
-    month: 'long',
-    year: 'numeric',
-    timeZone: 'UTC',
-  });
-}
+/** "Tue, Dec 8, 2026": the day as every screen and document writes it, fixed to the date itself. */
+export const dayInWords = (isoDate: string): string => formatDay(isoDate, { weekday: true });
 
 /** The homeowner hears the day the crew plans to build, and again whenever it moves; the office is copied. */
 export function scheduleEmails(input: ScheduleEmailInput): OutgoingEmail[] {

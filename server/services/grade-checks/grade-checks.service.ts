@@ -27,7 +27,7 @@ export async function loadGradeCheck(db: DbOrTx, id: string): Promise<GradeCheck
   return readGradeCheckRow(row);
 }
 
-/** Property owners and crews see a check once the office has attached it to the request; the office sees all. */
+/** Homeowners and crews see a check once the office has attached it to the request; the office sees all. */
 export async function loadVisibleGradeCheck(db: DbOrTx, user: SessionUser, id: string) {
   const check = await loadGradeCheck(db, id);
   await loadVisibleRequest(db, user, check.requestId);

@@ -38,7 +38,7 @@ function failures(findings: readonly Finding[]) {
 }
 
 /**
- * What the property owner reads on their request page and in the "checked" e-mail: whether the entrance meets the
+ * What the homeowner reads on their request page and in the "checked" e-mail: whether the entrance meets the
  * road authority's rules and, when the ground as found does not, what we propose instead.
  */
 export function plainSummary(inputs: GradeCheckInputs, results: GradeCheckResults, profile: RuleProfile): string {

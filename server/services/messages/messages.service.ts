@@ -81,7 +81,7 @@ export async function postMessage(
 ) {
   const row = await loadForMessages(ctx.db, user, requestId);
   const office = isOfficeRole(user.role);
-  // The office decides each time; its default keeps a slip of the hand from reaching the property owner.
+  // The office decides each time; its default keeps a slip of the hand from reaching the homeowner.
   const visibility = input.visibility ?? (office ? 'internal' : 'shared');
   if (!office && visibility === 'internal') {
     throw badRequest('Only the office can write internal notes.', {

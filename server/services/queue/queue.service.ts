@@ -14,8 +14,8 @@ import {
 } from './queue-statement';
 
 const waitingElsewhere: Partial<Record<RequestStatus, string>> = {
-  draft: 'The property owner is still filling it in',
-  needs_details: 'Waiting on the property owner’s answer',
+  draft: 'The homeowner is still filling it in',
+  needs_details: 'Waiting on the homeowner’s answer',
   permit_filed: 'Waiting on the road authority',
   released: 'Waiting for a crew to take it',
   crew_assigned: 'With the crew',

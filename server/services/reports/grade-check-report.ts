@@ -1,3 +1,4 @@
+import { countOf } from '@shared/format/counts';
 import PDFDocument from 'pdfkit';
 import SVGtoPDF from 'svg-to-pdfkit';
 import { formatStation, type RuleProfile } from '@shared/engine';
@@ -8,7 +9,8 @@ import { chartFont, registerReportFonts, reportFonts } from './pdf-fonts';
 import { drawTable, heading, paragraph } from './pdf-table';
 import { apronSection } from './report-apron';
 import { designSections } from './report-design';
-import { findingCells, profileValueRows, reportCautions } from './report-words';
+import { findingCells, profileValueRows, reportCautions, withArticle } from './report-words';
+import { formatDay } from '@shared/format/dates';
 
 export interface ReportData {
   request: { reference: string; applicantName: string; siteAddress: string; roadName: string };
@@ -16,9 +18,12 @@ export interface ReportData {
   profile: RuleProfile;
   version: { version: number; publishedAt: Date | null };
   jurisdiction: { name: string; authority: string };
+  /** The contractor whose office made the check, and the person who saved it. */
+  companyName: string;
+  checkedBy: string | null;
 }
 
-const dateText = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : '-');
+const dateText = (d: Date | null) => formatDay(d, { missing: '-' });
 
 /** What was measured at the site, in one paragraph, so the report stands on its own. */
 function siteWords(check: GradeCheck): string {
@@ -44,12 +49,12 @@ function siteWords(check: GradeCheck): string {
   if (geometry?.widthFt !== undefined) parts.push(`entrance ${geometry.widthFt} ft wide`);
   parts.push(
     culvert
-      ? `a ${culvert.diameterIn} in culvert with inverts ${culvert.inletInvertFt.toFixed(2)} ft (inlet) and ${culvert.outletInvertFt.toFixed(2)} ft (outlet)`
+      ? `${withArticle(`${culvert.diameterIn} in`)} culvert with inverts ${culvert.inletInvertFt.toFixed(2)} ft (inlet) and ${culvert.outletInvertFt.toFixed(2)} ft (outlet)`
       : 'no culvert',
   );
   const shots = check.results.surveyed?.profile.points.length ?? check.results.report.profile.points.length;
   parts.push(
-    `${shots} centreline shots${check.inputs.design?.applied ? ', checked on the proposed profile' : ', checked as surveyed'}`,
+    `${countOf(shots, 'centreline shot')}${check.inputs.design?.applied ? ', checked on the proposed profile' : ', checked as surveyed'}`,
   );
   return `${parts.join('; ')}.`;
 }
@@ -60,7 +65,7 @@ export function buildGradeCheckReport(data: ReportData): Promise<Buffer> {
   const doc = new PDFDocument({
     size: 'LETTER',
     margin: 48,
-    info: { Title: `Grade check ${check.number} - ${data.request.reference}`, Author: 'Gradepass' },
+    info: { Title: `Grade check ${check.number} - ${data.request.reference}`, Author: data.companyName },
   });
   const chunks: Buffer[] = [];
   doc.on('data', (c: Buffer) => chunks.push(c));
@@ -71,6 +76,7 @@ export function buildGradeCheckReport(data: ReportData): Promise<Buffer> {
   registerReportFonts(doc);
 
   doc.font(reportFonts.bold.name).fontSize(18).fillColor('#0e2a1f').text(`Grade check ${check.number}`);
+  doc.font(reportFonts.bold.name).fontSize(11).fillColor('#1c1f1d').text(data.companyName);
   doc
     .font(reportFonts.body.name)
     .fontSize(10)
@@ -79,7 +85,7 @@ export function buildGradeCheckReport(data: ReportData): Promise<Buffer> {
       `Request ${data.request.reference} · ${data.request.applicantName} · ${data.request.siteAddress} on ${data.request.roadName}`,
     );
   doc.text(
-    `Checked ${dateText(check.createdAt)} against ${data.jurisdiction.name} (${data.jurisdiction.authority}), rule profile version ${data.version.version}, published ${dateText(data.version.publishedAt)}. Engine ${check.engineVersion}.`,
+    `Checked ${dateText(check.createdAt)}${data.checkedBy ? ` by ${data.checkedBy}` : ''} against ${data.jurisdiction.name} (${data.jurisdiction.authority}), rule profile version ${data.version.version}, published ${dateText(data.version.publishedAt)}. Calculation version ${check.engineVersion}.`,
   );
   doc.moveDown(0.6);
 

@@ -6,6 +6,7 @@ import {
   type FindingStatus,
   type RuleProfile,
 } from '@shared/engine';
+import { allFields, profileValueText, sourceKeyOf } from '@shared/rule-profiles/profile-fields';
 
 /** Printed on every grade check report; the field sheet carries the same reminders. */
 export const reportCautions = [
@@ -40,21 +41,22 @@ export const findingCells = (f: Finding, station: (ft: number) => string, units:
   statusWords[f.status],
 ];
 
-const skipped = new Set(['id', 'version', 'jurisdictionName', 'name', 'sources']);
-
-/** Every value of the profile as "dotted.path = value", with the source note the admin gave for it. */
+/**
+ * Every value of the profile as the rule profile form names it ("Landing: steepest rise away from the road"), in
+ * words ("Passenger car", "US customary (ft, in)"), with the source note the administrator gave for it.
+ */
 export function profileValueRows(profile: RuleProfile): string[][] {
-  const rows: string[][] = [];
-  const walk = (value: unknown, pathParts: string[]) => {
-    if (value !== null && typeof value === 'object' && !Array.isArray(value)) {
-      for (const [key, inner] of Object.entries(value))
-        if (pathParts.length > 0 || !skipped.has(key)) walk(inner, [...pathParts, key]);
-      return;
-    }
-    const key = pathParts.join('.');
-    const source = profile.sources[key] ?? profile.sources[pathParts[0]] ?? '';
-    rows.push([key, String(value), source]);
-  };
-  walk(profile, []);
-  return rows;
+  return allFields.map((field) => [
+    field.label,
+    profileValueText(profile, field),
+    profile.sources[sourceKeyOf(field)] ?? profile.sources[field.path.split('.')[0]] ?? '',
+  ]);
+}
+
+/** "an 18 in", "a 24 in": the article a number takes when it is read aloud. */
+export function withArticle(spoken: string): string {
+  const digits = /^\d+/.exec(spoken)?.[0] ?? '';
+  // Said with a vowel first: eight, eleven, eighteen, eighty-..., eight hundred..., and 11 or 18 thousand.
+  const vowel = /^8/.test(digits) || (/^(11|18)$/.test(digits.slice(0, 2)) && [2, 5, 8].includes(digits.length));
+  return `${vowel ? 'an' : 'a'} ${spoken}`;
 }

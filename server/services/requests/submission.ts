@@ -1,5 +1,6 @@
 import { submittedApplicationSchema } from '@shared/requests/application-schema';
-import { badRequest } from '../../lib/errors';
+import { fieldLabelsOf, fieldsSentence } from '@shared/contracts/field-labels';
+import { AppError } from '../../lib/errors';
 import { zodFields } from '../../lib/handle';
 import type { RequestRow } from './request-access';
 
@@ -13,5 +14,12 @@ export function assertReadyToSubmit(row: Pick<RequestRow, 'application'>): void 
   const result = submittedApplicationSchema.safeParse({ site: saved.site ?? {}, entrance: saved.entrance ?? {} });
   if (result.success) return;
   const fields = zodFields(result.error);
-  throw badRequest(`The form is not finished yet: check ${Object.keys(fields).join(', ')}.`, fields);
+  const labels = fieldLabelsOf(fields, submittedApplicationSchema);
+  throw new AppError(
+    400,
+    'bad_request',
+    `The form is not finished yet. ${fieldsSentence(fields, labels)}`,
+    fields,
+    labels,
+  );
 }

@@ -4,6 +4,7 @@ import type { SessionUser } from '../../lib/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { jurisdictions, ruleProfileVersions } from '../../db/schema';
 import { conflict, notFound } from '../../lib/errors';
+import { recordAdminChange } from '../audit/audit.service';
 
 export type VersionRow = typeof ruleProfileVersions.$inferSelect;
 export type JurisdictionRow = typeof jurisdictions.$inferSelect;
@@ -156,6 +157,15 @@ export async function publishVersion(db: Db, actor: SessionUser, id: string) {
       .where(eq(ruleProfileVersions.id, id))
       .returning();
     await tx.update(jurisdictions).set({ currentVersionId: id }).where(eq(jurisdictions.id, row.jurisdictionId));
+    const [place] = await tx
+      .select({ name: jurisdictions.name })
+      .from(jurisdictions)
+      .where(eq(jurisdictions.id, row.jurisdictionId));
+    await recordAdminChange(tx, actor, {
+      kind: 'version-published',
+      subjectId: id,
+      summary: `Published version ${row.version} of the ${place?.name ?? 'road authority'} rule profile${row.changeNote ? `: ${row.changeNote}` : ''}.`,
+    });
     return saved;
   });
 }

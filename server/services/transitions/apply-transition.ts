@@ -1,6 +1,6 @@
 import { and, eq } from 'drizzle-orm';
 import { statusText } from '@shared/workflow/statuses';
-import { findTransition, type Transition, type TransitionAction } from '@shared/workflow/transitions';
+import { actionLabel, findTransition, type Transition, type TransitionAction } from '@shared/workflow/transitions';
 import type { TransitionBody, TransitionBodyOf } from '@shared/workflow/transition-inputs';
 import type { SessionUser } from '../../lib/session-user';
 import type { AppContext } from '../../config/context';
@@ -32,7 +32,7 @@ export async function applyTransition(
     const transition = findTransition(row.status, body.action);
     if (!transition) {
       throw conflict(
-        `This request is "${statusText[row.status].label}" (${row.status}); "${body.action}" is not possible from there.`,
+        `This request is "${statusText[row.status].label}"; "${actionLabel(body.action)}" is not possible from there.`,
       );
     }
     if (!transition.roles.includes(actor.role)) throw forbidden(`Your role cannot "${transition.label}".`);

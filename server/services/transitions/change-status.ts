@@ -1,5 +1,5 @@
 import { statusText, type RequestStatus } from '@shared/workflow/statuses';
-import { allowedTransitions } from '@shared/workflow/transitions';
+import { actionLabel, allowedTransitions } from '@shared/workflow/transitions';
 import type { TransitionBody } from '@shared/workflow/transition-inputs';
 import type { SessionUser } from '../../lib/session-user';
 import { AppError, conflict } from '../../lib/errors';
@@ -23,7 +23,7 @@ export async function changeStatus(
     const current = await loadVisibleRequest(ctx.db, actor, requestId);
     if (!allowedTransitions(current.status, actor.role).some((t) => t.action === body.action)) {
       throw conflict(
-        `This request is "${statusText[current.status].label}" (${current.status}); "${body.action}" is not possible from there for you.`,
+        `This request is "${statusText[current.status].label}"; "${actionLabel(body.action)}" is not possible from there for you.`,
       );
     }
     return await applyTransition(ctx, actor, requestId, body);
@@ -40,6 +40,6 @@ export async function changeStatus(
 async function withCurrentStatus(error: AppError, load: () => Promise<RequestStatus>) {
   const status = await load().catch(() => null);
   if (!status) return error;
-  if (error.message.includes(`(${status})`)) return error;
-  return conflict(`${error.message} It is now "${statusText[status].label}" (${status}).`);
+  if (error.message.includes(`"${statusText[status].label}"`)) return error;
+  return conflict(`${error.message} It is now "${statusText[status].label}".`);
 }

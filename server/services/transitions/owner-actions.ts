@@ -2,7 +2,7 @@ import { messages } from '../../db/schema';
 import { assertReadyToSubmit } from '../requests/submission';
 import type { ActionDef } from './action-def';
 
-/** The property owner's own moves: send, answer the office's questions, withdraw. */
+/** The homeowner's own moves: send, answer the office's questions, withdraw. */
 export const submit: ActionDef<'submit'> = {
   emails: { to: ['applicant', 'office'], ownerReceipt: true },
   run: async ({ row, now }) => {

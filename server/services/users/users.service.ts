@@ -1,6 +1,7 @@
 import { and, asc, eq, ilike, or, sql } from 'drizzle-orm';
 import { roleLabels, type Role } from '@shared/workflow/statuses';
-import type { DbOrTx } from '../../db/client';
+import type { Db, DbOrTx } from '../../db/client';
+import { recordAdminChange } from '../audit/audit.service';
 import { users } from '../../db/schema';
 import { conflict, forbidden, notFound } from '../../lib/errors';
 import type { SessionUser } from '../../lib/session-user';
@@ -13,6 +14,16 @@ export interface ProviderProfile {
   name: string;
 }
 
+/** A person whose sign-in an administrator turned off; the sign-in page tells them so in these words. */
+export class SignInTurnedOffError extends Error {
+  constructor(readonly companyName?: string) {
+    super(
+      `Your sign-in has been turned off by ${companyName ?? 'the company'}. If you think this is a mistake, ask the office to turn it back on.`,
+    );
+  }
+}
+const signInTurnedOff = () => new SignInTurnedOffError();
+
 /** Sign-in: a known subject or e-mail keeps its role; an unknown e-mail becomes an applicant. */
 export async function signInWithProfile(db: DbOrTx, profile: ProviderProfile): Promise<SessionUser> {
   const email = profile.email.trim().toLowerCase();
@@ -21,7 +32,7 @@ export async function signInWithProfile(db: DbOrTx, profile: ProviderProfile): P
     .from(users)
     .where(or(eq(users.googleSub, profile.sub), sql`lower(${users.email}) = ${email}`))
     .limit(1);
-  if (existing?.disabled) throw forbidden('This account has been turned off. Please contact the office.');
+  if (existing?.disabled) throw signInTurnedOff();
   if (existing) {
     const [updated] = await db
       .update(users)
@@ -69,29 +80,59 @@ export async function listUsers(db: DbOrTx, opts: { search?: string; role?: Role
     .limit(500);
 }
 
+/**
+ * An administrator changes a person's name, role or sign-in; each change is written to the administrators' log in
+ * the same transaction, by the names as they were.
+ */
 export async function setUserAccess(
-  db: DbOrTx,
+  db: Db,
   actor: SessionUser,
   id: string,
-  change: { role?: Role; disabled?: boolean },
+  change: { name?: string; role?: Role; disabled?: boolean },
 ) {
   if (id === actor.id && ((change.role !== undefined && change.role !== 'admin') || change.disabled)) {
-    throw forbidden('You cannot remove your own admin access.');
+    throw forbidden('You cannot remove your own administrator access.');
   }
-  const [updated] = await db
-    .update(users)
-    .set(change)
-    .where(eq(users.id, id))
-    .returning({ ...publicColumns, disabled: users.disabled });
-  if (!updated) throw notFound('User');
-  return updated;
+  return db.transaction(async (tx) => {
+    const [before] = await tx.select().from(users).where(eq(users.id, id)).for('update');
+    if (!before) throw notFound('Person');
+    const [updated] = await tx
+      .update(users)
+      .set(change)
+      .where(eq(users.id, id))
+      .returning({ ...publicColumns, disabled: users.disabled });
+    const who = before.name || before.email;
+    if (change.name !== undefined && change.name !== before.name)
+      await recordAdminChange(tx, actor, {
+        kind: 'name-changed',
+        subjectId: id,
+        summary: `Renamed ${who} (${before.email}) to ${change.name}.`,
+        detail: { from: before.name, to: change.name },
+      });
+    if (change.role !== undefined && change.role !== before.role)
+      await recordAdminChange(tx, actor, {
+        kind: 'role-changed',
+        subjectId: id,
+        summary: `Changed ${who}'s role from ${roleLabels[before.role]} to ${roleLabels[change.role]}.`,
+        detail: { from: before.role, to: change.role },
+      });
+    if (change.disabled !== undefined && change.disabled !== before.disabled)
+      await recordAdminChange(tx, actor, {
+        kind: change.disabled ? 'sign-in-turned-off' : 'sign-in-turned-on',
+        subjectId: id,
+        summary: change.disabled
+          ? `Turned off ${who}'s sign-in (${before.email}).`
+          : `Turned ${who}'s sign-in back on (${before.email}).`,
+      });
+    return updated;
+  });
 }
 
 /**
  * Admins can add people before their first sign-in, so they arrive with the right role. An e-mail already in use
  * is refused: the person behind it is changed only from the list, where the admin sees who they are changing.
  */
-export async function inviteUser(db: DbOrTx, input: { email: string; name: string; role: Role }) {
+export async function inviteUser(db: Db, actor: SessionUser, input: { email: string; name: string; role: Role }) {
   const email = input.email.trim().toLowerCase();
   const [existing] = await db
     .select({ name: users.name, role: users.role })
@@ -103,9 +144,16 @@ export async function inviteUser(db: DbOrTx, input: { email: string; name: strin
       email: `already belongs to ${who}`,
     });
   }
-  const [row] = await db
-    .insert(users)
-    .values({ ...input, email })
-    .returning({ ...publicColumns, disabled: users.disabled });
-  return row;
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(users)
+      .values({ ...input, email })
+      .returning({ ...publicColumns, disabled: users.disabled });
+    await recordAdminChange(tx, actor, {
+      kind: 'person-added',
+      subjectId: row.id,
+      summary: `Added ${row.name} (${row.email}) as ${roleLabels[row.role]}.`,
+    });
+    return row;
+  });
 }

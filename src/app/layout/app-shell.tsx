@@ -24,6 +24,8 @@ const navByRole: Record<Role, { to: string; label: string }[]> = {
     { to: paths.office.ruleProfiles.getHref(), label: 'Rule profiles' },
     { to: paths.office.emails.getHref(), label: 'E-mail log' },
     { to: paths.office.users.getHref(), label: 'Users and roles' },
+    { to: paths.office.crewYard.getHref(), label: 'Crew yard' },
+    { to: paths.office.audit.getHref(), label: 'Changes log' },
   ],
 };
 

@@ -16,8 +16,8 @@ export function Component() {
     <div className="mx-auto max-w-md py-10">
       <Panel title="Sign in to Gradepass">
         <p className="mb-4 text-stone-700">
-          Use your Google account. If this is your first time, we create your account as a property owner; the office
-          gives staff and crew their access.
+          Use your Google account. If this is your first time, we create your account as a homeowner; the office gives
+          staff and crew their access.
         </p>
         {error && (
           <div className="mb-4">

@@ -24,17 +24,29 @@ export function Notice({
   );
 }
 
-export function ErrorNotice({ error }: { error: unknown }) {
+/**
+ * An error away from any one field. Fields the form shows beside themselves (`shownBeside`) are left out of the
+ * list; any other field is named by its label, never by its key.
+ */
+export function ErrorNotice({ error, shownBeside = [] }: { error: unknown; shownBeside?: readonly string[] }) {
   if (!error) return null;
-  const message = error instanceof Error ? error.message : 'Something went wrong.';
-  const fields = error instanceof ApiError ? Object.entries(error.fields) : [];
+  const api = error instanceof ApiError ? error : undefined;
+  const fields = api ? Object.entries(api.fields).filter(([field]) => !shownBeside.includes(field)) : [];
+  // A 400 of the shared kind already says every field in its sentence; that sentence is rewritten for those left.
+  const plainSentence = api?.code === 'invalid_input';
+  const allBeside = plainSentence && Object.keys(api.fields).length > 0 && fields.length === 0;
+  const message = allBeside
+    ? 'Please correct the fields marked below.'
+    : error instanceof Error
+      ? error.message
+      : 'Something went wrong.';
   return (
     <Notice tone="error" title={message}>
-      {fields.length > 0 && (
+      {plainSentence && fields.length > 1 && (
         <ul className="mt-1 list-disc pl-5">
           {fields.map(([field, text]) => (
             <li key={field}>
-              <span className="font-mono">{field}</span>: {text}
+              {api!.labelOf(field)}: {text}
             </li>
           ))}
         </ul>

@@ -27,8 +27,8 @@ export function Component() {
       </p>
       <FieldSheet id={id} />
       {holdsJob && (
-        <Panel title="Messages with the property owner and the office" className="no-print mt-6">
-          <MessageThread requestId={id} writeLabel="Write to the property owner and the office" />
+        <Panel title="Messages with the homeowner and the office" className="no-print mt-6">
+          <MessageThread requestId={id} writeLabel="Write to the homeowner and the office" />
         </Panel>
       )}
     </RequireRole>

@@ -38,7 +38,7 @@ function OfficeRequestPage({ id }: { id: string }) {
           cautions={cautions}
           sections={{
             application: () => <ApplicationSummary application={request.application} />,
-            photos: () => <PhotoGallery requestId={id} emptyText="The property owner has not added photos." />,
+            photos: () => <PhotoGallery requestId={id} emptyText="The homeowner has not added photos." />,
             messages: () => <MessageThread requestId={id} office />,
             history: () => <EventList requestId={id} office label="History" />,
           }}

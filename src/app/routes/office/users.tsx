@@ -8,7 +8,7 @@ export function Component() {
     <RequireRole roles={['admin']}>
       <PageHeader
         title="Users and roles"
-        lead="Everyone who signs in starts as a property owner. Give office staff, crew leads and admins their access here."
+        lead="Everyone who signs in starts as a homeowner. Give office staff, crew leads and administrators their access here."
       />
       <div className="space-y-6">
         <Panel title="Add a person">

@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useEmail } from '../api/get-email';
@@ -24,7 +25,7 @@ export function EmailDetailPanel({ id }: { id: string }) {
       {e.status === 'failed' && (
         <p className="text-stone-700">
           Tried {e.attempts} {e.attempts === 1 ? 'time' : 'times'} so far; the next try is due{' '}
-          {new Date(e.nextAttemptAt).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'medium' })}.
+          {formatMoment(e.nextAttemptAt)}.
         </p>
       )}
       {retry.error && <ErrorNotice error={retry.error} />}

@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 import { Fragment, useState, type FormEvent } from 'react';
 import { Link } from 'react-router';
 import { Button } from '@/components/ui/button';
@@ -9,8 +10,7 @@ import { EmailStatusBadge, emailStatusText } from './email-status';
 import { ResendDead } from './resend-dead';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 
-const when = (iso: string | null) =>
-  iso ? new Date(iso).toLocaleString(undefined, { dateStyle: 'short', timeStyle: 'short' }) : '—';
+const when = (iso: string | null) => formatMoment(iso);
 
 /** Everything Gradepass has sent or tried to send, newest first, filterable by status. */
 export function EmailLog() {

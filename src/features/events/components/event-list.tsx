@@ -1,10 +1,11 @@
+import { formatMoment } from '@shared/format/dates';
 import type { EventView } from '@shared/contracts/events';
 import { eventKindLabel } from '@shared/workflow/event-kinds';
 import { roleLabels, statusText } from '@shared/workflow/statuses';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useEvents } from '../api/get-events';
 
-const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const stamp = (iso: string) => formatMoment(iso);
 
 /** The office reads every move as from → to; the owner reads where the request went. */
 function describe(event: EventView, office: boolean) {

@@ -1,7 +1,7 @@
 import { Loading, Notice } from '@/components/ui/notice';
 import { useGradeChecks } from '../api/get-grade-checks';
 
-/** For the property owner: the latest check the office attached, in plain words. */
+/** For the homeowner: the latest check the office attached, in plain words. */
 export function CheckSummary({ requestId }: { requestId: string }) {
   const { data, isPending, error } = useGradeChecks(requestId);
   if (isPending) return <Loading label="Loading the grade check…" />;

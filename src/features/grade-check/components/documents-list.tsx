@@ -1,8 +1,9 @@
+import { formatDay } from '@shared/format/dates';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useDocuments } from '../api/get-documents';
 import { useShareDocument } from '../api/share-document';
 
-/** A request's documents with short-lived download links; the office can share each with the property owner. */
+/** A request's documents with short-lived download links; the office can share each with the homeowner. */
 export function DocumentsList({ requestId, canShare }: { requestId: string; canShare: boolean }) {
   const { data, isPending, error } = useDocuments(requestId);
   const share = useShareDocument(requestId);
@@ -18,7 +19,7 @@ export function DocumentsList({ requestId, canShare }: { requestId: string; canS
               {doc.title}
             </a>
             <span className="ml-2 text-xs text-stone-500">
-              PDF · {Math.max(1, Math.round(doc.sizeBytes / 1024))} KB · {new Date(doc.createdAt).toLocaleDateString()}
+              PDF · {Math.max(1, Math.round(doc.sizeBytes / 1024))} KB · {formatDay(doc.createdAt)}
             </span>
           </div>
           {canShare && (
@@ -29,7 +30,7 @@ export function DocumentsList({ requestId, canShare }: { requestId: string; canS
                 disabled={share.isPending}
                 onChange={(e) => share.mutate({ documentId: doc.id, sharedWithApplicant: e.target.checked })}
               />
-              Share with the property owner
+              Share with the homeowner
             </label>
           )}
         </li>

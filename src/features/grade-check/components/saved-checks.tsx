@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 import { useState } from 'react';
 import { gradeCheckOpenStatuses } from '@shared/workflow/statuses';
 import { Button } from '@/components/ui/button';
@@ -27,7 +28,7 @@ export function SavedChecks({ request, checks }: { request: GradeCheckRequestHea
     <div className="space-y-3">
       <label className="flex items-center gap-2 text-sm">
         <input type="checkbox" checked={share} onChange={(e) => setShare(e.target.checked)} />
-        Share the report with the property owner when attaching
+        Share the report with the homeowner when attaching
       </label>
       <ul className="divide-y divide-stone-100" aria-label="Saved checks">
         {checks.map((c) => (
@@ -35,7 +36,7 @@ export function SavedChecks({ request, checks }: { request: GradeCheckRequestHea
             <div className="max-w-2xl">
               <p className="font-semibold">
                 Check {c.number} · {c.passed ? 'meets the rules' : 'does not meet the rules'} ·{' '}
-                {new Date(c.createdAt).toLocaleString()}
+                {formatMoment(c.createdAt)}
               </p>
               <p className="text-sm text-stone-600">{c.summary}</p>
             </div>
@@ -66,8 +67,8 @@ export function SavedChecks({ request, checks }: { request: GradeCheckRequestHea
         <Notice tone="warn" title={`Check ${confirming.number} does not meet the rules`}>
           <p>
             Attached, it goes on the request as the office’s finding
-            {share ? ', and the property owner reads it with its report' : ''}. Attach it only if that is what you mean
-            to tell them.
+            {share ? ', and the homeowner reads it with its report' : ''}. Attach it only if that is what you mean to
+            tell them.
           </p>
           <div className="mt-2 flex flex-wrap gap-2">
             <Button variant="danger" disabled={attach.isPending} onClick={() => attachNow(confirming, true)}>
@@ -93,7 +94,7 @@ export function SavedChecks({ request, checks }: { request: GradeCheckRequestHea
         </div>
       )}
       {request.status === 'checked' && (
-        <Notice title="Grade check done">The property owner has been told the result.</Notice>
+        <Notice title="Grade check done">The homeowner has been told the result.</Notice>
       )}
       <ErrorNotice error={markChecked.error} />
     </div>

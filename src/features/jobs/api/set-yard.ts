@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { YardInput } from '@shared/crew/crew-inputs';
 import type { Yard } from '@shared/crew/crew-views';
 import { api } from '@/lib/api-client';
+import { auditKeys } from '@/lib/query-keys';
 import { getBoardQueryOptions } from './get-board';
 import { getYardQueryOptions } from './get-yard';
 
@@ -15,6 +16,7 @@ export function useSetYard() {
       await queryClient.invalidateQueries({ queryKey: getYardQueryOptions().queryKey });
       // Distances on the board are measured from the yard: every sort of it is stale now.
       await queryClient.invalidateQueries({ queryKey: getBoardQueryOptions().queryKey.slice(0, 2) });
+      await queryClient.invalidateQueries({ queryKey: auditKeys.all });
     },
   });
 }

@@ -1,3 +1,4 @@
+import { formatDay, todayIso } from '@shared/format/dates';
 import { formatStation } from '@shared/engine';
 
 /** Numbers the way a crew reads them off a sheet: fixed places, a real minus sign, units spelled short. */
@@ -6,17 +7,8 @@ export const pct = (v: number, places = 2) => `${v < 0 ? '−' : ''}${Math.abs(v
 export const cuYd = (v: number) => `${Math.round(v)} cu yd`;
 export const station = (v: number) => formatStation(v);
 
-export function day(iso: string | null | undefined): string {
-  if (!iso) return '—';
-  const d = iso.length === 10 ? new Date(`${iso}T12:00:00Z`) : new Date(iso);
-  return d.toLocaleDateString('en-US', {
-    weekday: 'short',
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: iso.length === 10 ? 'UTC' : undefined,
-  });
-}
+/** A work day or a permit date, with its weekday: "Wed, Dec 2, 2026" (the shared formatter). */
+export const day = (iso: string | null | undefined): string => formatDay(iso, { weekday: true });
 
 export function cutFillWords(cutFillFt: number): string {
   if (Math.abs(cutFillFt) < 0.005) return 'on grade';
@@ -24,7 +16,4 @@ export function cutFillWords(cutFillFt: number): string {
 }
 
 /** Today as YYYY-MM-DD in the person's own time zone, for date inputs. */
-export function todayLocal(): string {
-  const now = new Date();
-  return new Date(now.getTime() - now.getTimezoneOffset() * 60_000).toISOString().slice(0, 10);
-}
+export const todayLocal = (): string => todayIso();

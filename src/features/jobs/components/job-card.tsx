@@ -1,3 +1,4 @@
+import { countOf } from '@shared/format/counts';
 import { Link } from 'react-router';
 import type { BoardJob } from '@shared/crew/crew-views';
 import { Button } from '@/components/ui/button';
@@ -42,7 +43,7 @@ export function JobCard({ job, canTake, taking, onTake }: Props) {
           <dd>
             {job.distanceMiles === null
               ? 'Not known (needs the yard and the site position)'
-              : `${job.distanceMiles} miles in a straight line`}
+              : `${countOf(job.distanceMiles, 'mile')} in a straight line`}
           </dd>
         </div>
         <div>

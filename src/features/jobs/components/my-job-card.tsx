@@ -1,7 +1,7 @@
 import { Link } from 'react-router';
 import type { MyJob } from '@shared/crew/crew-views';
 import { allowedTransitions, type TransitionAction } from '@shared/workflow/transitions';
-import { Button } from '@/components/ui/button';
+import { ConfirmButton } from '@/components/ui/confirm-button';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { paths } from '@/config/paths';
@@ -59,13 +59,15 @@ export function MyJobCard({ job }: { job: MyJob }) {
           Field sheet
         </Link>
         {can('start-work') && (
-          <Button
-            onClick={() => start.mutate({ id: job.requestId, expectedVersion: job.version })}
+          <ConfirmButton
+            question={`Start work at ${job.siteAddress}? The homeowner and the office are told the crew is building; this cannot be undone from here.`}
+            confirmLabel="Yes, start work"
+            onConfirm={() => start.mutate({ id: job.requestId, expectedVersion: job.version })}
             disabled={start.isPending}
             className="min-h-11"
           >
             Start work
-          </Button>
+          </ConfirmButton>
         )}
         {can('mark-built') && (
           <Link to={paths.crew.asBuilt.getHref(job.requestId)} className={linkButton}>

@@ -1,4 +1,5 @@
 import type { AsBuiltReadingInput } from '@shared/crew/crew-inputs';
+import { countOf } from '@shared/format/counts';
 import type { AsBuiltSetView } from '@shared/crew/crew-views';
 import type { AsBuiltReadingResult } from '@shared/engine';
 import { day, ft, pct, station } from './format';
@@ -74,8 +75,8 @@ export function SavedSets({ sets, basis }: { sets: AsBuiltSetView[]; basis: Chec
       {sets.map((set, n) => (
         <li key={set.id} className="rounded-lg border-2 border-stone-300 bg-white p-3">
           <p className="flex flex-wrap items-center gap-2 font-semibold">
-            <StatusWords status={set.status} /> {n === 0 ? 'Latest set' : 'Earlier set'} · {set.readings.length}{' '}
-            readings · {set.crewName} · {day(set.createdAt)}
+            <StatusWords status={set.status} /> {n === 0 ? 'Latest set' : 'Earlier set'} ·{' '}
+            {countOf(set.readings.length, 'reading')} · {set.crewName} · {day(set.createdAt)}
           </p>
           {set.note && <p className="mt-1">Note: {set.note}</p>}
           <ul className="mt-2 space-y-0.5 text-base">

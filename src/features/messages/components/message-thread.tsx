@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 import { useId, useState, type FormEvent } from 'react';
 import type { MessageView, MessageVisibility } from '@shared/contracts/messages';
 import { roleLabels } from '@shared/workflow/statuses';
@@ -8,7 +9,7 @@ import { ApiError } from '@/lib/api-client';
 import { useMessages } from '../api/get-messages';
 import { usePostMessage } from '../api/post-message';
 
-const stamp = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+const stamp = (iso: string) => formatMoment(iso);
 
 interface MessageThreadProps {
   requestId: string;
@@ -19,7 +20,7 @@ interface MessageThreadProps {
 }
 
 /**
- * The conversation on a request: the property owner with the office, and the crew lead once a crew holds the job.
+ * The conversation on a request: the homeowner with the office, and the crew lead once a crew holds the job.
  * Only the office's readers ever receive its internal notes.
  */
 export function MessageThread({
@@ -86,12 +87,18 @@ function WriteForm({ requestId, office, writeLabel }: { requestId: string; offic
   const inputId = useId();
   const post = usePostMessage(requestId);
   const [text, setText] = useState('');
-  // The office decides each time; its default keeps a slip of the hand from reaching the property owner.
+  // The office decides each time; its default keeps a slip of the hand from reaching the homeowner.
   const [visibility, setVisibility] = useState<MessageVisibility>('internal');
   const fieldError = post.error instanceof ApiError ? post.error.fields.body : undefined;
   const send = (event: FormEvent) => {
     event.preventDefault();
-    post.mutate(office ? { body: text, visibility } : { body: text }, { onSuccess: () => setText('') });
+    // After each send the switch goes back to internal, so the next note cannot reach the homeowner by a slip.
+    post.mutate(office ? { body: text, visibility } : { body: text }, {
+      onSuccess: () => {
+        setText('');
+        setVisibility('internal');
+      },
+    });
   };
   const sendLabel = !office
     ? post.isPending
@@ -99,7 +106,7 @@ function WriteForm({ requestId, office, writeLabel }: { requestId: string; offic
       : 'Send message'
     : visibility === 'internal'
       ? 'Save internal note'
-      : 'Send to the owner';
+      : 'Send to the homeowner';
   return (
     <form onSubmit={send} noValidate className="space-y-2" aria-label="Write a message">
       <label htmlFor={inputId} className="block text-sm font-semibold text-stone-800">
@@ -141,13 +148,13 @@ function WriteForm({ requestId, office, writeLabel }: { requestId: string; offic
                 onChange={() => setVisibility('shared')}
                 className="accent-pine-700"
               />
-              Shared with the property owner
+              Shared with the homeowner
             </label>
           </fieldset>
           <p className="text-xs text-stone-600">
             {visibility === 'internal'
               ? 'Only the office sees internal notes; nobody is e-mailed.'
-              : 'The property owner, and the crew lead once a crew holds the job, get an e-mail with this message.'}
+              : 'The homeowner, and the crew lead once a crew holds the job, get an e-mail with this message.'}
           </p>
         </>
       )}

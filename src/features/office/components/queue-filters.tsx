@@ -12,7 +12,7 @@ const sortChoices: [string, string][] = [
   ['waiting:asc', 'Longest in status first'],
   ['waiting:desc', 'Newest in status first'],
   ['reference:asc', 'Reference'],
-  ['applicant:asc', 'Applicant A–Z'],
+  ['applicant:asc', 'Homeowner A–Z'],
   ['road:asc', 'Road A–Z'],
   ['created:desc', 'Newest requests first'],
 ];

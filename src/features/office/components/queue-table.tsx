@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 import {
   createColumnHelper,
   flexRender,
@@ -47,7 +48,7 @@ export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
           </Link>
         ),
       }),
-      column.accessor('applicantName', { id: 'applicant', header: 'Applicant', cell: (c) => c.getValue() || '—' }),
+      column.accessor('applicantName', { id: 'applicant', header: 'Homeowner', cell: (c) => c.getValue() || '—' }),
       column.accessor('roadName', {
         id: 'road',
         header: 'Road and authority',
@@ -70,7 +71,7 @@ export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
         id: 'waiting',
         header: 'Time in status',
         cell: (c) => (
-          <time dateTime={c.getValue()} title={new Date(c.getValue()).toLocaleString()}>
+          <time dateTime={c.getValue()} title={formatMoment(c.getValue())}>
             {timeInStatus(c.getValue())}
           </time>
         ),

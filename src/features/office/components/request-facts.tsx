@@ -14,7 +14,7 @@ export function RequestFacts({ request, meId }: { request: OfficeRequest; meId: 
         <span className="text-stone-500">for {timeInStatus(request.statusChangedAt)}</span>
       </span>,
     ],
-    ['Applicant', request.applicantName || '—'],
+    ['Homeowner', request.applicantName || '—'],
     ['Site', request.siteAddress || '—'],
     ['Road', request.roadName || '—'],
     ['Sent to the office', formatWhen(request.submittedAt)],

@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 /** "3 d 4 h", "5 h 10 min", "12 min": how long a request has sat in its status, at a glance. */
 export function timeInStatus(since: string, now = Date.now()): string {
   const minutes = Math.max(0, Math.floor((now - new Date(since).getTime()) / 60_000));
@@ -10,5 +11,5 @@ export function timeInStatus(since: string, now = Date.now()): string {
 
 export function formatWhen(iso: string | null): string {
   if (!iso) return '—';
-  return new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+  return formatMoment(iso);
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { AddPersonInput, PersonView, UpdatePersonInput } from '@shared/contracts/people';
 import { api } from '@/lib/api-client';
-import { peopleKeys } from '@/lib/query-keys';
+import { auditKeys, peopleKeys } from '@/lib/query-keys';
 
 export const updateUser = ({ id, ...change }: UpdatePersonInput & { id: string }) =>
   api.patch<{ user: PersonView }>(`/api/users/${id}`, change);
@@ -12,7 +12,11 @@ export function useUpdateUser() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: updateUser,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: peopleKeys.all }),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: peopleKeys.all }),
+        queryClient.invalidateQueries({ queryKey: auditKeys.all }),
+      ]),
   });
 }
 
@@ -20,6 +24,10 @@ export function useInviteUser() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: inviteUser,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: peopleKeys.all }),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: peopleKeys.all }),
+        queryClient.invalidateQueries({ queryKey: auditKeys.all }),
+      ]),
   });
 }

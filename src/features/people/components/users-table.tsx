@@ -1,3 +1,4 @@
+import { formatMoment } from '@shared/format/dates';
 import { useState } from 'react';
 import { roleLabels, roles, type Role } from '@shared/workflow/statuses';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
@@ -5,6 +6,7 @@ import { Field, SelectInput, TextInput } from '@/components/ui/field';
 import { useUsers } from '../api/get-users';
 import { useUpdateUser } from '../api/update-user';
 import { ScrollRegion } from '@/components/ui/scroll-region';
+import { PersonName } from './person-name';
 
 export function UsersTable() {
   const [search, setSearch] = useState('');
@@ -48,7 +50,9 @@ export function UsersTable() {
             <tbody>
               {users.data?.users.map((user) => (
                 <tr key={user.id} className="border-b border-stone-100">
-                  <td className="py-2 pr-3 font-semibold">{user.name}</td>
+                  <td className="py-2 pr-3">
+                    <PersonName id={user.id} name={user.name} />
+                  </td>
                   <td className="pr-3">{user.email}</td>
                   <td className="pr-3">
                     <label className="sr-only" htmlFor={`role-${user.id}`}>
@@ -77,7 +81,7 @@ export function UsersTable() {
                       {user.disabled ? 'Turned off' : 'Can sign in'}
                     </label>
                   </td>
-                  <td>{user.lastSignInAt ? new Date(user.lastSignInAt).toLocaleString() : 'Never'}</td>
+                  <td>{formatMoment(user.lastSignInAt, { missing: 'Never' })}</td>
                 </tr>
               ))}
             </tbody>

@@ -4,12 +4,13 @@ import '@uppy/core/css/style.min.css';
 import '@uppy/dashboard/css/style.min.css';
 import Dashboard from '@uppy/react/dashboard';
 import { useEffect, useRef, useState } from 'react';
-import { maxPhotoBytes, photoContentTypes } from '@shared/requests/photo-rules';
+import { maxPhotoBytes } from '@shared/requests/photo-rules';
+import { photoLeadingBytes, photoRefusal, photoTypeOf } from '@shared/requests/photo-signature';
 import { confirmUpload } from '../api/confirm-upload';
 import { requestUpload } from '../api/request-upload';
 import { readPosition, withoutMetadata } from './photo-metadata';
 
-type PhotoMeta = Meta & { photoId?: string; gpsLat?: number; gpsLng?: number };
+type PhotoMeta = Meta & { photoId?: string; gpsLat?: number; gpsLng?: number; photoType?: string };
 
 export interface UploaderProps {
   requestId: string;
@@ -20,18 +21,70 @@ export interface UploaderProps {
   onProblem: (message: string) => void;
 }
 
-// Some browsers leave HEIC files without a type; the extension says what they are.
-const typeOf = (file: UppyFile<PhotoMeta, Record<string, never>>) =>
-  file.type || (/\.heic$/i.test(file.name ?? '') ? 'image/heic' : 'application/octet-stream');
+// The type read from the file's first bytes when it was added; never the name's.
+const typeOf = (file: UppyFile<PhotoMeta, Record<string, never>>) => file.meta.photoType ?? 'application/octet-stream';
+
+/** The photo box's words, in place of the upload widget's own. */
+const dashboardWords = {
+  strings: {
+    dropPasteFiles: 'Drop photos here or %{browseFiles}',
+    browseFiles: 'choose them from this device',
+    dropHint: 'Drop the photos here',
+    dashboardTitle: 'Add site photos',
+    dashboardWindowTitle: 'Add site photos',
+    myDevice: 'This device',
+    addMore: 'Add more photos',
+    addMoreFiles: 'Add more photos',
+    removeFile: 'Take this photo out',
+    uploadComplete: 'Saved',
+    uploading: 'Sending photos',
+    complete: 'All photos saved',
+    uploadFailed: 'A photo did not arrive',
+    retry: 'Try again',
+    retryUpload: 'Try sending it again',
+    cancel: 'Stop',
+    cancelUpload: 'Stop sending',
+    done: 'Done',
+    xFilesSelected: { 0: '%{smart_count} photo chosen', 1: '%{smart_count} photos chosen' },
+    uploadingXFiles: { 0: 'Sending %{smart_count} photo', 1: 'Sending %{smart_count} photos' },
+    processingXFiles: { 0: 'Preparing %{smart_count} photo', 1: 'Preparing %{smart_count} photos' },
+    showErrorDetails: 'Why?',
+  },
+};
 
 function buildUppy(props: { current: UploaderProps }) {
+  // Size and type are judged by the file's bytes when it is added (photoRefusal), in our words and once; only the
+  // count is left to the widget. Nothing is sent until a file has passed.
   const uppy = new Uppy<PhotoMeta, Record<string, never>>({
-    autoProceed: true,
-    restrictions: {
-      maxFileSize: maxPhotoBytes,
-      allowedFileTypes: [...photoContentTypes, '.heic', '.jpg', '.jpeg', '.png', '.webp'],
-      maxNumberOfFiles: props.current.room,
+    autoProceed: false,
+    restrictions: { maxNumberOfFiles: props.current.room },
+    locale: {
+      strings: {
+        youCanOnlyUploadX: {
+          0: 'This request can take %{smart_count} more photo.',
+          1: 'This request can take %{smart_count} more photos.',
+        },
+      },
+      pluralize: (n: number) => (n === 1 ? 0 : 1),
     },
+  });
+  uppy.on('file-added', (file) => {
+    const data = file.data as Blob;
+    void data
+      .slice(0, photoLeadingBytes)
+      .arrayBuffer()
+      .then((buffer) => {
+        const leading = new Uint8Array(buffer);
+        const refusal = photoRefusal(file.name ?? 'This file', data.size, leading, maxPhotoBytes);
+        if (!uppy.getFile(file.id)) return;
+        if (refusal) {
+          uppy.removeFile(file.id);
+          props.current.onProblem(refusal);
+          return;
+        }
+        uppy.setFileMeta(file.id, { photoType: photoTypeOf(leading) ?? undefined });
+        void uppy.upload();
+      });
   });
   uppy.use(AwsS3, {
     shouldUseMultipart: false,
@@ -97,12 +150,15 @@ export default function PhotoUploader(props: UploaderProps) {
   }, [uppy, props.room]);
   if (!uppy) return null;
   return (
-    <Dashboard
-      uppy={uppy}
-      height={300}
-      width="100%"
-      proudlyDisplayPoweredByUppy={false}
-      note="JPEG, PNG, WebP or HEIC, up to 15 MB each."
-    />
+    <div className="photo-box">
+      <Dashboard
+        uppy={uppy}
+        height={300}
+        width="100%"
+        proudlyDisplayPoweredByUppy={false}
+        note="JPEG, PNG, WebP or HEIC photos, up to 15 MB each. Each file is checked by its contents, not its name."
+        locale={dashboardWords}
+      />
+    </div>
   );
 }

@@ -1,10 +1,10 @@
+import { formatDay } from '@shared/format/dates';
 import { Link } from 'react-router';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useMyRequests } from '../api/get-my-requests';
 
-const when = (iso: string) =>
-  new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+const when = (iso: string) => formatDay(iso);
 
 /** The applicant's requests: where each stands, when it last moved, and what (if anything) is theirs to do. */
 export function MyRequestsTable({ hrefFor }: { hrefFor: (id: string, status: string) => string }) {

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ProfileVersion } from '@shared/contracts/rule-profiles';
 import { api } from '@/lib/api-client';
-import { ruleProfileKeys } from '@/lib/query-keys';
+import { auditKeys, ruleProfileKeys } from '@/lib/query-keys';
 
 export const publishVersion = (versionId: string) =>
   api.post<{ version: ProfileVersion }>(`/api/rule-profile-versions/${versionId}/publish`);
@@ -15,6 +15,7 @@ export function usePublishVersion(jurisdictionId: string) {
         queryClient.invalidateQueries({ queryKey: ruleProfileKeys.one(jurisdictionId) }),
         queryClient.invalidateQueries({ queryKey: ruleProfileKeys.version(versionId) }),
         queryClient.invalidateQueries({ queryKey: ruleProfileKeys.list() }),
+        queryClient.invalidateQueries({ queryKey: auditKeys.all }),
       ]),
   });
 }

@@ -1,3 +1,4 @@
+import { formatDay } from '@shared/format/dates';
 import { Link } from 'react-router';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { paths } from '@/config/paths';
@@ -32,7 +33,7 @@ export function JurisdictionsList() {
               <td>{j.authority}</td>
               <td>
                 {current
-                  ? `Version ${current.version}, published ${new Date(current.publishedAt ?? current.createdAt).toLocaleDateString()}`
+                  ? `Version ${current.version}, published ${formatDay(current.publishedAt ?? current.createdAt)}`
                   : 'None published yet'}
               </td>
               <td>{draft ? `Version ${draft.version}` : ''}</td>

@@ -1,12 +1,13 @@
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { ConfirmButton } from '@/components/ui/confirm-button';
 import { Field, SelectInput, TextInput } from '@/components/ui/field';
 import { ErrorNotice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import type { ProfileVersion } from '../api/get-jurisdiction';
 import { usePublishVersion } from '../api/publish-version';
 import { useUpdateDraft } from '../api/update-draft';
-import { profileGroups, sourceKeyOf } from '../lib/profile-fields';
+import { profileGroups, sourceKeyOf } from '@shared/rule-profiles/profile-fields';
 import { fromFormValues, toFormValues } from '../lib/profile-values';
 
 /** A draft version's values, each with its source note; saving keeps it a draft, publishing freezes it. */
@@ -119,17 +120,19 @@ export function ProfileForm({ version }: { version: ProfileVersion }) {
         <Button type="submit" disabled={update.isPending}>
           {update.isPending ? 'Saving…' : 'Save draft'}
         </Button>
-        <Button
+        <ConfirmButton
           variant="secondary"
           disabled={publish.isPending || update.isPending}
-          onClick={() =>
+          question={`Publish version ${version.version}? It is frozen once published, and every new grade check uses it.`}
+          confirmLabel={`Yes, publish version ${version.version}`}
+          onConfirm={() =>
             void (dirty ? save() : Promise.resolve(true))
               .then((ok) => ok && publish.mutate(version.id))
               .catch(() => undefined)
           }
         >
           Publish version {version.version}
-        </Button>
+        </ConfirmButton>
         {update.isSuccess && !dirty && (
           <span role="status" className="self-center text-sm text-pine-800">
             Draft saved.

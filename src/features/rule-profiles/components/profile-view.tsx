@@ -1,7 +1,5 @@
 import type { RuleProfile } from '@shared/engine';
-import { profileGroups, sourceKeyOf, valueAt } from '../lib/profile-fields';
-
-const shown = (v: unknown) => (v === undefined || v === null || v === '' ? 'not set' : String(v));
+import { profileGroups, profileValueText, sourceKeyOf } from '@shared/rule-profiles/profile-fields';
 
 /** A published version, read only: each value with its source note. */
 export function ProfileView({ profile }: { profile: RuleProfile }) {
@@ -14,10 +12,7 @@ export function ProfileView({ profile }: { profile: RuleProfile }) {
             {group.fields.map((f) => (
               <div key={f.path} className="grid gap-1 py-1 sm:grid-cols-[2fr_1fr_3fr]">
                 <dt className="text-stone-700">{f.label}</dt>
-                <dd className="font-mono">
-                  {shown(valueAt(profile, f.path))}
-                  {f.unit && valueAt(profile, f.path) !== undefined ? ` ${f.unit}` : ''}
-                </dd>
+                <dd className="font-mono">{profileValueText(profile, f)}</dd>
                 <dd className="text-stone-500">{profile.sources[sourceKeyOf(f)] ?? ''}</dd>
               </div>
             ))}

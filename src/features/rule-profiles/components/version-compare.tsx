@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Field, SelectInput } from '@/components/ui/field';
 import type { ProfileVersion } from '../api/get-jurisdiction';
-import { allFields, sourceKeyOf, valueAt } from '../lib/profile-fields';
+import { allFields, profileValueText, sourceKeyOf, valueAt } from '@shared/rule-profiles/profile-fields';
 import { ScrollRegion } from '@/components/ui/scroll-region';
 
 const text = (v: unknown) => (v === undefined || v === null || v === '' ? '—' : String(v));
@@ -19,7 +19,7 @@ export function VersionCompare({ versions }: { versions: ProfileVersion[] }) {
         <SelectInput id={id} value={value} onChange={(e) => onChange(e.target.value)}>
           {versions.map((v) => (
             <option key={v.id} value={v.id}>
-              Version {v.version} ({v.status})
+              Version {v.version} ({v.status === 'draft' ? 'draft' : 'published'})
             </option>
           ))}
         </SelectInput>
@@ -30,8 +30,16 @@ export function VersionCompare({ versions }: { versions: ProfileVersion[] }) {
     left && right
       ? allFields.map((f) => {
           const key = sourceKeyOf(f);
-          const a = { value: valueAt(left.profile, f.path), source: left.profile.sources[key] };
-          const b = { value: valueAt(right.profile, f.path), source: right.profile.sources[key] };
+          const a = {
+            value: valueAt(left.profile, f.path),
+            shown: profileValueText(left.profile, f, '—'),
+            source: left.profile.sources[key],
+          };
+          const b = {
+            value: valueAt(right.profile, f.path),
+            shown: profileValueText(right.profile, f, '—'),
+            source: right.profile.sources[key],
+          };
           return { f, a, b, changed: text(a.value) !== text(b.value) || text(a.source) !== text(b.source) };
         })
       : [];
@@ -76,11 +84,11 @@ export function VersionCompare({ versions }: { versions: ProfileVersion[] }) {
                     {f.unit ? ` (${f.unit})` : ''}
                   </td>
                   <td className="pr-2">
-                    <span className="font-mono">{text(a.value)}</span>
+                    <span className="font-mono">{a.shown}</span>
                     <span className="block text-xs text-stone-500">{a.source}</span>
                   </td>
                   <td>
-                    <span className="font-mono">{text(b.value)}</span>
+                    <span className="font-mono">{b.shown}</span>
                     <span className="block text-xs text-stone-500">{b.source}</span>
                   </td>
                 </tr>

@@ -1,3 +1,4 @@
+import { formatDay } from '@shared/format/dates';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice } from '@/components/ui/notice';
 import { useCreateDraft } from '../api/create-draft';
@@ -29,9 +30,7 @@ export function VersionsList({ jurisdiction, selectedId, onSelect, canEdit }: Ve
               <span className="text-stone-600">
                 {v.status === 'draft' ? 'draft' : v.id === jurisdiction.currentVersionId ? 'current' : 'published'}
               </span>
-              {v.publishedAt && (
-                <span className="text-stone-600"> · {new Date(v.publishedAt).toLocaleDateString()}</span>
-              )}
+              {v.publishedAt && <span className="text-stone-600"> · {formatDay(v.publishedAt)}</span>}
               {v.changeNote && <span className="block text-xs text-stone-600">{v.changeNote}</span>}
             </button>
           </li>

@@ -1,5 +1,5 @@
 import type { RuleProfile } from '@shared/engine';
-import { allFields, sourceKeyOf, valueAt } from './profile-fields';
+import { allFields, sourceKeyOf, valueAt } from '@shared/rule-profiles/profile-fields';
 
 export type FormValues = Record<string, string>;
 

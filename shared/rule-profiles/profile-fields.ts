@@ -1,4 +1,4 @@
-import type { RuleProfile } from '@shared/engine';
+import type { RuleProfile } from '../engine/rule-profile';
 
 export interface ProfileField {
   path: string;
@@ -143,3 +143,15 @@ export function valueAt(profile: RuleProfile, path: string): unknown {
 }
 
 export const sourceKeyOf = (f: ProfileField) => f.sourceKey ?? f.path;
+
+/** The form's field at a dotted path of the profile ("landing.maxGradePercent"), if the form has one. */
+export const profileFieldAt = (path: string): ProfileField | undefined => allFields.find((f) => f.path === path);
+
+/** A value as a person reads it: a choice by its words ("Passenger car", not "passenger"), a number with its unit. */
+export function profileValueText(profile: RuleProfile, field: ProfileField, notSet = 'not set'): string {
+  const value = valueAt(profile, field.path);
+  if (value === undefined || value === null || value === '') return notSet;
+  const choice = field.choices?.find(([v]) => v === value);
+  if (choice) return choice[1];
+  return field.unit ? `${String(value)}${field.unit === '%' ? '%' : ` ${field.unit}`}` : String(value);
+}
