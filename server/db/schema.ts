@@ -11,6 +11,7 @@ import {
   jsonb,
   pgEnum,
   pgTable,
+  primaryKey,
   text,
   timestamp,
   uniqueIndex,
@@ -240,6 +241,27 @@ export const gradeChecks = pgTable(
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex('grade_checks_request_number_key').on(t.requestId, t.number)],
+);
+
+/**
+ * The survey as it is being typed, kept per request and person so leaving the screen loses nothing. Saving a check
+ * from it removes it (the saved check is the record); it holds the form's own text, not the engine's inputs.
+ */
+export const gradeCheckDrafts = pgTable(
+  'grade_check_drafts',
+  {
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    userId: uuid()
+      .notNull()
+      .references(() => users.id),
+    survey: jsonb().notNull(),
+    /** The rule profile version chosen with the survey, when one was. */
+    ruleProfileVersionId: uuid().references(() => ruleProfileVersions.id),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.requestId, t.userId] })],
 );
 
 export const documents = pgTable(

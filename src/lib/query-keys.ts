@@ -44,6 +44,11 @@ export const queueKeys = {
   list: (filters: object) => ['queue', 'list', filters] as const,
 };
 
+export const gradeCheckKeys = {
+  /** GET /api/requests/:id/grade-check-draft: the caller's own survey draft. */
+  draft: (requestId: string) => ['grade-checks', requestId, 'draft'] as const,
+};
+
 export const emailKeys = {
   /** Every page of GET /api/emails, whatever the filter. */
   lists: () => ['emails', 'list'] as const,
