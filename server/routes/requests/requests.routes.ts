@@ -5,12 +5,13 @@ import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { requireRole } from '../../middleware/require-role';
 import { loadVisibleRequest } from '../../services/requests/request-access';
-import { createDraft, listMine, saveDraft } from '../../services/requests/drafts.service';
+import { createDraft, deleteDraft, listMine, saveDraft } from '../../services/requests/drafts.service';
 import { expectedOfApplicant, requestView } from '../../services/requests/request-view';
 import { listDocumentViews } from '../../services/documents/documents.service';
 import { listEvents } from '../../services/requests/timeline.service';
 
-export function requestsRouter({ db }: AppContext) {
+export function requestsRouter(ctx: AppContext) {
+  const { db } = ctx;
   const router = Router();
 
   router.post(
@@ -48,6 +49,15 @@ export function requestsRouter({ db }: AppContext) {
     handle({ params: uuidParam, body: saveDraftInputSchema }, async ({ params, body, user }) => ({
       request: requestView(await saveDraft(db, user, params.id, body), user),
     })),
+  );
+
+  router.delete(
+    '/api/requests/:id',
+    requireRole('applicant'),
+    handle({ params: uuidParam }, async ({ params, user }) => {
+      await deleteDraft(ctx, user, params.id);
+      return { deleted: true };
+    }),
   );
 
   router.get(
