@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import {
+  type AnyPgColumn,
   bigint,
   bigserial,
   boolean,
@@ -319,6 +320,8 @@ export const asBuiltSets = pgTable(
     results: jsonb().notNull(),
     passed: boolean().notNull(),
     note: text().notNull().default(''),
+    /** The set this one corrects (the crew edited and saved it again); the earlier one stays as it was. */
+    replacesSetId: uuid().references((): AnyPgColumn => asBuiltSets.id),
     createdAt: createdAt(),
   },
   (t) => [index('as_built_sets_request_idx').on(t.requestId, t.createdAt)],

@@ -161,6 +161,16 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     await shot(page, 'as-built-entry');
     await page.getByRole('button', { name: 'Save this set' }).click();
     await page.getByText('Set saved').waitFor();
+    // The saved readings stay in the form: one is corrected and the set saved again, the first kept as it was.
+    expect(await stationBox(1).inputValue()).toBe('0+05');
+    expect(await page.getByLabel('Grade %').nth(1).inputValue()).toBe('15.4');
+    await page.getByLabel('Grade %').nth(1).fill('14.8');
+    await page.getByRole('button', { name: 'Save the corrected set' }).click();
+    await page.getByText(/^Corrects the set saved /).waitFor();
+    await page.getByText(/^Corrected by the set saved /).waitFor();
+    await shot(page, 'as-built-corrected');
+    await page.reload();
+    expect(await page.getByLabel('Grade %').nth(1).inputValue()).toBe('14.8');
     await page.getByRole('button', { name: 'Mark built' }).click();
     await page.waitForURL((u) => u.pathname === '/crew/my-jobs');
     await page.getByRole('region', { name: 'Built, with the office' }).getByText(address).first().waitFor();
