@@ -59,6 +59,18 @@ const envSchema = z.object({
   MAIL_FROM: z.string().default('Gradepass <no-reply@gradepass.test>'),
   MAIL_REPLY_TO: z.string().optional(),
   OFFICE_EMAIL: z.email().default('office@gradepass.test'),
+  /** The office's time zone (IANA name): visit times in e-mails and invitations are said in it. */
+  OFFICE_TIME_ZONE: z
+    .string()
+    .default('America/New_York')
+    .refine((zone) => {
+      try {
+        new Intl.DateTimeFormat('en-US', { timeZone: zone });
+        return true;
+      } catch {
+        return false;
+      }
+    }, 'OFFICE_TIME_ZONE must be a time zone name such as America/New_York'),
   /** Background work (e-mail delivery) runs in every instance unless turned off. */
   RUN_WORKERS: z
     .enum(['true', 'false'])

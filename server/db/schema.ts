@@ -21,6 +21,13 @@ import {
 } from 'drizzle-orm/pg-core';
 import { requestStatuses, roles, terminalStatuses } from '@shared/workflow/statuses';
 
+/** A file sent with an e-mail; the content is text (a calendar invitation is). */
+export interface EmailAttachment {
+  filename: string;
+  contentType: string;
+  content: string;
+}
+
 const tsvector = customType<{ data: string }>({ dataType: () => 'tsvector' });
 const createdAt = () => timestamp({ withTimezone: true }).notNull().defaultNow();
 
@@ -114,6 +121,8 @@ export const requests = pgTable(
     siteLat: doublePrecision(),
     siteLng: doublePrecision(),
     visitAt: timestamp({ withTimezone: true }),
+    /** The site visit's calendar revision: raised each time the visit's invitation is sent again (moved or cancelled). */
+    visitSequence: integer().notNull().default(0),
     permitReference: text(),
     permitDecidedOn: date(),
     permitConditions: text(),
@@ -297,6 +306,8 @@ export const jobs = pgTable(
     crewId: uuid().references(() => users.id),
     acceptedAt: timestamp({ withTimezone: true }),
     scheduledFor: date(),
+    /** The work day's calendar revision: raised each time the day moves or is called off. */
+    workDaySequence: integer().notNull().default(0),
     startedAt: timestamp({ withTimezone: true }),
     builtAt: timestamp({ withTimezone: true }),
   },
@@ -339,6 +350,8 @@ export const emails = pgTable(
     subject: text().notNull(),
     textBody: text().notNull(),
     htmlBody: text().notNull(),
+    /** Files sent with the message (a calendar invitation), kept with the row so a retry sends exactly the same. */
+    attachments: jsonb().$type<EmailAttachment[]>().notNull().default([]),
     status: emailStatusEnum().notNull().default('queued'),
     attempts: integer().notNull().default(0),
     lastError: text(),

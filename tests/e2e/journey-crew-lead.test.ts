@@ -107,7 +107,8 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
       .waitFor();
     await shot(page, 'my-jobs-planned');
     await page.getByRole('region', { name: 'Planned' }).getByRole('button', { name: 'Start work' }).first().click();
-    await page.getByRole('region', { name: 'Under way' }).waitFor();
+    // The job itself under way, not only the section: leaving before the answer would drop the start.
+    await page.getByRole('region', { name: 'Under way' }).getByText(address).first().waitFor();
 
     await page.goto(appUrl(`/crew/jobs/${jobId}/field-sheet`));
     await page.getByRole('heading', { name: /Field sheet/ }).waitFor();
