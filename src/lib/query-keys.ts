@@ -49,6 +49,9 @@ export const gradeCheckKeys = {
   draft: (requestId: string) => ['grade-checks', requestId, 'draft'] as const,
 };
 
+/** GET /api/calendar?from=&to= */
+export const calendarKeys = { range: (from: string, to: string) => ['calendar', from, to] as const };
+
 export const emailKeys = {
   /** Every page of GET /api/emails, whatever the filter. */
   lists: () => ['emails', 'list'] as const,
