@@ -15,9 +15,11 @@ export function formatDay(value: Date | string, timeZone?: string): string {
   return dayFormat(timeZone).format(new Date(value));
 }
 
-/** "9:30 AM". */
+/** "9:30 AM", with a plain space (newer ICU data puts a narrow no-break space before AM, which plain text mangles). */
 export function formatTime(value: Date | string, timeZone?: string): string {
-  return timeFormat(timeZone).format(new Date(value));
+  return timeFormat(timeZone)
+    .format(new Date(value))
+    .replace(/[\u202f\u00a0]/g, ' ');
 }
 
 /** "Dec 2, 2026 at 9:30 AM". */

@@ -101,12 +101,11 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     const date = new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
     await mine.getByLabel('Work day').fill(date);
     await mine.getByRole('button', { name: 'Plan this day' }).click();
-    await page
-      .getByText(/The homeowner has been e-mailed/)
-      .first()
-      .waitFor();
+    // The demo crew has planned jobs of its own: every step is read on this job's own card.
+    const planned = page.getByRole('region', { name: 'Planned' }).getByRole('article').filter({ hasText: address });
+    await planned.getByText(/The homeowner has been e-mailed/).waitFor();
     await shot(page, 'my-jobs-planned');
-    await page.getByRole('region', { name: 'Planned' }).getByRole('button', { name: 'Start work' }).first().click();
+    await planned.getByRole('button', { name: 'Start work' }).click();
     // The job itself under way, not only the section: leaving before the answer would drop the start.
     await page.getByRole('region', { name: 'Under way' }).getByText(address).first().waitFor();
 
