@@ -166,8 +166,8 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     expect(await page.getByLabel('Grade %').nth(1).inputValue()).toBe('15.4');
     await page.getByLabel('Grade %').nth(1).fill('14.8');
     await page.getByRole('button', { name: 'Save the corrected set' }).click();
-    await page.getByText(/^Corrects the set saved /).waitFor();
-    await page.getByText(/^Corrected by the set saved /).waitFor();
+    await page.getByText(/^Corrects the set of /).waitFor();
+    await page.getByText(/^Corrected by the set of /).waitFor();
     await shot(page, 'as-built-corrected');
     await page.reload();
     expect(await page.getByLabel('Grade %').nth(1).inputValue()).toBe('14.8');

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, inject, it } from 'vitest';
 import { createDb } from '../../server/db/client';
 import { demoPeople } from '../../server/dev/seed/demo-people';
 import { ensurePerson } from '../factories/people';
@@ -57,7 +57,7 @@ describe('the office calendar', () => {
     await entry.focus();
     await page.keyboard.press('Enter');
     await page.waitForURL((u) => u.pathname === `/office/requests/${request.id}`);
-    expect(await page.getByText('7 Quillmoor Bend, Fenwick Falls').count()).toBeGreaterThan(0);
+    await page.getByText(request.reference).first().waitFor();
     await context.close();
   });
 });

@@ -76,8 +76,8 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
             {editing ? (
               <div className="flex flex-wrap items-center justify-between gap-2 text-base">
                 <p>
-                  These are the readings of the set saved {formatMoment(editing.createdAt)}. Change what needs changing
-                  and save: the corrected set is saved as a new one and the earlier one is kept.
+                  Editing the set from {formatMoment(editing.createdAt)}. Change what needs changing and save: the
+                  corrected set is saved as a new one and the earlier one is kept.
                 </p>
                 <Button variant="secondary" onClick={startEmpty} className="min-h-12 px-5 text-base">
                   Start an empty set

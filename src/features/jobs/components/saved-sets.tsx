@@ -19,13 +19,11 @@ export function SavedSets({ sets }: { sets: AsBuiltSetView[] }) {
             </p>
             {set.replacesSetId && (
               <p className="text-base text-stone-700">
-                Corrects the set saved {corrects ? formatMoment(corrects.createdAt) : 'earlier'}.
+                Corrects the set of {corrects ? formatMoment(corrects.createdAt) : 'earlier'}.
               </p>
             )}
             {correctedBy && (
-              <p className="text-base text-stone-700">
-                Corrected by the set saved {formatMoment(correctedBy.createdAt)}.
-              </p>
+              <p className="text-base text-stone-700">Corrected by the set of {formatMoment(correctedBy.createdAt)}.</p>
             )}
             {set.note && <p className="mt-1">Note: {set.note}</p>}
             <ul className="mt-2 space-y-0.5 text-base">
