@@ -37,7 +37,9 @@ describe('the office calendar', () => {
     await page.goto(appUrl('/office/queue'));
     await page.getByRole('link', { name: 'Calendar' }).click();
     await page.getByRole('heading', { name: 'Calendar' }).waitFor();
-    const entry = page.getByRole('link', { name: new RegExp(`Site visit 10:30 AM · ${request.reference}`) });
+    const entry = page.getByRole('link', { name: new RegExp(`^Site visit 10:30 AM · ${request.reference}$`) });
+    await page.getByText(/ in these days|Nothing booked in these days/).waitFor();
+    await saveScreenshot(page, 'office-calendar-opened');
     // Two days ahead may fall in next month: the keyboard moves there.
     if ((await entry.count()) === 0) {
       await page.getByRole('button', { name: 'Next month' }).focus();
