@@ -13,6 +13,8 @@ export interface StoredMessage {
   html: string;
   headers: Record<string, string>;
   messageId: string;
+  /** Files sent with the message; a text file (such as a calendar invitation) keeps its text. */
+  attachments: { filename: string; contentType: string; size: number; text: string | null }[];
 }
 
 const idPattern = /^\d{13}-\d{6}-[0-9a-f]{8}$/;
@@ -41,6 +43,12 @@ export class MessageStore {
       html: typeof parsed.html === 'string' ? parsed.html : '',
       headers: headerMap(parsed),
       messageId: parsed.messageId ?? '',
+      attachments: parsed.attachments.map((a) => ({
+        filename: a.filename ?? '',
+        contentType: a.contentType,
+        size: a.size,
+        text: a.contentType.startsWith('text/') ? a.content.toString('utf8') : null,
+      })),
     };
     await writeFile(join(this.dir, `${id}.eml`), raw);
     await writeFile(join(this.dir, `${id}.json`), JSON.stringify(message, null, 2));

@@ -61,6 +61,18 @@ const envSchema = z.object({
   OFFICE_EMAIL: z.email().default('office@gradepass.test'),
   /** The contractor's name, as its reports and sign-in messages say it. */
   COMPANY_NAME: z.string().trim().min(1).max(120).default('Tamarack Ridge Excavating'),
+  /** The office's time zone (IANA name): visit times in e-mails and invitations are said in it. */
+  OFFICE_TIME_ZONE: z
+    .string()
+    .default('America/New_York')
+    .refine((zone) => {
+      try {
+        new Intl.DateTimeFormat('en-US', { timeZone: zone });
+        return true;
+      } catch {
+        return false;
+      }
+    }, 'OFFICE_TIME_ZONE must be a time zone name such as America/New_York'),
   /** Background work (e-mail delivery) runs in every instance unless turned off. */
   RUN_WORKERS: z
     .enum(['true', 'false'])

@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import {
+  type AnyPgColumn,
   bigint,
   bigserial,
   boolean,
@@ -11,6 +12,7 @@ import {
   jsonb,
   pgEnum,
   pgTable,
+  primaryKey,
   text,
   timestamp,
   uniqueIndex,
@@ -18,6 +20,13 @@ import {
   varchar,
 } from 'drizzle-orm/pg-core';
 import { requestStatuses, roles, terminalStatuses } from '@shared/workflow/statuses';
+
+/** A file sent with an e-mail; the content is text (a calendar invitation is). */
+export interface EmailAttachment {
+  filename: string;
+  contentType: string;
+  content: string;
+}
 
 const tsvector = customType<{ data: string }>({ dataType: () => 'tsvector' });
 const createdAt = () => timestamp({ withTimezone: true }).notNull().defaultNow();
@@ -112,6 +121,8 @@ export const requests = pgTable(
     siteLat: doublePrecision(),
     siteLng: doublePrecision(),
     visitAt: timestamp({ withTimezone: true }),
+    /** The site visit's calendar revision: raised each time the visit's invitation is sent again (moved or cancelled). */
+    visitSequence: integer().notNull().default(0),
     permitReference: text(),
     permitDecidedOn: date(),
     permitConditions: text(),
@@ -242,6 +253,27 @@ export const gradeChecks = pgTable(
   (t) => [uniqueIndex('grade_checks_request_number_key').on(t.requestId, t.number)],
 );
 
+/**
+ * The survey as it is being typed, kept per request and person so leaving the screen loses nothing. Saving a check
+ * from it removes it (the saved check is the record); it holds the form's own text, not the engine's inputs.
+ */
+export const gradeCheckDrafts = pgTable(
+  'grade_check_drafts',
+  {
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    userId: uuid()
+      .notNull()
+      .references(() => users.id),
+    survey: jsonb().notNull(),
+    /** The rule profile version chosen with the survey, when one was. */
+    ruleProfileVersionId: uuid().references(() => ruleProfileVersions.id),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.requestId, t.userId] })],
+);
+
 export const documents = pgTable(
   'documents',
   {
@@ -274,6 +306,8 @@ export const jobs = pgTable(
     crewId: uuid().references(() => users.id),
     acceptedAt: timestamp({ withTimezone: true }),
     scheduledFor: date(),
+    /** The work day's calendar revision: raised each time the day moves or is called off. */
+    workDaySequence: integer().notNull().default(0),
     startedAt: timestamp({ withTimezone: true }),
     builtAt: timestamp({ withTimezone: true }),
   },
@@ -297,6 +331,8 @@ export const asBuiltSets = pgTable(
     results: jsonb().notNull(),
     passed: boolean().notNull(),
     note: text().notNull().default(''),
+    /** The set this one corrects (the crew edited and saved it again); the earlier one stays as it was. */
+    replacesSetId: uuid().references((): AnyPgColumn => asBuiltSets.id),
     createdAt: createdAt(),
   },
   (t) => [index('as_built_sets_request_idx').on(t.requestId, t.createdAt)],
@@ -314,6 +350,8 @@ export const emails = pgTable(
     subject: text().notNull(),
     textBody: text().notNull(),
     htmlBody: text().notNull(),
+    /** Files sent with the message (a calendar invitation), kept with the row so a retry sends exactly the same. */
+    attachments: jsonb().$type<EmailAttachment[]>().notNull().default([]),
     status: emailStatusEnum().notNull().default('queued'),
     attempts: integer().notNull().default(0),
     lastError: text(),

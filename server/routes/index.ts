@@ -1,6 +1,7 @@
 import type { Express } from 'express';
 import type { AppContext } from '../config/context';
 import { auditRouter } from './audit/audit.routes';
+import { calendarRouter } from './calendar/calendar.routes';
 import { crewRouter } from './crew/crew.routes';
 import { documentsRouter } from './documents/documents.routes';
 import { emailsRouter } from './emails/emails.routes';
@@ -29,4 +30,5 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(ruleProfilesRouter(ctx));
   app.use(gradeChecksRouter(ctx));
   app.use(documentsRouter(ctx));
+  app.use(calendarRouter(ctx));
 }

@@ -57,6 +57,11 @@ export async function deliverEmail(ctx: AppContext, emailId: string, s: Delivery
       subject: claim.subject,
       text: claim.textBody,
       html: claim.htmlBody,
+      attachments: claim.attachments.map((a) => ({
+        filename: a.filename,
+        contentType: a.contentType,
+        content: a.content,
+      })),
       messageId,
       headers: { 'X-Gradepass-Email-Id': claim.id },
       signal: abort.signal,

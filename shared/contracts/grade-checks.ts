@@ -9,6 +9,7 @@ import {
 } from '../engine';
 import { defaultHaul } from '../charts/cut-fill-table';
 import type { RequestStatus } from '../workflow/statuses';
+import type { Moment } from './wire';
 
 /** What the office measured about the road itself; the laser's road axis and the report's site notes come from it. */
 export const roadPartSchema = z.object({
@@ -159,4 +160,31 @@ export interface GradeCheckSavedView {
 export interface GradeCheckAttachedView {
   check: GradeCheckView;
   documentId: string;
+}
+
+/** The longest survey draft kept, in characters of JSON: far more than any real survey, small enough for a row. */
+export const maxGradeCheckDraftChars = 200_000;
+
+/**
+ * PUT /api/requests/:id/grade-check-draft: the survey form as typed (its own text, checked by the form when read
+ * back), kept per request and person until a check is saved from it.
+ */
+export const saveGradeCheckDraftInputSchema = z.strictObject({
+  survey: z
+    .record(z.string(), z.unknown(), 'must be the survey form')
+    .refine((v) => JSON.stringify(v).length <= maxGradeCheckDraftChars, {
+      message: `is too long to keep as a draft (the limit is ${maxGradeCheckDraftChars.toLocaleString('en-US')} characters)`,
+    }),
+  ruleProfileVersionId: z.uuid('must be a rule profile version id').nullable().default(null),
+});
+export type SaveGradeCheckDraftInput = z.input<typeof saveGradeCheckDraftInputSchema>;
+
+export interface GradeCheckDraftView<M extends Moment = string> {
+  survey: Record<string, unknown>;
+  ruleProfileVersionId: string | null;
+  updatedAt: M;
+}
+/** GET and PUT answer the caller's own draft; `null` when there is none. */
+export interface GradeCheckDraftAnswer<M extends Moment = string> {
+  draft: GradeCheckDraftView<M> | null;
 }

@@ -21,6 +21,22 @@ export const saveDraftInputSchema = z.strictObject({
 });
 export type SaveDraftInput = z.input<typeof saveDraftInputSchema>;
 
+/**
+ * PUT /api/requests/:id/site-position: the office sets where the entrance is (found on the visit or on a map), so
+ * the crews' board can give the distance. Each error names the box by its label.
+ */
+export const sitePositionLabels = { lat: 'Latitude', lng: 'Longitude' } as const;
+const coordinate = (label: string, limit: number) =>
+  z
+    .number({ error: `${label}: enter a number in decimal degrees, e.g. ${limit === 90 ? '44.26157' : '-72.57538'}.` })
+    .min(-limit, `${label} is between -${limit} and ${limit}.`)
+    .max(limit, `${label} is between -${limit} and ${limit}.`);
+export const sitePositionInputSchema = z.strictObject({
+  lat: coordinate(sitePositionLabels.lat, 90),
+  lng: coordinate(sitePositionLabels.lng, 180),
+});
+export type SitePositionInput = z.infer<typeof sitePositionInputSchema>;
+
 /** An action its reader may take now, from shared/workflow's table. */
 export interface RequestActionView {
   action: string;
@@ -48,6 +64,8 @@ export interface RequestView<When extends Moment = string> {
   siteLat: number | null;
   siteLng: number | null;
   visitAt: When | null;
+  /** The day the crew plans to build, once they have set one (filled by GET /api/requests/:id). */
+  workDay?: string | null;
   permitReference: string | null;
   permitDecidedOn: string | null;
   permitConditions: string | null;
@@ -64,6 +82,8 @@ export interface OfficeRequestView<When extends Moment = string> extends Request
   assigneeId: string | null;
   crewId: string | null;
   jurisdictionId: string | null;
+  /** The crew lead who has the job, once one has taken it (filled by GET /api/requests/:id). */
+  crewLeadName?: string | null;
 }
 
 /** A document on the request (grade-check reports and the like), as listed beside it. */

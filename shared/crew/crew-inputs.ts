@@ -50,6 +50,8 @@ export const saveAsBuiltInputSchema = z.strictObject({
     .min(1, 'enter at least one reading')
     .max(500, 'at most 500 readings in one set'),
   note: z.string().trim().max(4000, 'must be at most 4000 characters').optional(),
+  /** The saved set these readings were edited from; the new set corrects it and the earlier one is kept. */
+  replacesSetId: z.uuid('must be the id of a saved set of this job').optional(),
 });
 export type SaveAsBuiltInput = z.infer<typeof saveAsBuiltInputSchema>;
 

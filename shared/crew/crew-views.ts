@@ -158,6 +158,8 @@ export interface AsBuiltSetView {
   note: string;
   crewName: string;
   createdAt: string;
+  /** The earlier set this one corrects, when it was edited from one. */
+  replacesSetId: string | null;
 }
 
 /** What the as-built screen needs to check each reading in the browser exactly as the server will. */

@@ -42,6 +42,8 @@ export const siteStepShape = z.object({
   distanceFromLandmarkFt: optionalNumber(0, 26400, 'Give a distance between 0 and 26,400 ft (5 miles).'),
   siteLat: optionalNumber(-90, 90, 'Latitude is between -90 and 90.'),
   siteLng: optionalNumber(-180, 180, 'Longitude is between -180 and 180.'),
+  /** The owner said no to using a photo's position, so it is not offered again. */
+  photoPositionDeclined: z.boolean({ error: 'Must be yes or no.' }).optional(),
 });
 
 export const entranceStepShape = z.object({

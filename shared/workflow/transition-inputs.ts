@@ -75,6 +75,16 @@ export const transitionInputs = {
       .pipe(visitAt)
       .register(fieldText, { label: 'Date and time of the site visit', control: 'datetime' }),
   }),
+  'reschedule-visit': input('reschedule-visit', {
+    visitAt: z
+      .string({ error: 'pick the new date and time of the site visit' })
+      .pipe(visitAt)
+      .register(fieldText, { label: 'New date and time of the site visit', control: 'datetime' }),
+    note: note('Why it moves (optional)'),
+  }),
+  'cancel-visit': input('cancel-visit', {
+    note: note('Why it is called off (optional)'),
+  }),
   'mark-checked': input('mark-checked', {}),
   'file-permit': input('file-permit', { permitReference: permitReference(true) }),
   'record-granted': input('record-granted', {

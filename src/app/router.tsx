@@ -27,6 +27,7 @@ export function createAppRouter() {
         { path: paths.office.ruleProfiles.path, ...page(() => import('./routes/office/rule-profiles')) },
         { path: paths.office.ruleProfile.path, ...page(() => import('./routes/office/rule-profile')) },
         { path: paths.office.emails.path, ...page(() => import('./routes/office/emails')) },
+        { path: paths.office.calendar.path, ...page(() => import('./routes/office/calendar')) },
         { path: paths.office.users.path, ...page(() => import('./routes/office/users')) },
         { path: paths.office.audit.path, ...page(() => import('./routes/office/changes')) },
         { path: paths.office.crewYard.path, ...page(() => import('./routes/office/crew-yard')) },

@@ -21,6 +21,7 @@ export const paths = {
     ruleProfiles: { path: '/office/rule-profiles', getHref: () => '/office/rule-profiles' },
     ruleProfile: { path: '/office/rule-profiles/:id', getHref: (id: string) => `/office/rule-profiles/${id}` },
     emails: { path: '/office/emails', getHref: () => '/office/emails' },
+    calendar: { path: '/office/calendar', getHref: () => '/office/calendar' },
     users: { path: '/office/users', getHref: () => '/office/users' },
     audit: { path: '/office/changes', getHref: () => '/office/changes' },
     crewYard: { path: '/office/crew-yard', getHref: () => '/office/crew-yard' },

@@ -51,6 +51,14 @@ export const queueKeys = {
   list: (filters: object) => ['queue', 'list', filters] as const,
 };
 
+export const gradeCheckKeys = {
+  /** GET /api/requests/:id/grade-check-draft: the caller's own survey draft. */
+  draft: (requestId: string) => ['grade-checks', requestId, 'draft'] as const,
+};
+
+/** GET /api/calendar?from=&to= */
+export const calendarKeys = { range: (from: string, to: string) => ['calendar', from, to] as const };
+
 export const emailKeys = {
   /** Every page of GET /api/emails, whatever the filter. */
   lists: () => ['emails', 'list'] as const,

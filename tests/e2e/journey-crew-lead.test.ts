@@ -101,16 +101,16 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     const date = new Date(Date.now() + 7 * 86_400_000).toISOString().slice(0, 10);
     await mine.getByLabel('Work day').fill(date);
     await mine.getByRole('button', { name: 'Plan this day' }).click();
-    await page
-      .getByText(/The homeowner has been e-mailed/)
-      .first()
-      .waitFor();
+    // The demo crew has planned jobs of its own: every step is read on this job's own card.
+    const planned = page.getByRole('region', { name: 'Planned' }).getByRole('article').filter({ hasText: address });
+    await planned.getByText(/The homeowner has been e-mailed/).waitFor();
     await shot(page, 'my-jobs-planned');
     // Starting work asks first; nothing moves until the crew lead says yes.
-    await page.getByRole('region', { name: 'Planned' }).getByRole('button', { name: 'Start work' }).first().click();
+    await planned.getByRole('button', { name: 'Start work' }).click();
     await page.getByText(/The homeowner and the office are told the crew is building/).waitFor();
     await page.getByRole('button', { name: 'Yes, start work' }).click();
-    await page.getByRole('region', { name: 'Under way' }).waitFor();
+    // The job itself under way, not only the section: leaving before the answer would drop the start.
+    await page.getByRole('region', { name: 'Under way' }).getByText(address).first().waitFor();
 
     await page.goto(appUrl(`/crew/jobs/${jobId}/field-sheet`));
     await page.getByRole('heading', { name: /Field sheet/ }).waitFor();
@@ -164,6 +164,16 @@ describe('a crew lead takes, plans, builds and verifies a released job', () => {
     await shot(page, 'as-built-entry');
     await page.getByRole('button', { name: 'Save this set' }).click();
     await page.getByText('Set saved').waitFor();
+    // The saved readings stay in the form: one is corrected and the set saved again, the first kept as it was.
+    expect(await stationBox(1).inputValue()).toBe('0+05');
+    expect(await page.getByLabel('Grade %').nth(1).inputValue()).toBe('15.4');
+    await page.getByLabel('Grade %').nth(1).fill('14.8');
+    await page.getByRole('button', { name: 'Save the corrected set' }).click();
+    await page.getByText(/^Corrects the set of /).waitFor();
+    await page.getByText(/^Corrected by the set of /).waitFor();
+    await shot(page, 'as-built-corrected');
+    await page.reload();
+    expect(await page.getByLabel('Grade %').nth(1).inputValue()).toBe('14.8');
     await page.getByRole('button', { name: 'Mark built' }).click();
     await page.waitForURL((u) => u.pathname === '/crew/my-jobs');
     await page.getByRole('region', { name: 'Built, with the office' }).getByText(address).first().waitFor();

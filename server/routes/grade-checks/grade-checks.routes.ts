@@ -1,7 +1,9 @@
 import { Router } from 'express';
 import {
   attachGradeCheckInputSchema,
+  saveGradeCheckDraftInputSchema,
   saveGradeCheckInputSchema,
+  type GradeCheckDraftAnswer,
   type GradeCheckAttachedView,
   type GradeCheckListView,
   type GradeCheckSavedView,
@@ -16,6 +18,11 @@ import {
   loadVisibleGradeCheck,
   saveGradeCheck,
 } from '../../services/grade-checks/grade-checks.service';
+import {
+  discardGradeCheckDraft,
+  loadGradeCheckDraft,
+  saveGradeCheckDraft,
+} from '../../services/grade-checks/grade-check-drafts.service';
 import { checkView, requestHeader } from '../../services/grade-checks/grade-check-view';
 
 export function gradeChecksRouter(ctx: AppContext) {
@@ -40,6 +47,36 @@ export function gradeChecksRouter(ctx: AppContext) {
       const row = await saveGradeCheck(db, user, params.id, body);
       res.status(201);
       return { check: checkView(row, user) } satisfies GradeCheckSavedView;
+    }),
+  );
+  router.get(
+    '/api/requests/:id/grade-check-draft',
+    office,
+    handle(
+      { params: uuidParam },
+      async ({ params, user }) =>
+        ({
+          draft: await loadGradeCheckDraft(db, user, params.id),
+        }) satisfies GradeCheckDraftAnswer<Date>,
+    ),
+  );
+  router.put(
+    '/api/requests/:id/grade-check-draft',
+    office,
+    handle(
+      { params: uuidParam, body: saveGradeCheckDraftInputSchema },
+      async ({ params, body, user }) =>
+        ({
+          draft: await saveGradeCheckDraft(db, user, params.id, body),
+        }) satisfies GradeCheckDraftAnswer<Date>,
+    ),
+  );
+  router.delete(
+    '/api/requests/:id/grade-check-draft',
+    office,
+    handle({ params: uuidParam }, async ({ params, user }) => {
+      await discardGradeCheckDraft(db, user, params.id);
+      return { draft: null } satisfies GradeCheckDraftAnswer<Date>;
     }),
   );
   router.get(

@@ -72,6 +72,7 @@ export async function listSets(db: DbOrTx, requestId: string): Promise<AsBuiltSe
       status,
       passed: set.passed,
       note: set.note,
+      replacesSetId: set.replacesSetId,
       crewName,
       createdAt: set.createdAt.toISOString(),
     };
@@ -108,6 +109,14 @@ export async function saveAsBuiltSet(db: Db, crew: SessionUser, requestId: strin
       );
     }
     const check = await requireJobCheck(tx, row.id);
+    if (input.replacesSetId) {
+      // Only the latest set can be corrected: an edit of an older one would hide the set saved after it.
+      const latest = await latestSet(tx, row.id);
+      if (!latest || latest.id !== input.replacesSetId)
+        throw conflict(
+          'The set you edited is no longer the latest one saved for this job. Reload the page to edit the latest set.',
+        );
+    }
     const verdict = verifyReadings(check, input.readings);
     const [set] = await tx
       .insert(asBuiltSets)
@@ -119,6 +128,7 @@ export async function saveAsBuiltSet(db: Db, crew: SessionUser, requestId: strin
         results: { readings: verdict.readings, status: verdict.status, ruleProfileVersionId: check.ruleProfile.id },
         passed: verdict.passes,
         note: input.note ?? '',
+        replacesSetId: input.replacesSetId ?? null,
       })
       .returning();
     const [view] = (await listSets(tx, row.id)).filter((s) => s.id === set.id);

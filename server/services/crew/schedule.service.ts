@@ -6,6 +6,7 @@ import { jobs, requestEvents, requests, users } from '../../db/schema';
 import { badRequest, conflict } from '../../lib/errors';
 import { enqueueEmails } from '../email/outbox';
 import { dayInWords, scheduleEmails } from '../email/schedule-emails';
+import { calendarAttachment, workDayUid } from '../email/calendar-invite';
 import { loadVisibleRequest } from '../requests/request-access';
 import type { TransitionContext } from '../transitions/apply-transition';
 
@@ -44,9 +45,16 @@ export async function scheduleJob(
       );
     }
     checkDate(input.date, row.permitExpiresOn, now);
-    const [job] = await tx.select({ scheduledFor: jobs.scheduledFor }).from(jobs).where(eq(jobs.requestId, row.id));
+    const [job] = await tx
+      .select({ scheduledFor: jobs.scheduledFor, sequence: jobs.workDaySequence })
+      .from(jobs)
+      .where(eq(jobs.requestId, row.id));
     const previous = job?.scheduledFor ?? null;
-    await tx.update(jobs).set({ scheduledFor: input.date }).where(eq(jobs.requestId, row.id));
+    const sequence = job?.sequence ?? 0;
+    await tx
+      .update(jobs)
+      .set({ scheduledFor: input.date, workDaySequence: sequence + 1 })
+      .where(eq(jobs.requestId, row.id));
     await tx.update(requests).set({ updatedAt: now }).where(eq(requests.id, row.id));
     const note = input.note ?? '';
     const [event] = await tx
@@ -72,9 +80,24 @@ export async function scheduleJob(
       note,
       appOrigin: ctx.env.APP_ORIGIN,
     });
+    // The owner's e-mail carries the work day's one invitation: the same id each time the day moves.
+    const invite = calendarAttachment({
+      uid: workDayUid(row.id),
+      sequence,
+      cancelled: false,
+      when: { day: input.date },
+      title: `Driveway entrance work (${row.reference})`,
+      description: `${crew.name}'s crew builds the entrance. Keep the entrance area clear of vehicles that day.`,
+      location: row.siteAddress,
+      organizer: { name: 'Gradepass office', email: ctx.env.OFFICE_EMAIL },
+    });
     await enqueueEmails(
       tx,
-      emails.map((e) => ({ ...e, eventId: event.id })),
+      emails.map((e) => ({
+        ...e,
+        eventId: event.id,
+        ...(e.to === applicant.email ? { attachments: [invite] } : {}),
+      })),
     );
     return { scheduledFor: input.date, previousDate: previous };
   });

@@ -1,5 +1,5 @@
 import type { DbOrTx } from '../../db/client';
-import { emails } from '../../db/schema';
+import { emails, type EmailAttachment } from '../../db/schema';
 
 export interface OutgoingEmail {
   to: string;
@@ -9,6 +9,8 @@ export interface OutgoingEmail {
   html: string;
   requestId?: string;
   eventId?: number;
+  /** Files sent with it (a calendar invitation), stored on the row so a retry sends the same bytes. */
+  attachments?: EmailAttachment[];
 }
 
 /**
@@ -28,6 +30,7 @@ export async function enqueueEmails(tx: DbOrTx, messages: OutgoingEmail[]) {
         htmlBody: m.html,
         requestId: m.requestId,
         eventId: m.eventId,
+        attachments: m.attachments ?? [],
       })),
     )
     .returning({ id: emails.id });

@@ -3,7 +3,7 @@ import type { RuleProfile } from '@shared/engine';
 import { gradeCheckOpenStatuses, isOfficeRole } from '@shared/workflow/statuses';
 import type { SessionUser } from '../../lib/session-user';
 import type { Db, DbOrTx } from '../../db/client';
-import { gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
+import { gradeCheckDrafts, gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
 import { AppError, conflict, notFound } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
 import type { GradeCheckRecord } from '@shared/contracts/grade-checks';
@@ -90,6 +90,10 @@ export async function saveGradeCheck(
         createdById: user.id,
       })
       .returning();
+    // The survey typed for it is now the saved check: the saver's draft of it is done with.
+    await tx
+      .delete(gradeCheckDrafts)
+      .where(and(eq(gradeCheckDrafts.requestId, request.id), eq(gradeCheckDrafts.userId, user.id)));
     // The office's history shows each check as it is made; the owner hears of it once a report is attached.
     await tx.insert(requestEvents).values({
       requestId: request.id,

@@ -1,9 +1,11 @@
+import { DeleteObjectCommand } from '@aws-sdk/client-s3';
 import { and, count, desc, eq } from 'drizzle-orm';
 import { applicationDraftSchema, type ApplicationDraft } from '@shared/requests/application-schema';
 import { answerEditableStatuses } from '@shared/contracts/requests';
 import type { SessionUser } from '../../lib/session-user';
+import type { AppContext } from '../../config/context';
 import type { Db } from '../../db/client';
-import { requests, users } from '../../db/schema';
+import { emails, messages, photos, requestEvents, requests, users } from '../../db/schema';
 import { conflict } from '../../lib/errors';
 import { loadVisibleRequest } from './request-access';
 import { nextReference } from './reference';
@@ -85,4 +87,35 @@ export function listMine(db: Db, user: SessionUser) {
     .where(eq(requests.applicantId, user.id))
     .orderBy(desc(requests.updatedAt))
     .limit(200);
+}
+
+/**
+ * Deletes a request its owner never sent, with what hangs on it (photos, its own history rows). Nothing of a draft
+ * has reached the office, so nothing is kept; the photos' stored objects are removed once the rows are gone (a
+ * storage failure then leaves an object nobody can reach, which is logged, never the request half-deleted).
+ */
+export async function deleteDraft(
+  ctx: Pick<AppContext, 'db' | 's3' | 'env' | 'logger'>,
+  user: SessionUser,
+  id: string,
+) {
+  const objectKeys = await ctx.db.transaction(async (tx) => {
+    const row = await loadVisibleRequest(tx, user, id, { forUpdate: true });
+    if (row.applicantId !== user.id) throw conflict('Only the person who started this request can delete it.');
+    if (row.status !== 'draft')
+      throw conflict('This request has been sent to the office, so it cannot be deleted. You can withdraw it instead.');
+    const gone = await tx.delete(photos).where(eq(photos.requestId, row.id)).returning({ key: photos.objectKey });
+    await tx.delete(requestEvents).where(eq(requestEvents.requestId, row.id));
+    await tx.delete(messages).where(eq(messages.requestId, row.id));
+    await tx.delete(emails).where(eq(emails.requestId, row.id));
+    await tx.delete(requests).where(eq(requests.id, row.id));
+    return gone.map((g) => g.key);
+  });
+  for (const key of objectKeys) {
+    try {
+      await ctx.s3.send(new DeleteObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: key }));
+    } catch (error) {
+      ctx.logger.warn({ err: error, key }, 'a deleted draft’s photo object could not be removed from storage');
+    }
+  }
 }

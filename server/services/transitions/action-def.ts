@@ -7,6 +7,7 @@ import type { AppError } from '../../lib/errors';
 import type { RequestRow } from '../requests/request-access';
 
 import type { Audience } from '../email/transition-emails';
+import type { CalendarInvite } from '../email/calendar-invite';
 
 export type { Audience };
 
@@ -18,6 +19,8 @@ export interface ActionResult {
   emailDetail?: string;
   /** The history's note when it is not the body's own note (the owner's answer). */
   note?: string;
+  /** A calendar invitation (new, updated or cancelled) sent with the owner's e-mail. */
+  ownerCalendar?: Omit<CalendarInvite, 'organizer' | 'location'>;
 }
 
 export interface ActionStep<A extends TransitionAction> {
@@ -27,6 +30,8 @@ export interface ActionStep<A extends TransitionAction> {
   body: TransitionBodyOf<A>;
   actor: SessionUser;
   now: Date;
+  /** The office's time zone, for times said in words. */
+  timeZone: string;
 }
 
 /**

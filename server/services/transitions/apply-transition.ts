@@ -9,6 +9,7 @@ import { requestEvents, requests, users } from '../../db/schema';
 import { conflict, forbidden } from '../../lib/errors';
 import { emailsForTransition } from '../email/transition-emails';
 import { enqueueEmails } from '../email/outbox';
+import { calendarAttachment } from '../email/calendar-invite';
 import { loadVisibleRequest, type RequestRow } from '../requests/request-access';
 import type { ActionDef, ActionResult } from './action-def';
 import { actionDefs } from './registry';
@@ -44,7 +45,14 @@ export async function applyTransition(
     const now = new Date();
     const def = actionDefs[body.action] as ActionDef<TransitionAction>;
     const added: ActionResult =
-      (await def.run?.({ tx, row, body: body as TransitionBodyOf<TransitionAction>, actor, now })) ?? {};
+      (await def.run?.({
+        tx,
+        row,
+        body: body as TransitionBodyOf<TransitionAction>,
+        actor,
+        now,
+        timeZone: ctx.env.OFFICE_TIME_ZONE,
+      })) ?? {};
     const [updated] = await tx
       .update(requests)
       .set({ ...added.patch, status: transition.to, version: row.version + 1, statusChangedAt: now, updatedAt: now })
@@ -78,6 +86,7 @@ export async function applyTransition(
         note,
         detail: added.emailDetail,
         eventId: event.id,
+        ownerCalendar: added.ownerCalendar,
       }),
     );
     return { request: updated, eventId: event.id, transition };
@@ -91,9 +100,14 @@ interface Sent {
   note: string;
   detail?: string;
   eventId: number;
+  ownerCalendar?: ActionResult['ownerCalendar'];
 }
 
-async function transitionEmails(tx: Tx, ctx: TransitionContext, { transition, def, row, note, detail, eventId }: Sent) {
+async function transitionEmails(
+  tx: Tx,
+  ctx: TransitionContext,
+  { transition, def, row, note, detail, eventId, ownerCalendar }: Sent,
+) {
   const person = { email: users.email, name: users.name };
   const [applicant] = await tx.select(person).from(users).where(eq(users.id, row.applicantId));
   const [crew] = row.crewId ? await tx.select(person).from(users).where(eq(users.id, row.crewId)) : [];
@@ -117,5 +131,14 @@ async function transitionEmails(tx: Tx, ctx: TransitionContext, { transition, de
     crewLeads,
     appOrigin: ctx.env.APP_ORIGIN,
     detail,
-  }).map((email) => ({ ...email, eventId }));
+  }).map((email) => {
+    // The owner's invitation rides with the owner's e-mail only; the office has the request itself.
+    if (!ownerCalendar || email.to !== applicant.email) return { ...email, eventId };
+    const invite = calendarAttachment({
+      ...ownerCalendar,
+      location: row.siteAddress,
+      organizer: { name: 'Gradepass office', email: ctx.env.OFFICE_EMAIL },
+    });
+    return { ...email, eventId, attachments: [invite] };
+  });
 }

@@ -1,3 +1,5 @@
+import { formatMoment } from '@shared/format/when';
+import { visitUid } from '../email/calendar-invite';
 import { and, desc, eq, isNotNull } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
 import { gradeChecks, jobs } from '../../db/schema';
@@ -37,9 +39,67 @@ export const askDetails: ActionDef<'ask-details'> = {
   emails: { to: ['applicant'], ownerNoteLead: 'The office asks:' },
 };
 
+const visitTitle = (reference: string) => `Site visit for your driveway entrance (${reference})`;
+const visitWords =
+  'The office comes to measure the road edge, the ditch and the ground where the entrance will go. You do not need to be home; please leave the entrance area clear.';
+
+/** Each visit e-mail carries the visit's one invitation: the same id every time, its revision raised each time. */
 export const bookVisit: ActionDef<'book-visit'> = {
   emails: { to: ['applicant'] },
-  run: async ({ body }) => ({ patch: { visitAt: new Date(body.visitAt) } }),
+  run: async ({ body, row, timeZone }) => {
+    const at = new Date(body.visitAt);
+    return {
+      patch: { visitAt: at, visitSequence: row.visitSequence + 1 },
+      emailDetail: `Site visit: ${formatMoment(at, timeZone)}. A calendar invitation is attached.`,
+      ownerCalendar: {
+        uid: visitUid(row.id),
+        sequence: row.visitSequence,
+        cancelled: false,
+        when: { at, minutes: 60 },
+        title: visitTitle(row.reference),
+        description: visitWords,
+      },
+    };
+  },
+};
+
+export const rescheduleVisit: ActionDef<'reschedule-visit'> = {
+  emails: { to: ['applicant'] },
+  run: async ({ body, row, timeZone }) => {
+    const at = new Date(body.visitAt);
+    const before = row.visitAt ? ` (it was ${formatMoment(row.visitAt, timeZone)})` : '';
+    return {
+      patch: { visitAt: at, visitSequence: row.visitSequence + 1 },
+      emailDetail: `The site visit moves to ${formatMoment(at, timeZone)}${before}. The attached invitation updates your calendar.`,
+      ownerCalendar: {
+        uid: visitUid(row.id),
+        sequence: row.visitSequence,
+        cancelled: false,
+        when: { at, minutes: 60 },
+        title: visitTitle(row.reference),
+        description: visitWords,
+      },
+    };
+  },
+};
+
+export const cancelVisit: ActionDef<'cancel-visit'> = {
+  emails: { to: ['applicant'] },
+  run: async ({ row, timeZone }) => {
+    const at = row.visitAt ?? new Date();
+    return {
+      patch: { visitAt: null, visitSequence: row.visitSequence + 1 },
+      emailDetail: `The site visit of ${formatMoment(at, timeZone)} is called off. The office will book a new one; the attached notice removes it from your calendar.`,
+      ownerCalendar: {
+        uid: visitUid(row.id),
+        sequence: row.visitSequence,
+        cancelled: true,
+        when: { at, minutes: 60 },
+        title: visitTitle(row.reference),
+        description: 'Called off by the office.',
+      },
+    };
+  },
 };
 
 export const markChecked: ActionDef<'mark-checked'> = {

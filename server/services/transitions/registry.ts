@@ -3,6 +3,8 @@ import { acceptJob, handBack, markBuilt, startWork } from './crew-actions';
 import {
   askDetails,
   bookVisit,
+  cancelVisit,
+  rescheduleVisit,
   close,
   decline,
   filePermit,
@@ -23,6 +25,8 @@ export const actionDefs: ActionDefs = {
   'ask-details': askDetails,
   answer,
   'book-visit': bookVisit,
+  'reschedule-visit': rescheduleVisit,
+  'cancel-visit': cancelVisit,
   'mark-checked': markChecked,
   'file-permit': filePermit,
   'record-granted': recordGranted,

@@ -12,6 +12,7 @@ const navByRole: Record<Role, { to: string; label: string }[]> = {
   ],
   staff: [
     { to: paths.office.queue.getHref(), label: 'Queue' },
+    { to: paths.office.calendar.getHref(), label: 'Calendar' },
     { to: paths.office.ruleProfiles.getHref(), label: 'Rule profiles' },
     { to: paths.office.emails.getHref(), label: 'E-mail log' },
   ],
@@ -21,6 +22,7 @@ const navByRole: Record<Role, { to: string; label: string }[]> = {
   ],
   admin: [
     { to: paths.office.queue.getHref(), label: 'Queue' },
+    { to: paths.office.calendar.getHref(), label: 'Calendar' },
     { to: paths.office.ruleProfiles.getHref(), label: 'Rule profiles' },
     { to: paths.office.emails.getHref(), label: 'E-mail log' },
     { to: paths.office.users.getHref(), label: 'Users and roles' },

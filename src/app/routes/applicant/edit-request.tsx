@@ -8,12 +8,8 @@ import { useRequest } from '@/features/requests/api/get-request';
 import { RequestWizard, type PhotoSlotProps } from '@/features/requests/components/request-wizard';
 
 // The wizard's photos: added on their step, shown read-only on the summary.
-function WizardPhotos({ requestId, readOnly, onUsePosition }: PhotoSlotProps) {
-  return readOnly ? (
-    <PhotoGallery requestId={requestId} />
-  ) : (
-    <PhotoStep requestId={requestId} onUsePosition={onUsePosition} />
-  );
+function WizardPhotos({ requestId, readOnly, ...position }: PhotoSlotProps) {
+  return readOnly ? <PhotoGallery requestId={requestId} /> : <PhotoStep requestId={requestId} {...position} />;
 }
 
 export function Component() {

@@ -1,4 +1,4 @@
-import type { GradeCheckRequestHeader, GradeCheckView } from '@shared/contracts/grade-checks';
+import type { GradeCheckDraftView, GradeCheckRequestHeader, GradeCheckView } from '@shared/contracts/grade-checks';
 import { officeRoles } from '@shared/workflow/roles';
 import { Link, useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
@@ -6,6 +6,7 @@ import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { PageHeader, Panel } from '@/components/ui/panel';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { paths } from '@/config/paths';
+import { useGradeCheckDraft } from '@/features/grade-check/api/get-grade-check-draft';
 import { useGradeChecks } from '@/features/grade-check/api/get-grade-checks';
 import { DocumentsList } from '@/features/grade-check/components/documents-list';
 import { GradeCheckWorkspace } from '@/features/grade-check/components/grade-check-workspace';
@@ -13,9 +14,25 @@ import { SavedChecks } from '@/features/grade-check/components/saved-checks';
 import { useRuleProfileChoice } from '@/features/rule-profiles/components/use-rule-profile-choice';
 
 // Mounted once the request is loaded, so the picker starts on the request's own road authority.
+// The caller's survey draft is read first, so the form and the picker open on what was typed.
 function Workspace({ request, checks }: { request: GradeCheckRequestHeader; checks: GradeCheckView[] }) {
-  const ruleProfile = useRuleProfileChoice(request.jurisdictionId);
-  return <GradeCheckWorkspace request={request} checks={checks} ruleProfile={ruleProfile} />;
+  const draft = useGradeCheckDraft(request.id);
+  if (draft.isPending) return <Loading label="Loading your survey draft…" />;
+  if (draft.error) return <ErrorNotice error={draft.error} />;
+  return <DraftedWorkspace request={request} checks={checks} draft={draft.data.draft} />;
+}
+
+function DraftedWorkspace({
+  request,
+  checks,
+  draft,
+}: {
+  request: GradeCheckRequestHeader;
+  checks: GradeCheckView[];
+  draft: GradeCheckDraftView | null;
+}) {
+  const ruleProfile = useRuleProfileChoice(request.jurisdictionId, draft?.ruleProfileVersionId ?? null);
+  return <GradeCheckWorkspace request={request} checks={checks} ruleProfile={ruleProfile} draft={draft} />;
 }
 
 function GradeCheckPage({ id }: { id: string }) {

@@ -5,7 +5,13 @@ import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import type { GradeCheckRequestHeader, GradeCheckView } from '@shared/contracts/grade-checks';
 import type { RuleProfile } from '@shared/engine';
+import type { GradeCheckDraftView } from '@shared/contracts/grade-checks';
+import { formatMoment } from '@shared/format/when';
+import { useDiscardGradeCheckDraft } from '../api/discard-grade-check-draft';
 import { useSaveGradeCheck } from '../api/save-grade-check';
+import { surveyFromDraft } from '../lib/survey-draft';
+import { useDraftAutosave, type DraftState } from '../lib/use-draft-autosave';
+import { LeaveSurveyGuard } from './leave-survey-guard';
 import { surveyFromInputs } from '../lib/survey-from-inputs';
 import { initialSurvey, type SurveyState } from '../lib/survey-state';
 import { useLiveCheck } from '../lib/use-live-check';
@@ -26,6 +32,38 @@ export interface ChosenRuleProfile {
   versionId: string | null;
   rules: RuleProfile | undefined;
   loadingRules: boolean;
+  /** Take up the version a survey was checked against. */
+  choose: (versionId: string) => void;
+}
+
+/** Whether the typing is kept on the server, and a way to start the survey over. */
+function DraftLine({
+  state,
+  restored,
+  onStartOver,
+}: {
+  state: DraftState;
+  restored: boolean;
+  onStartOver: () => void;
+}) {
+  const words =
+    state.kind === 'waiting'
+      ? 'Keeping your draft…'
+      : state.kind === 'failed'
+        ? `Your draft could not be kept: ${state.error instanceof Error ? state.error.message : 'no answer'}. It is tried again as you type.`
+        : state.at
+          ? `${restored ? 'Your draft is back, as' : 'Draft'} kept ${formatMoment(state.at)}.`
+          : 'What you type is kept as your draft until you save it as a check.';
+  return (
+    <div className="flex flex-wrap items-center justify-between gap-2 text-sm">
+      <p role="status" className={state.kind === 'failed' ? 'font-semibold text-red-900' : 'text-stone-600'}>
+        {words}
+      </p>
+      <Button variant="quiet" onClick={onStartOver}>
+        Start the survey over
+      </Button>
+    </div>
+  );
 }
 
 /** Survey entry on the left, the live check on the right; saving asks the server to run and keep the check. */
@@ -33,15 +71,46 @@ export function GradeCheckWorkspace({
   request,
   checks,
   ruleProfile,
+  draft,
 }: {
   request: GradeCheckRequestHeader;
   checks: GradeCheckView[];
   ruleProfile: ChosenRuleProfile;
+  /** The caller's survey draft, read once when the screen opened. */
+  draft: GradeCheckDraftView | null;
 }) {
-  const [survey, setSurvey] = useState<SurveyState>(() => initialSurvey(request.application.site?.postedSpeedMph));
+  const speedMph = request.application.site?.postedSpeedMph;
+  const [survey, setSurvey] = useState<SurveyState>(() =>
+    draft ? surveyFromDraft(draft.survey, speedMph) : initialSurvey(speedMph),
+  );
   const { rules, versionId } = ruleProfile;
   const live = useLiveCheck(survey, rules);
   const save = useSaveGradeCheck(request.id);
+  const discard = useDiscardGradeCheckDraft();
+  const autosave = useDraftAutosave({
+    requestId: request.id,
+    survey,
+    versionId,
+    keptAt: draft ? new Date(draft.updatedAt) : null,
+  });
+  const startOver = async () => {
+    const fresh = initialSurvey(speedMph);
+    setSurvey(fresh);
+    autosave.setBaseline(fresh);
+    save.reset();
+    await autosave.settle();
+    discard.mutate(request.id);
+  };
+  const saveCheck = async () => {
+    if (!live.inputs || !versionId) return;
+    const saving = survey;
+    // A draft still on its way must land before the check, whose save removes it.
+    await autosave.settle();
+    save.mutate(
+      { requestId: request.id, ruleProfileVersionId: versionId, inputs: live.inputs },
+      { onSuccess: () => autosave.setBaseline(saving) },
+    );
+  };
 
   const update =
     <K extends keyof SurveyState>(part: K) =>
@@ -63,7 +132,10 @@ export function GradeCheckWorkspace({
 
   return (
     <div className="grid grid-cols-[minmax(0,1fr)] gap-6 xl:grid-cols-[minmax(0,5fr)_minmax(0,6fr)]">
+      <LeaveSurveyGuard changed={autosave.changed} draft={autosave.state} settle={autosave.settle} />
       <div className="space-y-6">
+        <DraftLine state={autosave.state} restored={Boolean(draft)} onStartOver={() => void startOver()} />
+        <ErrorNotice error={discard.error} />
         <Panel title="Rule profile">
           {ruleProfile.picker}
           {checks.length > 0 && (
@@ -75,6 +147,7 @@ export function GradeCheckWorkspace({
                   variant="secondary"
                   onClick={() => {
                     setSurvey(surveyFromInputs(c.inputs));
+                    ruleProfile.choose(c.ruleProfileVersionId);
                     save.reset();
                   }}
                 >
@@ -107,14 +180,7 @@ export function GradeCheckWorkspace({
         <Panel
           title="Live check"
           actions={
-            <Button
-              disabled={!live.ready || !versionId || save.isPending}
-              onClick={() =>
-                live.inputs &&
-                versionId &&
-                save.mutate({ requestId: request.id, ruleProfileVersionId: versionId, inputs: live.inputs })
-              }
-            >
+            <Button disabled={!live.ready || !versionId || save.isPending} onClick={() => void saveCheck()}>
               {save.isPending ? 'Saving…' : 'Save this check'}
             </Button>
           }

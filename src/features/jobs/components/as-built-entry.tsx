@@ -1,5 +1,6 @@
 import { useMemo, useState, type FormEvent } from 'react';
-import type { AsBuiltPageView } from '@shared/crew/crew-views';
+import type { AsBuiltPageView, AsBuiltSetView } from '@shared/crew/crew-views';
+import { formatMoment } from '@shared/format/when';
 import { Button } from '@/components/ui/button';
 import { Field, TextArea } from '@/components/ui/field';
 import { ErrorNotice, Notice } from '@/components/ui/notice';
@@ -11,15 +12,25 @@ import { checkRows, checkWholeSet, type ReadingRow } from './reading-checks';
 import { ReadingsTable } from './readings-table';
 import { SavedSets } from './saved-sets';
 import { StatusWords } from './status-words';
-import { pct } from './format';
+import { pct, station } from './format';
 
 let nextKey = 1;
 const emptyRow = (kind: ReadingRow['kind'] = 'grade'): ReadingRow => ({ key: nextKey++, station: '', kind, value: '' });
+/** A saved set back in the form, reading for reading, to be corrected and saved again. */
+const rowsOf = (set: AsBuiltSetView): ReadingRow[] =>
+  set.readings.map((r) =>
+    r.gradePercent !== undefined
+      ? { key: nextKey++, station: station(r.stationFt), kind: 'grade', value: String(r.gradePercent) }
+      : { key: nextKey++, station: station(r.stationFt), kind: 'elevation', value: String(r.elevationFt ?? '') },
+  );
 
 /** Readings as they are taken on site, each judged at once; the set is saved and judged again by the server. */
 export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnter: boolean }) {
-  const [rows, setRows] = useState<ReadingRow[]>(() => [emptyRow()]);
-  const [note, setNote] = useState('');
+  // The form opens on the latest saved set, so fixing one reading never means typing the others again.
+  const latest = page.sets[0] ?? null;
+  const [editing, setEditing] = useState<AsBuiltSetView | null>(latest);
+  const [rows, setRows] = useState<ReadingRow[]>(() => (latest ? rowsOf(latest) : [emptyRow()]));
+  const [note, setNote] = useState(latest?.note ?? '');
   const save = useSaveAsBuilt();
   const basis = useMemo(
     () => ({ ruleProfile: page.ruleProfile, design: page.design, roadEdgeStationFt: page.roadEdgeStationFt }),
@@ -39,14 +50,16 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
     event.preventDefault();
     const readings = checks.flatMap((c) => (c.reading ? [c.reading] : []));
     save.mutate(
-      { id: page.job.requestId, readings, note: note || undefined },
-      {
-        onSuccess: () => {
-          setRows([emptyRow()]);
-          setNote('');
-        },
-      },
+      { id: page.job.requestId, readings, note: note || undefined, replacesSetId: editing?.id },
+      // The set stays in the form as saved: the next save corrects it.
+      { onSuccess: ({ set }) => setEditing(set) },
     );
+  };
+  const startEmpty = () => {
+    setEditing(null);
+    setRows([emptyRow()]);
+    setNote('');
+    save.reset();
   };
 
   return (
@@ -60,14 +73,22 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
       {open ? (
         <Panel title="Enter readings along the centreline">
           <form onSubmit={submit} noValidate className="space-y-4">
+            {editing ? (
+              <div className="flex flex-wrap items-center justify-between gap-2 text-base">
+                <p>
+                  Editing the set from {formatMoment(editing.createdAt)}. Change what needs changing and save: the
+                  corrected set is saved as a new one and the earlier one is kept.
+                </p>
+                <Button variant="secondary" onClick={startEmpty} className="min-h-12 px-5 text-base">
+                  Start an empty set
+                </Button>
+              </div>
+            ) : null}
             <ReadingsTable
               rows={rows}
               checks={checks}
               basis={basis}
-              serverFields={fields}
-              onChange={change}
-              onRemove={remove}
-            />
+              serverFields={fields} onChange={change} onRemove={remove} />
             <div className="flex flex-wrap gap-3">
               <Button
                 variant="secondary"
@@ -94,9 +115,13 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
               )}
             </Field>
             {save.error && <ErrorNotice error={save.error} />}
-            {save.isSuccess && <Notice title="Set saved">The server checked it: see the latest set below.</Notice>}
+            {save.isSuccess && (
+              <Notice title="Set saved">
+                The server checked it: see the latest set below. The readings stay here to correct and save again.
+              </Notice>
+            )}
             <Button type="submit" disabled={save.isPending || !whole} className="min-h-12 px-6 text-base">
-              Save this set
+              {editing ? 'Save the corrected set' : 'Save this set'}
             </Button>
           </form>
         </Panel>

@@ -2,7 +2,8 @@ import type { AsBuiltReadingInput } from '@shared/crew/crew-inputs';
 import { countOf } from '@shared/format/counts';
 import type { AsBuiltSetView } from '@shared/crew/crew-views';
 import type { AsBuiltReadingResult } from '@shared/engine';
-import { day, ft, pct, station } from './format';
+import { formatMoment } from '@shared/format/when';
+import { ft, pct, station } from './format';
 import { designWords, type CheckBasis } from './reading-checks';
 import { StatusWords, resultWords } from './status-words';
 
@@ -72,30 +73,41 @@ export function SavedSets({ sets, basis }: { sets: AsBuiltSetView[]; basis: Chec
   if (sets.length === 0) return <p>No readings saved yet.</p>;
   return (
     <ul className="space-y-3">
-      {sets.map((set, n) => (
-        <li key={set.id} className="rounded-lg border-2 border-stone-300 bg-white p-3">
-          <p className="flex flex-wrap items-center gap-2 font-semibold">
-            <StatusWords status={set.status} /> {n === 0 ? 'Latest set' : 'Earlier set'} ·{' '}
-            {countOf(set.readings.length, 'reading')} · {set.crewName} · {day(set.createdAt)}
-          </p>
-          {set.note && <p className="mt-1">Note: {set.note}</p>}
-          <ul className="mt-2 space-y-0.5 text-base">
-            {set.results
-              .filter((r) => r.status !== 'pass')
-              .map((r) => (
-                <li key={`${r.ruleId}-${r.stationFt}`}>
-                  {station(r.stationFt)}: <StatusWords status={r.status} /> {resultWords(r)}
-                </li>
-              ))}
-            {set.results.every((r) => r.status === 'pass') && <li>Every reading is inside the limits.</li>}
-          </ul>
-          <EveryReading
-            set={set}
-            basis={basis}
-            caption={`Every reading in the ${n === 0 ? 'latest' : 'earlier'} set, by station`}
-          />
-        </li>
-      ))}
+      {sets.map((set, n) => {
+        const corrects = set.replacesSetId ? sets.find((s) => s.id === set.replacesSetId) : undefined;
+        const correctedBy = sets.find((s) => s.replacesSetId === set.id);
+        return (
+          <li key={set.id} className="rounded-lg border-2 border-stone-300 bg-white p-3">
+            <p className="flex flex-wrap items-center gap-2 font-semibold">
+              <StatusWords status={set.status} /> {n === 0 ? 'Latest set' : 'Earlier set'} · {countOf(set.readings.length, 'reading')} · {set.crewName} · {formatMoment(set.createdAt)}
+            </p>
+            {set.replacesSetId && (
+              <p className="text-base text-stone-700">
+                Corrects the set of {corrects ? formatMoment(corrects.createdAt) : 'earlier'}.
+              </p>
+            )}
+            {correctedBy && (
+              <p className="text-base text-stone-700">Corrected by the set of {formatMoment(correctedBy.createdAt)}.</p>
+            )}
+            {set.note && <p className="mt-1">Note: {set.note}</p>}
+            <ul className="mt-2 space-y-0.5 text-base">
+              {set.results
+                .filter((r) => r.status !== 'pass')
+                .map((r) => (
+                  <li key={`${r.ruleId}-${r.stationFt}`}>
+                    {station(r.stationFt)}: <StatusWords status={r.status} /> {resultWords(r)}
+                  </li>
+                ))}
+              {set.results.every((r) => r.status === 'pass') && <li>Every reading is inside the limits.</li>}
+            </ul>
+            <EveryReading
+              set={set}
+              basis={basis}
+              caption={`Every reading in the ${n === 0 ? 'latest' : 'earlier'} set, by station`}
+            />
+          </li>
+        );
+      })}
     </ul>
   );
 }

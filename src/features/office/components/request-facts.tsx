@@ -1,7 +1,9 @@
 import type { ReactNode } from 'react';
 import { StatusBadge } from '@/components/ui/status-badge';
 import type { OfficeRequestView as OfficeRequest } from '@shared/contracts/requests';
+import { formatDay } from '@shared/format/when';
 import { AssignControl } from './assign-control';
+import { SitePositionControl } from './site-position-form';
 import { formatWhen, timeInStatus } from './time-in-status';
 
 /** The few facts the office checks first, above the full application. */
@@ -20,6 +22,12 @@ export function RequestFacts({ request, meId }: { request: OfficeRequest; meId: 
     ['Sent to the office', formatWhen(request.submittedAt)],
     ['Site visit', formatWhen(request.visitAt)],
     [
+      'Site position',
+      <SitePositionControl key="p" requestId={request.id} lat={request.siteLat} lng={request.siteLng} />,
+    ],
+    ['Crew lead', request.crewLeadName || '—'],
+    ['Work day', request.workDay ? formatDay(request.workDay) : '—'],
+    [
       'Permit',
       request.permitReference
         ? `${request.permitReference}${request.permitDecidedOn ? `, decided ${request.permitDecidedOn}` : ''}${request.permitExpiresOn ? `, expires ${request.permitExpiresOn}` : ''}`
@@ -30,7 +38,7 @@ export function RequestFacts({ request, meId }: { request: OfficeRequest; meId: 
       <AssignControl key="a" requestId={request.id} assigneeId={request.assigneeId} meId={meId} label="Assignee" />,
     ],
   ];
-  if (request.permitConditions) rows.splice(7, 0, ['Permit conditions', request.permitConditions]);
+  if (request.permitConditions) rows.splice(10, 0, ['Permit conditions', request.permitConditions]);
   return (
     <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[12rem_1fr]">
       {rows.map(([label, value]) => (

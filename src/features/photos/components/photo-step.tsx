@@ -14,20 +14,45 @@ interface PhotoStepProps {
   requestId: string;
   /** Absent once the answers can no longer change: then a photo's position is not offered. */
   onUsePosition?: (lat: number, lng: number) => Promise<void>;
+  onDeclinePosition?: () => Promise<void>;
+  /** The site position already given: a photo's position is offered only while there is none. */
+  position?: { lat: number; lng: number } | null;
+  /** The owner already said no to a photo's position. */
+  positionDeclined?: boolean;
 }
 
 /** Adding photos: what the office needs to see, the upload area, and what is already stored. */
-export function PhotoStep({ requestId, onUsePosition }: PhotoStepProps) {
+export function PhotoStep({
+  requestId,
+  onUsePosition,
+  onDeclinePosition,
+  position = null,
+  positionDeclined = false,
+}: PhotoStepProps) {
   const queryClient = useQueryClient();
-  const stored = usePhotos(requestId).data?.photos.length ?? 0;
+  const photos = usePhotos(requestId).data?.photos;
+  const stored = photos?.length ?? 0;
   const [problems, setProblems] = useState<string[]>([]);
-  const [offer, setOffer] = useState<{ lat: number; lng: number } | null>(null);
+  const [fresh, setFresh] = useState<{ lat: number; lng: number } | null>(null);
   const [used, setUsed] = useState(false);
+  const [answering, setAnswering] = useState(false);
+  // The offer stays until it is answered: a stored photo's position is offered again when the owner comes back.
+  const storedWithPosition = photos?.find((p) => p.gpsLat !== null && p.gpsLng !== null);
+  const offer =
+    fresh ?? (storedWithPosition ? { lat: storedWithPosition.gpsLat!, lng: storedWithPosition.gpsLng! } : null);
+  const offered = Boolean(offer && onUsePosition && !position && !positionDeclined && !used);
   const refresh = () => queryClient.invalidateQueries({ queryKey: photoKeys.ofRequest(requestId) });
-  const accept = async () => {
-    if (!offer || !onUsePosition) return;
-    await onUsePosition(offer.lat, offer.lng);
-    setUsed(true);
+  const answer = async (use: boolean) => {
+    if (!offer) return;
+    setAnswering(true);
+    try {
+      if (use && onUsePosition) {
+        await onUsePosition(offer.lat, offer.lng);
+        setUsed(true);
+      } else if (!use && onDeclinePosition) await onDeclinePosition();
+    } finally {
+      setAnswering(false);
+    }
   };
   return (
     <div className="space-y-4">
@@ -35,15 +60,22 @@ export function PhotoStep({ requestId, onUsePosition }: PhotoStepProps) {
         Photos save the office a trip. Stand at the road edge where the entrance will go and take: the road to the left,
         the road to the right, the ditch, and the ground towards the house. Up to {maxPhotosPerRequest} photos.
       </p>
-      {offer && onUsePosition && !used && (
+      {offered && offer && (
         <Notice title="A photo knows where it was taken">
           <p>
             {offer.lat.toFixed(5)}, {offer.lng.toFixed(5)}. Use this as the position of the entrance? Only the position
             is kept, nothing else from the photo.
           </p>
-          <Button variant="secondary" className="mt-2" onClick={() => void accept()}>
-            Use this position
-          </Button>
+          <div className="mt-2 flex flex-wrap gap-2">
+            <Button variant="secondary" disabled={answering} onClick={() => void answer(true)}>
+              Use this position
+            </Button>
+            {onDeclinePosition && (
+              <Button variant="quiet" disabled={answering} onClick={() => void answer(false)}>
+                No, the entrance is not there
+              </Button>
+            )}
+          </div>
         </Notice>
       )}
       {used && <Notice>The site position is now set from your photo. You can change it in step 1.</Notice>}
@@ -60,7 +92,7 @@ export function PhotoStep({ requestId, onUsePosition }: PhotoStepProps) {
             requestId={requestId}
             room={maxPhotosPerRequest - stored}
             onStored={() => void refresh()}
-            onPosition={(lat, lng) => setOffer((current) => current ?? { lat, lng })}
+            onPosition={(lat, lng) => setFresh((current) => current ?? { lat, lng })}
             onProblem={(message) => setProblems((list) => [...list, message])}
           />
         </Suspense>

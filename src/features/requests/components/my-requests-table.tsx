@@ -3,6 +3,7 @@ import { Link } from 'react-router';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useMyRequests } from '../api/get-my-requests';
+import { DeleteDraftButton } from './delete-draft-button';
 
 const when = (iso: string) => formatDay(iso);
 
@@ -60,6 +61,11 @@ export function MyRequestsTable({ hrefFor }: { hrefFor: (id: string, status: str
                 className={`py-3 ${r.expected === 'Nothing for now' ? 'text-stone-500' : 'font-semibold text-amber-900'}`}
               >
                 {r.expected}
+                {r.status === 'draft' && (
+                  <div className="mt-1 font-normal">
+                    <DeleteDraftButton requestId={r.id} reference={r.reference} />
+                  </div>
+                )}
               </td>
             </tr>
           ))}

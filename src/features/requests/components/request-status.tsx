@@ -7,6 +7,7 @@ import { StatusBadge } from '@/components/ui/status-badge';
 import { ApiError } from '@/lib/api-client';
 import { useRunTransition } from '@/lib/status-change';
 import type { RequestView } from '@shared/contracts/requests';
+import { formatDay, formatTime } from '@shared/format/when';
 
 /** Where the request stands in plain words, and the applicant's own moves from here. */
 interface RequestStatusProps {
@@ -25,6 +26,7 @@ export function RequestStatus({ request, editHref, question }: RequestStatusProp
         <StatusBadge status={request.status} />
         <p className="text-stone-700">{request.whatNext}</p>
       </div>
+      <Dates request={request} />
       {request.status === 'draft' && (
         <Link
           to={editHref}
@@ -42,6 +44,38 @@ export function RequestStatus({ request, editHref, question }: RequestStatusProp
       )}
       <ErrorNotice error={transition.error} />
     </div>
+  );
+}
+
+/** When someone comes to the site: the office's visit while it is booked, and the crew's work day once set. */
+function Dates({ request }: { request: RequestView }) {
+  const visit = request.status === 'visit_booked' && request.visitAt ? request.visitAt : null;
+  const workDay = request.workDay && ['crew_assigned', 'under_construction'].includes(request.status);
+  if (!visit && !workDay) return null;
+  return (
+    <dl className="grid gap-x-4 gap-y-1 rounded-md border border-pine-200 bg-pine-50 p-3 sm:grid-cols-[10rem_1fr]">
+      {visit && (
+        <>
+          <dt className="font-semibold text-pine-900">Site visit</dt>
+          <dd>
+            {formatDay(visit)} at {formatTime(visit)}
+            <span className="block text-sm text-stone-600">
+              The office measures the road edge and the ground; you need not be home. The e-mail has a calendar
+              invitation.
+            </span>
+          </dd>
+        </>
+      )}
+      {workDay && request.workDay && (
+        <>
+          <dt className="font-semibold text-pine-900">Crew’s work day</dt>
+          <dd>
+            {formatDay(request.workDay)}
+            <span className="block text-sm text-stone-600">Please keep the entrance area clear of vehicles.</span>
+          </dd>
+        </>
+      )}
+    </dl>
   );
 }
 

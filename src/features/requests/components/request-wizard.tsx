@@ -22,6 +22,11 @@ export interface PhotoSlotProps {
   readOnly: boolean;
   /** A photo's GPS position, offered as the site position; saved as coordinates when the person accepts. */
   onUsePosition: (lat: number, lng: number) => Promise<void>;
+  /** The owner's no to that offer, kept with the answers so it is not asked again. */
+  onDeclinePosition: () => Promise<void>;
+  /** The site position already given, if any: a photo's position is offered only while there is none. */
+  position: { lat: number; lng: number } | null;
+  positionDeclined: boolean;
 }
 
 interface WizardProps {
@@ -166,6 +171,24 @@ function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> 
     const saved = await saveKeepingScreen({ id: request.id, site });
     version.current = saved.request.version;
   };
+  const declinePosition = async () => {
+    const site = { ...latest.application.site, photoPositionDeclined: true };
+    const saved = await saveKeepingScreen({ id: request.id, site });
+    version.current = saved.request.version;
+  };
+  const givenSite = latest.application.site;
+  const position =
+    givenSite?.positionKind === 'coordinates' &&
+    typeof givenSite.siteLat === 'number' &&
+    typeof givenSite.siteLng === 'number'
+      ? { lat: givenSite.siteLat, lng: givenSite.siteLng }
+      : null;
+  const photoPosition = {
+    onUsePosition: usePosition,
+    onDeclinePosition: declinePosition,
+    position,
+    positionDeclined: givenSite?.photoPositionDeclined === true,
+  };
   const stepKey = `${step}-${reloads}`;
 
   return (
@@ -211,14 +234,14 @@ function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> 
             className="space-y-5"
             aria-label="Photos"
           >
-            <Photos requestId={request.id} readOnly={false} onUsePosition={usePosition} />
+            <Photos requestId={request.id} readOnly={false} {...photoPosition} />
             <StepButtons saving={busy} onBack={() => void persist({}, 1)} />
           </form>
         )}
         {step === 3 && (
           <div className="space-y-6">
             <ApplicationSummary application={latest.application} />
-            <Photos requestId={request.id} readOnly onUsePosition={usePosition} />
+            <Photos requestId={request.id} readOnly {...photoPosition} />
             <p className="text-sm text-stone-600">
               {request.status === 'needs_details'
                 ? 'Your changes are saved. Answer the office’s question on the request page to send it back to them.'
