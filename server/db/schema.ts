@@ -360,3 +360,97 @@ export const rateLimits = pgTable(
   },
   (t) => [index('rate_limits_expire_idx').on(t.expire)],
 );
+
+export const paymentKindEnum = pgEnum('payment_kind', ['deposit', 'balance']);
+export const paymentMethodEnum = pgEnum('payment_method', ['card', 'offline']);
+export const checkoutStatusEnum = pgEnum('checkout_status', ['open', 'complete', 'expired']);
+
+/**
+ * A payment page asked of the provider for one amount due. While one is open for a request and kind, a second tab
+ * gets the same page (the partial unique key); the row's id is the idempotency key of the provider call, so two
+ * calls at once still make one page.
+ */
+export const paymentCheckouts = pgTable(
+  'payment_checkouts',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    kind: paymentKindEnum().notNull(),
+    /** The amount due when the page was made, from our own records. */
+    amountCents: bigint({ mode: 'number' }).notNull(),
+    currency: text().notNull(),
+    status: checkoutStatusEnum().notNull().default('open'),
+    providerSessionId: text().unique(),
+    url: text(),
+    createdById: uuid()
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+  },
+  (t) => [
+    uniqueIndex('payment_checkouts_one_open_key')
+      .on(t.requestId, t.kind)
+      .where(sql`${t.status} = 'open'`),
+  ],
+);
+
+/** Money received, by card through the provider or recorded by the office; one deposit and one balance per request. */
+export const payments = pgTable(
+  'payments',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    kind: paymentKindEnum().notNull(),
+    method: paymentMethodEnum().notNull(),
+    amountCents: bigint({ mode: 'number' }).notNull(),
+    currency: text().notNull(),
+    quoteId: uuid(),
+    checkoutId: uuid().references(() => paymentCheckouts.id),
+    providerSessionId: text().unique(),
+    providerPaymentIntentId: text(),
+    note: text().notNull().default(''),
+    recordedById: uuid().references(() => users.id),
+    paidAt: timestamp({ withTimezone: true }).notNull(),
+    createdAt: createdAt(),
+    refundedAt: timestamp({ withTimezone: true }),
+    refundedCents: bigint({ mode: 'number' }).notNull().default(0),
+    providerRefundId: text(),
+    refundNote: text().notNull().default(''),
+    refundedById: uuid().references(() => users.id),
+  },
+  (t) => [
+    uniqueIndex('payments_request_kind_key').on(t.requestId, t.kind),
+    index('payments_paid_idx').on(t.paidAt),
+  ],
+);
+
+/** Every provider notice taken in, by its event id: the same notice delivered twice is acted on once. */
+export const paymentProviderEvents = pgTable('payment_provider_events', {
+  eventId: text().primaryKey(),
+  type: text().notNull(),
+  objectId: text(),
+  receivedAt: createdAt(),
+});
+
+/** Changes to the price agreed with the owner after the quote (more pipe, less base): added to the balance. */
+export const balanceChanges = pgTable(
+  'balance_changes',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    description: text().notNull(),
+    amountCents: bigint({ mode: 'number' }).notNull(),
+    createdById: uuid()
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (t) => [index('balance_changes_request_idx').on(t.requestId)],
+);

@@ -1,7 +1,8 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdirSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { startStandIns } from '../../fakes';
+import { localPaymentKeys, startStandIns } from '../../fakes';
+import { paymentWebhookPath } from '@shared/contracts/payments';
 import { applyMigrations, createDb } from '../db/client';
 import { demoPeople } from './seed/demo-people';
 import { seedDemo } from './seed';
@@ -62,9 +63,11 @@ async function main() {
       smtpPort: devPorts.smtp,
       mailWebPort: devPorts.mailWeb,
       oauthPort: devPorts.oauth,
+      paymentsPort: devPorts.payments,
       bucket: devBucket,
       allowedOrigins: [appOrigin, `http://localhost:${devPorts.app}`],
       oauth: { ...devOAuthClient, redirectUris: [`${appOrigin}/auth/google/callback`], identities: demoPeople },
+      payments: { ...localPaymentKeys, webhookUrl: `${appOrigin}${paymentWebhookPath}` },
     });
     stops.push(() => standIns.stop());
 
@@ -93,6 +96,7 @@ async function main() {
         `  Sign-in picker:  ${standIns.oauth.authorizationUrl} (opens from the app's Sign in button)`,
         `  Mail catcher:    ${standIns.mail.webUrl}`,
         `  File storage:    ${standIns.s3.endpoint} (bucket ${standIns.s3.bucket})`,
+        `  Payments:        ${standIns.payments.url} (payment pages and the notices sent to the app)`,
         `  PostgreSQL:      ${databaseUrl}`,
         `  Data folder:     ${dataDir}`,
         '',

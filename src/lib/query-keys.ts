@@ -52,6 +52,18 @@ export const emailKeys = {
   one: (id: string) => ['emails', 'one', id] as const,
 };
 
+export const paymentKeys = {
+  /** Every request's GET /api/requests/:id/payments. */
+  requests: () => ['payments', 'request'] as const,
+  /** GET /api/requests/:id/payments */
+  ofRequest: (requestId: string) => ['payments', 'request', requestId] as const,
+  /** Every filtered view of GET /api/payments. */
+  lists: () => ['payments', 'list'] as const,
+  list: (state: string) => ['payments', 'list', state] as const,
+  /** GET /api/settings/payment-waits */
+  waits: () => ['payments', 'waits'] as const,
+};
+
 /** What a status change on one request can alter: the request, its history and (for an answer) its messages. */
 export const statusChangeKeys = (requestId: string) => [
   requestKeys.one(requestId),
