@@ -9,6 +9,7 @@ import {
   type updateQuoteInputSchema,
 } from '@shared/contracts/quotes';
 import { formatCents as formatMoney, lineAmountCents, quoteTotals } from '@shared/money/money';
+import { formatDay } from '@shared/format/dates';
 import { isOfficeRole } from '@shared/workflow/statuses';
 import type { RequestStatus } from '@shared/workflow/statuses';
 import type { RuleProfile } from '@shared/engine';
@@ -401,7 +402,7 @@ async function loadOwnersCurrentQuote(tx: DbOrTx, user: SessionUser, quoteId: st
   if (row.status === 'declined') throw conflict(`You already declined version ${row.version}.`);
   if (row.validUntil < todayIso())
     throw conflict(
-      `Version ${row.version} was valid until ${row.validUntil}; ask the office in the messages for a new one.`,
+      `Version ${row.version} was valid until ${formatDay(row.validUntil)}; ask the office in the messages for a new one.`,
     );
   assertOpen(request);
   return { row, request };

@@ -55,7 +55,7 @@ export function buildQuotePdf(data: QuotePdfData): Promise<Buffer> {
     .fillColor('#1c1f1d')
     .text(`Request ${request.reference} · ${request.applicantName} · ${request.siteAddress} on ${request.roadName}`);
   doc.text(
-    `${quote.sentAt ? `Sent ${formatDay(quote.sentAt, 'UTC')}. ` : ''}Valid until ${formatDay(quote.validUntil)}. Quantities from grade check ${data.checkNumber}; prices from rate card version ${data.rateCardVersion}.`,
+    `${quote.sentAt ? `Sent ${formatDay(quote.sentAt, { timeZone: 'UTC' })}. ` : ''}Valid until ${formatDay(quote.validUntil)}. Quantities from grade check ${data.checkNumber}; prices from rate card version ${data.rateCardVersion}.`,
   );
   doc.moveDown(0.6);
 
