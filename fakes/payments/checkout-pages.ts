@@ -38,7 +38,11 @@ export function checkoutPages({ store, findSession, pay }: PageOptions): Router 
   const confirmations = new Map<string, string>();
 
   const send = (res: Response, status: number, title: string, body: string) => {
-    res.status(status).setHeader('content-security-policy', pagePolicy).type('html').send(page(title, body, extraCss));
+    res
+      .status(status)
+      .setHeader('content-security-policy', pagePolicy)
+      .type('html')
+      .send(page(title, body, extraCss));
   };
   const lookup = (id: string) => {
     try {
@@ -48,7 +52,13 @@ export function checkoutPages({ store, findSession, pay }: PageOptions): Router 
     }
   };
   const closed = (res: Response, session: CheckoutSession | undefined) => {
-    if (!session) return send(res, 404, 'Payment page not found', '<h1>Payment page not found</h1><p>This link does not lead to a payment.</p>');
+    if (!session)
+      return send(
+        res,
+        404,
+        'Payment page not found',
+        '<h1>Payment page not found</h1><p>This link does not lead to a payment.</p>',
+      );
     if (session.status === 'complete') {
       return send(
         res,
@@ -105,7 +115,12 @@ export function checkoutPages({ store, findSession, pay }: PageOptions): Router 
     if (!session || session.status !== 'open') return closed(res, session);
     const token = confirmations.get(session.id);
     if (!token || token !== req.body?.token) {
-      return send(res, 400, 'Pay by card', cardForm(session, 'That confirmation is no longer valid; enter the card again.'));
+      return send(
+        res,
+        400,
+        'Pay by card',
+        cardForm(session, 'That confirmation is no longer valid; enter the card again.'),
+      );
     }
     confirmations.delete(session.id);
     if (req.body?.decision !== 'approve') {

@@ -176,7 +176,9 @@ export function createPaymentsApp(options: PaymentsAppOptions) {
   app.post('/v1/checkout/sessions/:id/expire', (req, res) => {
     const session = findSession(req.params.id);
     if (session.status !== 'open') {
-      throw invalid(`Only Checkout Sessions with a status in ["open"] can be expired. This one is "${session.status}".`);
+      throw invalid(
+        `Only Checkout Sessions with a status in ["open"] can be expired. This one is "${session.status}".`,
+      );
     }
     expire(session);
     res.json(sessionView(session, store));
@@ -196,7 +198,13 @@ export function createPaymentsApp(options: PaymentsAppOptions) {
     if (!intent) throw missing('payment_intent', intentId);
     const left = intent.amount_received - intent.amount_refunded;
     if (left <= 0) {
-      throw new ApiError(400, 'invalid_request_error', `Charge ${intent.latest_charge} has already been refunded.`, undefined, 'charge_already_refunded');
+      throw new ApiError(
+        400,
+        'invalid_request_error',
+        `Charge ${intent.latest_charge} has already been refunded.`,
+        undefined,
+        'charge_already_refunded',
+      );
     }
     const amount = body.amount === undefined ? left : integerParam(body.amount, 'amount', 1);
     if (amount > left) {

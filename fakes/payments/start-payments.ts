@@ -54,7 +54,9 @@ export async function startPaymentsStandIn(options: PaymentsStandInOptions): Pro
     maxAttempts: options.maxAttempts ?? 8,
   });
   let baseUrl = '';
-  const server = createServer(createPaymentsApp({ secretKey: options.secretKey, store, webhooks, baseUrl: () => baseUrl }));
+  const server = createServer(
+    createPaymentsApp({ secretKey: options.secretKey, store, webhooks, baseUrl: () => baseUrl }),
+  );
   const port = await listen(server, options.port ?? 0, host);
   baseUrl = urlFor(host, port);
   return {

@@ -53,7 +53,7 @@ export class WebhookSender {
       delivered: false,
     };
     this.store.save();
-    if (this.enabled) this.schedule(event.id, 0, 1);
+    if (this.enabled && !this.stopped) void this.track(this.attempt(event.id, 1, true));
     return event;
   }
 

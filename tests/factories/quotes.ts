@@ -14,7 +14,12 @@ export async function createSentQuote(
   const check = await createGradeCheck(db, { requestId: opts.requestId, createdById: opts.createdById });
   const [card] = await db
     .insert(rateCardVersions)
-    .values({ version: Math.floor(Math.random() * 1e9), status: 'published', prices: emptyPrices, publishedAt: new Date() })
+    .values({
+      version: Math.floor(Math.random() * 1e9),
+      status: 'published',
+      prices: emptyPrices,
+      publishedAt: new Date(),
+    })
     .returning();
   const [quote] = await db
     .insert(quotes)

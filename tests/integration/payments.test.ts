@@ -1,6 +1,6 @@
 import { createServer, type Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { and, eq } from 'drizzle-orm';
+import { asc, eq } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { paymentWebhookPath } from '@shared/contracts/payments';
 import { signatureHeader, startPaymentsStandIn, testCards, type PaymentsStandIn } from '../../fakes';
@@ -56,7 +56,10 @@ const sessionUser = (who: Cast['applicant']) => ({ id: who.id, email: who.email,
 
 /** A request of the cast's owner with a quote accepted by typing their name, as the owner's page does. */
 async function acceptedRequest(opts: { status?: RequestStatus; totalCents?: number; depositCents?: number } = {}) {
-  const request = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: opts.status ?? 'checked' });
+  const request = await createRequestRow(t.ctx.db, {
+    applicantId: cast.applicant.id,
+    status: opts.status ?? 'checked',
+  });
   const quote = await createSentQuote(t.ctx.db, {
     requestId: request.id,
     createdById: cast.staff.id,
@@ -93,7 +96,8 @@ const receiptsOf = (requestId: string) =>
   t.ctx.db
     .select()
     .from(emails)
-    .where(and(eq(emails.requestId, requestId)))
+    .where(eq(emails.requestId, requestId))
+    .orderBy(asc(emails.createdAt))
     .then((rows) => rows.filter((r) => r.template.startsWith('payment.')));
 
 describe('paying the deposit through the provider', () => {
@@ -139,7 +143,10 @@ describe('paying the deposit through the provider', () => {
     const request = await acceptedRequest();
     await payOnPage(await startCheckout(request));
     await provider.settle();
-    const completed = provider.deliveries().filter((d) => d.type === 'checkout.session.completed').at(-1)!;
+    const completed = provider
+      .deliveries()
+      .filter((d) => d.type === 'checkout.session.completed')
+      .at(-1)!;
     expect(completed.delivered).toBe(true);
     await provider.resendEvent(completed.eventId);
     await provider.resendEvent(completed.eventId);
@@ -328,7 +335,10 @@ describe('who may do what', () => {
       .post(`/api/payments/${paymentId}/refund`)
       .send({ note: 'Owner withdrew before the permit' })
       .expect(200);
-    expect(refunded.body.payments[0]).toMatchObject({ refundedCents: 370_370, refundNote: 'Owner withdrew before the permit' });
+    expect(refunded.body.payments[0]).toMatchObject({
+      refundedCents: 370_370,
+      refundNote: 'Owner withdrew before the permit',
+    });
   });
 });
 
@@ -338,7 +348,10 @@ describe('refunds', () => {
     await payOnPage(await startCheckout(request));
     await provider.settle();
     const [payment] = await paymentsOf(request.id);
-    const early = await cast.admin.agent.post(`/api/payments/${payment.id}/refund`).send({ note: 'Too soon' }).expect(409);
+    const early = await cast.admin.agent
+      .post(`/api/payments/${payment.id}/refund`)
+      .send({ note: 'Too soon' })
+      .expect(409);
     expect(early.body.error.message).toContain('still going ahead');
 
     await t.ctx.db.update(requests).set({ status: 'withdrawn' }).where(eq(requests.id, request.id));
@@ -438,10 +451,7 @@ describe('the balance and where the workflow waits', () => {
 describe('the office payments view', () => {
   it('lists paid, outstanding and refunded, and exports them as CSV for the bookkeeper', async () => {
     const request = await acceptedRequest();
-    await t.ctx.db
-      .update(requests)
-      .set({ applicantName: 'Marsh, Ellen "Nell"' })
-      .where(eq(requests.id, request.id));
+    await t.ctx.db.update(requests).set({ applicantName: 'Marsh, Ellen "Nell"' }).where(eq(requests.id, request.id));
     const list = await cast.staff.agent.get('/api/payments?state=outstanding').expect(200);
     expect(list.body.rows.find((r: { requestId: string }) => r.requestId === request.id)).toMatchObject({
       state: 'outstanding',

@@ -33,18 +33,14 @@ import { takeWebhook } from '../../services/payments/webhook.service';
  */
 export function paymentWebhookRouter(ctx: AppContext) {
   const router = Router();
-  router.post(
-    paymentWebhookPath,
-    express.raw({ type: () => true, limit: '256kb' }),
-    async (req, res, next) => {
-      try {
-        const body = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
-        res.json(await takeWebhook(ctx, body, req.headers['stripe-signature'] as string | undefined));
-      } catch (error) {
-        next(error);
-      }
-    },
-  );
+  router.post(paymentWebhookPath, express.raw({ type: () => true, limit: '256kb' }), async (req, res, next) => {
+    try {
+      const body = Buffer.isBuffer(req.body) ? req.body : Buffer.alloc(0);
+      res.json(await takeWebhook(ctx, body, req.headers['stripe-signature'] as string | undefined));
+    } catch (error) {
+      next(error);
+    }
+  });
   return router;
 }
 
@@ -65,8 +61,7 @@ export function paymentsRouter(ctx: AppContext) {
     requireRole('applicant'),
     handle(
       { params: uuidParam, body: startCheckoutInputSchema },
-      async ({ params, body, user }) =>
-        (await startCheckout(ctx, user, params.id, body.kind)) satisfies CheckoutAnswer,
+      async ({ params, body, user }) => (await startCheckout(ctx, user, params.id, body.kind)) satisfies CheckoutAnswer,
     ),
   );
   router.post(
@@ -129,7 +124,10 @@ export function paymentsRouter(ctx: AppContext) {
   router.put(
     '/api/settings/payment-waits',
     requireRole('admin'),
-    handle({ body: paymentWaitsSchema }, async ({ body }) => (await savePaymentWaits(ctx.db, body)) satisfies PaymentWaits),
+    handle(
+      { body: paymentWaitsSchema },
+      async ({ body }) => (await savePaymentWaits(ctx.db, body)) satisfies PaymentWaits,
+    ),
   );
   return router;
 }

@@ -42,11 +42,19 @@ export function paymentReceiptEmail(input: ReceiptInput): OutgoingEmail {
   ];
   if (input.note) paragraphs.push(`Note: ${input.note}`);
   paragraphs.push(input.whatNext);
-  return build(input, `payment.receipt.${input.kind}`, `Receipt: ${what} of ${formatCents(input.amountCents)} for ${input.request.reference}`, {
-    greeting: `Hello ${input.owner.name},`,
-    paragraphs,
-    link: { href: input.appOrigin + sharedPaths.applicantRequest.getHref(input.request.id), label: 'See your request' },
-  });
+  return build(
+    input,
+    `payment.receipt.${input.kind}`,
+    `Receipt: ${what} of ${formatCents(input.amountCents)} for ${input.request.reference}`,
+    {
+      greeting: `Hello ${input.owner.name},`,
+      paragraphs,
+      link: {
+        href: input.appOrigin + sharedPaths.applicantRequest.getHref(input.request.id),
+        label: 'See your request',
+      },
+    },
+  );
 }
 
 /** The owner's notice that a payment went back to them. */
@@ -60,9 +68,17 @@ export function refundReceiptEmail(input: ReceiptInput): OutgoingEmail {
     `Receipt number: ${input.receiptNumber}`,
   ];
   if (input.note) paragraphs.push(`Reason: ${input.note}`);
-  return build(input, 'payment.refund', `Refund: ${what} of ${formatCents(input.amountCents)} for ${input.request.reference}`, {
-    greeting: `Hello ${input.owner.name},`,
-    paragraphs,
-    link: { href: input.appOrigin + sharedPaths.applicantRequest.getHref(input.request.id), label: 'See your request' },
-  });
+  return build(
+    input,
+    'payment.refund',
+    `Refund: ${what} of ${formatCents(input.amountCents)} for ${input.request.reference}`,
+    {
+      greeting: `Hello ${input.owner.name},`,
+      paragraphs,
+      link: {
+        href: input.appOrigin + sharedPaths.applicantRequest.getHref(input.request.id),
+        label: 'See your request',
+      },
+    },
+  );
 }

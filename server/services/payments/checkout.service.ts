@@ -75,7 +75,11 @@ async function openCheckout(ctx: PaymentContext, requestId: string, kind: Paymen
     .select()
     .from(paymentCheckouts)
     .where(
-      and(eq(paymentCheckouts.requestId, requestId), eq(paymentCheckouts.kind, kind), eq(paymentCheckouts.status, 'open')),
+      and(
+        eq(paymentCheckouts.requestId, requestId),
+        eq(paymentCheckouts.kind, kind),
+        eq(paymentCheckouts.status, 'open'),
+      ),
     );
   return row;
 }

@@ -22,7 +22,11 @@ export interface MoneyState {
 export async function loadMoneyState(db: DbOrTx, requestId: string): Promise<MoneyState> {
   const [quote, changes, paid] = await Promise.all([
     getAcceptedQuote(db, requestId),
-    db.select().from(balanceChanges).where(eq(balanceChanges.requestId, requestId)).orderBy(asc(balanceChanges.createdAt)),
+    db
+      .select()
+      .from(balanceChanges)
+      .where(eq(balanceChanges.requestId, requestId))
+      .orderBy(asc(balanceChanges.createdAt)),
     db.select().from(payments).where(eq(payments.requestId, requestId)).orderBy(asc(payments.paidAt)),
   ]);
   return { quote, changes, payments: paid };
@@ -86,10 +90,7 @@ export function dueOfKind(state: MoneyState, status: RequestStatus, kind: Paymen
 }
 
 /** The steps that wait for money under the company's setting, with what they wait for, in plain words. */
-export function waitsFor(
-  state: MoneyState,
-  waits: PaymentWaits,
-): { action: 'file-permit' | 'close'; text: string }[] {
+export function waitsFor(state: MoneyState, waits: PaymentWaits): { action: 'file-permit' | 'close'; text: string }[] {
   const out: { action: 'file-permit' | 'close'; text: string }[] = [];
   const paid = (kind: PaymentKind) => {
     const payment = paymentOf(state, kind);

@@ -101,7 +101,11 @@ async function closeOpenPages(ctx: PaymentContext, requestId: string, kind: 'dep
     .select()
     .from(paymentCheckouts)
     .where(
-      and(eq(paymentCheckouts.requestId, requestId), eq(paymentCheckouts.kind, kind), eq(paymentCheckouts.status, 'open')),
+      and(
+        eq(paymentCheckouts.requestId, requestId),
+        eq(paymentCheckouts.kind, kind),
+        eq(paymentCheckouts.status, 'open'),
+      ),
     );
   for (const row of open) {
     try {
@@ -178,7 +182,12 @@ export async function addBalanceChange(
     }
     const [row] = await tx
       .insert(balanceChanges)
-      .values({ requestId: request.id, description: input.description, amountCents: input.amountCents, createdById: actor.id })
+      .values({
+        requestId: request.id,
+        description: input.description,
+        amountCents: input.amountCents,
+        createdById: actor.id,
+      })
       .returning();
     await tx.insert(requestEvents).values({
       requestId: request.id,

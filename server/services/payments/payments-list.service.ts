@@ -72,7 +72,9 @@ export async function listPayments(
   const shown = state === 'all' ? rows : rows.filter((r) => r.state === state);
   shown.sort((a, b) => (b.date?.getTime() ?? 0) - (a.date?.getTime() ?? 0) || a.reference.localeCompare(b.reference));
   const sum = (s: PaymentRowView['state']) =>
-    rows.filter((r) => r.state === s).reduce((total, r) => total + (s === 'refunded' ? r.refundedCents : r.amountCents), 0);
+    rows
+      .filter((r) => r.state === s)
+      .reduce((total, r) => total + (s === 'refunded' ? r.refundedCents : r.amountCents), 0);
   return {
     currency: ctx.env.PAYMENT_CURRENCY,
     rows: shown,
