@@ -24,6 +24,7 @@ export function createAppRouter() {
         { path: paths.office.ruleProfiles.path, ...page(() => import('./routes/office/rule-profiles')) },
         { path: paths.office.ruleProfile.path, ...page(() => import('./routes/office/rule-profile')) },
         { path: paths.office.emails.path, ...page(() => import('./routes/office/emails')) },
+        { path: paths.office.payments.path, ...page(() => import('./routes/office/payments')) },
         { path: paths.office.users.path, ...page(() => import('./routes/office/users')) },
         { path: paths.crew.board.path, ...page(() => import('./routes/crew/board')) },
         { path: paths.crew.myJobs.path, ...page(() => import('./routes/crew/my-jobs')) },

@@ -8,6 +8,7 @@ import { useLatestQuestion } from '@/features/events/api/get-events';
 import { EventList } from '@/features/events/components/event-list';
 import { CheckSummary } from '@/features/grade-check/components/check-summary';
 import { MessageThread } from '@/features/messages/components/message-thread';
+import { OwnerPayments } from '@/features/payments/components/owner-payments';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
 import { PhotoStep } from '@/features/photos/components/photo-step';
 import { useRequest } from '@/features/requests/api/get-request';
@@ -43,6 +44,11 @@ function RequestPage({ id }: { id: string }) {
           </Panel>
         </div>
         <div className="space-y-6">
+          {request.status !== 'draft' && (
+            <Panel title="Payments">
+              <OwnerPayments requestId={id} />
+            </Panel>
+          )}
           <Panel title="Timeline">
             <EventList requestId={id} />
           </Panel>
