@@ -11,6 +11,8 @@ import { photosRouter } from './photos/photos.routes';
 import { requestsRouter } from './requests/requests.routes';
 import { ruleProfilesRouter } from './rule-profiles/rule-profiles.routes';
 import { queueRouter } from './queue/queue.routes';
+import { quotesRouter } from './quotes/quotes.routes';
+import { rateCardsRouter } from './rate-cards/rate-cards.routes';
 import { transitionsRouter } from './transitions/transitions.routes';
 import { usersRouter } from './users/users.routes';
 
@@ -28,5 +30,7 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(ruleProfilesRouter(ctx));
   app.use(gradeChecksRouter(ctx));
   app.use(documentsRouter(ctx));
+  app.use(rateCardsRouter(ctx));
+  app.use(quotesRouter(ctx));
   app.use(paymentsRouter(ctx));
 }

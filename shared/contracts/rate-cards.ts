@@ -80,12 +80,14 @@ export const centsField = (label: string, max = MAX_UNIT_PRICE_CENTS) =>
     .max(max, `${label} must be at most $${(max / 100).toLocaleString('en-US')}`);
 
 /** A measure with at most two decimals between `min` and `max`. */
-export const measureField = (label: string, min: number, max: number, unit: string) =>
-  z
+export const measureField = (label: string, min: number, max: number, unit: string) => {
+  const withUnit = (value: number) => `${value.toLocaleString('en-US')}${unit ? ` ${unit}` : ''}`;
+  return z
     .number({ error: `${label} must be a number` })
-    .min(min, `${label} must be at least ${min} ${unit}`)
-    .max(max, `${label} must be at most ${max.toLocaleString('en-US')} ${unit}`)
+    .min(min, `${label} must be at least ${withUnit(min)}`)
+    .max(max, `${label} must be at most ${withUnit(max)}`)
     .refine(hasAtMostTwoDecimals, `${label} takes at most two decimals`);
+};
 
 /** A rate in basis points (1/100 of a percent): 6.25% is 625. */
 export const basisPointsField = (label: string, maxPercent: number) =>
