@@ -13,7 +13,6 @@ import {
   requests,
 } from '../../server/db/schema';
 import type { RequestStatus } from '@shared/workflow/statuses';
-import { acceptQuote } from '../../server/services/quotes/quotes.service';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createSentQuote } from '../factories/quotes';
 import { createRequestRow, type RequestRow } from '../factories/request-rows';
@@ -52,8 +51,6 @@ afterAll(async () => {
   await t?.close();
 });
 
-const sessionUser = (who: Cast['applicant']) => ({ id: who.id, email: who.email, name: 'Ellen Marsh', role: who.role });
-
 /** A request of the cast's owner with a quote accepted by typing their name, as the owner's page does. */
 async function acceptedRequest(opts: { status?: RequestStatus; totalCents?: number; depositCents?: number } = {}) {
   const request = await createRequestRow(t.ctx.db, {
@@ -66,7 +63,7 @@ async function acceptedRequest(opts: { status?: RequestStatus; totalCents?: numb
     totalCents: opts.totalCents ?? 1_234_567,
     depositCents: opts.depositCents ?? 370_370,
   });
-  await acceptQuote(t.ctx, sessionUser(cast.applicant), quote.id, { name: 'Ellen Marsh' });
+  await cast.applicant.agent.post(`/api/quotes/${quote.id}/accept`).send({ name: 'Ellen Marsh' }).expect(200);
   return request;
 }
 
