@@ -13,7 +13,15 @@ export function createContext(env: Env): AppContext {
     timeouts: dbTimeouts(env),
     onConnectionError: (error) => logger.warn({ err: error }, 'a database connection was closed by the server'),
   });
-  return { env, db, pool, logger, s3: createS3Client(env), mailer: createMailer(env), payments: createPaymentsClient(env) };
+  return {
+    env,
+    db,
+    pool,
+    logger,
+    s3: createS3Client(env),
+    mailer: createMailer(env),
+    payments: createPaymentsClient(env),
+  };
 }
 
 export async function closeContext(ctx: AppContext) {

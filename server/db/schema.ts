@@ -508,10 +508,7 @@ export const payments = pgTable(
     refundNote: text().notNull().default(''),
     refundedById: uuid().references(() => users.id),
   },
-  (t) => [
-    uniqueIndex('payments_request_kind_key').on(t.requestId, t.kind),
-    index('payments_paid_idx').on(t.paidAt),
-  ],
+  (t) => [uniqueIndex('payments_request_kind_key').on(t.requestId, t.kind), index('payments_paid_idx').on(t.paidAt)],
 );
 
 /** Every provider notice taken in, by its event id: the same notice delivered twice is acted on once. */

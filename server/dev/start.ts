@@ -7,6 +7,7 @@ import { applyMigrations, createDb } from '../db/client';
 import { demoPeople } from './seed/demo-people';
 import { seedDemo } from './seed';
 import { seedDemoReports } from './seed/demo-reports';
+import { seedDemoPayments } from './seed/demo-payments';
 import { closeContext, createContext } from '../context-factory';
 import { parseEnv } from '../config/env';
 import { devBucket, devOAuthClient, devPorts } from './dev-config';
@@ -80,6 +81,8 @@ async function main() {
     const seedCtx = createContext(parseEnv({ ...env, LOG_LEVEL: 'warn' }));
     try {
       await seedDemoReports(seedCtx);
+      // Card payments go through the payments stand-in, so they too wait until it runs.
+      await seedDemoPayments(seedCtx);
     } finally {
       await closeContext(seedCtx);
     }

@@ -1,7 +1,7 @@
 import { asc, eq } from 'drizzle-orm';
 import type { AmountDue, PaymentKind, PaymentWaits } from '@shared/contracts/payments';
 import { formatCents } from '@shared/money/money';
-import { terminalStatuses, type RequestStatus } from '@shared/workflow/statuses';
+import type { RequestStatus } from '@shared/workflow/statuses';
 import type { DbOrTx } from '../../db/client';
 import { balanceChanges, payments } from '../../db/schema';
 import { getAcceptedQuote, type AcceptedQuote } from '../quotes/accepted-quote';
@@ -20,15 +20,14 @@ export interface MoneyState {
 }
 
 export async function loadMoneyState(db: DbOrTx, requestId: string): Promise<MoneyState> {
-  const [quote, changes, paid] = await Promise.all([
-    getAcceptedQuote(db, requestId),
-    db
-      .select()
-      .from(balanceChanges)
-      .where(eq(balanceChanges.requestId, requestId))
-      .orderBy(asc(balanceChanges.createdAt)),
-    db.select().from(payments).where(eq(payments.requestId, requestId)).orderBy(asc(payments.paidAt)),
-  ]);
+  // One after another: inside a transaction the three share one connection.
+  const quote = await getAcceptedQuote(db, requestId);
+  const changes = await db
+    .select()
+    .from(balanceChanges)
+    .where(eq(balanceChanges.requestId, requestId))
+    .orderBy(asc(balanceChanges.createdAt));
+  const paid = await db.select().from(payments).where(eq(payments.requestId, requestId)).orderBy(asc(payments.paidAt));
   return { quote, changes, payments: paid };
 }
 
@@ -40,11 +39,14 @@ export function agreedTotalCents(state: MoneyState): number | null {
   return state.quote.totalCents + state.changes.reduce((sum, c) => sum + c.amountCents, 0);
 }
 
-/** The deposit, once the quote is accepted and while the request goes on. */
+/** Requests that ended without the work being done: nothing more is owed on them. */
+export const endedWithoutWork: readonly RequestStatus[] = ['declined', 'withdrawn', 'permit_refused'];
+
+/** The deposit, once the quote is accepted, unless the request ended without the work. */
 function depositDue(state: MoneyState, status: RequestStatus): AmountDue | string {
   if (!state.quote) return 'Nothing to pay yet: the deposit is due once the quote is accepted.';
   if (paymentOf(state, 'deposit')) return '';
-  if (terminalStatuses.includes(status)) return 'This request has ended, so nothing is due.';
+  if (endedWithoutWork.includes(status)) return 'This request has ended, so nothing is due.';
   if (state.quote.depositCents <= 0) return '';
   return { kind: 'deposit', amountCents: state.quote.depositCents };
 }

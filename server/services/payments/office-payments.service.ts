@@ -10,12 +10,9 @@ import type { SessionUser } from '../../lib/session-user';
 import { balanceChanges, paymentCheckouts, payments, requestEvents } from '../../db/schema';
 import { AppError, conflict, notFound } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
-import { agreedTotalCents, amountDue, dueOfKind, loadMoneyState, waitsFor } from './money-state';
+import { agreedTotalCents, amountDue, dueOfKind, endedWithoutWork, loadMoneyState, waitsFor } from './money-state';
 import { loadPaymentWaits } from './payment-waits.service';
 import { insertPayment, markRefunded, paymentEventKinds, type PaymentContext } from './record-payment';
-
-/** Requests whose money may be handed back: they will not go ahead. */
-const refundableStatuses = ['withdrawn', 'declined', 'permit_refused'] as const;
 
 /** GET /api/requests/:id/payments, for whoever may see the request (the owner and the office). */
 export async function requestPayments(
@@ -130,7 +127,7 @@ export async function refundPayment(ctx: PaymentContext, actor: SessionUser, pay
   if (!payment) throw notFound('Payment');
   const request = await loadVisibleRequest(ctx.db, actor, payment.requestId);
   if (payment.refundedAt) throw conflict('This payment was already refunded.');
-  if (!(refundableStatuses as readonly string[]).includes(request.status)) {
+  if (!endedWithoutWork.includes(request.status)) {
     throw conflict(
       'Refunds are made when a paid request is withdrawn, declined or its permit refused; this request is still going ahead.',
     );
