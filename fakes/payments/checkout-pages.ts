@@ -77,6 +77,11 @@ export function checkoutPages({ store, findSession, pay }: PageOptions): Router 
     );
   };
 
+  // Browsers ask for an icon on every page; answering "nothing here" keeps their consoles quiet.
+  router.get('/favicon.ico', (_req, res) => {
+    res.status(204).end();
+  });
+
   router.get('/pay/:id', (req, res) => {
     const session = lookup(req.params.id);
     if (!session || session.status !== 'open') return closed(res, session);
