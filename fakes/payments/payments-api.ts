@@ -105,10 +105,12 @@ export function createPaymentsApp(options: PaymentsAppOptions) {
     expireIfDue(session);
     return session;
   };
-  const expandOf = (req: Request) => {
-    const raw = (req.query.expand ?? req.body?.expand) as unknown;
-    return (Array.isArray(raw) ? raw : raw === undefined ? [] : [raw]).map(String);
-  };
+  // The SDK sends `expand[0]=payment_intent`; Express's simple query parser keeps that key as it is.
+  const expandOf = (req: Request) =>
+    Object.entries(req.query)
+      .filter(([key]) => key === 'expand' || key.startsWith('expand['))
+      .flatMap(([, value]) => (Array.isArray(value) ? value : [value]))
+      .map(String);
 
   app.post('/v1/checkout/sessions', (req, res) => {
     const body = record(req.body);
