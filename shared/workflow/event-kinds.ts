@@ -8,6 +8,10 @@ export const eventKindLabels: Record<string, string> = {
   'work-day-planned': 'Work day planned',
   'crew-note': 'Note for the crew',
   'grade-check-withdrawn': 'Grade check withdrawn',
+  'quote-drafted': 'Quote drafted',
+  'quote-sent': 'Quote sent',
+  'quote-accepted': 'Quote accepted',
+  'quote-declined': 'Quote declined',
 };
 
 export const eventKindLabel = (kind: string) => eventKindLabels[kind] ?? 'Update';

@@ -58,3 +58,16 @@ export const statusChangeKeys = (requestId: string) => [
   eventKeys.ofRequest(requestId),
   messageKeys.ofRequest(requestId),
 ];
+
+/** GET /api/requests/:id/quotes */
+export const quoteKeys = { ofRequest: (requestId: string) => ['quotes', requestId] as const };
+
+/** GET /api/rate-cards */
+export const rateCardKeys = { list: () => ['rate-cards', 'list'] as const };
+
+/** Documents travel with the request's own answer; events with the timeline. */
+export const quoteChangeKeys = (requestId: string) => [
+  quoteKeys.ofRequest(requestId),
+  requestKeys.one(requestId),
+  eventKeys.ofRequest(requestId),
+];

@@ -1,4 +1,5 @@
 import { and, eq } from 'drizzle-orm';
+import type { Response } from 'superagent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { haulEstimate } from '@shared/charts/cut-fill-table';
 import type { QuoteView } from '@shared/contracts/quotes';
@@ -37,10 +38,11 @@ async function draftFrom(requestId: string, gradeCheckId: string): Promise<Quote
 }
 
 /** supertest's parser for a binary answer. */
-function binary(res: NodeJS.ReadableStream, done: (err: Error | null, body: Buffer) => void) {
+function binary(res: Response, done: (err: Error | null, body: Buffer) => void) {
+  const stream = res as unknown as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => done(null, Buffer.concat(chunks)));
 }
 
 const editable = (q: QuoteView) => ({
@@ -150,11 +152,7 @@ describe('revisions', () => {
     expect(saved.body.quote.totalCents).toBe(first.totalCents + 38000); // the new line is untaxed
     expect(saved.body.quote.terms).toBe('Payment within 14 days of completion.');
 
-    const preview = await cast.staff.agent
-      .get(`/api/quotes/${first.id}/pdf`)
-      .buffer(true)
-      .parse(binary)
-      .expect(200);
+    const preview = await cast.staff.agent.get(`/api/quotes/${first.id}/pdf`).buffer(true).parse(binary).expect(200);
     expect(preview.headers['content-type']).toMatch(/application\/pdf/);
     const previewText = await pdfText(preview.body as Buffer);
     expect(previewText).toContain('PREVIEW');
