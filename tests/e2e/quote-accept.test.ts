@@ -26,7 +26,7 @@ async function saveDemoCheck() {
   const found = (await currentRules(stage.db.db, 'marrow-county'))!;
   const [office] = await stage.db.db.select().from(users).where(eq(users.email, staff.email));
   const check = await demoCheck(found.rules, {
-    ground: demoGround(2, 9),
+    ground: demoGround(5.5, 11),
     speedMph: 40,
     sightLeftFt: 600,
     sightRightFt: 600,
