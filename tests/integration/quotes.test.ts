@@ -306,6 +306,29 @@ describe('the owner’s answer', () => {
   });
 });
 
+describe('an answer and a revision at the same moment', () => {
+  it('never leaves a version accepted while a later one has gone out over it', async () => {
+    for (let round = 0; round < 4; round++) {
+      const { request, check } = await requestWithCheck();
+      const first = await draftFrom(request.id, check.id);
+      await cast.staff.agent.post(`/api/quotes/${first.id}/send`).expect(200);
+      const second = await draftFrom(request.id, check.id);
+      const [accepted, sent] = await Promise.all([
+        cast.applicant.agent.post(`/api/quotes/${first.id}/accept`).send({ name: 'Ellen Marsh' }),
+        cast.staff.agent.post(`/api/quotes/${second.id}/send`),
+      ]);
+      // Exactly one of the two wins; the other is told why.
+      expect([accepted.status, sent.status].sort()).toEqual([200, 409]);
+      const rows = await t.ctx.db.select().from(quotes).where(eq(quotes.requestId, request.id));
+      const status = Object.fromEntries(rows.map((r) => [r.version, r.status]));
+      expect([
+        { 1: 'accepted', 2: 'draft' },
+        { 1: 'replaced', 2: 'sent' },
+      ]).toContainEqual(status);
+    }
+  });
+});
+
 describe('rate card versions', () => {
   it('only the admin sets prices; a published version is frozen and a new draft copies it', async () => {
     const before = await cast.staff.agent.get('/api/rate-cards').expect(200);
