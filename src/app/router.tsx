@@ -23,6 +23,7 @@ export function createAppRouter() {
         { path: paths.office.gradeCheck.path, ...page(() => import('./routes/office/grade-check')) },
         { path: paths.office.ruleProfiles.path, ...page(() => import('./routes/office/rule-profiles')) },
         { path: paths.office.ruleProfile.path, ...page(() => import('./routes/office/rule-profile')) },
+        { path: paths.office.rateCard.path, ...page(() => import('./routes/office/rate-card')) },
         { path: paths.office.emails.path, ...page(() => import('./routes/office/emails')) },
         { path: paths.office.payments.path, ...page(() => import('./routes/office/payments')) },
         { path: paths.office.users.path, ...page(() => import('./routes/office/users')) },

@@ -20,6 +20,7 @@ export const paths = {
     },
     ruleProfiles: { path: '/office/rule-profiles', getHref: () => '/office/rule-profiles' },
     ruleProfile: { path: '/office/rule-profiles/:id', getHref: (id: string) => `/office/rule-profiles/${id}` },
+    rateCard: { path: '/office/rate-card', getHref: () => '/office/rate-card' },
     emails: { path: '/office/emails', getHref: () => '/office/emails' },
     payments: { path: '/office/payments', getHref: () => '/office/payments' },
     users: { path: '/office/users', getHref: () => '/office/users' },

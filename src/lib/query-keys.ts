@@ -69,4 +69,21 @@ export const statusChangeKeys = (requestId: string) => [
   requestKeys.one(requestId),
   eventKeys.ofRequest(requestId),
   messageKeys.ofRequest(requestId),
+  // What is due, and what waits for money, follow the status (the balance is due once built).
+  paymentKeys.ofRequest(requestId),
+];
+
+/** GET /api/requests/:id/quotes */
+export const quoteKeys = { ofRequest: (requestId: string) => ['quotes', requestId] as const };
+
+/** GET /api/rate-cards */
+export const rateCardKeys = { list: () => ['rate-cards', 'list'] as const };
+
+/** Documents travel with the request's own answer; events with the timeline. */
+export const quoteChangeKeys = (requestId: string) => [
+  quoteKeys.ofRequest(requestId),
+  requestKeys.one(requestId),
+  eventKeys.ofRequest(requestId),
+  // An accepted quote makes the deposit due.
+  paymentKeys.ofRequest(requestId),
 ];

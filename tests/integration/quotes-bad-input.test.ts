@@ -40,7 +40,7 @@ const goodLine = {
   taxable: false,
 };
 
-async function quoteFields(body: unknown) {
+async function quoteFields(body: object) {
   const res = await cast.staff.agent.put(`/api/quotes/${draft.id}`).send(body).expect(400);
   return res.body.error.fields as Record<string, string>;
 }

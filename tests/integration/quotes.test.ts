@@ -1,4 +1,5 @@
 import { and, eq } from 'drizzle-orm';
+import type { Response } from 'superagent';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { haulEstimate } from '@shared/charts/cut-fill-table';
 import type { QuoteView } from '@shared/contracts/quotes';
@@ -37,10 +38,11 @@ async function draftFrom(requestId: string, gradeCheckId: string): Promise<Quote
 }
 
 /** supertest's parser for a binary answer. */
-function binary(res: NodeJS.ReadableStream, done: (err: Error | null, body: Buffer) => void) {
+function binary(res: Response, done: (err: Error | null, body: Buffer) => void) {
+  const stream = res as unknown as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (c: Buffer) => chunks.push(c));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
+  stream.on('data', (c: Buffer) => chunks.push(c));
+  stream.on('end', () => done(null, Buffer.concat(chunks)));
 }
 
 const editable = (q: QuoteView) => ({
@@ -65,7 +67,10 @@ describe('a quote made from a saved grade check', () => {
       source: `cut ${cut} bank cy from check ${check.number}`,
       taxable: false,
     });
-    expect(byKind.fill.source).toBe(`fill ${Math.ceil(haul.fillCuYd)} compacted cy from check ${check.number}`);
+    // This survey's design only cuts: a quantity the check puts at nothing is left out, not priced at $0.00.
+    expect(cut).toBeGreaterThan(0);
+    expect(Math.ceil(haul.fillCuYd)).toBe(0);
+    expect(byKind.fill).toBeUndefined();
     expect(byKind.haul.quantity).toBe((haul.cutLoads ?? 0) + (haul.fillLoads ?? 0));
     // The survey's culvert: 18 in, n 0.024 (corrugated metal), 30 ft long.
     expect(byKind.pipe).toMatchObject({ quantity: 30, unit: 'ft', unitPriceCents: 4150, taxable: true });
@@ -150,11 +155,7 @@ describe('revisions', () => {
     expect(saved.body.quote.totalCents).toBe(first.totalCents + 38000); // the new line is untaxed
     expect(saved.body.quote.terms).toBe('Payment within 14 days of completion.');
 
-    const preview = await cast.staff.agent
-      .get(`/api/quotes/${first.id}/pdf`)
-      .buffer(true)
-      .parse(binary)
-      .expect(200);
+    const preview = await cast.staff.agent.get(`/api/quotes/${first.id}/pdf`).buffer(true).parse(binary).expect(200);
     expect(preview.headers['content-type']).toMatch(/application\/pdf/);
     const previewText = await pdfText(preview.body as Buffer);
     expect(previewText).toContain('PREVIEW');
@@ -302,6 +303,29 @@ describe('the owner’s answer', () => {
       .from(emails)
       .where(and(eq(emails.requestId, request.id), eq(emails.template, 'quote.declined')));
     expect(mail.textBody).toContain('Too dear for this year');
+  });
+});
+
+describe('an answer and a revision at the same moment', () => {
+  it('never leaves a version accepted while a later one has gone out over it', async () => {
+    for (let round = 0; round < 4; round++) {
+      const { request, check } = await requestWithCheck();
+      const first = await draftFrom(request.id, check.id);
+      await cast.staff.agent.post(`/api/quotes/${first.id}/send`).expect(200);
+      const second = await draftFrom(request.id, check.id);
+      const [accepted, sent] = await Promise.all([
+        cast.applicant.agent.post(`/api/quotes/${first.id}/accept`).send({ name: 'Ellen Marsh' }),
+        cast.staff.agent.post(`/api/quotes/${second.id}/send`),
+      ]);
+      // Exactly one of the two wins; the other is told why.
+      expect([accepted.status, sent.status].sort()).toEqual([200, 409]);
+      const rows = await t.ctx.db.select().from(quotes).where(eq(quotes.requestId, request.id));
+      const status = Object.fromEntries(rows.map((r) => [r.version, r.status]));
+      expect([
+        { 1: 'accepted', 2: 'draft' },
+        { 1: 'replaced', 2: 'sent' },
+      ]).toContainEqual(status);
+    }
   });
 });
 

@@ -21,8 +21,9 @@ type Step =
 
 /** The money stages the demo shows, by the demo request's site address. */
 const moneyStages: { address: string; steps: Step[] }[] = [
-  { address: '2 Quillfeather Road, Elderbrook', steps: [] },
-  { address: '904 Old Mill Road, Marrow Crossing', steps: [{ kind: 'deposit', by: 'card' }] },
+  // The quote's own seed leaves 904 Old Mill Road accepted with nothing paid: the deposit is due there.
+  { address: '904 Old Mill Road, Marrow Crossing', steps: [] },
+  { address: '12 Heronsgate Road, Marrow Crossing', steps: [{ kind: 'deposit', by: 'card' }] },
   {
     address: '51 Bramblewood Drive, Elderbrook',
     steps: [{ kind: 'deposit', by: 'cheque', note: 'Cheque 2231, Elderbrook Farmers Bank' }],

@@ -66,34 +66,38 @@ export function linesFromCheck(check: CheckForQuote, prices: RateCardPrices): Qu
     const haul = haulEstimate(proposal, inputs.design?.haul);
     const cut = wholeUp(haul.cutCuYd);
     const fill = wholeUp(haul.fillCuYd);
-    add({
-      kind: 'excavation',
-      description: 'Excavation (cut)',
-      quantity: cut,
-      unit: 'bank cu yd',
-      unitPriceCents: prices.excavationPerBankCyCents,
-      source: `cut ${cut} bank cy from check ${n}`,
-    });
-    add({
-      kind: 'fill',
-      description: 'Imported fill, placed and compacted',
-      quantity: fill,
-      unit: 'compacted cu yd',
-      unitPriceCents: prices.fillPerCompactedCyCents,
-      source: `fill ${fill} compacted cy from check ${n}`,
-    });
+    // A quantity the check puts at nothing is left out rather than priced at $0.00; the office can add it back.
+    if (cut > 0)
+      add({
+        kind: 'excavation',
+        description: 'Excavation (cut)',
+        quantity: cut,
+        unit: 'bank cu yd',
+        unitPriceCents: prices.excavationPerBankCyCents,
+        source: `cut ${cut} bank cy from check ${n}`,
+      });
+    if (fill > 0)
+      add({
+        kind: 'fill',
+        description: 'Imported fill, placed and compacted',
+        quantity: fill,
+        unit: 'compacted cu yd',
+        unitPriceCents: prices.fillPerCompactedCyCents,
+        source: `fill ${fill} compacted cy from check ${n}`,
+      });
+    const countable = haul.cutLoads !== null && haul.fillLoads !== null;
     const loads = (haul.cutLoads ?? 0) + (haul.fillLoads ?? 0);
-    add({
-      kind: 'haul',
-      description: 'Haul',
-      quantity: loads,
-      unit: 'truck loads',
-      unitPriceCents: prices.haulPerLoadCents,
-      source:
-        haul.cutLoads === null || haul.fillLoads === null
-          ? `too many loads to count from check ${n}: enter by hand`
-          : `${haul.cutLoads} loads out and ${haul.fillLoads} in, of ${haul.truckCuYd} cu yd, from check ${n}`,
-    });
+    if (loads > 0 || !countable)
+      add({
+        kind: 'haul',
+        description: 'Haul',
+        quantity: loads,
+        unit: 'truck loads',
+        unitPriceCents: prices.haulPerLoadCents,
+        source: countable
+          ? `${haul.cutLoads} loads out and ${haul.fillLoads} in, of ${haul.truckCuYd} cu yd, from check ${n}`
+          : `too many loads to count from check ${n}: enter by hand`,
+      });
   } else {
     const none = `check ${n} has no least-earth design: enter by hand`;
     add({
@@ -198,9 +202,9 @@ export function linesFromCheck(check: CheckForQuote, prices: RateCardPrices): Qu
     kind: 'traffic-control',
     description: 'Traffic control in the right-of-way',
     quantity: prices.trafficControlDays,
-    unit: 'days',
+    unit: prices.trafficControlDays === 1 ? 'day' : 'days',
     unitPriceCents: prices.trafficControlPerDayCents,
-    source: `${prices.trafficControlDays} days on a usual job (rate card)`,
+    source: `${prices.trafficControlDays} ${prices.trafficControlDays === 1 ? 'day' : 'days'} on a usual job (rate card)`,
   });
   add({
     kind: 'permit-fee',

@@ -395,6 +395,9 @@ async function loadOwnersCurrentQuote(tx: DbOrTx, user: SessionUser, quoteId: st
   const { quote, request } = await loadVisibleQuote(tx, user, quoteId);
   if (request.applicantId !== user.id)
     throw forbidden('Only the property owner who made the request can accept or decline its quote.');
+  // The request's row first, as sending does: an answer and a revision being sent take turns, so a version cannot be
+  // accepted while a later one goes out over it.
+  await loadVisibleRequest(tx, user, request.id, { forUpdate: true });
   const [row] = await tx.select().from(quotes).where(eq(quotes.id, quote.id)).for('update');
   if (row.status === 'replaced')
     throw conflict(`Version ${row.version} was replaced by a later version: read and answer the current one.`);

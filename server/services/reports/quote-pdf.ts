@@ -110,7 +110,8 @@ export function buildQuotePdf(data: QuotePdfData): Promise<Buffer> {
     'Accept or decline this quote on your request page in Gradepass, or ask the office a question in the messages there.',
   );
   heading(doc, 'Before any digging');
-  for (const caution of SAFETY_CAUTIONS) paragraph(doc, `• ${caution}`);
+  // The cautions about digging; the last one speaks of a check, so the quote says its own version of it below.
+  for (const caution of SAFETY_CAUTIONS.filter((c) => !c.startsWith('This check'))) paragraph(doc, `• ${caution}`);
   paragraph(
     doc,
     "Gradepass supports, and never replaces, the road authority's review, local codes and licensed engineering.",

@@ -13,6 +13,7 @@ const navByRole: Record<Role, { to: string; label: string }[]> = {
   staff: [
     { to: paths.office.queue.getHref(), label: 'Queue' },
     { to: paths.office.ruleProfiles.getHref(), label: 'Rule profiles' },
+    { to: paths.office.rateCard.getHref(), label: 'Rate card' },
     { to: paths.office.payments.getHref(), label: 'Payments' },
     { to: paths.office.emails.getHref(), label: 'E-mail log' },
   ],
@@ -23,6 +24,7 @@ const navByRole: Record<Role, { to: string; label: string }[]> = {
   admin: [
     { to: paths.office.queue.getHref(), label: 'Queue' },
     { to: paths.office.ruleProfiles.getHref(), label: 'Rule profiles' },
+    { to: paths.office.rateCard.getHref(), label: 'Rate card' },
     { to: paths.office.payments.getHref(), label: 'Payments' },
     { to: paths.office.emails.getHref(), label: 'E-mail log' },
     { to: paths.office.users.getHref(), label: 'Users and roles' },

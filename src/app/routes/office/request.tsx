@@ -12,6 +12,7 @@ import { RequestWorkspace } from '@/features/office/components/request-workspace
 import { OfficePayments } from '@/features/payments/components/office-payments';
 import { useRequestPayments } from '@/features/payments/api/get-request-payments';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
+import { QuoteBuilder } from '@/features/quotes/components/quote-builder';
 import { useOfficeRequest } from '@/features/requests/api/get-request';
 import { ApplicationSummary } from '@/features/requests/components/application-summary';
 
@@ -42,6 +43,7 @@ function OfficeRequestPage({ id }: { id: string }) {
           cautions={cautions}
           sections={{
             application: () => <ApplicationSummary application={request.application} />,
+            quote: () => <QuoteBuilder requestId={id} ownerName={request.applicantName} />,
             photos: () => <PhotoGallery requestId={id} emptyText="The property owner has not added photos." />,
             messages: () => <MessageThread requestId={id} office />,
             history: () => <EventList requestId={id} office label="History" />,
