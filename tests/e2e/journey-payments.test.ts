@@ -122,4 +122,21 @@ describe('the owner pays the deposit and the final invoice', () => {
     expect(noise).toEqual([]);
     await context.close();
   });
+
+  it('shows the office both payments in its payments view, with the CSV for the bookkeeper', async () => {
+    const context = await session.browser.newContext();
+    const page = await context.newPage();
+    await signInAs(page, office.email);
+    await page.getByRole('link', { name: 'Payments', exact: true }).click();
+    await page.getByRole('button', { name: 'Paid', exact: true }).click();
+    const rows = page.getByRole('row').filter({ hasText: request.reference });
+    await expect.poll(() => rows.count()).toBe(2);
+    expect(await rows.allTextContents()).toEqual(
+      expect.arrayContaining([expect.stringContaining('$3,703.70'), expect.stringContaining('$8,641.97')]),
+    );
+    const csv = await (await page.request.get(appUrl('/api/payments/export.csv?state=paid'))).text();
+    expect(csv.split('\r\n').filter((line) => line.startsWith(request.reference))).toHaveLength(2);
+    await saveScreenshot(page, 'payments-4-office-view');
+    await context.close();
+  });
 });
