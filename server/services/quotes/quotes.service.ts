@@ -305,6 +305,9 @@ async function pdfData(db: DbOrTx, row: QuoteRow, request: RequestRow, preview: 
   });
 }
 
+/** A sent version's PDF, made from the stored quote alone (the demo seed stores its quotes' PDFs with it). */
+export const sentQuotePdf = (db: DbOrTx, row: QuoteRow, request: RequestRow) => pdfData(db, row, request, false);
+
 /** The PDF as it would be sent (a draft says "preview" across its top). */
 export async function quotePdf(db: Db, user: SessionUser, quoteId: string) {
   const { quote, request } = await loadVisibleQuote(db, user, quoteId);
