@@ -6,6 +6,7 @@ import { paymentWebhookPath } from '@shared/contracts/payments';
 import { applyMigrations, createDb } from '../db/client';
 import { demoPeople } from './seed/demo-people';
 import { seedDemo } from './seed';
+import { seedDemoQuotePdfs } from './seed/demo-quotes';
 import { seedDemoReports } from './seed/demo-reports';
 import { seedDemoPayments } from './seed/demo-payments';
 import { closeContext, createContext } from '../context-factory';
@@ -81,6 +82,7 @@ async function main() {
     const seedCtx = createContext(parseEnv({ ...env, LOG_LEVEL: 'warn' }));
     try {
       await seedDemoReports(seedCtx);
+      await seedDemoQuotePdfs(seedCtx);
       // Card payments go through the payments stand-in, so they too wait until it runs.
       await seedDemoPayments(seedCtx);
     } finally {

@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { requestStatuses } from '@shared/workflow/statuses';
 import {
   asBuiltSets,
+  documents,
   gradeChecks,
   jobs,
   quotes,
@@ -12,6 +13,7 @@ import {
   ruleProfileVersions,
 } from '../../server/db/schema';
 import { getAcceptedQuote } from '../../server/services/quotes/accepted-quote';
+import { seedDemoQuotePdfs } from '../../server/dev/seed/demo-quotes';
 import { seedDemo } from '../../server/dev/seed';
 import { runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
 import { ruleProfileSchema } from '@shared/engine';
@@ -103,6 +105,14 @@ describe('the demo scenario', () => {
       expect(q.totalCents).toBeGreaterThan(0);
       expect(q.totalCents).toBe(q.subtotalCents + q.taxCents);
     }
+    // Once storage runs, each sent quote gets its PDF, shared with its owner, once.
+    expect(await seedDemoQuotePdfs(t.ctx)).toBe(2);
+    expect(await seedDemoQuotePdfs(t.ctx)).toBe(0);
+    const docs = await t.ctx.db.select().from(documents).where(eq(documents.kind, 'quote'));
+    expect(docs).toHaveLength(2);
+    expect(docs.every((d) => d.sharedWithApplicant)).toBe(true);
+    const withPdf = await t.ctx.db.select().from(quotes);
+    expect(withPdf.map((q) => q.documentId).sort()).toEqual(docs.map((d) => d.id).sort());
   });
 
   it('shows each applicant only their own demo requests', async () => {

@@ -1,10 +1,12 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, isNull, ne } from 'drizzle-orm';
+import type { AppContext } from '../../config/context';
 import type { RuleProfile } from '@shared/engine';
 import { readGradeCheckRecord } from '@shared/grade-check/stored-check';
 import type { Tx } from '../../db/client';
-import { gradeChecks, quotes, requestEvents, requests, ruleProfileVersions, users } from '../../db/schema';
+import { documents, gradeChecks, quotes, requestEvents, requests, ruleProfileVersions, users } from '../../db/schema';
 import { linesFromCheck } from '../../services/quotes/lines-from-check';
-import { DEFAULT_TERMS, pricedLines } from '../../services/quotes/quotes.service';
+import { DEFAULT_TERMS, pricedLines, sentQuotePdf } from '../../services/quotes/quotes.service';
+import { storeReport } from '../../services/reports/report-storage';
 import { pricesOf } from '../../services/rate-cards/rate-cards.service';
 import { quoteTotals, formatCents } from '@shared/money/money';
 import { seedRateCard } from './demo-rate-card';
@@ -92,4 +94,40 @@ export async function seedDemoQuotes(tx: Tx, now = Date.now()) {
         createdAt: acceptedAt,
       });
   }
+}
+
+/**
+ * The demo's sent quotes get their PDFs, stored and shared with the owner as sending one in the app does, dated with
+ * the sending. Like the demo reports it runs once storage is up; a quote that has its PDF is left alone.
+ */
+export async function seedDemoQuotePdfs(ctx: Pick<AppContext, 'db' | 's3' | 'env'>) {
+  const missing = await ctx.db
+    .select({ quote: quotes, request: requests })
+    .from(quotes)
+    .innerJoin(requests, eq(requests.id, quotes.requestId))
+    .where(and(isNull(quotes.documentId), ne(quotes.status, 'draft')));
+  for (const { quote, request } of missing) {
+    const pdf = await sentQuotePdf(ctx.db, quote, request);
+    const objectKey = `quotes/${request.id}/quote-${quote.version}-${quote.id}.pdf`;
+    await storeReport(ctx, objectKey, pdf);
+    await ctx.db.transaction(async (tx) => {
+      const [document] = await tx
+        .insert(documents)
+        .values({
+          requestId: request.id,
+          gradeCheckId: quote.gradeCheckId,
+          kind: 'quote',
+          title: `Quote version ${quote.version}`,
+          objectKey,
+          contentType: 'application/pdf',
+          sizeBytes: pdf.length,
+          sharedWithApplicant: true,
+          createdById: quote.sentById,
+          createdAt: quote.sentAt ?? quote.createdAt,
+        })
+        .returning();
+      await tx.update(quotes).set({ documentId: document.id }).where(eq(quotes.id, quote.id));
+    });
+  }
+  return missing.length;
 }

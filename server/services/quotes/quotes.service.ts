@@ -25,7 +25,7 @@ import {
   ruleProfileVersions,
   users,
 } from '../../db/schema';
-import { badRequest, conflict, forbidden, notFound } from '../../lib/errors';
+import { AppError, badRequest, conflict, forbidden, notFound } from '../../lib/errors';
 import { enqueueEmails } from '../email/outbox';
 import { quoteAnsweredEmail, quoteSentEmail } from '../email/quote-emails';
 import { loadGradeCheck } from '../grade-checks/grade-checks.service';
@@ -305,6 +305,9 @@ async function pdfData(db: DbOrTx, row: QuoteRow, request: RequestRow, preview: 
   });
 }
 
+/** A sent version's PDF, made from the stored quote alone (the demo seed stores its quotes' PDFs with it). */
+export const sentQuotePdf = (db: DbOrTx, row: QuoteRow, request: RequestRow) => pdfData(db, row, request, false);
+
 /** The PDF as it would be sent (a draft says "preview" across its top). */
 export async function quotePdf(db: Db, user: SessionUser, quoteId: string) {
   const { quote, request } = await loadVisibleQuote(db, user, quoteId);
@@ -329,7 +332,15 @@ export async function sendQuote(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user
   const objectKey = `quotes/${request.id}/quote-${quote.version}-${quote.id}.pdf`;
   // Stored before the transaction: no transaction waits on storage, and a send that fails later leaves only an
   // object nobody links to, written again under the same key by the next try.
-  await storeReport(ctx, objectKey, pdf);
+  try {
+    await storeReport(ctx, objectKey, pdf);
+  } catch {
+    throw new AppError(
+      503,
+      'storage_unavailable',
+      'The quote’s PDF could not be stored just now, so nothing was sent. Try again in a minute.',
+    );
+  }
   return ctx.db.transaction(async (tx) => {
     await loadVisibleRequest(tx, user, request.id, { forUpdate: true });
     const [row] = await tx.select().from(quotes).where(eq(quotes.id, quote.id)).for('update');
