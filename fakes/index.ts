@@ -2,12 +2,21 @@ import { join } from 'node:path';
 import { defaultHost } from './lib/listen.js';
 import { startMailStandIn } from './mail/start-mail.js';
 import { startOAuthStandIn } from './oauth/start-oauth.js';
+import { startPaymentsStandIn } from './payments/start-payments.js';
 import { startS3StandIn } from './s3/start-s3.js';
+import type { PaymentsStandIn } from './payments/start-payments.js';
 
 export { startMailStandIn, type MailStandIn, type MailStandInOptions } from './mail/start-mail.js';
 export type { StoredMessage } from './mail/message-store.js';
 export { startOAuthStandIn, type OAuthStandIn, type OAuthStandInOptions } from './oauth/start-oauth.js';
 export { subjectFor, type DemoIdentity, type OpenIdProfile } from './oauth/identities.js';
+export {
+  startPaymentsStandIn,
+  signatureHeader,
+  testCards,
+  type PaymentsStandIn,
+  type PaymentsStandInOptions,
+} from './payments/start-payments.js';
 export { startS3StandIn, type S3StandIn, type S3StandInOptions } from './s3/start-s3.js';
 
 export interface StandInOptions {
@@ -19,6 +28,7 @@ export interface StandInOptions {
   smtpPort?: number;
   mailWebPort?: number;
   oauthPort?: number;
+  paymentsPort?: number;
   bucket: string;
   /** Page origins allowed to upload straight to storage; 127.0.0.1 and localhost are different origins. */
   allowedOrigins: string[];
@@ -28,7 +38,12 @@ export interface StandInOptions {
     redirectUris: string[];
     identities: { email: string; name: string; role?: string }[];
   };
+  /** The payment provider's keys and the app's webhook endpoint; local test keys when left out. */
+  payments?: { secretKey: string; webhookSecret: string; webhookUrl?: string };
 }
+
+/** The payments stand-in's keys when the caller names none; they only ever open this local stand-in. */
+export const localPaymentKeys = { secretKey: 'sk_test_gradepass_local', webhookSecret: 'whsec_gradepass_local' };
 
 export interface StandIns {
   s3: { endpoint: string; accessKeyId: string; secretAccessKey: string; region: string; bucket: string };
@@ -41,10 +56,11 @@ export interface StandIns {
     setReplyDelay(ms: number): void;
   };
   oauth: { issuer: string; authorizationUrl: string; tokenUrl: string; userinfoUrl: string };
+  payments: Omit<PaymentsStandIn, 'stop'>;
   stop(): Promise<void>;
 }
 
-/** Starts storage, mail and sign-in together; if one fails to start, the ones already up are stopped again. */
+/** Starts storage, mail, sign-in and payments together; if one fails to start, the ones already up are stopped again. */
 export async function startStandIns(opts: StandInOptions): Promise<StandIns> {
   const host = opts.host ?? defaultHost;
   const started: { stop(): Promise<void> }[] = [];
@@ -76,7 +92,20 @@ export async function startStandIns(opts: StandInOptions): Promise<StandIns> {
     started.push(mail);
     const oauth = await startOAuthStandIn({ host, port: opts.oauthPort, ...opts.oauth });
     started.push(oauth);
-    return { s3: withoutStop(s3), mail: withoutStop(mail), oauth: withoutStop(oauth), stop: stopAll };
+    const payments = await startPaymentsStandIn({
+      dir: join(opts.dataDir, 'payments'),
+      host,
+      port: opts.paymentsPort,
+      ...(opts.payments ?? localPaymentKeys),
+    });
+    started.push(payments);
+    return {
+      s3: withoutStop(s3),
+      mail: withoutStop(mail),
+      oauth: withoutStop(oauth),
+      payments: withoutStop(payments),
+      stop: stopAll,
+    };
   } catch (error) {
     await stopAll().catch(() => undefined);
     throw error;

@@ -9,6 +9,7 @@ import { AppError, notFound } from './lib/errors';
 import { httpLogger } from './lib/http-logger';
 import { errorHandler } from './middleware/error-handler';
 import { registerRoutes } from './routes';
+import { paymentWebhookRouter } from './routes/payments/payments.routes';
 import { rateLimitRouter } from './security/rate-limits';
 import { noStore, requireSameOrigin } from './security/same-origin';
 import { sessionMiddleware } from './security/session';
@@ -55,6 +56,8 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
     }),
   );
   app.use(httpLogger(logger));
+  // The payment provider's signed notices: the raw body, no session, and no browser origin to check.
+  app.use(paymentWebhookRouter(ctx));
   app.use(requireSameOrigin(env.APP_ORIGIN));
   app.use('/api', noStore, requireJsonWrites);
   app.use(express.json({ limit: '1mb' }));

@@ -3,6 +3,7 @@ import { createDb } from './db/client';
 import { dbTimeouts, type Env } from './config/env';
 import { createLogger } from './lib/logger';
 import { createMailer } from './infra/mailer';
+import { createPaymentsClient } from './infra/payments';
 import { createS3Client } from './infra/storage';
 
 export function createContext(env: Env): AppContext {
@@ -12,7 +13,15 @@ export function createContext(env: Env): AppContext {
     timeouts: dbTimeouts(env),
     onConnectionError: (error) => logger.warn({ err: error }, 'a database connection was closed by the server'),
   });
-  return { env, db, pool, logger, s3: createS3Client(env), mailer: createMailer(env) };
+  return {
+    env,
+    db,
+    pool,
+    logger,
+    s3: createS3Client(env),
+    mailer: createMailer(env),
+    payments: createPaymentsClient(env),
+  };
 }
 
 export async function closeContext(ctx: AppContext) {

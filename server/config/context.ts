@@ -1,6 +1,7 @@
 import type { S3Client } from '@aws-sdk/client-s3';
 import type { Transporter } from 'nodemailer';
 import type pg from 'pg';
+import type Stripe from 'stripe';
 import type { Db } from '../db/client';
 import type { Env } from './env';
 import type { Logger } from '../lib/logger';
@@ -13,4 +14,6 @@ export interface AppContext {
   logger: Logger;
   s3: S3Client;
   mailer: Transporter;
+  /** The payment provider's SDK client (`server/infra/payments.ts`). */
+  payments: Stripe;
 }

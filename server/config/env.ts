@@ -56,6 +56,18 @@ const envSchema = z.object({
     .transform((v) => v === 'true'),
   SMTP_USER: z.string().optional(),
   SMTP_PASSWORD: z.string().optional(),
+  /** The payment provider: its secret API key and the webhook endpoint's signing secret (see README, Payments). */
+  STRIPE_SECRET_KEY: z.string().min(1),
+  STRIPE_WEBHOOK_SECRET: z.string().min(1),
+  /** Leave these three unset to reach the provider itself; set them to reach another server speaking its API. */
+  STRIPE_API_HOST: z.string().min(1).optional(),
+  STRIPE_API_PORT: port.optional(),
+  STRIPE_API_PROTOCOL: z.enum(['http', 'https']).optional(),
+  /** The currency every quote and payment is in (ISO 4217, lower case); amounts are kept in its smallest unit. */
+  PAYMENT_CURRENCY: z
+    .string()
+    .regex(/^[a-z]{3}$/, 'PAYMENT_CURRENCY must be a three-letter currency code in lower case, such as usd')
+    .default('usd'),
   MAIL_FROM: z.string().default('Gradepass <no-reply@gradepass.test>'),
   MAIL_REPLY_TO: z.string().optional(),
   OFFICE_EMAIL: z.email().default('office@gradepass.test'),

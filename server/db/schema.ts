@@ -37,6 +37,9 @@ export const messageVisibilityEnum = pgEnum('message_visibility', ['internal', '
 export const ruleProfileStatusEnum = pgEnum('rule_profile_status', ['draft', 'published']);
 export const photoStatusEnum = pgEnum('photo_status', ['pending', 'stored', 'removed']);
 export const emailStatusEnum = pgEnum('email_status', ['queued', 'sending', 'sent', 'failed', 'dead']);
+export const rateCardStatusEnum = pgEnum('rate_card_status', ['draft', 'published']);
+/** A quote's own life; `replaced` is a sent quote a later version took over from. */
+export const quoteStatusEnum = pgEnum('quote_status', ['draft', 'sent', 'accepted', 'declined', 'replaced']);
 
 export const users = pgTable(
   'users',
@@ -417,4 +420,177 @@ export const adminAuditEntries = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index('admin_audit_entries_created_idx').on(t.createdAt)],
+);
+
+/**
+ * The company's unit prices, versioned like rule profiles: a draft is edited, publishing freezes it and makes it the
+ * current card (the highest published version). A quote names the version it priced from. Money is integer cents.
+ */
+export const rateCardVersions = pgTable(
+  'rate_card_versions',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    version: integer().notNull(),
+    status: rateCardStatusEnum().notNull().default('draft'),
+    /** The prices as validated by shared/contracts/rate-cards.ts (`rateCardPricesSchema`). */
+    prices: jsonb().notNull(),
+    changeNote: text().notNull().default(''),
+    createdById: uuid().references(() => users.id),
+    createdAt: createdAt(),
+    publishedAt: timestamp({ withTimezone: true }),
+    publishedById: uuid().references(() => users.id),
+  },
+  (t) => [
+    uniqueIndex('rate_card_versions_version_key').on(t.version),
+    // One draft at a time.
+    uniqueIndex('rate_card_versions_one_draft_key')
+      .on(t.status)
+      .where(sql`${t.status} = 'draft'`),
+  ],
+);
+
+/**
+ * One version of a request's quote. A draft is edited by the office; sending freezes it (lines, totals, terms) for
+ * good. A revision is a new row with the next version; sending it marks the earlier sent one `replaced`.
+ */
+export const quotes = pgTable(
+  'quotes',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    version: integer().notNull(),
+    status: quoteStatusEnum().notNull().default('draft'),
+    gradeCheckId: uuid()
+      .notNull()
+      .references(() => gradeChecks.id),
+    rateCardVersionId: uuid()
+      .notNull()
+      .references(() => rateCardVersions.id),
+    /** The lines as validated by shared/contracts/quotes.ts (`quoteLineSchema`), each with its amount in cents. */
+    lines: jsonb().notNull(),
+    subtotalCents: bigint({ mode: 'number' }).notNull(),
+    taxCents: bigint({ mode: 'number' }).notNull(),
+    totalCents: bigint({ mode: 'number' }).notNull(),
+    /** Basis points (1/100 of a percent) copied from the rate card, and the deposit they give. */
+    taxRateBp: integer().notNull(),
+    depositRateBp: integer().notNull(),
+    depositCents: bigint({ mode: 'number' }).notNull(),
+    terms: text().notNull().default(''),
+    validUntil: date().notNull(),
+    documentId: uuid().references(() => documents.id),
+    createdById: uuid()
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    updatedAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    sentAt: timestamp({ withTimezone: true }),
+    sentById: uuid().references(() => users.id),
+    /** The owner's answer: the name typed to accept, or the reason to decline. */
+    acceptedAt: timestamp({ withTimezone: true }),
+    acceptedName: text(),
+    acceptedById: uuid().references(() => users.id),
+    declinedAt: timestamp({ withTimezone: true }),
+    declineReason: text(),
+    declinedById: uuid().references(() => users.id),
+  },
+  (t) => [
+    uniqueIndex('quotes_request_version_key').on(t.requestId, t.version),
+    // One draft per request at a time.
+    uniqueIndex('quotes_request_one_draft_key')
+      .on(t.requestId)
+      .where(sql`${t.status} = 'draft'`),
+  ],
+);
+
+export const paymentKindEnum = pgEnum('payment_kind', ['deposit', 'balance']);
+export const paymentMethodEnum = pgEnum('payment_method', ['card', 'offline']);
+export const checkoutStatusEnum = pgEnum('checkout_status', ['open', 'complete', 'expired']);
+
+/**
+ * A payment page asked of the provider for one amount due. While one is open for a request and kind, a second tab
+ * gets the same page (the partial unique key); the row's id is the idempotency key of the provider call, so two
+ * calls at once still make one page.
+ */
+export const paymentCheckouts = pgTable(
+  'payment_checkouts',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    kind: paymentKindEnum().notNull(),
+    /** The amount due when the page was made, from our own records. */
+    amountCents: bigint({ mode: 'number' }).notNull(),
+    currency: text().notNull(),
+    status: checkoutStatusEnum().notNull().default('open'),
+    providerSessionId: text().unique(),
+    url: text(),
+    createdById: uuid()
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+  },
+  (t) => [
+    uniqueIndex('payment_checkouts_one_open_key')
+      .on(t.requestId, t.kind)
+      .where(sql`${t.status} = 'open'`),
+  ],
+);
+
+/** Money received, by card through the provider or recorded by the office; one deposit and one balance per request. */
+export const payments = pgTable(
+  'payments',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    kind: paymentKindEnum().notNull(),
+    method: paymentMethodEnum().notNull(),
+    amountCents: bigint({ mode: 'number' }).notNull(),
+    currency: text().notNull(),
+    quoteId: uuid().references(() => quotes.id),
+    checkoutId: uuid().references(() => paymentCheckouts.id),
+    providerSessionId: text().unique(),
+    providerPaymentIntentId: text(),
+    note: text().notNull().default(''),
+    recordedById: uuid().references(() => users.id),
+    paidAt: timestamp({ withTimezone: true }).notNull(),
+    createdAt: createdAt(),
+    refundedAt: timestamp({ withTimezone: true }),
+    refundedCents: bigint({ mode: 'number' }).notNull().default(0),
+    providerRefundId: text(),
+    refundNote: text().notNull().default(''),
+    refundedById: uuid().references(() => users.id),
+  },
+  (t) => [uniqueIndex('payments_request_kind_key').on(t.requestId, t.kind), index('payments_paid_idx').on(t.paidAt)],
+);
+
+/** Every provider notice taken in, by its event id: the same notice delivered twice is acted on once. */
+export const paymentProviderEvents = pgTable('payment_provider_events', {
+  eventId: text().primaryKey(),
+  type: text().notNull(),
+  objectId: text(),
+  receivedAt: createdAt(),
+});
+
+/** Changes to the price agreed with the owner after the quote (more pipe, less base): added to the balance. */
+export const balanceChanges = pgTable(
+  'balance_changes',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    description: text().notNull(),
+    amountCents: bigint({ mode: 'number' }).notNull(),
+    createdById: uuid()
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (t) => [index('balance_changes_request_idx').on(t.requestId)],
 );

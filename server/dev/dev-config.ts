@@ -6,6 +6,7 @@ export const devPorts = {
   smtp: Number(process.env.SMTP_PORT ?? 54325),
   mailWeb: Number(process.env.MAIL_WEB_PORT ?? 54326),
   oauth: Number(process.env.OAUTH_PORT ?? 54327),
+  payments: Number(process.env.PAYMENTS_PORT ?? 54328),
 };
 
 export const devOAuthClient = { clientId: 'gradepass-local', clientSecret: 'gradepass-local-secret' };

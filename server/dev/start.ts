@@ -1,11 +1,14 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdirSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
-import { startStandIns } from '../../fakes';
+import { localPaymentKeys, startStandIns } from '../../fakes';
+import { paymentWebhookPath } from '@shared/contracts/payments';
 import { applyMigrations, createDb } from '../db/client';
 import { demoPeople } from './seed/demo-people';
 import { seedDemo } from './seed';
+import { seedDemoQuotePdfs } from './seed/demo-quotes';
 import { seedDemoReports } from './seed/demo-reports';
+import { seedDemoPayments } from './seed/demo-payments';
 import { closeContext, createContext } from '../context-factory';
 import { parseEnv } from '../config/env';
 import { devBucket, devOAuthClient, devPorts } from './dev-config';
@@ -62,9 +65,11 @@ async function main() {
       smtpPort: devPorts.smtp,
       mailWebPort: devPorts.mailWeb,
       oauthPort: devPorts.oauth,
+      paymentsPort: devPorts.payments,
       bucket: devBucket,
       allowedOrigins: [appOrigin, `http://localhost:${devPorts.app}`],
       oauth: { ...devOAuthClient, redirectUris: [`${appOrigin}/auth/google/callback`], identities: demoPeople },
+      payments: { ...localPaymentKeys, webhookUrl: `${appOrigin}${paymentWebhookPath}` },
     });
     stops.push(() => standIns.stop());
 
@@ -77,6 +82,9 @@ async function main() {
     const seedCtx = createContext(parseEnv({ ...env, LOG_LEVEL: 'warn' }));
     try {
       await seedDemoReports(seedCtx);
+      await seedDemoQuotePdfs(seedCtx);
+      // Card payments go through the payments stand-in, so they too wait until it runs.
+      await seedDemoPayments(seedCtx);
     } finally {
       await closeContext(seedCtx);
     }
@@ -93,6 +101,7 @@ async function main() {
         `  Sign-in picker:  ${standIns.oauth.authorizationUrl} (opens from the app's Sign in button)`,
         `  Mail catcher:    ${standIns.mail.webUrl}`,
         `  File storage:    ${standIns.s3.endpoint} (bucket ${standIns.s3.bucket})`,
+        `  Payments:        ${standIns.payments.url} (payment pages and the notices sent to the app)`,
         `  PostgreSQL:      ${databaseUrl}`,
         `  Data folder:     ${dataDir}`,
         '',

@@ -8,10 +8,13 @@ import { emailsRouter } from './emails/emails.routes';
 import { gradeChecksRouter } from './grade-checks/grade-checks.routes';
 import { healthRouter } from './health/health.routes';
 import { messagesRouter } from './messages/messages.routes';
+import { paymentsRouter } from './payments/payments.routes';
 import { photosRouter } from './photos/photos.routes';
 import { requestsRouter } from './requests/requests.routes';
 import { ruleProfilesRouter } from './rule-profiles/rule-profiles.routes';
 import { queueRouter } from './queue/queue.routes';
+import { quotesRouter } from './quotes/quotes.routes';
+import { rateCardsRouter } from './rate-cards/rate-cards.routes';
 import { transitionsRouter } from './transitions/transitions.routes';
 import { usersRouter } from './users/users.routes';
 
@@ -31,4 +34,7 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(gradeChecksRouter(ctx));
   app.use(documentsRouter(ctx));
   app.use(calendarRouter(ctx));
+  app.use(rateCardsRouter(ctx));
+  app.use(quotesRouter(ctx));
+  app.use(paymentsRouter(ctx));
 }

@@ -8,6 +8,14 @@ export const eventKindLabels: Record<string, string> = {
   'work-day-planned': 'Work day planned',
   'crew-note': 'Note for the crew',
   'grade-check-withdrawn': 'Grade check withdrawn',
+  'quote-drafted': 'Quote drafted',
+  'quote-sent': 'Quote sent',
+  'quote-accepted': 'Quote accepted',
+  'quote-declined': 'Quote declined',
+  'deposit-paid': 'Deposit paid',
+  'balance-paid': 'Balance paid',
+  'payment-refunded': 'Refunded',
+  'balance-change': 'Change to the price agreed',
 };
 
 export const eventKindLabel = (kind: string) => eventKindLabels[kind] ?? 'Update';

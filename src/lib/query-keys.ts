@@ -67,9 +67,38 @@ export const emailKeys = {
   one: (id: string) => ['emails', 'one', id] as const,
 };
 
+export const paymentKeys = {
+  /** Every request's GET /api/requests/:id/payments. */
+  requests: () => ['payments', 'request'] as const,
+  /** GET /api/requests/:id/payments */
+  ofRequest: (requestId: string) => ['payments', 'request', requestId] as const,
+  /** Every filtered view of GET /api/payments. */
+  lists: () => ['payments', 'list'] as const,
+  list: (state: string) => ['payments', 'list', state] as const,
+  /** GET /api/settings/payment-waits */
+  waits: () => ['payments', 'waits'] as const,
+};
+
 /** What a status change on one request can alter: the request, its history and (for an answer) its messages. */
 export const statusChangeKeys = (requestId: string) => [
   requestKeys.one(requestId),
   eventKeys.ofRequest(requestId),
   messageKeys.ofRequest(requestId),
+  // What is due, and what waits for money, follow the status (the balance is due once built).
+  paymentKeys.ofRequest(requestId),
+];
+
+/** GET /api/requests/:id/quotes */
+export const quoteKeys = { ofRequest: (requestId: string) => ['quotes', requestId] as const };
+
+/** GET /api/rate-cards */
+export const rateCardKeys = { list: () => ['rate-cards', 'list'] as const };
+
+/** Documents travel with the request's own answer; events with the timeline. */
+export const quoteChangeKeys = (requestId: string) => [
+  quoteKeys.ofRequest(requestId),
+  requestKeys.one(requestId),
+  eventKeys.ofRequest(requestId),
+  // An accepted quote makes the deposit due.
+  paymentKeys.ofRequest(requestId),
 ];

@@ -54,7 +54,7 @@ it('starts every service on loopback with the bucket ready and data under dataDi
     $metadata: { httpStatusCode: 200 },
   });
   client.destroy();
-  expect((await readdir(dataDir)).sort()).toEqual(['mail', 's3']);
+  expect((await readdir(dataDir)).sort()).toEqual(['mail', 'payments', 's3']);
 });
 
 it('stops everything and frees every port', async () => {

@@ -1,7 +1,19 @@
-import { eq, sql } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { requestStatuses } from '@shared/workflow/statuses';
-import { asBuiltSets, gradeChecks, jobs, requestEvents, requests, ruleProfileVersions } from '../../server/db/schema';
+import {
+  asBuiltSets,
+  documents,
+  gradeChecks,
+  jobs,
+  quotes,
+  rateCardVersions,
+  requestEvents,
+  requests,
+  ruleProfileVersions,
+} from '../../server/db/schema';
+import { getAcceptedQuote } from '../../server/services/quotes/accepted-quote';
+import { seedDemoQuotePdfs } from '../../server/dev/seed/demo-quotes';
 import { seedDemo } from '../../server/dev/seed';
 import { runGradeCheck } from '../../server/services/grade-checks/run-grade-check';
 import { ruleProfileSchema } from '@shared/engine';
@@ -24,12 +36,15 @@ describe('the demo scenario', () => {
     expect([...requestStatuses].filter((s) => s !== 'permit_refused' && !statuses.has(s))).toEqual([]);
   });
 
-  it('records every step as an event whose version matches', async () => {
+  it('records every status step as an event whose version matches', async () => {
     const rows = await t.ctx.db
       .select({ id: requests.id, version: requests.version, status: requests.status })
       .from(requests);
     for (const row of rows) {
-      const events = await t.ctx.db.select().from(requestEvents).where(eq(requestEvents.requestId, row.id));
+      const events = await t.ctx.db
+        .select()
+        .from(requestEvents)
+        .where(and(eq(requestEvents.requestId, row.id), eq(requestEvents.kind, 'transition')));
       expect(events.length).toBe(row.version - 1);
       if (events.length) expect(events.sort((a, b) => +a.createdAt - +b.createdAt).at(-1)!.toStatus).toBe(row.status);
     }
@@ -68,6 +83,36 @@ describe('the demo scenario', () => {
       const sets = await t.ctx.db.select().from(asBuiltSets).where(eq(asBuiltSets.requestId, r.id));
       expect(sets.map((s) => s.passed)).toEqual([true]);
     }
+  });
+
+  it('has a published rate card, a sent quote waiting for its owner and an accepted one, each added once', async () => {
+    await seedDemo(t.ctx.db);
+    const cards = await t.ctx.db.select().from(rateCardVersions);
+    expect(cards.map((c) => [c.version, c.status])).toEqual([[1, 'published']]);
+    const rows = await t.ctx.db
+      .select({ q: quotes, address: requests.siteAddress })
+      .from(quotes)
+      .innerJoin(requests, eq(requests.id, quotes.requestId));
+    expect(rows.map((r) => [r.address, r.q.status]).sort()).toEqual([
+      ['2 Quillfeather Road, Elderbrook', 'sent'],
+      ['904 Old Mill Road, Marrow Crossing', 'accepted'],
+    ]);
+    const accepted = rows.find((r) => r.q.status === 'accepted')!.q;
+    const forPayment = await getAcceptedQuote(t.ctx.db, accepted.requestId);
+    expect(forPayment).toMatchObject({ totalCents: accepted.totalCents, depositCents: accepted.depositCents });
+    expect(forPayment!.balanceCents).toBe(accepted.totalCents - accepted.depositCents);
+    for (const { q } of rows) {
+      expect(q.totalCents).toBeGreaterThan(0);
+      expect(q.totalCents).toBe(q.subtotalCents + q.taxCents);
+    }
+    // Once storage runs, each sent quote gets its PDF, shared with its owner, once.
+    expect(await seedDemoQuotePdfs(t.ctx)).toBe(2);
+    expect(await seedDemoQuotePdfs(t.ctx)).toBe(0);
+    const docs = await t.ctx.db.select().from(documents).where(eq(documents.kind, 'quote'));
+    expect(docs).toHaveLength(2);
+    expect(docs.every((d) => d.sharedWithApplicant)).toBe(true);
+    const withPdf = await t.ctx.db.select().from(quotes);
+    expect(withPdf.map((q) => q.documentId).sort()).toEqual(docs.map((d) => d.id).sort());
   });
 
   it('shows each applicant only their own demo requests', async () => {

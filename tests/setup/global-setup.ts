@@ -3,7 +3,8 @@ import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import type { TestProject } from 'vitest/node';
-import { startStandIns } from '../../fakes';
+import { localPaymentKeys, startStandIns } from '../../fakes';
+import { paymentWebhookPath } from '../../shared/contracts/payments';
 import { applyMigrations } from '../../server/db/client';
 import { demoPeople } from '../../server/dev/seed/demo-people';
 import { devOAuthClient } from '../../server/dev/dev-config';
@@ -42,6 +43,8 @@ export default async function setup(project: TestProject) {
     bucket: 'gradepass-test',
     allowedOrigins: [appOrigin],
     oauth: { ...devOAuthClient, redirectUris: [`${appOrigin}/auth/google/callback`], identities: demoPeople },
+    // Only the browser project's app listens; integration files that pay start a payments stand-in of their own.
+    payments: { ...localPaymentKeys, webhookUrl: `${appOrigin}${paymentWebhookPath}` },
   });
   const env = standInEnv(standIns, { appOrigin, port: appPort, databaseUrl: '' });
   const stack: TestStack = { adminDatabaseUrl, templateDatabase, env, mailWebUrl: standIns.mail.webUrl, artifactsDir };

@@ -248,6 +248,23 @@ export const demoScenario: DemoRequest[] = [
     application: application({ address: '18 Fernhill Road, Marrow Crossing', roadName: 'Fernhill Road' }),
   },
   {
+    status: 'permit_refused',
+    applicant: nora,
+    jurisdiction: 'marrow-county',
+    ageDays: 34,
+    site: gentle,
+    permitReference: 'MC-DA-2026-0377',
+    application: application({
+      address: '27 Kestrel Bend Road, Marrow Crossing',
+      roadName: 'Kestrel Bend Road',
+      postedSpeedMph: 50,
+    }),
+    notes: {
+      permit_refused:
+        'The county asks for the entrance 60 ft further north for sight distance; the owner has decided not to go ahead.',
+    },
+  },
+  {
     status: 'declined',
     applicant: sam,
     office: marcus,

@@ -3,6 +3,7 @@ import type { Db } from '../../db/client';
 import { users } from '../../db/schema';
 import { demoPeople } from './demo-people';
 import { seedDemoJobs } from './demo-jobs';
+import { seedDemoQuotes } from './demo-quotes';
 import { seedDemoRequests } from './demo-requests';
 import { seedJurisdictions } from './jurisdictions';
 
@@ -18,6 +19,7 @@ export async function seedDemo(db: Db) {
     }
     await seedJurisdictions(tx);
     await seedDemoRequests(tx);
+    await seedDemoQuotes(tx);
   });
   await seedDemoJobs(db);
 }

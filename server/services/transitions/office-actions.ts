@@ -7,6 +7,7 @@ import { badRequest, conflict } from '../../lib/errors';
 import type { RequestRow } from '../requests/request-access';
 import type { ActionDef, ActionStep } from './action-def';
 import { lastAsBuiltSet } from './as-built-state';
+import { explainPaymentWait, requirePaid } from './payment-waits';
 
 async function attachedGradeCheck(tx: Tx, requestId: string) {
   const [check] = await tx
@@ -113,7 +114,11 @@ export const markChecked: ActionDef<'mark-checked'> = {
 
 export const filePermit: ActionDef<'file-permit'> = {
   emails: { to: ['applicant'] },
-  run: async ({ body }) => ({ patch: { permitReference: body.permitReference } }),
+  run: async ({ tx, row, body }) => {
+    await requirePaid(tx, row.id, 'file-permit');
+    return { patch: { permitReference: body.permitReference } };
+  },
+  explainRefusal: explainPaymentWait('file-permit', 'checked'),
 };
 
 export const recordGranted: ActionDef<'record-granted'> = {
@@ -151,6 +156,7 @@ export const close: ActionDef<'close'> = {
   emails: { to: ['applicant', 'crew'] },
   // Closing over failing readings is the office's call to make, but on the record: it says why.
   run: async ({ tx, row, body }) => {
+    await requirePaid(tx, row.id, 'close');
     const set = await lastAsBuiltSet(tx, row.id);
     if (set && !set.passed && !body.note) {
       throw badRequest(
@@ -161,6 +167,7 @@ export const close: ActionDef<'close'> = {
       );
     }
   },
+  explainRefusal: explainPaymentWait('close', 'built'),
 };
 
 export const decline: ActionDef<'decline'> = { emails: { to: ['applicant'] } };

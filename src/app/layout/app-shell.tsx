@@ -14,6 +14,8 @@ const navByRole: Record<Role, { to: string; label: string }[]> = {
     { to: paths.office.queue.getHref(), label: 'Queue' },
     { to: paths.office.calendar.getHref(), label: 'Calendar' },
     { to: paths.office.ruleProfiles.getHref(), label: 'Rule profiles' },
+    { to: paths.office.rateCard.getHref(), label: 'Rate card' },
+    { to: paths.office.payments.getHref(), label: 'Payments' },
     { to: paths.office.emails.getHref(), label: 'E-mail log' },
   ],
   crew: [
@@ -24,6 +26,8 @@ const navByRole: Record<Role, { to: string; label: string }[]> = {
     { to: paths.office.queue.getHref(), label: 'Queue' },
     { to: paths.office.calendar.getHref(), label: 'Calendar' },
     { to: paths.office.ruleProfiles.getHref(), label: 'Rule profiles' },
+    { to: paths.office.rateCard.getHref(), label: 'Rate card' },
+    { to: paths.office.payments.getHref(), label: 'Payments' },
     { to: paths.office.emails.getHref(), label: 'E-mail log' },
     { to: paths.office.users.getHref(), label: 'Users and roles' },
     { to: paths.office.crewYard.getHref(), label: 'Crew yard' },

@@ -8,8 +8,10 @@ import { useLatestQuestion } from '@/features/events/api/get-events';
 import { EventList } from '@/features/events/components/event-list';
 import { CheckSummary } from '@/features/grade-check/components/check-summary';
 import { MessageThread } from '@/features/messages/components/message-thread';
+import { OwnerPayments } from '@/features/payments/components/owner-payments';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
 import { PhotoStep } from '@/features/photos/components/photo-step';
+import { OwnerQuote } from '@/features/quotes/components/owner-quote';
 import { useRequest } from '@/features/requests/api/get-request';
 import { ApplicationSummary } from '@/features/requests/components/application-summary';
 import { RequestDocuments } from '@/features/requests/components/request-documents';
@@ -32,9 +34,21 @@ function RequestPage({ id }: { id: string }) {
           <Panel title="Where it stands">
             <RequestStatus request={request} editHref={paths.applicant.editRequest.getHref(id)} question={question} />
           </Panel>
-          <Panel title="Messages with the office">
-            <MessageThread requestId={id} canWrite={request.status !== 'draft'} />
-          </Panel>
+          {request.status !== 'draft' && (
+            <Panel title="Quote">
+              <OwnerQuote requestId={id} nameOnRequest={request.applicantName} questionHref="#messages" />
+            </Panel>
+          )}
+          {request.status !== 'draft' && (
+            <Panel title="Payments">
+              <OwnerPayments requestId={id} />
+            </Panel>
+          )}
+          <div id="messages">
+            <Panel title="Messages with the office">
+              <MessageThread requestId={id} canWrite={request.status !== 'draft'} />
+            </Panel>
+          </div>
           <Panel title="Photos">
             {photosEditable(request.status) ? <PhotoStep requestId={id} /> : <PhotoGallery requestId={id} />}
           </Panel>

@@ -7,8 +7,12 @@ import { useAsBuilt } from '@/features/jobs/api/get-as-built';
 import { AsBuiltReview } from '@/features/jobs/components/as-built-review';
 import { EventList } from '@/features/events/components/event-list';
 import { MessageThread } from '@/features/messages/components/message-thread';
+import type { Cautions } from '@/features/office/components/action-panel';
 import { RequestWorkspace } from '@/features/office/components/request-workspace';
+import { OfficePayments } from '@/features/payments/components/office-payments';
+import { useRequestPayments } from '@/features/payments/api/get-request-payments';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
+import { QuoteBuilder } from '@/features/quotes/components/quote-builder';
 import { useOfficeRequest } from '@/features/requests/api/get-request';
 import { ApplicationSummary } from '@/features/requests/components/application-summary';
 
@@ -18,13 +22,14 @@ function OfficeRequestPage({ id }: { id: string }) {
   const query = useOfficeRequest(id);
   const built = ['under_construction', 'built', 'closed'].includes(query.data?.request.status ?? '');
   const latest = useAsBuilt(id, built).data?.sets[0];
-  // Closing over failing readings is allowed, but the office sees them first and writes down why.
-  const cautions =
-    latest && !latest.passed
-      ? {
-          close: `The crew’s last as-built readings fail the rule profile${latest.note ? ` (crew’s note: “${latest.note}”)` : ''}. Closing anyway needs a note saying why.`,
-        }
-      : undefined;
+  const waits = useRequestPayments(id).data?.waits ?? [];
+  // Closing over failing readings is allowed, but the office sees them first and writes down why. A step that waits
+  // for money under the company's setting says so before the office tries it.
+  const cautions: Cautions = Object.fromEntries(waits.map((w) => [w.action, w.text]));
+  if (latest && !latest.passed) {
+    const readings = `The crew’s last as-built readings fail the rule profile${latest.note ? ` (crew’s note: “${latest.note}”)` : ''}. Closing anyway needs a note saying why.`;
+    cautions.close = cautions.close ? `${cautions.close} ${readings}` : readings;
+  }
   if (query.isPending) return <Loading label="Loading the request…" />;
   if (query.error) return <ErrorNotice error={query.error} />;
   const { request } = query.data;
@@ -38,9 +43,16 @@ function OfficeRequestPage({ id }: { id: string }) {
           cautions={cautions}
           sections={{
             application: () => <ApplicationSummary application={request.application} />,
+            quote: () => <QuoteBuilder requestId={id} ownerName={request.applicantName} />,
             photos: () => <PhotoGallery requestId={id} emptyText="The homeowner has not added photos." />,
             messages: () => <MessageThread requestId={id} office />,
             history: () => <EventList requestId={id} office label="History" />,
+            money: () => (
+              <OfficePayments
+                requestId={id}
+                canRefund={me.role === 'admin' && ['withdrawn', 'declined', 'permit_refused'].includes(request.status)}
+              />
+            ),
           }}
         />
       )}

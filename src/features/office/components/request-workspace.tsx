@@ -9,6 +9,7 @@ import { RequestFacts } from './request-facts';
 
 const tabs = [
   { id: 'overview', label: 'Overview' },
+  { id: 'quote', label: 'Quote' },
   { id: 'photos', label: 'Photos' },
   { id: 'messages', label: 'Messages' },
   { id: 'history', label: 'History' },
@@ -19,7 +20,10 @@ interface WorkspaceProps {
   request: OfficeRequestView;
   me: { id: string; role: Role };
   /** The parts other features draw, composed by the screen: the full application, photos, messages, history. */
-  sections: Record<'application' | 'photos' | 'messages' | 'history', () => ReactNode>;
+  sections: Record<'application' | 'quote' | 'photos' | 'messages' | 'history', () => ReactNode> & {
+    /** The money side (agreed price, deposit, balance), beside the next step. */
+    money?: () => ReactNode;
+  };
   /** What the screen knows the office should weigh before a move, such as failing as-built readings. */
   cautions?: Cautions;
 }
@@ -69,6 +73,7 @@ export function RequestWorkspace({ request, me, sections, cautions }: WorkspaceP
               <Panel title="What the owner told us">{sections.application()}</Panel>
             </>
           )}
+          {tab === 'quote' && <Panel title="Quote">{sections.quote()}</Panel>}
           {tab === 'photos' && <Panel title="Site photos">{sections.photos()}</Panel>}
           {tab === 'messages' && <Panel title="Messages">{sections.messages()}</Panel>}
           {tab === 'history' && <Panel title="History">{sections.history()}</Panel>}
@@ -78,6 +83,7 @@ export function RequestWorkspace({ request, me, sections, cautions }: WorkspaceP
             <p className="mb-3 text-sm text-stone-600">{request.whatNext}</p>
             <ActionPanel request={request} role={me.role} cautions={cautions} />
           </Panel>
+          {sections.money && <Panel title="Money">{sections.money()}</Panel>}
         </aside>
       </div>
     </>

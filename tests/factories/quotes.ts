@@ -1,0 +1,46 @@
+import { rateCardVersions, quotes } from '../../server/db/schema';
+import type { DbOrTx } from '../../server/db/client';
+import { emptyPrices } from '../../server/services/rate-cards/rate-cards.service';
+import { createGradeCheck } from './grade-checks';
+
+/**
+ * A quote sent to the owner (status `sent`), priced from a published rate card, with the totals given in cents:
+ * the owner's acceptance and the payments are what the tests then drive.
+ */
+export async function createSentQuote(
+  db: DbOrTx,
+  opts: { requestId: string; createdById: string; totalCents: number; depositCents: number },
+) {
+  const check = await createGradeCheck(db, { requestId: opts.requestId, createdById: opts.createdById });
+  const [card] = await db
+    .insert(rateCardVersions)
+    .values({
+      version: Math.floor(Math.random() * 1e9),
+      status: 'published',
+      prices: emptyPrices,
+      publishedAt: new Date(),
+    })
+    .returning();
+  const [quote] = await db
+    .insert(quotes)
+    .values({
+      requestId: opts.requestId,
+      version: 1,
+      status: 'sent',
+      gradeCheckId: check.id,
+      rateCardVersionId: card.id,
+      lines: [],
+      subtotalCents: opts.totalCents,
+      taxCents: 0,
+      totalCents: opts.totalCents,
+      taxRateBp: 0,
+      depositRateBp: Math.round((opts.depositCents / opts.totalCents) * 10_000),
+      depositCents: opts.depositCents,
+      validUntil: '2099-01-01',
+      createdById: opts.createdById,
+      sentAt: new Date(),
+      sentById: opts.createdById,
+    })
+    .returning();
+  return quote;
+}
