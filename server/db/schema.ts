@@ -297,9 +297,16 @@ export const asBuiltSets = pgTable(
     results: jsonb().notNull(),
     passed: boolean().notNull(),
     note: text().notNull().default(''),
+    /** The key the crew's phone chose for this set (the Idempotency-Key header), so a resent set is stored once. */
+    idempotencyKey: uuid(),
+    /** A digest of what was sent under that key: the same key with other readings is refused, not answered. */
+    idempotencyDigest: text(),
     createdAt: createdAt(),
   },
-  (t) => [index('as_built_sets_request_idx').on(t.requestId, t.createdAt)],
+  (t) => [
+    index('as_built_sets_request_idx').on(t.requestId, t.createdAt),
+    uniqueIndex('as_built_sets_crew_idempotency_key').on(t.crewId, t.idempotencyKey),
+  ],
 );
 
 /** The outbox and the e-mail log in one: rows are written in the transaction that triggers them. */
