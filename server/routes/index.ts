@@ -6,6 +6,7 @@ import { emailsRouter } from './emails/emails.routes';
 import { gradeChecksRouter } from './grade-checks/grade-checks.routes';
 import { healthRouter } from './health/health.routes';
 import { messagesRouter } from './messages/messages.routes';
+import { crewPhotosRouter } from './photos/crew-photos.routes';
 import { photosRouter } from './photos/photos.routes';
 import { requestsRouter } from './requests/requests.routes';
 import { ruleProfilesRouter } from './rule-profiles/rule-profiles.routes';
@@ -20,6 +21,7 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(usersRouter(ctx));
   app.use(requestsRouter(ctx));
   app.use(photosRouter(ctx));
+  app.use(crewPhotosRouter(ctx));
   app.use(messagesRouter(ctx));
   app.use(transitionsRouter(ctx));
   app.use(emailsRouter(ctx));

@@ -90,5 +90,12 @@ export function rateLimitRouter({ env, db }: Pick<AppContext, 'env' | 'db'>) {
       'Too many photo uploads in a short time.',
     ),
   );
+  router.post(
+    '/api/crew/jobs/:id/photos',
+    limited(
+      personAndAddress('crew-uploads', env.RATE_LIMIT_UPLOADS_PER_HOUR, HOUR),
+      'Too many photo uploads in a short time.',
+    ),
+  );
   return router;
 }

@@ -20,8 +20,12 @@ export const eventKeys = { ofRequest: (requestId: string) => ['events', requestI
 /** GET /api/requests/:id/messages */
 export const messageKeys = { ofRequest: (requestId: string) => ['messages', requestId] as const };
 
-/** GET /api/requests/:id/photos */
-export const photoKeys = { ofRequest: (requestId: string) => ['photos', requestId] as const };
+export const photoKeys = {
+  /** GET /api/requests/:id/photos */
+  ofRequest: (requestId: string) => ['photos', requestId] as const,
+  /** GET /api/requests/:id/crew-photos */
+  crewOfRequest: (requestId: string) => ['photos', 'crew', requestId] as const,
+};
 
 export const peopleKeys = {
   all: ['people'] as const,
