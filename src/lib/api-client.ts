@@ -28,14 +28,20 @@ export function withQuery(path: string, query?: Query) {
   return text ? `${path}?${text}` : path;
 }
 
-async function request<T>(method: string, path: string, body?: unknown, query?: Query): Promise<T> {
+async function request<T>(
+  method: string,
+  path: string,
+  body?: unknown,
+  query?: Query,
+  extraHeaders: Record<string, string> = {},
+): Promise<T> {
   const response = await fetch(withQuery(path, query), {
     method,
     credentials: 'same-origin',
     headers:
       body === undefined
-        ? { Accept: 'application/json' }
-        : { Accept: 'application/json', 'Content-Type': 'application/json' },
+        ? { Accept: 'application/json', ...extraHeaders }
+        : { Accept: 'application/json', 'Content-Type': 'application/json', ...extraHeaders },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
   if (response.status === 204) return undefined as T;
@@ -63,7 +69,8 @@ function safeJson(text: string): unknown {
 
 export const api = {
   get: <T>(path: string, query?: Query) => request<T>('GET', path, undefined, query),
-  post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
+  post: <T>(path: string, body?: unknown, headers?: Record<string, string>) =>
+    request<T>('POST', path, body ?? {}, undefined, headers),
   put: <T>(path: string, body?: unknown) => request<T>('PUT', path, body ?? {}),
   patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, body ?? {}),
   delete: <T>(path: string) => request<T>('DELETE', path),

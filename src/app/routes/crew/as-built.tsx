@@ -4,10 +4,20 @@ import { RequireRole } from '@/app/layout/require-role';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/get-me';
 import { AsBuiltPage } from '@/features/jobs/components/as-built-page';
+import type { PreparePhoto } from '@/features/jobs/components/crew-photo-capture';
+import { readPosition, withoutMetadata } from '@/features/photos/components/photo-metadata';
+
+// The crew's photos are cleaned exactly as the owner's are: position read first, then the camera's metadata removed.
+const preparePhoto: PreparePhoto = async (file) => {
+  const position = await readPosition(file);
+  const blob = (await withoutMetadata(file, file.type)) ?? file;
+  return { blob, position };
+};
 
 export function Component() {
   const { id = '' } = useParams();
-  const crew = useMe().data?.role === 'crew';
+  const me = useMe().data;
+  const crew = me?.role === 'crew';
   return (
     <RequireRole roles={crewScreenRoles}>
       <p className="mb-3 flex flex-wrap gap-4">
@@ -21,7 +31,7 @@ export function Component() {
           Field sheet
         </Link>
       </p>
-      <AsBuiltPage id={id} canEnter={crew} />
+      <AsBuiltPage id={id} canEnter={crew} userId={crew ? me?.id : undefined} preparePhoto={preparePhoto} />
     </RequireRole>
   );
 }

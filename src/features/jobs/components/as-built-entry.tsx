@@ -6,6 +6,8 @@ import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { useSaveAsBuilt } from '../api/save-as-built';
+import { outcomeOf } from '../outbox/outbox-queue';
+import { addToOutbox } from '../outbox/use-outbox';
 import { MarkBuiltPanel } from './mark-built-panel';
 import { checkRows, checkWholeSet, type ReadingRow } from './reading-checks';
 import { ReadingsTable } from './readings-table';
@@ -17,9 +19,19 @@ let nextKey = 1;
 const emptyRow = (kind: ReadingRow['kind'] = 'grade'): ReadingRow => ({ key: nextKey++, station: '', kind, value: '' });
 
 /** Readings as they are taken on site, each judged at once; the set is saved and judged again by the server. */
-export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnter: boolean }) {
+export function AsBuiltEntry({
+  page,
+  canEnter,
+  userId,
+}: {
+  page: AsBuiltPageView;
+  canEnter: boolean;
+  /** The crew lead entering readings: a set that cannot be sent now waits on the phone under their name. */
+  userId?: string;
+}) {
   const [rows, setRows] = useState<ReadingRow[]>(() => [emptyRow()]);
   const [note, setNote] = useState('');
+  const [kept, setKept] = useState(false);
   const save = useSaveAsBuilt();
   const basis = useMemo(
     () => ({ ruleProfile: page.ruleProfile, design: page.design, roadEdgeStationFt: page.roadEdgeStationFt }),
@@ -35,15 +47,46 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
     setRows((list) => list.map((r) => (r.key === key ? { ...r, ...c } : r)));
   const remove = (key: number) =>
     setRows((list) => (list.length === 1 ? [emptyRow()] : list.filter((r) => r.key !== key)));
+  const clear = () => {
+    setRows([emptyRow()]);
+    setNote('');
+  };
   const submit = (event: FormEvent) => {
     event.preventDefault();
     const readings = checks.flatMap((c) => (c.reading ? [c.reading] : []));
+    const body = { readings, note: note || undefined };
+    // The key is made once, here: a set kept for later is sent under the same key, so it is stored once.
+    const key = crypto.randomUUID();
+    setKept(false);
+    const keep = async () => {
+      if (!userId) return;
+      await addToOutbox({
+        key,
+        type: 'readings',
+        body,
+        userId,
+        requestId: page.job.requestId,
+        jobReference: page.job.reference,
+        createdAt: new Date().toISOString(),
+        state: 'waiting',
+        attempts: 0,
+        nextTryAt: Date.now(),
+      });
+      save.reset();
+      clear();
+      setKept(true);
+    };
+    if (!navigator.onLine) {
+      void keep();
+      return;
+    }
     save.mutate(
-      { id: page.job.requestId, readings, note: note || undefined },
+      { id: page.job.requestId, key, ...body },
       {
-        onSuccess: () => {
-          setRows([emptyRow()]);
-          setNote('');
+        onSuccess: clear,
+        // No answer, or the server busy: the set waits on the phone. A refusal stays on screen to be corrected.
+        onError: (error) => {
+          if (outcomeOf(error).kind === 'retry') void keep();
         },
       },
     );
@@ -88,6 +131,12 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
             </Field>
             {save.error && <ErrorNotice error={save.error} />}
             {save.isSuccess && <Notice title="Set saved">The server checked it: see the latest set below.</Notice>}
+            {kept && (
+              <Notice tone="warn" title="Set kept on this phone">
+                There is no connection to the server, so the set waits here (see “Waiting to send” above) and is sent by
+                itself when the signal returns. The server will check it then.
+              </Notice>
+            )}
             <Button type="submit" disabled={save.isPending || !whole} className="min-h-12 px-6 text-base">
               Save this set
             </Button>

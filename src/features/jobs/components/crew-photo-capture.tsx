@@ -1,0 +1,114 @@
+import { useRef, useState, type FormEvent } from 'react';
+import { crewPhotoKindLabels, crewPhotoKinds, type CrewPhotoKind } from '@shared/contracts/crew-photos';
+import { Button } from '@/components/ui/button';
+import { Field, SelectInput, TextInput } from '@/components/ui/field';
+import { Notice } from '@/components/ui/notice';
+import { addToOutbox } from '../outbox/use-outbox';
+
+/** What the screen hands in to ready a photo: the camera's metadata removed, its position read first. */
+export type PreparePhoto = (file: File) => Promise<{ blob: Blob; position?: { latitude: number; longitude: number } }>;
+
+const accepted = ['image/jpeg', 'image/png', 'image/webp', 'image/heic'];
+
+/**
+ * A crew photo is kept on the phone first and sent from the queue, signal or not: the same path online and offline,
+ * so a photo taken at a site with no signal is never a special case.
+ */
+export function CrewPhotoCapture({
+  requestId,
+  jobReference,
+  userId,
+  prepare,
+}: {
+  requestId: string;
+  jobReference: string;
+  userId: string;
+  prepare: PreparePhoto;
+}) {
+  const [kind, setKind] = useState<CrewPhotoKind>('finished_entrance');
+  const [caption, setCaption] = useState('');
+  const [problem, setProblem] = useState<string>();
+  const [added, setAdded] = useState<string>();
+  const [busy, setBusy] = useState(false);
+  const fileInput = useRef<HTMLInputElement>(null);
+
+  const submit = async (event: FormEvent) => {
+    event.preventDefault();
+    const file = fileInput.current?.files?.[0];
+    setAdded(undefined);
+    if (!file) return setProblem('choose or take a photo first');
+    if (!accepted.includes(file.type)) return setProblem('must be a JPEG, PNG, WebP or HEIC image');
+    setProblem(undefined);
+    setBusy(true);
+    try {
+      const { blob, position } = await prepare(file);
+      await addToOutbox({
+        key: crypto.randomUUID(),
+        type: 'photo',
+        photo: {
+          blob,
+          fileName: file.name,
+          contentType: file.type,
+          sizeBytes: blob.size,
+          kind,
+          caption: caption.trim() || undefined,
+          gpsLat: position?.latitude,
+          gpsLng: position?.longitude,
+        },
+        userId,
+        requestId,
+        jobReference,
+        createdAt: new Date().toISOString(),
+        state: 'waiting',
+        attempts: 0,
+        nextTryAt: Date.now(),
+      });
+      setAdded(file.name);
+      setCaption('');
+      if (fileInput.current) fileInput.current.value = '';
+    } finally {
+      setBusy(false);
+    }
+  };
+
+  return (
+    <form onSubmit={(e) => void submit(e)} noValidate className="space-y-4 text-base">
+      <Field label="What the photo shows">
+        {({ id }) => (
+          <SelectInput id={id} value={kind} onChange={(e) => setKind(e.target.value as CrewPhotoKind)}>
+            {crewPhotoKinds.map((k) => (
+              <option key={k} value={k}>
+                {crewPhotoKindLabels[k]}
+              </option>
+            ))}
+          </SelectInput>
+        )}
+      </Field>
+      <Field label="Photo" error={problem}>
+        {({ id, describedBy, invalid }) => (
+          <input
+            id={id}
+            ref={fileInput}
+            type="file"
+            accept={accepted.join(',')}
+            capture="environment"
+            aria-describedby={describedBy}
+            aria-invalid={invalid}
+            className="block w-full text-base"
+          />
+        )}
+      </Field>
+      <Field label="Caption (optional)">
+        {({ id }) => <TextInput id={id} value={caption} maxLength={200} onChange={(e) => setCaption(e.target.value)} />}
+      </Field>
+      <Button type="submit" disabled={busy} className="min-h-12 px-6 text-base">
+        Add the photo
+      </Button>
+      {added && (
+        <Notice title="Photo kept to send">
+          {added} is on this phone without its camera details and goes to the office as soon as there is a signal.
+        </Notice>
+      )}
+    </form>
+  );
+}
