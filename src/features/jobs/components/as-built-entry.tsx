@@ -7,7 +7,7 @@ import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { useSaveAsBuilt } from '../api/save-as-built';
 import { outcomeOf } from '../outbox/outbox-queue';
-import { addToOutbox } from '../outbox/use-outbox';
+import { addToOutbox, useOutboxItems } from '../outbox/use-outbox';
 import { MarkBuiltPanel } from './mark-built-panel';
 import { checkRows, checkWholeSet, type ReadingRow } from './reading-checks';
 import { ReadingsTable } from './readings-table';
@@ -31,7 +31,10 @@ export function AsBuiltEntry({
 }) {
   const [rows, setRows] = useState<ReadingRow[]>(() => [emptyRow()]);
   const [note, setNote] = useState('');
-  const [kept, setKept] = useState(false);
+  // The key of the last set kept on the phone, while it is still there waiting.
+  const [keptKey, setKeptKey] = useState<string>();
+  const waiting = useOutboxItems(userId);
+  const kept = waiting.some((i) => i.key === keptKey && i.state === 'waiting');
   const save = useSaveAsBuilt();
   const basis = useMemo(
     () => ({ ruleProfile: page.ruleProfile, design: page.design, roadEdgeStationFt: page.roadEdgeStationFt }),
@@ -57,7 +60,6 @@ export function AsBuiltEntry({
     const body = { readings, note: note || undefined };
     // The key is made once, here: a set kept for later is sent under the same key, so it is stored once.
     const key = crypto.randomUUID();
-    setKept(false);
     const keep = async () => {
       if (!userId) return;
       await addToOutbox({
@@ -74,7 +76,7 @@ export function AsBuiltEntry({
       });
       save.reset();
       clear();
-      setKept(true);
+      setKeptKey(key);
     };
     if (!navigator.onLine) {
       void keep();

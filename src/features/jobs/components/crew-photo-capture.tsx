@@ -30,6 +30,7 @@ export function CrewPhotoCapture({
   const [problem, setProblem] = useState<string>();
   const [added, setAdded] = useState<string>();
   const [busy, setBusy] = useState(false);
+  const [chosen, setChosen] = useState<string>();
   const fileInput = useRef<HTMLInputElement>(null);
 
   const submit = async (event: FormEvent) => {
@@ -66,6 +67,7 @@ export function CrewPhotoCapture({
       setAdded(file.name);
       setCaption('');
       if (fileInput.current) fileInput.current.value = '';
+      setChosen(undefined);
     } finally {
       setBusy(false);
     }
@@ -86,16 +88,29 @@ export function CrewPhotoCapture({
       </Field>
       <Field label="Photo" error={problem}>
         {({ id, describedBy, invalid }) => (
-          <input
-            id={id}
-            ref={fileInput}
-            type="file"
-            accept={accepted.join(',')}
-            capture="environment"
-            aria-describedby={describedBy}
-            aria-invalid={invalid}
-            className="block w-full text-base"
-          />
+          // The browser's own file button carries its stock words; ours says what to do, the input stays for
+          // screen readers and the keyboard.
+          <div className="flex flex-wrap items-center gap-3">
+            <input
+              id={id}
+              ref={fileInput}
+              type="file"
+              accept={accepted.join(',')}
+              capture="environment"
+              aria-describedby={describedBy}
+              aria-invalid={invalid}
+              onChange={(e) => setChosen(e.target.files?.[0]?.name)}
+              className="peer sr-only"
+            />
+            <span
+              aria-hidden="true"
+              onClick={() => fileInput.current?.click()}
+              className="inline-flex min-h-12 cursor-pointer items-center rounded-md border border-pine-200 bg-white px-5 font-semibold text-pine-800 peer-focus-visible:outline-3 peer-focus-visible:outline-tape-dark"
+            >
+              Take or choose a photo
+            </span>
+            <span className="text-stone-700">{chosen ?? 'No photo chosen yet'}</span>
+          </div>
         )}
       </Field>
       <Field label="Caption (optional)">

@@ -27,11 +27,12 @@ export function useOutboxItems(userId: string | undefined) {
 
 let round: Promise<unknown> = Promise.resolve();
 /** One round at a time in this tab; across tabs the Web Locks API takes turns (the keys make a double harmless). */
-function sendRound(userId: string, onSent: (items: OutboxItem[]) => void) {
+function sendRound(userId: string, onAnswered: (items: OutboxItem[]) => void) {
   round = round.then(async () => {
     const go = async () => {
-      const { sent } = await drain(outboxDb, userId, sendItem);
-      if (sent.length > 0) onSent(sent);
+      const { sent, held } = await drain(outboxDb, userId, sendItem);
+      // Stored or refused, the server has news about the job (a refusal usually means its status moved).
+      if (sent.length + held.length > 0) onAnswered([...sent, ...held]);
     };
     if (navigator.locks) await navigator.locks.request('gradepass-outbox', go);
     else await go();
@@ -45,13 +46,13 @@ function sendRound(userId: string, onSent: (items: OutboxItem[]) => void) {
  */
 export function useOutboxSender(userId: string | undefined) {
   const queryClient = useQueryClient();
-  const onSent = useRef((sent: OutboxItem[]) => {
-    for (const id of new Set(sent.map((i) => i.requestId))) void invalidateJob(queryClient, id);
+  const onAnswered = useRef((answered: OutboxItem[]) => {
+    for (const id of new Set(answered.map((i) => i.requestId))) void invalidateJob(queryClient, id);
   });
   useEffect(() => {
     if (!userId) return;
     const run = () => {
-      if (navigator.onLine) void sendRound(userId, onSent.current);
+      if (navigator.onLine) void sendRound(userId, onAnswered.current);
     };
     // The connection is back: whatever was waiting for a later try is due now.
     const online = async () => {
