@@ -121,6 +121,20 @@ export const transitionInputs = {
       control: 'textarea',
     }),
   }),
+  'fail-inspection': input('fail-inspection', {
+    inspectorName: said(120, 'enter the inspector’s name').register(fieldText, {
+      label: 'Inspector’s name',
+      control: 'text',
+    }),
+    items: said(4000, 'list what must be fixed, one item per line').register(fieldText, {
+      label: 'What must be fixed',
+      hint: 'One item per line. The crew, the property owner and the office read these.',
+      control: 'textarea',
+    }),
+    // Set only when the inspector records the outcome on their own page: the link it came through, checked again
+    // inside the change. The office's form has no such field.
+    linkId: z.uuid('must be a valid id').optional(),
+  }),
   close: input('close', {
     note: note(
       'Closing note',
