@@ -102,7 +102,10 @@ export function rateLimitRouter({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   const inspectorOutcomes = counter('inspector-outcome-address', env.RATE_LIMIT_INSPECTOR_OUTCOMES_PER_HOUR, HOUR);
   router.use(
     '/api/inspect',
-    limited((req) => [[inspectorReads, addressKey(req.ip)]], 'Too many requests for inspection pages from this address.'),
+    limited(
+      (req) => [[inspectorReads, addressKey(req.ip)]],
+      'Too many requests for inspection pages from this address.',
+    ),
   );
   router.post(
     '/api/inspect/:id/outcome',

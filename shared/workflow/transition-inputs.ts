@@ -131,9 +131,6 @@ export const transitionInputs = {
       hint: 'One item per line. The crew, the property owner and the office read these.',
       control: 'textarea',
     }),
-    // Set only when the inspector records the outcome on their own page: the link it came through, checked again
-    // inside the change. The office's form has no such field.
-    linkId: z.uuid('must be a valid id').optional(),
   }),
   close: input('close', {
     note: note(

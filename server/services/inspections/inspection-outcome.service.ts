@@ -86,14 +86,19 @@ async function recordFailed(ctx: OutcomeContext, link: InspectorLinkRow, input: 
       'The office person who sent this link can no longer act for the office. Ask the office for a new link.',
     );
   }
-  await changeStatus(ctx, sender, row.id, {
-    action: 'fail-inspection',
-    expectedVersion: row.version,
-    inspectorName: input.inspectorName,
-    items: input.items,
-    note: input.note || undefined,
-    linkId: link.id,
-  });
+  await changeStatus(
+    ctx,
+    sender,
+    row.id,
+    {
+      action: 'fail-inspection',
+      expectedVersion: row.version,
+      inspectorName: input.inspectorName,
+      items: input.items,
+      note: input.note || undefined,
+    },
+    { inspectorLinkId: link.id },
+  );
 }
 
 export async function recordOutcome(ctx: OutcomeContext, link: InspectorLinkRow, input: Outcome, now = new Date()) {

@@ -95,14 +95,15 @@ export const sendBack: ActionDef<'send-back'> = { emails: { to: ['crew'] } };
  */
 export const failInspection: ActionDef<'fail-inspection'> = {
   emails: { to: ['applicant', 'office', 'crew'] },
-  run: async ({ tx, row, body, actor, now }) => {
+  run: async ({ tx, row, body, actor, now, via }) => {
     const items = itemLines(body.items);
     if (items.length === 0) {
       throw badRequest('List what must be fixed, one item per line.', {
         items: 'What must be fixed: list at least one item, one per line',
       });
     }
-    if (body.linkId) await claimLinkOutcome(tx, row.id, body.linkId, now);
+    const linkId = via.inspectorLinkId ?? null;
+    if (linkId) await claimLinkOutcome(tx, row.id, linkId, now);
     const note = (body.note ?? '').trim();
     await recordInspection(tx, {
       requestId: row.id,
@@ -110,8 +111,8 @@ export const failInspection: ActionDef<'fail-inspection'> = {
       inspectorName: body.inspectorName,
       items,
       note,
-      linkId: body.linkId ?? null,
-      recordedById: body.linkId ? null : actor.id,
+      linkId,
+      recordedById: linkId ? null : actor.id,
       createdAt: now,
     });
     const list = items.map((item) => `- ${item}`).join('\n');
