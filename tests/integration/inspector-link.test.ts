@@ -253,6 +253,32 @@ describe('the inspector records the outcome on the page', () => {
   });
 });
 
+describe('odd input on the public page', () => {
+  it('answers 400 naming the field, or 404 for a bad token, never 500', async () => {
+    const { id } = await builtJob();
+    const { token } = await sendLink(id);
+    const odd = [
+      { outcome: 'maybe', inspectorName: 'Dana' },
+      { outcome: 'passed', inspectorName: '' },
+      { outcome: 'passed', inspectorName: 'Dana\u0000' },
+      { outcome: 'passed', inspectorName: 'x'.repeat(500) },
+      { outcome: 'failed', inspectorName: 'Dana', items: ['not', 'text'] },
+      { outcome: 'passed', inspectorName: 'Dana', extra: true },
+    ];
+    for (const body of odd) {
+      const res = await outcome(id, token, body);
+      expect(res.status, JSON.stringify(body)).toBe(400);
+      expect(Object.keys(res.body.error.fields).length).toBeGreaterThan(0);
+    }
+    for (const bad of ['x'.repeat(5000), '%00', '../../etc']) {
+      const res = await open(id, bad);
+      expect(res.status).toBe(404);
+    }
+    // None of it recorded anything: the link still takes its one outcome.
+    await outcome(id, token, { outcome: 'passed', inspectorName: 'Dana Okafor' }).expect(200);
+  });
+});
+
 describe('closing waits for a passed inspection where the rule profile asks for one', () => {
   const inspected = { ...harlowRules, inspection: 'required' as const };
 
