@@ -5,6 +5,7 @@ import { documentsRouter } from './documents/documents.routes';
 import { emailsRouter } from './emails/emails.routes';
 import { gradeChecksRouter } from './grade-checks/grade-checks.routes';
 import { healthRouter } from './health/health.routes';
+import { inspectionsRouter } from './inspections/inspections.routes';
 import { messagesRouter } from './messages/messages.routes';
 import { crewPhotosRouter } from './photos/crew-photos.routes';
 import { photosRouter } from './photos/photos.routes';
@@ -29,4 +30,5 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(ruleProfilesRouter(ctx));
   app.use(gradeChecksRouter(ctx));
   app.use(documentsRouter(ctx));
+  app.use(inspectionsRouter(ctx));
 }

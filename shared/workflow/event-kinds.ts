@@ -8,6 +8,9 @@ export const eventKindLabels: Record<string, string> = {
   'work-day-planned': 'Work day planned',
   'crew-note': 'Note for the crew',
   'grade-check-withdrawn': 'Grade check withdrawn',
+  'inspector-link-sent': 'Inspector’s link sent',
+  'inspector-link-revoked': 'Inspector’s link withdrawn',
+  'inspection-passed': 'Inspection passed',
 };
 
 export const eventKindLabel = (kind: string) => eventKindLabels[kind] ?? 'Update';

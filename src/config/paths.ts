@@ -23,6 +23,7 @@ export const paths = {
     emails: { path: '/office/emails', getHref: () => '/office/emails' },
     users: { path: '/office/users', getHref: () => '/office/users' },
   },
+  inspectorPage: sharedPaths.inspectorPage,
   crew: {
     board: sharedPaths.crewBoard,
     myJobs: { path: '/crew/my-jobs', getHref: () => '/crew/my-jobs' },

@@ -33,15 +33,15 @@ async function request<T>(
   path: string,
   body?: unknown,
   query?: Query,
-  extraHeaders: Record<string, string> = {},
+  extra: Record<string, string> = {},
 ): Promise<T> {
   const response = await fetch(withQuery(path, query), {
     method,
     credentials: 'same-origin',
     headers:
       body === undefined
-        ? { Accept: 'application/json', ...extraHeaders }
-        : { Accept: 'application/json', 'Content-Type': 'application/json', ...extraHeaders },
+        ? { Accept: 'application/json', ...extra }
+        : { Accept: 'application/json', 'Content-Type': 'application/json', ...extra },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
   if (response.status === 204) return undefined as T;
@@ -69,9 +69,13 @@ function safeJson(text: string): unknown {
 
 export const api = {
   get: <T>(path: string, query?: Query) => request<T>('GET', path, undefined, query),
-  post: <T>(path: string, body?: unknown, headers?: Record<string, string>) =>
-    request<T>('POST', path, body ?? {}, undefined, headers),
+  post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
   put: <T>(path: string, body?: unknown) => request<T>('PUT', path, body ?? {}),
   patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, body ?? {}),
   delete: <T>(path: string) => request<T>('DELETE', path),
+  /** The same client for a page that proves itself with a header rather than a session (the inspector's link). */
+  withHeaders: (headers: Record<string, string>) => ({
+    get: <T>(path: string) => request<T>('GET', path, undefined, undefined, headers),
+    post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}, undefined, headers),
+  }),
 };

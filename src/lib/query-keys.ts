@@ -56,9 +56,20 @@ export const emailKeys = {
   one: (id: string) => ['emails', 'one', id] as const,
 };
 
-/** What a status change on one request can alter: the request, its history and (for an answer) its messages. */
+export const inspectionKeys = {
+  /** GET /api/requests/:id/inspections */
+  ofRequest: (requestId: string) => ['inspections', requestId] as const,
+  /** GET /api/inspect/:id (the inspector's page, by its link) */
+  page: (requestId: string) => ['inspections', 'page', requestId] as const,
+};
+
+/**
+ * What a status change on one request can alter: the request, its history, (for an answer) its messages and (for a
+ * failed inspection) its inspections.
+ */
 export const statusChangeKeys = (requestId: string) => [
   requestKeys.one(requestId),
   eventKeys.ofRequest(requestId),
   messageKeys.ofRequest(requestId),
+  inspectionKeys.ofRequest(requestId),
 ];

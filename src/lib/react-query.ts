@@ -7,9 +7,6 @@ export function createQueryClient() {
       queries: {
         staleTime: 30_000,
         refetchOnWindowFocus: false,
-        // Ask even when the browser says it is offline: the service worker answers the crew's job data from its
-        // copy. Retries still wait for the connection to come back.
-        networkMode: 'offlineFirst',
         // Client errors will not change on retry; network blips may.
         retry: (count, error) => !(error instanceof ApiError && error.status < 500) && count < 2,
       },
@@ -17,3 +14,10 @@ export function createQueryClient() {
     },
   });
 }
+
+/**
+ * For the queries the service worker keeps a copy of (vite.config.ts, `gradepass-crew-data`): ask even when the
+ * browser says it is offline, and the worker answers from its copy; retries still wait for the connection. Every
+ * other query waits for the connection instead of failing.
+ */
+export const keptForOffline = { networkMode: 'offlineFirst' } as const;

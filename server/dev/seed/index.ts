@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { users } from '../../db/schema';
 import { demoPeople } from './demo-people';
+import { seedDemoInspection } from './demo-inspection';
 import { seedDemoJobs } from './demo-jobs';
 import { seedDemoRequests } from './demo-requests';
 import { seedJurisdictions } from './jurisdictions';
@@ -18,6 +19,7 @@ export async function seedDemo(db: Db) {
     }
     await seedJurisdictions(tx);
     await seedDemoRequests(tx);
+    await seedDemoInspection(tx);
   });
   await seedDemoJobs(db);
 }

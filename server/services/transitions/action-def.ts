@@ -20,6 +20,11 @@ export interface ActionResult {
   note?: string;
 }
 
+/** How the change came in, when not by a signed-in person's own hand: the inspector's link it was recorded through. */
+export interface TransitionVia {
+  inspectorLinkId?: string;
+}
+
 export interface ActionStep<A extends TransitionAction> {
   tx: Tx;
   /** The request as locked for this change. */
@@ -27,6 +32,7 @@ export interface ActionStep<A extends TransitionAction> {
   body: TransitionBodyOf<A>;
   actor: SessionUser;
   now: Date;
+  via: TransitionVia;
 }
 
 /**

@@ -10,7 +10,7 @@ import { conflict, forbidden } from '../../lib/errors';
 import { emailsForTransition } from '../email/transition-emails';
 import { enqueueEmails } from '../email/outbox';
 import { loadVisibleRequest, type RequestRow } from '../requests/request-access';
-import type { ActionDef, ActionResult } from './action-def';
+import type { ActionDef, ActionResult, TransitionVia } from './action-def';
 import { actionDefs } from './registry';
 
 /** What a status change needs from the app: the database, and the office's address and origin for its e-mails. */
@@ -26,6 +26,7 @@ export async function applyTransition(
   actor: SessionUser,
   requestId: string,
   body: TransitionBody,
+  via: TransitionVia = {},
 ) {
   return ctx.db.transaction(async (tx) => {
     const row = await loadVisibleRequest(tx, actor, requestId, { forUpdate: true });
@@ -44,7 +45,7 @@ export async function applyTransition(
     const now = new Date();
     const def = actionDefs[body.action] as ActionDef<TransitionAction>;
     const added: ActionResult =
-      (await def.run?.({ tx, row, body: body as TransitionBodyOf<TransitionAction>, actor, now })) ?? {};
+      (await def.run?.({ tx, row, body: body as TransitionBodyOf<TransitionAction>, actor, now, via })) ?? {};
     const [updated] = await tx
       .update(requests)
       .set({ ...added.patch, status: transition.to, version: row.version + 1, statusChangedAt: now, updatedAt: now })

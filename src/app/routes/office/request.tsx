@@ -2,12 +2,15 @@ import { officeRoles } from '@shared/workflow/roles';
 import { useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
+import { Panel } from '@/components/ui/panel';
 import { useMe } from '@/features/auth/api/get-me';
 import { useAsBuilt } from '@/features/jobs/api/get-as-built';
 import { AsBuiltReview } from '@/features/jobs/components/as-built-review';
 import { EventList } from '@/features/events/components/event-list';
 import { MessageThread } from '@/features/messages/components/message-thread';
 import { RequestWorkspace } from '@/features/office/components/request-workspace';
+import { InspectionPanel } from '@/features/inspections/components/inspection-panel';
+import { CrewPhotos } from '@/features/photos/components/crew-photos';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
 import { useOfficeRequest } from '@/features/requests/api/get-request';
 import { ApplicationSummary } from '@/features/requests/components/application-summary';
@@ -45,8 +48,14 @@ function OfficeRequestPage({ id }: { id: string }) {
         />
       )}
       {built && (
-        <div className="mt-6">
+        <div className="mt-6 space-y-6">
           <AsBuiltReview requestId={id} />
+          <Panel title="Crew photos">
+            <CrewPhotos requestId={id} />
+          </Panel>
+          <Panel title="Road authority inspection">
+            <InspectionPanel requestId={id} status={request.status} office />
+          </Panel>
         </div>
       )}
     </>

@@ -6,7 +6,7 @@ import { invalidateJob } from './invalidate-job';
 
 /** `key` is the set's idempotency key: made when the set is entered and kept for every try, so it is stored once. */
 export const saveAsBuilt = ({ id, key, ...body }: SaveAsBuiltInput & { id: string; key: string }) =>
-  api.post<{ set: AsBuiltSetView }>(`/api/crew/jobs/${id}/as-built`, body, { 'Idempotency-Key': key });
+  api.withHeaders({ 'Idempotency-Key': key }).post<{ set: AsBuiltSetView }>(`/api/crew/jobs/${id}/as-built`, body);
 
 export function useSaveAsBuilt() {
   const queryClient = useQueryClient();

@@ -6,7 +6,13 @@ import { Notice } from '@/components/ui/notice';
 import { addToOutbox } from '../outbox/use-outbox';
 
 /** What the screen hands in to ready a photo: the camera's metadata removed, its position read first. */
-export type PreparePhoto = (file: File) => Promise<{ blob: Blob; position?: { latitude: number; longitude: number } }>;
+export type PreparePhoto = (
+  file: File,
+  type: string,
+) => Promise<{ blob: Blob; position?: { latitude: number; longitude: number } }>;
+
+// Some browsers leave HEIC files without a type; the extension says what they are.
+const typeOf = (file: File) => file.type || (/\.heic$/i.test(file.name) ? 'image/heic' : '');
 
 const accepted = ['image/jpeg', 'image/png', 'image/webp', 'image/heic'];
 
@@ -38,18 +44,19 @@ export function CrewPhotoCapture({
     const file = fileInput.current?.files?.[0];
     setAdded(undefined);
     if (!file) return setProblem('choose or take a photo first');
-    if (!accepted.includes(file.type)) return setProblem('must be a JPEG, PNG, WebP or HEIC image');
+    const type = typeOf(file);
+    if (!accepted.includes(type)) return setProblem('must be a JPEG, PNG, WebP or HEIC image');
     setProblem(undefined);
     setBusy(true);
     try {
-      const { blob, position } = await prepare(file);
+      const { blob, position } = await prepare(file, type);
       await addToOutbox({
         key: crypto.randomUUID(),
         type: 'photo',
         photo: {
           blob,
           fileName: file.name,
-          contentType: file.type,
+          contentType: type,
           sizeBytes: blob.size,
           kind,
           caption: caption.trim() || undefined,
@@ -95,7 +102,7 @@ export function CrewPhotoCapture({
               id={id}
               ref={fileInput}
               type="file"
-              accept={accepted.join(',')}
+              accept={[...accepted, '.heic'].join(',')}
               capture="environment"
               aria-describedby={describedBy}
               aria-invalid={invalid}

@@ -5,7 +5,9 @@ import { StorageStepError, type OutboxItem } from './outbox-queue';
 
 /** Sends a set of readings under its key; a repeat of a stored set is answered with the first answer. */
 export const sendReadings = (requestId: string, key: string, body: unknown) =>
-  api.post<{ set: AsBuiltSetView }>(`/api/crew/jobs/${requestId}/as-built`, body, { 'Idempotency-Key': key });
+  api
+    .withHeaders({ 'Idempotency-Key': key })
+    .post<{ set: AsBuiltSetView }>(`/api/crew/jobs/${requestId}/as-built`, body);
 
 /**
  * A photo's three steps: register it under its key (a repeat answers the same photo, with no upload once it is
