@@ -49,7 +49,9 @@ export default defineConfig({
         runtimeCaching: [
           {
             // Who is signed in, the crew's own jobs, each job's field sheet and as-built page, and its messages:
-            // from the network when it answers within a few seconds, else the copy from the last good answer.
+            // from the network whenever it answers, the copy from the last good answer only when it cannot. The wait
+            // is long on purpose: a slow but working server must never be overruled by an older copy (a job shown
+            // as not started when it is), and with no signal at all the request fails at once anyway.
             urlPattern: ({ url, sameOrigin }) =>
               sameOrigin &&
               (url.pathname === '/api/me' ||
@@ -60,7 +62,7 @@ export default defineConfig({
             method: 'GET',
             options: {
               cacheName: 'gradepass-crew-data',
-              networkTimeoutSeconds: 6,
+              networkTimeoutSeconds: 30,
               cacheableResponse: { statuses: [200] },
               expiration: { maxEntries: 300, maxAgeSeconds: 30 * 24 * 60 * 60 },
             },
