@@ -75,7 +75,18 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   if (options.clientMiddleware) app.use(options.clientMiddleware);
   if (options.clientDist && existsSync(options.clientDist)) {
     const dist = options.clientDist;
-    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    // The service worker, the page and the manifest are read fresh each time, so a new build reaches phones at
+    // once; the hashed assets they name may be kept for an hour.
+    const fresh = new Set(['sw.js', 'index.html', 'manifest.webmanifest']);
+    app.use(
+      express.static(dist, {
+        index: false,
+        maxAge: '1h',
+        setHeaders: (res, file) => {
+          if (fresh.has(path.basename(file))) res.setHeader('Cache-Control', 'no-cache');
+        },
+      }),
+    );
     app.get('/{*splat}', (_req, res) => res.sendFile(path.join(dist, 'index.html')));
   }
   app.use(errorHandler(logger));

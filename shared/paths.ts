@@ -9,5 +9,7 @@ export const sharedPaths = {
     getHref: (id: string, tab = '') => `/office/requests/${id}${tab ? `?tab=${tab}` : ''}`,
   },
   crewBoard: { path: '/crew/board', getHref: () => '/crew/board' },
+  /** The road authority inspector's page; the link's token follows in the #fragment. */
+  inspectorPage: { path: '/inspect/:id', getHref: (id: string) => `/inspect/${id}` },
   crewFieldSheet: { path: '/crew/jobs/:id/field-sheet', getHref: (id: string) => `/crew/jobs/${id}/field-sheet` },
 } as const;

@@ -17,6 +17,9 @@ export const securityEnvShape = {
   RATE_LIMIT_UPLOADS_PER_HOUR: count.default(120),
   /** Sign-in starts are anonymous, so this one counts per address only. */
   RATE_LIMIT_SIGN_INS_PER_HOUR: count.default(60),
+  /** The inspector's page answers anyone holding a link, so it counts per address: reads, and outcomes recorded. */
+  RATE_LIMIT_INSPECTOR_PER_HOUR: count.default(240),
+  RATE_LIMIT_INSPECTOR_OUTCOMES_PER_HOUR: count.default(20),
   RATE_LIMIT_ADDRESS_FACTOR: count.default(5),
   /** Photos announced but never confirmed are deleted from storage after this many hours. */
   UNCONFIRMED_UPLOAD_HOURS: z.coerce.number().positive().default(24),

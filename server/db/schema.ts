@@ -217,11 +217,16 @@ export const photos = pgTable(
     status: photoStatusEnum().notNull().default('pending'),
     gpsLat: doublePrecision(),
     gpsLng: doublePrecision(),
+    /** Null for the owner's site photos; a crew photo says what it shows (shared/contracts/crew-photos.ts). */
+    kind: text(),
+    /** A crew photo's device-made key: registering it again answers the same row. */
+    idempotencyKey: uuid(),
     createdAt: createdAt(),
     storedAt: timestamp({ withTimezone: true }),
   },
   (t) => [
     index('photos_request_idx').on(t.requestId, t.status),
+    uniqueIndex('photos_request_idempotency_key').on(t.requestId, t.idempotencyKey),
     // The clean-up of uploads that were never confirmed reads only these.
     index('photos_pending_idx')
       .on(t.createdAt)
@@ -336,9 +341,16 @@ export const asBuiltSets = pgTable(
     note: text().notNull().default(''),
     /** The set this one corrects (the crew edited and saved it again); the earlier one stays as it was. */
     replacesSetId: uuid().references((): AnyPgColumn => asBuiltSets.id),
+    /** The key the crew's phone chose for this set (the Idempotency-Key header), so a resent set is stored once. */
+    idempotencyKey: uuid(),
+    /** A digest of what was sent under that key: the same key with other readings is refused, not answered. */
+    idempotencyDigest: text(),
     createdAt: createdAt(),
   },
-  (t) => [index('as_built_sets_request_idx').on(t.requestId, t.createdAt)],
+  (t) => [
+    index('as_built_sets_request_idx').on(t.requestId, t.createdAt),
+    uniqueIndex('as_built_sets_crew_idempotency_key').on(t.crewId, t.idempotencyKey),
+  ],
 );
 
 /** The outbox and the e-mail log in one: rows are written in the transaction that triggers them. */
@@ -593,4 +605,53 @@ export const balanceChanges = pgTable(
     createdAt: createdAt(),
   },
   (t) => [index('balance_changes_request_idx').on(t.requestId)],
+);
+
+/**
+ * A link the office sends the road authority's inspector: the token itself is never stored, only its SHA-256, so
+ * a copy of the table opens nothing. One link opens one request, until it expires or the office revokes it.
+ */
+export const inspectorLinks = pgTable(
+  'inspector_links',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    tokenHash: text().notNull().unique(),
+    inspectorName: text().notNull(),
+    inspectorEmail: text().notNull(),
+    createdById: uuid()
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    expiresAt: timestamp({ withTimezone: true }).notNull(),
+    revokedAt: timestamp({ withTimezone: true }),
+    revokedById: uuid().references(() => users.id),
+    lastOpenedAt: timestamp({ withTimezone: true }),
+    /** Set when the inspector records an outcome through it: a link records one outcome. */
+    outcomeAt: timestamp({ withTimezone: true }),
+  },
+  (t) => [index('inspector_links_request_idx').on(t.requestId, t.createdAt)],
+);
+
+/** The road authority's inspections of a built entrance, passed or failed with the items to fix. */
+export const inspections = pgTable(
+  'inspections',
+  {
+    id: uuid().primaryKey().defaultRandom(),
+    requestId: uuid()
+      .notNull()
+      .references(() => requests.id),
+    passed: boolean().notNull(),
+    inspectorName: text().notNull(),
+    /** What to fix, one line each, when it failed. */
+    items: jsonb().notNull().default([]),
+    note: text().notNull().default(''),
+    /** The link it came through; null when the office recorded an outcome the inspector gave otherwise. */
+    linkId: uuid().references(() => inspectorLinks.id),
+    recordedById: uuid().references(() => users.id),
+    createdAt: createdAt(),
+  },
+  (t) => [index('inspections_request_idx').on(t.requestId, t.createdAt)],
 );

@@ -7,6 +7,7 @@ import { applyMigrations, createDb } from '../db/client';
 import { demoPeople } from './seed/demo-people';
 import { seedDemo } from './seed';
 import { seedDemoQuotePdfs } from './seed/demo-quotes';
+import { seedDemoCrewPhotos } from './seed/demo-inspection';
 import { seedDemoReports } from './seed/demo-reports';
 import { seedDemoPayments } from './seed/demo-payments';
 import { closeContext, createContext } from '../context-factory';
@@ -85,6 +86,7 @@ async function main() {
       await seedDemoQuotePdfs(seedCtx);
       // Card payments go through the payments stand-in, so they too wait until it runs.
       await seedDemoPayments(seedCtx);
+      await seedDemoCrewPhotos(seedCtx);
     } finally {
       await closeContext(seedCtx);
     }

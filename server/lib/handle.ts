@@ -85,9 +85,38 @@ export function handle<
   contract: Contract<B, Q, P>,
   fn: (input: Input<z.infer<B>, z.infer<Q>, z.infer<P>>) => Promise<unknown>,
 ): RequestHandler {
+  return handler(
+    contract,
+    (input, req) => fn({ ...input, user: req.user as SessionUser }),
+    (req) => {
+      if (!req.user) throw unauthenticated();
+    },
+  );
+}
+
+/**
+ * The same for the few addresses that need no account (the inspector's page, which carries its own proof): no
+ * `user` is handed on, so nothing downstream can mistake the caller for a signed-in person.
+ */
+export function handlePublic<
+  B extends z.ZodType = z.ZodUnknown,
+  Q extends z.ZodType = z.ZodUnknown,
+  P extends z.ZodType = z.ZodUnknown,
+>(
+  contract: Contract<B, Q, P>,
+  fn: (input: Omit<Input<z.infer<B>, z.infer<Q>, z.infer<P>>, 'user'>) => Promise<unknown>,
+): RequestHandler {
+  return handler(contract, (input) => fn(input));
+}
+
+function handler<B extends z.ZodType, Q extends z.ZodType, P extends z.ZodType>(
+  contract: Contract<B, Q, P>,
+  fn: (input: Omit<Input<z.infer<B>, z.infer<Q>, z.infer<P>>, 'user'>, req: Request) => Promise<unknown>,
+  gate?: (req: Request) => void,
+): RequestHandler {
   return async (req: Request, res: Response, next: NextFunction) => {
     try {
-      if (!req.user) throw unauthenticated();
+      gate?.(req);
       // Check all three parts before answering, so one 400 names every bad field at once.
       const fields: Record<string, string> = {};
       const labels: Record<string, string> = {};
@@ -109,7 +138,7 @@ export function handle<
         const named = { ...fieldLabelsOf(fields), ...labels };
         throw new AppError(400, 'invalid_input', fieldsSentence(fields, named), fields, named);
       }
-      const result = await fn({ body, query, params, user: req.user as SessionUser, req, res });
+      const result = await fn({ body, query, params, req, res }, req);
       if (!res.headersSent) {
         if (result === undefined) res.status(204).end();
         else res.json(result);

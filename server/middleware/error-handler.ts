@@ -6,7 +6,11 @@ import { loggableUrl } from '../lib/http-logger';
 import type { Logger } from '../lib/logger';
 
 // Unique keys a person can collide with by sending the same thing twice at once, and the field each one names.
-const uniqueFields: Record<string, string> = { users_email_key: 'email', jurisdictions_slug_unique: 'name' };
+const uniqueFields: Record<string, string> = {
+  users_email_key: 'email',
+  jurisdictions_slug_unique: 'name',
+  as_built_sets_crew_idempotency_key: 'Idempotency-Key',
+};
 
 /** PostgreSQL's unique_violation (23505), straight from pg or wrapped by Drizzle as the cause. */
 function uniqueViolation(error: unknown): { constraint?: string } | null {

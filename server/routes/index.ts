@@ -7,8 +7,10 @@ import { documentsRouter } from './documents/documents.routes';
 import { emailsRouter } from './emails/emails.routes';
 import { gradeChecksRouter } from './grade-checks/grade-checks.routes';
 import { healthRouter } from './health/health.routes';
+import { inspectionsRouter } from './inspections/inspections.routes';
 import { messagesRouter } from './messages/messages.routes';
 import { paymentsRouter } from './payments/payments.routes';
+import { crewPhotosRouter } from './photos/crew-photos.routes';
 import { photosRouter } from './photos/photos.routes';
 import { requestsRouter } from './requests/requests.routes';
 import { ruleProfilesRouter } from './rule-profiles/rule-profiles.routes';
@@ -26,6 +28,7 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(auditRouter(ctx));
   app.use(requestsRouter(ctx));
   app.use(photosRouter(ctx));
+  app.use(crewPhotosRouter(ctx));
   app.use(messagesRouter(ctx));
   app.use(transitionsRouter(ctx));
   app.use(emailsRouter(ctx));
@@ -37,4 +40,5 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(rateCardsRouter(ctx));
   app.use(quotesRouter(ctx));
   app.use(paymentsRouter(ctx));
+  app.use(inspectionsRouter(ctx));
 }

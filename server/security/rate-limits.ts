@@ -90,5 +90,29 @@ export function rateLimitRouter({ env, db }: Pick<AppContext, 'env' | 'db'>) {
       'Too many photo uploads in a short time.',
     ),
   );
+  router.post(
+    '/api/crew/jobs/:id/photos',
+    limited(
+      personAndAddress('crew-uploads', env.RATE_LIMIT_UPLOADS_PER_HOUR, HOUR),
+      'Too many photo uploads in a short time.',
+    ),
+  );
+  // The inspector's page needs no account: anyone holding a link, counted by address only.
+  const inspectorReads = counter('inspector-address', env.RATE_LIMIT_INSPECTOR_PER_HOUR, HOUR);
+  const inspectorOutcomes = counter('inspector-outcome-address', env.RATE_LIMIT_INSPECTOR_OUTCOMES_PER_HOUR, HOUR);
+  router.use(
+    '/api/inspect',
+    limited(
+      (req) => [[inspectorReads, addressKey(req.ip)]],
+      'Too many requests for inspection pages from this address.',
+    ),
+  );
+  router.post(
+    '/api/inspect/:id/outcome',
+    limited(
+      (req) => [[inspectorOutcomes, addressKey(req.ip)]],
+      'Too many inspection outcomes were sent from this address.',
+    ),
+  );
   return router;
 }

@@ -68,6 +68,13 @@ const asBuiltRulesSchema = z.object({
   elevationToleranceFt: nonNegative(2).default(0),
 });
 
+export const inspectionSettings = ['not-required', 'required'] as const;
+export type InspectionSetting = (typeof inspectionSettings)[number];
+/** A profile that says nothing about inspection lets the office close without one, as before the setting existed. */
+export const inspectionDefault: InspectionSetting = 'not-required';
+export const inspectionRequired = (profile: { inspection?: InspectionSetting }) =>
+  (profile.inspection ?? inspectionDefault) === 'required';
+
 /**
  * A road authority's limits as data. Optional limits the authority does not set leave their check
  * "not-checked". `sources` maps a field's dotted path (e.g. "landing.maxGradePercent") to a free-text
@@ -88,6 +95,11 @@ export const ruleProfileSchema = z.object({
   sight: sightRulesSchema.default({ basis: 'intersection', vehicle: 'passenger', gradeReading: 'above-3-percent' }),
   geometry: geometryRulesSchema.default({}),
   asBuilt: asBuiltRulesSchema.default({ gradeTolerancePercent: 0, elevationToleranceFt: 0 }),
+  /**
+   * Whether the road authority inspects the built entrance before the job may close. Versions saved before the
+   * setting existed have none and read as `inspectionDefault`; see `inspectionRequired`.
+   */
+  inspection: z.enum(inspectionSettings, { error: 'choose whether an inspection is required' }).optional(),
   sources: z.record(z.string(), z.string().max(1_000)).default({}),
 });
 

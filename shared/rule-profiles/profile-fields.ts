@@ -1,4 +1,4 @@
-import type { RuleProfile } from '../engine/rule-profile';
+import { inspectionDefault, type RuleProfile } from '../engine/rule-profile';
 
 export interface ProfileField {
   path: string;
@@ -7,6 +7,8 @@ export interface ProfileField {
   optional?: boolean;
   choices?: readonly (readonly [string, string])[];
   text?: boolean;
+  /** What a choice reads as when the version has no value (saved before the setting existed). */
+  fallback?: string;
   /** Where its source note is kept when one note covers several values (the design vehicle). */
   sourceKey?: string;
 }
@@ -114,6 +116,20 @@ export const profileGroups: { title: string; fields: ProfileField[] }[] = [
     fields: [
       { path: 'asBuilt.gradeTolerancePercent', label: 'Grade tolerance', unit: '%' },
       { path: 'asBuilt.elevationToleranceFt', label: 'Elevation tolerance', unit: 'ft' },
+    ],
+  },
+  {
+    title: 'Inspection',
+    fields: [
+      {
+        path: 'inspection',
+        label: 'Road authority inspection of the built entrance',
+        choices: [
+          ['not-required', 'Not required: the office may close once it is built'],
+          ['required', 'Required: the office closes only after a passed inspection'],
+        ],
+        fallback: inspectionDefault,
+      },
     ],
   },
   {

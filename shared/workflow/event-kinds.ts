@@ -16,6 +16,9 @@ export const eventKindLabels: Record<string, string> = {
   'balance-paid': 'Balance paid',
   'payment-refunded': 'Refunded',
   'balance-change': 'Change to the price agreed',
+  'inspector-link-sent': 'Inspector’s link sent',
+  'inspector-link-revoked': 'Inspector’s link withdrawn',
+  'inspection-passed': 'Inspection passed',
 };
 
 export const eventKindLabel = (kind: string) => eventKindLabels[kind] ?? 'Update';

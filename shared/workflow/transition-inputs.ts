@@ -134,6 +134,17 @@ export const transitionInputs = {
       control: 'textarea',
     }),
   }),
+  'fail-inspection': input('fail-inspection', {
+    inspectorName: said(120, 'enter the inspector’s name').register(fieldText, {
+      label: 'Inspector’s name',
+      control: 'text',
+    }),
+    items: said(4000, 'list what must be fixed, one item per line').register(fieldText, {
+      label: 'What must be fixed',
+      hint: 'One item per line. The crew, the property owner and the office read these.',
+      control: 'textarea',
+    }),
+  }),
   close: input('close', {
     note: note(
       'Closing note',

@@ -9,6 +9,8 @@ const page = (load: () => Promise<{ Component: React.ComponentType }>) => ({ laz
 /** One route table; each screen is its own lazily loaded module. */
 export function createAppRouter() {
   return createBrowserRouter([
+    // The inspector has no account: the page stands outside the signed-in shell.
+    { path: paths.inspectorPage.path, errorElement: <RouteError />, ...page(() => import('./routes/inspect')) },
     {
       element: <AppShell />,
       errorElement: <RouteError />,

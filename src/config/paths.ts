@@ -28,6 +28,7 @@ export const paths = {
     audit: { path: '/office/changes', getHref: () => '/office/changes' },
     crewYard: { path: '/office/crew-yard', getHref: () => '/office/crew-yard' },
   },
+  inspectorPage: sharedPaths.inspectorPage,
   crew: {
     board: sharedPaths.crewBoard,
     myJobs: { path: '/crew/my-jobs', getHref: () => '/crew/my-jobs' },

@@ -36,14 +36,20 @@ export function withQuery(path: string, query?: Query) {
   return text ? `${path}?${text}` : path;
 }
 
-async function request<T>(method: string, path: string, body?: unknown, query?: Query): Promise<T> {
+async function request<T>(
+  method: string,
+  path: string,
+  body?: unknown,
+  query?: Query,
+  extra: Record<string, string> = {},
+): Promise<T> {
   const response = await fetch(withQuery(path, query), {
     method,
     credentials: 'same-origin',
     headers:
       body === undefined
-        ? { Accept: 'application/json' }
-        : { Accept: 'application/json', 'Content-Type': 'application/json' },
+        ? { Accept: 'application/json', ...extra }
+        : { Accept: 'application/json', 'Content-Type': 'application/json', ...extra },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
   if (response.status === 204) return undefined as T;
@@ -76,4 +82,9 @@ export const api = {
   put: <T>(path: string, body?: unknown) => request<T>('PUT', path, body ?? {}),
   patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, body ?? {}),
   delete: <T>(path: string) => request<T>('DELETE', path),
+  /** The same client for a page that proves itself with a header rather than a session (the inspector's link). */
+  withHeaders: (headers: Record<string, string>) => ({
+    get: <T>(path: string) => request<T>('GET', path, undefined, undefined, headers),
+    post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}, undefined, headers),
+  }),
 };

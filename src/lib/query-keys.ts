@@ -21,8 +21,12 @@ export const eventKeys = { ofRequest: (requestId: string) => ['events', requestI
 /** GET /api/requests/:id/messages */
 export const messageKeys = { ofRequest: (requestId: string) => ['messages', requestId] as const };
 
-/** GET /api/requests/:id/photos */
-export const photoKeys = { ofRequest: (requestId: string) => ['photos', requestId] as const };
+export const photoKeys = {
+  /** GET /api/requests/:id/photos */
+  ofRequest: (requestId: string) => ['photos', requestId] as const,
+  /** GET /api/requests/:id/crew-photos */
+  crewOfRequest: (requestId: string) => ['photos', 'crew', requestId] as const,
+};
 
 export const peopleKeys = {
   all: ['people'] as const,
@@ -67,6 +71,13 @@ export const emailKeys = {
   one: (id: string) => ['emails', 'one', id] as const,
 };
 
+export const inspectionKeys = {
+  /** GET /api/requests/:id/inspections */
+  ofRequest: (requestId: string) => ['inspections', requestId] as const,
+  /** GET /api/inspect/:id (the inspector's page, by its link) */
+  page: (requestId: string) => ['inspections', 'page', requestId] as const,
+};
+
 export const paymentKeys = {
   /** Every request's GET /api/requests/:id/payments. */
   requests: () => ['payments', 'request'] as const,
@@ -79,11 +90,15 @@ export const paymentKeys = {
   waits: () => ['payments', 'waits'] as const,
 };
 
-/** What a status change on one request can alter: the request, its history and (for an answer) its messages. */
+/**
+ * What a status change on one request can alter: the request, its history, (for an answer) its messages and (for a
+ * failed inspection) its inspections.
+ */
 export const statusChangeKeys = (requestId: string) => [
   requestKeys.one(requestId),
   eventKeys.ofRequest(requestId),
   messageKeys.ofRequest(requestId),
+  inspectionKeys.ofRequest(requestId),
   // What is due, and what waits for money, follow the status (the balance is due once built).
   paymentKeys.ofRequest(requestId),
 ];

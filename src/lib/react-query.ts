@@ -1,7 +1,10 @@
-import { QueryClient } from '@tanstack/react-query';
+import { onlineManager, QueryClient } from '@tanstack/react-query';
 import { ApiError } from './api-client';
 
 export function createQueryClient() {
+  // React Query takes the connection for granted until the browser says otherwise; a page loaded with no signal
+  // (from the service worker) starts out knowing, so its queries wait instead of failing.
+  if (typeof navigator !== 'undefined') onlineManager.setOnline(navigator.onLine);
   return new QueryClient({
     defaultOptions: {
       queries: {
@@ -14,3 +17,10 @@ export function createQueryClient() {
     },
   });
 }
+
+/**
+ * For the queries the service worker keeps a copy of (vite.config.ts, `gradepass-crew-data`): ask even when the
+ * browser says it is offline, and the worker answers from its copy; retries still wait for the connection. Every
+ * other query waits for the connection instead of failing.
+ */
+export const keptForOffline = { networkMode: 'offlineFirst' } as const;

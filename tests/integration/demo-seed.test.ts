@@ -41,6 +41,7 @@ describe('the demo scenario', () => {
       .select({ id: requests.id, version: requests.version, status: requests.status })
       .from(requests);
     for (const row of rows) {
+      // Status changes only: the inspector's link and the inspection are history entries of other kinds.
       const events = await t.ctx.db
         .select()
         .from(requestEvents)

@@ -81,7 +81,8 @@ describe('every status change with odd fields answers 4xx naming a field, never 
         .send({ action: 'mark-checked', expectedVersion: 1 }),
       'no such',
     );
-  });
+    // Every action by every role with every odd value: thousands of requests, more with each action in the table.
+  }, 120_000);
 
   it('the crew’s four addresses take odd bodies, wrong roles and wrong jobs without a 500', async () => {
     const job = await createReleasedJob(t.ctx.db, { applicantId: cast.applicant.id, staffId: cast.staff.id });

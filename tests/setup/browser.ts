@@ -82,3 +82,16 @@ export async function signOut(page: Page) {
   await page.getByRole('button', { name: 'Sign out' }).click();
   await page.waitForURL(appUrl('/'));
 }
+
+/**
+ * Every console error and uncaught error of the page, for the test to hold to none (or to the ones it provoked on
+ * purpose). Chromium reports a failed or refused request here too ("Failed to load resource ...").
+ */
+export function watchConsole(page: Page): string[] {
+  const errors: string[] = [];
+  page.on('console', (message) => {
+    if (message.type() === 'error') errors.push(`${message.text()} (${message.location().url})`);
+  });
+  page.on('pageerror', (error) => errors.push(error.message));
+  return errors;
+}

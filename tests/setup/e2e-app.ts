@@ -4,6 +4,7 @@ import { createApp } from '../../server/app';
 import { closeContext, createContext } from '../../server/context-factory';
 import { createDb } from '../../server/db/client';
 import { seedDemo } from '../../server/dev/seed';
+import { seedDemoCrewPhotos } from '../../server/dev/seed/demo-inspection';
 import { parseEnv } from '../../server/config/env';
 import { startWorkers } from '../../server/workers';
 import { ensureDatabase } from '../../server/dev/postgres';
@@ -26,6 +27,7 @@ export async function startE2eApp(stack: TestStack, databaseUrl: string) {
     LOG_LEVEL: 'warn',
   });
   const ctx = createContext(env);
+  await seedDemoCrewPhotos(ctx);
   const workers = await startWorkers(ctx);
   const app = createApp(ctx, { clientDist: dist });
   const server: Server = await new Promise((resolve) => {

@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { users } from '../../db/schema';
 import { demoPeople } from './demo-people';
+import { seedDemoInspection } from './demo-inspection';
 import { seedDemoJobs } from './demo-jobs';
 import { seedDemoQuotes } from './demo-quotes';
 import { seedDemoRequests } from './demo-requests';
@@ -20,6 +21,7 @@ export async function seedDemo(db: Db) {
     await seedJurisdictions(tx);
     await seedDemoRequests(tx);
     await seedDemoQuotes(tx);
+    await seedDemoInspection(tx);
   });
   await seedDemoJobs(db);
 }

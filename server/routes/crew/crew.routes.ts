@@ -11,6 +11,7 @@ import {
 } from '@shared/crew/crew-inputs';
 import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
+import { readIdempotencyKey } from '../../lib/idempotency';
 import { officeRoles, requireRole } from '../../middleware/require-role';
 import { asBuiltPage, saveAsBuiltSet } from '../../services/crew/as-built.service';
 import { listBoard } from '../../services/crew/board.service';
@@ -20,6 +21,7 @@ import { scheduleJob } from '../../services/crew/schedule.service';
 import { loadYard, saveYard } from '../../services/crew/yard.service';
 import { changeStatus } from '../../services/transitions/change-status';
 import type { TransitionBody } from '@shared/workflow/transition-inputs';
+import type { AsBuiltSetView } from '@shared/crew/crew-views';
 import { requestView } from '../../services/requests/request-view';
 
 /**
@@ -95,9 +97,13 @@ export function crewRouter(ctx: AppContext) {
   router.post(
     `${job}/as-built`,
     crewOnly,
-    handle({ params: uuidParam, body: saveAsBuiltInputSchema }, async ({ params, body, user, res }) => {
+    handle({ params: uuidParam, body: saveAsBuiltInputSchema }, async ({ params, body, user, req, res }) => {
+      const idem = readIdempotencyKey(req, { requestId: params.id, ...body });
+      const { set, replayed } = await saveAsBuiltSet(db, user, params.id, body, idem);
+      // A repeat gets the first answer, status included; the header only says it is a repeat.
       res.status(201);
-      return { set: await saveAsBuiltSet(db, user, params.id, body) };
+      if (replayed) res.set('Idempotent-Replayed', 'true');
+      return { set } satisfies { set: AsBuiltSetView };
     }),
   );
   router.post(

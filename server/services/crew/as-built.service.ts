@@ -1,4 +1,4 @@
-import { desc, eq } from 'drizzle-orm';
+import { and, desc, eq } from 'drizzle-orm';
 import { checkAsBuilt, EngineInputError, type AsBuiltReadingResult, type AsBuiltStatus } from '@shared/engine';
 import type { SaveAsBuiltInput } from '@shared/crew/crew-inputs';
 import type { AsBuiltPageView, AsBuiltSetView } from '@shared/crew/crew-views';
@@ -7,6 +7,7 @@ import type { SessionUser } from '../../lib/session-user';
 import type { Db, DbOrTx } from '../../db/client';
 import { asBuiltSets, users } from '../../db/schema';
 import { AppError, conflict } from '../../lib/errors';
+import { idempotencyHeader, type IdempotencyKey } from '../../lib/idempotency';
 import { loadVisibleRequest } from '../requests/request-access';
 import { ruleProfileLabel, loadJobCheck, type SavedCheck } from './saved-check';
 
@@ -99,10 +100,47 @@ export async function asBuiltPage(db: Db, user: SessionUser, requestId: string):
   };
 }
 
-/** A set of finished-grade readings, checked and stored; failing sets are kept too, they are the site's record. */
-export async function saveAsBuiltSet(db: Db, crew: SessionUser, requestId: string, input: SaveAsBuiltInput) {
+/**
+ * The set stored earlier under this crew's key, if any. The same key with other readings (or for another job) is
+ * refused by name: answering the first set would tell the phone its new readings were stored when they were not.
+ */
+async function earlierSet(tx: DbOrTx, crew: SessionUser, requestId: string, idem: IdempotencyKey) {
+  const [earlier] = await tx
+    .select({ id: asBuiltSets.id, requestId: asBuiltSets.requestId, digest: asBuiltSets.idempotencyDigest })
+    .from(asBuiltSets)
+    .where(and(eq(asBuiltSets.crewId, crew.id), eq(asBuiltSets.idempotencyKey, idem.key)));
+  if (!earlier) return null;
+  if (earlier.requestId !== requestId || earlier.digest !== idem.digest) {
+    throw new AppError(
+      409,
+      'idempotency_key_reused',
+      `This ${idempotencyHeader} was already used for other readings; send new readings with a new key.`,
+      { [idempotencyHeader]: 'was already used for a different set of readings' },
+    );
+  }
+  const [view] = (await listSets(tx, requestId)).filter((s) => s.id === earlier.id);
+  return view ?? null;
+}
+
+/**
+ * A set of finished-grade readings, checked and stored; failing sets are kept too, they are the site's record.
+ * With an idempotency key, a set sent again (the phone never heard the first answer) is stored once and answered
+ * with the first answer, whatever the job's status is now.
+ */
+export async function saveAsBuiltSet(
+  db: Db,
+  crew: SessionUser,
+  requestId: string,
+  input: SaveAsBuiltInput,
+  idem?: IdempotencyKey,
+): Promise<{ set: AsBuiltSetView; replayed: boolean }> {
   return db.transaction(async (tx) => {
+    // The job's row lock comes first, so two sends of one key for this job take turns and the second finds the first.
     const row = await loadVisibleRequest(tx, crew, requestId, { forUpdate: true });
+    if (idem) {
+      const earlier = await earlierSet(tx, crew, row.id, idem);
+      if (earlier) return { set: earlier, replayed: true };
+    }
     if (row.status !== 'under_construction' || row.crewId !== crew.id) {
       throw conflict(
         `As-built readings are taken while the job is being built; this one is "${statusText[row.status].label}".`,
@@ -129,10 +167,12 @@ export async function saveAsBuiltSet(db: Db, crew: SessionUser, requestId: strin
         passed: verdict.passes,
         note: input.note ?? '',
         replacesSetId: input.replacesSetId ?? null,
+        idempotencyKey: idem?.key ?? null,
+        idempotencyDigest: idem?.digest ?? null,
       })
       .returning();
     const [view] = (await listSets(tx, row.id)).filter((s) => s.id === set.id);
-    return view;
+    return { set: view, replayed: false };
   });
 }
 

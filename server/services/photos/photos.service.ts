@@ -1,6 +1,6 @@
 import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
-import { and, asc, eq, gt, inArray, or } from 'drizzle-orm';
+import { and, asc, eq, gt, inArray, isNull, or } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import { maxPhotosPerRequest, photoExtensions, type photoContentTypes } from '@shared/requests/photo-rules';
 import { photosEditable } from '@shared/contracts/photos';
@@ -45,6 +45,7 @@ export async function presignUpload(
       .where(
         and(
           eq(photos.requestId, requestId),
+          isNull(photos.kind),
           or(eq(photos.status, 'stored'), and(eq(photos.status, 'pending'), gt(photos.createdAt, recent))),
         ),
       );
@@ -86,14 +87,14 @@ async function loadPhoto(tx: DbOrTx, requestId: string, photoId: string) {
   const [photo] = await tx
     .select()
     .from(photos)
-    .where(and(eq(photos.id, photoId), eq(photos.requestId, requestId)))
+    .where(and(eq(photos.id, photoId), eq(photos.requestId, requestId), isNull(photos.kind)))
     .for('update');
   if (!photo || photo.status === 'removed') throw notFound('Photo');
   return photo;
 }
 
 /** The stored object must be exactly the announced file, and a photo by its own first bytes, whatever it was called. */
-async function checkStoredFile(ctx: PhotoContext, photo: PhotoRow) {
+export async function checkStoredFile(ctx: PhotoContext, photo: PhotoRow) {
   const head = await ctx.s3
     .send(new HeadObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: photo.objectKey }))
     .catch((error: { name?: string }) => {
@@ -173,7 +174,7 @@ export async function listStored(db: DbOrTx, requestId: string) {
   return db
     .select()
     .from(photos)
-    .where(and(eq(photos.requestId, requestId), inArray(photos.status, ['stored'])))
+    .where(and(eq(photos.requestId, requestId), inArray(photos.status, ['stored']), isNull(photos.kind)))
     .orderBy(asc(photos.createdAt));
 }
 

@@ -23,6 +23,11 @@ export interface ActionResult {
   ownerCalendar?: Omit<CalendarInvite, 'organizer' | 'location'>;
 }
 
+/** How the change came in, when not by a signed-in person's own hand: the inspector's link it was recorded through. */
+export interface TransitionVia {
+  inspectorLinkId?: string;
+}
+
 export interface ActionStep<A extends TransitionAction> {
   tx: Tx;
   /** The request as locked for this change. */
@@ -32,6 +37,7 @@ export interface ActionStep<A extends TransitionAction> {
   now: Date;
   /** The office's time zone, for times said in words. */
   timeZone: string;
+  via: TransitionVia;
 }
 
 /**

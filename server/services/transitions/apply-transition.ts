@@ -11,7 +11,7 @@ import { emailsForTransition } from '../email/transition-emails';
 import { enqueueEmails } from '../email/outbox';
 import { calendarAttachment } from '../email/calendar-invite';
 import { loadVisibleRequest, type RequestRow } from '../requests/request-access';
-import type { ActionDef, ActionResult } from './action-def';
+import type { ActionDef, ActionResult, TransitionVia } from './action-def';
 import { actionDefs } from './registry';
 
 /** What a status change needs from the app: the database, and the office's address and origin for its e-mails. */
@@ -27,6 +27,7 @@ export async function applyTransition(
   actor: SessionUser,
   requestId: string,
   body: TransitionBody,
+  via: TransitionVia = {},
 ) {
   return ctx.db.transaction(async (tx) => {
     const row = await loadVisibleRequest(tx, actor, requestId, { forUpdate: true });
@@ -52,6 +53,7 @@ export async function applyTransition(
         actor,
         now,
         timeZone: ctx.env.OFFICE_TIME_ZONE,
+        via,
       })) ?? {};
     const [updated] = await tx
       .update(requests)

@@ -5,6 +5,7 @@ import type { SessionUser } from '../../lib/session-user';
 import { AppError, conflict } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
 import { applyTransition, type TransitionContext } from './apply-transition';
+import type { TransitionVia } from './action-def';
 import { actionDefs } from './registry';
 
 /**
@@ -16,6 +17,7 @@ export async function changeStatus(
   actor: SessionUser,
   requestId: string,
   body: TransitionBody,
+  via: TransitionVia = {},
 ) {
   try {
     // Answer "not from here" with the current status for the wrong role too, not only the wrong status: the person
@@ -26,7 +28,7 @@ export async function changeStatus(
         `This request is "${statusText[current.status].label}"; "${actionLabel(body.action)}" is not possible from there for you.`,
       );
     }
-    return await applyTransition(ctx, actor, requestId, body);
+    return await applyTransition(ctx, actor, requestId, body, via);
   } catch (error) {
     if (!(error instanceof AppError) || (error.status !== 404 && error.status !== 409)) throw error;
     const explained = await actionDefs[body.action].explainRefusal?.(ctx.db, requestId, actor);

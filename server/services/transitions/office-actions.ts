@@ -3,11 +3,13 @@ import { visitUid } from '../email/calendar-invite';
 import { and, desc, eq, isNotNull } from 'drizzle-orm';
 import type { Tx } from '../../db/client';
 import { gradeChecks, jobs } from '../../db/schema';
+import { itemLines } from '@shared/contracts/inspections';
 import { badRequest, conflict } from '../../lib/errors';
 import type { RequestRow } from '../requests/request-access';
 import type { ActionDef, ActionStep } from './action-def';
 import { lastAsBuiltSet } from './as-built-state';
 import { explainPaymentWait, requirePaid } from './payment-waits';
+import { claimLinkOutcome, jobNeedsInspection, latestInspection, recordInspection } from './inspection-state';
 
 async function attachedGradeCheck(tx: Tx, requestId: string) {
   const [check] = await tx
@@ -152,11 +154,55 @@ export const release: ActionDef<'release'> = {
 
 export const sendBack: ActionDef<'send-back'> = { emails: { to: ['crew'] } };
 
+/**
+ * The road authority's inspector failed the entrance (on their own page, or the office records what they said):
+ * the job goes back to the crew with the items to fix, and everyone involved reads them.
+ */
+export const failInspection: ActionDef<'fail-inspection'> = {
+  emails: { to: ['applicant', 'office', 'crew'] },
+  run: async ({ tx, row, body, actor, now, via }) => {
+    const items = itemLines(body.items);
+    if (items.length === 0) {
+      throw badRequest('List what must be fixed, one item per line.', {
+        items: 'What must be fixed: list at least one item, one per line',
+      });
+    }
+    const linkId = via.inspectorLinkId ?? null;
+    if (linkId) await claimLinkOutcome(tx, row.id, linkId, now);
+    const note = (body.note ?? '').trim();
+    await recordInspection(tx, {
+      requestId: row.id,
+      passed: false,
+      inspectorName: body.inspectorName,
+      items,
+      note,
+      linkId,
+      recordedById: linkId ? null : actor.id,
+      createdAt: now,
+    });
+    const list = items.map((item) => `- ${item}`).join('\n');
+    return {
+      note: `Inspection failed (inspector: ${body.inspectorName}). To fix:\n${list}${note ? `\n${note}` : ''}`,
+      emailDetail: `The road authority’s inspector, ${body.inspectorName}, did not pass the entrance. The crew goes back to fix it.`,
+    };
+  },
+};
+
 export const close: ActionDef<'close'> = {
   emails: { to: ['applicant', 'crew'] },
   // Closing over failing readings is the office's call to make, but on the record: it says why.
   run: async ({ tx, row, body }) => {
     await requirePaid(tx, row.id, 'close');
+    if (await jobNeedsInspection(tx, row.id)) {
+      const inspection = await latestInspection(tx, row.id);
+      if (!inspection?.passed) {
+        throw conflict(
+          inspection
+            ? 'The road authority’s rules ask for a passed inspection before closing, and the last inspection failed. Send the inspector a link once the crew has fixed it.'
+            : 'The road authority’s rules ask for a passed inspection before closing. Send the inspector a link and wait for the outcome.',
+        );
+      }
+    }
     const set = await lastAsBuiltSet(tx, row.id);
     if (set && !set.passed && !body.note) {
       throw badRequest(

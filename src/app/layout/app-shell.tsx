@@ -3,6 +3,8 @@ import { roleLabels, type Role } from '@shared/workflow/statuses';
 import { paths } from '@/config/paths';
 import { useMe } from '@/features/auth/api/get-me';
 import { useSignOut } from '@/features/auth/api/sign-out';
+import { OutboxPanel } from '@/features/jobs/components/outbox-panel';
+import { NewVersionBanner } from './new-version-banner';
 import { Logo } from './logo';
 
 const navByRole: Record<Role, { to: string; label: string }[]> = {
@@ -89,6 +91,8 @@ export function AppShell() {
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-6">
+        <NewVersionBanner />
+        {me?.role === 'crew' && <OutboxPanel userId={me.id} />}
         <Outlet />
       </main>
       <footer className="no-print border-t border-stone-200 py-4 text-center text-xs text-stone-500">

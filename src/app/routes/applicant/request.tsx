@@ -4,11 +4,14 @@ import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { PageHeader, Panel } from '@/components/ui/panel';
 import { paths } from '@/config/paths';
 import { photosEditable } from '@shared/contracts/photos';
+import { crewStages } from '@shared/workflow/statuses';
 import { useLatestQuestion } from '@/features/events/api/get-events';
 import { EventList } from '@/features/events/components/event-list';
 import { CheckSummary } from '@/features/grade-check/components/check-summary';
 import { MessageThread } from '@/features/messages/components/message-thread';
 import { OwnerPayments } from '@/features/payments/components/owner-payments';
+import { InspectionPanel } from '@/features/inspections/components/inspection-panel';
+import { CrewPhotos } from '@/features/photos/components/crew-photos';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
 import { PhotoStep } from '@/features/photos/components/photo-step';
 import { OwnerQuote } from '@/features/quotes/components/owner-quote';
@@ -52,6 +55,16 @@ function RequestPage({ id }: { id: string }) {
           <Panel title="Photos">
             {photosEditable(request.status) ? <PhotoStep requestId={id} /> : <PhotoGallery requestId={id} />}
           </Panel>
+          {crewStages.includes(request.status) && request.status !== 'released' && (
+            <>
+              <Panel title="The crew’s photos">
+                <CrewPhotos requestId={id} />
+              </Panel>
+              <Panel title="Road authority inspection">
+                <InspectionPanel requestId={id} status={request.status} />
+              </Panel>
+            </>
+          )}
           <Panel title="Your answers">
             <ApplicationSummary application={request.application} />
           </Panel>

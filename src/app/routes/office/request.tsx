@@ -2,6 +2,7 @@ import { officeRoles } from '@shared/workflow/roles';
 import { useParams } from 'react-router';
 import { RequireRole } from '@/app/layout/require-role';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
+import { Panel } from '@/components/ui/panel';
 import { useMe } from '@/features/auth/api/get-me';
 import { useAsBuilt } from '@/features/jobs/api/get-as-built';
 import { AsBuiltReview } from '@/features/jobs/components/as-built-review';
@@ -11,6 +12,8 @@ import type { Cautions } from '@/features/office/components/action-panel';
 import { RequestWorkspace } from '@/features/office/components/request-workspace';
 import { OfficePayments } from '@/features/payments/components/office-payments';
 import { useRequestPayments } from '@/features/payments/api/get-request-payments';
+import { InspectionPanel } from '@/features/inspections/components/inspection-panel';
+import { CrewPhotos } from '@/features/photos/components/crew-photos';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
 import { QuoteBuilder } from '@/features/quotes/components/quote-builder';
 import { useOfficeRequest } from '@/features/requests/api/get-request';
@@ -57,8 +60,14 @@ function OfficeRequestPage({ id }: { id: string }) {
         />
       )}
       {built && (
-        <div className="mt-6">
+        <div className="mt-6 space-y-6">
           <AsBuiltReview requestId={id} />
+          <Panel title="Crew photos">
+            <CrewPhotos requestId={id} />
+          </Panel>
+          <Panel title="Road authority inspection">
+            <InspectionPanel requestId={id} status={request.status} office />
+          </Panel>
         </div>
       )}
     </>

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { Role } from '@shared/workflow/statuses';
 import { api } from '@/lib/api-client';
+import { keptForOffline } from '@/lib/react-query';
 
 export interface Me {
   id: string;
@@ -15,6 +16,7 @@ export async function getMe(): Promise<Me | null> {
   return user;
 }
 
-export const getMeQueryOptions = () => queryOptions({ queryKey: ['me'], queryFn: getMe, staleTime: 5 * 60_000 });
+export const getMeQueryOptions = () =>
+  queryOptions({ queryKey: ['me'], queryFn: getMe, staleTime: 5 * 60_000, ...keptForOffline });
 
 export const useMe = () => useQuery(getMeQueryOptions());

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { forgetCachedData } from '@/lib/service-worker';
 
 export const signOut = () => api.post<void>('/auth/sign-out');
 
@@ -7,8 +8,9 @@ export function useSignOut() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: signOut,
-    onSuccess: () => {
+    onSuccess: async () => {
       queryClient.clear();
+      await forgetCachedData();
       window.location.assign('/');
     },
   });

@@ -1,4 +1,5 @@
 import type { QueryClient } from '@tanstack/react-query';
+import { photoKeys } from '@/lib/query-keys';
 import { getAsBuiltQueryOptions } from './get-as-built';
 import { getBoardQueryOptions } from './get-board';
 import { getFieldSheetQueryOptions } from './get-field-sheet';
@@ -11,5 +12,6 @@ export async function invalidateJob(queryClient: QueryClient, id: string) {
     queryClient.invalidateQueries({ queryKey: getMyJobsQueryOptions().queryKey }),
     queryClient.invalidateQueries({ queryKey: getFieldSheetQueryOptions(id).queryKey }),
     queryClient.invalidateQueries({ queryKey: getAsBuiltQueryOptions(id).queryKey }),
+    queryClient.invalidateQueries({ queryKey: photoKeys.crewOfRequest(id) }),
   ]);
 }

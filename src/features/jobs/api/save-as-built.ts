@@ -4,10 +4,16 @@ import type { AsBuiltSetView } from '@shared/crew/crew-views';
 import { api } from '@/lib/api-client';
 import { invalidateJob } from './invalidate-job';
 
-export const saveAsBuilt = ({ id, ...body }: SaveAsBuiltInput & { id: string }) =>
-  api.post<{ set: AsBuiltSetView }>(`/api/crew/jobs/${id}/as-built`, body);
+/** `key` is the set's idempotency key: made when the set is entered and kept for every try, so it is stored once. */
+export const saveAsBuilt = ({ id, key, ...body }: SaveAsBuiltInput & { id: string; key: string }) =>
+  api.withHeaders({ 'Idempotency-Key': key }).post<{ set: AsBuiltSetView }>(`/api/crew/jobs/${id}/as-built`, body);
 
 export function useSaveAsBuilt() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: saveAsBuilt, onSuccess: (_d, v) => invalidateJob(queryClient, v.id) });
+  return useMutation({
+    mutationFn: saveAsBuilt,
+    // Tried even when the browser says it is offline: the failure is what sends the set to the phone's queue.
+    networkMode: 'always',
+    onSuccess: (_d, v) => invalidateJob(queryClient, v.id),
+  });
 }

@@ -7,6 +7,8 @@ import { ErrorNotice, Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { useSaveAsBuilt } from '../api/save-as-built';
+import { outcomeOf } from '../outbox/outbox-queue';
+import { addToOutbox, useOutboxItems } from '../outbox/use-outbox';
 import { MarkBuiltPanel } from './mark-built-panel';
 import { checkRows, checkWholeSet, type ReadingRow } from './reading-checks';
 import { ReadingsTable } from './readings-table';
@@ -25,12 +27,25 @@ const rowsOf = (set: AsBuiltSetView): ReadingRow[] =>
   );
 
 /** Readings as they are taken on site, each judged at once; the set is saved and judged again by the server. */
-export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnter: boolean }) {
+export function AsBuiltEntry({
+  page,
+  canEnter,
+  userId,
+}: {
+  page: AsBuiltPageView;
+  canEnter: boolean;
+  /** The crew lead entering readings: a set that cannot be sent now waits on the phone under their name. */
+  userId?: string;
+}) {
   // The form opens on the latest saved set, so fixing one reading never means typing the others again.
   const latest = page.sets[0] ?? null;
   const [editing, setEditing] = useState<AsBuiltSetView | null>(latest);
   const [rows, setRows] = useState<ReadingRow[]>(() => (latest ? rowsOf(latest) : [emptyRow()]));
   const [note, setNote] = useState(latest?.note ?? '');
+  // The key of the last set kept on the phone, while it is still there waiting.
+  const [keptKey, setKeptKey] = useState<string>();
+  const waiting = useOutboxItems(userId);
+  const kept = waiting.some((i) => i.key === keptKey && i.state === 'waiting');
   const save = useSaveAsBuilt();
   const basis = useMemo(
     () => ({ ruleProfile: page.ruleProfile, design: page.design, roadEdgeStationFt: page.roadEdgeStationFt }),
@@ -46,20 +61,51 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
     setRows((list) => list.map((r) => (r.key === key ? { ...r, ...c } : r)));
   const remove = (key: number) =>
     setRows((list) => (list.length === 1 ? [emptyRow()] : list.filter((r) => r.key !== key)));
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    const readings = checks.flatMap((c) => (c.reading ? [c.reading] : []));
-    save.mutate(
-      { id: page.job.requestId, readings, note: note || undefined, replacesSetId: editing?.id },
-      // The set stays in the form as saved: the next save corrects it.
-      { onSuccess: ({ set }) => setEditing(set) },
-    );
-  };
   const startEmpty = () => {
     setEditing(null);
     setRows([emptyRow()]);
     setNote('');
     save.reset();
+  };
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    const readings = checks.flatMap((c) => (c.reading ? [c.reading] : []));
+    const body = { readings, note: note || undefined, replacesSetId: editing?.id };
+    // The key is made once, here: a set kept for later is sent under the same key, so it is stored once.
+    const key = crypto.randomUUID();
+    const keep = async () => {
+      if (!userId) return;
+      await addToOutbox({
+        key,
+        type: 'readings',
+        body,
+        userId,
+        requestId: page.job.requestId,
+        jobReference: page.job.reference,
+        createdAt: new Date().toISOString(),
+        state: 'waiting',
+        attempts: 0,
+        nextTryAt: Date.now(),
+      });
+      // What waits on the phone is not on the server yet: the form starts again empty.
+      startEmpty();
+      setKeptKey(key);
+    };
+    if (!navigator.onLine) {
+      void keep();
+      return;
+    }
+    save.mutate(
+      { id: page.job.requestId, key, ...body },
+      {
+        // The set stays in the form as saved: the next save corrects it.
+        onSuccess: ({ set }) => setEditing(set),
+        // No answer, or the server busy: the set waits on the phone. A refusal stays on screen to be corrected.
+        onError: (error) => {
+          if (outcomeOf(error).kind === 'retry') void keep();
+        },
+      },
+    );
   };
 
   return (
@@ -118,6 +164,12 @@ export function AsBuiltEntry({ page, canEnter }: { page: AsBuiltPageView; canEnt
             {save.isSuccess && (
               <Notice title="Set saved">
                 The server checked it: see the latest set below. The readings stay here to correct and save again.
+              </Notice>
+            )}
+            {kept && (
+              <Notice tone="warn" title="Set kept on this phone">
+                There is no connection to the server, so the set waits here (see “Waiting to send” above) and is sent by
+                itself when the signal returns. The server will check it then.
               </Notice>
             )}
             <Button type="submit" disabled={save.isPending || !whole} className="min-h-12 px-6 text-base">

@@ -8,7 +8,7 @@ export function toFormValues(profile: RuleProfile): { values: FormValues; source
   const sources: FormValues = {};
   for (const f of allFields) {
     const v = valueAt(profile, f.path);
-    values[f.path] = v === undefined || v === null ? '' : String(v);
+    values[f.path] = v === undefined || v === null ? (f.fallback ?? '') : String(v);
     sources[sourceKeyOf(f)] = profile.sources[sourceKeyOf(f)] ?? '';
   }
   return { values, sources };
