@@ -13,7 +13,7 @@ export interface PlanSource {
   };
   culvert?: {
     diameterIn: number;
-    inlet: InletType;
+    inlet?: InletType;
     inletInvertFt: number;
     outletInvertFt: number;
     lengthFt?: number;
@@ -72,7 +72,7 @@ export function planInputFor(
     const worked = report.culvert?.requiredLengthFt;
     out.culvert = {
       diameterIn: c.diameterIn,
-      material: plan.culvertMaterial ?? materialOf(c.inlet),
+      material: plan.culvertMaterial ?? materialOf(c.inlet ?? 'concrete-square-headwall'),
       lengthFt: c.lengthFt ?? worked,
       lengthWorkedOut: c.lengthFt === undefined && worked !== undefined,
       offsetFt: Math.max(0, (plan.culvertStationFt ?? Math.max(lowest.stationFt, roadEdge)) - roadEdge),
