@@ -6,6 +6,7 @@ import { emailsRouter } from './emails/emails.routes';
 import { gradeChecksRouter } from './grade-checks/grade-checks.routes';
 import { healthRouter } from './health/health.routes';
 import { messagesRouter } from './messages/messages.routes';
+import { permitsRouter } from './permits/permits.routes';
 import { photosRouter } from './photos/photos.routes';
 import { requestsRouter } from './requests/requests.routes';
 import { ruleProfilesRouter } from './rule-profiles/rule-profiles.routes';
@@ -27,4 +28,5 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(ruleProfilesRouter(ctx));
   app.use(gradeChecksRouter(ctx));
   app.use(documentsRouter(ctx));
+  app.use(permitsRouter(ctx));
 }

@@ -11,3 +11,9 @@ const yearMessage = 'must be in a year between 1900 and 2999';
 export const dayInput = (message: string) => z.iso.date(message).refine(plausibleYear, yearMessage);
 export const momentInput = (message: string) =>
   z.iso.datetime({ offset: true, message }).refine(plausibleYear, yearMessage);
+
+/** A day as people read it, e.g. "Dec 2, 2026"; an ISO day (2026-12-02) is that day wherever the reader is. */
+export function formatDay(when: Date | string): string {
+  const date = typeof when === 'string' && when.length === 10 ? new Date(`${when}T12:00:00Z`) : new Date(when);
+  return date.toLocaleDateString('en-US', { month: 'short', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
+}

@@ -8,6 +8,8 @@ export const eventKindLabels: Record<string, string> = {
   'work-day-planned': 'Work day planned',
   'crew-note': 'Note for the crew',
   'grade-check-withdrawn': 'Grade check withdrawn',
+  'permit-packet': 'Permit packet filed',
+  'decision-letter': 'Road authority’s letter added',
 };
 
 export const eventKindLabel = (kind: string) => eventKindLabels[kind] ?? 'Update';

@@ -21,7 +21,7 @@ export interface ReportData {
 const dateText = (d: Date | null) => (d ? d.toISOString().slice(0, 10) : '-');
 
 /** What was measured at the site, in one paragraph, so the report stands on its own. */
-function siteWords(check: GradeCheck): string {
+export function siteWords(check: Pick<GradeCheck, 'inputs' | 'results'>): string {
   const { road, sight, geometry, culvert } = check.inputs;
   const parts: string[] = [
     `Road edge at station ${formatStation(check.inputs.roadEdgeStationFt ?? check.results.report.profile.points[0].stationFt)}`,

@@ -3,18 +3,16 @@ import { statusText } from '@shared/workflow/statuses';
 import { findTransition, type Transition, type TransitionAction } from '@shared/workflow/transitions';
 import type { TransitionBody, TransitionBodyOf } from '@shared/workflow/transition-inputs';
 import type { SessionUser } from '../../lib/session-user';
-import type { AppContext } from '../../config/context';
 import type { Tx } from '../../db/client';
 import { requestEvents, requests, users } from '../../db/schema';
 import { conflict, forbidden } from '../../lib/errors';
 import { emailsForTransition } from '../email/transition-emails';
 import { enqueueEmails } from '../email/outbox';
 import { loadVisibleRequest, type RequestRow } from '../requests/request-access';
-import type { ActionDef, ActionResult } from './action-def';
+import type { ActionDef, ActionResult, TransitionContext } from './action-def';
 import { actionDefs } from './registry';
 
-/** What a status change needs from the app: the database, and the office's address and origin for its e-mails. */
-export type TransitionContext = Pick<AppContext, 'db' | 'env'>;
+export type { TransitionContext };
 
 /**
  * The status change itself, in a single transaction: lock the row, check the action is allowed from its current
@@ -26,6 +24,7 @@ export async function applyTransition(
   actor: SessionUser,
   requestId: string,
   body: TransitionBody,
+  prepared?: unknown,
 ) {
   return ctx.db.transaction(async (tx) => {
     const row = await loadVisibleRequest(tx, actor, requestId, { forUpdate: true });
@@ -44,7 +43,7 @@ export async function applyTransition(
     const now = new Date();
     const def = actionDefs[body.action] as ActionDef<TransitionAction>;
     const added: ActionResult =
-      (await def.run?.({ tx, row, body: body as TransitionBodyOf<TransitionAction>, actor, now })) ?? {};
+      (await def.run?.({ tx, row, body: body as TransitionBodyOf<TransitionAction>, actor, now, prepared })) ?? {};
     const [updated] = await tx
       .update(requests)
       .set({ ...added.patch, status: transition.to, version: row.version + 1, statusChangedAt: now, updatedAt: now })

@@ -5,6 +5,12 @@ import { badRequest, conflict } from '../../lib/errors';
 import type { RequestRow } from '../requests/request-access';
 import type { ActionDef, ActionStep } from './action-def';
 import { lastAsBuiltSet } from './as-built-state';
+import {
+  discardStoredPacket,
+  recordFiledPacket,
+  storePacketForFiling,
+  type StoredPacket,
+} from '../permits/permit-packet.service';
 
 async function attachedGradeCheck(tx: Tx, requestId: string) {
   const [check] = await tx
@@ -51,9 +57,15 @@ export const markChecked: ActionDef<'mark-checked'> = {
   },
 };
 
+/** The packet sent with the application is stored first, then recorded with the filing and linked from the timeline. */
 export const filePermit: ActionDef<'file-permit'> = {
   emails: { to: ['applicant'] },
-  run: async ({ body }) => ({ patch: { permitReference: body.permitReference } }),
+  prepare: (ctx, { actor, requestId, body }) => storePacketForFiling(ctx, actor, requestId, body),
+  discard: (ctx, prepared) => discardStoredPacket(ctx, prepared as StoredPacket),
+  run: async ({ tx, row, body, actor, prepared }) => {
+    if (prepared) await recordFiledPacket(tx, actor, row.id, body.permitReference, prepared as StoredPacket);
+    return { patch: { permitReference: body.permitReference } };
+  },
 };
 
 export const recordGranted: ActionDef<'record-granted'> = {
