@@ -62,7 +62,10 @@ export function culvertRows(check: Pick<GradeCheck, 'inputs' | 'results'>): stri
     ['Inlet invert', ft(c.inletInvertFt)],
     ['Outlet invert', ft(c.outletInvertFt)],
     ['Slope from the inverts', s.slopeFtPerFt === undefined ? 'not worked out' : valueText(s.slopeFtPerFt, 'ft/ft')],
-    ['Cover over the pipe', s.coverIn === undefined ? 'not worked out (no finished surface given)' : valueText(s.coverIn, 'in')],
+    [
+      'Cover over the pipe',
+      s.coverIn === undefined ? 'not worked out (no finished surface given)' : valueText(s.coverIn, 'in'),
+    ],
     ['Design flow', s.designFlowCfs === undefined ? 'not given' : valueText(s.designFlowCfs, 'cfs')],
     ['Full-flow capacity', s.capacityCfs === undefined ? 'not worked out' : valueText(s.capacityCfs, 'cfs')],
     ['Headwater', headwaterWords(s) ?? 'not worked out (no design flow)'],

@@ -29,7 +29,7 @@ export async function listEvents(db: DbOrTx, user: SessionUser, requestId: strin
     .where(where)
     .orderBy(asc(requestEvents.createdAt), asc(requestEvents.id));
   // The document an event names is the office's to open (the owner sees only what the office shares).
-  return rows.map(
-    ({ internal, documentId, ...event }): EventView<Date> => (office ? { ...event, internal, documentId } : event),
+  return rows.map(({ internal, documentId, ...event }): EventView<Date> =>
+    office ? { ...event, internal, documentId } : event,
   );
 }
