@@ -17,6 +17,9 @@ export const requestKeys = {
 /** GET /api/requests/:id/events */
 export const eventKeys = { ofRequest: (requestId: string) => ['events', requestId] as const };
 
+/** GET /api/requests/:id/documents */
+export const documentKeys = { ofRequest: (requestId: string) => ['documents', requestId] as const };
+
 /** GET /api/requests/:id/messages */
 export const messageKeys = { ofRequest: (requestId: string) => ['messages', requestId] as const };
 
@@ -57,4 +60,6 @@ export const statusChangeKeys = (requestId: string) => [
   requestKeys.one(requestId),
   eventKeys.ofRequest(requestId),
   messageKeys.ofRequest(requestId),
+  // Filing the permit stores the packet it sent.
+  documentKeys.ofRequest(requestId),
 ];

@@ -203,7 +203,7 @@ describe('the road authority’s decision letter', () => {
     const put = await fetch(presigned.body.upload.url, {
       method: 'PUT',
       headers: presigned.body.upload.headers,
-      body: bytes,
+      body: new Uint8Array(bytes),
     });
     expect(put.status).toBe(200);
     return cast.staff.agent

@@ -8,6 +8,7 @@ import { AsBuiltReview } from '@/features/jobs/components/as-built-review';
 import { EventList } from '@/features/events/components/event-list';
 import { MessageThread } from '@/features/messages/components/message-thread';
 import { RequestWorkspace } from '@/features/office/components/request-workspace';
+import { PermitPanel } from '@/features/permits/components/permit-panel';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
 import { useOfficeRequest } from '@/features/requests/api/get-request';
 import { ApplicationSummary } from '@/features/requests/components/application-summary';
@@ -41,6 +42,9 @@ function OfficeRequestPage({ id }: { id: string }) {
             photos: () => <PhotoGallery requestId={id} emptyText="The property owner has not added photos." />,
             messages: () => <MessageThread requestId={id} office />,
             history: () => <EventList requestId={id} office label="History" />,
+            permit: () => (
+              <PermitPanel requestId={id} status={request.status} filed={Boolean(request.permitReference)} />
+            ),
           }}
         />
       )}

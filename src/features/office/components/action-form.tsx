@@ -27,7 +27,11 @@ function startValues(fields: FormField[], request: OfficeRequest) {
   return Object.fromEntries(
     fields.map((f) => [
       f.name,
-      f.text.prefill ? (request[f.text.prefill] ?? '') : f.text.control === 'choice' ? (f.text.options?.[0]?.[0] ?? '') : '',
+      f.text.prefill
+        ? (request[f.text.prefill] ?? '')
+        : f.text.control === 'choice'
+          ? (f.text.options?.[0]?.[0] ?? '')
+          : '',
     ]),
   );
 }

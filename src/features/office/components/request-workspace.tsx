@@ -19,7 +19,10 @@ interface WorkspaceProps {
   request: OfficeRequestView;
   me: { id: string; role: Role };
   /** The parts other features draw, composed by the screen: the full application, photos, messages, history. */
-  sections: Record<'application' | 'photos' | 'messages' | 'history', () => ReactNode>;
+  sections: Record<'application' | 'photos' | 'messages' | 'history', () => ReactNode> & {
+    /** The permit packet and the authority's letter, once the request has a check to file. */
+    permit?: () => ReactNode;
+  };
   /** What the screen knows the office should weigh before a move, such as failing as-built readings. */
   cautions?: Cautions;
 }
@@ -78,6 +81,7 @@ export function RequestWorkspace({ request, me, sections, cautions }: WorkspaceP
             <p className="mb-3 text-sm text-stone-600">{request.whatNext}</p>
             <ActionPanel request={request} role={me.role} cautions={cautions} />
           </Panel>
+          {sections.permit && <Panel title="Permit">{sections.permit()}</Panel>}
         </aside>
       </div>
     </>
