@@ -5,6 +5,7 @@ import { startStandIns } from '../../fakes';
 import { applyMigrations, createDb } from '../db/client';
 import { demoPeople } from './seed/demo-people';
 import { seedDemo } from './seed';
+import { seedDemoPackets } from './seed/demo-packets';
 import { seedDemoReports } from './seed/demo-reports';
 import { closeContext, createContext } from '../context-factory';
 import { parseEnv } from '../config/env';
@@ -77,6 +78,7 @@ async function main() {
     const seedCtx = createContext(parseEnv({ ...env, LOG_LEVEL: 'warn' }));
     try {
       await seedDemoReports(seedCtx);
+      await seedDemoPackets(seedCtx);
     } finally {
       await closeContext(seedCtx);
     }
