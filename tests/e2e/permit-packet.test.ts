@@ -93,7 +93,7 @@ describe('the plan view and the permit packet', () => {
     mkdirSync(dir, { recursive: true });
     const expected = { letter: [612, 792], a4: [595.28, 841.89] } as const;
     for (const paper of ['letter', 'a4'] as const) {
-      await page.getByLabel('Paper').selectOption(paper);
+      await page.getByLabel('Packet paper size').selectOption(paper);
       const href = await link.getAttribute('href');
       expect(href).toContain(`paper=${paper}`);
       const answer = await page.request.get(appUrl(href!));

@@ -32,6 +32,7 @@ export function PermitPanel({
           <label className="flex items-center gap-2">
             Paper
             <select
+              aria-label="Packet paper size"
               value={paper}
               onChange={(e) => setPaper(e.target.value as 'letter' | 'a4')}
               className="rounded border border-stone-300 px-2 py-1"
