@@ -168,6 +168,18 @@ describe('the permit packet', () => {
     expect(ownerEvents.body.events.every((e: object) => !('documentId' in e))).toBe(true);
   });
 
+  it('still records a filing made with no attached check, and says on the office’s timeline that no packet went with it', async () => {
+    const row = await createRequestRow(t.ctx.db, { applicantId: cast.applicant.id, status: 'checked' });
+    await cast.staff.agent
+      .post(`/api/requests/${row.id}/transitions`)
+      .send({ action: 'file-permit', expectedVersion: row.version, permitReference: 'MC-PAPER-1' })
+      .expect(200);
+    const events = await t.ctx.db.select().from(requestEvents).where(eq(requestEvents.requestId, row.id));
+    const note = events.find((e) => e.kind === 'permit-packet');
+    expect(note).toMatchObject({ internal: true, documentId: null });
+    expect(note?.note).toMatch(/^No permit packet was stored with this filing: Attach a grade check/);
+  });
+
   it('leaves nothing recorded when the filing is refused (a stale version)', async () => {
     const { request } = await checkedRequest();
     await cast.staff.agent

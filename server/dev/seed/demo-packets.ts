@@ -30,6 +30,7 @@ export async function seedDemoPackets(ctx: Pick<AppContext, 'db' | 's3' | 'env'>
     });
     await ctx.db.transaction(async (tx) => {
       const document = await recordFiledPacket(tx, office, request.id, reference, packet);
+      if (!document) return;
       await tx.update(documents).set({ createdAt: event.createdAt }).where(eq(documents.id, document.id));
       await tx
         .update(requestEvents)

@@ -7,7 +7,8 @@ import type { PacketPaperSize } from '@shared/workflow/transition-inputs';
 import type { AppContext } from '../../config/context';
 import type { DbOrTx, Tx } from '../../db/client';
 import { documents, gradeChecks, jurisdictions, requestEvents, ruleProfileVersions } from '../../db/schema';
-import { conflict } from '../../lib/errors';
+import { AppError, conflict } from '../../lib/errors';
+import { StoredGradeCheckError } from '@shared/grade-check/stored-check';
 import type { SessionUser } from '../../lib/session-user';
 import { readGradeCheckRow } from '../grade-checks/grade-checks.service';
 import { loadVisibleRequest, type RequestRow } from '../requests/request-access';
@@ -42,7 +43,15 @@ async function packetData(
     .orderBy(desc(gradeChecks.attachedAt))
     .limit(1);
   if (!checkRow) throw conflict('Attach a grade check to this request before making its permit packet.');
-  const check = readGradeCheckRow(checkRow);
+  let check;
+  try {
+    check = readGradeCheckRow(checkRow);
+  } catch (error) {
+    if (!(error instanceof StoredGradeCheckError)) throw error;
+    throw conflict(
+      `The attached grade check ${checkRow.number} cannot be read (${error.message}); attach a check saved again to make the packet.`,
+    );
+  }
   const [version] = await db
     .select()
     .from(ruleProfileVersions)
@@ -89,6 +98,7 @@ export async function previewPacket(
 
 /** A packet stored before the filing's transaction, recorded by it (or removed if the filing is refused). */
 export interface StoredPacket {
+  kind: 'stored';
   objectKey: string;
   sizeBytes: number;
   gradeCheckId: string;
@@ -111,11 +121,36 @@ export async function storePacketForFiling(
   const pdf = await buildPermitPacket(data);
   const objectKey = `reports/${row.id}/permit-packet-${randomUUID()}.pdf`;
   await storeReport(ctx, objectKey, pdf);
-  return { objectKey, sizeBytes: pdf.length, gradeCheckId: data.checkId, paper };
+  return { kind: 'stored', objectKey, sizeBytes: pdf.length, gradeCheckId: data.checkId, paper };
+}
+
+/** Why no packet could be made for a filing: the office may have filed on paper, so the filing is still recorded. */
+export interface MissingPacket {
+  kind: 'missing';
+  reason: string;
+}
+
+/**
+ * The packet for a filing, or why there is none (no attached check, or one no reader can use). A request moved to
+ * "checked" always has an attached check, but one may have been withdrawn since; recording the filing is not held up.
+ */
+export async function packetForFiling(
+  ctx: Pick<AppContext, 'db' | 's3' | 'env'>,
+  actor: SessionUser,
+  requestId: string,
+  body: { permitReference?: string; paperSize?: PacketPaperSize },
+): Promise<StoredPacket | MissingPacket> {
+  try {
+    return await storePacketForFiling(ctx, actor, requestId, body);
+  } catch (error) {
+    if (error instanceof AppError && error.status === 409) return { kind: 'missing', reason: error.message };
+    throw error;
+  }
 }
 
 /** A packet stored for a filing that did not happen is taken out of storage again; failing that, it only takes room. */
-export async function discardStoredPacket(ctx: Pick<AppContext, 's3' | 'env'>, packet: StoredPacket) {
+export async function discardStoredPacket(ctx: Pick<AppContext, 's3' | 'env'>, packet: StoredPacket | MissingPacket) {
+  if (packet.kind !== 'stored') return;
   await ctx.s3.send(new DeleteObjectCommand({ Bucket: ctx.env.S3_BUCKET, Key: packet.objectKey })).catch(() => {});
 }
 
@@ -125,8 +160,18 @@ export async function recordFiledPacket(
   actor: SessionUser,
   requestId: string,
   permitReference: string | undefined,
-  packet: StoredPacket,
+  packet: StoredPacket | MissingPacket,
 ) {
+  if (packet.kind === 'missing') {
+    await tx.insert(requestEvents).values({
+      requestId,
+      actorId: actor.id,
+      kind: PACKET_KIND,
+      internal: true,
+      note: `No permit packet was stored with this filing: ${packet.reason}`,
+    });
+    return null;
+  }
   const [document] = await tx
     .insert(documents)
     .values({

@@ -7,10 +7,13 @@ import type { ActionDef, ActionStep } from './action-def';
 import { lastAsBuiltSet } from './as-built-state';
 import {
   discardStoredPacket,
+  packetForFiling,
   recordFiledPacket,
-  storePacketForFiling,
+  type MissingPacket,
   type StoredPacket,
 } from '../permits/permit-packet.service';
+
+type FilingPacket = StoredPacket | MissingPacket;
 
 async function attachedGradeCheck(tx: Tx, requestId: string) {
   const [check] = await tx
@@ -60,10 +63,10 @@ export const markChecked: ActionDef<'mark-checked'> = {
 /** The packet sent with the application is stored first, then recorded with the filing and linked from the timeline. */
 export const filePermit: ActionDef<'file-permit'> = {
   emails: { to: ['applicant'] },
-  prepare: (ctx, { actor, requestId, body }) => storePacketForFiling(ctx, actor, requestId, body),
-  discard: (ctx, prepared) => discardStoredPacket(ctx, prepared as StoredPacket),
+  prepare: (ctx, { actor, requestId, body }) => packetForFiling(ctx, actor, requestId, body),
+  discard: (ctx, prepared) => discardStoredPacket(ctx, prepared as FilingPacket),
   run: async ({ tx, row, body, actor, prepared }) => {
-    if (prepared) await recordFiledPacket(tx, actor, row.id, body.permitReference, prepared as StoredPacket);
+    if (prepared) await recordFiledPacket(tx, actor, row.id, body.permitReference, prepared as FilingPacket);
     return { patch: { permitReference: body.permitReference } };
   },
 };
