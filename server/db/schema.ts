@@ -2,6 +2,7 @@ import { sql } from 'drizzle-orm';
 import {
   type AnyPgColumn,
   bigint,
+  type AnyPgColumn,
   bigserial,
   boolean,
   customType,
@@ -177,6 +178,8 @@ export const requestEvents = pgTable(
     note: text().notNull().default(''),
     /** Internal events (assignment, internal notes) never reach the applicant. */
     internal: boolean().notNull().default(false),
+    /** The document the event is about (the permit packet filed, the authority's letter), opened from the timeline. */
+    documentId: uuid().references((): AnyPgColumn => documents.id),
     createdAt: createdAt(),
   },
   (t) => [index('request_events_request_idx').on(t.requestId, t.createdAt)],

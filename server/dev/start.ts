@@ -8,6 +8,7 @@ import { demoPeople } from './seed/demo-people';
 import { seedDemo } from './seed';
 import { seedDemoQuotePdfs } from './seed/demo-quotes';
 import { seedDemoCrewPhotos } from './seed/demo-inspection';
+import { seedDemoPackets } from './seed/demo-packets';
 import { seedDemoReports } from './seed/demo-reports';
 import { seedDemoPayments } from './seed/demo-payments';
 import { closeContext, createContext } from '../context-factory';
@@ -87,6 +88,7 @@ async function main() {
       // Card payments go through the payments stand-in, so they too wait until it runs.
       await seedDemoPayments(seedCtx);
       await seedDemoCrewPhotos(seedCtx);
+      await seedDemoPackets(seedCtx);
     } finally {
       await closeContext(seedCtx);
     }

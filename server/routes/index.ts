@@ -11,6 +11,7 @@ import { inspectionsRouter } from './inspections/inspections.routes';
 import { messagesRouter } from './messages/messages.routes';
 import { paymentsRouter } from './payments/payments.routes';
 import { crewPhotosRouter } from './photos/crew-photos.routes';
+import { permitsRouter } from './permits/permits.routes';
 import { photosRouter } from './photos/photos.routes';
 import { requestsRouter } from './requests/requests.routes';
 import { ruleProfilesRouter } from './rule-profiles/rule-profiles.routes';
@@ -41,4 +42,5 @@ export function registerRoutes(app: Express, ctx: AppContext) {
   app.use(quotesRouter(ctx));
   app.use(paymentsRouter(ctx));
   app.use(inspectionsRouter(ctx));
+  app.use(permitsRouter(ctx));
 }

@@ -12,6 +12,8 @@ export interface EventView<When extends Moment = string> {
   actorName: string | null;
   actorRole: Role | null;
   internal?: boolean;
+  /** The office only: the document the event is about (a filed permit packet, the authority's letter). */
+  documentId?: string | null;
 }
 
 export interface EventsAnswer<When extends Moment = string> {

@@ -31,9 +31,43 @@ export const designPartSchema = proposeProfileInputSchema.extend({
     .default(defaultHaul),
 });
 
-/** Exactly what checkEntrance takes, plus the road, the laser setup input and the design part. */
+export const culvertMaterials = ['concrete', 'corrugated metal', 'corrugated plastic', 'PVC'] as const;
+const side = z.enum(['left', 'right'], { error: 'must be left or right (facing into the property)' });
+
+/**
+ * What only the plan view and the permit packet read: nothing here changes a finding. All optional, so checks saved
+ * before it existed read as they were (no format change: an absent part is what they always had).
+ */
+export const sitePlanPartSchema = z.object({
+  // From the road edge to the right-of-way line, measured along the driveway.
+  rightOfWayFt: z
+    .number('must be a number of feet')
+    .min(0, 'must be 0 ft or more')
+    .max(500, 'must be at most 500 ft')
+    .optional(),
+  roadWidthFt: z
+    .number('must be a number of feet')
+    .min(8, 'must be at least 8 ft')
+    .max(200, 'must be at most 200 ft')
+    .optional(),
+  // The direction the driveway runs into the property, degrees clockwise from north.
+  bearingDeg: z
+    .number('must be a number of degrees')
+    .min(0, 'must be 0 to 359.9 degrees')
+    .lt(360, 'must be 0 to 359.9 degrees')
+    .optional(),
+  intersectionSide: side.optional(),
+  intersectionName: z.string().trim().min(1, 'must not be blank').max(80, 'must be at most 80 characters').optional(),
+  propertyLineSide: side.optional(),
+  culvertStationFt: z.number('must be a station in feet').min(-10_000).max(100_000).optional(),
+  culvertMaterial: z.enum(culvertMaterials, { error: `must be one of: ${culvertMaterials.join(', ')}` }).optional(),
+});
+export type SitePlanPart = z.output<typeof sitePlanPartSchema>;
+
+/** Exactly what checkEntrance takes, plus the road, the laser setup input, the design part and the plan's extras. */
 export const storedGradeCheckInputsSchema = checkEntranceInputSchema.extend({
   road: roadPartSchema.optional(),
+  plan: sitePlanPartSchema.optional(),
   laser: laserSetupInputSchema.optional(),
   design: designPartSchema.optional(),
 });

@@ -10,6 +10,7 @@ import type {
   StakeResult,
 } from '../engine';
 import type { ProfileChartInput } from '../charts/profile-chart';
+import type { PlanViewInput } from '../charts/plan-view';
 import type { RequestStatus } from '../workflow/statuses';
 import type { AsBuiltReadingInput } from './crew-inputs';
 
@@ -145,6 +146,8 @@ export interface FieldSheetView {
     cutFill: CutFillAtStation[];
     chart: ProfileChartInput;
   } | null;
+  /** The entrance seen from above, drawn by shared/charts as on the check screen and in the permit packet. */
+  plan: PlanViewInput | null;
   earthwork: EarthworkEstimate | null;
   cautions: string[];
 }

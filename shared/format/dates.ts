@@ -50,7 +50,10 @@ export function formatTime(value: DateValue, words: DateWords = {}): string {
   if (value === null || value === undefined || value === '') return words.missing ?? DEFAULT_MISSING;
   const at = value instanceof Date ? value : new Date(value);
   if (Number.isNaN(at.getTime())) return words.missing ?? DEFAULT_MISSING;
-  return at.toLocaleTimeString('en-US', { hour: 'numeric', minute: '2-digit', timeZone: words.timeZone });
+  // A plain space before AM/PM: newer ICU data puts a narrow no-break space there, which plain text mangles.
+  return at
+    .toLocaleTimeString('en-US', { hour: 'numeric', minute: '2-digit', timeZone: words.timeZone })
+    .replace(/[\u202f\u00a0]/g, ' ');
 }
 
 /** "Dec 2, 2026, 3:05 PM" (or "Wed, Dec 2, 2026, 3:05 PM" with `weekday`). A calendar day alone has no time. */

@@ -51,7 +51,7 @@ export interface CheckedNow {
 }
 
 export function checkWithoutProposal(inputs: GradeCheckInputs, rules: RuleProfile): CheckedNow {
-  const { road: _road, laser, design, ...check } = inputs;
+  const { road: _road, plan: _plan, laser, design, ...check } = inputs;
   const results: GradeCheckResults = { report: attempt('', () => checkEntrance(check, rules)) };
   if (laser) results.laser = attempt('laser', () => laserSetup(laser));
   if (!design) return { results };

@@ -11,16 +11,3 @@ const yearMessage = 'must be in a year between 1900 and 2999';
 export const dayInput = (message: string) => z.iso.date(message).refine(plausibleYear, yearMessage);
 export const momentInput = (message: string) =>
   z.iso.datetime({ offset: true, message }).refine(plausibleYear, yearMessage);
-
-/** A day as people read it on screen: "Dec 2, 2026". Plain dates (YYYY-MM-DD) are read as that day wherever one is. */
-export function dateInWords(value: string | Date | null | undefined): string {
-  if (!value) return '—';
-  const plain = typeof value === 'string' && value.length === 10;
-  const at = plain ? new Date(`${value}T12:00:00Z`) : new Date(value);
-  return at.toLocaleDateString('en-US', {
-    month: 'short',
-    day: 'numeric',
-    year: 'numeric',
-    ...(plain ? { timeZone: 'UTC' } : {}),
-  });
-}

@@ -19,6 +19,8 @@ export const eventKindLabels: Record<string, string> = {
   'inspector-link-sent': 'Inspector’s link sent',
   'inspector-link-revoked': 'Inspector’s link withdrawn',
   'inspection-passed': 'Inspection passed',
+  'permit-packet': 'Permit packet filed',
+  'decision-letter': 'Road authority’s letter added',
 };
 
 export const eventKindLabel = (kind: string) => eventKindLabels[kind] ?? 'Update';

@@ -7,7 +7,9 @@ import { transitionActions, type TransitionAction } from './transitions';
 export interface FieldText {
   label: string;
   hint?: string;
-  control: 'text' | 'textarea' | 'date' | 'datetime';
+  control: 'text' | 'textarea' | 'date' | 'datetime' | 'choice';
+  /** For a choice: the values and their words, the first the one the form starts from. */
+  options?: readonly (readonly [string, string])[];
   /** The request's own value to start from, when the change corrects or repeats it. */
   prefill?: 'permitReference' | 'permitConditions';
 }
@@ -16,6 +18,10 @@ export const fieldText = z.registry<FieldText>();
 readLabelsFrom(fieldText);
 
 export const expectedVersionSchema = z.number({ error: 'must be the version number you loaded' }).int().min(1);
+
+/** The paper the permit packet is set on. */
+export const packetPaperSizes = ['letter', 'a4'] as const;
+export type PacketPaperSize = (typeof packetPaperSizes)[number];
 
 const text = (max: number) => z.string().trim().max(max, `must be at most ${max} characters`);
 const said = (max: number, missing: string) =>
@@ -86,7 +92,21 @@ export const transitionInputs = {
     note: note('Why it is called off (optional)'),
   }),
   'mark-checked': input('mark-checked', {}),
-  'file-permit': input('file-permit', { permitReference: permitReference(true) }),
+  'file-permit': input('file-permit', {
+    permitReference: permitReference(true),
+    paperSize: z
+      .enum(packetPaperSizes, { error: 'must be letter or a4' })
+      .default('letter')
+      .register(fieldText, {
+        label: 'Permit packet paper size',
+        hint: 'The packet filed with the application is stored with the request.',
+        control: 'choice',
+        options: [
+          ['letter', 'Letter'],
+          ['a4', 'A4'],
+        ],
+      }),
+  }),
   'record-granted': input('record-granted', {
     permitReference: permitReference(false),
     permitDecidedOn: decidedOn(),

@@ -18,6 +18,9 @@ export const requestKeys = {
 /** GET /api/requests/:id/events */
 export const eventKeys = { ofRequest: (requestId: string) => ['events', requestId] as const };
 
+/** GET /api/requests/:id/documents */
+export const documentKeys = { ofRequest: (requestId: string) => ['documents', requestId] as const };
+
 /** GET /api/requests/:id/messages */
 export const messageKeys = { ofRequest: (requestId: string) => ['messages', requestId] as const };
 
@@ -116,4 +119,6 @@ export const quoteChangeKeys = (requestId: string) => [
   eventKeys.ofRequest(requestId),
   // An accepted quote makes the deposit due.
   paymentKeys.ofRequest(requestId),
+  // Filing the permit stores the packet it sent.
+  documentKeys.ofRequest(requestId),
 ];

@@ -29,6 +29,7 @@ const sheetKeys: (keyof FieldSheetView)[] = [
   'culvert',
   'apron',
   'design',
+  'plan',
   'earthwork',
   'cautions',
 ];
@@ -51,6 +52,9 @@ describe('a check saved before the format version', () => {
     expect(Object.keys(sheet).sort()).toEqual([...sheetKeys].sort());
     expect(sheet.check).toMatchObject({ number: row.number, summary: row.summary, passed: row.passed });
     expect(sheet.design?.points).toEqual(readGradeCheckRecord(row).results.report.profile.points);
+    // A check saved before the plan's extras still has its plan view, with the notes saying what it lacks.
+    expect(sheet.plan?.rightOfWayFt).toBeUndefined();
+    expect(sheet.plan?.drivewayLengthFt).toBeGreaterThan(0);
   });
 });
 

@@ -52,8 +52,18 @@ export async function demoCheckInputs(rules: RuleProfile, site: DemoSite) {
       designFlowCfs: 6,
     },
     sight: { speedMph: site.speedMph, measuredLeftFt: site.sightLeftFt, measuredRightFt: site.sightRightFt },
-    geometry: { widthFt: 12 },
+    geometry: { widthFt: 12, flareRadiusFt: 10, distanceToIntersectionFt: 420, distanceToPropertyLineFt: 18 },
     road: { gradePercent: site.roadGradePercent, edgeElevationFt: 100 },
+    // What the plan view and the permit packet draw: an invented site's right-of-way, bearing and neighbours.
+    plan: {
+      rightOfWayFt: 16.5,
+      roadWidthFt: 22,
+      bearingDeg: 28,
+      intersectionSide: 'left',
+      intersectionName: 'Hollis Cross Road',
+      propertyLineSide: 'right',
+      culvertMaterial: 'corrugated plastic',
+    },
     laser: {
       originElevationFt: 100,
       roadGradePercent: site.roadGradePercent,

@@ -1,6 +1,7 @@
 import { eq } from 'drizzle-orm';
 import { elevationAt, type CutFillAtStation } from '@shared/engine';
 import { buildChartInputFor } from '@shared/charts/chart-input';
+import { planInputFor } from '@shared/charts/plan-input';
 import { headwaterWords } from '@shared/charts/check-words';
 import { roadOwnerText } from '@shared/requests/choices';
 import { crewStages } from '@shared/workflow/statuses';
@@ -153,6 +154,7 @@ async function sheetFor(db: Db, row: RequestRow) {
           chart: buildChartInputFor(check.record.inputs, check.record.results, check.ruleProfile, check.existingPoints),
         }
       : null,
+    plan: check ? planInputFor(check.record.inputs, check.record.results.report, { roadName: row.roadName }) : null,
     earthwork: earthworkEstimate(check),
     cautions: fieldCautions,
   } satisfies FieldSheetView;

@@ -26,7 +26,7 @@ export interface ReportData {
 const dateText = (d: Date | null) => formatDay(d, { missing: '-' });
 
 /** What was measured at the site, in one paragraph, so the report stands on its own. */
-function siteWords(check: GradeCheck): string {
+export function siteWords(check: Pick<GradeCheck, 'inputs' | 'results'>): string {
   const { road, sight, geometry, culvert } = check.inputs;
   const parts: string[] = [
     `Road edge at station ${formatStation(check.inputs.roadEdgeStationFt ?? check.results.report.profile.points[0].stationFt)}`,

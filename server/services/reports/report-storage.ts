@@ -11,11 +11,20 @@ export async function storeReport(ctx: Pick<AppContext, 's3' | 'env'>, key: stri
   );
 }
 
+const extensions: Record<string, string> = {
+  'application/pdf': 'pdf',
+  'image/jpeg': 'jpg',
+  'image/png': 'png',
+  'image/webp': 'webp',
+  'image/heic': 'heic',
+};
+
 export function downloadUrl(
   ctx: Pick<AppContext, 's3' | 'env'>,
   doc: { objectKey: string; title: string; contentType: string },
 ) {
-  const fileName = `${doc.title.replace(/[^\w.-]+/g, '-')}.pdf`;
+  const extension = extensions[doc.contentType] ?? 'pdf';
+  const fileName = `${doc.title.replace(/[^\w.-]+/g, '-')}.${extension}`;
   return getSignedUrl(
     ctx.s3,
     new GetObjectCommand({

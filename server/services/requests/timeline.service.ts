@@ -19,6 +19,7 @@ export async function listEvents(db: DbOrTx, user: SessionUser, requestId: strin
       toStatus: requestEvents.toStatus,
       note: requestEvents.note,
       internal: requestEvents.internal,
+      documentId: requestEvents.documentId,
       createdAt: requestEvents.createdAt,
       actorName: users.name,
       actorRole: users.role,
@@ -27,5 +28,8 @@ export async function listEvents(db: DbOrTx, user: SessionUser, requestId: strin
     .leftJoin(users, eq(users.id, requestEvents.actorId))
     .where(where)
     .orderBy(asc(requestEvents.createdAt), asc(requestEvents.id));
-  return rows.map(({ internal, ...event }): EventView<Date> => (office ? { ...event, internal } : event));
+  // The document an event names is the office's to open (the owner sees only what the office shares).
+  return rows.map(({ internal, documentId, ...event }): EventView<Date> =>
+    office ? { ...event, internal, documentId } : event,
+  );
 }

@@ -4,12 +4,16 @@ import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx, Tx } from '../../db/client';
 import type { requests } from '../../db/schema';
 import type { AppError } from '../../lib/errors';
+import type { AppContext } from '../../config/context';
 import type { RequestRow } from '../requests/request-access';
 
 import type { Audience } from '../email/transition-emails';
 import type { CalendarInvite } from '../email/calendar-invite';
 
 export type { Audience };
+
+/** What a status change needs from the app: the database, storage for what an action files, and the e-mail settings. */
+export type TransitionContext = Pick<AppContext, 'db' | 'env' | 's3'>;
 
 /** What one action adds to its status change; the door writes it, nothing is handed back by mutation. */
 export interface ActionResult {
@@ -38,6 +42,8 @@ export interface ActionStep<A extends TransitionAction> {
   /** The office's time zone, for times said in words. */
   timeZone: string;
   via: TransitionVia;
+  /** What the action's `prepare` made before the transaction (a stored file), if it has one. */
+  prepared?: unknown;
 }
 
 /**
@@ -54,6 +60,15 @@ export interface ActionDef<A extends TransitionAction> {
     /** The owner's e-mail thanks them and confirms receipt rather than announcing a new status. */
     ownerReceipt?: boolean;
   };
+  /**
+   * Slow work with another service (drawing and storing a PDF) before the transaction opens, so no row is locked
+   * across it; what it returns reaches `run` as `prepared`. `discard` undoes it when the change does not happen.
+   */
+  prepare?: (
+    ctx: TransitionContext,
+    step: { actor: SessionUser; requestId: string; body: TransitionBodyOf<A> },
+  ) => Promise<unknown>;
+  discard?: (ctx: TransitionContext, prepared: unknown) => Promise<void>;
   /** Runs inside the change's transaction after the row is locked and the move is allowed. */
   run?: (step: ActionStep<A>) => Promise<ActionResult | void>;
   /** Turns a refusal (404 or 409) into one that says more, e.g. who took the job first. */

@@ -3,7 +3,6 @@ import { statusText } from '@shared/workflow/statuses';
 import { actionLabel, findTransition, type Transition, type TransitionAction } from '@shared/workflow/transitions';
 import type { TransitionBody, TransitionBodyOf } from '@shared/workflow/transition-inputs';
 import type { SessionUser } from '../../lib/session-user';
-import type { AppContext } from '../../config/context';
 import type { Tx } from '../../db/client';
 import { requestEvents, requests, users } from '../../db/schema';
 import { conflict, forbidden } from '../../lib/errors';
@@ -11,11 +10,10 @@ import { emailsForTransition } from '../email/transition-emails';
 import { enqueueEmails } from '../email/outbox';
 import { calendarAttachment } from '../email/calendar-invite';
 import { loadVisibleRequest, type RequestRow } from '../requests/request-access';
-import type { ActionDef, ActionResult, TransitionVia } from './action-def';
+import type { ActionDef, ActionResult, TransitionVia, TransitionContext } from './action-def';
 import { actionDefs } from './registry';
 
-/** What a status change needs from the app: the database, and the office's address and origin for its e-mails. */
-export type TransitionContext = Pick<AppContext, 'db' | 'env'>;
+export type { TransitionContext };
 
 /**
  * The status change itself, in a single transaction: lock the row, check the action is allowed from its current
@@ -28,6 +26,7 @@ export async function applyTransition(
   requestId: string,
   body: TransitionBody,
   via: TransitionVia = {},
+  prepared?: unknown,
 ) {
   return ctx.db.transaction(async (tx) => {
     const row = await loadVisibleRequest(tx, actor, requestId, { forUpdate: true });
@@ -54,6 +53,7 @@ export async function applyTransition(
         now,
         timeZone: ctx.env.OFFICE_TIME_ZONE,
         via,
+        prepared,
       })) ?? {};
     const [updated] = await tx
       .update(requests)

@@ -1,11 +1,12 @@
 import { statusText, type RequestStatus } from '@shared/workflow/statuses';
 import { actionLabel, allowedTransitions } from '@shared/workflow/transitions';
-import type { TransitionBody } from '@shared/workflow/transition-inputs';
+import type { TransitionBody, TransitionBodyOf } from '@shared/workflow/transition-inputs';
+import type { TransitionAction } from '@shared/workflow/transitions';
 import type { SessionUser } from '../../lib/session-user';
 import { AppError, conflict } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
 import { applyTransition, type TransitionContext } from './apply-transition';
-import type { TransitionVia } from './action-def';
+import type { ActionDef, TransitionVia } from './action-def';
 import { actionDefs } from './registry';
 
 /**
@@ -28,7 +29,14 @@ export async function changeStatus(
         `This request is "${statusText[current.status].label}"; "${actionLabel(body.action)}" is not possible from there for you.`,
       );
     }
-    return await applyTransition(ctx, actor, requestId, body, via);
+    const def = actionDefs[body.action] as ActionDef<TransitionAction>;
+    const prepared = await def.prepare?.(ctx, { actor, requestId, body: body as TransitionBodyOf<TransitionAction> });
+    try {
+      return await applyTransition(ctx, actor, requestId, body, via, prepared);
+    } catch (error) {
+      if (prepared !== undefined) await def.discard?.(ctx, prepared);
+      throw error;
+    }
   } catch (error) {
     if (!(error instanceof AppError) || (error.status !== 404 && error.status !== 409)) throw error;
     const explained = await actionDefs[body.action].explainRefusal?.(ctx.db, requestId, actor);

@@ -10,6 +10,15 @@ import type { ActionDef, ActionStep } from './action-def';
 import { lastAsBuiltSet } from './as-built-state';
 import { explainPaymentWait, requirePaid } from './payment-waits';
 import { claimLinkOutcome, jobNeedsInspection, latestInspection, recordInspection } from './inspection-state';
+import {
+  discardStoredPacket,
+  packetForFiling,
+  recordFiledPacket,
+  type MissingPacket,
+  type StoredPacket,
+} from '../permits/permit-packet.service';
+
+type FilingPacket = StoredPacket | MissingPacket;
 
 async function attachedGradeCheck(tx: Tx, requestId: string) {
   const [check] = await tx
@@ -114,10 +123,14 @@ export const markChecked: ActionDef<'mark-checked'> = {
   },
 };
 
+/** The packet sent with the application is stored first, then recorded with the filing and linked from the timeline. */
 export const filePermit: ActionDef<'file-permit'> = {
   emails: { to: ['applicant'] },
-  run: async ({ tx, row, body }) => {
+  prepare: (ctx, { actor, requestId, body }) => packetForFiling(ctx, actor, requestId, body),
+  discard: (ctx, prepared) => discardStoredPacket(ctx, prepared as FilingPacket),
+  run: async ({ tx, row, body, actor, prepared }) => {
     await requirePaid(tx, row.id, 'file-permit');
+    if (prepared) await recordFiledPacket(tx, actor, row.id, body.permitReference, prepared as FilingPacket);
     return { patch: { permitReference: body.permitReference } };
   },
   explainRefusal: explainPaymentWait('file-permit', 'checked'),

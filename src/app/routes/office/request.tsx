@@ -14,6 +14,7 @@ import { OfficePayments } from '@/features/payments/components/office-payments';
 import { useRequestPayments } from '@/features/payments/api/get-request-payments';
 import { InspectionPanel } from '@/features/inspections/components/inspection-panel';
 import { CrewPhotos } from '@/features/photos/components/crew-photos';
+import { PermitPanel } from '@/features/permits/components/permit-panel';
 import { PhotoGallery } from '@/features/photos/components/photo-gallery';
 import { QuoteBuilder } from '@/features/quotes/components/quote-builder';
 import { useOfficeRequest } from '@/features/requests/api/get-request';
@@ -55,6 +56,8 @@ function OfficeRequestPage({ id }: { id: string }) {
                 requestId={id}
                 canRefund={me.role === 'admin' && ['withdrawn', 'declined', 'permit_refused'].includes(request.status)}
               />
+            permit: () => (
+              <PermitPanel requestId={id} status={request.status} filed={Boolean(request.permitReference)} />
             ),
           }}
         />

@@ -4,6 +4,7 @@ import { eventKindLabel } from '@shared/workflow/event-kinds';
 import { roleLabels, statusText } from '@shared/workflow/statuses';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
 import { useEvents } from '../api/get-events';
+import { useOpenEventDocument } from '../api/open-event-document';
 
 const stamp = (iso: string) => formatMoment(iso);
 
@@ -28,6 +29,7 @@ interface EventListProps {
 /** Everything that happened to the request that its reader may know, oldest first. */
 export function EventList({ requestId, office = false, label = 'Timeline' }: EventListProps) {
   const { data, error, isPending } = useEvents(requestId);
+  const openDocument = useOpenEventDocument(requestId);
   if (isPending) return <Loading />;
   if (error) return <ErrorNotice error={error} />;
   if (data.events.length === 0)
@@ -55,8 +57,22 @@ export function EventList({ requestId, office = false, label = 'Timeline' }: Eve
                 : ''}
           </p>
           {event.note && <p className="mt-1 whitespace-pre-wrap text-sm text-stone-800">{event.note}</p>}
+          {office && event.documentId && (
+            <button
+              type="button"
+              className="mt-1 text-sm font-semibold text-pine-700 underline"
+              onClick={() => event.documentId && openDocument.mutate(event.documentId)}
+            >
+              Open the document
+            </button>
+          )}
         </li>
       ))}
+      {openDocument.error && (
+        <li>
+          <ErrorNotice error={openDocument.error} />
+        </li>
+      )}
     </ol>
   );
 }

@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import { documentKeys } from '@/lib/query-keys';
 
 export interface RequestDocument {
   id: string;
@@ -21,7 +22,7 @@ export const getDocuments = (requestId: string) =>
 // Download links expire after a few minutes; refetching a little sooner keeps the ones on screen usable.
 export const getDocumentsQueryOptions = (requestId: string) =>
   queryOptions({
-    queryKey: ['documents', requestId],
+    queryKey: documentKeys.ofRequest(requestId),
     queryFn: () => getDocuments(requestId),
     staleTime: 60_000,
     refetchInterval: 240_000,

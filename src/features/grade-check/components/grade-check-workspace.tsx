@@ -22,6 +22,8 @@ import { CulvertFields } from './culvert-fields';
 import { GeometryFields } from './geometry-fields';
 import { LaserPanel } from './laser-panel';
 import { LiveResult } from './live-result';
+import { PlanFields } from './plan-fields';
+import { PlanViewPanel } from './plan-view-panel';
 import { ProposalPanel } from './proposal-panel';
 import { RoadFields } from './road-fields';
 import { StakesEditor } from './stakes-editor';
@@ -169,6 +171,9 @@ export function GradeCheckWorkspace({
         <Panel title="Geometry">
           <GeometryFields geometry={survey.geometry} errors={errors} onChange={update('geometry')} />
         </Panel>
+        <Panel title="Plan view extras">
+          <PlanFields plan={survey.plan} errors={errors} onChange={update('plan')} />
+        </Panel>
         <Panel title="Entrance edges">
           <ApronFields apron={survey.apron} errors={errors} onChange={update('apron')} />
         </Panel>
@@ -199,6 +204,11 @@ export function GradeCheckWorkspace({
             <LiveResult live={live} rules={rules} />
           )}
         </Panel>
+        {rules && live.inputs && live.results && (
+          <Panel title="Plan view">
+            <PlanViewPanel inputs={live.inputs} results={live.results} roadName={request.roadName} />
+          </Panel>
+        )}
         {rules && (
           <Panel title="Compliant profile">
             <ProposalPanel

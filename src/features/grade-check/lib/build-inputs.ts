@@ -145,6 +145,23 @@ function readCulvert(
   return culvert as NonNullable<CheckEntranceInput['culvert']>;
 }
 
+/** The plan view's extras; left out when none is given, so a check without them stores as it always did. */
+function readPlan(p: SurveyState['plan'], errors: FieldErrors): GradeCheckInputsInput['plan'] {
+  const plan = {
+    rightOfWayFt: readNumber(p.rightOfWayFt, 'plan.rightOfWayFt', errors),
+    roadWidthFt: readNumber(p.roadWidthFt, 'plan.roadWidthFt', errors),
+    bearingDeg: readNumber(p.bearingDeg, 'plan.bearingDeg', errors),
+    intersectionSide: p.intersectionSide || undefined,
+    intersectionName: p.intersectionName.trim() || undefined,
+    propertyLineSide: p.propertyLineSide || undefined,
+    culvertStationFt: p.culvertStation.trim()
+      ? readStation(p.culvertStation, 'plan.culvertStationFt', errors)
+      : undefined,
+    culvertMaterial: (p.culvertMaterial || undefined) as NonNullable<GradeCheckInputsInput['plan']>['culvertMaterial'],
+  };
+  return Object.values(plan).some((v) => v !== undefined) ? plan : undefined;
+}
+
 /**
  * Turns the typed survey into the check's inputs. Errors are keyed by the same field paths the engine and the
  * server use, so one map marks the cells whoever found the problem. Inputs come back whenever the centreline and
@@ -195,6 +212,7 @@ export function buildInputs(
       ? []
       : [{ label: k.label.trim() || `Stake ${i + 1}`, offsetFt, distanceFt, rodReadingFt }];
   });
+  const plan = readPlan(s.plan, errors);
   const target = readNumber(s.design.targetEndElevationFt, 'design.targetEndElevationFt', errors);
   const truckCuYd = readNumber(s.design.truckCuYd, 'design.haul.truckCuYd', errors, true) ?? 10;
   if (!surveyed || roadEdgeStationFt === undefined || roadGrade === undefined || receiverOffsetFt === undefined)
@@ -222,6 +240,7 @@ export function buildInputs(
     road: edge === undefined ? undefined : { gradePercent: signedRoadGrade, edgeElevationFt: edge },
     roadSide,
     apron,
+    plan,
     laser,
     design:
       edge === undefined

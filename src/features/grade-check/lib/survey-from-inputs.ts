@@ -83,6 +83,16 @@ export function surveyFromInputs(inputs: GradeCheckInputsInput): SurveyState {
       distanceToIntersectionFt: str(inputs.geometry?.distanceToIntersectionFt),
       distanceToPropertyLineFt: str(inputs.geometry?.distanceToPropertyLineFt),
     },
+    plan: {
+      rightOfWayFt: str(inputs.plan?.rightOfWayFt),
+      roadWidthFt: str(inputs.plan?.roadWidthFt),
+      bearingDeg: str(inputs.plan?.bearingDeg),
+      intersectionSide: inputs.plan?.intersectionSide ?? '',
+      intersectionName: inputs.plan?.intersectionName ?? '',
+      propertyLineSide: inputs.plan?.propertyLineSide ?? '',
+      culvertStation: inputs.plan?.culvertStationFt === undefined ? '' : formatStation(inputs.plan.culvertStationFt),
+      culvertMaterial: inputs.plan?.culvertMaterial ?? '',
+    },
     laser: {
       receiverOffsetFt: str(inputs.laser?.receiverOffsetFt ?? 6),
       stakes: (inputs.laser?.stakes ?? []).map((k) => ({

@@ -62,6 +62,17 @@ export interface SurveyState {
     distanceToIntersectionFt: string;
     distanceToPropertyLineFt: string;
   };
+  /** What only the plan view and the permit packet read; '' for a side or material not given. */
+  plan: {
+    rightOfWayFt: string;
+    roadWidthFt: string;
+    bearingDeg: string;
+    intersectionSide: '' | 'left' | 'right';
+    intersectionName: string;
+    propertyLineSide: '' | 'left' | 'right';
+    culvertStation: string;
+    culvertMaterial: string;
+  };
   laser: { receiverOffsetFt: string; stakes: StakeRow[] };
   apron: { checked: boolean; drivewayCrossSlopePercent: string; warpLengthFt: string; stakeIntervalFt: string };
   design: {
@@ -123,6 +134,16 @@ export function initialSurvey(speedMph?: number | null): SurveyState {
       flareRadiusFt: '',
       distanceToIntersectionFt: '',
       distanceToPropertyLineFt: '',
+    },
+    plan: {
+      rightOfWayFt: '',
+      roadWidthFt: '',
+      bearingDeg: '',
+      intersectionSide: '',
+      intersectionName: '',
+      propertyLineSide: '',
+      culvertStation: '',
+      culvertMaterial: '',
     },
     laser: { receiverOffsetFt: '6', stakes: [] },
     apron: { checked: false, drivewayCrossSlopePercent: '0', warpLengthFt: '', stakeIntervalFt: '5' },

@@ -1,5 +1,5 @@
 import type { InspectionView } from '@shared/contracts/inspections';
-import { dateInWords } from '@shared/workflow/dates';
+import { formatDay } from '@shared/format/dates';
 
 /** The road authority's inspections, newest first: passed, or failed with what must be fixed. */
 export function InspectionList({ inspections }: { inspections: InspectionView[] }) {
@@ -12,7 +12,7 @@ export function InspectionList({ inspections }: { inspections: InspectionView[] 
           className={`rounded-md border-l-4 bg-white p-3 text-sm ${i.passed ? 'border-pine-600' : 'border-clay'}`}
         >
           <p className="font-semibold text-stone-900">
-            {i.passed ? 'Passed' : 'Failed'} · {i.inspectorName} · {dateInWords(i.createdAt)}
+            {i.passed ? 'Passed' : 'Failed'} · {i.inspectorName} · {formatDay(i.createdAt)}
           </p>
           {i.items.length > 0 && (
             <>

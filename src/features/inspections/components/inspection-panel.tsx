@@ -1,5 +1,5 @@
 import { inspectorLinkStateLabels } from '@shared/contracts/inspections';
-import { dateInWords } from '@shared/workflow/dates';
+import { formatDay } from '@shared/format/dates';
 import type { RequestStatus } from '@shared/workflow/statuses';
 import { Button } from '@/components/ui/button';
 import { ErrorNotice, Loading, Notice } from '@/components/ui/notice';
@@ -53,9 +53,9 @@ export function InspectionPanel({ requestId, status, office = false }: Inspectio
                 {data.links.map((link) => (
                   <li key={link.id} className="flex flex-wrap items-center justify-between gap-2">
                     <span className="min-w-0 break-words">
-                      {link.inspectorName} ({link.inspectorEmail}) · sent {dateInWords(link.createdAt)} · until{' '}
-                      {dateInWords(link.expiresAt)} · <strong>{inspectorLinkStateLabels[link.state]}</strong>
-                      {link.lastOpenedAt ? ` · last opened ${dateInWords(link.lastOpenedAt)}` : ' · not opened yet'}
+                      {link.inspectorName} ({link.inspectorEmail}) · sent {formatDay(link.createdAt)} · until{' '}
+                      {formatDay(link.expiresAt)} · <strong>{inspectorLinkStateLabels[link.state]}</strong>
+                      {link.lastOpenedAt ? ` · last opened ${formatDay(link.lastOpenedAt)}` : ' · not opened yet'}
                     </span>
                     {link.state === 'open' && (
                       <Button variant="secondary" disabled={revoke.isPending} onClick={() => revoke.mutate(link.id)}>

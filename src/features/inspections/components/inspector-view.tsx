@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { formatStation } from '@shared/engine';
 import type { InspectorPageView } from '@shared/contracts/inspections';
-import { dateInWords } from '@shared/workflow/dates';
+import { formatDay } from '@shared/format/dates';
 import { Notice } from '@/components/ui/notice';
 import { Panel } from '@/components/ui/panel';
 import { InspectionList } from './inspection-list';
@@ -38,7 +38,7 @@ export function InspectorView({ page, token, photos }: { page: InspectorPageView
         <h1 className="break-words text-2xl font-bold text-pine-900">{request.siteAddress}</h1>
         <p className="text-stone-600">
           {request.roadName ? `On ${request.roadName} · ` : ''}Our reference {request.reference} · {request.statusLabel}
-          {request.builtAt ? ` · built ${dateInWords(request.builtAt)}` : ''}
+          {request.builtAt ? ` · built ${formatDay(request.builtAt)}` : ''}
         </p>
       </header>
 
@@ -47,8 +47,8 @@ export function InspectorView({ page, token, photos }: { page: InspectorPageView
           rows={[
             ['Road authority', page.authority ? `${page.authority.authority} (${page.authority.name})` : '—'],
             ['Permit number', permit.reference ?? '—'],
-            ['Granted on', dateInWords(permit.decidedOn)],
-            ['Expires on', dateInWords(permit.expiresOn)],
+            ['Granted on', formatDay(permit.decidedOn)],
+            ['Expires on', formatDay(permit.expiresOn)],
             [
               'Conditions',
               permit.conditions ? <span className="whitespace-pre-line">{permit.conditions}</span> : 'None recorded',
@@ -77,7 +77,7 @@ export function InspectorView({ page, token, photos }: { page: InspectorPageView
         {page.asBuilt ? (
           <>
             <p className={`mb-2 text-sm font-semibold ${verdictTone[page.asBuilt.status]}`}>
-              Overall: {verdictWords[page.asBuilt.status]} · readings taken {dateInWords(page.asBuilt.takenAt)}
+              Overall: {verdictWords[page.asBuilt.status]} · readings taken {formatDay(page.asBuilt.takenAt)}
             </p>
             <div className="overflow-x-auto">
               <table className="w-full min-w-0 text-left text-sm">
@@ -137,7 +137,7 @@ export function InspectorView({ page, token, photos }: { page: InspectorPageView
           <p key={c}>{c}</p>
         ))}
         <p>
-          This link opens this entrance only and works until {dateInWords(page.link.expiresAt)}. Questions:{' '}
+          This link opens this entrance only and works until {formatDay(page.link.expiresAt)}. Questions:{' '}
           <a className="underline" href={`mailto:${page.officeEmail}`}>
             {page.officeEmail}
           </a>

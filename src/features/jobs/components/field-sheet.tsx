@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { ErrorNotice, Loading } from '@/components/ui/notice';
+import { PlanView } from '@/components/ui/plan-view';
 import { ProfileChart } from '@/components/ui/profile-chart';
 import { useFieldSheet } from '../api/get-field-sheet';
 import { EarthworkLine } from './earthwork-line';
@@ -107,6 +108,12 @@ export function FieldSheet({ id }: { id: string }) {
           </p>
         )}
       </Section>
+
+      {s.plan && (
+        <Section title="Plan of the entrance">
+          <PlanView plan={s.plan} className="print:[&>svg]:h-[2.2in] print:[&>svg]:w-auto" />
+        </Section>
+      )}
 
       <Section title="Laser">
         {s.laser ? <SheetLaser laser={s.laser} /> : <p>No laser setup in the saved check.</p>}

@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { formFieldsOf, type FormField } from '@shared/workflow/transition-inputs';
 import type { Transition } from '@shared/workflow/transitions';
 import { Button } from '@/components/ui/button';
-import { Field, TextArea, TextInput } from '@/components/ui/field';
+import { Field, SelectInput, TextArea, TextInput } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
 import type { OfficeRequestView as OfficeRequest } from '@shared/contracts/requests';
@@ -10,7 +10,7 @@ import type { TransitionBody } from '@shared/workflow/transition-inputs';
 
 /** The datetime-local control speaks local time without a zone; the API wants an instant. */
 const toInstant = (local: string) => (local ? new Date(local).toISOString() : undefined);
-const inputType = { text: 'text', date: 'date', datetime: 'datetime-local' } as const;
+const inputType = { text: 'text', date: 'date', datetime: 'datetime-local', choice: 'text' } as const;
 
 interface ActionFormProps {
   transition: Transition;
@@ -24,7 +24,16 @@ interface ActionFormProps {
 }
 
 function startValues(fields: FormField[], request: OfficeRequest) {
-  return Object.fromEntries(fields.map((f) => [f.name, f.text.prefill ? (request[f.text.prefill] ?? '') : '']));
+  return Object.fromEntries(
+    fields.map((f) => [
+      f.name,
+      f.text.prefill
+        ? (request[f.text.prefill] ?? '')
+        : f.text.control === 'choice'
+          ? (f.text.options?.[0]?.[0] ?? '')
+          : '',
+    ]),
+  );
 }
 
 /** Asks for exactly what the chosen action takes: its fields, labels and rules come from the action's shared input. */
@@ -65,7 +74,15 @@ export function ActionForm({ transition, request, caution, pending, error, onSub
         return (
           <Field key={field.name} label={field.text.label} hint={field.text.hint} error={errors[field.name]}>
             {({ id, describedBy, invalid }) =>
-              field.text.control === 'textarea' ? (
+              field.text.control === 'choice' ? (
+                <SelectInput id={id} {...props} aria-describedby={describedBy} aria-invalid={invalid}>
+                  {(field.text.options ?? []).map(([value, words]) => (
+                    <option key={value} value={value}>
+                      {words}
+                    </option>
+                  ))}
+                </SelectInput>
+              ) : field.text.control === 'textarea' ? (
                 <TextArea id={id} {...props} aria-describedby={describedBy} aria-invalid={invalid} />
               ) : (
                 <TextInput

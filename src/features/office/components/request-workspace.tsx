@@ -23,6 +23,8 @@ interface WorkspaceProps {
   sections: Record<'application' | 'quote' | 'photos' | 'messages' | 'history', () => ReactNode> & {
     /** The money side (agreed price, deposit, balance), beside the next step. */
     money?: () => ReactNode;
+    /** The permit packet and the authority's letter, once the request has a check to file. */
+    permit?: () => ReactNode;
   };
   /** What the screen knows the office should weigh before a move, such as failing as-built readings. */
   cautions?: Cautions;
@@ -84,6 +86,7 @@ export function RequestWorkspace({ request, me, sections, cautions }: WorkspaceP
             <ActionPanel request={request} role={me.role} cautions={cautions} />
           </Panel>
           {sections.money && <Panel title="Money">{sections.money()}</Panel>}
+          {sections.permit && <Panel title="Permit">{sections.permit()}</Panel>}
         </aside>
       </div>
     </>

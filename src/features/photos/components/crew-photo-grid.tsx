@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { crewPhotoKindLabels, type CrewPhotoView } from '@shared/contracts/crew-photos';
-import { dateInWords } from '@shared/workflow/dates';
+import { formatDay } from '@shared/format/dates';
 import { UnshowablePhoto } from '@/components/ui/unshowable-photo';
 
 type ShownPhoto = Omit<CrewPhotoView, 'takenBy'> & { url: string; takenBy?: string };
@@ -28,7 +28,7 @@ function CrewPhotoTile({ photo, onRemove }: { photo: ShownPhoto; onRemove?: () =
       <p className="text-sm font-semibold text-pine-900">{crewPhotoKindLabels[photo.kind]}</p>
       {photo.caption && <p className="break-words text-sm text-stone-700">{photo.caption}</p>}
       <p className="text-xs text-stone-500">
-        {dateInWords(photo.createdAt)}
+        {formatDay(photo.createdAt)}
         {photo.takenBy ? ` · ${photo.takenBy}` : ''}
         {where ? ` · taken at ${where}` : ' · no position recorded'}
       </p>

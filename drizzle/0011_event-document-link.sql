@@ -1,0 +1,2 @@
+ALTER TABLE "request_events" ADD COLUMN "document_id" uuid;--> statement-breakpoint
+ALTER TABLE "request_events" ADD CONSTRAINT "request_events_document_id_documents_id_fk" FOREIGN KEY ("document_id") REFERENCES "public"."documents"("id") ON DELETE no action ON UPDATE no action;
