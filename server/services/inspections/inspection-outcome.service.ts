@@ -10,7 +10,7 @@ import { changeStatus } from '../transitions/change-status';
 import { claimLinkOutcome, recordInspection } from '../transitions/inspection-state';
 import type { InspectorLinkRow } from './inspector-links.service';
 
-type OutcomeContext = Pick<AppContext, 'db' | 'env'>;
+type OutcomeContext = Pick<AppContext, 'db' | 'env' | 's3'>;
 type Outcome = Required<InspectionOutcomeInput>;
 
 const notBuilt = (status: keyof typeof statusText) =>

@@ -56,6 +56,7 @@ function OfficeRequestPage({ id }: { id: string }) {
                 requestId={id}
                 canRefund={me.role === 'admin' && ['withdrawn', 'declined', 'permit_refused'].includes(request.status)}
               />
+            ),
             permit: () => (
               <PermitPanel requestId={id} status={request.status} filed={Boolean(request.permitReference)} />
             ),

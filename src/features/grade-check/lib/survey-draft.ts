@@ -27,6 +27,7 @@ export function surveyFromDraft(saved: Record<string, unknown>, speedMph?: numbe
         : base.centreline.rows,
     },
     culvert: part('culvert'),
+    plan: part('plan'),
     geometry: part('geometry'),
     laser: {
       ...laser,

@@ -134,7 +134,10 @@ export function AsBuiltEntry({
               rows={rows}
               checks={checks}
               basis={basis}
-              serverFields={fields} onChange={change} onRemove={remove} />
+              serverFields={fields}
+              onChange={change}
+              onRemove={remove}
+            />
             <div className="flex flex-wrap gap-3">
               <Button
                 variant="secondary"

@@ -79,7 +79,8 @@ export function SavedSets({ sets, basis }: { sets: AsBuiltSetView[]; basis: Chec
         return (
           <li key={set.id} className="rounded-lg border-2 border-stone-300 bg-white p-3">
             <p className="flex flex-wrap items-center gap-2 font-semibold">
-              <StatusWords status={set.status} /> {n === 0 ? 'Latest set' : 'Earlier set'} · {countOf(set.readings.length, 'reading')} · {set.crewName} · {formatMoment(set.createdAt)}
+              <StatusWords status={set.status} /> {n === 0 ? 'Latest set' : 'Earlier set'} ·{' '}
+              {countOf(set.readings.length, 'reading')} · {set.crewName} · {formatMoment(set.createdAt)}
             </p>
             {set.replacesSetId && (
               <p className="text-base text-stone-700">
