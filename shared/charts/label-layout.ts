@@ -68,10 +68,18 @@ export class LabelPlacer {
     return { x, y: spot.y - this.fontSize, width, height };
   }
 
-  place(text: string, spots: readonly Spot[], opts: { fill?: string; bold?: boolean } = {}): PlacedLabel | null {
+  place(
+    text: string,
+    spots: readonly Spot[],
+    opts: {
+      fill?: string;
+      bold?: boolean;
+      /** How many whole lines up or down a label may move (14). */ shifts?: number;
+    } = {},
+  ): PlacedLabel | null {
     const line = this.fontSize * 1.35;
     const tries: Spot[] = [...spots];
-    for (let k = 1; k <= 14; k += 1)
+    for (let k = 1; k <= (opts.shifts ?? 14); k += 1)
       for (const spot of spots) tries.push({ ...spot, y: spot.y - k * line }, { ...spot, y: spot.y + k * line });
     for (const spot of tries) {
       const box = this.boxFor(text, spot);

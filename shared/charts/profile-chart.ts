@@ -1,5 +1,6 @@
 import { formatStation } from '../engine/station';
 import { type ChartPoint, cutFillBands, lineAt, niceStep, ticks } from './chart-geometry';
+import { LabelPlacer, type Anchor } from './label-layout';
 
 export interface ProfileChartInput {
   /** The ground as surveyed. */
@@ -59,6 +60,12 @@ export function profileChartSvg(input: ProfileChartInput): string {
     pts.map((p, i) => `${i ? 'L' : 'M'}${n(x(p.stationFt))} ${n(y(p.elevationFt))}`).join(' ');
   const text = (tx: number, ty: number, body: string, extra = '', fill = chartColors.text) =>
     `<text x="${n(tx)}" y="${n(ty)}" font-family="${esc(font)}" font-size="10" fill="${fill}" ${extra}>${esc(body)}</text>`;
+  // Every text takes its room on the chart; labels that find none are left out rather than drawn over another.
+  const placer = new LabelPlacer({ x: 0, y: 0, width, height }, 10);
+  const fixed = (tx: number, ty: number, body: string, anchor: Anchor = 'start') => {
+    placer.reserve(placer.boxFor(body, { x: tx, y: ty, anchor }));
+    return text(tx, ty, body, anchor === 'start' ? '' : `text-anchor="${anchor}"`);
+  };
   const parts: string[] = [
     `<defs><clipPath id="plot-area"><rect x="${pad.left}" y="${pad.top}" width="${width - pad.left - pad.right}" height="${height - pad.top - pad.bottom}"/></clipPath></defs>`,
   ];
@@ -67,24 +74,43 @@ export function profileChartSvg(input: ProfileChartInput): string {
   parts.push(
     `<rect x="${n(x(input.roadEdgeStationFt))}" y="${pad.top}" width="${n(Math.max(0, x(Math.min(landingEnd, maxS)) - x(input.roadEdgeStationFt)))}" height="${height - pad.top - pad.bottom}" fill="${chartColors.landing}"/>`,
   );
-  parts.push(text(x(input.roadEdgeStationFt) + 4, pad.top + 12, `Landing ${input.landing.lengthFt} ft`));
+  const labels: string[] = [];
+  const label = (
+    body: string,
+    spots: { x: number; y: number; anchor: Anchor }[],
+    shifts: number,
+    bold = false,
+    fill?: string,
+  ) => {
+    const placed = placer.place(body, spots, { shifts, bold, fill });
+    if (placed)
+      labels.push(text(placed.textX, placed.textY, body, bold ? 'font-weight="bold"' : '', fill ?? chartColors.text));
+  };
 
   const sStep = niceStep(maxS - minS, 8);
   for (const s of ticks(minS, maxS + 1e-9, sStep)) {
     parts.push(
       `<line x1="${n(x(s))}" y1="${pad.top}" x2="${n(x(s))}" y2="${height - pad.bottom}" stroke="${chartColors.grid}" stroke-width="0.5"/>`,
     );
-    parts.push(text(x(s), height - pad.bottom + 14, formatStation(s), 'text-anchor="middle"'));
+    parts.push(fixed(x(s), height - pad.bottom + 14, formatStation(s), 'middle'));
   }
   const eStep = niceStep(maxE - minE, 5);
   for (const e of ticks(minE, maxE, eStep)) {
     parts.push(
       `<line x1="${pad.left}" y1="${n(y(e))}" x2="${width - pad.right}" y2="${n(y(e))}" stroke="${chartColors.grid}" stroke-width="0.5"/>`,
     );
-    parts.push(text(pad.left - 6, y(e) + 3, n(e), 'text-anchor="end"'));
+    parts.push(fixed(pad.left - 6, y(e) + 3, n(e), 'end'));
   }
-  parts.push(text(pad.left, height - 8, 'Station (ft from the road edge)'));
-  parts.push(text(12, pad.top - 10, 'Elevation (ft)'));
+  parts.push(fixed(pad.left, height - 8, 'Station (ft from the road edge)'));
+  parts.push(fixed(12, pad.top - 10, 'Elevation (ft)'));
+  parts.push(legend(width - pad.right - 250, 10, Boolean(input.design), fixed));
+  // The legend's swatches too, not only its words.
+  placer.reserve({ x: width - pad.right - 250, y: 10, width: 250, height: 12 });
+  label(
+    `Landing ${input.landing.lengthFt} ft`,
+    [{ x: x(input.roadEdgeStationFt) + 4, y: pad.top + 12, anchor: 'start' }],
+    3,
+  );
 
   if (input.design) {
     for (const band of cutFillBands(input.ground, input.design)) {
@@ -113,6 +139,7 @@ export function profileChartSvg(input: ProfileChartInput): string {
     parts.push(`<path d="${path(input.design)}" fill="none" stroke="${chartColors.design}" stroke-width="2"/>`);
 
   const failing = new Set(input.failingStationsFt.map((s) => Math.round(s * 1000)));
+  const grades: { body: string; fails: boolean; mx: number; my: number }[] = [];
   main.forEach((a, i) => {
     const b = main[i + 1];
     if (!b) return;
@@ -122,31 +149,49 @@ export function profileChartSvg(input: ProfileChartInput): string {
       parts.push(
         `<path d="${path([a, b])}" fill="none" stroke="${chartColors.fail}" stroke-width="4" data-failing="${esc(formatStation(a.stationFt))}"/>`,
       );
-    if (x(b.stationFt) - x(a.stationFt) > 26) {
+    // A failing grade is always offered a label; others where the segment is wide enough to tell them apart.
+    if (fails || x(b.stationFt) - x(a.stationFt) > 26) {
       const mx = (x(a.stationFt) + x(b.stationFt)) / 2;
       const my = (y(a.elevationFt) + y(b.elevationFt)) / 2 - 7;
-      parts.push(
-        text(
-          mx,
-          my,
-          `${grade.toFixed(1)}%`,
-          `text-anchor="middle" font-weight="${fails ? 'bold' : 'normal'}"`,
-          fails ? chartColors.fail : chartColors.text,
-        ),
-      );
+      grades.push({ body: `${grade.toFixed(1)}%`, fails, mx, my });
     }
   });
 
   for (const p of input.scrapePoints) {
     const px = x(p.stationFt);
     const py = y(lineAt(main, p.stationFt));
-    parts.push(
-      `<path d="M${n(px)} ${n(py + 3)} L${n(px - 6)} ${n(py + 14)} L${n(px + 6)} ${n(py + 14)} Z" fill="${chartColors.fail}"/>`,
-    );
-    parts.push(text(px, py + 26, p.label, 'text-anchor="middle"'));
+    const mark = `M${n(px)} ${n(py + 3)} L${n(px - 6)} ${n(py + 14)} L${n(px + 6)} ${n(py + 14)} Z`;
+    parts.push(`<path d="${mark}" fill="${chartColors.fail}"/>`);
+    placer.reserve({ x: px - 6, y: py + 3, width: 12, height: 11 });
   }
-
-  parts.push(legend(width - pad.right - 250, 10, Boolean(input.design), text));
+  // The most telling first: failing grades, then the scrape marks' words, then the other grades where room is left.
+  const grade = (g: (typeof grades)[number]) =>
+    label(
+      g.body,
+      [
+        { x: g.mx, y: g.my, anchor: 'middle' },
+        { x: g.mx, y: g.my + 22, anchor: 'middle' },
+      ],
+      1,
+      g.fails,
+      g.fails ? chartColors.fail : chartColors.text,
+    );
+  grades.filter((g) => g.fails).forEach(grade);
+  for (const p of input.scrapePoints) {
+    const px = x(p.stationFt);
+    const py = y(lineAt(main, p.stationFt));
+    label(
+      p.label,
+      [
+        { x: px, y: py + 26, anchor: 'middle' },
+        { x: px, y: py - 8, anchor: 'middle' },
+        { x: px - 8, y: py + 12, anchor: 'end' },
+      ],
+      2,
+    );
+  }
+  grades.filter((g) => !g.fails).forEach(grade);
+  parts.push(...labels);
   return `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${width} ${height}" width="${width}" height="${height}" role="img" aria-label="Profile chart">${parts.join('')}</svg>`;
 }
 

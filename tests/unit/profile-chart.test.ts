@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { ticks } from '@shared/charts/chart-geometry';
 import { haulEstimate, loadsText } from '@shared/charts/cut-fill-table';
+import { overlaps, textWidth } from '@shared/charts/label-layout';
 import { profileChartSvg, type ProfileChartInput } from '@shared/charts/profile-chart';
 
 const chart = (ground: ProfileChartInput['ground'], roadEdgeStationFt = ground[0].stationFt): ProfileChartInput => ({
@@ -60,5 +61,48 @@ describe('the haul estimate beside the cut/fill table', () => {
     const haul = haulEstimate(proposal(9.4e8, 9.4e8), { soil: 'loam', truckCuYd: 10 });
     expect(haul.fillLoads).toBeNull();
     expect(loadsText(haul.fillLoads, 10)).toBe('too many truck loads to count: check the survey');
+  });
+});
+
+/** Every text on the chart as the box the label placer measures it by. */
+function textBoxes(svg: string) {
+  return [...svg.matchAll(/<text x="([-\d.]+)" y="([-\d.]+)"([^>]*)>([^<]*)<\/text>/g)].map(
+    ([, x, y, attributes, body]) => {
+      const anchor = /text-anchor="(\w+)"/.exec(attributes)?.[1];
+      const width = textWidth(body, 10);
+      const left = anchor === 'middle' ? Number(x) - width / 2 : anchor === 'end' ? Number(x) - width : Number(x);
+      return { text: body, x: left, y: Number(y) - 10, width, height: 13 };
+    },
+  );
+}
+
+describe('the profile chart keeps its labels apart', () => {
+  // A bumpy driveway surveyed every 4 ft, with scrape marks low on the chart: grade labels of neighbouring segments,
+  // scrape labels and the station labels under the plot all compete for room.
+  const bumpy = Array.from({ length: 26 }, (_, i) => ({
+    stationFt: i * 4,
+    elevationFt: 100 + (i % 2 === 0 ? 0 : 0.9) - i * 0.1,
+  }));
+  const input: ProfileChartInput = {
+    ...chart(bumpy, 0),
+    failingStationsFt: [8, 12],
+    scrapePoints: [
+      { stationFt: 96, label: 'Scrape risk' },
+      { stationFt: 48, label: 'Scrape risk' },
+    ],
+  };
+
+  it.each([
+    ['at the screen size', {}],
+    ['at a narrow size', { width: 480, height: 260 }],
+  ])('%s: no two texts overlap, and each failing grade keeps its label', (_name, size) => {
+    const svg = profileChartSvg({ ...input, ...size });
+    const boxes = textBoxes(svg);
+    expect(boxes.length).toBeGreaterThan(10);
+    for (let i = 0; i < boxes.length; i += 1)
+      for (let j = i + 1; j < boxes.length; j += 1)
+        expect(overlaps(boxes[i], boxes[j]), `"${boxes[i].text}" overlaps "${boxes[j].text}"`).toBe(false);
+    expect(svg.match(/font-weight="bold"/g)?.length).toBe(2);
+    expect(svg).toContain('Scrape risk');
   });
 });
