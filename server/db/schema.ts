@@ -21,11 +21,12 @@ import {
 } from 'drizzle-orm/pg-core';
 import { requestStatuses, roles, terminalStatuses } from '@shared/workflow/statuses';
 
-/** A file sent with an e-mail; the content is text (a calendar invitation is). */
+/** A file sent with an e-mail: text (a calendar invitation) or, with `encoding: 'base64'`, bytes (a quote's PDF). */
 export interface EmailAttachment {
   filename: string;
   contentType: string;
   content: string;
+  encoding?: 'base64';
 }
 
 const tsvector = customType<{ data: string }>({ dataType: () => 'tsvector' });
@@ -367,7 +368,7 @@ export const emails = pgTable(
     subject: text().notNull(),
     textBody: text().notNull(),
     htmlBody: text().notNull(),
-    /** Files sent with the message (a calendar invitation), kept with the row so a retry sends exactly the same. */
+    /** Files sent with the message (an invitation, a quote's PDF), kept with the row so a retry sends exactly the same. */
     attachments: jsonb().$type<EmailAttachment[]>().notNull().default([]),
     status: emailStatusEnum().notNull().default('queued'),
     attempts: integer().notNull().default(0),

@@ -61,6 +61,7 @@ export async function deliverEmail(ctx: AppContext, emailId: string, s: Delivery
         filename: a.filename,
         contentType: a.contentType,
         content: a.content,
+        ...(a.encoding ? { encoding: a.encoding } : {}),
       })),
       messageId,
       headers: { 'X-Gradepass-Email-Id': claim.id },

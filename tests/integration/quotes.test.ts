@@ -180,6 +180,11 @@ describe('revisions', () => {
     expect(mail).toHaveLength(1);
     expect(mail[0].toAddress).toBe(cast.applicant.email);
     expect(mail[0].textBody).toContain('version 1');
+    // The quote's PDF travels with the e-mail, the same bytes the request page offers.
+    const [pdf] = mail[0].attachments;
+    expect(pdf).toMatchObject({ contentType: 'application/pdf', encoding: 'base64' });
+    expect(pdf.filename).toMatch(/quote-version-1\.pdf$/);
+    expect(Buffer.from(pdf.content, 'base64').subarray(0, 5).toString('latin1')).toBe('%PDF-');
     const docs = await cast.applicant.agent.get(`/api/requests/${request.id}/documents`).expect(200);
     expect(docs.body.documents.map((d: { kind: string }) => d.kind)).toContain('quote');
 

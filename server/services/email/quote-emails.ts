@@ -28,17 +28,18 @@ function email(to: string, template: string, subject: string, requestId: string,
   };
 }
 
-/** To the owner when the office sends a quote (a first one or a revision). The PDF waits on the request page. */
+/** To the owner when the office sends a quote (a first one or a revision), with its PDF attached. */
 export function quoteSentEmail(input: {
   request: RequestPart;
   owner: { email: string; name: string };
   quote: QuotePart;
   replacedVersion: number | null;
   appOrigin: string;
+  pdf: Buffer;
 }): OutgoingEmail {
   const { request, quote } = input;
   const lines = quote.lines.map((l) => `• ${l.description}: ${formatCents(l.amountCents)}`);
-  return email(
+  const message = email(
     input.owner.email,
     'quote.sent',
     `${request.reference}: your quote${quote.version > 1 ? ` (version ${quote.version})` : ''} for the driveway entrance`,
@@ -50,11 +51,22 @@ export function quoteSentEmail(input: {
           (input.replacedVersion === null ? '' : ` It replaces version ${input.replacedVersion}.`),
         ...lines,
         `Total ${formatCents(quote.totalCents)}, with a deposit of ${formatCents(quote.depositCents)} on acceptance. Valid until ${formatDay(quote.validUntil)}.`,
-        'Open the request page to read the full quote and its PDF, then accept it by typing your name, decline it with a reason, or ask us a question in the messages.',
+        'The quote is attached as a PDF. Open the request page to accept it by typing your name, decline it with a reason, or ask us a question in the messages.',
       ],
       link: { href: input.appOrigin + sharedPaths.applicantRequest.getHref(request.id), label: 'Read the quote' },
     },
   );
+  return {
+    ...message,
+    attachments: [
+      {
+        filename: `${request.reference}-quote-version-${quote.version}.pdf`,
+        contentType: 'application/pdf',
+        content: input.pdf.toString('base64'),
+        encoding: 'base64',
+      },
+    ],
+  };
 }
 
 /** To the office when the owner accepts or declines. */

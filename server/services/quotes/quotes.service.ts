@@ -393,6 +393,7 @@ export async function sendQuote(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user
           quote: { ...saved, lines: saved.lines as QuoteLineView[] },
           replacedVersion,
           appOrigin: ctx.env.APP_ORIGIN,
+          pdf,
         }),
         eventId: event.id,
       },
@@ -405,7 +406,7 @@ export async function sendQuote(ctx: Pick<AppContext, 'db' | 's3' | 'env'>, user
 async function loadOwnersCurrentQuote(tx: DbOrTx, user: SessionUser, quoteId: string) {
   const { quote, request } = await loadVisibleQuote(tx, user, quoteId);
   if (request.applicantId !== user.id)
-    throw forbidden('Only the property owner who made the request can accept or decline its quote.');
+    throw forbidden('Only the homeowner who made the request can accept or decline its quote.');
   // The request's row first, as sending does: an answer and a revision being sent take turns, so a version cannot be
   // accepted while a later one goes out over it.
   await loadVisibleRequest(tx, user, request.id, { forUpdate: true });
