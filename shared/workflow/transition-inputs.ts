@@ -161,7 +161,7 @@ export const transitionInputs = {
     }),
     items: said(4000, 'list what must be fixed, one item per line').register(fieldText, {
       label: 'What must be fixed',
-      hint: 'One item per line. The crew, the property owner and the office read these.',
+      hint: 'One item per line. The crew, the homeowner and the office read these.',
       control: 'textarea',
     }),
   }),

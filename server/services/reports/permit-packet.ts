@@ -115,7 +115,7 @@ export function buildPermitPacket(data: PacketData): Promise<Buffer> {
       { title: 'Detail', width: Math.round(width * 0.72) },
     ],
     [
-      ['Applicant (property owner)', request.applicantName],
+      ['Applicant (homeowner)', request.applicantName],
       ['Site address', request.siteAddress],
       ['Parcel number', request.parcelNumber || 'not given'],
       ['Road', `${request.roadName}${request.roadOwner ? ` (${request.roadOwner})` : ''}`],
