@@ -26,6 +26,7 @@ beforeAll(async () => {
   ids.ownerSubmitted = await requestAt('77 Pennywhistle Lane, Elderbrook');
   ids.underWay = await requestAt('3187 Stonecrop Pike, Marrow Crossing');
   ids.built = await requestAt('400 Larkspur Ridge Road, Elderbrook');
+  ids.quoteAccepted = await requestAt('904 Old Mill Road, Marrow Crossing');
   ids.county = (
     await db.db.select({ id: jurisdictions.id }).from(jurisdictions).where(eq(jurisdictions.slug, 'marrow-county'))
   )[0].id;
@@ -59,6 +60,7 @@ const walks: { role: string; email: string | null; screens: Screen[] }[] = [
       { name: 'new-request', path: () => '/my/requests/new' },
       { name: 'request', path: () => `/my/requests/${ids.ownerSubmitted}` },
       { name: 'request-under-way', path: () => `/my/requests/${ids.underWay}` },
+      { name: 'request-quote-accepted', path: () => `/my/requests/${ids.quoteAccepted}` },
     ],
   },
   {
@@ -72,6 +74,9 @@ const walks: { role: string; email: string | null; screens: Screen[] }[] = [
       { name: 'rule-profiles', path: () => '/office/rule-profiles' },
       { name: 'rule-profile', path: () => `/office/rule-profiles/${ids.county}` },
       { name: 'emails', path: () => '/office/emails' },
+      { name: 'calendar', path: () => '/office/calendar' },
+      { name: 'payments', path: () => '/office/payments' },
+      { name: 'request-quoted', path: () => `/office/requests/${ids.quoteAccepted}` },
       { name: 'field-sheet', path: () => `/crew/jobs/${ids.underWay}/field-sheet` },
     ],
   },
@@ -94,6 +99,10 @@ const walks: { role: string; email: string | null; screens: Screen[] }[] = [
       { name: 'rule-profile', path: () => `/office/rule-profiles/${ids.county}` },
       { name: 'board', path: () => '/crew/board' },
       { name: 'emails', path: () => '/office/emails' },
+      { name: 'rate-card', path: () => '/office/rate-card' },
+      { name: 'changes', path: () => '/office/changes' },
+      { name: 'crew-yard', path: () => '/office/crew-yard' },
+      { name: 'payments', path: () => '/office/payments' },
     ],
   },
 ];
