@@ -30,7 +30,7 @@ export function RequestFacts({ request, meId }: { request: OfficeRequest; meId: 
     [
       'Permit',
       request.permitReference
-        ? `${request.permitReference}${request.permitDecidedOn ? `, decided ${request.permitDecidedOn}` : ''}${request.permitExpiresOn ? `, expires ${request.permitExpiresOn}` : ''}`
+        ? `${request.permitReference}${request.permitDecidedOn ? `, decided ${formatDay(request.permitDecidedOn)}` : ''}${request.permitExpiresOn ? `, expires ${formatDay(request.permitExpiresOn)}` : ''}`
         : '—',
     ],
     [
