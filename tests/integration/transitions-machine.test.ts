@@ -2,7 +2,7 @@ import { eq } from 'drizzle-orm';
 import { describe, expect, it } from 'vitest';
 import { requests } from '../../server/db/schema';
 import { canSee } from '../../server/services/requests/request-access';
-import { requestStatuses, type RequestStatus, type Role } from '@shared/workflow/statuses';
+import { requestStatuses, statusText, type RequestStatus, type Role } from '@shared/workflow/statuses';
 import { formFieldsOf } from '@shared/workflow/transition-inputs';
 import { transitions, type Transition, type TransitionAction } from '@shared/workflow/transitions';
 import { createAsBuiltSet, createGradeCheck } from '../factories/grade-checks';
@@ -76,7 +76,9 @@ describe('every transition in the table, for every role', () => {
         // Whoever may not even see the request gets 404; the rest get 409 naming where it stands.
         const visible = canSee({ id: who.id, email: who.email, name: '', role }, row);
         expect(res.status, JSON.stringify(res.body)).toBe(visible ? 409 : 404);
-        if (visible) expect(res.body.error.message).toContain(tr.from);
+        // In the words the screens use, never the status's code.
+        if (visible) expect(res.body.error.message).toContain(`"${statusText[tr.from].label}"`);
+        if (visible) expect(res.body.error.message).not.toContain(tr.from);
         expect(after).toMatchObject({ status: tr.from, version: row.version });
       }
     },
@@ -94,7 +96,8 @@ describe('actions that are not in the table', () => {
     const row = await requestIn(from);
     const res = await cast.admin.agent.post(`/api/requests/${row.id}/transitions`).send(bodyFor(action, row.version));
     expect(res.status).toBe(409);
-    expect(res.body.error.message).toContain(`(${from})`);
+    expect(res.body.error.message).toContain(`"${statusText[from].label}"`);
+    expect(res.body.error.message).not.toContain(`(${from})`);
     const [after] = await t.ctx.db
       .select({ status: requests.status, version: requests.version })
       .from(requests)
