@@ -11,7 +11,7 @@ export const testCards = {
 } as const;
 
 const pagePolicy =
-  "default-src 'none'; style-src 'unsafe-inline'; img-src 'self'; base-uri 'none'; frame-ancestors 'none'";
+  "default-src 'none'; style-src 'unsafe-inline'; img-src 'self' data:; base-uri 'none'; frame-ancestors 'none'";
 
 const money = (cents: number, currency: string) =>
   `${currency === 'usd' ? '$' : `${currency.toUpperCase()} `}${Math.floor(cents / 100).toLocaleString('en-US')}.${String(cents % 100).padStart(2, '0')}`;
