@@ -32,7 +32,7 @@ function RequestPage({ id }: { id: string }) {
         title={request.siteAddress || 'Driveway entrance request'}
         lead={`Reference ${request.reference}${request.roadName ? ` · on ${request.roadName}` : ''}`}
       />
-      <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,2fr)_minmax(0,1fr)]">
         <div className="space-y-6">
           <Panel title="Where it stands">
             <RequestStatus request={request} editHref={paths.applicant.editRequest.getHref(id)} question={question} />
