@@ -11,7 +11,7 @@ import { SheetWarp } from './sheet-warp';
 
 // One sheet of paper, Letter or A4 (whichever the printer holds: no size is forced), with narrow margins; the
 // sheet's own type sizes take over from the screen's large ones. tests/e2e/field-sheet-print.test.ts counts pages.
-const pageCss = '@page { margin: 0.35in; }';
+const pageCss = '@page { margin: 0.25in; }';
 
 function Section({ title, children, className = '' }: { title: string; children: ReactNode; className?: string }) {
   return (
@@ -51,14 +51,43 @@ export function FieldSheet({ id }: { id: string }) {
         </button>
       </header>
 
-      <section aria-label="Cautions" className="rounded border-4 border-tape p-3 print:border-2 print:p-1">
-        <h2 className="text-xl font-bold print:text-[10pt]">Before and while you dig</h2>
-        <ul className="list-disc space-y-1 pl-6 print:columns-2 print:gap-x-6 print:space-y-0">
-          {s.cautions.map((c) => (
-            <li key={c}>{c}</li>
-          ))}
-        </ul>
-      </section>
+      {/* On paper the plan sits beside the cautions and the check's words, so the sheet stays one page. */}
+      <div
+        className={`space-y-4 ${s.plan ? 'print:grid print:grid-cols-[5fr_2fr] print:items-start print:gap-3 print:space-y-0' : ''}`}
+      >
+        <div className="space-y-4 print:space-y-1">
+          <section aria-label="Cautions" className="rounded border-4 border-tape p-3 print:border-2 print:p-1">
+            <h2 className="text-xl font-bold print:text-[10pt]">Before and while you dig</h2>
+            <ul className="list-disc space-y-1 pl-6 print:columns-2 print:gap-x-6 print:space-y-0">
+              {s.cautions.map((c) => (
+                <li key={c}>{c}</li>
+              ))}
+            </ul>
+          </section>
+          <Section title="Grade check">
+            {s.check ? (
+              <p>
+                Check {s.check.number} against {s.check.ruleProfileLabel}: {s.check.summary}
+              </p>
+            ) : (
+              <p>No saved grade check.</p>
+            )}
+            {s.rules && (
+              <p>
+                Landing {station(0)} to {station(s.rules.landingLengthFt)}: {pct(s.rules.landingMinPercent, 1)} to{' '}
+                {pct(s.rules.landingMaxPercent, 1)}. Beyond it at most {pct(s.rules.maxGradePercent, 1)}.
+              </p>
+            )}
+          </Section>
+        </div>
+        {s.plan && (
+          <Section title="Plan of the entrance">
+            <PlanView plan={s.plan} className="print:hidden" />
+            {/* On paper a third of the width: drawn on a smaller sheet, so its words stay large enough to read. */}
+            <PlanView plan={{ ...s.plan, width: 420, height: 300 }} className="hidden print:block" />
+          </Section>
+        )}
+      </div>
 
       <div className="grid gap-4 md:grid-cols-2 lg:grid-cols-3 print:grid-cols-3 print:gap-2">
         <Section title="Site and access">
@@ -93,28 +122,6 @@ export function FieldSheet({ id }: { id: string }) {
         </Section>
       </div>
 
-      <Section title="Grade check">
-        {s.check ? (
-          <p>
-            Check {s.check.number} against {s.check.ruleProfileLabel}: {s.check.summary}
-          </p>
-        ) : (
-          <p>No saved grade check.</p>
-        )}
-        {s.rules && (
-          <p>
-            Landing {station(0)} to {station(s.rules.landingLengthFt)}: {pct(s.rules.landingMinPercent, 1)} to{' '}
-            {pct(s.rules.landingMaxPercent, 1)}. Beyond it at most {pct(s.rules.maxGradePercent, 1)}.
-          </p>
-        )}
-      </Section>
-
-      {s.plan && (
-        <Section title="Plan of the entrance">
-          <PlanView plan={s.plan} className="print:[&>svg]:h-[2.2in] print:[&>svg]:w-auto" />
-        </Section>
-      )}
-
       <Section title="Laser">
         {s.laser ? <SheetLaser laser={s.laser} /> : <p>No laser setup in the saved check.</p>}
       </Section>
@@ -134,7 +141,7 @@ export function FieldSheet({ id }: { id: string }) {
             <p>No profile in the saved check.</p>
           )}
           {s.design && s.design.cutFill.length > 0 && (
-            <div className="print:columns-2 print:gap-x-3 print:whitespace-nowrap print:text-[7pt]">
+            <div className="print:columns-2 print:gap-x-3 print:whitespace-nowrap print:text-[7pt] print:leading-none">
               <table className="stack-table mt-1 w-full border-collapse text-left">
                 <caption className="text-left font-bold">Cut and fill on the centreline</caption>
                 <thead>
