@@ -17,7 +17,7 @@ export function PersonName({ id, name }: { id: string; name: string }) {
         <Button
           variant="quiet"
           className="px-1 py-0"
-          aria-label={`Edit the name of ${name}`}
+          aria-label={`Edit name of ${name}`}
           onClick={() => {
             setValue(name);
             update.reset();
