@@ -126,12 +126,12 @@ describe('after sending: the office asks, the owner answers', () => {
       .locator('.uppy-Dashboard-input')
       .first()
       .setInputFiles([{ name: 'road-right.png', mimeType: 'image/png', buffer: solidPng(20, 20, [90, 90, 90]) }]);
-    await owner.page
-      .getByText(/upload failed/i)
-      .first()
-      .waitFor({ timeout: 60_000 });
+    await owner.page.getByText('A photo did not arrive').first().waitFor({ timeout: 60_000 });
     storageDown = false;
-    await owner.page.getByRole('button', { name: /retry/i }).first().click();
+    await owner.page
+      .getByRole('button', { name: /Try (sending it )?again/ })
+      .first()
+      .click();
     await owner.page.getByText('1 photo', { exact: true }).waitFor({ timeout: 30_000 });
     await owner.context.close();
   });

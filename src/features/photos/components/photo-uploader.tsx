@@ -83,7 +83,9 @@ function buildUppy(props: { current: UploaderProps }) {
           return;
         }
         uppy.setFileMeta(file.id, { photoType: photoTypeOf(leading) ?? undefined });
-        void uppy.upload();
+        // Photos added together are sent together: only once every one has been judged, since sending starts with
+        // all of them and one not yet read would go without its type (and keep its camera metadata).
+        if (uppy.getFiles().every((f) => f.meta.photoType)) void uppy.upload();
       });
   });
   uppy.use(AwsS3, {
