@@ -8,7 +8,7 @@ import { Panel } from '@/components/ui/panel';
 import { ApiError } from '@/lib/api-client';
 import { getRequestQueryOptions, useRequest } from '../api/get-request';
 import { useRunTransition } from '@/lib/status-change';
-import { saveDraftOnExit, useSaveDraft } from '../api/save-draft';
+import { saveDraftOnExit, sendExitCopy, useSaveDraft } from '../api/save-draft';
 import type { RequestView } from '@shared/contracts/requests';
 import { ApplicationSummary } from './application-summary';
 import { EntranceStepForm } from './entrance-step';
@@ -39,7 +39,8 @@ interface WizardProps {
 
 export function RequestWizard({ requestId, ...rest }: WizardProps) {
   const { data, error, isPending } = useRequest(requestId);
-  if (isPending) return <Loading />;
+  const restoring = useExitCopy(requestId);
+  if (isPending || restoring) return <Loading />;
   if (error) return <ErrorNotice error={error} />;
   const { request } = data;
   if (request.status !== 'draft' && request.status !== 'needs_details') {
@@ -54,6 +55,26 @@ export function RequestWizard({ requestId, ...rest }: WizardProps) {
     );
   }
   return <WizardBody key={request.id} request={request} {...rest} />;
+}
+
+/** Answers a reloaded page kept in this tab are sent before the form opens, so the form shows them. */
+function useExitCopy(requestId: string) {
+  const queryClient = useQueryClient();
+  const [restoring, setRestoring] = useState(true);
+  useEffect(() => {
+    let live = true;
+    void sendExitCopy(requestId)
+      .then((sent) =>
+        sent ? queryClient.refetchQueries({ queryKey: getRequestQueryOptions(requestId).queryKey }) : undefined,
+      )
+      .finally(() => {
+        if (live) setRestoring(false);
+      });
+    return () => {
+      live = false;
+    };
+  }, [requestId, queryClient]);
+  return restoring;
 }
 
 function WizardBody({ request, Photos, onSent }: Omit<WizardProps, 'requestId'> & { request: RequestView }) {
