@@ -2,6 +2,7 @@ import { eq } from 'drizzle-orm';
 import type { RateCardPrices } from '@shared/contracts/rate-cards';
 import type { DbOrTx } from '../../db/client';
 import { rateCardVersions } from '../../db/schema';
+import { emptyPrices } from '../../services/rate-cards/rate-cards.service';
 
 /** The demo company's prices: invented for the demo, in whole cents. */
 export const demoRateCardPrices: RateCardPrices = {
@@ -23,18 +24,8 @@ export const demoRateCardPrices: RateCardPrices = {
   trafficControlDays: 1,
   permitFeeCents: 7500,
   salesTaxBp: 625,
-  taxable: {
-    excavation: false,
-    fill: true,
-    haul: false,
-    pipe: true,
-    'end-sections': true,
-    'base-course': true,
-    paving: true,
-    mobilisation: false,
-    'traffic-control': false,
-    'permit-fee': false,
-  },
+  // Which lines are taxed: the same as a new company's card.
+  taxable: emptyPrices.taxable,
   depositBp: 3000,
 };
 
