@@ -15,7 +15,8 @@ export async function createSentQuote(
   const [card] = await db
     .insert(rateCardVersions)
     .values({
-      version: Math.floor(Math.random() * 1e9),
+      // Below every real version, so it never becomes the current card other tests price from.
+      version: -1 - Math.floor(Math.random() * 1e9),
       status: 'published',
       prices: emptyPrices,
       publishedAt: new Date(),

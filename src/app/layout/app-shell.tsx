@@ -95,7 +95,7 @@ export function AppShell() {
         {me?.role === 'crew' && <OutboxPanel userId={me.id} />}
         <Outlet />
       </main>
-      <footer className="no-print border-t border-stone-200 py-4 text-center text-xs text-stone-500">
+      <footer className="no-print border-t border-stone-200 py-4 text-center text-xs text-stone-600">
         Gradepass supports, and never replaces, the road authority’s review, local codes and a licensed engineer where
         one is required.
       </footer>

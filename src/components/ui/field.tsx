@@ -25,7 +25,7 @@ export function Field({ label, hint, error, children }: FieldProps) {
         {label}
       </label>
       {hint && (
-        <p id={hintId} className="text-xs text-stone-500">
+        <p id={hintId} className="text-xs text-stone-600">
           {hint}
         </p>
       )}

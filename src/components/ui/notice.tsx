@@ -57,7 +57,7 @@ export function ErrorNotice({ error, shownBeside = [] }: { error: unknown; shown
 
 export function Loading({ label = 'Loading…' }: { label?: string }) {
   return (
-    <p role="status" className="py-6 text-stone-500">
+    <p role="status" className="py-6 text-stone-600">
       {label}
     </p>
   );

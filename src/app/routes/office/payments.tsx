@@ -13,7 +13,7 @@ function PaymentsPage() {
         title="Payments"
         lead="Deposits and final invoices: what came in, what is still owed, and what went back to the owner."
       />
-      <div className="grid gap-6 lg:grid-cols-[1fr_20rem]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
         <Panel title="Money in and out">
           <PaymentsTable />
         </Panel>

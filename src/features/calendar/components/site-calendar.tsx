@@ -40,7 +40,7 @@ function EntryLine({ entry, hrefFor }: { entry: CalendarEntry; hrefFor: (id: str
         <span className="font-mono">{entry.reference}</span>
       </Link>
       <span className="block text-stone-700">{entry.siteAddress || entry.applicantName}</span>
-      <span className="block text-stone-500">
+      <span className="block text-stone-600">
         {visit
           ? `Office: ${entry.assigneeName ?? 'nobody assigned'}`
           : `Crew lead: ${entry.crewLeadName ?? 'not known'}`}
@@ -131,7 +131,7 @@ export function SiteCalendar({ hrefFor, today = new Date() }: { hrefFor: (id: st
             <li
               key={key}
               aria-label={`${d.toLocaleDateString('en-US', { weekday: 'long' })} ${formatDay(d)}${entries.length ? `, ${entries.length} booked` : ''}`}
-              className={`${emptyOnPhone} min-h-20 rounded border p-1 ${key === todayKey ? 'border-pine-600 border-2' : 'border-stone-200'} ${outside ? 'bg-stone-50 text-stone-400' : 'bg-white'}`}
+              className={`${emptyOnPhone} min-h-20 rounded border p-1 ${key === todayKey ? 'border-pine-600 border-2' : 'border-stone-200'} ${outside ? 'bg-stone-50 text-stone-600' : 'bg-white'}`}
             >
               <p className="text-xs font-semibold">
                 <span className="sm:hidden">{d.toLocaleDateString('en-US', { weekday: 'short' })} </span>

@@ -35,7 +35,7 @@ export function EmailDetailPanel({ id }: { id: string }) {
           <pre className="whitespace-pre-wrap rounded bg-red-50 p-2 font-mono text-xs text-red-900">{e.lastError}</pre>
         </div>
       )}
-      <p className="text-xs text-stone-500">
+      <p className="text-xs text-stone-600">
         Message-ID {e.messageId ?? '(given when sent)'} · template {e.template}
       </p>
       <pre className="max-h-96 overflow-auto whitespace-pre-wrap rounded border border-stone-200 bg-paper p-3 font-sans">

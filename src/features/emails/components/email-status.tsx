@@ -25,7 +25,7 @@ export function EmailStatusBadge({ email }: { email: Pick<EmailRow, 'status' | '
       >
         {emailStatusText[email.status]}
       </span>
-      {email.attempts > 1 && <span className="text-xs text-stone-500">retried, {email.attempts} attempts</span>}
+      {email.attempts > 1 && <span className="text-xs text-stone-600">retried, {email.attempts} attempts</span>}
     </span>
   );
 }

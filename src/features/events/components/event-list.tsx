@@ -33,7 +33,7 @@ export function EventList({ requestId, office = false, label = 'Timeline' }: Eve
   if (isPending) return <Loading />;
   if (error) return <ErrorNotice error={error} />;
   if (data.events.length === 0)
-    return <p className="text-sm text-stone-500">Nothing has happened yet: the request is still a draft.</p>;
+    return <p className="text-sm text-stone-600">Nothing has happened yet: the request is still a draft.</p>;
   return (
     <ol className="relative space-y-4 border-l-2 border-pine-200 pl-5" aria-label={label}>
       {data.events.map((event) => (

@@ -6,7 +6,7 @@ import { ScrollRegion } from '@/components/ui/scroll-region';
 export function ApronPanel({ apron }: { apron?: ApronSummary }) {
   if (!apron)
     return (
-      <p className="text-sm text-stone-500">
+      <p className="text-sm text-stone-600">
         Tick "Check both edges of the entrance" under Entrance edges to see the warp stakes.
       </p>
     );

@@ -106,7 +106,7 @@ export function CentrelineTable({
             const valueError = cellError(i, cols.valueField);
             return (
               <tr key={row.key} className="align-top">
-                <td className="py-1 text-stone-500">{i + 1}</td>
+                <td className="py-1 text-stone-600">{i + 1}</td>
                 <td className="py-1 pr-2">
                   <input
                     aria-label={`${cols.station}, row ${i + 1}`}

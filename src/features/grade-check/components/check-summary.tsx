@@ -9,7 +9,7 @@ export function CheckSummary({ requestId }: { requestId: string }) {
   const latest = data.checks.find((c) => c.attachedAt);
   if (!latest)
     return (
-      <p className="text-sm text-stone-500">
+      <p className="text-sm text-stone-600">
         The office has not finished the grade check yet. It follows the site visit.
       </p>
     );

@@ -9,7 +9,7 @@ export function DocumentsList({ requestId, canShare }: { requestId: string; canS
   const share = useShareDocument(requestId);
   if (isPending) return <Loading label="Loading documents…" />;
   if (error) return <ErrorNotice error={error} />;
-  if (data.documents.length === 0) return <p className="text-sm text-stone-500">No documents yet.</p>;
+  if (data.documents.length === 0) return <p className="text-sm text-stone-600">No documents yet.</p>;
   return (
     <ul className="divide-y divide-stone-100" aria-label="Documents">
       {data.documents.map((doc) => (
@@ -18,7 +18,7 @@ export function DocumentsList({ requestId, canShare }: { requestId: string; canS
             <a className="font-semibold text-pine-700 underline" href={doc.url} target="_blank" rel="noreferrer">
               {doc.title}
             </a>
-            <span className="ml-2 text-xs text-stone-500">
+            <span className="ml-2 text-xs text-stone-600">
               PDF · {Math.max(1, Math.round(doc.sizeBytes / 1024))} KB · {formatDay(doc.createdAt)}
             </span>
           </div>

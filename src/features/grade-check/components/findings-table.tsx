@@ -36,7 +36,7 @@ export function FindingsTable({ findings, units }: { findings: readonly Finding[
               </td>
               <td className="pr-2">
                 {f.label}
-                {f.note && <span className="block text-xs text-stone-500">{f.note}</span>}
+                {f.note && <span className="block text-xs text-stone-600">{f.note}</span>}
               </td>
               <td className="pr-2 font-mono">{f.stationFt === undefined ? '' : formatStation(f.stationFt)}</td>
               <td className="pr-2 text-right font-mono">{showValue(f.measured, f.unit, units)}</td>

@@ -197,7 +197,7 @@ export function GradeCheckWorkspace({
           )}
           <ErrorNotice error={save.error} />
           {!rules ? (
-            <p className="text-sm text-stone-500">
+            <p className="text-sm text-stone-600">
               {ruleProfile.loadingRules ? 'Loading the rule profile…' : 'Choose the rule profile to check against.'}
             </p>
           ) : (

@@ -13,7 +13,7 @@ const setupWords: Record<Laser['stakes'][number]['setup'], string> = {
 export function LaserPanel({ laser }: { laser?: Laser }) {
   if (!laser)
     return (
-      <p className="text-sm text-stone-500">The laser settings appear once the centreline and road grade are in.</p>
+      <p className="text-sm text-stone-600">The laser settings appear once the centreline and road grade are in.</p>
     );
   const second = laser.secondSetup;
   return (

@@ -36,7 +36,7 @@ export function ProposalPanel({
     );
   if (!proposal) {
     return (
-      <p role="status" className="text-sm text-stone-500">
+      <p role="status" className="text-sm text-stone-600">
         {designing ? 'Working out the least-earth profile…' : 'Finish the survey to get a proposal.'}
       </p>
     );

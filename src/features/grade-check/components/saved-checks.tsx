@@ -18,7 +18,7 @@ export function SavedChecks({ request, checks }: { request: GradeCheckRequestHea
   const hasAttached = checks.some((c) => c.attachedAt);
   const withdrawable = gradeCheckOpenStatuses.includes(request.status);
   if (checks.length === 0)
-    return <p className="text-sm text-stone-500">No saved checks yet. Save the survey to make check 1.</p>;
+    return <p className="text-sm text-stone-600">No saved checks yet. Save the survey to make check 1.</p>;
   const attachNow = (c: GradeCheckView, confirmFailing: boolean) =>
     attach.mutate(
       { checkId: c.id, shareWithApplicant: share, confirmFailing },
@@ -90,7 +90,7 @@ export function SavedChecks({ request, checks }: { request: GradeCheckRequestHea
           >
             Mark grade check done
           </Button>
-          {!hasAttached && <span className="text-sm text-stone-500">Attach a check first.</span>}
+          {!hasAttached && <span className="text-sm text-stone-600">Attach a check first.</span>}
         </div>
       )}
       {request.status === 'checked' && (

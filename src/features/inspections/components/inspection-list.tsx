@@ -3,7 +3,7 @@ import { formatDay } from '@shared/format/dates';
 
 /** The road authority's inspections, newest first: passed, or failed with what must be fixed. */
 export function InspectionList({ inspections }: { inspections: InspectionView[] }) {
-  if (inspections.length === 0) return <p className="text-sm text-stone-500">No inspection recorded yet.</p>;
+  if (inspections.length === 0) return <p className="text-sm text-stone-600">No inspection recorded yet.</p>;
   return (
     <ul className="space-y-3" aria-label="Inspections">
       {inspections.map((i) => (

@@ -44,7 +44,7 @@ export function InspectionPanel({ requestId, status, office = false }: Inspectio
               <SendLinkForm requestId={requestId} />
             </div>
           ) : (
-            <p className="text-sm text-stone-500">A link can be sent once the crew has marked the job built.</p>
+            <p className="text-sm text-stone-600">A link can be sent once the crew has marked the job built.</p>
           )}
           {data.links && data.links.length > 0 && (
             <div className="space-y-2 border-t border-stone-200 pt-4">

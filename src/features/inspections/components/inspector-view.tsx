@@ -34,7 +34,7 @@ export function InspectorView({ page, token, photos }: { page: InspectorPageView
   return (
     <div className="space-y-5">
       <header>
-        <p className="text-sm font-semibold uppercase tracking-wide text-stone-500">Entrance inspection</p>
+        <p className="text-sm font-semibold uppercase tracking-wide text-stone-600">Entrance inspection</p>
         <h1 className="break-words text-2xl font-bold text-pine-900">{request.siteAddress}</h1>
         <p className="text-stone-600">
           {request.roadName ? `On ${request.roadName} · ` : ''}Our reference {request.reference} · {request.statusLabel}
@@ -107,7 +107,7 @@ export function InspectorView({ page, token, photos }: { page: InspectorPageView
             </div>
           </>
         ) : (
-          <p className="text-sm text-stone-500">No finished-grade readings were recorded.</p>
+          <p className="text-sm text-stone-600">No finished-grade readings were recorded.</p>
         )}
       </Panel>
 
@@ -117,7 +117,7 @@ export function InspectorView({ page, token, photos }: { page: InspectorPageView
         {page.crewNote ? (
           <p className="whitespace-pre-line break-words text-sm text-stone-800">{page.crewNote}</p>
         ) : (
-          <p className="text-sm text-stone-500">The crew left no note.</p>
+          <p className="text-sm text-stone-600">The crew left no note.</p>
         )}
       </Panel>
 

@@ -37,7 +37,7 @@ export function MessageThread({
       ) : error ? (
         <ErrorNotice error={error} />
       ) : data.messages.length === 0 ? (
-        <p className="text-sm text-stone-500">No messages yet.</p>
+        <p className="text-sm text-stone-600">No messages yet.</p>
       ) : (
         <ul className="space-y-3" aria-label="Messages">
           {data.messages.map((m) =>
@@ -75,7 +75,7 @@ function SharedItem({ message: m }: { message: MessageView }) {
     <li
       className={`max-w-prose rounded-lg border px-3 py-2 ${m.mine ? 'ml-auto border-pine-200 bg-pine-50' : 'border-stone-200 bg-white'}`}
     >
-      <p className="text-xs text-stone-500">
+      <p className="text-xs text-stone-600">
         {m.mine ? 'You' : m.authorName} · <time dateTime={m.createdAt}>{stamp(m.createdAt)}</time>
       </p>
       <p className="whitespace-pre-line text-sm">{m.body}</p>

@@ -22,10 +22,10 @@ export function QueueCards({ rows, meId }: { rows: QueueRow[]; meId: string }) {
             {row.roadName || '—'} · {row.jurisdiction?.name ?? 'authority not matched yet'}
           </p>
           <p className="mt-1 text-sm">
-            <span className="text-stone-500">In this status for </span>
+            <span className="text-stone-600">In this status for </span>
             {timeInStatus(row.statusChangedAt)}
           </p>
-          <p className={`mt-1 text-sm ${row.waitingOnUs ? 'font-semibold text-pine-900' : 'text-stone-500'}`}>
+          <p className={`mt-1 text-sm ${row.waitingOnUs ? 'font-semibold text-pine-900' : 'text-stone-600'}`}>
             {row.nextAction}
           </p>
           <div className="mt-2">

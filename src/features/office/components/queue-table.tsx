@@ -55,7 +55,7 @@ export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
         cell: (c) => (
           <div>
             <div>{c.getValue() || '—'}</div>
-            <div className="text-xs text-stone-500">
+            <div className="text-xs text-stone-600">
               {c.row.original.jurisdiction?.name ?? 'Authority not matched yet'}
             </div>
           </div>
@@ -93,7 +93,7 @@ export function QueueTable({ rows, filters, meId, onSort }: QueueTableProps) {
         header: 'Next action',
         enableSorting: false,
         cell: (c) => (
-          <span className={c.row.original.waitingOnUs ? 'font-semibold text-pine-900' : 'text-stone-500'}>
+          <span className={c.row.original.waitingOnUs ? 'font-semibold text-pine-900' : 'text-stone-600'}>
             {c.getValue()}
           </span>
         ),

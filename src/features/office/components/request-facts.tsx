@@ -13,7 +13,7 @@ export function RequestFacts({ request, meId }: { request: OfficeRequest; meId: 
       'Status',
       <span key="s" className="flex flex-wrap items-center gap-2">
         <StatusBadge status={request.status} />
-        <span className="text-stone-500">for {timeInStatus(request.statusChangedAt)}</span>
+        <span className="text-stone-600">for {timeInStatus(request.statusChangedAt)}</span>
       </span>,
     ],
     ['Homeowner', request.applicantName || '—'],

@@ -34,7 +34,7 @@ export function SitePositionControl({
             {lat.toFixed(5)}, {lng.toFixed(5)}
           </span>
         ) : (
-          <span className="text-stone-500">Not known: the crews’ board cannot give a distance</span>
+          <span className="text-stone-600">Not known: the crews’ board cannot give a distance</span>
         )}
         <Button variant="quiet" onClick={() => setOpen(true)}>
           {known ? 'Change the position' : 'Set the position'}

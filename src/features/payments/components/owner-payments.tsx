@@ -62,7 +62,7 @@ export function OwnerPayments({ requestId }: { requestId: string }) {
                 ? `Pay the deposit (${formatCents(due.amountCents)})`
                 : `Pay the final invoice (${formatCents(due.amountCents)})`}
           </Button>
-          <p className="text-xs text-stone-500">
+          <p className="text-xs text-stone-600">
             The {paymentKindLabels[due.kind].toLowerCase()} is paid by card on the payment company’s page; you come back
             here afterwards. Gradepass never sees your card number.
           </p>

@@ -23,7 +23,7 @@ export function PaymentWaitsForm({ canEdit }: { canEdit: boolean }) {
           {paymentWaitLabels[key]}
         </label>
       ))}
-      {!canEdit && <p className="text-xs text-stone-500">Only the owner (admin) changes these.</p>}
+      {!canEdit && <p className="text-xs text-stone-600">Only the owner (admin) changes these.</p>}
       {save.error && <ErrorNotice error={save.error} />}
     </fieldset>
   );

@@ -1,3 +1,4 @@
+import { ScrollRegion } from '@/components/ui/scroll-region';
 import { useState } from 'react';
 import { Link } from 'react-router';
 import {
@@ -54,7 +55,7 @@ export function PaymentsTable() {
               ['Refunded', data.totals.refundedCents],
             ].map(([label, cents]) => (
               <div key={label} className="rounded-md border border-stone-200 bg-white p-3">
-                <dt className="text-xs font-semibold uppercase tracking-wide text-stone-500">{label}</dt>
+                <dt className="text-xs font-semibold uppercase tracking-wide text-stone-600">{label}</dt>
                 <dd className="font-mono text-lg text-pine-900">{formatCents(Number(cents))}</dd>
               </div>
             ))}
@@ -62,9 +63,9 @@ export function PaymentsTable() {
           {data.rows.length === 0 ? (
             <p className="text-sm text-stone-600">Nothing to show here.</p>
           ) : (
-            <div className="overflow-x-auto">
+            <ScrollRegion label="Payments">
               <table className="w-full text-left text-sm">
-                <thead className="border-b border-stone-200 text-xs uppercase text-stone-500">
+                <thead className="border-b border-stone-200 text-xs uppercase text-stone-600">
                   <tr>
                     <th className="py-2 pr-3">Request</th>
                     <th className="py-2 pr-3">Owner</th>
@@ -100,7 +101,7 @@ export function PaymentsTable() {
                   ))}
                 </tbody>
               </table>
-            </div>
+            </ScrollRegion>
           )}
         </>
       )}

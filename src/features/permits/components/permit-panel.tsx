@@ -59,7 +59,7 @@ export function PermitPanel({
               <a className="font-semibold text-pine-700 underline" href={d.url} target="_blank" rel="noreferrer">
                 {d.title}
               </a>
-              <span className="block text-xs text-stone-500">
+              <span className="block text-xs text-stone-600">
                 {kindWords[d.kind]} · {formatDay(d.createdAt)} · {Math.max(1, Math.round(d.sizeBytes / 1024))} KB
               </span>
             </li>
@@ -69,7 +69,7 @@ export function PermitPanel({
       {filed && (
         <label className="block">
           <span className="font-semibold">Add the road authority’s letter</span>
-          <span className="block text-xs text-stone-500">A PDF, or a photo of the paper letter.</span>
+          <span className="block text-xs text-stone-600">A PDF, or a photo of the paper letter.</span>
           <input
             type="file"
             accept="application/pdf,image/jpeg,image/png,image/webp,image/heic"

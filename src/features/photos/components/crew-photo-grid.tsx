@@ -27,7 +27,7 @@ function CrewPhotoTile({ photo, onRemove }: { photo: ShownPhoto; onRemove?: () =
       </a>
       <p className="text-sm font-semibold text-pine-900">{crewPhotoKindLabels[photo.kind]}</p>
       {photo.caption && <p className="break-words text-sm text-stone-700">{photo.caption}</p>}
-      <p className="text-xs text-stone-500">
+      <p className="text-xs text-stone-600">
         {formatDay(photo.createdAt)}
         {photo.takenBy ? ` · ${photo.takenBy}` : ''}
         {where ? ` · taken at ${where}` : ' · no position recorded'}
@@ -51,7 +51,7 @@ export function CrewPhotoGrid({
   emptyText?: string;
   onRemove?: (photoId: string) => void;
 }) {
-  if (photos.length === 0) return <p className="text-sm text-stone-500">{emptyText}</p>;
+  if (photos.length === 0) return <p className="text-sm text-stone-600">{emptyText}</p>;
   const order = ['culvert_before_backfill', 'finished_entrance'];
   const sorted = [...photos].sort((a, b) => order.indexOf(a.kind) - order.indexOf(b.kind));
   return (

@@ -20,7 +20,7 @@ export function PhotoGallery({ requestId, editable = false, emptyText = 'No phot
   const [index, setIndex] = useState<number | null>(null);
   if (isPending) return <Loading label="Loading photos…" />;
   if (error) return <ErrorNotice error={error} />;
-  if (data.photos.length === 0) return <p className="text-sm text-stone-500">{emptyText}</p>;
+  if (data.photos.length === 0) return <p className="text-sm text-stone-600">{emptyText}</p>;
   return (
     <div>
       <p className="mb-2 text-sm text-stone-600">

@@ -44,7 +44,7 @@ export function PhotoImage({ requestId, photo, className, fileLink, onUnshowable
   };
   if (!src)
     return (
-      <span className={`${className} grid place-items-center bg-stone-100 text-xs text-stone-500`}>
+      <span className={`${className} grid place-items-center bg-stone-100 text-xs text-stone-600`}>
         Photo unavailable
       </span>
     );

@@ -48,11 +48,11 @@ export function PhotoViewer({ requestId, photos, index, onIndex }: PhotoViewerPr
             <span>
               <span className="font-semibold">{current.caption || current.fileName}</span>
               {current.gpsLat !== null && current.gpsLng !== null && (
-                <span className="ml-2 text-stone-500">
+                <span className="ml-2 text-stone-600">
                   taken at {current.gpsLat.toFixed(5)}, {current.gpsLng.toFixed(5)}
                 </span>
               )}
-              <span className="ml-2 text-stone-500">
+              <span className="ml-2 text-stone-600">
                 {(index ?? 0) + 1} of {photos.length}
               </span>
             </span>

@@ -279,7 +279,7 @@ function DraftEditor({ quote, ownerName }: { quote: QuoteView; ownerName: string
           {update.isPending ? 'Saving…' : 'Save draft'}
         </Button>
         {dirty ? (
-          <span className="text-sm text-stone-500">Save the draft to preview its PDF.</span>
+          <span className="text-sm text-stone-600">Save the draft to preview its PDF.</span>
         ) : (
           <a
             href={quotePdfHref(quote.id)}

@@ -1,3 +1,4 @@
+import { ScrollRegion } from '@/components/ui/scroll-region';
 import type { QuoteView } from '@shared/contracts/quotes';
 import { formatBasisPoints, formatCents } from '@shared/money/money';
 
@@ -6,7 +7,7 @@ const quantityText = (q: number) => (Number.isInteger(q) ? String(q) : q.toFixed
 /** A quote's lines and totals, read only: what the owner reads and what a sent version shows the office. */
 export function QuoteLinesTable({ quote, showSources = true }: { quote: QuoteView; showSources?: boolean }) {
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label={`Quote version ${quote.version} lines`}>
       <table className="w-full text-left text-sm">
         <caption className="sr-only">Quote version {quote.version} lines</caption>
         <thead>
@@ -22,8 +23,8 @@ export function QuoteLinesTable({ quote, showSources = true }: { quote: QuoteVie
             <tr key={i} className="border-b border-stone-100 align-top">
               <td className="py-1 pr-2">
                 {line.description}
-                {line.taxable && <span className="text-stone-500"> (taxed)</span>}
-                {showSources && line.source && <span className="block text-xs text-stone-500">{line.source}</span>}
+                {line.taxable && <span className="text-stone-600"> (taxed)</span>}
+                {showSources && line.source && <span className="block text-xs text-stone-600">{line.source}</span>}
               </td>
               <td className="pr-2 text-right whitespace-nowrap">
                 {quantityText(line.quantity)} {line.unit}
@@ -60,6 +61,6 @@ export function QuoteLinesTable({ quote, showSources = true }: { quote: QuoteVie
           </tr>
         </tfoot>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -57,7 +57,7 @@ export function RateCardPricesView({ prices }: { prices: RateCardPrices }) {
         <tbody>
           {prices.pipes.length === 0 && (
             <tr>
-              <td colSpan={4} className="py-1 text-stone-500">
+              <td colSpan={4} className="py-1 text-stone-600">
                 No pipe sizes priced.
               </td>
             </tr>

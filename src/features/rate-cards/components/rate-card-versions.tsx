@@ -33,8 +33,8 @@ export function RateCardVersions({
               <span className="text-stone-600">
                 {v.status === 'draft' ? 'draft' : v.current ? 'current' : 'earlier'}
               </span>
-              {v.publishedAt && <span className="text-stone-500"> · {formatDay(v.publishedAt)}</span>}
-              {v.changeNote && <span className="block text-xs text-stone-500">{v.changeNote}</span>}
+              {v.publishedAt && <span className="text-stone-600"> · {formatDay(v.publishedAt)}</span>}
+              {v.changeNote && <span className="block text-xs text-stone-600">{v.changeNote}</span>}
             </button>
           </li>
         ))}

@@ -19,7 +19,7 @@ export function ChoiceGroup({ legend, hint, error, type, options, labels, inputP
     <fieldset className="flex flex-col gap-1" aria-describedby={describedBy} aria-invalid={Boolean(error) || undefined}>
       <legend className="mb-1 text-sm font-semibold text-stone-800">{legend}</legend>
       {hint && (
-        <p id={`${id}-hint`} className="text-xs text-stone-500">
+        <p id={`${id}-hint`} className="text-xs text-stone-600">
           {hint}
         </p>
       )}

@@ -47,8 +47,8 @@ export function MyRequestsTable({ hrefFor }: { hrefFor: (id: string, status: str
                 </Link>
               </td>
               <td data-label="Site" className="py-3 pr-4">
-                {r.siteAddress || <span className="text-stone-500">Not filled in yet</span>}
-                {r.roadName && <span className="block text-xs text-stone-500">on {r.roadName}</span>}
+                {r.siteAddress || <span className="text-stone-600">Not filled in yet</span>}
+                {r.roadName && <span className="block text-xs text-stone-600">on {r.roadName}</span>}
               </td>
               <td data-label="Status" className="py-3 pr-4">
                 <StatusBadge status={r.status} />
@@ -58,7 +58,7 @@ export function MyRequestsTable({ hrefFor }: { hrefFor: (id: string, status: str
               </td>
               <td
                 data-label="Your part"
-                className={`py-3 ${r.expected === 'Nothing for now' ? 'text-stone-500' : 'font-semibold text-amber-900'}`}
+                className={`py-3 ${r.expected === 'Nothing for now' ? 'text-stone-600' : 'font-semibold text-amber-900'}`}
               >
                 {r.expected}
                 {r.status === 'draft' && (

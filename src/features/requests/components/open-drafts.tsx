@@ -12,7 +12,7 @@ export function OpenDrafts({ drafts, hrefFor }: { drafts: MyRequestRow[]; hrefFo
           <div>
             <p className="font-semibold">
               <span className="font-mono">{d.reference}</span> ·{' '}
-              {d.siteAddress || <span className="text-stone-500">no address yet</span>}
+              {d.siteAddress || <span className="text-stone-600">no address yet</span>}
             </p>
             <p className="text-sm text-stone-600">Last saved {formatDay(d.updatedAt)}</p>
           </div>

@@ -11,7 +11,7 @@ const size = (bytes: number) =>
 export function RequestDocuments({ requestId, documents }: { requestId: string; documents: RequestDocumentView[] }) {
   const [error, setError] = useState<unknown>(null);
   if (documents.length === 0)
-    return <p className="text-sm text-stone-500">The office has not shared any documents yet.</p>;
+    return <p className="text-sm text-stone-600">The office has not shared any documents yet.</p>;
   const open = async (id: string) => {
     setError(null);
     try {
@@ -28,7 +28,7 @@ export function RequestDocuments({ requestId, documents }: { requestId: string; 
           <li key={d.id} className="flex items-center justify-between gap-3 py-2">
             <span>
               <span className="font-semibold">{d.title}</span>{' '}
-              <span className="text-xs text-stone-500">{size(d.sizeBytes)}</span>
+              <span className="text-xs text-stone-600">{size(d.sizeBytes)}</span>
             </span>
             <Button variant="secondary" onClick={() => void open(d.id)}>
               Open

@@ -10,7 +10,7 @@ export function WizardProgress({ step }: { step: number }) {
           <li
             key={title}
             aria-current={state === 'current' ? 'step' : undefined}
-            className={`rounded-md border-l-4 px-3 py-2 text-sm ${state === 'current' ? 'border-tape bg-white font-semibold text-pine-900 shadow-sm' : state === 'done' ? 'border-pine-500 text-pine-800' : 'border-stone-200 text-stone-500'}`}
+            className={`rounded-md border-l-4 px-3 py-2 text-sm ${state === 'current' ? 'border-tape bg-white font-semibold text-pine-900 shadow-sm' : state === 'done' ? 'border-pine-500 text-pine-800' : 'border-stone-200 text-stone-600'}`}
           >
             <span className="block text-xs uppercase tracking-wide">
               Step {index + 1}

@@ -8,7 +8,7 @@ export function JurisdictionsList() {
   const { data, isPending, error } = useJurisdictions();
   if (isPending) return <Loading />;
   if (error) return <ErrorNotice error={error} />;
-  if (data.jurisdictions.length === 0) return <p className="text-sm text-stone-500">No road authorities yet.</p>;
+  if (data.jurisdictions.length === 0) return <p className="text-sm text-stone-600">No road authorities yet.</p>;
   return (
     <table className="w-full text-sm" aria-label="Road authorities">
       <thead>

@@ -139,7 +139,7 @@ export function ProfileForm({ version }: { version: ProfileVersion }) {
           </span>
         )}
       </div>
-      <p className="text-sm text-stone-500">
+      <p className="text-sm text-stone-600">
         Publishing freezes this version and makes it the one new checks use. Checks already saved keep the version they
         were made with.
       </p>

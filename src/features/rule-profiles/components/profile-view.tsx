@@ -13,7 +13,7 @@ export function ProfileView({ profile }: { profile: RuleProfile }) {
               <div key={f.path} className="grid gap-1 py-1 sm:grid-cols-[2fr_1fr_3fr]">
                 <dt className="text-stone-700">{f.label}</dt>
                 <dd className="font-mono">{profileValueText(profile, f)}</dd>
-                <dd className="text-stone-500">{profile.sources[sourceKeyOf(f)] ?? ''}</dd>
+                <dd className="text-stone-600">{profile.sources[sourceKeyOf(f)] ?? ''}</dd>
               </div>
             ))}
           </dl>

@@ -85,11 +85,11 @@ export function VersionCompare({ versions }: { versions: ProfileVersion[] }) {
                   </td>
                   <td className="pr-2">
                     <span className="font-mono">{a.shown}</span>
-                    <span className="block text-xs text-stone-500">{a.source}</span>
+                    <span className="block text-xs text-stone-600">{a.source}</span>
                   </td>
                   <td>
                     <span className="font-mono">{b.shown}</span>
-                    <span className="block text-xs text-stone-500">{b.source}</span>
+                    <span className="block text-xs text-stone-600">{b.source}</span>
                   </td>
                 </tr>
               ))}
