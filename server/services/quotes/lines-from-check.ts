@@ -1,3 +1,4 @@
+import { countOf } from '@shared/format/counts';
 import { haulEstimate } from '@shared/charts/cut-fill-table';
 import type { GradeCheckRecord } from '@shared/contracts/grade-checks';
 import type { QuoteLine } from '@shared/contracts/quotes';
@@ -95,7 +96,7 @@ export function linesFromCheck(check: CheckForQuote, prices: RateCardPrices): Qu
         unit: 'truck loads',
         unitPriceCents: prices.haulPerLoadCents,
         source: countable
-          ? `${haul.cutLoads} loads out and ${haul.fillLoads} in, of ${haul.truckCuYd} cu yd, from check ${n}`
+          ? `${countOf(haul.cutLoads ?? 0, 'load')} out and ${haul.fillLoads ?? 0} in, of ${haul.truckCuYd} cu yd, from check ${n}`
           : `too many loads to count from check ${n}: enter by hand`,
       });
   } else {

@@ -1,3 +1,4 @@
+import { formatDay } from '@shared/format/dates';
 import { Loading, Notice } from '@/components/ui/notice';
 import { useGradeChecks } from '../api/get-grade-checks';
 
@@ -13,7 +14,7 @@ export function CheckSummary({ requestId }: { requestId: string }) {
         The office has not finished the grade check yet. It follows the site visit.
       </p>
     );
-  const when = new Date(latest.createdAt).toLocaleDateString();
+  const when = formatDay(latest.createdAt);
   return (
     <Notice
       tone={latest.passed ? 'info' : 'warn'}
