@@ -58,7 +58,7 @@ async function builtJob(rules = harlowRules) {
 async function sendLink(id: string, extra: Record<string, unknown> = {}) {
   const res = await cast.staff.agent
     .post(`/api/requests/${id}/inspector-links`)
-    .send({ inspectorName: 'Dana Okafor', inspectorEmail: 'd.okafor@harlow-township.test', ...extra });
+    .send({ inspectorName: 'Imani Voss', inspectorEmail: 'i.voss@harlow-township.test', ...extra });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   const url = new URL(res.body.url as string);
   return { linkId: res.body.link.id as string, token: url.hash.replace('#t=', ''), url };
@@ -95,17 +95,17 @@ describe('the inspector’s link: signed, time-limited, withdrawable, one reques
     expect(page.body.crewPhotos[0]).toMatchObject({ kind: 'finished_entrance', gpsLat: 44.3 });
     expect(page.body.crewNote).toMatch(/Apron paved/);
     expect(page.body.gradeCheck).toMatchObject({ number: 1 });
-    expect(page.body.link).toMatchObject({ inspectorName: 'Dana Okafor', canRecord: true });
+    expect(page.body.link).toMatchObject({ inspectorName: 'Imani Voss', canRecord: true });
     const text = JSON.stringify(page.body);
     for (const secret of ['555-0142', 'deposit', 'Gate code', cast.applicant.email, cast.crew.email, 'objectKey'])
       expect(text).not.toContain(secret);
     const linkMail = await mailsFor(id, 'inspection.link');
     expect(linkMail).toHaveLength(1);
-    expect(linkMail[0].to).toBe('d.okafor@harlow-township.test');
+    expect(linkMail[0].to).toBe('i.voss@harlow-township.test');
     expect(linkMail[0].text).toContain(url.toString());
     // The owner's history does not show the link (its address is the office's business).
     const ownerEvents = await cast.applicant.agent.get(`/api/requests/${id}/events`).expect(200);
-    expect(JSON.stringify(ownerEvents.body)).not.toContain('okafor');
+    expect(JSON.stringify(ownerEvents.body)).not.toContain('voss');
   });
 
   it('refuses another request’s id, a tampered token, no token, an expired and a withdrawn link, all alike', async () => {
@@ -133,7 +133,7 @@ describe('the inspector’s link: signed, time-limited, withdrawable, one reques
     const expired = await open(first.id, token);
     expect(expired.status).toBe(404);
     expect(expired.body.error.message).toBe('Inspection page was not found.');
-    await outcome(first.id, token, { outcome: 'passed', inspectorName: 'Dana Okafor' }).expect(404);
+    await outcome(first.id, token, { outcome: 'passed', inspectorName: 'Imani Voss' }).expect(404);
 
     const fresh = await sendLink(first.id);
     await open(first.id, fresh.token).expect(200);
@@ -143,7 +143,7 @@ describe('the inspector’s link: signed, time-limited, withdrawable, one reques
       .expect(200);
     expect(revoked.body.link.state).toBe('withdrawn');
     await open(first.id, fresh.token).expect(404);
-    await outcome(first.id, fresh.token, { outcome: 'passed', inspectorName: 'Dana Okafor' }).expect(404);
+    await outcome(first.id, fresh.token, { outcome: 'passed', inspectorName: 'Imani Voss' }).expect(404);
     // Nothing was recorded through the refused links.
     const listed = await cast.staff.agent.get(`/api/requests/${first.id}/inspections`).expect(200);
     expect(listed.body.inspections).toEqual([]);
@@ -154,7 +154,7 @@ describe('the inspector’s link: signed, time-limited, withdrawable, one reques
     const job = await createReleasedJob(t.ctx.db, { applicantId: cast.applicant.id, staffId: cast.staff.id });
     const early = await cast.staff.agent
       .post(`/api/requests/${job.id}/inspector-links`)
-      .send({ inspectorName: 'Dana Okafor', inspectorEmail: 'd.okafor@harlow-township.test' })
+      .send({ inspectorName: 'Imani Voss', inspectorEmail: 'i.voss@harlow-township.test' })
       .expect(409);
     expect(early.body.error.message).toMatch(/marked the job built/);
     const { id } = await builtJob();
@@ -180,10 +180,10 @@ describe('the inspector records the outcome on the page', () => {
     const { token } = await sendLink(id);
     const res = await outcome(id, token, {
       outcome: 'passed',
-      inspectorName: 'Dana Okafor',
+      inspectorName: 'Imani Voss',
       note: 'Good apron.',
     }).expect(200);
-    expect(res.body.inspections[0]).toMatchObject({ passed: true, inspectorName: 'Dana Okafor' });
+    expect(res.body.inspections[0]).toMatchObject({ passed: true, inspectorName: 'Imani Voss' });
     expect(res.body.link.canRecord).toBe(false);
     const events = await t.ctx.db
       .select()
@@ -194,19 +194,19 @@ describe('the inspector records the outcome on the page', () => {
     const mails = await mailsFor(id, 'inspection.passed');
     expect(mails.map((m) => m.to).sort()).toEqual([cast.applicant.email, t.env.OFFICE_EMAIL].sort());
     const owner = await cast.applicant.agent.get(`/api/requests/${id}/events`).expect(200);
-    expect(JSON.stringify(owner.body)).toContain('Dana Okafor');
-    const again = await outcome(id, token, { outcome: 'failed', inspectorName: 'Dana Okafor', items: 'x' });
+    expect(JSON.stringify(owner.body)).toContain('Imani Voss');
+    const again = await outcome(id, token, { outcome: 'failed', inspectorName: 'Imani Voss', items: 'x' });
     expect(again.status).toBe(409);
   });
 
   it('failed: the job goes back to the crew with the items, through the one door, and everyone is told', async () => {
     const { id } = await builtJob();
     const { token } = await sendLink(id);
-    const missing = await outcome(id, token, { outcome: 'failed', inspectorName: 'Dana Okafor' }).expect(400);
+    const missing = await outcome(id, token, { outcome: 'failed', inspectorName: 'Imani Voss' }).expect(400);
     expect(missing.body.error.fields.items).toMatch(/one item per line/);
     const res = await outcome(id, token, {
       outcome: 'failed',
-      inspectorName: 'Dana Okafor',
+      inspectorName: 'Imani Voss',
       items: '- Culvert end not mitred\n\n2. Apron short of the road edge by 1 ft',
     });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
@@ -245,7 +245,7 @@ describe('the inspector records the outcome on the page', () => {
     const res = await cast.staff.agent.post(`/api/requests/${id}/transitions`).send({
       action: 'fail-inspection',
       expectedVersion: version,
-      inspectorName: 'Dana Okafor',
+      inspectorName: 'Imani Voss',
       items: 'Cover over the pipe under 12 in at the left end',
     });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
@@ -258,12 +258,12 @@ describe('odd input on the public page', () => {
     const { id } = await builtJob();
     const { token } = await sendLink(id);
     const odd = [
-      { outcome: 'maybe', inspectorName: 'Dana' },
+      { outcome: 'maybe', inspectorName: 'Imani' },
       { outcome: 'passed', inspectorName: '' },
-      { outcome: 'passed', inspectorName: 'Dana\u0000' },
+      { outcome: 'passed', inspectorName: 'Imani\u0000' },
       { outcome: 'passed', inspectorName: 'x'.repeat(500) },
-      { outcome: 'failed', inspectorName: 'Dana', items: ['not', 'text'] },
-      { outcome: 'passed', inspectorName: 'Dana', extra: true },
+      { outcome: 'failed', inspectorName: 'Imani', items: ['not', 'text'] },
+      { outcome: 'passed', inspectorName: 'Imani', extra: true },
     ];
     for (const body of odd) {
       const res = await outcome(id, token, body);
@@ -275,7 +275,7 @@ describe('odd input on the public page', () => {
       expect(res.status).toBe(404);
     }
     // None of it recorded anything: the link still takes its one outcome.
-    await outcome(id, token, { outcome: 'passed', inspectorName: 'Dana Okafor' }).expect(200);
+    await outcome(id, token, { outcome: 'passed', inspectorName: 'Imani Voss' }).expect(200);
   });
 });
 
@@ -291,9 +291,7 @@ describe('closing waits for a passed inspection where the rule profile asks for 
     expect(before.body.error.message).toMatch(/passed inspection before closing/);
 
     const { token } = await sendLink(id);
-    await outcome(id, token, { outcome: 'failed', inspectorName: 'Dana Okafor', items: 'Reseed the ditch' }).expect(
-      200,
-    );
+    await outcome(id, token, { outcome: 'failed', inspectorName: 'Imani Voss', items: 'Reseed the ditch' }).expect(200);
     // The crew fixes it, takes fresh readings and marks it built again.
     const crew = cast.crew.agent;
     await crew
@@ -311,7 +309,7 @@ describe('closing waits for a passed inspection where the rule profile asks for 
     expect(afterFail.body.error.message).toMatch(/last inspection failed/);
 
     const second = await sendLink(id);
-    await outcome(id, second.token, { outcome: 'passed', inspectorName: 'Dana Okafor' }).expect(200);
+    await outcome(id, second.token, { outcome: 'passed', inspectorName: 'Imani Voss' }).expect(200);
     const closed = await cast.staff.agent
       .post(`/api/requests/${id}/transitions`)
       .send({ action: 'close', expectedVersion: version + 2 });

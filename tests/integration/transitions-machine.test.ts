@@ -40,7 +40,7 @@ const sample: Record<string, string> = {
   visitAt: new Date(Date.now() + 3 * 86_400_000).toISOString(),
   permitDecidedOn: '2026-04-02',
   permitReference: 'FC-ACC-2291',
-  inspectorName: 'Dana Okafor',
+  inspectorName: 'Imani Voss',
   items: 'Reseed both ditch slopes',
 };
 function bodyFor(action: TransitionAction, version: number) {
