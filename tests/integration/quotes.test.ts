@@ -322,8 +322,11 @@ describe('an answer and a revision at the same moment', () => {
         cast.applicant.agent.post(`/api/quotes/${first.id}/accept`).send({ name: 'Ellen Marsh' }),
         cast.staff.agent.post(`/api/quotes/${second.id}/send`),
       ]);
-      // Exactly one of the two wins; the other is told why.
-      expect([accepted.status, sent.status].sort()).toEqual([200, 409]);
+      // Exactly one of the two wins; the other is told why (409), or, on a machine so busy that waiting for the
+      // winner outlasts the statement timeout, to try again (503). Either way nothing half-done is left.
+      const statuses = [accepted.status, sent.status];
+      expect(statuses.filter((s) => s === 200)).toHaveLength(1);
+      expect([409, 503]).toContain(statuses.find((s) => s !== 200));
       const rows = await t.ctx.db.select().from(quotes).where(eq(quotes.requestId, request.id));
       const status = Object.fromEntries(rows.map((r) => [r.version, r.status]));
       expect([
