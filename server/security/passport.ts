@@ -6,10 +6,13 @@ import {
   type VerifyCallback,
 } from 'passport-google-oauth20';
 import type { AppContext } from '../config/context';
+import type { Request } from 'express';
 import { OAuthStateCookieStore } from './oauth-state-cookie';
+import { personReadWithSession } from './session-store';
 import { findSessionUser, signInWithProfile, SignInTurnedOffError } from '../services/users/users.service';
 
 export const callbackPath = '/auth/google/callback';
+const uuidPattern = /^[0-9a-f]{8}-([0-9a-f]{4}-){3}[0-9a-f]{12}$/i;
 
 /**
  * Google sign-in. The same strategy talks to the local stand-in or to Google: only the three URL variables differ.
@@ -53,7 +56,11 @@ export function configurePassport({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   const instance = new passport.Passport();
   instance.use('google', strategy);
   instance.serializeUser((user, done) => done(null, user.id));
-  instance.deserializeUser((id: string, done) => {
+  // The person is usually read with the session already (session-store.ts); otherwise, by id here.
+  instance.deserializeUser((req: Request, id: string, done: (error: unknown, user?: Express.User | false) => void) => {
+    const read = personReadWithSession.get(req);
+    if (read !== undefined) return done(null, read && read.id === id ? read : false);
+    if (!uuidPattern.test(id)) return done(null, false);
     findSessionUser(db, id)
       .then((user) => done(null, user ?? false))
       .catch((error: unknown) => done(error));

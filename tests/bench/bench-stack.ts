@@ -1,7 +1,7 @@
 // The stack a benchmark runs the app on: a throwaway PostgreSQL with the committed migrations, the stand-ins, and
 // the app forked from a small bench server module that says when it is ready. Scripts only, never tests.
 import { fork, type ChildProcess } from 'node:child_process';
-import { chmodSync, mkdtempSync, rmSync } from 'node:fs';
+import { chmodSync, mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -63,5 +63,28 @@ export async function prepareBenchStack(identities: { email: string; name: strin
     rmSync(dir, { recursive: true, force: true });
   };
 
-  return { origin, databaseUrl, startServer, stop };
+  /** CPU time (ms) used so far by PostgreSQL's server and its live backends, read from /proc (Linux only). */
+  const postgresCpuMs = () => {
+    const postmaster = Number(
+      readFileSync(path.join(dir, 'postgres', 'data', 'postmaster.pid'), 'utf8').split('\n')[0],
+    );
+    const tick = 1000 / 100; // USER_HZ is 100 on Linux
+    let total = 0;
+    for (const entry of readdirSync('/proc')) {
+      if (!/^\d+$/.test(entry)) continue;
+      let stat: string;
+      try {
+        stat = readFileSync(`/proc/${entry}/stat`, 'utf8');
+      } catch {
+        continue; // gone meanwhile
+      }
+      // Fields after the command's closing parenthesis: state, ppid, ..., utime (12th), stime (13th).
+      const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+      if (Number(entry) !== postmaster && Number(fields[1]) !== postmaster) continue;
+      total += (Number(fields[11]) + Number(fields[12])) * tick;
+    }
+    return total;
+  };
+
+  return { origin, databaseUrl, startServer, stop, postgresCpuMs };
 }

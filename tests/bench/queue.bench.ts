@@ -82,9 +82,15 @@ async function main() {
       });
     for (const [label, target] of targets) {
       const before = await cpu();
+      const pgBefore = stack.postgresCpuMs();
+      const generatorBefore = process.cpuUsage();
       const result = await measure(origin + target, cookie);
-      const cpuMs = ((await cpu()) - before) / 1000 / (result.rps * seconds);
-      results.push({ label, ...result, cpuMs });
+      const count = result.rps * seconds;
+      const cpuMs = ((await cpu()) - before) / 1000 / count;
+      const pgMs = (stack.postgresCpuMs() - pgBefore) / count;
+      const generator = process.cpuUsage(generatorBefore);
+      const generatorMs = (generator.user + generator.system) / 1000 / count;
+      results.push({ label, ...result, cpuMs, pgMs, generatorMs });
     }
     const floor = results[0];
     console.log(
@@ -96,7 +102,9 @@ async function main() {
       'p95 ms'.padStart(8),
       'req/s'.padStart(8),
       'p95/floor'.padStart(10),
-      'app CPU ms/req'.padStart(15),
+      'CPU ms/req: app'.padStart(16),
+      'PostgreSQL'.padStart(11),
+      'load gen.'.padStart(10),
       'non-200'.padStart(8),
     );
     for (const r of results) {
@@ -106,7 +114,9 @@ async function main() {
         r.p95.toFixed(1).padStart(8),
         r.rps.toFixed(0).padStart(8),
         (r.p95 / floor.p95).toFixed(2).padStart(10),
-        r.cpuMs.toFixed(2).padStart(15),
+        r.cpuMs.toFixed(2).padStart(16),
+        r.pgMs.toFixed(2).padStart(11),
+        r.generatorMs.toFixed(2).padStart(10),
         String(r.errors).padStart(8),
       );
     }

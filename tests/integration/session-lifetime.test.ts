@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { demoPeople } from '../../server/dev/seed/demo-people';
 import { seedDemo } from '../../server/dev/seed';
 import { createTestApp, signIn, type TestApp } from '../setup/test-app';
@@ -81,6 +81,67 @@ describe('sessions', () => {
     const left = await sessionRows();
     expect(left.map((r) => r.sid)).not.toContain(old.sid);
     expect(left.every((r) => !('passport' in r.sess))).toBe(true);
+  });
+});
+
+describe('who is signed in', () => {
+  it('is read with the session in one round trip, fresh on every request', async () => {
+    await t.ctx.pool.query('delete from session');
+    const agent = await signIn(t.app, staff);
+    await agent.get('/api/me').expect(200);
+    const sent: string[] = [];
+    const query = t.ctx.pool.query.bind(t.ctx.pool);
+    const spy = vi.spyOn(t.ctx.pool, 'query').mockImplementation(((...args: Parameters<typeof query>) => {
+      const [first] = args as unknown[];
+      sent.push(typeof first === 'string' ? first : String((first as { text?: string }).text));
+      return query(...args);
+    }) as typeof t.ctx.pool.query);
+    try {
+      const me = await agent.get('/api/me').expect(200);
+      expect(me.body.user).toMatchObject({ email: staff, role: 'staff' });
+      // The session with its person, then the API's rate-limit count: nothing more for a signed-in request.
+      expect(sent, sent.join('\n')).toHaveLength(2);
+    } finally {
+      spy.mockRestore();
+    }
+  });
+
+  it('sees a rename, a new role and a turned-off sign-in on the very next request', async () => {
+    await t.ctx.pool.query('delete from session');
+    const agent = await signIn(t.app, staff);
+    const { id } = (await agent.get('/api/me').expect(200)).body.user as { id: string };
+    try {
+      await t.ctx.pool.query(`update users set name = 'Renamed Person', role = 'crew' where id = $1`, [id]);
+      expect((await agent.get('/api/me').expect(200)).body.user).toMatchObject({
+        name: 'Renamed Person',
+        role: 'crew',
+      });
+      await t.ctx.pool.query('update users set disabled = true where id = $1', [id]);
+      expect((await agent.get('/api/me').expect(200)).body.user).toBeNull();
+      await t.ctx.pool.query('update users set disabled = false where id = $1', [id]);
+      // Turned off means signed out: turning sign-in back on does not revive the old session.
+      expect((await agent.get('/api/me').expect(200)).body.user).toBeNull();
+    } finally {
+      const person = demoPeople.find((p) => p.email === staff)!;
+      await t.ctx.pool.query('update users set name = $2, role = $3, disabled = false where id = $1', [
+        id,
+        person.name,
+        person.role,
+      ]);
+    }
+  });
+
+  it('is nobody when the session names a person who is not there, or names them in a shape we never write', async () => {
+    await t.ctx.pool.query('delete from session');
+    const agent = await signIn(t.app, staff);
+    await agent.get('/api/me').expect(200);
+    await t.ctx.pool.query(`update session set sess = jsonb_set(sess, '{passport,user}', '"not-an-id"')`);
+    expect((await agent.get('/api/me').expect(200)).body.user).toBeNull();
+    const again = await signIn(t.app, staff);
+    await t.ctx.pool.query(
+      `update session set sess = jsonb_set(sess, '{passport,user}', to_jsonb(gen_random_uuid()::text))`,
+    );
+    expect((await again.get('/api/me').expect(200)).body.user).toBeNull();
   });
 });
 
