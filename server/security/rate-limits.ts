@@ -1,12 +1,66 @@
+import { sql } from 'drizzle-orm';
 import { Router, type Request, type RequestHandler } from 'express';
 import { RateLimiterDrizzle, RateLimiterRes } from 'rate-limiter-flexible';
 import type { AppContext } from '../config/context';
+import type { Db } from '../db/client';
 import { rateLimits } from '../db/schema';
 import { AppError } from '../lib/errors';
 import { addressKey } from './client-address';
 
+const at = (name: 'key' | 'points' | 'now' | 'expire') => sql.placeholder(name);
+
+/**
+ * The statement that spends points, as RateLimiterDrizzle writes it (start a new window once the old one has
+ * expired, otherwise add to it), prepared once: the API ceiling runs it on every request, and building the same
+ * statement anew each time was a visible part of a request's cost.
+ */
+function countStatement(db: Db) {
+  const expired = sql`${rateLimits.expire} <= ${at('now')}::timestamptz`;
+  return db
+    .insert(rateLimits)
+    .values({ key: at('key'), points: sql`${at('points')}::integer`, expire: sql`${at('expire')}::timestamptz` })
+    .onConflictDoUpdate({
+      target: rateLimits.key,
+      set: {
+        points: sql`case when ${expired} then ${at('points')}::integer else ${rateLimits.points} + ${at('points')}::integer end`,
+        expire: sql`case when ${expired} then ${at('expire')}::timestamptz else ${rateLimits.expire} end`,
+      },
+    })
+    .returning()
+    .prepare('rate_limit_count');
+}
+
+/** RateLimiterDrizzle with its everyday write (spending points) through the prepared statement above. */
+class Counter extends RateLimiterDrizzle {
+  readonly #count: ReturnType<typeof countStatement>;
+
+  constructor(options: ConstructorParameters<typeof RateLimiterDrizzle>[0] & { storeClient: Db }) {
+    super(options);
+    this.#count = countStatement(options.storeClient);
+  }
+
+  // The store's own upsert (rate-limiter-flexible 11.4.0, pinned): (key, points, msDuration, forceExpire).
+  _upsert(key: string, points: number, msDuration: number, forceExpire = false, ...rest: unknown[]) {
+    if (forceExpire)
+      return (RateLimiterDrizzle.prototype as unknown as Upsert)._upsert.call(
+        this,
+        key,
+        points,
+        msDuration,
+        forceExpire,
+        ...rest,
+      );
+    const now = new Date();
+    const expire = msDuration > 0 ? new Date(now.getTime() + msDuration) : null;
+    return this.#count
+      .execute({ key, points, now: now.toISOString(), expire: expire?.toISOString() ?? null })
+      .then(([row]) => row);
+  }
+}
+type Upsert = { _upsert: (...args: unknown[]) => Promise<unknown> };
+
 /** Which counters a request spends a point from. */
-type Counts = (req: Request) => [RateLimiterDrizzle, string][];
+type Counts = (req: Request) => [Counter, string][];
 
 const HOUR = 3600;
 
@@ -40,7 +94,7 @@ export function rateLimitRouter({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   let first = true;
   const counter = (keyPrefix: string, points: number, duration: number) => {
     // One limiter per process is enough to clear the shared table of expired counts.
-    const limiter = new RateLimiterDrizzle({
+    const limiter = new Counter({
       storeClient: db,
       schema: rateLimits,
       keyPrefix,
@@ -55,10 +109,7 @@ export function rateLimitRouter({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   const personAndAddress = (name: string, perPerson: number, seconds: number): Counts => {
     const person = counter(`${name}-person`, perPerson, seconds);
     const address = counter(`${name}-address`, perPerson * factor, seconds);
-    return (req) => [
-      ...(req.user ? [[person, req.user.id] as [RateLimiterDrizzle, string]] : []),
-      [address, addressKey(req.ip)],
-    ];
+    return (req) => [...(req.user ? [[person, req.user.id] as [Counter, string]] : []), [address, addressKey(req.ip)]];
   };
 
   // The ceiling on all API use costs one count per request: the person's when signed in, otherwise the address's.

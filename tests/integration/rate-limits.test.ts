@@ -91,6 +91,26 @@ describe('rate limits hold across two instances sharing one database', () => {
     await a.get('/api/health').expect((res) => expect(res.status).not.toBe(429));
   });
 
+  it('a window that has ended starts again from one, and one still running keeps its end', async () => {
+    const { a, id } = await bothInstances(owner('returner'));
+    for (let n = 1; n < 12; n += 1) await a.get('/api/me').expect(200);
+    expectLimited(await a.get('/api/me'), /Too many requests/);
+    const key = `api-person:${id}`;
+    const [spent] = (await t.ctx.pool.query('select points, expire from rate_limits where key = $1', [key])).rows;
+    expect(spent.points).toBeGreaterThanOrEqual(12);
+    // The minute is over: the next request opens a new window with one point spent and a minute to run.
+    await t.ctx.pool.query(`update rate_limits set expire = now() - interval '1 second' where key = $1`, [key]);
+    await a.get('/api/me').expect(200);
+    const [fresh] = (await t.ctx.pool.query('select points, expire from rate_limits where key = $1', [key])).rows;
+    expect(fresh.points).toBe(1);
+    expect(Math.abs(fresh.expire.getTime() - (Date.now() + 60_000))).toBeLessThan(5_000);
+    // Within it, a request adds a point and leaves the end where it was.
+    await a.get('/api/me').expect(200);
+    const [added] = (await t.ctx.pool.query('select points, expire from rate_limits where key = $1', [key])).rows;
+    expect(added.points).toBe(2);
+    expect(added.expire.getTime()).toBe(fresh.expire.getTime());
+  });
+
   it('new drafts and photo upload links are limited too', async () => {
     const { a, b } = await bothInstances(owner('drafter'));
     const ids: string[] = [];
