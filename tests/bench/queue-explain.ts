@@ -3,7 +3,7 @@
 import { fillPlaceholders } from 'drizzle-orm';
 import { createDb } from '../../server/db/client';
 import { listQueue } from '../../server/services/queue/queue.service';
-import { queueQuerySchema } from '../../server/services/queue/queue-query';
+import { queueQuerySchema } from '@shared/contracts/queue';
 import { prepareBenchStack } from './bench-stack';
 import { seedQueue } from './queue-seed';
 
@@ -53,6 +53,14 @@ async function main() {
       await query('reset plan_cache_mode');
       console.log(`--- the same, generic plan ---\n${generic.rows.map((r) => r['QUERY PLAN']).join('\n')}`);
     }
+    // Which plan each view's named statement settled on after a dozen runs on one connection.
+    for (const [, params] of views)
+      for (let i = 0; i < 12; i++) await listQueue(db, user, queueQuerySchema.parse({ ...params, limit: '50' }));
+    const settled = (await query(
+      "select name, generic_plans, custom_plans from pg_prepared_statements where name like 'queue%' order by name",
+    )) as { rows: { name: string; generic_plans: number; custom_plans: number }[] };
+    console.log('\n=== plans used by each named statement (generic / custom) ===');
+    for (const r of settled.rows) console.log(`${r.name.padEnd(60)} ${r.generic_plans} / ${r.custom_plans}`);
   } finally {
     await pool.end();
     await stack.stop();

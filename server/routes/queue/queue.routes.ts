@@ -4,7 +4,7 @@ import type { AppContext } from '../../config/context';
 import { handle, uuidParam } from '../../lib/handle';
 import { officeRoles, requireRole } from '../../middleware/require-role';
 import { assignRequest, queueOptions } from '../../services/queue/assignment.service';
-import { queueQuerySchema } from '../../services/queue/queue-query';
+import { queueQuerySchema } from '@shared/contracts/queue';
 import { listQueue } from '../../services/queue/queue.service';
 
 export const assignInputSchema = z.strictObject({

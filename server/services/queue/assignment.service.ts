@@ -1,3 +1,4 @@
+import type { QueueOptions } from '@shared/contracts/queue';
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { officeRoles } from '@shared/workflow/roles';
 import type { SessionUser } from '../../lib/session-user';
@@ -20,7 +21,7 @@ export async function queueOptions(db: DbOrTx) {
     .select({ id: jurisdictions.id, name: jurisdictions.name })
     .from(jurisdictions)
     .orderBy(asc(jurisdictions.name));
-  return { jurisdictions: places, people: await officePeople(db) };
+  return { jurisdictions: places, people: await officePeople(db) } satisfies QueueOptions;
 }
 
 /**

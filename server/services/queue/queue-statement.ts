@@ -3,7 +3,7 @@ import { alias } from 'drizzle-orm/pg-core';
 import { waitingOnOffice } from '@shared/workflow/statuses';
 import type { DbOrTx } from '../../db/client';
 import { jurisdictions, requests, users } from '../../db/schema';
-import type { QueueSort } from './queue-query';
+import type { QueueSort } from '@shared/contracts/queue';
 
 const assignee = alias(users, 'assignee');
 export const queueCountCap = 200;
@@ -25,7 +25,7 @@ const sortColumns: Record<QueueSort, { column: AnyColumn; cast: string }> = {
  */
 export const sortsEndedLast = (sort: QueueSort) => sort === 'waiting';
 
-/** Which filters a page uses and how it is ordered: everything that changes the SQL text, and nothing else. */
+/** Which filters a page uses, how it is ordered and how many rows it reads: everything that changes the SQL text. */
 export interface QueueShape {
   /** One status is an equality, so an index on (authority, status, sort column) can hand rows over in order. */
   statuses: 'one' | 'many' | null;
@@ -36,6 +36,8 @@ export interface QueueShape {
   cursor: boolean;
   sort: QueueSort;
   dir: 'asc' | 'desc';
+  /** Rows to read (a page and one more), written into the SQL: see `rowsToRead`. */
+  rows: number;
 }
 
 /** The values a page fills into its shape's statement. */
@@ -48,10 +50,17 @@ export interface QueueValues {
   cursorValue?: string;
   cursorId?: string;
   cursorEnded?: boolean;
-  limit: number;
 }
 
 const p = (name: keyof QueueValues) => sql.placeholder(name);
+
+/**
+ * A row count written into the statement rather than bound. PostgreSQL keeps a named statement's generic plan (no
+ * planning per run) only when it costs about what the custom plans did, and it costs a bound LIMIT as a tenth of the
+ * table: every page of the queue was planned afresh, which took longer than running it. Drizzle writes an SQL value
+ * given to `limit()` into the text as it is.
+ */
+const rowsToRead = (n: number) => sql.raw(String(Math.trunc(n))) as unknown as number;
 
 function filters(shape: QueueShape): SQL[] {
   const where: SQL[] = [ne(requests.status, 'draft')];
@@ -99,7 +108,7 @@ function build(db: DbOrTx, shape: QueueShape, name: string) {
     .select({ one: sql`1` })
     .from(requests)
     .where(and(...where))
-    .limit(queueCountCap + 1);
+    .limit(rowsToRead(queueCountCap + 1));
   const total = shape.cursor ? sql<null>`null::int` : sql<number>`(select count(*)::int from (${capped}) as capped)`;
   return db
     .select({
@@ -122,11 +131,12 @@ function build(db: DbOrTx, shape: QueueShape, name: string) {
     .leftJoin(assignee, eq(assignee.id, requests.assigneeId))
     .where(and(...where, ...(shape.cursor ? [after] : [])))
     .orderBy(...orderBy)
-    .limit(p('limit'))
+    .limit(rowsToRead(shape.rows))
     .prepare(name);
 }
 
 type QueueStatement = ReturnType<typeof build>;
+const maxNamedStatements = 300;
 const prepared = new WeakMap<DbOrTx, Map<string, QueueStatement>>();
 
 /**
@@ -141,6 +151,9 @@ export function queueStatement(db: DbOrTx, shape: QueueShape): QueueStatement {
     .map((v) => (v === true ? 1 : v === false || v === null ? 0 : v))
     .join('_')}`;
   let statement = byShape.get(name);
-  if (!statement) byShape.set(name, (statement = build(db, shape, name)));
+  if (statement) return statement;
+  // Shapes times page sizes could grow without end; past a few hundred, a page runs as an unnamed statement.
+  if (byShape.size >= maxNamedStatements) return build(db, shape, '');
+  byShape.set(name, (statement = build(db, shape, name)));
   return statement;
 }

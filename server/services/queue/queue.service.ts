@@ -3,7 +3,8 @@ import { allowedTransitions } from '@shared/workflow/transitions';
 import type { SessionUser } from '../../lib/session-user';
 import type { DbOrTx } from '../../db/client';
 import { badRequest } from '../../lib/errors';
-import { decodeQueueCursor, encodeQueueCursor, searchQuery, type QueueQuery } from './queue-query';
+import type { QueuePage, QueueQuery, QueueRow } from '@shared/contracts/queue';
+import { decodeQueueCursor, encodeQueueCursor, searchQuery } from './queue-query';
 import {
   queueCountCap,
   queueStatement,
@@ -63,13 +64,13 @@ export async function listQueue(db: DbOrTx, user: SessionUser, query: QueueQuery
     cursor: Boolean(cursor),
     sort: query.sort,
     dir: query.dir,
+    rows: query.limit + 1,
   };
   const values: QueueValues = {
     status: query.status?.[0],
     statuses: query.status,
     jurisdiction: query.jurisdiction,
     search: search ?? undefined,
-    limit: query.limit + 1,
     assignee: query.assignee === 'me' ? user.id : query.assignee,
     cursorValue: cursor?.value,
     cursorId: cursor?.id,
@@ -81,29 +82,30 @@ export async function listQueue(db: DbOrTx, user: SessionUser, query: QueueQuery
   const more = rows.length > query.limit;
   const items = more ? rows.slice(0, query.limit) : rows;
   const last = items.at(-1);
+  // Each row built field by field: copying a row minus some keys (object rest) cost more than the query's mapping.
+  const requests = items.map((row): QueueRow => {
+    const words = rowWords[row.status];
+    return {
+      id: row.id,
+      reference: row.reference,
+      status: row.status,
+      statusLabel: words.statusLabel,
+      applicantName: row.applicantName,
+      roadName: row.roadName,
+      statusChangedAt: row.statusChangedAt,
+      waitingOnUs: words.waitingOnUs,
+      nextAction: words.nextAction,
+      jurisdiction: row.jurisdictionId ? { id: row.jurisdictionId, name: row.jurisdictionName ?? '' } : null,
+      assignee: row.assigneeId ? { id: row.assigneeId, name: row.assigneeName ?? '' } : null,
+    };
+  });
   return {
-    requests: items.map(
-      ({
-        sortKey: _key,
-        ended: _ended,
-        total: _total,
-        jurisdictionId,
-        jurisdictionName,
-        assigneeId,
-        assigneeName,
-        ...row
-      }) => ({
-        ...row,
-        ...rowWords[row.status],
-        jurisdiction: jurisdictionId ? { id: jurisdictionId, name: jurisdictionName ?? '' } : null,
-        assignee: assigneeId ? { id: assigneeId, name: assigneeName ?? '' } : null,
-      }),
-    ),
+    requests,
     nextCursor:
       more && last
         ? encodeQueueCursor(last.sortKey, last.id, sortsEndedLast(query.sort) ? last.ended : undefined)
         : null,
     total: n === null ? null : Math.min(n, queueCountCap),
     totalIsCapped: n !== null && n > queueCountCap,
-  };
+  } satisfies QueuePage;
 }
