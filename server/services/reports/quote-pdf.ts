@@ -1,6 +1,7 @@
 import PDFDocument from 'pdfkit';
 import { SAFETY_CAUTIONS } from '@shared/engine';
 import { formatDay } from '@shared/format/dates';
+import { quantityWithUnit } from '@shared/format/counts';
 import { formatBasisPoints, formatCents } from '@shared/money/money';
 import type { QuoteLineView } from '@shared/contracts/quotes';
 import { registerReportFonts, reportFonts } from './pdf-fonts';
@@ -27,8 +28,6 @@ export interface QuotePdfData {
   /** A preview says so across its top; a sent quote carries its date. */
   preview: boolean;
 }
-
-const quantityText = (q: number) => (Number.isInteger(q) ? String(q) : q.toFixed(2));
 
 /** The quote as the owner receives it, built from the stored quote alone. */
 export function buildQuotePdf(data: QuotePdfData): Promise<Buffer> {
@@ -72,7 +71,7 @@ export function buildQuotePdf(data: QuotePdfData): Promise<Buffer> {
     quote.lines.map((l) => [
       `${l.description}${l.taxable ? ' (taxed)' : ''}`,
       l.source || '-',
-      `${quantityText(l.quantity)} ${l.unit}`,
+      quantityWithUnit(l.quantity, l.unit),
       formatCents(l.unitPriceCents),
       formatCents(l.amountCents),
     ]),

@@ -1,8 +1,7 @@
 import { ScrollRegion } from '@/components/ui/scroll-region';
 import type { QuoteView } from '@shared/contracts/quotes';
 import { formatBasisPoints, formatCents } from '@shared/money/money';
-
-const quantityText = (q: number) => (Number.isInteger(q) ? String(q) : q.toFixed(2));
+import { quantityWithUnit } from '@shared/format/counts';
 
 /** A quote's lines and totals, read only: what the owner reads and what a sent version shows the office. */
 export function QuoteLinesTable({ quote, showSources = true }: { quote: QuoteView; showSources?: boolean }) {
@@ -26,9 +25,7 @@ export function QuoteLinesTable({ quote, showSources = true }: { quote: QuoteVie
                 {line.taxable && <span className="text-stone-600"> (taxed)</span>}
                 {showSources && line.source && <span className="block text-xs text-stone-600">{line.source}</span>}
               </td>
-              <td className="pr-2 text-right whitespace-nowrap">
-                {quantityText(line.quantity)} {line.unit}
-              </td>
+              <td className="pr-2 text-right whitespace-nowrap">{quantityWithUnit(line.quantity, line.unit)}</td>
               <td className="pr-2 text-right">{formatCents(line.unitPriceCents)}</td>
               <td className="text-right">{formatCents(line.amountCents)}</td>
             </tr>
