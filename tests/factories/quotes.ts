@@ -9,9 +9,11 @@ import { createGradeCheck } from './grade-checks';
  */
 export async function createSentQuote(
   db: DbOrTx,
-  opts: { requestId: string; createdById: string; totalCents: number; depositCents: number },
+  opts: { requestId: string; createdById: string; totalCents: number; depositCents: number; gradeCheckId?: string },
 ) {
-  const check = await createGradeCheck(db, { requestId: opts.requestId, createdById: opts.createdById });
+  // Priced from the given check, or from a stand-in check made (and attached) here.
+  const checkId =
+    opts.gradeCheckId ?? (await createGradeCheck(db, { requestId: opts.requestId, createdById: opts.createdById })).id;
   const [card] = await db
     .insert(rateCardVersions)
     .values({
@@ -28,7 +30,7 @@ export async function createSentQuote(
       requestId: opts.requestId,
       version: 1,
       status: 'sent',
-      gradeCheckId: check.id,
+      gradeCheckId: checkId,
       rateCardVersionId: card.id,
       lines: [],
       subtotalCents: opts.totalCents,

@@ -2,9 +2,10 @@ import { execFileSync } from 'node:child_process';
 import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { eq } from 'drizzle-orm';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, inject, it, vi } from 'vitest';
 import { documents, requestEvents, requests } from '../../server/db/schema';
 import { signInCast, type Cast } from '../factories/office-cast';
+import { createSentQuote } from '../factories/quotes';
 import { createRequestRow } from '../factories/request-rows';
 import { createTestApp, type TestApp } from '../setup/test-app';
 import { currentVersionId, pdfText, surveyInputs } from './grade-check-survey';
@@ -190,6 +191,40 @@ describe('the permit packet', () => {
     expect(stored.filter((d) => d.kind === 'permit-packet')).toHaveLength(0);
     const [row] = await t.ctx.db.select().from(requests).where(eq(requests.id, request.id));
     expect(row.status).toBe('checked');
+  });
+
+  it('is not drawn or stored at all when the filing waits for the deposit', async () => {
+    await cast.admin.agent
+      .put('/api/settings/payment-waits')
+      .send({ depositBeforePermit: true, balanceBeforeClose: false })
+      .expect(200);
+    const sends = vi.spyOn(t.ctx.s3, 'send');
+    try {
+      const { request, check } = await checkedRequest();
+      const quote = await createSentQuote(t.ctx.db, {
+        requestId: request.id,
+        createdById: cast.staff.id,
+        totalCents: 500_000,
+        depositCents: 150_000,
+        gradeCheckId: check.id,
+      });
+      await cast.applicant.agent.post(`/api/quotes/${quote.id}/accept`).send({ name: 'Ellen Marsh' }).expect(200);
+      sends.mockClear();
+      const refused = await cast.staff.agent
+        .post(`/api/requests/${request.id}/transitions`)
+        .send({ action: 'file-permit', expectedVersion: request.version, permitReference: 'MC-2' })
+        .expect(409);
+      expect(refused.body.error.message).toMatch(/waits for the deposit/);
+      const written = sends.mock.calls.map(([command]) => command.constructor.name);
+      expect(written).not.toContain('PutObjectCommand');
+      expect(written).not.toContain('DeleteObjectCommand');
+    } finally {
+      sends.mockRestore();
+      await cast.admin.agent
+        .put('/api/settings/payment-waits')
+        .send({ depositBeforePermit: false, balanceBeforeClose: false })
+        .expect(200);
+    }
   });
 });
 

@@ -123,10 +123,16 @@ export const markChecked: ActionDef<'mark-checked'> = {
   },
 };
 
-/** The packet sent with the application is stored first, then recorded with the filing and linked from the timeline. */
+/**
+ * The packet sent with the application is stored first, then recorded with the filing and linked from the timeline.
+ * A filing that waits for the deposit is refused before any packet is drawn; the locked check in `run` stays.
+ */
 export const filePermit: ActionDef<'file-permit'> = {
   emails: { to: ['applicant'] },
-  prepare: (ctx, { actor, requestId, body }) => packetForFiling(ctx, actor, requestId, body),
+  prepare: async (ctx, { actor, requestId, body }) => {
+    await requirePaid(ctx.db, requestId, 'file-permit');
+    return packetForFiling(ctx, actor, requestId, body);
+  },
   discard: (ctx, prepared) => discardStoredPacket(ctx, prepared as FilingPacket),
   run: async ({ tx, row, body, actor, prepared }) => {
     await requirePaid(tx, row.id, 'file-permit');
