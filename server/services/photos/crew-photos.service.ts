@@ -1,6 +1,5 @@
-import { DeleteObjectCommand, PutObjectCommand } from '@aws-sdk/client-s3';
-import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
-import { and, asc, eq, gt, isNotNull, or } from 'drizzle-orm';
+import { DeleteObjectCommand } from '@aws-sdk/client-s3';
+import { and, asc, eq, isNotNull } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import { photoExtensions, type photoContentTypes } from '@shared/requests/photo-rules';
 import {
@@ -16,7 +15,14 @@ import type { DbOrTx } from '../../db/client';
 import { photos, users } from '../../db/schema';
 import { badRequest, conflict, notFound } from '../../lib/errors';
 import { loadVisibleRequest } from '../requests/request-access';
-import { checkStoredFile, uploadSeconds, type PhotoRow } from './photos.service';
+import {
+  checkStoredFile,
+  countHeldPhotos,
+  loadPhotoForUpdate,
+  markPhotoStored,
+  presignPhotoPut,
+  type PhotoRow,
+} from './photos.service';
 
 type PhotoContext = Pick<AppContext, 'db' | 's3' | 'env'>;
 export type CrewPhotoRow = PhotoRow & { kind: CrewPhotoKind; takenBy: string };
@@ -36,23 +42,6 @@ async function loadOwnJob(tx: DbOrTx, user: SessionUser, requestId: string) {
 async function withTaker(db: DbOrTx, photo: PhotoRow): Promise<CrewPhotoRow> {
   const [taker] = await db.select({ name: users.name }).from(users).where(eq(users.id, photo.uploaderId));
   return { ...photo, kind: photo.kind as CrewPhotoKind, takenBy: taker?.name ?? '' };
-}
-
-function presignPut(ctx: PhotoContext, photo: PhotoRow) {
-  const command = new PutObjectCommand({
-    Bucket: ctx.env.S3_BUCKET,
-    Key: photo.objectKey,
-    ContentType: photo.contentType,
-    ContentLength: photo.sizeBytes,
-  });
-  return getSignedUrl(ctx.s3, command, { expiresIn: uploadSeconds, signableHeaders: new Set(['content-type']) }).then(
-    (url) => ({
-      method: 'PUT' as const,
-      url,
-      headers: { 'content-type': photo.contentType },
-      expiresInSeconds: uploadSeconds,
-    }),
-  );
 }
 
 const sameFile = (photo: PhotoRow, input: CrewPhotoUploadInput) =>
@@ -87,18 +76,7 @@ export async function registerCrewPhoto(
       return { photo: existing, replayed: true };
     }
     await loadOwnJob(tx, user, requestId);
-    const recent = new Date(Date.now() - uploadSeconds * 1000);
-    const counted = await tx
-      .select({ id: photos.id })
-      .from(photos)
-      .where(
-        and(
-          eq(photos.requestId, requestId),
-          isNotNull(photos.kind),
-          or(eq(photos.status, 'stored'), and(eq(photos.status, 'pending'), gt(photos.createdAt, recent))),
-        ),
-      );
-    if (counted.length >= maxCrewPhotosPerJob) {
+    if ((await countHeldPhotos(tx, requestId, 'crew')) >= maxCrewPhotosPerJob) {
       throw badRequest(`A job can have at most ${maxCrewPhotosPerJob} crew photos. Remove one to add another.`, {
         fileName: `at most ${maxCrewPhotosPerJob} crew photos per job`,
       });
@@ -134,18 +112,8 @@ export async function registerCrewPhoto(
   if (photo.status === 'removed') {
     throw conflict('This photo was removed. Take it again to add it.', { idempotencyKey: 'the photo was removed' });
   }
-  const upload = photo.status === 'stored' ? null : await presignPut(ctx, photo);
+  const upload = photo.status === 'stored' ? null : await presignPhotoPut(ctx, photo);
   return { photo: await withTaker(ctx.db, photo), upload, replayed };
-}
-
-async function loadCrewPhoto(tx: DbOrTx, requestId: string, photoId: string) {
-  const [photo] = await tx
-    .select()
-    .from(photos)
-    .where(and(eq(photos.id, photoId), eq(photos.requestId, requestId), isNotNull(photos.kind)))
-    .for('update');
-  if (!photo || photo.status === 'removed') throw notFound('Photo');
-  return photo;
 }
 
 /** Lists the photo once storage holds exactly the announced photo. Confirming a stored photo again answers it. */
@@ -158,26 +126,15 @@ export async function confirmCrewPhoto(
 ) {
   const announced = await ctx.db.transaction(async (tx) => {
     await loadVisibleRequest(tx, user, requestId);
-    const photo = await loadCrewPhoto(tx, requestId, photoId);
+    const photo = await loadPhotoForUpdate(tx, requestId, photoId, 'crew');
     if (photo.uploaderId !== user.id) throw notFound('Photo');
     return photo;
   });
   if (announced.status === 'stored') return withTaker(ctx.db, announced);
   await checkStoredFile(ctx, announced);
   const stored = await ctx.db.transaction(async (tx) => {
-    const photo = await loadCrewPhoto(tx, requestId, photoId);
-    const [row] = await tx
-      .update(photos)
-      .set({
-        status: 'stored',
-        storedAt: photo.storedAt ?? new Date(),
-        caption: extra.caption ?? photo.caption,
-        gpsLat: extra.gpsLat ?? photo.gpsLat,
-        gpsLng: extra.gpsLng ?? photo.gpsLng,
-      })
-      .where(eq(photos.id, photo.id))
-      .returning();
-    return row;
+    const photo = await loadPhotoForUpdate(tx, requestId, photoId, 'crew');
+    return markPhotoStored(tx, photo, extra);
   });
   return withTaker(ctx.db, stored);
 }
@@ -186,7 +143,7 @@ export async function confirmCrewPhoto(
 export async function removeCrewPhoto(ctx: PhotoContext, user: SessionUser, requestId: string, photoId: string) {
   const photo = await ctx.db.transaction(async (tx) => {
     await loadOwnJob(tx, user, requestId);
-    const row = await loadCrewPhoto(tx, requestId, photoId);
+    const row = await loadPhotoForUpdate(tx, requestId, photoId, 'crew');
     if (row.uploaderId !== user.id) throw notFound('Photo');
     await tx.update(photos).set({ status: 'removed' }).where(eq(photos.id, photoId));
     return row;

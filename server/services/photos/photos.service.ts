@@ -1,6 +1,6 @@
 import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand } from '@aws-sdk/client-s3';
 import { getSignedUrl } from '@aws-sdk/s3-request-presigner';
-import { and, asc, eq, gt, inArray, isNull, or } from 'drizzle-orm';
+import { and, asc, eq, gt, inArray, isNotNull, isNull, or } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import { maxPhotosPerRequest, photoExtensions, type photoContentTypes } from '@shared/requests/photo-rules';
 import { photosEditable } from '@shared/contracts/photos';
@@ -29,6 +29,77 @@ export async function loadOwnEditable(tx: DbOrTx, user: SessionUser, requestId: 
   return row;
 }
 
+/** Which photos a question is about: the owner's site photos, or the crew's photos of the work (they carry a kind). */
+export type PhotoSet = 'site' | 'crew';
+const inSet = (set: PhotoSet) => (set === 'crew' ? isNotNull(photos.kind) : isNull(photos.kind));
+
+/** How many photos of a set a request holds, counting an upload that was never confirmed only until its URL expired. */
+export async function countHeldPhotos(tx: DbOrTx, requestId: string, set: PhotoSet) {
+  const recent = new Date(Date.now() - uploadSeconds * 1000);
+  const counted = await tx
+    .select({ id: photos.id })
+    .from(photos)
+    .where(
+      and(
+        eq(photos.requestId, requestId),
+        inSet(set),
+        or(eq(photos.status, 'stored'), and(eq(photos.status, 'pending'), gt(photos.createdAt, recent))),
+      ),
+    );
+  return counted.length;
+}
+
+/** A URL to put the announced photo into storage. Signing type and length means storage refuses any other file. */
+export async function presignPhotoPut(ctx: Storage, photo: Pick<PhotoRow, 'objectKey' | 'contentType' | 'sizeBytes'>) {
+  const command = new PutObjectCommand({
+    Bucket: ctx.env.S3_BUCKET,
+    Key: photo.objectKey,
+    ContentType: photo.contentType,
+    ContentLength: photo.sizeBytes,
+  });
+  const url = await getSignedUrl(ctx.s3, command, {
+    expiresIn: uploadSeconds,
+    signableHeaders: new Set(['content-type']),
+  });
+  return {
+    method: 'PUT' as const,
+    url,
+    headers: { 'content-type': photo.contentType },
+    expiresInSeconds: uploadSeconds,
+  };
+}
+
+/** One photo of a request and set, locked for a change; a removed one is not found. */
+export async function loadPhotoForUpdate(tx: DbOrTx, requestId: string, photoId: string, set: PhotoSet) {
+  const [photo] = await tx
+    .select()
+    .from(photos)
+    .where(and(eq(photos.id, photoId), eq(photos.requestId, requestId), inSet(set)))
+    .for('update');
+  if (!photo || photo.status === 'removed') throw notFound('Photo');
+  return photo;
+}
+
+/** Inside a transaction, once storage holds the file: the photo is listed, with what the confirmation added. */
+export async function markPhotoStored(
+  tx: DbOrTx,
+  photo: PhotoRow,
+  extra: { caption?: string; gpsLat?: number | null; gpsLng?: number | null },
+) {
+  const [stored] = await tx
+    .update(photos)
+    .set({
+      status: 'stored',
+      storedAt: photo.storedAt ?? new Date(),
+      caption: extra.caption ?? photo.caption,
+      gpsLat: extra.gpsLat ?? photo.gpsLat,
+      gpsLng: extra.gpsLng ?? photo.gpsLng,
+    })
+    .where(eq(photos.id, photo.id))
+    .returning();
+  return stored;
+}
+
 export async function presignUpload(
   ctx: PhotoContext,
   user: SessionUser,
@@ -37,19 +108,7 @@ export async function presignUpload(
 ) {
   return ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
-    // An upload that never got confirmed stops counting once its URL has expired.
-    const recent = new Date(Date.now() - uploadSeconds * 1000);
-    const counted = await tx
-      .select({ id: photos.id })
-      .from(photos)
-      .where(
-        and(
-          eq(photos.requestId, requestId),
-          isNull(photos.kind),
-          or(eq(photos.status, 'stored'), and(eq(photos.status, 'pending'), gt(photos.createdAt, recent))),
-        ),
-      );
-    if (counted.length >= maxPhotosPerRequest) {
+    if ((await countHeldPhotos(tx, requestId, 'site')) >= maxPhotosPerRequest) {
       throw badRequest(`A request can have at most ${maxPhotosPerRequest} photos. Remove one to add another.`, {
         fileName: `at most ${maxPhotosPerRequest} photos per request`,
       });
@@ -60,37 +119,8 @@ export async function presignUpload(
       .insert(photos)
       .values({ id, requestId, uploaderId: user.id, objectKey, ...file })
       .returning();
-    const command = new PutObjectCommand({
-      Bucket: ctx.env.S3_BUCKET,
-      Key: objectKey,
-      ContentType: file.contentType,
-      ContentLength: file.sizeBytes,
-    });
-    // Signing type and length means storage refuses any other file under this URL.
-    const url = await getSignedUrl(ctx.s3, command, {
-      expiresIn: uploadSeconds,
-      signableHeaders: new Set(['content-type']),
-    });
-    return {
-      photo,
-      upload: {
-        method: 'PUT' as const,
-        url,
-        headers: { 'content-type': file.contentType },
-        expiresInSeconds: uploadSeconds,
-      },
-    };
+    return { photo, upload: await presignPhotoPut(ctx, photo) };
   });
-}
-
-async function loadPhoto(tx: DbOrTx, requestId: string, photoId: string) {
-  const [photo] = await tx
-    .select()
-    .from(photos)
-    .where(and(eq(photos.id, photoId), eq(photos.requestId, requestId), isNull(photos.kind)))
-    .for('update');
-  if (!photo || photo.status === 'removed') throw notFound('Photo');
-  return photo;
 }
 
 /** The stored object must be exactly the announced file, and a photo by its own first bytes, whatever it was called. */
@@ -130,31 +160,20 @@ export async function confirmUpload(
 ) {
   const announced = await ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
-    return loadPhoto(tx, requestId, photoId);
+    return loadPhotoForUpdate(tx, requestId, photoId, 'site');
   });
   await checkStoredFile(ctx, announced);
   return ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
-    const photo = await loadPhoto(tx, requestId, photoId);
-    const [stored] = await tx
-      .update(photos)
-      .set({
-        status: 'stored',
-        storedAt: photo.storedAt ?? new Date(),
-        caption: extra.caption ?? photo.caption,
-        gpsLat: extra.gpsLat ?? photo.gpsLat,
-        gpsLng: extra.gpsLng ?? photo.gpsLng,
-      })
-      .where(eq(photos.id, photo.id))
-      .returning();
-    return stored;
+    const photo = await loadPhotoForUpdate(tx, requestId, photoId, 'site');
+    return markPhotoStored(tx, photo, extra);
   });
 }
 
 export async function setCaption(db: Db, user: SessionUser, requestId: string, photoId: string, caption: string) {
   return db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
-    await loadPhoto(tx, requestId, photoId);
+    await loadPhotoForUpdate(tx, requestId, photoId, 'site');
     const [row] = await tx.update(photos).set({ caption }).where(eq(photos.id, photoId)).returning();
     return row;
   });
@@ -163,7 +182,7 @@ export async function setCaption(db: Db, user: SessionUser, requestId: string, p
 export async function removePhoto(ctx: PhotoContext, user: SessionUser, requestId: string, photoId: string) {
   const photo = await ctx.db.transaction(async (tx) => {
     await loadOwnEditable(tx, user, requestId);
-    const row = await loadPhoto(tx, requestId, photoId);
+    const row = await loadPhotoForUpdate(tx, requestId, photoId, 'site');
     await tx.update(photos).set({ status: 'removed' }).where(eq(photos.id, photoId));
     return row;
   });
