@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import { Router, type Request, type RequestHandler } from 'express';
+import { LRUCache } from 'lru-cache';
 import { RateLimiterDrizzle, RateLimiterRes } from 'rate-limiter-flexible';
 import type { AppContext } from '../config/context';
 import type { Db } from '../db/client';
@@ -59,8 +60,73 @@ class Counter extends RateLimiterDrizzle {
 }
 type Upsert = { _upsert: (...args: unknown[]) => Promise<unknown> };
 
+/** Something a request spends one point from, refusing with RateLimiterRes once none are left. */
+interface Spend {
+  consume(key: string): Promise<unknown>;
+}
+
+/**
+ * How many points of a ceiling one process takes from the shared count at a time: a twentieth. Processes never let
+ * more through than the ceiling; one may refuse a person up to a block early while other processes still hold
+ * unspent points of that person's minute.
+ */
+export const leaseSize = (points: number) => Math.max(1, Math.floor(points / 20));
+
+/**
+ * A per-request ceiling that writes the shared count once per block of points instead of once per request. The
+ * process takes a block from PostgreSQL (the same count, window and statement as any other limit), spends it here
+ * one request at a time until it runs out or the window ends, then takes the next. Requests arriving together wait
+ * for one claim rather than each making their own. A claim that finds fewer points left than a block holds only
+ * what was left; one that finds none refuses, with the time until the shared window ends.
+ */
+class LeasedCeiling implements Spend {
+  readonly #held = new LRUCache<string, { left: number }>({ max: 10_000, ttl: 60_000 });
+  readonly #claims = new Map<string, Promise<void>>();
+  readonly #block: number;
+
+  constructor(
+    private readonly counter: Counter,
+    private readonly points: number,
+  ) {
+    this.#block = leaseSize(points);
+  }
+
+  async consume(key: string) {
+    for (;;) {
+      const held = this.#held.get(key);
+      if (held && held.left > 0) {
+        held.left--;
+        return;
+      }
+      let claim = this.#claims.get(key);
+      if (!claim) {
+        claim = this.#claim(key).finally(() => this.#claims.delete(key));
+        this.#claims.set(key, claim);
+      }
+      await claim;
+    }
+  }
+
+  async #claim(key: string) {
+    let granted: number;
+    let result: RateLimiterRes;
+    try {
+      result = await this.counter.consume(key, this.#block);
+      granted = this.#block;
+    } catch (error) {
+      if (!(error instanceof RateLimiterRes)) throw error;
+      // The count went past the ceiling with this claim: what was left before it is all this process may use.
+      granted = Math.max(0, this.points - (error.consumedPoints - this.#block));
+      if (granted === 0) throw error;
+      result = error;
+    }
+    // Held until the shared window ends, never longer: the next window is claimed afresh.
+    if (result.msBeforeNext > 0) this.#held.set(key, { left: granted }, { ttl: result.msBeforeNext });
+  }
+}
+
 /** Which counters a request spends a point from. */
-type Counts = (req: Request) => [Counter, string][];
+type Counts = (req: Request) => [Spend, string][];
 
 const HOUR = 3600;
 
@@ -109,12 +175,14 @@ export function rateLimitRouter({ env, db }: Pick<AppContext, 'env' | 'db'>) {
   const personAndAddress = (name: string, perPerson: number, seconds: number): Counts => {
     const person = counter(`${name}-person`, perPerson, seconds);
     const address = counter(`${name}-address`, perPerson * factor, seconds);
-    return (req) => [...(req.user ? [[person, req.user.id] as [Counter, string]] : []), [address, addressKey(req.ip)]];
+    return (req) => [...(req.user ? [[person, req.user.id] as [Spend, string]] : []), [address, addressKey(req.ip)]];
   };
 
-  // The ceiling on all API use costs one count per request: the person's when signed in, otherwise the address's.
-  const apiPerson = counter('api-person', env.RATE_LIMIT_API_PER_MINUTE, 60);
-  const apiAddress = counter('api-address', env.RATE_LIMIT_API_PER_MINUTE * factor, 60);
+  // The ceiling on all API use spends one point per request, the person's when signed in, otherwise the address's,
+  // from blocks this process takes from the shared count (a write per block, not per request).
+  const ceilingOf = (prefix: string, points: number) => new LeasedCeiling(counter(prefix, points, 60), points);
+  const apiPerson = ceilingOf('api-person', env.RATE_LIMIT_API_PER_MINUTE);
+  const apiAddress = ceilingOf('api-address', env.RATE_LIMIT_API_PER_MINUTE * factor);
   const api: Counts = (req) => [req.user ? [apiPerson, req.user.id] : [apiAddress, addressKey(req.ip)]];
   const signInAddress = counter('sign-in-address', env.RATE_LIMIT_SIGN_INS_PER_HOUR, HOUR);
 

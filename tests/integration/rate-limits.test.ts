@@ -4,6 +4,7 @@ import { createApp } from '../../server/app';
 import type { AppContext } from '../../server/config/context';
 import { closeContext, createContext } from '../../server/context-factory';
 import { parseEnv } from '../../server/config/env';
+import { leaseSize } from '../../server/security/rate-limits';
 import { maxOpenDrafts } from '../../server/services/requests/drafts.service';
 import { createRequestRow } from '../factories/request-rows';
 import { createTestApp, signIn, type TestApp } from '../setup/test-app';
@@ -133,5 +134,47 @@ describe('open drafts per owner', () => {
     const res = await a.post('/api/requests').send({});
     expect(res.status).toBe(409);
     expect(res.body.error.message).toMatch(/5 requests that are not sent yet/);
+  });
+});
+
+describe('the API ceiling at its everyday size', () => {
+  // 100 a minute: each instance takes the shared count in blocks of five (a twentieth) rather than one by one.
+  let ctxs: AppContext[];
+  let apps: TestApp['app'][];
+  beforeAll(() => {
+    ctxs = [0, 1].map(() => createContext(parseEnv({ ...t.env, RATE_LIMIT_API_PER_MINUTE: '100' })));
+    apps = ctxs.map((ctx) => createApp(ctx));
+  });
+  afterAll(() => Promise.all(ctxs.map((ctx) => closeContext(ctx))));
+  const pointsOf = async (id: string) =>
+    (await t.ctx.pool.query('select points from rate_limits where key = $1', [`api-person:${id}`])).rows[0]?.points;
+
+  it('writes the shared count once per block, also for requests that arrive together', async () => {
+    expect(leaseSize(100)).toBe(5);
+    const email = owner('steady');
+    const agent = await signIn(apps[0], email);
+    const { id } = (await signIn(t.app, email).then((a) => a.get('/api/me'))).body.user as { id: string };
+    await t.ctx.pool.query('delete from rate_limits');
+    for (let n = 0; n < 7; n += 1) await agent.get('/api/me').expect(200);
+    // Seven requests took two blocks: two writes, not seven.
+    expect(await pointsOf(id)).toBe(10);
+    const together = await Promise.all(Array.from({ length: 12 }, () => agent.get('/api/me')));
+    expect(together.map((r) => r.status)).toEqual(Array(12).fill(200));
+    // Three left in hand, nine more needed: two more blocks, not one claim per waiting request.
+    expect(await pointsOf(id)).toBe(20);
+  });
+
+  it('never lets more than the ceiling through across instances, and refuses at most a block early', async () => {
+    const email = owner('busy');
+    const agents = await Promise.all(apps.map((app) => signIn(app, email)));
+    await t.ctx.pool.query('delete from rate_limits');
+    const statuses: number[] = [];
+    for (let n = 0; n < 130; n += 1) statuses.push((await agents[n % 2].get('/api/me')).status);
+    const passed = statuses.filter((s) => s === 200).length;
+    expect(statuses.filter((s) => s !== 200 && s !== 429)).toEqual([]);
+    expect(passed).toBeLessThanOrEqual(100);
+    expect(passed).toBeGreaterThanOrEqual(100 - (leaseSize(100) - 1));
+    expectLimited(await agents[0].get('/api/me'), /Too many requests/);
+    expectLimited(await agents[1].get('/api/me'), /Too many requests/);
   });
 });
