@@ -7,6 +7,7 @@ import { configurePassport } from './security/passport';
 import type { AppContext } from './config/context';
 import { AppError, notFound } from './lib/errors';
 import { httpLogger } from './lib/http-logger';
+import { announceWrites } from './middleware/announce-writes';
 import { errorHandler } from './middleware/error-handler';
 import { registerRoutes } from './routes';
 import { paymentWebhookRouter } from './routes/payments/payments.routes';
@@ -59,7 +60,7 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   // The payment provider's signed notices: the raw body, no session, and no browser origin to check.
   app.use(paymentWebhookRouter(ctx));
   app.use(requireSameOrigin(env.APP_ORIGIN));
-  app.use('/api', noStore, requireJsonWrites);
+  app.use('/api', noStore, requireJsonWrites, announceWrites(ctx.queueChanges));
   app.use(express.json({ limit: '1mb' }));
 
   app.use(sessionMiddleware(ctx, secure));

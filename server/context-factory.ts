@@ -2,6 +2,7 @@ import type { AppContext } from './config/context';
 import { createDb } from './db/client';
 import { dbTimeouts, type Env } from './config/env';
 import { createLogger } from './lib/logger';
+import { ChangeNotices } from './infra/change-notices';
 import { createMailer } from './infra/mailer';
 import { createPaymentsClient } from './infra/payments';
 import { createS3Client } from './infra/storage';
@@ -21,11 +22,12 @@ export function createContext(env: Env): AppContext {
     s3: createS3Client(env),
     mailer: createMailer(env),
     payments: createPaymentsClient(env),
+    queueChanges: new ChangeNotices(env.DATABASE_URL, 'queue_changed', logger),
   };
 }
 
 export async function closeContext(ctx: AppContext) {
   ctx.mailer.close();
   ctx.s3.destroy();
-  await ctx.pool.end();
+  await Promise.all([ctx.queueChanges.close(), ctx.pool.end()]);
 }

@@ -3,6 +3,7 @@ import type { Transporter } from 'nodemailer';
 import type pg from 'pg';
 import type Stripe from 'stripe';
 import type { Db } from '../db/client';
+import type { ChangeNotices } from '../infra/change-notices';
 import type { Env } from './env';
 import type { Logger } from '../lib/logger';
 
@@ -16,4 +17,6 @@ export interface AppContext {
   mailer: Transporter;
   /** The payment provider's SDK client (`server/infra/payments.ts`). */
   payments: Stripe;
+  /** When anything shown in the office queue may have changed (`server/infra/change-notices.ts`). */
+  queueChanges: ChangeNotices;
 }

@@ -63,7 +63,7 @@ export async function prepareBenchStack(identities: { email: string; name: strin
     rmSync(dir, { recursive: true, force: true });
   };
 
-  /** CPU time (ms) used so far by PostgreSQL's server and its live backends, read from /proc (Linux only). */
+  /** CPU time (ms) used so far by PostgreSQL's server and its backends, live or ended, read from /proc (Linux only). */
   const postgresCpuMs = () => {
     const postmaster = Number(
       readFileSync(path.join(dir, 'postgres', 'data', 'postmaster.pid'), 'utf8').split('\n')[0],
@@ -82,6 +82,8 @@ export async function prepareBenchStack(identities: { email: string; name: strin
       const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
       if (Number(entry) !== postmaster && Number(fields[1]) !== postmaster) continue;
       total += (Number(fields[11]) + Number(fields[12])) * tick;
+      // Backends that have ended: the server reaps them, and their time moves to its cutime and cstime.
+      if (Number(entry) === postmaster) total += (Number(fields[13]) + Number(fields[14])) * tick;
     }
     return total;
   };

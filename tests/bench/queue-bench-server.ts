@@ -4,6 +4,7 @@ import { createApp } from '../../server/app';
 import { closeContext, createContext } from '../../server/context-factory';
 import { parseEnv } from '../../server/config/env';
 import { handle } from '../../server/lib/handle';
+import { queueRouter } from '../../server/routes/queue/queue.routes';
 import { rateLimitRouter } from '../../server/security/rate-limits';
 
 const env = parseEnv(process.env);
@@ -21,6 +22,8 @@ app.get(
   '/bench/limited/api/floor',
   handle({}, async () => (await ctx.pool.query('select 1 as one')).rows[0]),
 );
+// The queue with no page kept, behind the same ceiling: what every read would cost if each followed a change.
+app.use('/bench/limited', queueRouter(ctx, { keepPages: false }));
 
 const server: Server = app.listen(env.PORT, '127.0.0.1', () => process.send?.('ready'));
 // CPU time spent by this process, asked for around each measurement: unlike latency it hardly moves with other load.

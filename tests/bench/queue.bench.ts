@@ -12,6 +12,14 @@ const seconds = Number(process.env.BENCH_SECONDS ?? 10);
 const targetP95 = 50;
 const targetRatio = 3;
 
+interface Target {
+  label: string;
+  path: string;
+  kind: 'floor' | 'served' | 'afresh';
+  /** Started when the measurement starts; returns how to stop it. */
+  during?: () => () => void;
+}
+
 async function measure(url: string, cookie: string) {
   const times: number[] = [];
   let errors = 0;
@@ -49,18 +57,18 @@ async function main() {
     const [place] = (await pool.query("select id from jurisdictions where name = 'Fenwick County'")).rows as {
       id: string;
     }[];
-    const targets: [string, string][] = [
-      ['floor (session + select 1)', '/bench/floor'],
-      ['floor + the API rate-limit count', '/bench/limited/api/floor'],
-      ['queue: waiting on us, by time in status', '/api/queue?waiting=true&sort=waiting&limit=50'],
+    // The queue as served keeps each page until something it shows changes; "built afresh" is the same route with
+    // nothing kept (mounted by queue-bench-server.ts), which is what the first read after a change costs.
+    const views: [string, string][] = [
+      ['waiting on us, by time in status', '/api/queue?waiting=true&sort=waiting&limit=50'],
       // The screen's default view: everything, longest wait first, ended requests after the open ones.
-      ['queue: everything, longest wait first', '/api/queue?sort=waiting&limit=50'],
+      ['everything, longest wait first', '/api/queue?sort=waiting&limit=50'],
       [
-        'queue: submitted in one authority, by applicant',
+        'submitted in one authority, by applicant',
         `/api/queue?status=submitted&jurisdiction=${place.id}&sort=applicant&limit=50`,
       ],
-      ['queue: search "quarry ridge", newest first', '/api/queue?q=quarry%20ridge&sort=created&dir=desc&limit=50'],
-      ['queue: everything, by road, page 3', ''],
+      ['search "quarry ridge", newest first', '/api/queue?q=quarry%20ridge&sort=created&dir=desc&limit=50'],
+      ['everything, by road, page 3', ''],
     ];
     // A deeper page costs what the first does: follow the cursor twice to get there.
     let cursor = '';
@@ -72,32 +80,63 @@ async function main() {
       ).json()) as { nextCursor: string };
       cursor = page.nextCursor;
     }
-    targets[targets.length - 1][1] = `/api/queue?sort=road&limit=50&cursor=${cursor}`;
-    for (const [, target] of targets) await measureWarm(origin + target, cookie);
+    views[views.length - 1][1] = `/api/queue?sort=road&limit=50&cursor=${cursor}`;
+    // A busy office: one request moves on every second while the default view is read (each change is announced,
+    // and every kept page is built again on its next read).
+    const [moving] = (await pool.query("select id from requests where status = 'submitted' limit 1")).rows as {
+      id: string;
+    }[];
+    const everySecond = () => {
+      const timer = setInterval(() => {
+        void pool.query('update requests set status_changed_at = now() where id = $1', [moving.id]);
+      }, 1000);
+      return () => clearInterval(timer);
+    };
+    const all: Target[] = [
+      { label: 'floor (session + select 1)', path: '/bench/floor', kind: 'floor' },
+      { label: 'floor + the API rate-limit count', path: '/bench/limited/api/floor', kind: 'floor' },
+      ...views.map(([label, path]): Target => ({ label: `queue: ${label}`, path, kind: 'served' })),
+      {
+        label: 'queue: everything, longest wait first, a change a second',
+        path: views[1][1],
+        kind: 'served',
+        during: everySecond,
+      },
+      ...views.map(([label, path]): Target => ({
+        label: `built afresh: ${label}`,
+        path: `/bench/limited${path}`,
+        kind: 'afresh',
+      })),
+    ];
+    // BENCH_ONLY=<text> measures the floor and the rows whose label contains the text (for profiling one view).
+    const only = process.env.BENCH_ONLY;
+    const targets = only ? all.filter((x, i) => i === 0 || x.label.includes(only)) : all;
+    for (const { path } of targets) await measureWarm(origin + path, cookie);
     const results = [];
     const cpu = async () =>
       new Promise<number>((resolve) => {
         server.once('message', (m: { cpuMicros: NodeJS.CpuUsage }) => resolve(m.cpuMicros.user + m.cpuMicros.system));
         server.send('cpu');
       });
-    for (const [label, target] of targets) {
+    for (const target of targets) {
       const before = await cpu();
       const pgBefore = stack.postgresCpuMs();
       const generatorBefore = process.cpuUsage();
-      const result = await measure(origin + target, cookie);
+      const stop = target.during?.();
+      const result = await measure(origin + target.path, cookie).finally(() => stop?.());
       const count = result.rps * seconds;
       const cpuMs = ((await cpu()) - before) / 1000 / count;
       const pgMs = (stack.postgresCpuMs() - pgBefore) / count;
       const generator = process.cpuUsage(generatorBefore);
       const generatorMs = (generator.user + generator.system) / 1000 / count;
-      results.push({ label, ...result, cpuMs, pgMs, generatorMs });
+      results.push({ ...target, ...result, cpuMs, pgMs, generatorMs });
     }
     const floor = results[0];
     console.log(
       `\n${connections} connections, ${seconds} s each; the app in its own process (on ${os.cpus().length} cores shared with PostgreSQL and the load generator)`,
     );
     console.log(
-      'endpoint'.padEnd(52),
+      'endpoint'.padEnd(60),
       'p50 ms'.padStart(8),
       'p95 ms'.padStart(8),
       'req/s'.padStart(8),
@@ -109,7 +148,7 @@ async function main() {
     );
     for (const r of results) {
       console.log(
-        r.label.padEnd(52),
+        r.label.padEnd(60),
         r.p50.toFixed(1).padStart(8),
         r.p95.toFixed(1).padStart(8),
         r.rps.toFixed(0).padStart(8),
@@ -129,16 +168,19 @@ async function main() {
     // Each queue view against the target, compared at the precision printed (0.1 ms, 0.01x): not one headline view.
     console.log(`\ntarget for every queue view: p95 <= ${targetP95} ms and p95 <= ${targetRatio}x the floor's`);
     let failing = 0;
-    for (const r of results.filter((x) => x.label.startsWith('queue'))) {
+    for (const r of results.filter((x) => x.kind === 'served')) {
       const p95 = Number(r.p95.toFixed(1));
       const ratio = Number((r.p95 / floor.p95).toFixed(2));
       const pass = p95 <= targetP95 && ratio <= targetRatio;
       if (!pass) failing++;
       console.log(
-        `${pass ? 'PASS' : 'FAIL'}  ${r.label.padEnd(52)} p95 ${p95.toFixed(1)} ms, ${ratio.toFixed(2)}x the floor`,
+        `${pass ? 'PASS' : 'FAIL'}  ${r.label.padEnd(60)} p95 ${p95.toFixed(1)} ms, ${ratio.toFixed(2)}x the floor`,
       );
     }
     console.log(failing ? `${failing} queue view(s) miss the target` : 'every queue view meets the target');
+    console.log(
+      'the "built afresh" rows are what a page costs on its first read after a change; they are shown, not judged',
+    );
   } finally {
     await pool.end();
     await stack.stop();

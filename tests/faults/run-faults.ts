@@ -52,6 +52,14 @@ function probe(rig: Rig) {
   };
 }
 
+/** The road of one request as an instance's office queue shows it (null when it is not listed). */
+async function queueRoad(instance: Rig['instances'][number], id: string): Promise<string | null> {
+  const res = await fetch(`${instance.origin}/api/queue?limit=100`, { headers: { cookie: instance.cookie } });
+  if (!res.ok) return null;
+  const page = (await res.json()) as { requests: { id: string; roadName: string }[] };
+  return page.requests.find((r) => r.id === id)?.roadName ?? null;
+}
+
 async function fault(
   rig: Rig,
   name: string,
@@ -102,6 +110,15 @@ async function main() {
 
     await fault(rig, 'PostgreSQL restarted (down 2 s) under two instances', async () => {
       rig.standIns.mail.setReplyDelay(300);
+      // A request in the office queue, read (and so kept) by both instances before the restart.
+      const [{ id: moving }] = (
+        await rig.pool.query(
+          `insert into requests (reference, applicant_id, status, road_name, applicant_name)
+           select 'GP-FAULT-00001', id, 'submitted', 'Before Restart Road', 'Fault Owner' from users limit 1
+           returning id`,
+        )
+      ).rows as { id: string }[];
+      for (const instance of rig.instances) await queueRoad(instance, moving);
       const report = probe(rig);
       const writing = writeEmails(rig.db, count, 'restart', 50);
       await sleep(1_000);
@@ -111,7 +128,17 @@ async function main() {
         'service to return',
         async () => (await answer(`${rig.instances[0].origin}/api/emails?limit=1`, rig.instances[0].cookie)) === 200,
       );
-      return { ids, note: await report() };
+      // Changed once the database is back: each instance's queue must show it, whether or not its notices resumed.
+      await rig.pool.query(`update requests set road_name = 'After Restart Road' where id = $1`, [moving]);
+      const changed = Date.now();
+      let stale = 0;
+      await until('both queues to show the change', async () => {
+        const roads = await Promise.all(rig.instances.map((i) => queueRoad(i, moving)));
+        stale += roads.filter((r) => r !== 'After Restart Road').length;
+        return roads.every((r) => r === 'After Restart Road');
+      });
+      const shown = `the queue showed a change made after the restart on both instances in ${Date.now() - changed} ms (${stale} reads behind)`;
+      return { ids, note: `${await report()}; ${shown}` };
     });
 
     await fault(

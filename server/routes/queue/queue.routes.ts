@@ -6,18 +6,25 @@ import { officeRoles, requireRole } from '../../middleware/require-role';
 import { assignRequest, queueOptions } from '../../services/queue/assignment.service';
 import { queueQuerySchema } from '@shared/contracts/queue';
 import { listQueue } from '../../services/queue/queue.service';
+import { QueuePages } from '../../services/queue/queue-pages';
 
 export const assignInputSchema = z.strictObject({
   assigneeId: z.uuid('must be a person’s id, or null to unassign').nullable(),
 });
 
-export function queueRouter({ db }: AppContext) {
+/** `keepPages: false` builds every page afresh: the queue bench measures what a page costs after a change. */
+export function queueRouter({ db, queueChanges }: AppContext, { keepPages = true } = {}) {
   const router = Router();
   const office = requireRole(...officeRoles);
+  const pages = keepPages ? new QueuePages(queueChanges) : null;
   router.get(
     '/api/queue',
     office,
-    handle({ query: queueQuerySchema }, async ({ query, user }) => listQueue(db, user, query)),
+    handle({ query: queueQuerySchema }, async ({ query, user, res }) => {
+      if (!pages) return listQueue(db, user, query);
+      const assignee = query.assignee === 'me' ? user.id : query.assignee;
+      res.type('json').send(await pages.page(query, assignee, () => listQueue(db, user, query)));
+    }),
   );
   router.get(
     '/api/queue/options',
