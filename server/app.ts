@@ -41,6 +41,9 @@ export function createApp(ctx: AppContext, options: AppOptions = {}) {
   const secure = env.APP_ORIGIN.startsWith('https://');
   if (secure) app.set('trust proxy', 1);
   app.disable('x-powered-by');
+  // Answers from `res.send` are API answers marked no-store (static files keep their own validators): nothing ever
+  // revalidates them, so hashing every body for an ETag would be work for nobody.
+  app.set('etag', false);
 
   const s3Origin = env.S3_ENDPOINT ? new URL(env.S3_ENDPOINT).origin : 'https://*.amazonaws.com';
   app.use(
