@@ -3,7 +3,6 @@ import type { Transporter } from 'nodemailer';
 import type pg from 'pg';
 import type Stripe from 'stripe';
 import type { Db } from '../db/client';
-import type { ChangeNotices } from '../infra/change-notices';
 import type { Env } from './env';
 import type { Logger } from '../lib/logger';
 
@@ -17,6 +16,19 @@ export interface AppContext {
   mailer: Transporter;
   /** The payment provider's SDK client (`server/infra/payments.ts`). */
   payments: Stripe;
-  /** When anything shown in the office queue may have changed (`server/infra/change-notices.ts`). */
-  queueChanges: ChangeNotices;
+  /** When anything shown in the office queue may have changed (`ChangeNotices`, `server/infra/change-notices.ts`). */
+  queueChanges: ChangeStamps;
+}
+
+/**
+ * A number that moves whenever something may have changed, for caches kept in a process: a cached value is good
+ * while the stamp read before building it is still the stamp now. Null while changes cannot be heard.
+ */
+export interface ChangeStamps {
+  stamp(): number | null;
+  /** Something changed here; whatever was built before now is out of date. */
+  changed(): void;
+  /** Whether changes are being heard now. */
+  readonly listening: boolean;
+  close(): Promise<void>;
 }

@@ -1,4 +1,5 @@
 import pg from 'pg';
+import type { ChangeStamps } from '../config/context';
 import type { Logger } from '../lib/logger';
 
 /** How the listening connection names itself in pg_stat_activity. */
@@ -24,7 +25,7 @@ export interface ChangeNoticesOptions {
  * Listening starts on the first `stamp()`. A lost connection (a database restart, an administrator ending it, a
  * dead network found by the periodic check) is retried with backoff and never throws.
  */
-export class ChangeNotices {
+export class ChangeNotices implements ChangeStamps {
   #generation = 0;
   #listening = false;
   #started = false;

@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
 import onHeaders from 'on-headers';
-import type { ChangeNotices } from '../infra/change-notices';
+import type { ChangeStamps } from '../config/context';
 
 const reads = new Set(['GET', 'HEAD', 'OPTIONS']);
 
@@ -9,7 +9,7 @@ const reads = new Set(['GET', 'HEAD', 'OPTIONS']);
  * leaves, so whoever wrote reads their change on their very next request. Other processes hear PostgreSQL's notice
  * once the change commits.
  */
-export function announceWrites(changes: ChangeNotices): RequestHandler {
+export function announceWrites(changes: ChangeStamps): RequestHandler {
   return (req, res, next) => {
     if (!reads.has(req.method)) onHeaders(res, () => changes.changed());
     next();

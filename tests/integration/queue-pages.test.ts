@@ -1,5 +1,5 @@
 import pg from 'pg';
-import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
 import type { AppContext } from '../../server/config/context';
 import { parseEnv } from '../../server/config/env';
@@ -8,6 +8,7 @@ import { changeNoticesApplication } from '../../server/infra/change-notices';
 import { createJurisdiction } from '../factories/grade-checks';
 import { signInCast, type Cast } from '../factories/office-cast';
 import { createRequestRow, type RequestRow } from '../factories/request-rows';
+import { statementsDuring } from '../setup/statements';
 import { createTestApp, signIn, type TestApp } from '../setup/test-app';
 
 // Pages of the office queue kept between reads (server/services/queue/queue-pages.ts): answered again without the
@@ -58,30 +59,13 @@ async function until(what: string, check: () => Promise<boolean> | boolean, ms =
   }
 }
 
-/** The statements the app sends to PostgreSQL while `fn` runs. */
-async function statementsDuring(fn: () => Promise<unknown>) {
-  const sent: string[] = [];
-  const query = t.ctx.pool.query.bind(t.ctx.pool);
-  const spy = vi.spyOn(t.ctx.pool, 'query').mockImplementation(((...args: Parameters<typeof query>) => {
-    const [first] = args as unknown[];
-    sent.push(typeof first === 'string' ? first : String((first as { text?: string }).text));
-    return query(...args);
-  }) as typeof t.ctx.pool.query);
-  try {
-    await fn();
-  } finally {
-    spy.mockRestore();
-  }
-  return sent;
-}
-
 describe('queue pages kept between reads', () => {
   it('answer a view read again with no statement but the session’s', async () => {
     await read();
     await until('listening', () => t.ctx.queueChanges.listening);
     const first = await read();
     let again: Page | undefined;
-    const sent = await statementsDuring(async () => (again = await read()));
+    const sent = await statementsDuring(t.ctx.pool, async () => (again = await read()));
     expect(again).toEqual(first);
     expect(sent, sent.join('\n')).toHaveLength(1);
     expect(sent[0]).toMatch(/session/);
@@ -124,7 +108,7 @@ describe('queue pages kept between reads', () => {
     expect(rowOf(await read(), third.id)?.roadName).toBe('Cobble Fen Road West');
     await until('listening again', () => t.ctx.queueChanges.listening);
     await read();
-    const sent = await statementsDuring(() => read());
+    const sent = await statementsDuring(t.ctx.pool, () => read());
     expect(sent).toHaveLength(1);
   });
 

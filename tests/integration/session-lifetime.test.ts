@@ -1,7 +1,8 @@
 import request from 'supertest';
-import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { demoPeople } from '../../server/dev/seed/demo-people';
 import { seedDemo } from '../../server/dev/seed';
+import { statementsDuring } from '../setup/statements';
 import { createTestApp, signIn, type TestApp } from '../setup/test-app';
 
 let t: TestApp;
@@ -89,22 +90,12 @@ describe('who is signed in', () => {
     await t.ctx.pool.query('delete from session');
     const agent = await signIn(t.app, staff);
     await agent.get('/api/me').expect(200);
-    const sent: string[] = [];
-    const query = t.ctx.pool.query.bind(t.ctx.pool);
-    const spy = vi.spyOn(t.ctx.pool, 'query').mockImplementation(((...args: Parameters<typeof query>) => {
-      const [first] = args as unknown[];
-      sent.push(typeof first === 'string' ? first : String((first as { text?: string }).text));
-      return query(...args);
-    }) as typeof t.ctx.pool.query);
-    try {
-      const me = await agent.get('/api/me').expect(200);
-      expect(me.body.user).toMatchObject({ email: staff, role: 'staff' });
-      // The session with its person, and nothing more: the API's rate-limit point comes from a block this
-      // instance already took from the shared count on the request before (security/rate-limits.ts).
-      expect(sent, sent.join('\n')).toHaveLength(1);
-    } finally {
-      spy.mockRestore();
-    }
+    let me: { body: { user: unknown } } | undefined;
+    const sent = await statementsDuring(t.ctx.pool, async () => (me = await agent.get('/api/me').expect(200)));
+    expect(me?.body.user).toMatchObject({ email: staff, role: 'staff' });
+    // The session with its person, and nothing more: the API's rate-limit point comes from a block this
+    // instance already took from the shared count on the request before (security/rate-limits.ts).
+    expect(sent, sent.join('\n')).toHaveLength(1);
   });
 
   it('sees a rename, a new role and a turned-off sign-in on the very next request', async () => {

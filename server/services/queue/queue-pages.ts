@@ -1,6 +1,6 @@
 import { LRUCache } from 'lru-cache';
 import type { QueuePage, QueueQuery } from '@shared/contracts/queue';
-import type { ChangeNotices } from '../../infra/change-notices';
+import type { ChangeStamps } from '../../config/context';
 
 /** At most this many pages, this much text, and this old: a bound even if a notice were ever missed. */
 const maxPages = 500;
@@ -22,7 +22,7 @@ export class QueuePages {
     ttl: maxAgeMs,
   });
 
-  constructor(private readonly changes: ChangeNotices) {}
+  constructor(private readonly changes: ChangeStamps) {}
 
   /**
    * The page for `query` as JSON text: kept, or built by `build`. `assignee` is the query's "me" made a person's id,
