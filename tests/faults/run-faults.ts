@@ -52,6 +52,28 @@ function probe(rig: Rig) {
   };
 }
 
+/**
+ * Waits for the first instance to answer the office again. If it never does, says what it answered meanwhile
+ * (0: nothing within 20 s), so a run that stops here can be read.
+ */
+async function serviceBack(rig: Rig, timeoutMs = 30_000) {
+  const answered = new Map<number, number>();
+  try {
+    await until(
+      'service to return',
+      async () => {
+        const status = await answer(`${rig.instances[0].origin}/api/emails?limit=1`, rig.instances[0].cookie);
+        answered.set(status, (answered.get(status) ?? 0) + 1);
+        return status === 200;
+      },
+      timeoutMs,
+    );
+  } catch (error) {
+    const seen = [...answered].map(([status, times]) => `${status} x${times}`).join(', ');
+    throw new Error(`${(error as Error).message}; the first instance answered ${seen}`);
+  }
+}
+
 /** The road of one request as an instance's office queue shows it (null when it is not listed). */
 async function queueRoad(instance: Rig['instances'][number], id: string): Promise<string | null> {
   const res = await fetch(`${instance.origin}/api/queue?limit=100`, { headers: { cookie: instance.cookie } });
@@ -97,11 +119,7 @@ async function main() {
       const report = probe(rig);
       await rig.freezePostgres(freezeSeconds * 1000);
       const thawed = Date.now();
-      await until(
-        'service to return',
-        async () => (await answer(`${rig.instances[0].origin}/api/emails?limit=1`, rig.instances[0].cookie)) === 200,
-        180_000,
-      );
+      await serviceBack(rig, 180_000);
       return {
         ids,
         note: `${await report()}; serving again ${((Date.now() - thawed) / 1000).toFixed(1)} s after the thaw`,
@@ -124,10 +142,7 @@ async function main() {
       await sleep(1_000);
       await rig.restartPostgres(2_000);
       const ids = await writing;
-      await until(
-        'service to return',
-        async () => (await answer(`${rig.instances[0].origin}/api/emails?limit=1`, rig.instances[0].cookie)) === 200,
-      );
+      await serviceBack(rig);
       // Changed once the database is back: each instance's queue must show it, whether or not its notices resumed.
       await rig.pool.query(`update requests set road_name = 'After Restart Road' where id = $1`, [moving]);
       const changed = Date.now();
